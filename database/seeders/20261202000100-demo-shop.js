@@ -1,0 +1,223 @@
+'use strict';
+
+// The demo: an invented shop in an invented town, invented suppliers, grinds and customers.
+// Factory-style baseline cards are approximate figures from memory, for demonstration only.
+const crypto = require('crypto');
+const argon2 = require('argon2');
+
+const DEMO_PASSWORD = 'lobewise-demo';
+const now = new Date();
+const stamp = { created_at: now, updated_at: now };
+const sha256 = (text) => crypto.createHash('sha256').update(text).digest('hex');
+
+const suppliers = [
+  { id: 1, name: 'Ridgeback Grind Co.', contact_email: 'orders@ridgeback-grind.example' },
+  { id: 2, name: 'Lantern Valley Cams', contact_email: 'sales@lantern-valley.example' },
+  { id: 3, name: 'Foundry Nine Valvetrain', contact_email: 'desk@foundry-nine.example' },
+  { id: 4, name: 'Prairie Drivetrain Supply', contact_email: 'counter@prairie-drivetrain.example' },
+];
+
+// [sku, name, supplier, in050, ex050, inAdv, exAdv, inLift, exLift, lsa, icl, price $, stock, certified, deactOk, springMaxLift, notes]
+const camRows = [
+  ['FB-48', 'Factory-style 4.8 L baseline card', null, 190, 191, null, null, 0.467, 0.479, 114.5, 114.5, 0, 0, true, true, 0.5, 'Reference card for a stock 4.8 L truck engine (approximate, from memory).'],
+  ['FB-53', 'Factory-style 5.3 L baseline card', null, 190, 191, null, null, 0.467, 0.479, 114.5, 114.5, 0, 0, true, true, 0.5, 'Reference card for a stock 5.3 L truck engine (approximate, from memory).'],
+  ['FB-57', 'Factory-style 5.7 L baseline card', null, 198, 208, null, null, 0.5, 0.5, 115.5, 113, 0, 0, true, false, 0.55, 'Reference card for a stock 5.7 L car engine (approximate, from memory).'],
+  ['FB-60', 'Factory-style 6.0 L baseline card', null, 190, 191, null, null, 0.467, 0.479, 114.5, 114.5, 0, 0, true, true, 0.5, 'Reference card for a stock 6.0 L truck engine (approximate, from memory).'],
+  ['FB-62', 'Factory-style 6.2 L baseline card', null, 200, 207, null, null, 0.551, 0.522, 116.5, 118, 0, 0, true, true, 0.57, 'Reference card for a stock 6.2 L engine (approximate, from memory).'],
+  ['F9-194', 'Foundry Nine Easy Daily 194', 3, 194, 200, 246, 252, 0.5, 0.51, 116, 112, 329, 6, true, true, null, 'Mild, certified for road use where its paperwork covers the vehicle.'],
+  ['RB-198', 'Ridgeback Tow Boss 198', 1, 198, 204, 250, 256, 0.525, 0.525, 114, 110, 369, 4, true, true, null, 'Towing grind; keeps vacuum for brake assist.'],
+  ['RB-204', 'Ridgeback Low Rise 204', 1, 204, 210, 256, 262, 0.54, 0.54, 113, 111, 389, 3, false, true, null, null],
+  ['LV-208', 'Lantern Valley Hauler 208', 2, 208, 214, 260, 266, 0.55, 0.55, 114, 110, 399, 5, false, false, null, null],
+  ['RB-210', 'Ridgeback Tow Plus 210', 1, 210, 216, 262, 268, 0.555, 0.555, 116, 112, 399, 2, false, false, null, 'Wide separation for a calm idle.'],
+  ['LV-212', 'Lantern Valley Truck Torque 212', 2, 212, 218, 264, 270, 0.565, 0.565, 113, 109, 419, 6, false, false, null, 'The counter favourite for trucks on a stock converter.'],
+  ['F9-216', 'Foundry Nine Street Pull 216', 3, 216, 222, 268, 274, 0.58, 0.58, 112, 108, 429, 3, false, false, null, null],
+  ['F9-219', 'Foundry Nine Big Truck 219', 3, 219, 225, 271, 277, 0.595, 0.595, 113, 109, 439, 4, false, false, null, 'Wants a converter near 3,000 rpm.'],
+  ['RB-220', 'Ridgeback Grumbler 220', 1, 220, 228, 272, 280, 0.6, 0.59, 112, 108, 439, 2, false, false, null, null],
+  ['LV-224', 'Lantern Valley Strip Street 224', 2, 224, 232, 276, 284, 0.612, 0.605, 111, 107, 459, 2, false, false, null, null],
+  ['LV-226', 'Lantern Valley Wide Street 226', 2, 226, 232, 278, 284, 0.61, 0.61, 114, 110, 459, 1, false, false, null, null],
+  ['F9-228', 'Foundry Nine Rowdy 228', 3, 228, 236, 280, 288, 0.624, 0.615, 110, 106, 479, 1, false, false, null, null],
+  ['RB-231', 'Ridgeback Bracket 231', 1, 231, 239, 283, 291, 0.63, 0.624, 110, 105, 489, 1, false, false, null, 'Strip use; needs piston-to-valve checked on every build.'],
+  ['LV-235', 'Lantern Valley Full Send 235', 2, 235, 243, 287, 295, 0.64, 0.63, 108, 104, 499, 0, false, false, null, 'Race only.'],
+];
+
+const liters = { 'FB-48': 4.8, 'FB-53': 5.3, 'FB-57': 5.7, 'FB-60': 6.0, 'FB-62': 6.2 };
+
+// [sku, name, category, supplier, price $, cost $, stock, spec]
+const partRows = [
+  ['SPR-570', 'Conical spring kit, 0.570" max lift', 'springs', 1, 289, 170, 4, { maxLiftIn: 0.57, seatLb: 125, openLb: 310 }],
+  ['SPR-600', 'Ovate-wire spring kit, 0.600" max lift', 'springs', 1, 349, 205, 5, { maxLiftIn: 0.6, seatLb: 135, openLb: 350 }],
+  ['SPR-660', 'Dual spring kit with retainers, 0.660" max lift', 'springs', 3, 469, 280, 2, { maxLiftIn: 0.66, seatLb: 150, openLb: 420 }],
+  ['PR-7400', 'Hardened pushrods 7.400" (16)', 'pushrods', 3, 169, 95, 6, { lengthIn: 7.4 }],
+  ['PR-7350', 'Hardened pushrods 7.350" (16)', 'pushrods', 3, 169, 95, 3, { lengthIn: 7.35 }],
+  ['PR-CHK', 'Adjustable pushrod length checker', 'pushrods', 3, 39, 18, 2, null],
+  ['LIF-16', 'Non-deactivating roller lifter set (16)', 'lifters', 2, 329, 210, 4, null],
+  ['LIF-TRAY', 'Lifter guide trays (4)', 'lifters', 2, 79, 44, 8, null],
+  ['DD-KIT-53', 'Cylinder deactivation delete kit, 4.8–6.0 L (lifters, trays, valley cover, tune note)', 'deactivation-delete', 2, 649, 410, 3, null],
+  ['DD-KIT-62', 'Cylinder deactivation delete kit, 6.2 L', 'deactivation-delete', 2, 699, 445, 1, null],
+  ['DD-COVER', 'Valley cover, delete style, with breather', 'deactivation-delete', 2, 119, 70, 3, null],
+  ['TS-SR', 'Single-roller timing set', 'timing', 3, 119, 66, 5, null],
+  ['TS-DR', 'Double-roller timing set', 'timing', 3, 189, 110, 3, null],
+  ['TS-TEN', 'Timing chain tensioner', 'timing', 3, 59, 31, 6, null],
+  ['TS-BOLT', 'Cam bolt set, 3-bolt', 'hardware', 3, 24, 9, 10, null],
+  ['HW-RET', 'Cam retainer plate with seal', 'hardware', 3, 49, 24, 6, null],
+  ['HW-TRUN', 'Rocker trunnion upgrade kit', 'hardware', 1, 199, 118, 3, null],
+  ['HW-OIL', 'Break-in oil and filter (7 qt)', 'hardware', 4, 79, 41, 12, null],
+  ['GS-TC', 'Timing cover gasket set', 'gaskets', 4, 39, 17, 9, null],
+  ['GS-SEAL', 'Front and rear main seal kit', 'gaskets', 4, 59, 27, 6, null],
+  ['GS-VC', 'Valve cover gasket pair', 'gaskets', 4, 45, 20, 8, null],
+  ['GS-INT', 'Intake manifold gasket set', 'gaskets', 4, 49, 22, 8, null],
+  ['GS-WP', 'Water pump gasket pair', 'gaskets', 4, 19, 7, 8, null],
+  ['TC-2400', 'Torque converter, 2,400 rpm stall', 'converter', 4, 749, 470, 1, { stallRpm: 2400 }],
+  ['TC-2800', 'Torque converter, 2,800 rpm stall', 'converter', 4, 829, 520, 2, { stallRpm: 2800 }],
+  ['TC-3200', 'Torque converter, 3,200 rpm stall', 'converter', 4, 899, 560, 1, { stallRpm: 3200 }],
+  ['TUNE-DYNO', 'Dyno tune (engine and transmission calibration)', 'tune', null, 495, 0, 99, null],
+  ['TUNE-REV', 'Tune revision after a follow-up visit', 'tune', null, 150, 0, 99, null],
+];
+
+// [code, name, hours, engines]
+const laborRows = [
+  ['CAM-TRUCK', 'Cam swap, truck (front of engine, lifters inspected)', 8.0, 'truck'],
+  ['CAM-CAR', 'Cam swap, car (tighter engine bay)', 9.5, 'car'],
+  ['DD-ADD', 'Deactivation delete, added to a cam swap', 1.5, 'all'],
+  ['SPR-INST', 'Valve spring install and installed-height check', 2.0, 'all'],
+  ['PTV-CHK', 'Piston-to-valve clearance check', 1.0, 'all'],
+  ['TC-INST', 'Torque converter install', 4.5, 'all'],
+  ['TUNE-LAB', 'Dyno tune session', 3.0, 'all'],
+];
+
+function buildProfile({ boreIn, strokeIn, rodLengthIn, compressionRatio, headMaterial, intakeFlowCfm, intakeManifold, cylinderDeactivation, headers, primaryIn, system, transmission, stallRpm, axleRatio, topGearRatio, tireDiameterIn, weightLb, powerBrakes, primary, idle, fuelOctane, emissionsRequired, cruiseMph, budgetCents, baselineCam }) {
+  return {
+    engine: { cylinders: 8, boreIn, strokeIn, rodLengthIn, compressionRatio, headMaterial, intakeFlowCfm, intakeManifold, cylinderDeactivation },
+    exhaust: { headers, primaryIn, system },
+    drivetrain: { transmission, stallRpm, axleRatio, topGearRatio, tireDiameterIn },
+    vehicle: { weightLb, powerBrakes },
+    use: { primary, idle, fuelOctane, emissionsRequired, cruiseMph, budgetCents },
+    baselineCam,
+  };
+}
+
+function camCard(row, id) {
+  const [sku, name, , in050, ex050, inAdv, exAdv, inLift, exLift, lsa, icl] = row;
+  const card = { id: String(id), name: `${sku} ${name}`, intakeDuration050: in050, exhaustDuration050: ex050, intakeLiftIn: inLift, exhaustLiftIn: exLift, lsa, intakeCenterline: icl, rockerRatio: 1.7 };
+  if (inAdv) card.intakeAdvertised = inAdv;
+  if (exAdv) card.exhaustAdvertised = exAdv;
+  return card;
+}
+
+module.exports = {
+  async up(q) {
+    const passwordHash = await argon2.hash(DEMO_PASSWORD, { type: argon2.argon2id, memoryCost: 19456, timeCost: 2, parallelism: 1 });
+
+    await q.bulkInsert('shop_settings', [{
+      id: 1, name: 'Tallgrass Valvetrain & Dyno', address: '418 Mill Race Road, Oxbow Bend', phone: '555-0148', email: 'counter@tallgrass-dyno.example',
+      tax_rate_bp: 825, labor_rate_cents: 13500, deposit_percent_bp: 2000, deposit_min_cents: 20000, deposit_max_cents: 100000,
+      deposit_policy_text: 'Your deposit holds the parts and a bay for your job. It is refunded in full if you cancel at least 3 working days before the booked date, or if we cannot do the job as quoted. After parts are ordered specially for you, the cost of those parts is kept.',
+      currency: 'usd', version: 1, ...stamp,
+    }]);
+
+    await q.bulkInsert('users', [
+      { id: 1, email: 'manager@lobewise.test', name: 'Rhea Castellan', role: 'manager' },
+      { id: 2, email: 'counter@lobewise.test', name: 'Joel Pembry', role: 'counter' },
+      { id: 3, email: 'tech@lobewise.test', name: 'Aurelio Banks', role: 'tech' },
+    ].map((u) => ({ ...u, password_hash: passwordHash, active: true, version: 1, ...stamp })));
+
+    await q.bulkInsert('suppliers', suppliers.map((s) => ({ ...s, ...stamp })));
+
+    await q.bulkInsert('cams', camRows.map((r, i) => ({
+      id: i + 1, sku: r[0], name: r[1], supplier_id: r[2], intake_duration_050: r[3], exhaust_duration_050: r[4],
+      intake_advertised: r[5], exhaust_advertised: r[6], intake_lift_in: r[7], exhaust_lift_in: r[8], lsa: r[9], intake_centerline: r[10],
+      rocker_ratio: 1.7, price_cents: r[11] * 100, cost_cents: Math.round(r[11] * 62), stock_on_hand: r[12], emissions_certified: r[13],
+      deactivation_compatible: r[14], spring_max_lift_in: r[15], is_factory_baseline: r[0].startsWith('FB-'), baseline_for_liters: liters[r[0]] ?? null,
+      active: true, archived_at: null, notes: r[16], version: 1, ...stamp,
+    })));
+
+    await q.bulkInsert('parts', partRows.map((r, i) => ({
+      id: i + 1, sku: r[0], name: r[1], category: r[2], supplier_id: r[3], price_cents: r[4] * 100, cost_cents: r[5] * 100, stock_on_hand: r[6],
+      spec: r[7] ? JSON.stringify(r[7]) : null, active: true, notes: null, version: 1, ...stamp,
+    })));
+
+    await q.bulkInsert('labor_operations', laborRows.map((r, i) => ({ id: i + 1, code: r[0], name: r[1], hours: r[2], engines: r[3], active: true, version: 1, ...stamp })));
+
+    const partId = (sku) => partRows.findIndex((r) => r[0] === sku) + 1;
+    const laborId = (code) => laborRows.findIndex((r) => r[0] === code) + 1;
+    await q.bulkInsert('need_rules', [
+      { id: 1, kind: 'lift-over', threshold: 0.57, label: 'Lift over 0.570" needs the ovate spring kit' },
+      { id: 2, kind: 'deactivation-active', threshold: null, label: 'Active deactivation and a non-compatible cam needs the delete kit' },
+      { id: 3, kind: 'crossover-over-stall', threshold: 600, label: 'Crossover 600+ rpm over stall: suggest a 2,800 converter' },
+      { id: 4, kind: 'always', threshold: null, label: 'Every cam swap gets a dyno tune and the gasket set' },
+    ].map((r) => ({ ...r, active: true, version: 1, ...stamp })));
+    await q.bulkInsert('need_rule_items', [
+      { rule_id: 1, part_id: partId('SPR-600'), labor_operation_id: laborId('SPR-INST'), quantity: 1 },
+      { rule_id: 2, part_id: partId('DD-KIT-53'), labor_operation_id: laborId('DD-ADD'), quantity: 1 },
+      { rule_id: 3, part_id: partId('TC-2800'), labor_operation_id: laborId('TC-INST'), quantity: 1 },
+      { rule_id: 4, part_id: partId('TUNE-DYNO'), labor_operation_id: laborId('TUNE-LAB'), quantity: 1 },
+      { rule_id: 4, part_id: partId('GS-TC'), labor_operation_id: null, quantity: 1 },
+    ].map((r) => ({ ...r, ...stamp })));
+
+    await q.bulkInsert('customers', [
+      { id: 1, name: 'Dana Whitlock', email: 'dana.whitlock@example.com', phone: '555-0171', notes: 'Tows a horse trailer most weekends.' },
+      { id: 2, name: 'Marisol Okafor', email: 'marisol.okafor@example.com', phone: '555-0122', notes: null },
+      { id: 3, name: 'Teddy Vranes', email: 'teddy.vranes@example.com', phone: '555-0193', notes: 'Weekend drag strip, street driven.' },
+    ].map((c) => ({ ...c, version: 1, ...stamp })));
+
+    const camId = (sku) => camRows.findIndex((r) => r[0] === sku) + 1;
+    const baselineCard = (sku) => camCard(camRows[camId(sku) - 1], camId(sku));
+    const builds = [
+      { id: 1, customer_id: 1, vehicle_label: '2011 full-size pickup, 5.3 L, crew cab', baseline_cam_id: camId('FB-53'),
+        profile: buildProfile({ boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'active', headers: 'manifold', primaryIn: 1.625, system: 'full-with-cats', transmission: 'automatic', stallRpm: 2000, axleRatio: 3.73, topGearRatio: 0.67, tireDiameterIn: 31, weightLb: 5600, powerBrakes: 'vacuum', primary: 'towing', idle: 'smooth', fuelOctane: 87, emissionsRequired: false, cruiseMph: 65, budgetCents: 350000, baselineCam: baselineCard('FB-53') }) },
+      { id: 2, customer_id: 2, vehicle_label: '2006 regular-cab pickup, 6.0 L', baseline_cam_id: camId('FB-60'),
+        profile: buildProfile({ boreIn: 4.0, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.4, headMaterial: 'iron', intakeFlowCfm: 250, intakeManifold: 'truck', cylinderDeactivation: 'none', headers: 'long-tube', primaryIn: 1.75, system: 'full', transmission: 'automatic', stallRpm: 3000, axleRatio: 4.1, topGearRatio: 0.7, tireDiameterIn: 28, weightLb: 4300, powerBrakes: 'vacuum', primary: 'street', idle: 'noticeable', fuelOctane: 93, emissionsRequired: false, cruiseMph: 65, budgetCents: 450000, baselineCam: baselineCard('FB-60') }) },
+      { id: 3, customer_id: 3, vehicle_label: '2001 coupe, 5.7 L, manual', baseline_cam_id: camId('FB-57'),
+        profile: buildProfile({ boreIn: 3.898, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 10.2, headMaterial: 'aluminum', intakeFlowCfm: 265, intakeManifold: 'car', cylinderDeactivation: 'none', headers: 'long-tube', primaryIn: 1.875, system: 'full', transmission: 'manual', stallRpm: 0, axleRatio: 3.73, topGearRatio: 0.62, tireDiameterIn: 26, weightLb: 3500, powerBrakes: 'vacuum', primary: 'strip', idle: 'aggressive', fuelOctane: 93, emissionsRequired: false, cruiseMph: 70, budgetCents: 300000, baselineCam: baselineCard('FB-57') }) },
+    ];
+    await q.bulkInsert('builds', builds.map((b) => ({ ...b, profile: JSON.stringify(b.profile), profile_schema_version: 1, version: 1, ...stamp })));
+
+    const priceOf = (sku) => partRows[partId(sku) - 1][4] * 100;
+    const hoursOf = (code) => laborRows[laborId(code) - 1][2];
+    const camPrice = (sku) => camRows[camId(sku) - 1][11] * 100;
+    const laborRate = 13500;
+    const quotes = [
+      { id: 1, number: 'Q-2026-0101', customer_id: 1, build_id: 1, cam: 'RB-198', status: 'sent', token: 'demo-quote-whitlock',
+        parts: ['DD-KIT-53', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-TRUCK', 'DD-ADD', 'TUNE-LAB'] },
+      { id: 2, number: 'Q-2026-0102', customer_id: 2, build_id: 2, cam: 'F9-219', status: 'deposit-paid', token: 'demo-quote-okafor',
+        parts: ['SPR-600', 'PR-7400', 'TS-DR', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-TRUCK', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
+      { id: 3, number: 'Q-2026-0103', customer_id: 3, build_id: 3, cam: 'LV-224', status: 'draft', token: null,
+        parts: ['SPR-660', 'PR-7400', 'HW-TRUN', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-CAR', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
+    ];
+    const quoteRows = [];
+    const lineRows = [];
+    for (const quote of quotes) {
+      const lines = [
+        { kind: 'cam', cam_id: camId(quote.cam), description: camRows[camId(quote.cam) - 1][1], quantity: 1, unit_price_cents: camPrice(quote.cam) },
+        ...quote.parts.map((sku) => ({ kind: sku.startsWith('TUNE') ? 'tune' : 'part', part_id: partId(sku), description: partRows[partId(sku) - 1][1], quantity: 1, unit_price_cents: priceOf(sku) })),
+        ...quote.labor.map((code) => ({ kind: 'labor', labor_operation_id: laborId(code), description: laborRows[laborId(code) - 1][1], quantity: hoursOf(code), unit_price_cents: laborRate })),
+      ].map((l, i) => ({ cam_id: null, part_id: null, labor_operation_id: null, ...l, quote_id: quote.id, total_cents: Math.round(l.quantity * l.unit_price_cents), sort_order: i, ...stamp }));
+      const subtotal = lines.reduce((sum, l) => sum + l.total_cents, 0);
+      const tax = Math.round((subtotal * 825) / 10000);
+      const total = subtotal + tax;
+      const deposit = Math.min(100000, Math.max(20000, Math.round(total * 0.2)));
+      lineRows.push(...lines);
+      quoteRows.push({
+        id: quote.id, number: quote.number, customer_id: quote.customer_id, build_id: quote.build_id, cam_id: camId(quote.cam), created_by_user_id: 2,
+        status: quote.status, public_token_hash: quote.token ? sha256(quote.token) : null, subtotal_cents: subtotal, tax_rate_bp: 825, tax_cents: tax,
+        total_cents: total, deposit_cents: deposit, valid_until: '2027-01-31', sent_at: quote.status === 'draft' ? null : now,
+        accepted_at: quote.status === 'deposit-paid' ? now : null, version: 1, ...stamp,
+      });
+    }
+    await q.bulkInsert('quotes', quoteRows);
+    await q.bulkInsert('quote_lines', lineRows);
+    const paid = quoteRows.find((r) => r.status === 'deposit-paid');
+    await q.bulkInsert('payments', [{
+      quote_id: paid.id, provider: 'stripe', provider_session_id: 'cs_test_demo_okafor', provider_payment_id: 'pi_test_demo_okafor',
+      amount_cents: paid.deposit_cents, refunded_cents: 0, currency: 'usd', status: 'paid', paid_at: now, ...stamp,
+    }]);
+
+    await q.bulkInsert('audit_log', [{ user_id: null, actor: 'seed', action: 'demo.seeded', entity_type: null, entity_id: null, before: null, after: null, ip: null, created_at: now }]);
+  },
+
+  async down(q) {
+    for (const table of ['audit_log', 'payments', 'quote_lines', 'quotes', 'dyno_runs', 'interviews', 'builds', 'leads', 'customers', 'need_rule_items', 'need_rules', 'labor_operations', 'parts', 'cams', 'suppliers', 'users', 'shop_settings']) {
+      await q.bulkDelete(table, {});
+    }
+  },
+};

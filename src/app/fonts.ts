@@ -1,0 +1,21 @@
+import localFont from 'next/font/local';
+
+// Fonts ship in the repo (SIL OFL, see LICENSE-*.txt) so builds never reach the network.
+export const bodyFont = localFont({
+  src: [
+    { path: './fonts/inter-latin-400-normal.woff2', weight: '400', style: 'normal' },
+    { path: './fonts/inter-latin-600-normal.woff2', weight: '600', style: 'normal' },
+    { path: './fonts/inter-latin-700-normal.woff2', weight: '700', style: 'normal' },
+  ],
+  variable: '--font-body',
+  display: 'swap',
+});
+
+export const specFont = localFont({
+  src: [
+    { path: './fonts/jetbrains-mono-latin-400-normal.woff2', weight: '400', style: 'normal' },
+    { path: './fonts/jetbrains-mono-latin-600-normal.woff2', weight: '600', style: 'normal' },
+  ],
+  variable: '--font-spec',
+  display: 'swap',
+});

@@ -1,0 +1,49 @@
+import type { Metadata, Viewport } from 'next';
+import Link from 'next/link';
+import { getShopNameOrNull } from '@/lib/db/queries/settings';
+import { bodyFont, specFont } from './fonts';
+import './globals.css';
+
+export const dynamic = 'force-dynamic';
+
+export const metadata: Metadata = {
+  title: { default: 'Lobewise', template: '%s · Lobewise' },
+  description: 'Cam-swap advice, quotes and dyno records for performance shops.',
+};
+
+export const viewport: Viewport = { width: 'device-width', initialScale: 1 };
+
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  const shopName = await getShopNameOrNull();
+  return (
+    <html lang="en" className={`${bodyFont.variable} ${specFont.variable}`}>
+      <body className="flex min-h-screen flex-col font-sans">
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper-raised focus:px-3 focus:py-2">
+          Skip to content
+        </a>
+        <header className="border-b border-steel-300 bg-ink text-paper">
+          <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3">
+            <Link href="/" className="flex items-baseline gap-2 text-lg font-semibold tracking-tight">
+              <span aria-hidden className="inline-block h-3 w-3 rotate-45 rounded-sm bg-ember-500" />
+              Lobewise
+            </Link>
+            <nav aria-label="Main" className="flex items-center gap-4 text-sm">
+              <Link href="/sign-in" className="rounded px-3 py-1.5 ring-1 ring-steel-500 hover:bg-steel-900">
+                Staff sign-in
+              </Link>
+            </nav>
+          </div>
+        </header>
+        <main id="main" className="flex-1">
+          {children}
+        </main>
+        <footer className="border-t border-steel-300 bg-paper-sunk text-sm text-ink-muted">
+          <div className="mx-auto flex max-w-6xl flex-wrap justify-between gap-2 px-4 py-4">
+            <span>{shopName ?? 'Shop details are unavailable right now'}</span>
+            <span>Predictions are indicative; your shop’s dyno has the last word.</span>
+          </div>
+        </footer>
+      </body>
+    </html>
+  );
+}

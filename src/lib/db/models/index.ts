@@ -1,0 +1,60 @@
+import type { Sequelize } from 'sequelize';
+import { getSequelize } from '../connection';
+import { AuditEntry } from './audit-entry';
+import { Cam } from './cam';
+import { Build, Customer, Interview } from './customer';
+import { DynoRun } from './dyno-run';
+import { LaborOperation } from './labor-operation';
+import { Lead } from './lead';
+import { NeedRule, NeedRuleItem } from './need-rule';
+import { Part } from './part';
+import { Payment, Quote, QuoteLine } from './quote';
+import { ShopSettings } from './shop-settings';
+import { Supplier } from './supplier';
+import { User } from './user';
+
+export { AuditEntry, Build, Cam, Customer, DynoRun, Interview, LaborOperation, Lead, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
+
+let initialised: Sequelize | undefined;
+
+function associate() {
+  Cam.belongsTo(Supplier, { foreignKey: 'supplierId', as: 'supplier' });
+  Part.belongsTo(Supplier, { foreignKey: 'supplierId', as: 'supplier' });
+  NeedRule.hasMany(NeedRuleItem, { foreignKey: 'ruleId', as: 'items' });
+  NeedRuleItem.belongsTo(NeedRule, { foreignKey: 'ruleId' });
+  NeedRuleItem.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
+  NeedRuleItem.belongsTo(LaborOperation, { foreignKey: 'laborOperationId', as: 'laborOperation' });
+  Customer.hasMany(Build, { foreignKey: 'customerId', as: 'builds' });
+  Build.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  Build.belongsTo(Cam, { foreignKey: 'baselineCamId', as: 'baselineCam' });
+  Interview.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
+  Interview.belongsTo(User, { foreignKey: 'staffUserId', as: 'staffUser' });
+  Interview.belongsTo(Cam, { foreignKey: 'chosenCamId', as: 'chosenCam' });
+  Quote.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  Quote.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
+  Quote.belongsTo(Cam, { foreignKey: 'camId', as: 'cam' });
+  Quote.belongsTo(User, { foreignKey: 'createdByUserId', as: 'createdBy' });
+  Quote.hasMany(QuoteLine, { foreignKey: 'quoteId', as: 'lines' });
+  Quote.hasMany(Payment, { foreignKey: 'quoteId', as: 'payments' });
+  QuoteLine.belongsTo(Quote, { foreignKey: 'quoteId' });
+  Payment.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
+  Lead.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  DynoRun.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
+  DynoRun.belongsTo(Cam, { foreignKey: 'camId', as: 'cam' });
+  DynoRun.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
+  DynoRun.belongsTo(User, { foreignKey: 'recordedByUserId', as: 'recordedBy' });
+  AuditEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+}
+
+/** Binds every model to the shared connection once per process and returns it. */
+export function db(): Sequelize {
+  const sequelize = getSequelize();
+  if (initialised !== sequelize) {
+    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, DynoRun, AuditEntry]) {
+      model.initModel(sequelize);
+    }
+    associate();
+    initialised = sequelize;
+  }
+  return sequelize;
+}

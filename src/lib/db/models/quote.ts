@@ -1,0 +1,123 @@
+import {
+  DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
+} from 'sequelize';
+
+export const QUOTE_STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'declined', 'expired', 'cancelled'] as const;
+export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+
+export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes<Quote>> {
+  declare id: CreationOptional<number>;
+  declare number: string;
+  declare customerId: ForeignKey<number>;
+  declare buildId: ForeignKey<number> | null;
+  declare camId: ForeignKey<number> | null;
+  declare createdByUserId: ForeignKey<number> | null;
+  declare status: CreationOptional<QuoteStatus>;
+  declare publicTokenHash: string | null;
+  declare subtotalCents: number;
+  declare taxRateBp: number;
+  declare taxCents: number;
+  declare totalCents: number;
+  declare depositCents: number;
+  declare validUntil: string | null;
+  declare sentAt: Date | null;
+  declare acceptedAt: Date | null;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    const cents = { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 };
+    Quote.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        number: { type: DataTypes.STRING(20), allowNull: false, unique: true },
+        status: { type: DataTypes.ENUM(...QUOTE_STATUSES), allowNull: false, defaultValue: 'draft' },
+        publicTokenHash: { type: DataTypes.CHAR(64), allowNull: true, unique: true },
+        subtotalCents: cents,
+        taxRateBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        taxCents: cents,
+        totalCents: cents,
+        depositCents: cents,
+        validUntil: { type: DataTypes.DATEONLY, allowNull: true },
+        sentAt: { type: DataTypes.DATE, allowNull: true },
+        acceptedAt: { type: DataTypes.DATE, allowNull: true },
+        version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'quotes', underscored: true, version: true },
+    );
+  }
+}
+
+export const QUOTE_LINE_KINDS = ['cam', 'part', 'labor', 'tune', 'other'] as const;
+
+export class QuoteLine extends Model<InferAttributes<QuoteLine>, InferCreationAttributes<QuoteLine>> {
+  declare id: CreationOptional<number>;
+  declare quoteId: ForeignKey<number>;
+  declare kind: (typeof QUOTE_LINE_KINDS)[number];
+  declare camId: ForeignKey<number> | null;
+  declare partId: ForeignKey<number> | null;
+  declare laborOperationId: ForeignKey<number> | null;
+  declare description: string;
+  declare quantity: string | number;
+  declare unitPriceCents: number;
+  declare totalCents: number;
+  declare sortOrder: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    QuoteLine.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        kind: { type: DataTypes.ENUM(...QUOTE_LINE_KINDS), allowNull: false },
+        description: { type: DataTypes.STRING(255), allowNull: false },
+        quantity: { type: DataTypes.DECIMAL(8, 2), allowNull: false, defaultValue: 1 },
+        unitPriceCents: { type: DataTypes.INTEGER, allowNull: false },
+        totalCents: { type: DataTypes.INTEGER, allowNull: false },
+        sortOrder: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'quote_lines', underscored: true },
+    );
+  }
+}
+
+export const PAYMENT_STATUSES = ['pending', 'paid', 'failed', 'expired', 'refunded', 'partially-refunded'] as const;
+
+export class Payment extends Model<InferAttributes<Payment>, InferCreationAttributes<Payment>> {
+  declare id: CreationOptional<number>;
+  declare quoteId: ForeignKey<number>;
+  declare provider: CreationOptional<string>;
+  declare providerSessionId: string | null;
+  declare providerPaymentId: string | null;
+  declare amountCents: number;
+  declare refundedCents: CreationOptional<number>;
+  declare currency: CreationOptional<string>;
+  declare status: CreationOptional<(typeof PAYMENT_STATUSES)[number]>;
+  declare paidAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Payment.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        provider: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'stripe' },
+        providerSessionId: { type: DataTypes.STRING(255), allowNull: true, unique: true },
+        providerPaymentId: { type: DataTypes.STRING(255), allowNull: true },
+        amountCents: { type: DataTypes.INTEGER, allowNull: false },
+        refundedCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'usd' },
+        status: { type: DataTypes.ENUM(...PAYMENT_STATUSES), allowNull: false, defaultValue: 'pending' },
+        paidAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'payments', underscored: true },
+    );
+  }
+}

@@ -1,0 +1,42 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCreationAttributes<ShopSettings>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare address: CreationOptional<string>;
+  declare phone: CreationOptional<string>;
+  declare email: CreationOptional<string>;
+  declare taxRateBp: number;
+  declare laborRateCents: number;
+  declare depositPercentBp: number;
+  declare depositMinCents: number;
+  declare depositMaxCents: number;
+  declare depositPolicyText: string;
+  declare currency: CreationOptional<string>;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    ShopSettings.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        address: { type: DataTypes.STRING(255), allowNull: false, defaultValue: '' },
+        phone: { type: DataTypes.STRING(40), allowNull: false, defaultValue: '' },
+        email: { type: DataTypes.STRING(254), allowNull: false, defaultValue: '' },
+        taxRateBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        laborRateCents: { type: DataTypes.INTEGER, allowNull: false },
+        depositPercentBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        depositMinCents: { type: DataTypes.INTEGER, allowNull: false },
+        depositMaxCents: { type: DataTypes.INTEGER, allowNull: false },
+        depositPolicyText: { type: DataTypes.TEXT, allowNull: false },
+        currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'usd' },
+        version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'shop_settings', underscored: true, version: true },
+    );
+  }
+}

@@ -1,0 +1,90 @@
+import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import net from 'node:net';
+import path from 'node:path';
+import { RUNTIME_FILE, type TestRuntime } from '../support/runtime';
+
+// Starts the real production build (`next start`) and both fakes on free loopback ports,
+// against the lobewise_test database that `npm test` has just reset.
+const ROOT = path.resolve(__dirname, '../..');
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.unref();
+    server.on('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as net.AddressInfo;
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+async function waitFor(url: string, timeoutMs: number): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  let lastError = '';
+  while (Date.now() < deadline) {
+    try {
+      const response = await fetch(url);
+      if (response.ok) return;
+      lastError = `HTTP ${response.status}`;
+    } catch (error) {
+      lastError = String(error);
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`${url} did not come up in ${timeoutMs} ms (${lastError})`);
+}
+
+function start(name: string, args: string[], env: Record<string, string>): number {
+  const logDir = path.join(ROOT, 'var/test/logs');
+  fs.mkdirSync(logDir, { recursive: true });
+  const out = fs.openSync(path.join(logDir, `${name}.log`), 'w');
+  const child = spawn(process.execPath, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', out, out], detached: true });
+  child.unref();
+  if (!child.pid) throw new Error(`could not start ${name}`);
+  return child.pid;
+}
+
+export default async function globalSetup(): Promise<void> {
+  const testDir = path.join(ROOT, 'var/test');
+  fs.rmSync(testDir, { recursive: true, force: true });
+  fs.mkdirSync(testDir, { recursive: true });
+  const [appPort, mailPort, paymentsPort] = [await freePort(), await freePort(), await freePort()];
+  const appUrl = `http://127.0.0.1:${appPort}`;
+  const env: Record<string, string> = {
+    NODE_ENV: 'production',
+    NEXT_TELEMETRY_DISABLED: '1',
+    DB_NAME: 'lobewise_test',
+    APP_BASE_URL: appUrl,
+    SESSION_SECRET: 'integration-test-secret-0123456789abcdefghij',
+    RESEND_API_KEY: 're_test_integration',
+    MAIL_FAKE_API_KEY: 're_test_integration',
+    MAIL_FAKE_PORT: String(mailPort),
+    MAIL_FAKE_DATA_DIR: path.join(testDir, 'mail-fake'),
+    RESEND_BASE_URL: `http://127.0.0.1:${mailPort}`,
+    MAIL_FROM: 'Lobewise tests <tests@lobewise.test>',
+    STRIPE_SECRET_KEY: 'sk_test_integration',
+    PAYMENTS_FAKE_API_KEY: 'sk_test_integration',
+    PAYMENTS_FAKE_PORT: String(paymentsPort),
+    PAYMENTS_FAKE_DATA_DIR: path.join(testDir, 'payments-fake'),
+    PAYMENTS_FAKE_WEBHOOK_URL: `${appUrl}/api/payments/webhook`,
+    PAYMENTS_FAKE_WEBHOOK_SECRET: 'whsec_integration',
+    STRIPE_WEBHOOK_SECRET: 'whsec_integration',
+    STRIPE_API_HOST: '127.0.0.1',
+    STRIPE_API_PORT: String(paymentsPort),
+    STRIPE_API_PROTOCOL: 'http',
+  };
+  const pids = [
+    start('mail-fake', ['docker-local/mail-fake/server.mjs'], env),
+    start('payments-fake', ['docker-local/payments-fake/server.mjs'], env),
+    start('app', ['node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(appPort)], env),
+  ];
+  const runtime: TestRuntime = { appUrl, mailUrl: env.RESEND_BASE_URL, paymentsUrl: `http://127.0.0.1:${paymentsPort}`, env, pids };
+  fs.writeFileSync(RUNTIME_FILE, JSON.stringify(runtime, null, 2));
+  await Promise.all([
+    waitFor(`${runtime.mailUrl}/health`, 15_000),
+    waitFor(`${runtime.paymentsUrl}/health`, 15_000),
+    waitFor(`${appUrl}/api/health`, 60_000),
+  ]);
+}

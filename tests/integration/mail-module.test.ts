@@ -1,0 +1,16 @@
+import { sendMail } from '@/lib/mail';
+import { adoptRuntimeEnv } from '../support/runtime';
+
+describe('the app mail module', () => {
+  it('sends through the official SDK and the message lands in the local mail fake', async () => {
+    const { mailUrl } = adoptRuntimeEnv();
+    const subject = `Your quote is ready ${Date.now()}`;
+    const { id } = await sendMail({ to: 'mail.module.test@example.com', subject, html: '<p>Hello</p>', text: 'Hello' });
+    expect(id).toBeTruthy();
+    const messages = (await (await fetch(`${mailUrl}/messages`)).json()) as { id: string; to: string[]; subject: string }[];
+    const found = messages.find((m) => m.id === id);
+    expect(found).toBeDefined();
+    expect(found!.subject).toBe(subject);
+    expect(found!.to).toEqual(['mail.module.test@example.com']);
+  });
+});
