@@ -1,18 +1,12 @@
 import { NextResponse } from 'next/server';
 import type { ZodError } from 'zod';
+import { formatZodIssues, type FieldIssue } from '@/lib/schemas/errors';
 
 // One shape for every error the API answers, so forms and tests read them the same way.
-export type FieldError = { field: string; message: string };
-
-export function fieldErrorsOf(error: ZodError): FieldError[] {
-  return error.issues.map((issue) => ({
-    field: issue.path.length ? issue.path.map(String).join('.') : '(body)',
-    message: issue.message,
-  }));
-}
+export type FieldError = FieldIssue;
 
 export function validationFailed(errors: ZodError | FieldError[]): NextResponse {
-  const list = Array.isArray(errors) ? errors : fieldErrorsOf(errors);
+  const list = Array.isArray(errors) ? errors : formatZodIssues(errors);
   return NextResponse.json({ message: 'Some fields need attention.', errors: list }, { status: 422 });
 }
 
