@@ -11,6 +11,8 @@ const shared = {
 } satisfies Config['projects'] extends (infer P)[] | undefined ? Exclude<P, string> : never;
 
 const config: Config = {
+  // Per-project testTimeout is ignored by Jest 30; integration tests talk to real servers, so allow 30 s.
+  testTimeout: 30_000,
   projects: [
     { ...shared, displayName: 'unit', testMatch: ['<rootDir>/tests/unit/**/*.test.ts'] },
     {
@@ -19,7 +21,6 @@ const config: Config = {
       testMatch: ['<rootDir>/tests/integration/**/*.test.ts'],
       globalSetup: '<rootDir>/tests/integration/global-setup.ts',
       globalTeardown: '<rootDir>/tests/integration/global-teardown.ts',
-      testTimeout: 60_000,
     },
   ],
 };
