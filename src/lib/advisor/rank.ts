@@ -1,0 +1,174 @@
+import type { BuildProfile } from '@/lib/schemas/build-profile';
+import type { CamCard } from '@/lib/schemas/cam-card';
+import { camCautions } from './cautions';
+import { dynamicCompression } from './compression';
+import { aheadAt, crossoverRpm } from './crossover';
+import { curvePeaks, curvePoints, percentChange, summarize } from './curve';
+import { buildCruiseRpm, pullAwayRpm } from './drivetrain';
+import { roundTo } from './format';
+import { litresFromCubicInches, meanPistonSpeedFtMin } from './geometry';
+import { adjustGainForHistory, historyCurveFactor } from './history';
+import { idleVacuumInHg } from './idle';
+import { camNeeds } from './needs';
+import { engineContext, torqueCurve, type EngineContext } from './power-model';
+import {
+  compressionReason, converterReason, costReason, emissionsReason, fitReason, idleReason, powerbandReason,
+} from './reasons';
+import {
+  powerbandWeights, scoreCompression, scoreConverter, scoreCost, scoreEmissions, scoreFit, scoreIdle, scorePowerband,
+  totalScore,
+} from './scoring';
+import type { BaselineResult, CamRanking, EngineFacts, RankingResult, RankOptions, Reason } from './types';
+import { overlap050Deg, seatOverlapDeg, valveEvents } from './valve-events';
+import { SCORING_WEIGHTS, SUBSCORE_NAMES } from './weights';
+
+export const PREDICTION_NOTICE = 'Predictions are indicative: a model calibrated on a few engine-dyno results, not a measurement of this engine.';
+
+/** Work shared by every cam of one ranking. */
+type BuildWork = {
+  build: BuildProfile;
+  ctx: EngineContext;
+  baseTorque: Float64Array;
+  basePeakHp: number;
+  cruiseRpm: number;
+  pullAway: ReturnType<typeof pullAwayRpm>;
+  weights: Float64Array;
+};
+
+function prepare(build: BuildProfile): BuildWork {
+  const ctx = engineContext(build);
+  const baseTorque = torqueCurve(ctx, build.baselineCam);
+  const cruiseRpm = buildCruiseRpm(build);
+  const pullAway = pullAwayRpm(build);
+  return {
+    build, ctx, baseTorque, basePeakHp: curvePeaks(ctx.rpms, baseTorque).peakHp, cruiseRpm, pullAway,
+    weights: powerbandWeights(build, ctx.rpms, pullAway.rpm, cruiseRpm),
+  };
+}
+
+function engineFacts(w: BuildWork): EngineFacts {
+  const { ctx, build } = w;
+  const limit = ctx.rpms[ctx.rpms.length - 1];
+  return {
+    displacementCi: roundTo(ctx.displacementCi, 1),
+    displacementL: roundTo(litresFromCubicInches(ctx.displacementCi), 2),
+    cylinderCi: roundTo(ctx.cylinderCi, 2),
+    cruiseRpm: Math.round(w.cruiseRpm),
+    pullAwayRpm: w.pullAway.rpm,
+    pullAwaySource: w.pullAway.source,
+    rpmLimit: limit,
+    meanPistonSpeedFtMinAtLimit: Math.round(meanPistonSpeedFtMin(build.engine.strokeIn, limit)),
+    headFlowCeilingHp: Math.round(ctx.ceilingHp),
+  };
+}
+
+function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): Omit<CamRanking, 'rank'> {
+  const { build, ctx, baseTorque } = w;
+  const rpms = ctx.rpms;
+  let torque = torqueCurve(ctx, cam);
+
+  // History: blend the model's peak-hp gain with the shop's measured gains, then scale the curve.
+  let history = null;
+  if (options.history && options.history.length > 0) {
+    const modelGain = percentChange(curvePeaks(rpms, torque).peakHp, w.basePeakHp);
+    history = adjustGainForHistory(cam.id, modelGain, options.history, build, ctx.displacementCi);
+    if (history) {
+      const f = historyCurveFactor(history);
+      torque = torque.map((t) => t * f);
+      history = {
+        ...history,
+        evidenceWeight: roundTo(history.evidenceWeight, 2),
+        modelGainPctPeakHp: roundTo(history.modelGainPctPeakHp, 1),
+        measuredGainPctPeakHp: roundTo(history.measuredGainPctPeakHp, 1),
+        adjustedGainPctPeakHp: roundTo(history.adjustedGainPctPeakHp, 1),
+      };
+    }
+  }
+
+  const predicted = summarize(rpms, torque, baseTorque, w.basePeakHp);
+  const crossover = crossoverRpm(rpms, torque, baseTorque);
+  const events = valveEvents(cam);
+  const dcr = dynamicCompression(build, cam);
+  const vacuum = idleVacuumInHg(seatOverlapDeg(cam), ctx.cylinderCi);
+
+  const powerband = scorePowerband(w.weights, rpms, torque, baseTorque);
+  const converter = scoreConverter(build, w.pullAway.rpm, crossover, aheadAt(rpms, torque, baseTorque, w.pullAway.rpm));
+  const idle = scoreIdle(build, vacuum);
+  const compression = scoreCompression(build, dcr);
+  const fit = scoreFit(build, cam, overlap050Deg(cam));
+  const emissions = scoreEmissions(build, cam);
+  const needs = camNeeds(fit, converter);
+  const cost = scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents);
+
+  const raw = { powerband: powerband.score, converter: converter.score, idle: idle.score, compression: compression.score, fit: fit.score, emissions: emissions.score, cost: cost.score };
+  const subscores = Object.fromEntries(SUBSCORE_NAMES.map((k) => [k, Math.round(raw[k])])) as typeof raw;
+  const reasons: Reason[] = [
+    powerbandReason(powerband, build, w.cruiseRpm, predicted.peakHp, predicted.gainPctPeakHp),
+    converterReason(converter),
+    idleReason(idle, build),
+    compressionReason(compression, build),
+    fitReason(fit),
+    emissionsReason(emissions),
+    costReason(cost),
+  ];
+  // Read the heaviest sub-scores first (the table is already in that order; keep it explicit).
+  reasons.sort((a, b) => SCORING_WEIGHTS[b.subscore] - SCORING_WEIGHTS[a.subscore]);
+
+  return {
+    camId: cam.id,
+    camName: cam.name,
+    score: roundTo(totalScore(raw, emissions.gated), 1),
+    subscores,
+    crossoverRpm: crossover,
+    predicted,
+    curve: options.includeCurves === false ? [] : curvePoints(rpms, torque),
+    valveEvents: events,
+    dynamicCompression: roundTo(dcr, 2),
+    idleVacuumInHg: roundTo(vacuum, 1),
+    reasons,
+    cautions: camCautions(emissions, idle, fit, converter, build.vehicle.powerBrakes === 'vacuum'),
+    needs,
+    history,
+  };
+}
+
+function baselineResult(w: BuildWork, includeCurves: boolean): BaselineResult {
+  const cam = w.build.baselineCam;
+  const rpms = w.ctx.rpms;
+  return {
+    camId: cam.id,
+    camName: cam.name,
+    predicted: summarize(rpms, w.baseTorque, w.baseTorque, w.basePeakHp),
+    curve: includeCurves ? curvePoints(rpms, w.baseTorque) : [],
+    valveEvents: valveEvents(cam),
+    dynamicCompression: roundTo(dynamicCompression(w.build, cam), 2),
+    idleVacuumInHg: roundTo(idleVacuumInHg(seatOverlapDeg(cam), w.ctx.cylinderCi), 1),
+  };
+}
+
+/**
+ * Ranks the shop's cams for one combination, best first. Inputs must already be schema-valid
+ * (BuildProfileSchema, CamCardSchema). Ties break on the powerband sub-score, then on the id.
+ */
+export function rankCams(build: BuildProfile, cams: readonly CamCard[], options: RankOptions = {}): RankingResult {
+  const w = prepare(build);
+  const scored = cams.map((cam) => analyseCam(w, cam, options));
+  scored.sort((a, b) => b.score - a.score || b.subscores.powerband - a.subscores.powerband || String(a.camId).localeCompare(String(b.camId), 'en'));
+  return {
+    rankings: scored.map((r, i) => ({ ...r, rank: i + 1 })),
+    baseline: baselineResult(w, options.includeCurves !== false),
+    engine: engineFacts(w),
+    notice: PREDICTION_NOTICE,
+  };
+}
+
+/** One cam's predicted curve in this engine, with its summary and crossover against the build's baseline cam. */
+export function predictCurve(build: BuildProfile, cam: CamCard) {
+  const w = prepare(build);
+  const torque = torqueCurve(w.ctx, cam);
+  return {
+    curve: curvePoints(w.ctx.rpms, torque),
+    predicted: summarize(w.ctx.rpms, torque, w.baseTorque, w.basePeakHp),
+    crossoverRpm: crossoverRpm(w.ctx.rpms, torque, w.baseTorque),
+  };
+}

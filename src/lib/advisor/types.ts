@@ -1,0 +1,101 @@
+import type { CamCard } from '@/lib/schemas/cam-card';
+import type { CurvePoint, PredictedSummary } from './curve';
+import type { ValveEvents } from './valve-events';
+import type { SubscoreName } from './weights';
+
+export type NeedKind = 'springs' | 'deactivation-delete' | 'converter' | 'tune';
+
+/** Something the cam requires; the catalogue rules map these to parts and labour. */
+export type Need = {
+  kind: NeedKind;
+  reason: string;
+  /** springs: the kit must be good to at least this valve lift (in). */
+  minLiftIn?: number;
+  /** converter: suggested stall speed (rpm), rounded up to 100. */
+  suggestedStallRpm?: number;
+};
+
+export type CautionKind = 'emissions' | 'brakes' | 'valvetrain' | 'tune' | 'converter';
+export type Caution = { kind: CautionKind; text: string };
+
+export type Reason = { subscore: SubscoreName; text: string };
+
+export type Subscores = Record<SubscoreName, number>;
+
+/** A measured result from a past job: used by options.history to nudge predicted gains. */
+export type HistoryEntry = {
+  camId: string | number;
+  /** Measured peak-hp gain over the cam that came out, %, from before/after dyno pulls. */
+  measuredGainPctPeakHp: number;
+  /** The engine it was measured on, for similarity. */
+  displacementCi: number;
+  intakeFlowCfm?: number;
+  headers?: 'manifold' | 'shorty' | 'long-tube';
+  system?: 'full' | 'full-with-cats' | 'open-short';
+  intakeManifold?: 'truck' | 'car' | 'single-plane';
+  /** Trust in this record (e.g. number of pulls averaged); default 1. */
+  weight?: number;
+};
+
+export type HistoryAdjustment = {
+  matches: number; // past jobs similar enough to count
+  evidenceWeight: number; // their summed similarity · weight
+  modelGainPctPeakHp: number;
+  measuredGainPctPeakHp: number; // similarity-weighted mean of the measured gains
+  adjustedGainPctPeakHp: number;
+};
+
+export type RankOptions = {
+  history?: HistoryEntry[];
+  /** Prices of what the needs map to (cents), so cost can compare the whole job with the budget. */
+  needPriceCents?: Partial<Record<NeedKind, number>>;
+  /** Leave the curves out of the output (the ranking itself is unchanged). Default true. */
+  includeCurves?: boolean;
+};
+
+export type CamRanking = {
+  camId: CamCard['id'];
+  camName: string;
+  rank: number;
+  score: number;
+  subscores: Subscores;
+  crossoverRpm: number | null;
+  predicted: PredictedSummary;
+  curve: CurvePoint[];
+  valveEvents: ValveEvents;
+  dynamicCompression: number;
+  idleVacuumInHg: number;
+  reasons: Reason[];
+  cautions: Caution[];
+  needs: Need[];
+  history: HistoryAdjustment | null;
+};
+
+export type BaselineResult = {
+  camId: CamCard['id'];
+  camName: string;
+  predicted: PredictedSummary;
+  curve: CurvePoint[];
+  valveEvents: ValveEvents;
+  dynamicCompression: number;
+  idleVacuumInHg: number;
+};
+
+export type EngineFacts = {
+  displacementCi: number;
+  displacementL: number;
+  cylinderCi: number;
+  cruiseRpm: number;
+  pullAwayRpm: number;
+  pullAwaySource: 'stall' | 'launch' | 'default-launch';
+  rpmLimit: number; // top of the curves: 7,000 or the mean-piston-speed limit
+  meanPistonSpeedFtMinAtLimit: number;
+  headFlowCeilingHp: number;
+};
+
+export type RankingResult = {
+  rankings: CamRanking[];
+  baseline: BaselineResult;
+  engine: EngineFacts;
+  notice: string;
+};
