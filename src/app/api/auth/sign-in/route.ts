@@ -1,0 +1,31 @@
+import { NextResponse } from 'next/server';
+import { isCrossSite, clientIp } from '@/lib/auth/request-info';
+import { startSession } from '@/lib/auth/session';
+import { WRONG_PAIR_MESSAGE, checkSignIn } from '@/lib/auth/sign-in';
+import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
+import { signInSchema } from '@/lib/schemas/auth';
+
+export const dynamic = 'force-dynamic';
+
+export async function POST(request: Request) {
+  if (isCrossSite(request)) return errorResponse(403, 'This request came from another site and was refused.');
+  const body = await readJson(request);
+  if (!body.ok) return body.response;
+  const parsed = signInSchema.safeParse(body.value);
+  if (!parsed.success) return validationFailed(parsed.error);
+
+  const outcome = await checkSignIn(parsed.data.email, parsed.data.password, clientIp(request.headers));
+  if (outcome.kind === 'throttled') {
+    const minutes = Math.ceil(outcome.retryAfterSeconds / 60);
+    return errorResponse(
+      429,
+      `Too many sign-in attempts. Try again in about ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`,
+      { retryAfterSeconds: outcome.retryAfterSeconds },
+      { 'Retry-After': String(outcome.retryAfterSeconds) },
+    );
+  }
+  if (outcome.kind === 'wrong-pair') return errorResponse(401, WRONG_PAIR_MESSAGE);
+
+  await startSession(outcome.user.id);
+  return NextResponse.json({ user: outcome.user });
+}

@@ -1,0 +1,52 @@
+import { headers } from 'next/headers';
+import { redirect } from 'next/navigation';
+import { NextResponse } from 'next/server';
+import { errorResponse } from '@/lib/http/responses';
+import { PATH_HEADER, safeNextPath, signInUrl } from './guard-paths';
+import { isCrossSite } from './request-info';
+import { currentSession } from './session';
+
+// The one guard. Route handlers: requireRole(request, ...roles). Server components and server
+// actions: requireRoleForPage(...roles). With no roles listed, any signed-in staff member passes.
+export type StaffRole = 'manager' | 'counter' | 'tech';
+export type SessionUser = { id: number; email: string; name: string; role: StaffRole };
+
+export { PATH_HEADER, safeNextPath, signInUrl };
+
+export const ALL_STAFF: readonly StaffRole[] = ['manager', 'counter', 'tech'];
+
+export async function currentUser(): Promise<SessionUser | null> {
+  const session = await currentSession();
+  return session ? { ...session.user } : null;
+}
+
+export function roleAllows(user: SessionUser, roles: readonly StaffRole[]): boolean {
+  return roles.length === 0 || roles.includes(user.role);
+}
+
+/**
+ * For route handlers. Returns the user, or a JSON answer to return as is: 403 for a cross-site
+ * state-changing request, 401 when signed out (or the account was deactivated), 403 for a role
+ * that may not do this.
+ */
+export async function requireRole(request: Request, ...roles: StaffRole[]): Promise<SessionUser | NextResponse> {
+  if (isCrossSite(request)) return errorResponse(403, 'This request came from another site and was refused.');
+  const user = await currentUser();
+  if (!user) return errorResponse(401, 'Sign in to continue.');
+  if (!roleAllows(user, roles)) return errorResponse(403, `Your role (${user.role}) does not allow this.`);
+  return user;
+}
+
+/**
+ * For server components and server actions. Signed out: redirects to /sign-in?next=<this page>.
+ * Wrong role: redirects to the staff home, which says the page is not open to that role.
+ */
+export async function requireRoleForPage(...roles: StaffRole[]): Promise<SessionUser> {
+  const user = await currentUser();
+  const path = (await headers()).get(PATH_HEADER);
+  if (!user) redirect(signInUrl(path));
+  if (!roleAllows(user, roles)) {
+    redirect(`/dashboard?denied=${encodeURIComponent(safeNextPath(path, '/'))}`);
+  }
+  return user;
+}

@@ -1,0 +1,43 @@
+import { recordAudit } from '@/lib/audit';
+import { findUserByEmail, setPasswordHash } from '@/lib/db/queries/users';
+import { recordSignInAttempt, signInRetryAfter } from '@/lib/db/queries/sign-in-attempts';
+import type { SessionUser } from './guard';
+import { burnVerifyTime, hashPassword, needsNewHash, verifyPassword } from './password';
+
+/** The one answer to a failed sign-in: it never says which half was wrong. */
+export const WRONG_PAIR_MESSAGE = 'The e-mail or the password is wrong.';
+
+export type SignInOutcome =
+  | { kind: 'signed-in'; user: SessionUser }
+  | { kind: 'wrong-pair' }
+  | { kind: 'throttled'; retryAfterSeconds: number };
+
+/**
+ * Checks an e-mail and password pair. Unknown e-mail, deactivated account, account without a
+ * password yet and wrong password all give the same answer, after the same work.
+ */
+export async function checkSignIn(email: string, password: string, ip: string): Promise<SignInOutcome> {
+  const retryAfterSeconds = await signInRetryAfter(email, ip);
+  if (retryAfterSeconds !== null) return { kind: 'throttled', retryAfterSeconds };
+
+  const user = await findUserByEmail(email);
+  let ok = false;
+  if (user && user.active && user.passwordHash) {
+    ok = await verifyPassword(user.passwordHash, password);
+  } else {
+    await burnVerifyTime(password);
+  }
+
+  await recordSignInAttempt(email, ip, ok);
+  if (!ok || !user) {
+    await recordAudit({ actor: email, action: 'auth.sign-in-failed', entityType: user ? 'user' : null, entityId: user?.id ?? null, ip });
+    return { kind: 'wrong-pair' };
+  }
+
+  if (user.passwordHash && needsNewHash(user.passwordHash)) {
+    await setPasswordHash(user.id, await hashPassword(password));
+  }
+  const sessionUser: SessionUser = { id: user.id, email: user.email, name: user.name, role: user.role };
+  await recordAudit({ user: sessionUser, action: 'auth.signed-in', entityType: 'user', entityId: user.id, ip });
+  return { kind: 'signed-in', user: sessionUser };
+}
