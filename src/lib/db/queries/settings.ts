@@ -1,3 +1,7 @@
+import type { SessionUser } from '@/lib/auth/guard';
+import { recordAudit } from '@/lib/audit';
+import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import type { ShopSettingsValues } from '@/lib/schemas/settings';
 import { db, ShopSettings } from '../models';
 
 export async function getShopSettings(): Promise<ShopSettings | null> {
@@ -12,4 +16,71 @@ export async function getShopNameOrNull(): Promise<string | null> {
   } catch {
     return null;
   }
+}
+
+// ---- The manager's settings screen (issue 5): labour rate, tax rate, deposit policy. ----
+
+export type ShopSettingsRecord = {
+  id: number;
+  name: string;
+  address: string;
+  phone: string;
+  email: string;
+  laborRateCents: number;
+  taxRateBp: number;
+  depositPercentBp: number;
+  depositMinCents: number;
+  depositMaxCents: number;
+  depositPolicyText: string;
+  currency: string;
+  version: number;
+  updatedAt: string;
+};
+
+export function toShopSettingsRecord(s: ShopSettings): ShopSettingsRecord {
+  return {
+    id: s.id,
+    name: s.name,
+    address: s.address,
+    phone: s.phone,
+    email: s.email,
+    laborRateCents: s.laborRateCents,
+    taxRateBp: s.taxRateBp,
+    depositPercentBp: s.depositPercentBp,
+    depositMinCents: s.depositMinCents,
+    depositMaxCents: s.depositMaxCents,
+    depositPolicyText: s.depositPolicyText,
+    currency: s.currency,
+    version: s.version,
+    updatedAt: new Date(s.updatedAt).toISOString(),
+  };
+}
+
+export async function getShopSettingsRecord(): Promise<ShopSettingsRecord | null> {
+  const settings = await getShopSettings();
+  return settings ? toShopSettingsRecord(settings) : null;
+}
+
+/** Saves the settings when the client's version is current; 409 with the current values otherwise. */
+export async function updateShopSettings(
+  expectedVersion: number,
+  values: ShopSettingsValues,
+  user: SessionUser,
+): Promise<WriteOutcome<ShopSettingsRecord>> {
+  db();
+  return runWrite(
+    async (t) => {
+      const settings = await ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t, lock: t.LOCK.UPDATE });
+      if (!settings) throw notFound();
+      const before = toShopSettingsRecord(settings);
+      if (settings.version !== expectedVersion) throw conflict(before);
+      settings.set(values);
+      if (!settings.changed()) return { record: before, changed: false };
+      await settings.save({ transaction: t });
+      const after = toShopSettingsRecord(settings);
+      await recordAudit({ user, action: 'settings.updated', entityType: 'shop_settings', entityId: String(settings.id), before, after }, t);
+      return { record: after };
+    },
+    { reload: getShopSettingsRecord },
+  );
 }

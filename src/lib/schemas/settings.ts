@@ -1,0 +1,47 @@
+import { z } from 'zod';
+import { boundedNumber, presence } from './cam-card';
+import { VersionSchema, wholeCents } from './catalogue-cam';
+
+// The shop's prices and policy: labour rate (cents per hour), tax rate (basis points, 1 % = 100 bp)
+// and the deposit (a percent of the quote total, kept between a minimum and a maximum).
+export const SETTINGS_LIMITS = {
+  laborRateCents: { min: 0, max: 100_000 },
+  taxRateBp: { min: 0, max: 3_000 },
+  depositPercentBp: { min: 0, max: 10_000 },
+  depositCents: { min: 0, max: 10_000_000 },
+  policyMaxLength: 4000,
+} as const;
+
+const S = SETTINGS_LIMITS;
+const text = (label: string, max: number, required = false) =>
+  z
+    .string({ error: presence(label, 'text') })
+    .trim()
+    .max(max, { error: `${label} must be at most ${max} characters` })
+    .refine((v) => !required || v.length > 0, { error: `${label} must not be empty` });
+
+export const ShopSettingsSchema = z
+  .strictObject(
+    {
+      name: text('shop name', 120, true),
+      address: text('address', 255),
+      phone: text('phone', 40),
+      email: z.union([z.literal(''), z.email({ error: 'email must be an e-mail address' }).max(254)], { error: 'email must be an e-mail address' }),
+      laborRateCents: wholeCents('labour rate', S.laborRateCents),
+      taxRateBp: boundedNumber('tax rate', 'bp', S.taxRateBp).int({ error: 'tax rate must be a whole number of basis points' }),
+      depositPercentBp: boundedNumber('deposit percent', 'bp', S.depositPercentBp).int({ error: 'deposit percent must be a whole number of basis points' }),
+      depositMinCents: wholeCents('deposit minimum', S.depositCents),
+      depositMaxCents: wholeCents('deposit maximum', S.depositCents),
+      depositPolicyText: text('deposit policy', S.policyMaxLength, true),
+    },
+    { error: presence('settings', 'an object') },
+  )
+  .refine((s) => s.depositMaxCents >= s.depositMinCents, {
+    path: ['depositMaxCents'],
+    error: 'deposit maximum must not be below the deposit minimum',
+  });
+export type ShopSettingsValues = z.output<typeof ShopSettingsSchema>;
+export type ShopSettingsInput = z.input<typeof ShopSettingsSchema>;
+export const SHOP_SETTINGS_FIELDS = Object.keys(ShopSettingsSchema.shape) as (keyof ShopSettingsValues)[];
+
+export const SettingsPatchControlSchema = z.object({ version: VersionSchema });
