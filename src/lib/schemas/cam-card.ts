@@ -28,7 +28,7 @@ export function boundedNumber(label: string, unit: string, range: Range) {
 
 // Optional fields also accept null (the catalogue stores "not given" as NULL) and come out as undefined.
 function optional<T extends z.ZodType>(schema: T) {
-  return schema.nullish().transform((v) => (v === null ? undefined : v));
+  return z.preprocess((v) => (v === null ? undefined : v), schema.optional());
 }
 
 const L = CAM_LIMITS;
