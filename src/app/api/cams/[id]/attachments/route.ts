@@ -1,0 +1,8 @@
+import { attachmentCollectionRoutes } from '@/lib/catalogue/attachment-routes';
+import { getCam } from '@/lib/db/queries/cams';
+
+export const dynamic = 'force-dynamic';
+
+const routes = attachmentCollectionRoutes('cam', async (id) => (await getCam(id)) !== null);
+export const GET = routes.GET;
+export const POST = routes.POST;

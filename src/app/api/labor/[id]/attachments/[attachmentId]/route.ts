@@ -1,0 +1,7 @@
+import { attachmentItemRoutes } from '@/lib/catalogue/attachment-routes';
+
+export const dynamic = 'force-dynamic';
+
+const routes = attachmentItemRoutes('labor');
+export const GET = routes.GET;
+export const DELETE = routes.DELETE;

@@ -1,0 +1,8 @@
+import { attachmentCollectionRoutes } from '@/lib/catalogue/attachment-routes';
+import { getLabor } from '@/lib/db/queries/labor';
+
+export const dynamic = 'force-dynamic';
+
+const routes = attachmentCollectionRoutes('labor', async (id) => (await getLabor(id)) !== null);
+export const GET = routes.GET;
+export const POST = routes.POST;

@@ -1,0 +1,8 @@
+import { attachmentCollectionRoutes } from '@/lib/catalogue/attachment-routes';
+import { getPart } from '@/lib/db/queries/parts';
+
+export const dynamic = 'force-dynamic';
+
+const routes = attachmentCollectionRoutes('part', async (id) => (await getPart(id)) !== null);
+export const GET = routes.GET;
+export const POST = routes.POST;

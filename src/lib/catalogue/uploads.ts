@@ -1,0 +1,35 @@
+import type { NextResponse } from 'next/server';
+import { errorResponse, validationFailed } from '@/lib/http/responses';
+
+// Reading one uploaded file from a multipart body, with the size refused before the body is read when
+// the client says how big it is (413), and a clear answer when the body is not multipart at all (415).
+
+const MULTIPART_OVERHEAD = 64 * 1024;
+
+export type Upload = { file: File; bytes: Buffer; form: FormData };
+
+export function megabytes(bytes: number): string {
+  return `${(bytes / (1024 * 1024)).toFixed(bytes % (1024 * 1024) === 0 ? 0 : 1)} MB`;
+}
+
+export async function readUpload(request: Request, maxBytes: number, what: string): Promise<{ ok: true; upload: Upload } | { ok: false; response: NextResponse }> {
+  const type = request.headers.get('content-type') ?? '';
+  if (!type.toLowerCase().startsWith('multipart/form-data')) {
+    return { ok: false, response: errorResponse(415, `Send the ${what} as a multipart form with the file in a field named "file".`, { errors: [{ field: 'file', message: 'expected multipart/form-data' }] }) };
+  }
+  const tooLarge = () =>
+    errorResponse(413, `That file is larger than ${megabytes(maxBytes)}; the ${what} limit is ${megabytes(maxBytes)}.`, { errors: [{ field: 'file', message: `larger than ${megabytes(maxBytes)}` }] });
+  const declared = Number(request.headers.get('content-length') ?? '');
+  if (Number.isFinite(declared) && declared > maxBytes + MULTIPART_OVERHEAD) return { ok: false, response: tooLarge() };
+  let form: FormData;
+  try {
+    form = await request.formData();
+  } catch {
+    return { ok: false, response: errorResponse(400, 'The upload could not be read as a multipart form.', { errors: [{ field: 'file', message: 'unreadable multipart body' }] }) };
+  }
+  const file = form.get('file');
+  if (!(file instanceof File)) return { ok: false, response: validationFailed([{ field: 'file', message: `choose a ${what} to upload (field "file")` }]) };
+  if (file.size > maxBytes) return { ok: false, response: tooLarge() };
+  if (file.size === 0) return { ok: false, response: validationFailed([{ field: 'file', message: 'the file is empty' }]) };
+  return { ok: true, upload: { file, bytes: Buffer.from(await file.arrayBuffer()), form } };
+}

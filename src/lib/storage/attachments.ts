@@ -1,0 +1,158 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { SessionUser } from '@/lib/auth/guard';
+import { recordAudit } from '@/lib/audit';
+import { db } from '@/lib/db/models';
+import { blobStore } from './index';
+
+// Spec-sheet attachments for catalogue records: the metadata table (migration 20261202000300) and the
+// bytes in the blob store. The content type comes from the file's first bytes, never from its name.
+
+export const ATTACHMENT_ENTITY_TYPES = ['cam', 'part', 'labor'] as const;
+export type AttachmentEntityType = (typeof ATTACHMENT_ENTITY_TYPES)[number];
+export const ATTACHMENT_CONTENT_TYPES = ['application/pdf', 'image/png', 'image/jpeg'] as const;
+export type AttachmentContentType = (typeof ATTACHMENT_CONTENT_TYPES)[number];
+export const ATTACHMENT_MAX_BYTES = 5 * 1024 * 1024;
+
+export class CatalogueAttachment extends Model<InferAttributes<CatalogueAttachment>, InferCreationAttributes<CatalogueAttachment>> {
+  declare id: CreationOptional<number>;
+  declare entityType: AttachmentEntityType;
+  declare entityId: number;
+  declare storageKey: string;
+  declare fileName: string;
+  declare contentType: AttachmentContentType;
+  declare byteSize: number;
+  declare sha256: string;
+  declare uploadedByUserId: number | null;
+  declare createdAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    CatalogueAttachment.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        entityType: { type: DataTypes.ENUM(...ATTACHMENT_ENTITY_TYPES), allowNull: false },
+        entityId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        storageKey: { type: DataTypes.STRING(200), allowNull: false, unique: true },
+        fileName: { type: DataTypes.STRING(160), allowNull: false },
+        contentType: { type: DataTypes.ENUM(...ATTACHMENT_CONTENT_TYPES), allowNull: false },
+        byteSize: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        sha256: { type: DataTypes.CHAR(64), allowNull: false },
+        uploadedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'catalogue_attachments', underscored: true, updatedAt: false },
+    );
+  }
+}
+
+let bound: Sequelize | undefined;
+function model() {
+  const sequelize = db();
+  if (bound !== sequelize) {
+    CatalogueAttachment.initModel(sequelize);
+    bound = sequelize;
+  }
+  return CatalogueAttachment;
+}
+
+/** PDF, PNG or JPEG by magic bytes; null for anything else. */
+export function sniffAttachmentType(bytes: Uint8Array): AttachmentContentType | null {
+  const starts = (sig: number[]) => sig.every((b, i) => bytes[i] === b);
+  if (starts([0x25, 0x50, 0x44, 0x46, 0x2d])) return 'application/pdf'; // %PDF-
+  if (starts([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return 'image/png';
+  if (starts([0xff, 0xd8, 0xff])) return 'image/jpeg';
+  return null;
+}
+
+/** A display name safe for a header and a page: no paths, no control characters, at most 160 chars. */
+export function safeFileName(name: string, contentType: AttachmentContentType): string {
+  const base = (name.split(/[\\/]/).pop() ?? '').replace(/[^\w .()-]+/g, '_').replace(/^[ .]+/, '').slice(0, 150);
+  const ext = contentType === 'application/pdf' ? '.pdf' : contentType === 'image/png' ? '.png' : '.jpg';
+  const stem = base.replace(/\.[A-Za-z0-9]{1,5}$/, '') || 'spec-sheet';
+  return `${stem}${ext}`;
+}
+
+export type AttachmentRecord = {
+  id: number;
+  entityType: AttachmentEntityType;
+  entityId: number;
+  fileName: string;
+  contentType: AttachmentContentType;
+  byteSize: number;
+  sha256: string;
+  createdAt: string;
+};
+
+const toRecord = (a: CatalogueAttachment): AttachmentRecord => ({
+  id: a.id,
+  entityType: a.entityType,
+  entityId: a.entityId,
+  fileName: a.fileName,
+  contentType: a.contentType,
+  byteSize: a.byteSize,
+  sha256: a.sha256,
+  createdAt: new Date(a.createdAt).toISOString(),
+});
+
+export async function listAttachments(entityType: AttachmentEntityType, entityId: number): Promise<AttachmentRecord[]> {
+  const rows = await model().findAll({ where: { entityType, entityId }, order: [['id', 'ASC']] });
+  return rows.map(toRecord);
+}
+
+export async function getAttachment(entityType: AttachmentEntityType, entityId: number, id: number): Promise<(AttachmentRecord & { storageKey: string }) | null> {
+  const row = await model().findOne({ where: { id, entityType, entityId } });
+  return row ? { ...toRecord(row), storageKey: row.storageKey } : null;
+}
+
+export async function readAttachmentBytes(storageKey: string): Promise<Buffer | null> {
+  return blobStore().get(storageKey);
+}
+
+/** Stores the bytes first, then the row (in a transaction with its audit entry); a failed row removes the bytes. */
+export async function addAttachment(
+  entityType: AttachmentEntityType,
+  entityId: number,
+  input: { fileName: string; contentType: AttachmentContentType; bytes: Buffer },
+  user: SessionUser,
+): Promise<AttachmentRecord> {
+  const Attachment = model();
+  const storageKey = `${entityType}/${entityId}/${randomUUID()}`;
+  await blobStore().put(storageKey, input.bytes);
+  try {
+    return await db().transaction(async (t) => {
+      const row = await Attachment.create(
+        {
+          entityType,
+          entityId,
+          storageKey,
+          fileName: safeFileName(input.fileName, input.contentType),
+          contentType: input.contentType,
+          byteSize: input.bytes.length,
+          sha256: createHash('sha256').update(input.bytes).digest('hex'),
+          uploadedByUserId: user.id,
+        },
+        { transaction: t },
+      );
+      const record = toRecord(row);
+      await recordAudit({ user, action: 'attachment.added', entityType, entityId: String(entityId), before: null, after: record }, t);
+      return record;
+    });
+  } catch (error) {
+    await blobStore().remove(storageKey);
+    throw error;
+  }
+}
+
+export async function removeAttachment(entityType: AttachmentEntityType, entityId: number, id: number, user: SessionUser): Promise<(AttachmentRecord & { storageKey: string }) | null> {
+  const Attachment = model();
+  const removed = await db().transaction(async (t) => {
+    const row = await Attachment.findOne({ where: { id, entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
+    if (!row) return null;
+    const record = { ...toRecord(row), storageKey: row.storageKey };
+    await row.destroy({ transaction: t });
+    await recordAudit({ user, action: 'attachment.removed', entityType, entityId: String(entityId), before: toRecord(row), after: null }, t);
+    return record;
+  });
+  if (removed) await blobStore().remove(removed.storageKey);
+  return removed;
+}
