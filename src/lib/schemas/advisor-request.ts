@@ -1,0 +1,19 @@
+import { z } from 'zod';
+import { BuildProfileSchema } from './build-profile';
+
+export const ADVISOR_REQUEST_LIMITS = { camIdsMax: 2000 } as const;
+
+// POST /api/advisor/rank: one build, and optionally the catalogue cams to consider (default: all active).
+export const RankRequestSchema = z.strictObject({
+  build: BuildProfileSchema,
+  camIds: z
+    .array(z.number().int().positive({ error: 'each cam id must be a positive whole number' }), {
+      error: 'camIds must be a list of cam ids',
+    })
+    .min(1, { error: 'camIds, when given, must name at least one cam' })
+    .max(ADVISOR_REQUEST_LIMITS.camIdsMax, { error: `camIds may name at most ${ADVISOR_REQUEST_LIMITS.camIdsMax} cams` })
+    .optional(),
+  includeCurves: z.boolean({ error: 'includeCurves must be true or false' }).optional(),
+});
+
+export type RankRequest = z.output<typeof RankRequestSchema>;

@@ -1,0 +1,87 @@
+// Who gets what from every route handler. One row per (method, route) that exists under
+// src/app/api; access-matrix.test.ts fails when a route or method has no row here, or a row names
+// a route that no longer exists. Add your rows when you add a route.
+//
+// - path: the route as its folder spells it (dynamic segments in brackets, route groups left out),
+//   e.g. '/api/users/[id]'.
+// - url: the concrete address to call when path has dynamic segments (defaults to path).
+// - body: sent as JSON for non-GET methods (defaults to {}). Pick a body that cannot change
+//   anything when the role is let in, so that an allowed role answers with a validation error
+//   (422) or a read (200), and the rows can run in any order against the shared demo data.
+// - freshSession: sign the roles in anew for this row (for rows that end the session).
+// - expect: the status each caller must get. anonymous = no cookie; the rest are the demo users.
+//   Customers hold no account: routes they reach by private link belong in their own tests.
+export type Caller = 'anonymous' | 'manager' | 'counter' | 'tech';
+export type AccessRow = {
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  path: string;
+  url?: string;
+  body?: unknown;
+  freshSession?: boolean;
+  expect: Record<Caller, number>;
+};
+
+const publicRead = { anonymous: 200, manager: 200, counter: 200, tech: 200 };
+const anyoneValidates = { anonymous: 422, manager: 422, counter: 422, tech: 422 };
+const staffValidates = { anonymous: 401, manager: 422, counter: 422, tech: 422 };
+const managerRead = { anonymous: 401, manager: 200, counter: 403, tech: 403 };
+const managerValidates = { anonymous: 401, manager: 422, counter: 403, tech: 403 };
+
+export const accessMatrix: AccessRow[] = [
+  // Foundation
+  { method: 'GET', path: '/api/health', expect: publicRead },
+
+  // The advisor (issue 3): any signed-in staff member may rank; an empty body fails validation.
+  { method: 'POST', path: '/api/advisor/rank', expect: staffValidates },
+
+  // Sign-in, roles and staff accounts (issue 4)
+  { method: 'POST', path: '/api/auth/sign-in', expect: anyoneValidates },
+  { method: 'POST', path: '/api/auth/sign-out', freshSession: true, expect: publicRead },
+  { method: 'GET', path: '/api/auth/me', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/auth/forgot-password', expect: anyoneValidates },
+  { method: 'POST', path: '/api/auth/reset-password', expect: anyoneValidates },
+  { method: 'POST', path: '/api/account/password', expect: staffValidates },
+  { method: 'GET', path: '/api/users', expect: managerRead },
+  { method: 'POST', path: '/api/users', expect: managerValidates },
+  { method: 'PATCH', path: '/api/users/[id]', url: '/api/users/1', expect: managerValidates },
+  // The manager's catalogue (issue 5). Staff read; only managers change anything. Writes that would
+  // succeed use a body that fails validation (422), a multipart-only route answers 415 to JSON, and
+  // DELETE rows name ids that do not exist (404), so no row changes the demo data.
+  { method: 'GET', path: '/api/cams', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/cams', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/cams/[id]', url: '/api/cams/7', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'PATCH', path: '/api/cams/[id]', url: '/api/cams/7', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'DELETE', path: '/api/cams/[id]', url: '/api/cams/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+  { method: 'POST', path: '/api/cams/import', expect: { anonymous: 401, manager: 415, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/cams/import/template', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'GET', path: '/api/cams/export', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'GET', path: '/api/cams/[id]/attachments', url: '/api/cams/7/attachments', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/cams/[id]/attachments', url: '/api/cams/7/attachments', expect: { anonymous: 401, manager: 415, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/cams/[id]/attachments/[attachmentId]', url: '/api/cams/7/attachments/999999', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
+  { method: 'DELETE', path: '/api/cams/[id]/attachments/[attachmentId]', url: '/api/cams/7/attachments/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/parts', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/parts', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/parts/[id]', url: '/api/parts/1', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'PATCH', path: '/api/parts/[id]', url: '/api/parts/1', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'DELETE', path: '/api/parts/[id]', url: '/api/parts/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/parts/[id]/attachments', url: '/api/parts/1/attachments', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/parts/[id]/attachments', url: '/api/parts/1/attachments', expect: { anonymous: 401, manager: 415, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/parts/[id]/attachments/[attachmentId]', url: '/api/parts/1/attachments/999999', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
+  { method: 'DELETE', path: '/api/parts/[id]/attachments/[attachmentId]', url: '/api/parts/1/attachments/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/labor', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/labor', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/labor/[id]', url: '/api/labor/1', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'PATCH', path: '/api/labor/[id]', url: '/api/labor/1', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'DELETE', path: '/api/labor/[id]', url: '/api/labor/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/labor/[id]/attachments', url: '/api/labor/1/attachments', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/labor/[id]/attachments', url: '/api/labor/1/attachments', expect: { anonymous: 401, manager: 415, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/labor/[id]/attachments/[attachmentId]', url: '/api/labor/1/attachments/999999', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
+  { method: 'DELETE', path: '/api/labor/[id]/attachments/[attachmentId]', url: '/api/labor/1/attachments/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+  { method: 'GET', path: '/api/settings', expect: managerRead },
+  { method: 'PATCH', path: '/api/settings', expect: managerValidates },
+  { method: 'GET', path: '/api/rules', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/rules', expect: managerValidates },
+  { method: 'GET', path: '/api/rules/[id]', url: '/api/rules/1', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'PATCH', path: '/api/rules/[id]', url: '/api/rules/1', expect: managerValidates },
+  { method: 'DELETE', path: '/api/rules/[id]', url: '/api/rules/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 403 } },
+];
