@@ -42,9 +42,11 @@ export const MODEL = {
   refCompressionRatio: 10,
   // Port flow per in³ of cylinder fills the cylinder better, with diminishing returns:
   // VE ∝ 1 − exp(−(cfm / cylinder in³) / scale), relative to the calibration engine's 6.7 cfm/in³
-  // (290 cfm on 43.3 in³). Scale our choice: stock truck heads on a 5.3 L then make about 6 % less.
+  // (290 cfm on 43.3 in³), capped at +15 %. Scale our choice: stock truck heads (240 cfm) on a 5.3 L
+  // then fill about 9 % less than the ported calibration heads.
   specificFlowRefCfmPerCi: 6.7,
-  specificFlowScaleCfmPerCi: 5,
+  specificFlowScaleCfmPerCi: 10,
+  specificFlowMaxFactor: 1.15,
   // Head-flow ceiling: a two-valve head supports about 0.26 hp per cfm per cylinder (common practice).
   hpPerCfmPerCylinder: 0.26,
   // Sharpness of the soft ceiling: hp / (1 + (hp / ceiling)^m)^(1/m) (our choice: invisible until close).

@@ -4,8 +4,13 @@
 /** 3100 → "3,100". */
 export function groupThousands(n: number): string {
   const sign = n < 0 ? '-' : '';
-  const digits = String(Math.round(Math.abs(n)));
-  return sign + digits.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  let digits = String(Math.round(Math.abs(n)));
+  let out = '';
+  while (digits.length > 3) {
+    out = `,${digits.slice(-3)}${out}`;
+    digits = digits.slice(0, -3);
+  }
+  return sign + digits + out;
 }
 
 /** An rpm said "about": rounded to the nearest 100. */

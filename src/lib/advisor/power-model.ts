@@ -30,6 +30,10 @@ export type EngineContext = {
   torqueScale: number; // lb·ft at 100 % of peak VE
   ceilingHp: number;
   rpms: Float64Array;
+  // Per-rpm values that do not depend on the cam, kept so a 1,000-cam ranking stays fast.
+  logRpms: Float64Array;
+  exhaustLowEnd: Float64Array; // exhaustLowEndFactor at each rpm
+  overlapFade: Float64Array; // 1 / (1 + (rpm / fadeRpm)²) at each rpm
   coeffs: ModelCoefficients;
 };
 
@@ -60,14 +64,19 @@ export function liftFlowFraction(liftIn: number, boreIn: number, c: ModelCoeffic
 
 // Semi-empirical, our model: overlap lets exhaust push back into the intake at low rpm. The loss
 // grows with seat-timed overlap, shrinks in a bigger cylinder, and fades as rpm rises.
-export function overlapLossFraction(
-  seatOverlapDeg: number, rpm: number, ctx: EngineContext,
-): number {
+export function overlapLossAmount(seatOverlapDeg: number, ctx: EngineContext): number {
   const c = ctx.coeffs;
-  const size = c.refCylinderCi / ctx.cylinderCi;
-  const amount = c.overlapLossPer40Deg * (Math.max(0, seatOverlapDeg) / 40) * size * ctx.overlapMultiplier;
-  const fade = rpm / (c.overlapFadeRpm * ctx.sizeScale);
-  return amount / (1 + fade * fade);
+  return c.overlapLossPer40Deg * (Math.max(0, seatOverlapDeg) / 40) * (c.refCylinderCi / ctx.cylinderCi) * ctx.overlapMultiplier;
+}
+
+// ... fading as 1 / (1 + (rpm / fade rpm)²), the fade rpm scaled like the cam's powerband.
+export function overlapFadeFactor(rpm: number, sizeScale: number, c: ModelCoefficients): number {
+  const fade = rpm / (c.overlapFadeRpm * sizeScale);
+  return 1 / (1 + fade * fade);
+}
+
+export function overlapLossFraction(seatOverlapDeg: number, rpm: number, ctx: EngineContext): number {
+  return overlapLossAmount(seatOverlapDeg, ctx) * overlapFadeFactor(rpm, ctx.sizeScale, ctx.coeffs);
 }
 
 // Semi-empirical, our model: short open collectors lose low-rpm torque on every cam, fading with rpm.
@@ -77,10 +86,10 @@ export function exhaustLowEndFactor(rpm: number, lowEndLoss: number, fadeRpm: nu
 }
 
 // Semi-empirical, our model: more port flow per in³ of cylinder fills it better, with diminishing
-// returns, relative to the calibration engine: (1 − e^(−q/scale)) / (1 − e^(−qref/scale)).
+// returns, relative to the calibration engine: (1 − e^(−q/scale)) / (1 − e^(−qref/scale)), capped.
 export function portFlowFactor(intakeFlowCfm: number, cylinderCi: number, c: ModelCoefficients): number {
   const fill = (q: number) => 1 - Math.exp(-q / c.specificFlowScaleCfmPerCi);
-  return fill(intakeFlowCfm / cylinderCi) / fill(c.specificFlowRefCfmPerCi);
+  return Math.min(c.specificFlowMaxFactor, fill(intakeFlowCfm / cylinderCi) / fill(c.specificFlowRefCfmPerCi));
 }
 
 // Heywood ch. 5: ideal Otto-cycle efficiency η = 1 − 1 / CR^(γ−1).
@@ -95,7 +104,14 @@ export function headFlowCeilingHp(intakeFlowCfm: number, cylinders: number, hpPe
 
 // Our choice: a soft ceiling, hp / (1 + (hp / ceiling)^m)^(1/m), invisible well below the ceiling.
 export function softCeilingHp(hp: number, ceilingHp: number, sharpness: number): number {
-  return hp / Math.pow(1 + Math.pow(hp / ceilingHp, sharpness), 1 / sharpness);
+  const r = hp / ceilingHp;
+  // Sharpness 8 is the model's value: squarings and square roots instead of general powers (faster).
+  if (sharpness === 8) {
+    const r2 = r * r;
+    const r4 = r2 * r2;
+    return hp / Math.sqrt(Math.sqrt(Math.sqrt(1 + r4 * r4)));
+  }
+  return hp / Math.pow(1 + Math.pow(r, sharpness), 1 / sharpness);
 }
 
 /** The rpm grid: 1500 to 7000 in 100s, cut at the mean-piston-speed limit when that comes first. */
@@ -118,10 +134,12 @@ export function engineContext(build: BuildProfile, c: ModelCoefficients = MODEL)
   const system = EXHAUST_SYSTEM_FACTORS[x.system];
   const primary = headers.usesPrimary ? Math.pow((x.primaryIn ?? PRIMARY_REFERENCE_IN) / PRIMARY_REFERENCE_IN, PRIMARY_RPM_EXPONENT) : 1;
   const compression = ottoEfficiency(e.compressionRatio, c.compressionGammaMinusOne) / ottoEfficiency(c.refCompressionRatio, c.compressionGammaMinusOne);
+  const rpms = rpmGrid(e.strokeIn, c);
+  const sizeScale = Math.pow(c.refCylinderCi / cylinderCi, c.sizeExponent);
   return {
     displacementCi: displacement,
     cylinderCi,
-    sizeScale: Math.pow(c.refCylinderCi / cylinderCi, c.sizeExponent),
+    sizeScale,
     boreIn: e.boreIn,
     rpmFactor: manifold.rpm * headers.rpm * primary * system.rpm,
     veFactor: manifold.ve * headers.ve * system.ve * portFlowFactor(e.intakeFlowCfm, cylinderCi, c),
@@ -131,7 +149,10 @@ export function engineContext(build: BuildProfile, c: ModelCoefficients = MODEL)
     lowEndFadeRpm: system.lowEndFadeRpm,
     torqueScale: c.torquePerCiAtPeak * displacement * compression,
     ceilingHp: headFlowCeilingHp(e.intakeFlowCfm, e.cylinders, c.hpPerCfmPerCylinder),
-    rpms: rpmGrid(e.strokeIn, c),
+    rpms,
+    logRpms: rpms.map(Math.log),
+    exhaustLowEnd: rpms.map((r) => exhaustLowEndFactor(r, system.lowEndLoss, system.lowEndFadeRpm)),
+    overlapFade: rpms.map((r) => overlapFadeFactor(r, sizeScale, c)),
     coeffs: c,
   };
 }
@@ -161,10 +182,26 @@ export function torqueAtRpm(ctx: EngineContext, shape: CamShape, rpm: number): n
   return torqueFromHorsepower(hp, rpm);
 }
 
-/** Predicted torque (lb·ft, unrounded) over the context's rpm grid. */
+/**
+ * Predicted torque (lb·ft, unrounded) over the context's rpm grid: the same arithmetic as
+ * torqueAtRpm, with the cam-independent parts taken from the context's per-rpm tables.
+ */
 export function torqueCurve(ctx: EngineContext, cam: CamCard): Float64Array {
   const shape = camShape(ctx, cam);
-  const out = new Float64Array(ctx.rpms.length);
-  for (let i = 0; i < out.length; i++) out[i] = torqueAtRpm(ctx, shape, ctx.rpms[i]);
+  const n = ctx.rpms.length;
+  const out = new Float64Array(n);
+  const logPeak = Math.log(shape.peakRpm);
+  const kLow = 1 / (2 * shape.sigmaLow * shape.sigmaLow);
+  const kHigh = 1 / (2 * shape.sigmaHigh * shape.sigmaHigh);
+  const overlap = overlapLossAmount(shape.seatOverlapDeg, ctx);
+  const sharp = ctx.coeffs.ceilingSharpness;
+  for (let i = 0; i < n; i++) {
+    const rpm = ctx.rpms[i];
+    const x = ctx.logRpms[i] - logPeak;
+    const bell = Math.exp(-x * x * (x < 0 ? kLow : kHigh));
+    const ve = shape.peakVe * bell - overlap * ctx.overlapFade[i];
+    const raw = ctx.torqueScale * Math.max(0, ve) * ctx.exhaustLowEnd[i];
+    out[i] = torqueFromHorsepower(softCeilingHp(horsepower(raw, rpm), ctx.ceilingHp, sharp), rpm);
+  }
   return out;
 }

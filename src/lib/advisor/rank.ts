@@ -20,7 +20,7 @@ import {
 } from './scoring';
 import type { BaselineResult, CamRanking, EngineFacts, RankingResult, RankOptions, Reason } from './types';
 import { overlap050Deg, seatOverlapDeg, valveEvents } from './valve-events';
-import { SCORING_WEIGHTS, SUBSCORE_NAMES } from './weights';
+import { SCORING_WEIGHTS } from './weights';
 
 export const PREDICTION_NOTICE = 'Predictions are indicative: a model calibrated on a few engine-dyno results, not a measurement of this engine.';
 
@@ -62,7 +62,7 @@ function engineFacts(w: BuildWork): EngineFacts {
   };
 }
 
-function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): Omit<CamRanking, 'rank'> {
+function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRanking {
   const { build, ctx, baseTorque } = w;
   const rpms = ctx.rpms;
   let torque = torqueCurve(ctx, cam);
@@ -101,7 +101,10 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): Omit<CamR
   const cost = scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents);
 
   const raw = { powerband: powerband.score, converter: converter.score, idle: idle.score, compression: compression.score, fit: fit.score, emissions: emissions.score, cost: cost.score };
-  const subscores = Object.fromEntries(SUBSCORE_NAMES.map((k) => [k, Math.round(raw[k])])) as typeof raw;
+  const subscores = {
+    powerband: Math.round(raw.powerband), converter: Math.round(raw.converter), idle: Math.round(raw.idle),
+    compression: Math.round(raw.compression), fit: Math.round(raw.fit), emissions: Math.round(raw.emissions), cost: Math.round(raw.cost),
+  };
   const reasons: Reason[] = [
     powerbandReason(powerband, build, w.cruiseRpm, predicted.peakHp, predicted.gainPctPeakHp),
     converterReason(converter),
@@ -117,6 +120,7 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): Omit<CamR
   return {
     camId: cam.id,
     camName: cam.name,
+    rank: 0, // set once sorted
     score: roundTo(totalScore(raw, emissions.gated), 1),
     subscores,
     crossoverRpm: crossover,
@@ -146,6 +150,13 @@ function baselineResult(w: BuildWork, includeCurves: boolean): BaselineResult {
   };
 }
 
+// Deterministic, locale-free order of ids for ties: by their text, code unit by code unit.
+function compareIds(a: CamCard['id'], b: CamCard['id']): number {
+  const x = String(a);
+  const y = String(b);
+  return x < y ? -1 : x > y ? 1 : 0;
+}
+
 /**
  * Ranks the shop's cams for one combination, best first. Inputs must already be schema-valid
  * (BuildProfileSchema, CamCardSchema). Ties break on the powerband sub-score, then on the id.
@@ -153,9 +164,12 @@ function baselineResult(w: BuildWork, includeCurves: boolean): BaselineResult {
 export function rankCams(build: BuildProfile, cams: readonly CamCard[], options: RankOptions = {}): RankingResult {
   const w = prepare(build);
   const scored = cams.map((cam) => analyseCam(w, cam, options));
-  scored.sort((a, b) => b.score - a.score || b.subscores.powerband - a.subscores.powerband || String(a.camId).localeCompare(String(b.camId), 'en'));
+  scored.sort((a, b) => b.score - a.score || b.subscores.powerband - a.subscores.powerband || compareIds(a.camId, b.camId));
+  scored.forEach((r, i) => {
+    r.rank = i + 1;
+  });
   return {
-    rankings: scored.map((r, i) => ({ ...r, rank: i + 1 })),
+    rankings: scored,
     baseline: baselineResult(w, options.includeCurves !== false),
     engine: engineFacts(w),
     notice: PREDICTION_NOTICE,

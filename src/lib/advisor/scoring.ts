@@ -78,15 +78,15 @@ export type ConverterDetail = {
 export function scoreConverter(build: BuildProfile, pullAwayRpm: number, crossover: number | null, aheadAtPullAway: boolean): ConverterDetail {
   const c = CONVERTER_SCORING;
   const transmission = build.drivetrain.transmission;
-  const base = { transmission, pullAwayRpm, crossoverRpm: crossover, aheadAtPullAway, suggestedStallRpm: null };
   if (crossover === null) {
-    return { ...base, score: aheadAtPullAway ? 100 : c.neverCrossesScore, marginRpm: null };
+    const score = aheadAtPullAway ? 100 : c.neverCrossesScore;
+    return { score, transmission, pullAwayRpm, crossoverRpm: null, marginRpm: null, aheadAtPullAway, suggestedStallRpm: null };
   }
   const margin = crossover - pullAwayRpm;
   const slope = transmission === 'automatic' ? c.automaticPointsPerRpm : c.manualPointsPerRpm;
   const score = clamp(100 - Math.max(0, margin - c.toleranceRpm) * slope);
   const suggest = transmission === 'automatic' && margin > c.suggestConverterAboveStallRpm ? Math.ceil(crossover / 100) * 100 : null;
-  return { ...base, score, marginRpm: margin, suggestedStallRpm: suggest };
+  return { score, transmission, pullAwayRpm, crossoverRpm: crossover, marginRpm: margin, aheadAtPullAway, suggestedStallRpm: suggest };
 }
 
 export type IdleDetail = { score: number; vacuumInHg: number; wish: BuildProfile['use']['idle']; brakesShortInHg: number };

@@ -47,7 +47,10 @@ export function eventsFromDurations(
 /** Valve events at 0.050" tappet lift (and at advertised duration when the card has both figures). */
 export function valveEvents(cam: CamCard): ValveEvents {
   const at050 = eventsFromDurations(cam.intakeDuration050, cam.exhaustDuration050, cam.lsa, cam.intakeCenterline);
-  const out: ValveEvents = { ...at050, exhaustCenterline: exhaustCenterlineDeg(cam.lsa, cam.intakeCenterline) };
+  const out: ValveEvents = {
+    ivo: at050.ivo, ivc: at050.ivc, evo: at050.evo, evc: at050.evc, overlap: at050.overlap,
+    exhaustCenterline: exhaustCenterlineDeg(cam.lsa, cam.intakeCenterline),
+  };
   if (cam.intakeAdvertised !== undefined && cam.exhaustAdvertised !== undefined) {
     out.advertised = eventsFromDurations(cam.intakeAdvertised, cam.exhaustAdvertised, cam.lsa, cam.intakeCenterline);
   }

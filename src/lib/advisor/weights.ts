@@ -57,8 +57,8 @@ export const BELOW_PULL_AWAY_FACTOR = 0.3;
 /** Heavier vehicles lean on low-rpm torque: weights below 3,000 rpm scale with weight / 4,500 lb. */
 export const HEAVY_VEHICLE = { refWeightLb: 4500, belowRpm: 3000, minFactor: 0.7, maxFactor: 1.6 } as const;
 
-/** Powerband score: 50 + 50 · tanh(average torque change % / 15): 50 at no change, ~88 at +15 %. */
-export const POWERBAND_SCALE_PCT = 15;
+/** Powerband score: 50 + 50 · tanh(average torque change % / 10): 50 at no change, ~88 at +10 %. */
+export const POWERBAND_SCALE_PCT = 10;
 
 /** Converter / launch: full marks within 200 rpm of the crossover, then points lost per rpm. */
 export const CONVERTER_SCORING = {
@@ -74,8 +74,8 @@ export const CONVERTER_SCORING = {
 export const IDLE_SCORING = {
   smooth: { wantAtLeastInHg: 17, pointsPerInHgShort: 10 },
   noticeable: { wantFromInHg: 12, wantToInHg: 16, pointsPerInHgShort: 10, pointsPerInHgMild: 5 },
-  aggressive: { wantAtMostInHg: 14, pointsPerInHgMild: 8 },
-  brakePointsPerInHgShort: 8,
+  aggressive: { wantAtMostInHg: 12.5, pointsPerInHgMild: 10 },
+  brakePointsPerInHgShort: 5,
 } as const;
 
 /**
