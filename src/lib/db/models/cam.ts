@@ -34,25 +34,27 @@ export class Cam extends Model<InferAttributes<Cam>, InferCreationAttributes<Cam
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const degrees = { type: DataTypes.DOUBLE, allowNull: false };
-    const optionalDegrees = { type: DataTypes.DOUBLE, allowNull: true };
+    // Fresh objects per attribute: Sequelize writes each attribute's column name into its definition,
+    // so one shared object would map several attributes to the same column.
+    const degrees = () => ({ type: DataTypes.DOUBLE, allowNull: false });
+    const optionalDegrees = () => ({ type: DataTypes.DOUBLE, allowNull: true });
     Cam.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         sku: { type: DataTypes.STRING(40), allowNull: false, unique: true },
         name: { type: DataTypes.STRING(120), allowNull: false },
-        intakeDuration050: { ...degrees, field: 'intake_duration_050' },
-        exhaustDuration050: { ...degrees, field: 'exhaust_duration_050' },
-        intakeAdvertised: optionalDegrees,
-        exhaustAdvertised: optionalDegrees,
-        intakeLiftIn: degrees,
-        exhaustLiftIn: degrees,
-        lsa: degrees,
-        intakeCenterline: degrees,
+        intakeDuration050: { ...degrees(), field: 'intake_duration_050' },
+        exhaustDuration050: { ...degrees(), field: 'exhaust_duration_050' },
+        intakeAdvertised: optionalDegrees(),
+        exhaustAdvertised: optionalDegrees(),
+        intakeLiftIn: degrees(),
+        exhaustLiftIn: degrees(),
+        lsa: degrees(),
+        intakeCenterline: degrees(),
         rockerRatio: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1.7 },
         deactivationCompatible: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         emissionsCertified: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
-        springMaxLiftIn: optionalDegrees,
+        springMaxLiftIn: optionalDegrees(),
         isFactoryBaseline: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         baselineForLiters: { type: DataTypes.DECIMAL(3, 1), allowNull: true },
         priceCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
