@@ -1,22 +1,14 @@
 import type { Config } from 'tailwindcss';
+import { palette } from './src/lib/palette';
 
-// Lobewise's palette, defined once. Components use these tokens, never raw hex values.
+// Lobewise's palette comes from src/lib/palette.ts (one definition). Components use these tokens.
 // "ink"/"paper" carry text and surfaces, "steel" the quiet UI, "ember" the one accent,
 // "gauge" the informational tone, and the state colours always travel with a word.
 const config: Config = {
   content: ['./src/**/*.{ts,tsx}'],
   theme: {
     extend: {
-      colors: {
-        ink: { DEFAULT: '#1c1f24', soft: '#3a3f47', muted: '#5d6470' },
-        paper: { DEFAULT: '#f6f4ef', raised: '#ffffff', sunk: '#ebe7de' },
-        steel: { 100: '#e3e6ea', 300: '#b9bfc8', 500: '#7c8593', 700: '#4a515c', 900: '#23272e' },
-        ember: { 100: '#fbe6d6', 500: '#c8561b', 600: '#a8460f', 700: '#84370b' },
-        gauge: { 100: '#dcecef', 500: '#2f7c8a', 700: '#1f5661' },
-        ok: { 100: '#dff0e0', 700: '#2d6a33' },
-        caution: { 100: '#fbf0cf', 700: '#7a5a00' },
-        fault: { 100: '#f8dcdc', 700: '#9b2226' },
-      },
+      colors: palette,
       fontFamily: {
         sans: ['var(--font-body)', 'system-ui', 'sans-serif'],
         mono: ['var(--font-spec)', 'ui-monospace', 'monospace'],

@@ -10,8 +10,9 @@ import type { BuildProfile } from '@/lib/schemas/build-profile';
 // which parts and labour operations those are, so the shortlist and the quote agree.
 
 export type PricedItem = CatalogueNeed & { priceCents: number };
-export type ShopRanking = RankingResult & {
-  rankings: (RankingResult['rankings'][number] & { neededItems: PricedItem[]; neededItemsCents: number })[];
+export type ShopRankingEntry = RankingResult['rankings'][number] & { camPriceCents: number; neededItems: PricedItem[]; neededItemsCents: number };
+export type ShopRanking = Omit<RankingResult, 'rankings'> & {
+  rankings: ShopRankingEntry[];
 };
 
 const RULE_KIND_FOR_NEED: Record<NeedKind, NeedRuleInput['kind']> = {
@@ -59,7 +60,7 @@ export async function rankForShop(
       build: { cylinderDeactivation: build.engine.cylinderDeactivation, stallRpm: build.drivetrain.stallRpm },
       crossoverRpm: ranking.crossoverRpm,
     }).map((need) => ({ ...need, priceCents: itemPriceCents(need, laborRateCents) }));
-    return { ...ranking, neededItems, neededItemsCents: neededItems.reduce((sum, item) => sum + item.priceCents, 0) };
+    return { ...ranking, camPriceCents: card.priceCents ?? 0, neededItems, neededItemsCents: neededItems.reduce((sum, item) => sum + item.priceCents, 0) };
   });
   return { ok: true, result: { ...result, rankings } };
 }

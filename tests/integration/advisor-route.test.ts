@@ -54,7 +54,7 @@ describe('POST /api/advisor/rank', () => {
     for (let i = 1; i < body.rankings.length; i++) expect(body.rankings[i - 1].score).toBeGreaterThanOrEqual(body.rankings[i].score);
     for (const ranking of body.rankings) {
       // Definition of horsepower: hp = torque (lb·ft) · rpm / 5252.
-      for (const point of ranking.curve) expect(point.hp).toBeCloseTo((point.torqueLbFt * point.rpm) / 5252, 1);
+      for (const point of ranking.curve) expect(point.hp).toBe((point.torqueLbFt * point.rpm) / 5252);
       // The seeded "always" rule adds the dyno tune to every cam.
       expect(ranking.neededItems.some((item) => item.part?.sku === 'TUNE-DYNO')).toBe(true);
       expect(ranking.neededItemsCents).toBe(ranking.neededItems.reduce((sum, item) => sum + item.priceCents, 0));

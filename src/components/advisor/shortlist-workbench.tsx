@@ -1,0 +1,144 @@
+'use client';
+
+import { useMemo, useState } from 'react';
+import useSWR from 'swr';
+import type { ShopRanking } from '@/lib/advisor-service';
+import type { BuildProfile } from '@/lib/schemas/build-profile';
+import { dollars, hpText, pctText, rpmText, torqueText } from './format';
+import { PowerChart } from './power-chart';
+import { RankingDetail } from './ranking-detail';
+
+type BuildOption = { id: number; label: string; profile: BuildProfile };
+
+async function rank([url, build]: [string, BuildProfile]): Promise<ShopRanking> {
+  const response = await fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ build }) });
+  const body = await response.json().catch(() => null);
+  if (!response.ok) {
+    const fields = body?.errors?.map((e: { field: string; message: string }) => `${e.field}: ${e.message}`).join('; ');
+    throw new Error(fields || body?.message || `The advisor answered ${response.status}.`);
+  }
+  return body as ShopRanking;
+}
+
+export function ShortlistWorkbench({ builds, notice }: { builds: BuildOption[]; notice: string }) {
+  const [buildId, setBuildId] = useState<number | null>(builds[0]?.id ?? null);
+  const build = builds.find((b) => b.id === buildId) ?? null;
+  const { data, error, isLoading } = useSWR(build ? ['/api/advisor/rank', build.profile] : null, rank, { revalidateOnFocus: false });
+  const [openCamId, setOpenCamId] = useState<string | null>(null);
+  const [charted, setCharted] = useState<string[] | null>(null);
+
+  const chartIds = useMemo(() => charted ?? data?.rankings.slice(0, 3).map((r) => String(r.camId)) ?? [], [charted, data]);
+
+  if (builds.length === 0) {
+    return <p className="rounded border border-steel-300 bg-paper-raised p-4">No saved builds yet. Record a customer’s engine combination first, then come back here for the shortlist.</p>;
+  }
+
+  const toggleChart = (camId: string) =>
+    setCharted((current) => {
+      const list = current ?? chartIds;
+      return list.includes(camId) ? list.filter((id) => id !== camId) : [...list, camId].slice(-4);
+    });
+
+  return (
+    <div className="flex flex-col gap-4">
+      <label className="flex max-w-xl flex-col gap-1 text-sm font-semibold">
+        Build
+        <select
+          className="rounded border border-steel-300 bg-paper-raised px-3 py-2 font-normal"
+          value={buildId ?? ''}
+          onChange={(e) => { setBuildId(Number(e.target.value)); setCharted(null); setOpenCamId(null); }}
+        >
+          {builds.map((b) => <option key={b.id} value={b.id}>{b.label}</option>)}
+        </select>
+      </label>
+
+      {isLoading ? <p role="status" className="text-sm text-ink-soft">Ranking the catalogue for this build…</p> : null}
+      {error ? <p role="alert" className="rounded border border-fault-700/40 bg-fault-100 p-3 text-sm text-fault-700">Problem: {error.message} Check the build’s details and try again.</p> : null}
+
+      {data && build ? (
+        <>
+          <EngineLine data={data} />
+          <section aria-labelledby="chart-heading" className="rounded-lg border border-steel-300 bg-paper-raised p-4">
+            <h2 id="chart-heading" className="text-sm font-semibold">Predicted curves against the cam in the engine now</h2>
+            <PowerChart
+              baseline={{ label: `Now: ${data.baseline.camName}`, points: data.baseline.curve }}
+              candidates={data.rankings.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ label: `#${r.rank} ${r.camName}`, points: r.curve }))}
+              markers={[
+                ...((build.profile.drivetrain.stallRpm ?? 0) > 0 ? [{ label: 'Converter stall', rpm: build.profile.drivetrain.stallRpm ?? 0 }] : []),
+                ...data.rankings.filter((r) => chartIds.includes(String(r.camId)) && r.crossoverRpm !== null).map((r) => ({ label: `#${r.rank} crossover`, rpm: r.crossoverRpm! })),
+              ]}
+              band={{ fromRpm: data.engine.cruiseRpm, toRpm: Math.max(data.engine.cruiseRpm + 200, data.engine.pullAwayRpm), label: `Where it’s driven (cruise ${Math.round(data.engine.cruiseRpm)} rpm)` }}
+            />
+            <p className="mt-2 text-xs text-ink-muted">{notice}</p>
+          </section>
+
+          <div className="overflow-x-auto rounded-lg border border-steel-300 bg-paper-raised">
+            <table className="w-full text-sm">
+              <caption className="sr-only">Cams ranked for this build</caption>
+              <thead className="bg-paper-sunk text-left text-xs uppercase tracking-wide text-ink-muted">
+                <tr>
+                  <th scope="col" className="px-3 py-2">#</th>
+                  <th scope="col" className="px-3 py-2">Cam</th>
+                  <th scope="col" className="px-3 py-2 text-right">Fit</th>
+                  <th scope="col" className="px-3 py-2 text-right">Out-pulls now from</th>
+                  <th scope="col" className="px-3 py-2 text-right">Peak power</th>
+                  <th scope="col" className="px-3 py-2 text-right">Peak torque</th>
+                  <th scope="col" className="px-3 py-2 text-right">Low-end loss</th>
+                  <th scope="col" className="px-3 py-2 text-right">Cam + needs</th>
+                  <th scope="col" className="px-3 py-2">Chart</th>
+                </tr>
+              </thead>
+              <tbody className="spec">
+                {data.rankings.map((r) => {
+                  const id = String(r.camId);
+                  const open = openCamId === id;
+                  return (
+                    <RowGroup key={id}>
+                      <tr className="border-t border-steel-100">
+                        <td className="px-3 py-2">{r.rank}</td>
+                        <td className="px-3 py-2 font-sans">
+                          <button type="button" aria-expanded={open} className="text-left font-semibold underline-offset-2 hover:underline" onClick={() => setOpenCamId(open ? null : id)}>
+                            {r.camName}
+                          </button>
+                          {r.cautions.some((c) => c.kind === 'emissions') ? <span className="ml-2 rounded bg-caution-100 px-1.5 text-xs text-caution-700">Emissions: check</span> : null}
+                        </td>
+                        <td className="px-3 py-2 text-right">{r.score.toFixed(0)}/100</td>
+                        <td className="px-3 py-2 text-right">{r.crossoverRpm === null ? 'never' : rpmText(r.crossoverRpm)}</td>
+                        <td className="px-3 py-2 text-right">{hpText(r.predicted.peakHp)} <span className="text-ink-muted">({pctText(r.predicted.gainPctPeakHp)})</span></td>
+                        <td className="px-3 py-2 text-right">{torqueText(r.predicted.peakTorqueLbFt)}</td>
+                        <td className="px-3 py-2 text-right">{r.predicted.lowEndLossPct.toFixed(1)} %</td>
+                        <td className="px-3 py-2 text-right">{dollars(r.camPriceCents + r.neededItemsCents)}</td>
+                        <td className="px-3 py-2">
+                          <input type="checkbox" aria-label={`Show ${r.camName} on the chart`} checked={chartIds.includes(id)} onChange={() => toggleChart(id)} />
+                        </td>
+                      </tr>
+                      {open ? (
+                        <tr>
+                          <td colSpan={9} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} /></td>
+                        </tr>
+                      ) : null}
+                    </RowGroup>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
+        </>
+      ) : null}
+    </div>
+  );
+}
+
+function RowGroup({ children }: { children: React.ReactNode }) {
+  return <>{children}</>;
+}
+
+function EngineLine({ data }: { data: ShopRanking }) {
+  const e = data.engine;
+  return (
+    <p className="spec text-sm text-ink-soft">
+      {e.displacementCi.toFixed(0)} in³ ({e.displacementL.toFixed(1)} L) · cruise {rpmText(e.cruiseRpm)} · pulls away near {rpmText(e.pullAwayRpm)} ·
+      curves to {rpmText(e.rpmLimit)} · head flow supports about {hpText(e.headFlowCeilingHp)}
+    </p>
+  );
+}

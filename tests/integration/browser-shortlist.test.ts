@@ -1,0 +1,50 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { launchBrowser } from '../support/browser';
+import { signIn } from '../support/auth';
+import { readRuntime } from '../support/runtime';
+
+const { appUrl } = readRuntime();
+const SHOTS = path.resolve(__dirname, '../../var/test/screenshots');
+
+describe('cam shortlist page in a real browser', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    fs.mkdirSync(SHOTS, { recursive: true });
+  });
+  afterAll(() => browser?.close());
+
+  it('ranks the demo build, draws the chart and opens a cam’s reasons from the keyboard', async () => {
+    const [name, value] = (await signIn('counter')).split('=');
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    await context.addCookies([{ name, value, url: appUrl }]);
+    const page = await context.newPage();
+    await page.goto(`${appUrl}/advisor`);
+    await page.getByRole('heading', { name: 'Cam shortlist' }).waitFor();
+    const rows = page.locator('table tbody tr');
+    await rows.first().waitFor();
+    expect(await rows.count()).toBeGreaterThanOrEqual(10);
+    expect(await page.locator('canvas').count()).toBe(1);
+    await expect(page.getByText('Predictions are indicative: a model').isVisible()).resolves.toBe(true);
+
+    const firstCam = page.locator('table tbody tr').first().getByRole('button');
+    await firstCam.focus();
+    await page.keyboard.press('Enter');
+    await expect(firstCam.getAttribute('aria-expanded')).resolves.toBe('true');
+    await page.getByText('Why it ranks here').waitFor();
+    await page.getByText('How these numbers were reached').click();
+    await expect(page.getByText('definition of horsepower').isVisible()).resolves.toBe(true);
+    await page.screenshot({ path: path.join(SHOTS, 'shortlist-desktop.png'), fullPage: true });
+    await context.close();
+  });
+
+  it('sends a signed-out visitor to sign in and back', async () => {
+    const page = await browser.newPage();
+    await page.goto(`${appUrl}/advisor`);
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    expect(new URL(page.url()).searchParams.get('next')).toBe('/advisor');
+    await page.close();
+  });
+});
