@@ -26,21 +26,22 @@ export class DynoRun extends Model<InferAttributes<DynoRun>, InferCreationAttrib
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const optional = { type: DataTypes.DOUBLE, allowNull: true };
-    const optionalRpm = { type: DataTypes.INTEGER.UNSIGNED, allowNull: true };
+    // Fresh objects per attribute: Sequelize writes the column name into each definition it is given.
+    const optional = () => ({ type: DataTypes.DOUBLE, allowNull: true });
+    const optionalRpm = () => ({ type: DataTypes.INTEGER.UNSIGNED, allowNull: true });
     DynoRun.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         phase: { type: DataTypes.ENUM('before', 'after'), allowNull: false },
         runAt: { type: DataTypes.DATE, allowNull: false },
         correctionStandard: { type: DataTypes.ENUM(...CORRECTION_STANDARDS), allowNull: false, defaultValue: 'sae-j1349' },
-        airTempC: optional,
-        baroKpa: optional,
-        humidityPct: optional,
-        peakHp: optional,
-        peakHpRpm: optionalRpm,
-        peakTorqueLbFt: optional,
-        peakTorqueRpm: optionalRpm,
+        airTempC: optional(),
+        baroKpa: optional(),
+        humidityPct: optional(),
+        peakHp: optional(),
+        peakHpRpm: optionalRpm(),
+        peakTorqueLbFt: optional(),
+        peakTorqueRpm: optionalRpm(),
         curve: { type: DataTypes.JSON, allowNull: true },
         notes: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,

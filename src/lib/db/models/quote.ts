@@ -27,18 +27,19 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const cents = { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 };
+    // Fresh objects per attribute: Sequelize writes the column name into each definition it is given.
+    const cents = () => ({ type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
     Quote.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         number: { type: DataTypes.STRING(20), allowNull: false, unique: true },
         status: { type: DataTypes.ENUM(...QUOTE_STATUSES), allowNull: false, defaultValue: 'draft' },
         publicTokenHash: { type: DataTypes.CHAR(64), allowNull: true, unique: true },
-        subtotalCents: cents,
+        subtotalCents: cents(),
         taxRateBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
-        taxCents: cents,
-        totalCents: cents,
-        depositCents: cents,
+        taxCents: cents(),
+        totalCents: cents(),
+        depositCents: cents(),
         validUntil: { type: DataTypes.DATEONLY, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
         acceptedAt: { type: DataTypes.DATE, allowNull: true },
