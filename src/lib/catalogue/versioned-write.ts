@@ -1,4 +1,4 @@
-import { ForeignKeyConstraintError, OptimisticLockError, UniqueConstraintError, type Transaction } from 'sequelize';
+import { ForeignKeyConstraintError, OptimisticLockError, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { FieldError } from '@/lib/http/responses';
 import { db } from '@/lib/db/models';
 
@@ -61,4 +61,18 @@ export function changedFields<T extends Record<string, unknown>>(before: T, afte
 /** Escapes LIKE wildcards so a search for "50%" finds "50%", not everything. */
 export function likeTerm(q: string): string {
   return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+/**
+ * How many rows of `table` point at `id` through `column`. Table and column are fixed names from the
+ * caller's code (never user input); some of these foreign keys have no association on their model.
+ */
+export async function countReferences(table: string, column: string, id: number, transaction: Transaction): Promise<number> {
+  if (!/^[a-z_]+$/.test(table) || !/^[a-z_]+$/.test(column)) throw new Error('countReferences takes fixed table and column names');
+  const rows = await db().query<{ n: number | string }>(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE \`${column}\` = ?`, {
+    replacements: [id],
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  return Number(rows[0]?.n ?? 0);
 }

@@ -23,7 +23,7 @@ export function skuSchema(label = 'SKU', maxLength = L.skuMaxLength) {
     .trim()
     .min(1, { error: `${label} must not be empty` })
     .max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
-    .regex(/^[A-Za-z0-9][A-Za-z0-9._/-]*$/, { error: `${label} may hold only letters, digits and . _ - / (no spaces)` });
+    .refine((v) => v === '' || /^[A-Za-z0-9][A-Za-z0-9._/-]*$/.test(v), { error: `${label} may hold only letters, digits and . _ - / (no spaces)` });
 }
 
 export function flag(label: string, fallback: boolean) {

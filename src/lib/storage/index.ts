@@ -18,7 +18,7 @@ export function assertSafeKey(key: string): void {
 }
 
 export function uploadsRoot(): string {
-  return path.resolve(process.env.UPLOADS_DIR || path.join(process.cwd(), 'var/uploads'));
+  return path.resolve(/*turbopackIgnore: true*/ process.env.UPLOADS_DIR || path.join(process.cwd(), 'var', 'uploads'));
 }
 
 export class DiskBlobStore implements BlobStore {

@@ -1,9 +1,9 @@
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { changedFields, conflict, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { changedFields, conflict, countReferences, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { CATALOGUE_CAM_FIELDS, type CamListQuery, type CatalogueCam } from '@/lib/schemas/catalogue-cam';
-import { Build, Cam, db, DynoRun, Interview, Quote, QuoteLine, Supplier } from '../models';
+import { Cam, db, Supplier } from '../models';
 
 // The shop's cams: list, read, create, change, archive, import and export. Route handlers and pages
 // call these; nothing else builds queries on the cams table.
@@ -212,11 +212,11 @@ export async function updateCam(
 /** Everything that points at a cam and would lose its meaning if the cam vanished. */
 async function camReferenceCount(id: number, transaction: Transaction): Promise<number> {
   const counts = await Promise.all([
-    Quote.count({ where: { camId: id }, transaction }),
-    QuoteLine.count({ where: { camId: id }, transaction }),
-    Build.count({ where: { baselineCamId: id }, transaction }),
-    Interview.count({ where: { chosenCamId: id }, transaction }),
-    DynoRun.count({ where: { camId: id }, transaction }),
+    countReferences('quotes', 'cam_id', id, transaction),
+    countReferences('quote_lines', 'cam_id', id, transaction),
+    countReferences('builds', 'baseline_cam_id', id, transaction),
+    countReferences('interviews', 'chosen_cam_id', id, transaction),
+    countReferences('dyno_runs', 'cam_id', id, transaction),
   ]);
   return counts.reduce((a, b) => a + b, 0);
 }

@@ -1,9 +1,9 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, countReferences, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { LABOR_FIELDS, type LaborListQuery, type LaborValues } from '@/lib/schemas/labor';
-import { db, LaborOperation, NeedRuleItem, QuoteLine } from '../models';
+import { db, LaborOperation } from '../models';
 
 export type LaborRecord = {
   id: number;
@@ -110,10 +110,10 @@ export async function removeLabor(id: number, user: SessionUser): Promise<WriteO
     const op = await LaborOperation.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!op) throw notFound();
     const before = toLaborRecord(op);
-    if ((await NeedRuleItem.count({ where: { laborOperationId: id }, transaction: t })) > 0) {
+    if ((await countReferences('need_rule_items', 'labor_operation_id', id, t)) > 0) {
       throw refused(`${op.code} is used by a need rule; remove it from the rule first.`);
     }
-    if ((await QuoteLine.count({ where: { laborOperationId: id }, transaction: t })) > 0) {
+    if ((await countReferences('quote_lines', 'labor_operation_id', id, t)) > 0) {
       op.set({ active: false });
       await op.save({ transaction: t });
       const after = (await getLabor(id, t))!;

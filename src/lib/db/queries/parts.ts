@@ -1,9 +1,9 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, invalid, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, countReferences, invalid, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { PART_FIELDS, type PartListQuery, type PartValues } from '@/lib/schemas/part';
-import { db, NeedRuleItem, Part, QuoteLine, Supplier } from '../models';
+import { db, Part, Supplier } from '../models';
 
 export type PartRecord = {
   id: number;
@@ -147,10 +147,10 @@ export async function removePart(id: number, user: SessionUser): Promise<WriteOu
     const part = await Part.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
     if (!part) throw notFound();
     const before = toPartRecord(part);
-    if ((await NeedRuleItem.count({ where: { partId: id }, transaction: t })) > 0) {
+    if ((await countReferences('need_rule_items', 'part_id', id, t)) > 0) {
       throw refused(`${part.sku} is used by a need rule; remove it from the rule first.`);
     }
-    if ((await QuoteLine.count({ where: { partId: id }, transaction: t })) > 0) {
+    if ((await countReferences('quote_lines', 'part_id', id, t)) > 0) {
       part.set({ active: false });
       await part.save({ transaction: t });
       const after = (await getPart(id, t))!;

@@ -1,0 +1,108 @@
+import request from 'supertest';
+import { AuditEntry, NeedRule, ShopSettings } from '@/lib/db/models';
+import { signIn } from '../support/auth';
+import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { readRuntime } from '../support/runtime';
+
+const app = () => request(readRuntime().appUrl);
+let manager: string;
+let counter: string;
+let tech: string;
+const madeRules: number[] = [];
+
+beforeAll(async () => {
+  connectTestDatabase();
+  [manager, counter, tech] = await Promise.all([signIn('manager'), signIn('counter'), signIn('tech')]);
+});
+
+afterAll(async () => {
+  for (const id of madeRules) await NeedRule.destroy({ where: { id } });
+  await disconnectTestDatabase();
+});
+
+describe('shop settings', () => {
+  it('lets a manager read and change the labour rate, tax rate and deposit policy, with a 409 on a stale version', async () => {
+    const current = await app().get('/api/settings').set('Cookie', manager);
+    expect(current.status).toBe(200);
+    expect(current.body).toMatchObject({ laborRateCents: expect.any(Number), taxRateBp: expect.any(Number), depositPercentBp: expect.any(Number) });
+    const original = current.body;
+    try {
+      const changed = await app().patch('/api/settings').set('Cookie', manager).send({ version: original.version, laborRateCents: original.laborRateCents + 500, depositPercentBp: 2500 });
+      expect(changed.status).toBe(200);
+      expect(changed.body).toMatchObject({ laborRateCents: original.laborRateCents + 500, depositPercentBp: 2500, version: original.version + 1 });
+      const stale = await app().patch('/api/settings').set('Cookie', manager).send({ version: original.version, taxRateBp: 0 });
+      expect(stale.status).toBe(409);
+      expect(stale.body.current.laborRateCents).toBe(original.laborRateCents + 500);
+      expect(await AuditEntry.count({ where: { action: 'settings.updated' } })).toBeGreaterThan(0);
+    } finally {
+      const settings = await ShopSettings.findOne({ order: [['id', 'ASC']] });
+      await settings!.update({ laborRateCents: original.laborRateCents, depositPercentBp: original.depositPercentBp, taxRateBp: original.taxRateBp });
+    }
+  });
+
+  it('names wrong fields, including a maximum deposit below the minimum', async () => {
+    const { body } = await app().get('/api/settings').set('Cookie', manager);
+    const response = await app().patch('/api/settings').set('Cookie', manager).send({ version: body.version, taxRateBp: 8.25, depositPolicyText: '', laborRateCents: -1 });
+    expect(response.status).toBe(422);
+    expect(response.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['depositPolicyText', 'laborRateCents', 'taxRateBp']);
+    const range = await app().patch('/api/settings').set('Cookie', manager).send({ version: body.version, depositMinCents: 50000, depositMaxCents: 10000 });
+    expect(range.status).toBe(422);
+    expect(range.body.errors).toEqual([{ field: 'depositMaxCents', message: 'deposit maximum must not be below the deposit minimum' }]);
+    expect((await ShopSettings.findOne({ order: [['id', 'ASC']] }))?.version).toBe(body.version);
+  });
+
+  it('is for managers only', async () => {
+    expect((await app().get('/api/settings').set('Cookie', counter)).status).toBe(403);
+    expect((await app().patch('/api/settings').set('Cookie', tech).send({ version: 1, taxRateBp: 0 })).status).toBe(403);
+  });
+});
+
+describe('need rules', () => {
+  it('lists the rules with their parts and labour for any staff member', async () => {
+    const response = await app().get('/api/rules').set('Cookie', tech);
+    expect(response.status).toBe(200);
+    const lift = response.body.items.find((r: { kind: string }) => r.kind === 'lift-over');
+    expect(lift).toMatchObject({ threshold: 0.57, items: [expect.objectContaining({ part: expect.objectContaining({ sku: 'SPR-600' }), laborOperation: expect.objectContaining({ code: 'SPR-INST' }) })] });
+  });
+
+  it('creates, changes (items and version) and deletes a rule, auditing each step', async () => {
+    const created = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', threshold: 0.66, label: 'Test: big lift wants the dual springs', items: [{ partId: 3, laborOperationId: 4 }] });
+    expect(created.status).toBe(201);
+    madeRules.push(created.body.id);
+    expect(created.body).toMatchObject({ kind: 'lift-over', threshold: 0.66, version: 1, items: [{ partId: 3, laborOperationId: 4, quantity: 1 }] });
+
+    const changed = await app().patch(`/api/rules/${created.body.id}`).set('Cookie', manager).send({ version: 1, items: [{ partId: 3, laborOperationId: null, quantity: 1 }, { partId: 6, quantity: 1 }] });
+    expect(changed.status).toBe(200);
+    expect(changed.body.version).toBe(2);
+    expect(changed.body.items.map((i: { partId: number }) => i.partId)).toEqual([3, 6]);
+
+    const stale = await app().patch(`/api/rules/${created.body.id}`).set('Cookie', manager).send({ version: 1, label: 'late' });
+    expect(stale.status).toBe(409);
+    expect(stale.body.current.items).toHaveLength(2);
+
+    const removed = await app().delete(`/api/rules/${created.body.id}`).set('Cookie', manager);
+    expect(removed.status).toBe(200);
+    expect(await NeedRule.findByPk(created.body.id)).toBeNull();
+    const actions = (await AuditEntry.findAll({ where: { entityType: 'need_rule', entityId: String(created.body.id) } })).map((a) => a.action);
+    expect(actions).toEqual(['rule.created', 'rule.updated', 'rule.deleted']);
+  });
+
+  it('checks the threshold against the kind, and the items against the catalogue', async () => {
+    const noThreshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', label: 'x', items: [{ partId: 1 }] });
+    expect(noThreshold.body.errors).toEqual([expect.objectContaining({ field: 'threshold' })]);
+    const extraThreshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'always', threshold: 5, label: 'x', items: [{ partId: 1 }] });
+    expect(extraThreshold.body.errors).toEqual([expect.objectContaining({ field: 'threshold' })]);
+    const badItems = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'always', label: 'x', items: [{ partId: 99999 }, {}] });
+    expect(badItems.status).toBe(422);
+    expect(badItems.body.errors.map((e: { field: string }) => e.field)).toEqual(['items.1.partId']);
+    const unknownPart = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'always', label: 'x', items: [{ partId: 99999 }] });
+    expect(unknownPart.body.errors).toEqual([{ field: 'items.0.partId', message: 'there is no part with id 99999' }]);
+  });
+
+  it('refuses counter and tech changes', async () => {
+    expect((await app().post('/api/rules').set('Cookie', counter).send({ kind: 'always', label: 'x', items: [{ partId: 1 }] })).status).toBe(403);
+    expect((await app().patch('/api/rules/1').set('Cookie', tech).send({ version: 1, active: false })).status).toBe(403);
+    expect((await app().delete('/api/rules/1').set('Cookie', counter)).status).toBe(403);
+    expect((await NeedRule.findByPk(1))?.active).toBe(true);
+  });
+});
