@@ -7,7 +7,7 @@ import { PATH_HEADER, signInUrl } from '@/lib/auth/guard-paths';
 // component can send people back after signing in), and send visitors without a readable session
 // cookie away from staff pages early. The real check (session row, active user, role) is
 // requireRoleForPage / requireRole; this is the fast first gate only.
-const STAFF_PREFIXES = ['/dashboard', '/account', '/staff', '/catalogue', '/interviews', '/quotes', '/leads', '/jobs', '/dyno', '/reports', '/settings'];
+const STAFF_PREFIXES = ['/dashboard', '/account', '/staff', '/advisor', '/catalogue', '/interviews', '/quotes', '/leads', '/jobs', '/dyno', '/reports', '/settings'];
 
 function isStaffPath(pathname: string): boolean {
   return STAFF_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(`${prefix}/`));

@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from 'next';
 import Link from 'next/link';
+import { StaffHeaderNav } from '@/components/auth/staff-header-nav';
 import { getShopNameOrNull } from '@/lib/db/queries/settings';
 import { bodyFont, specFont } from './fonts';
 import './globals.css';
@@ -27,10 +28,8 @@ export default async function RootLayout({ children }: { children: React.ReactNo
               <span aria-hidden className="inline-block h-3 w-3 rotate-45 rounded-sm bg-ember-500" />
               Lobewise
             </Link>
-            <nav aria-label="Main" className="flex items-center gap-4 text-sm">
-              <Link href="/sign-in" className="rounded px-3 py-1.5 ring-1 ring-steel-500 hover:bg-steel-900">
-                Staff sign-in
-              </Link>
+            <nav aria-label="Main" className="flex flex-wrap items-center justify-end gap-4 text-sm">
+              <StaffHeaderNav />
             </nav>
           </div>
         </header>

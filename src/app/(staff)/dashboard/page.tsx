@@ -1,0 +1,35 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { Notice } from '@/components/auth/form-parts';
+import { requireRoleForPage } from '@/lib/auth/guard';
+import { ROLE_NAMES, linksFor } from '@/lib/auth/staff-nav';
+
+export const metadata: Metadata = { title: 'Staff home' };
+
+export default async function DashboardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const user = await requireRoleForPage();
+  const params = await searchParams;
+  const denied = typeof params.denied === 'string' ? params.denied : null;
+  const links = linksFor(user.role).filter((link) => link.href !== '/dashboard');
+  return (
+    <div className="flex flex-col gap-6">
+      <header>
+        <h1 className="text-2xl font-semibold">Hello, {user.name}</h1>
+        <p className="text-sm text-ink-soft">Signed in as <span className="font-semibold">{ROLE_NAMES[user.role]}</span> ({user.email}).</p>
+      </header>
+      {denied ? <Notice tone="caution">The page <span className="spec">{denied}</span> is not open to the {ROLE_NAMES[user.role].toLowerCase()} role. Ask a manager if you need it.</Notice> : null}
+      <nav aria-label="Your pages">
+        <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+          {links.map((link) => (
+            <li key={link.href}>
+              <Link href={link.href} className="block h-full rounded-lg border border-steel-300 bg-paper-raised p-4 hover:border-gauge-500">
+                <span className="font-semibold">{link.label}</span>
+                <span className="mt-1 block text-sm text-ink-soft">{link.description}</span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      </nav>
+    </div>
+  );
+}

@@ -1,0 +1,49 @@
+'use client';
+
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import { z } from 'zod';
+import { PASSWORD_MAX, PASSWORD_MIN, changePasswordSchema } from '@/lib/schemas/auth';
+import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { Notice, SubmitButton, TextField } from './form-parts';
+
+type Values = { currentPassword: string; newPassword: string; repeat: string };
+
+const formSchema = z
+  .object({ currentPassword: z.string(), newPassword: z.string(), repeat: z.string() })
+  .superRefine((v, ctx) => {
+    const base = changePasswordSchema.safeParse({ currentPassword: v.currentPassword, newPassword: v.newPassword });
+    if (!base.success) for (const issue of base.error.issues) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
+    if (v.repeat !== v.newPassword) ctx.addIssue({ code: 'custom', path: ['repeat'], message: 'does not match the new password' });
+  });
+
+export function ChangePasswordForm() {
+  const [result, setResult] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
+  return (
+    <Formik<Values>
+      initialValues={{ currentPassword: '', newPassword: '', repeat: '' }}
+      validate={zodValidate<Values>(formSchema)}
+      onSubmit={async (values, helpers) => {
+        const answer = await sendJson('/api/account/password', 'POST', { currentPassword: values.currentPassword, newPassword: values.newPassword });
+        if (answer.status === 200) {
+          const others = Number(answer.body.otherSessionsEnded ?? 0);
+          setResult({ tone: 'ok', text: `Your password is changed.${others ? ` ${others} other session${others === 1 ? '' : 's'} signed out.` : ''}` });
+          helpers.resetForm();
+          return;
+        }
+        if (answer.status === 422) helpers.setErrors(fieldErrors<Values>(answer));
+        setResult({ tone: 'fault', text: answer.body.message ?? 'That did not work. Try again.' });
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form className="flex max-w-md flex-col gap-4" noValidate>
+          {result ? <Notice tone={result.tone}>{result.text}</Notice> : null}
+          <TextField name="currentPassword" label="Current password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
+          <TextField name="newPassword" label="New password" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more.`} />
+          <TextField name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
+          <div><SubmitButton busy={isSubmitting}>Change password</SubmitButton></div>
+        </Form>
+      )}
+    </Formik>
+  );
+}

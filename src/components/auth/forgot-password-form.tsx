@@ -1,0 +1,33 @@
+'use client';
+
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import { EMAIL_MAX, forgotPasswordSchema } from '@/lib/schemas/auth';
+import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { Notice, SubmitButton, TextField } from './form-parts';
+
+type Values = { email: string };
+
+export function ForgotPasswordForm() {
+  const [answer, setAnswer] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
+  return (
+    <Formik<Values>
+      initialValues={{ email: '' }}
+      validate={zodValidate<Values>(forgotPasswordSchema)}
+      onSubmit={async (values, helpers) => {
+        const result = await sendJson('/api/auth/forgot-password', 'POST', values);
+        if (result.status === 202) return setAnswer({ tone: 'ok', text: result.body.message ?? 'Check your inbox.' });
+        if (result.status === 422) helpers.setErrors(fieldErrors<Values>(result));
+        setAnswer({ tone: 'fault', text: result.body.message ?? 'That did not work. Try again.' });
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form className="flex flex-col gap-4" noValidate>
+          {answer ? <Notice tone={answer.tone}>{answer.text}</Notice> : null}
+          <TextField name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
+          <div><SubmitButton busy={isSubmitting}>Send the link</SubmitButton></div>
+        </Form>
+      )}
+    </Formik>
+  );
+}

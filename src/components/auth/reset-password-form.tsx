@@ -1,0 +1,48 @@
+'use client';
+
+import { Form, Formik } from 'formik';
+import Link from 'next/link';
+import { useState } from 'react';
+import { PASSWORD_MAX, PASSWORD_MIN, newPasswordField } from '@/lib/schemas/auth';
+import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { z } from 'zod';
+import { Notice, SubmitButton, TextField } from './form-parts';
+
+type Values = { password: string; repeat: string };
+
+const formSchema = z
+  .object({ password: newPasswordField, repeat: z.string() })
+  .refine((v) => v.password === v.repeat, { path: ['repeat'], message: 'does not match the new password' });
+
+export function ResetPasswordForm({ token }: { token: string }) {
+  const [result, setResult] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
+  if (result?.tone === 'ok') {
+    return (
+      <div className="flex flex-col gap-4">
+        <Notice tone="ok">{result.text}</Notice>
+        <Link href="/sign-in" className="self-start rounded bg-ember-500 px-4 py-2 font-semibold text-paper-raised hover:bg-ember-600">Go to sign-in</Link>
+      </div>
+    );
+  }
+  return (
+    <Formik<Values>
+      initialValues={{ password: '', repeat: '' }}
+      validate={zodValidate<Values>(formSchema)}
+      onSubmit={async (values, helpers) => {
+        const answer = await sendJson('/api/auth/reset-password', 'POST', { token, password: values.password });
+        if (answer.status === 200) return setResult({ tone: 'ok', text: answer.body.message ?? 'Your password is set.' });
+        if (answer.status === 422) helpers.setErrors(fieldErrors<Values>(answer));
+        setResult({ tone: 'fault', text: answer.body.message ?? 'That did not work. Try again.' });
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form className="flex flex-col gap-4" noValidate>
+          {result ? <Notice tone={result.tone}>{result.text}</Notice> : null}
+          <TextField name="password" label="New password" type="password" autoComplete="new-password" autoFocus maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more; a short sentence works well.`} />
+          <TextField name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
+          <div><SubmitButton busy={isSubmitting}>Save the password</SubmitButton></div>
+        </Form>
+      )}
+    </Formik>
+  );
+}

@@ -1,0 +1,40 @@
+import Link from 'next/link';
+import { currentUser, type SessionUser } from '@/lib/auth/guard';
+import { ROLE_NAMES, linksFor } from '@/lib/auth/staff-nav';
+import { SignOutButton } from './sign-out-button';
+
+/** The signed-in person, or null (also while the database is away: the shell must still render). */
+async function headerUser(): Promise<SessionUser | null> {
+  try {
+    return await currentUser();
+  } catch {
+    return null;
+  }
+}
+
+/** The header's right-hand side: staff links for the person's role, who they are, sign-out. */
+export async function StaffHeaderNav() {
+  const user = await headerUser();
+  if (!user) {
+    return (
+      <Link href="/sign-in" className="rounded px-3 py-1.5 ring-1 ring-steel-500 hover:bg-steel-900">
+        Staff sign-in
+      </Link>
+    );
+  }
+  return (
+    <>
+      <ul className="flex flex-wrap items-center gap-3">
+        {linksFor(user.role).map((link) => (
+          <li key={link.href}>
+            <Link href={link.href} className="rounded px-2 py-1 hover:bg-steel-900">{link.label}</Link>
+          </li>
+        ))}
+      </ul>
+      <span className="text-steel-300">
+        {user.name} · <span className="font-semibold text-paper">{ROLE_NAMES[user.role]}</span>
+      </span>
+      <SignOutButton />
+    </>
+  );
+}

@@ -1,0 +1,154 @@
+'use client';
+
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import useSWR from 'swr';
+import { EMAIL_MAX } from '@/lib/schemas/auth';
+import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES, inviteUserSchema } from '@/lib/schemas/user';
+import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { Notice, SubmitButton, TextField } from './form-parts';
+
+type Role = (typeof STAFF_ROLE_VALUES)[number];
+type StaffRow = { id: number; email: string; name: string; role: Role; active: boolean; version: number; hasPassword: boolean; lastSignInAt: string | null };
+type Message = { tone: 'ok' | 'fault' | 'caution'; text: string };
+
+async function fetchStaff(url: string): Promise<StaffRow[]> {
+  const response = await fetch(url, { credentials: 'same-origin' });
+  if (!response.ok) throw new Error(response.status === 401 ? 'You are signed out. Sign in again.' : `The staff list did not load (${response.status}).`);
+  return ((await response.json()) as { users: StaffRow[] }).users;
+}
+
+function stateOf(row: StaffRow): { word: string; style: string } {
+  if (!row.active) return { word: 'Switched off', style: 'bg-steel-100 text-ink-muted' };
+  if (!row.hasPassword) return { word: 'Invited', style: 'bg-caution-100 text-caution-700' };
+  return { word: 'Active', style: 'bg-ok-100 text-ok-700' };
+}
+
+const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+
+export function StaffManager({ selfId }: { selfId: number }) {
+  const { data, error, isLoading, mutate } = useSWR('/api/users', fetchStaff);
+  const [message, setMessage] = useState<Message | null>(null);
+  const [busyId, setBusyId] = useState<number | null>(null);
+
+  async function change(row: StaffRow, patch: { role?: Role; active?: boolean }, done: string) {
+    setBusyId(row.id);
+    setMessage(null);
+    const answer = await sendJson(`/api/users/${row.id}`, 'PATCH', { version: row.version, ...patch });
+    setBusyId(null);
+    if (answer.status === 200) setMessage({ tone: 'ok', text: done });
+    else if (answer.status === 409) setMessage({ tone: 'caution', text: `${answer.body.message ?? 'Someone else changed this account.'} The table now shows the current details.` });
+    else setMessage({ tone: 'fault', text: answer.body.errors?.map((e) => e.message).join('; ') || answer.body.message || `That did not work (${answer.status}).` });
+    await mutate();
+  }
+
+  return (
+    <div className="flex flex-col gap-8">
+      <section aria-labelledby="staff-list-title">
+        <h2 id="staff-list-title" className="sr-only">Staff accounts</h2>
+        <div aria-live="polite" className="mb-3 min-h-[2.5rem]">{message ? <Notice tone={message.tone}>{message.text}</Notice> : null}</div>
+        {error ? <Notice tone="fault">{(error as Error).message}</Notice> : null}
+        {isLoading ? <p className="text-sm text-ink-muted">Loading the staff list…</p> : null}
+        {data ? (
+          <table className="w-full border-collapse text-sm">
+            <thead>
+              <tr className="border-b border-steel-300 text-left text-ink-muted">
+                <th scope="col" className="py-2 pr-3 font-semibold">Name</th>
+                <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
+                <th scope="col" className="py-2 pr-3 font-semibold">Role</th>
+                <th scope="col" className="py-2 pr-3 font-semibold">State</th>
+                <th scope="col" className="py-2 pr-3 font-semibold">Last sign-in</th>
+                <th scope="col" className="py-2 font-semibold"><span className="sr-only">Actions</span></th>
+              </tr>
+            </thead>
+            <tbody>
+              {data.map((row) => {
+                const state = stateOf(row);
+                const self = row.id === selfId;
+                return (
+                  <tr key={row.id} className="border-b border-steel-100 align-middle">
+                    <td className="py-1.5 pr-3">{row.name}{self ? <span className="ml-1 text-ink-muted">(you)</span> : null}</td>
+                    <td className="spec py-1.5 pr-3">{row.email}</td>
+                    <td className="py-1.5 pr-3">
+                      <label className="sr-only" htmlFor={`role-${row.id}`}>Role of {row.name}</label>
+                      <select
+                        id={`role-${row.id}`}
+                        value={row.role}
+                        disabled={self || busyId === row.id}
+                        onChange={(event) => change(row, { role: event.target.value as Role }, `${row.name} is now ${ROLE_LABELS[event.target.value as Role].toLowerCase()}.`)}
+                        className="rounded border border-steel-300 bg-paper-raised px-2 py-1"
+                      >
+                        {STAFF_ROLE_VALUES.map((role) => <option key={role} value={role}>{ROLE_LABELS[role]}</option>)}
+                      </select>
+                    </td>
+                    <td className="py-1.5 pr-3"><span className={`rounded px-2 py-0.5 text-xs font-semibold ${state.style}`}>{state.word}</span></td>
+                    <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateFormat.format(new Date(row.lastSignInAt)) : 'never'}</td>
+                    <td className="py-1.5 text-right">
+                      {self ? null : (
+                        <button
+                          type="button"
+                          disabled={busyId === row.id}
+                          onClick={() => {
+                            if (row.active && !window.confirm(`Switch off ${row.name}'s account? They are signed out at once.`)) return;
+                            void change(row, { active: !row.active }, row.active ? `${row.name}'s account is switched off and signed out.` : `${row.name}'s account is switched on again.`);
+                          }}
+                          className={`rounded px-3 py-1 text-xs font-semibold ring-1 ${row.active ? 'text-fault-700 ring-fault-700/50 hover:bg-fault-100' : 'text-ok-700 ring-ok-700/50 hover:bg-ok-100'}`}
+                        >
+                          {row.active ? 'Switch off' : 'Switch on'}
+                        </button>
+                      )}
+                    </td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="invite-title" className="max-w-xl rounded-lg border border-steel-300 bg-paper-raised p-6">
+        <h2 id="invite-title" className="text-lg font-semibold">Invite someone</h2>
+        <p className="mb-4 text-sm text-ink-soft">They get an e-mail with a link to choose their password (it works once, for 72 hours).</p>
+        <InviteForm onInvited={async (text) => { setMessage({ tone: 'ok', text }); await mutate(); }} />
+      </section>
+    </div>
+  );
+}
+
+type InviteValues = { email: string; name: string; role: Role };
+
+function InviteForm({ onInvited }: { onInvited: (text: string) => Promise<void> }) {
+  const [problem, setProblem] = useState<string | null>(null);
+  return (
+    <Formik<InviteValues>
+      initialValues={{ email: '', name: '', role: 'counter' }}
+      validate={zodValidate<InviteValues>(inviteUserSchema)}
+      onSubmit={async (values, helpers) => {
+        setProblem(null);
+        const answer = await sendJson('/api/users', 'POST', values);
+        if (answer.status === 201) {
+          helpers.resetForm();
+          await onInvited(`Invitation sent to ${values.email}.`);
+          return;
+        }
+        if (answer.status === 422) helpers.setErrors(fieldErrors<InviteValues>(answer));
+        setProblem(answer.body.message ?? `That did not work (${answer.status}).`);
+      }}
+    >
+      {({ isSubmitting, values, setFieldValue }) => (
+        <Form className="flex flex-col gap-4" noValidate>
+          {problem ? <Notice tone="fault">{problem}</Notice> : null}
+          <TextField name="name" label="Name" autoComplete="off" maxLength={NAME_MAX} />
+          <TextField name="email" label="E-mail" type="email" autoComplete="off" maxLength={EMAIL_MAX} />
+          <div className="flex flex-col gap-1">
+            <label htmlFor="invite-role" className="text-sm font-semibold">Role</label>
+            <select id="invite-role" value={values.role} onChange={(e) => setFieldValue('role', e.target.value)} className="rounded border border-steel-300 bg-paper-raised px-3 py-2">
+              {STAFF_ROLE_VALUES.map((role) => <option key={role} value={role}>{ROLE_LABELS[role]}</option>)}
+            </select>
+          </div>
+          <div><SubmitButton busy={isSubmitting}>Invite</SubmitButton></div>
+        </Form>
+      )}
+    </Formik>
+  );
+}
