@@ -7,7 +7,6 @@ export type StaffLink = { href: string; label: string; description: string; role
 export const STAFF_LINKS: readonly StaffLink[] = [
   { href: '/dashboard', label: 'Home', description: 'Where the working day starts.', roles: ['manager', 'counter', 'tech'] },
   { href: '/advisor', label: 'Cam shortlist', description: 'Rank the shop’s cams for a customer’s build and see why.', roles: ['manager', 'counter', 'tech'] },
-  { href: '/advisor', label: 'Advisor', description: 'Interview a customer and rank the cams in stock for their engine.', roles: ['manager', 'counter'] },
   { href: '/catalogue', label: 'Catalogue', description: 'Cams, parts, labour operations and the rules that tie them together.', roles: ['manager', 'counter'] },
   { href: '/staff', label: 'Staff', description: 'Invite people, change roles, switch accounts off.', roles: ['manager'] },
   { href: '/account', label: 'Account', description: 'Your own password.', roles: ['manager', 'counter', 'tech'] },
