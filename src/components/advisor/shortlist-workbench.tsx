@@ -100,7 +100,7 @@ export function ShortlistWorkbench({ builds, notice }: { builds: BuildOption[]; 
                           <button type="button" aria-expanded={open} className="text-left font-semibold underline-offset-2 hover:underline" onClick={() => setOpenCamId(open ? null : id)}>
                             {r.camName}
                           </button>
-                          {r.subscores.emissions < 100 ? <span className="ml-2 rounded bg-caution-100 px-1.5 text-xs text-caution-700">Not road-legal here</span> : null}
+                          {r.subscores.emissions < 100 ? <span className="ml-2 rounded bg-caution-100 px-1.5 text-xs text-caution-700">Emissions: not certified</span> : null}
                         </td>
                         <td className="px-3 py-2 text-right">{r.score.toFixed(0)}/100</td>
                         <td className="px-3 py-2 text-right">{r.crossoverRpm === null ? 'never' : rpmText(r.crossoverRpm)}</td>
