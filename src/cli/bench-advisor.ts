@@ -1,5 +1,7 @@
 // npm run bench:advisor — ranks a generated 1,000-cam catalogue for one build, repeatedly, with full
 // curves, and prints the median time per ranking and per cam. A benchmark, not a test.
+// It runs as one esbuild bundle, as the app runs it inside the Next build: under tsx every cross-module
+// call goes through an export getter, which is a development cost, not the advisor's.
 import { rankCams } from '../lib/advisor';
 import { BuildProfileSchema } from '../lib/schemas/build-profile';
 import { CamCatalogueSchema, type CamCard } from '../lib/schemas/cam-card';
