@@ -1,0 +1,17 @@
+import type { Metadata } from 'next';
+import { CamForm } from '@/components/catalogue/cam-form';
+import { PageHeader } from '@/components/catalogue/ui';
+import { requireRoleForPage } from '@/lib/auth/guard';
+import { listSuppliers } from '@/lib/db/queries/cams';
+
+export const metadata: Metadata = { title: 'Add a cam' };
+
+export default async function NewCamPage() {
+  await requireRoleForPage('manager');
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader title="Add a cam" lead="Copy the figures from the supplier's cam card; units are shown beside each field." back={{ href: '/catalogue/cams', label: 'Cams' }} />
+      <CamForm cam={null} suppliers={await listSuppliers()} />
+    </div>
+  );
+}

@@ -1,0 +1,16 @@
+import type { Metadata } from 'next';
+import { LaborForm } from '@/components/catalogue/record-forms';
+import { PageHeader } from '@/components/catalogue/ui';
+import { requireRoleForPage } from '@/lib/auth/guard';
+
+export const metadata: Metadata = { title: 'Add a labour operation' };
+
+export default async function NewLaborPage() {
+  await requireRoleForPage('manager');
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader title="Add a labour operation" back={{ href: '/catalogue/labor', label: 'Labour' }} />
+      <LaborForm labor={null} />
+    </div>
+  );
+}

@@ -1,0 +1,17 @@
+import type { Metadata } from 'next';
+import { PartForm } from '@/components/catalogue/record-forms';
+import { PageHeader } from '@/components/catalogue/ui';
+import { requireRoleForPage } from '@/lib/auth/guard';
+import { listSuppliers } from '@/lib/db/queries/cams';
+
+export const metadata: Metadata = { title: 'Add a part' };
+
+export default async function NewPartPage() {
+  await requireRoleForPage('manager');
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader title="Add a part" back={{ href: '/catalogue/parts', label: 'Parts' }} />
+      <PartForm part={null} suppliers={await listSuppliers()} />
+    </div>
+  );
+}

@@ -1,0 +1,178 @@
+'use client';
+
+import { FieldArray, Form, Formik } from 'formik';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, NeedRuleSchema } from '@/lib/schemas/need-rule';
+import { sendJson } from './api';
+import { Banner, buttonClass } from './ui';
+
+type Item = { partId: string; laborOperationId: string; quantity: string };
+type Values = { kind: (typeof NEED_RULE_KIND_OPTIONS)[number]; threshold: string; label: string; active: boolean; items: Item[] };
+type RuleRecord = { id: number; version: number; kind: Values['kind']; threshold: number | null; label: string; active: boolean; items: { partId: number | null; laborOperationId: number | null; quantity: number }[] };
+
+const toPayload = (v: Values) => ({
+  kind: v.kind,
+  threshold: NEED_RULE_KIND_TEXT[v.kind].threshold && v.threshold.trim() !== '' ? Number(v.threshold) : null,
+  label: v.label,
+  active: v.active,
+  items: v.items.map((i) => ({ partId: i.partId ? Number(i.partId) : null, laborOperationId: i.laborOperationId ? Number(i.laborOperationId) : null, quantity: i.quantity ? Number(i.quantity) : 1 })),
+});
+
+export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; parts: { id: number; sku: string; name: string }[]; labor: { id: number; code: string; name: string }[] }) {
+  const router = useRouter();
+  const [version, setVersion] = useState(rule?.version);
+  const [problem, setProblem] = useState<string | null>(null);
+  const [conflict, setConflict] = useState<RuleRecord | null>(null);
+  const initial: Values = {
+    kind: rule?.kind ?? 'lift-over',
+    threshold: rule?.threshold === null || rule?.threshold === undefined ? '' : String(rule.threshold),
+    label: rule?.label ?? '',
+    active: rule?.active ?? true,
+    items: rule?.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) ?? [{ partId: '', laborOperationId: '', quantity: '1' }],
+  };
+  const input = 'w-full rounded border border-steel-300 bg-paper-raised px-2 py-1.5 text-sm';
+  return (
+    <Formik<Values>
+      initialValues={initial}
+      validate={(values) => {
+        const parsed = NeedRuleSchema.safeParse(toPayload(values));
+        if (parsed.success) return {};
+        const errors: Record<string, string> = {};
+        for (const issue of parsed.error.issues) errors[issue.path.join('.') || 'label'] ??= issue.message;
+        return errors;
+      }}
+      onSubmit={async (values) => {
+        setProblem(null);
+        const result = rule ? await sendJson<RuleRecord>('PATCH', `/api/rules/${rule.id}`, { ...toPayload(values), version }) : await sendJson<RuleRecord>('POST', '/api/rules', toPayload(values));
+        if (result.status === 200 || result.status === 201) {
+          router.push('/catalogue/rules?saved=1');
+          router.refresh();
+        } else if (result.status === 409) setConflict(result.body.current as RuleRecord);
+        else setProblem(result.body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ?? result.body.message ?? `The server answered ${result.status}.`);
+      }}
+    >
+      {({ values, errors, submitCount, isSubmitting, handleChange, setValues }) => {
+        const show = (key: string) => (submitCount > 0 ? (errors as Record<string, string>)[key] : undefined);
+        const threshold = NEED_RULE_KIND_TEXT[values.kind].threshold;
+        return (
+          <Form noValidate className="flex flex-col gap-4">
+            {conflict ? (
+              <Banner tone="caution" title="Someone else saved this rule while you were editing it. Nothing was overwritten.">
+                <p>
+                  Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}
+                  {conflict.threshold !== null ? ` at ${conflict.threshold}` : ''}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
+                </p>
+                <div className="mt-2 flex gap-2">
+                  <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setValues({ ...values, kind: conflict.kind, threshold: conflict.threshold === null ? '' : String(conflict.threshold), label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); setConflict(null); }}>
+                    Load their version
+                  </button>
+                  <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setConflict(null); }}>
+                    Keep mine (then save again)
+                  </button>
+                </div>
+              </Banner>
+            ) : null}
+            {problem ? <Banner tone="fault" title="Not saved">{problem}</Banner> : null}
+            <fieldset className="flex flex-col gap-2">
+              <legend className="text-sm font-semibold">When does this rule apply?</legend>
+              {NEED_RULE_KIND_OPTIONS.map((kind) => (
+                <label key={kind} className="flex items-center gap-2 text-sm">
+                  <input type="radio" name="kind" value={kind} checked={values.kind === kind} onChange={handleChange} />
+                  {NEED_RULE_KIND_TEXT[kind].title}
+                </label>
+              ))}
+            </fieldset>
+            {threshold ? (
+              <label className="flex max-w-xs flex-col gap-1 text-sm font-semibold">
+                N ({threshold.label}, {threshold.unit})
+                <input name="threshold" inputMode="decimal" className={`${input} spec`} value={values.threshold} onChange={handleChange} aria-invalid={show('threshold') ? true : undefined} />
+                {show('threshold') ? <span className="text-xs font-normal text-fault-700">Problem: {show('threshold')}</span> : null}
+              </label>
+            ) : null}
+            <label className="flex flex-col gap-1 text-sm font-semibold">
+              Label (what staff and customers read)
+              <input name="label" className={input} value={values.label} onChange={handleChange} aria-invalid={show('label') ? true : undefined} />
+              {show('label') ? <span className="text-xs font-normal text-fault-700">Problem: {show('label')}</span> : null}
+            </label>
+            <label className="flex items-center gap-2 text-sm">
+              <input type="checkbox" name="active" checked={values.active} onChange={handleChange} /> Active (the advisor and quotes use it)
+            </label>
+            <FieldArray name="items">
+              {({ push, remove }) => (
+                <fieldset className="flex flex-col gap-2">
+                  <legend className="text-sm font-semibold">Then add</legend>
+                  {values.items.map((item, index) => (
+                    <div key={index} className="grid gap-2 rounded border border-steel-300 p-2 sm:grid-cols-[2fr_2fr_6rem_auto]">
+                      <label className="flex flex-col gap-1 text-xs font-semibold">
+                        Part
+                        <select name={`items.${index}.partId`} className={input} value={item.partId} onChange={handleChange}>
+                          <option value="">(no part)</option>
+                          {parts.map((p) => (
+                            <option key={p.id} value={p.id}>{`${p.sku} — ${p.name}`}</option>
+                          ))}
+                        </select>
+                      </label>
+                      <label className="flex flex-col gap-1 text-xs font-semibold">
+                        Labour
+                        <select name={`items.${index}.laborOperationId`} className={input} value={item.laborOperationId} onChange={handleChange}>
+                          <option value="">(no labour)</option>
+                          {labor.map((l) => (
+                            <option key={l.id} value={l.id}>{`${l.code} — ${l.name}`}</option>
+                          ))}
+                        </select>
+                      </label>
+                      <label className="flex flex-col gap-1 text-xs font-semibold">
+                        Quantity
+                        <input name={`items.${index}.quantity`} inputMode="decimal" className={`${input} spec`} value={item.quantity} onChange={handleChange} />
+                      </label>
+                      <button type="button" className="self-end text-xs text-fault-700 underline" onClick={() => remove(index)} disabled={values.items.length === 1}>
+                        Remove
+                      </button>
+                      {show(`items.${index}.partId`) || show(`items.${index}.quantity`) ? (
+                        <p className="text-xs text-fault-700 sm:col-span-4">Problem: {show(`items.${index}.partId`) ?? show(`items.${index}.quantity`)}</p>
+                      ) : null}
+                    </div>
+                  ))}
+                  {show('items') ? <p className="text-xs text-fault-700">Problem: {show('items')}</p> : null}
+                  <button type="button" className={`${buttonClass.quiet} self-start`} onClick={() => push({ partId: '', laborOperationId: '', quantity: '1' })}>
+                    Add another item
+                  </button>
+                </fieldset>
+              )}
+            </FieldArray>
+            <div>
+              <button type="submit" className={buttonClass.primary} disabled={isSubmitting || Boolean(conflict)}>
+                {isSubmitting ? 'Saving…' : rule ? 'Save rule' : 'Add rule'}
+              </button>
+            </div>
+          </Form>
+        );
+      }}
+    </Formik>
+  );
+}
+
+export function DeleteButton({ url, label, after }: { url: string; label: string; after: string }) {
+  const router = useRouter();
+  const [message, setMessage] = useState<string | null>(null);
+  return (
+    <span className="inline-flex flex-col gap-1">
+      <button
+        type="button"
+        className={buttonClass.danger}
+        onClick={async () => {
+          if (!window.confirm(`${label}?`)) return;
+          const result = await sendJson<{ outcome?: string }>('DELETE', url);
+          if (result.status === 200) {
+            router.push(`${after}?${result.body.outcome ?? 'deleted'}=1`);
+            router.refresh();
+          } else setMessage(result.body.message ?? `The server answered ${result.status}.`);
+        }}
+      >
+        {label}
+      </button>
+      {message ? <span role="alert" className="text-xs text-fault-700">{message}</span> : null}
+    </span>
+  );
+}
