@@ -1,49 +1,19 @@
 // Drives docker-local/mail-fake through the real `resend` SDK, exactly as the app will,
 // so a mismatch between the fake and the SDK's wire format fails here first.
-import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { Resend } from 'resend';
+import { startFakeProcess, stopFakeProcess, type FakeProcess } from '../support/fake-process';
 
-const SERVER = path.resolve(__dirname, '../../docker-local/mail-fake/server.mjs');
 const API_KEY = 're_test_suite_only';
 
-type Fake = { child: ChildProcess; baseUrl: string; log: string[] };
+type Fake = FakeProcess;
 type Listed = { id: string; from: string; to: string[]; subject: string; html: string | null; text: string | null; createdAt: string };
 
-// Port 0 lets the OS pick a free port; the fake logs the one it got.
-async function startFake(dataDir: string): Promise<Fake> {
-  const child = spawn(process.execPath, [SERVER], {
-    env: { ...process.env, MAIL_FAKE_PORT: '0', MAIL_FAKE_API_KEY: API_KEY, MAIL_FAKE_DATA_DIR: dataDir },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  const log: string[] = [];
-  const baseUrl = await new Promise<string>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`mail-fake did not start:\n${log.join('')}`)), 10_000);
-    child.stdout!.on('data', (chunk: Buffer) => {
-      log.push(chunk.toString());
-      const match = /listening on (http:\/\/\S+)/.exec(log.join(''));
-      if (match) {
-        clearTimeout(timer);
-        resolve(match[1]);
-      }
-    });
-    child.stderr!.on('data', (chunk: Buffer) => log.push(chunk.toString()));
-    child.once('exit', (code) => reject(new Error(`mail-fake exited with ${code}:\n${log.join('')}`)));
-  });
-  const health = await fetch(`${baseUrl}/health`);
-  expect(await health.json()).toEqual({ status: 'ok' });
-  return { child, baseUrl, log };
-}
-
-function stopFake(fake: Fake): Promise<number | null> {
-  if (fake.child.exitCode !== null) return Promise.resolve(fake.child.exitCode);
-  return new Promise((resolve) => {
-    fake.child.once('exit', (code) => resolve(code));
-    fake.child.kill('SIGTERM');
-  });
-}
+const startFake = (dataDir: string) =>
+  startFakeProcess('mail-fake', { MAIL_FAKE_PORT: '0', MAIL_FAKE_API_KEY: API_KEY, MAIL_FAKE_DATA_DIR: dataDir });
+const stopFake = stopFakeProcess;
 
 async function listMessages(fake: Fake, to?: string): Promise<Listed[]> {
   const response = await fetch(`${fake.baseUrl}/messages${to ? `?to=${encodeURIComponent(to)}` : ''}`);

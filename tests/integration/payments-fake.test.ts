@@ -1,18 +1,17 @@
 // Drives docker-local/payments-fake through the real `stripe` SDK, exactly as the app will,
 // and checks that its webhooks pass the SDK's own signature verification.
-import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import Stripe from 'stripe';
+import { startFakeProcess, stopFakeProcess, type FakeProcess } from '../support/fake-process';
 
-const SERVER = path.resolve(__dirname, '../../docker-local/payments-fake/server.mjs');
 const API_KEY = 'sk_test_suite_only';
 const WEBHOOK_SECRET = 'whsec_suite_only';
 
-type Fake = { child: ChildProcess; baseUrl: string; port: number; log: string[] };
+type Fake = FakeProcess;
 type Delivery = { status: string; attempts: { statusCode: number | null }[] };
 type Sent = { event: Stripe.Event; delivery: Delivery };
 type Received = { body: string; signature: string };
@@ -40,32 +39,11 @@ function startReceiver() {
   return { server, received, control, ready };
 }
 
-async function startFake(dataDir: string, webhookUrl: string): Promise<Fake> {
-  const child = spawn(process.execPath, [SERVER], {
-    env: {
-      ...process.env, PAYMENTS_FAKE_PORT: '0', PAYMENTS_FAKE_API_KEY: API_KEY, PAYMENTS_FAKE_DATA_DIR: dataDir,
-      PAYMENTS_FAKE_WEBHOOK_URL: webhookUrl, PAYMENTS_FAKE_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENTS_FAKE_WEBHOOK_RETRY_MS: '50',
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
+const startFake = (dataDir: string, webhookUrl: string) =>
+  startFakeProcess('payments-fake', {
+    PAYMENTS_FAKE_PORT: '0', PAYMENTS_FAKE_API_KEY: API_KEY, PAYMENTS_FAKE_DATA_DIR: dataDir,
+    PAYMENTS_FAKE_WEBHOOK_URL: webhookUrl, PAYMENTS_FAKE_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENTS_FAKE_WEBHOOK_RETRY_MS: '50',
   });
-  const log: string[] = [];
-  const baseUrl = await new Promise<string>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`payments-fake did not start:\n${log.join('')}`)), 10_000);
-    child.stdout!.on('data', (chunk: Buffer) => {
-      log.push(chunk.toString());
-      const match = /listening on (http:\/\/\S+)/.exec(log.join(''));
-      if (match) {
-        clearTimeout(timer);
-        resolve(match[1]);
-      }
-    });
-    child.stderr!.on('data', (chunk: Buffer) => log.push(chunk.toString()));
-    child.once('exit', (code) => reject(new Error(`payments-fake exited with ${code}:\n${log.join('')}`)));
-  });
-  const health = await fetch(`${baseUrl}/health`);
-  expect(await health.json()).toEqual({ status: 'ok' });
-  return { child, baseUrl, port: Number(new URL(baseUrl).port), log };
-}
 
 async function waitFor<T>(probe: () => Promise<T | undefined> | T | undefined, what: string): Promise<T> {
   const deadline = Date.now() + 5_000;
@@ -113,11 +91,7 @@ describe('payments fake via the stripe SDK', () => {
   });
 
   afterAll(async () => {
-    if (fake && fake.child.exitCode === null) {
-      const exited = new Promise((resolve) => fake.child.once('exit', resolve));
-      fake.child.kill('SIGTERM');
-      await exited;
-    }
+    if (fake) await stopFakeProcess(fake);
     await new Promise((resolve) => receiver.server.close(resolve));
     fs.rmSync(dataDir, { recursive: true, force: true });
   });

@@ -2,8 +2,14 @@ import { Op, type WhereOptions } from 'sequelize';
 import type { CamCard } from '@/lib/schemas/cam-card';
 import { Cam, db } from '../models';
 
-/** A catalogue row as the advisor's cam card (the advisor never sees the database). */
-export function camCardOf(cam: Cam): CamCard {
+type CamCardSource = Pick<
+  Cam,
+  'id' | 'sku' | 'name' | 'intakeDuration050' | 'exhaustDuration050' | 'intakeAdvertised' | 'exhaustAdvertised' | 'intakeLiftIn' |
+  'exhaustLiftIn' | 'lsa' | 'intakeCenterline' | 'rockerRatio' | 'deactivationCompatible' | 'emissionsCertified' | 'springMaxLiftIn' | 'priceCents'
+>;
+
+/** A catalogue cam (model row or API record) as the advisor's cam card; the advisor never sees the database. */
+export function camCardOf(cam: CamCardSource): CamCard {
   return {
     id: cam.id,
     name: `${cam.sku} ${cam.name}`,

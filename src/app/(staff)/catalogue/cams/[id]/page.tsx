@@ -6,8 +6,8 @@ import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue
 import { ValveEventDiagram } from '@/components/catalogue/valve-diagram';
 import { valveEvents } from '@/lib/advisor/valve-events';
 import { requireRoleForPage } from '@/lib/auth/guard';
+import { camCardOf } from '@/lib/db/queries/advisor-cams';
 import { getCam } from '@/lib/db/queries/cams';
-import type { CamCard } from '@/lib/schemas/cam-card';
 
 export const metadata: Metadata = { title: 'Cam' };
 
@@ -29,23 +29,7 @@ export default async function CamPage({ params, searchParams }: { params: Promis
   const cam = await getCam(Number(id));
   if (!cam) notFound();
   const manager = user.role === 'manager';
-  const card: CamCard = {
-    id: cam.id,
-    name: cam.name,
-    intakeDuration050: cam.intakeDuration050,
-    exhaustDuration050: cam.exhaustDuration050,
-    intakeAdvertised: cam.intakeAdvertised ?? undefined,
-    exhaustAdvertised: cam.exhaustAdvertised ?? undefined,
-    intakeLiftIn: cam.intakeLiftIn,
-    exhaustLiftIn: cam.exhaustLiftIn,
-    lsa: cam.lsa,
-    intakeCenterline: cam.intakeCenterline,
-    rockerRatio: cam.rockerRatio,
-    deactivationCompatible: cam.deactivationCompatible,
-    emissionsCertified: cam.emissionsCertified,
-    springMaxLiftIn: cam.springMaxLiftIn ?? undefined,
-    priceCents: cam.priceCents,
-  };
+  const card = camCardOf(cam);
   const events = valveEvents(card);
   const margin = cam.priceCents > 0 ? Math.round(((cam.priceCents - cam.costCents) / cam.priceCents) * 100) : null;
   return (
