@@ -82,9 +82,21 @@ export default async function globalSetup(): Promise<void> {
   ];
   const runtime: TestRuntime = { appUrl, mailUrl: env.RESEND_BASE_URL, paymentsUrl: `http://127.0.0.1:${paymentsPort}`, env, pids };
   fs.writeFileSync(RUNTIME_FILE, JSON.stringify(runtime, null, 2));
-  await Promise.all([
-    waitFor(`${runtime.mailUrl}/health`, 15_000),
-    waitFor(`${runtime.paymentsUrl}/health`, 15_000),
-    waitFor(`${appUrl}/api/health`, 60_000),
-  ]);
+  try {
+    await Promise.all([
+      waitFor(`${runtime.mailUrl}/health`, 15_000),
+      waitFor(`${runtime.paymentsUrl}/health`, 15_000),
+      waitFor(`${appUrl}/api/health`, 60_000),
+    ]);
+  } catch (error) {
+    // Jest skips the teardown when the setup fails: stop what was started, then say where the logs are.
+    for (const pid of pids) {
+      try {
+        process.kill(-pid, 'SIGTERM');
+      } catch {
+        // already gone
+      }
+    }
+    throw new Error(`${(error as Error).message}; see var/test/logs/ for what the servers printed`);
+  }
 }
