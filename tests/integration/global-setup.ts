@@ -78,7 +78,7 @@ export default async function globalSetup(): Promise<void> {
   const pids = [
     start('mail-fake', ['docker-local/mail-fake/server.mjs'], env),
     start('payments-fake', ['docker-local/payments-fake/server.mjs'], env),
-    start('app', ['node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(appPort)], env),
+    start('app', ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(appPort)], env),
   ];
   const runtime: TestRuntime = { appUrl, mailUrl: env.RESEND_BASE_URL, paymentsUrl: `http://127.0.0.1:${paymentsPort}`, env, pids };
   fs.writeFileSync(RUNTIME_FILE, JSON.stringify(runtime, null, 2));
