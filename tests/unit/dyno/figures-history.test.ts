@@ -1,0 +1,94 @@
+import { displacementCi } from '@/lib/advisor/geometry';
+import { parseCurveCsv } from '@/lib/dyno/curve-csv';
+import { gainPct, peaksOf, pullWithPower } from '@/lib/dyno/figures';
+import { historyFromRuns, type RunForHistory } from '@/lib/dyno/history';
+import { DynoRunSchema } from '@/lib/schemas/dyno-run';
+import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profile';
+
+const profile = (over: { boreIn?: number; headers?: 'manifold' | 'shorty' | 'long-tube' } = {}): BuildProfile =>
+  BuildProfileSchema.parse({
+    engine: { cylinders: 8, boreIn: over.boreIn ?? 4.0, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.4, headMaterial: 'iron', intakeFlowCfm: 250, intakeManifold: 'truck', cylinderDeactivation: 'none' },
+    exhaust: { headers: over.headers ?? 'long-tube', primaryIn: 1.75, system: 'full' },
+    drivetrain: { transmission: 'automatic', stallRpm: 3000, axleRatio: 4.1, topGearRatio: 0.7, tireDiameterIn: 28 },
+    vehicle: { weightLb: 4300, powerBrakes: 'vacuum' },
+    use: { primary: 'street', idle: 'noticeable', fuelOctane: 93, emissionsRequired: false, cruiseMph: 65, budgetCents: 450000 },
+    baselineCam: { id: 'stock', name: 'Stock', intakeDuration050: 204, exhaustDuration050: 211, intakeLiftIn: 0.525, exhaustLiftIn: 0.525, lsa: 116, intakeCenterline: 116 },
+  });
+
+describe('dyno figures (definition of horsepower: hp = lb·ft · rpm / 5252)', () => {
+  it('computes power on every point and finds the peaks', () => {
+    const pull = pullWithPower([{ rpm: 3000, torqueLbFt: 400 }, { rpm: 4000, torqueLbFt: 420 }, { rpm: 5252, torqueLbFt: 380 }, { rpm: 6000, torqueLbFt: 300 }]);
+    // 420 · 4000 / 5252 = 319.88 hp; 380 · 5252 / 5252 = 380 hp (torque and hp cross at 5,252 rpm); 300 · 6000 / 5252 = 342.73 hp
+    expect(pull[1].hp).toBeCloseTo(319.878, 3);
+    expect(pull[2].hp).toBe(380);
+    expect(peaksOf(pull)).toEqual({ peakHp: 380, peakHpRpm: 5252, peakTorqueLbFt: 420, peakTorqueRpm: 4000 });
+  });
+  it('gain is after / before − 1: 360 → 414 hp is +15 %', () => {
+    expect(gainPct(360, 414)).toBeCloseTo(15, 10);
+  });
+});
+
+describe('history from before/after pairs', () => {
+  const profiles = new Map([[2, profile()], [5, profile({ boreIn: 3.78, headers: 'manifold' })]]);
+  it('one entry per build and fitted cam, from the corrected peaks, with the build’s engine for similarity', () => {
+    const runs: RunForHistory[] = [
+      { buildId: 2, phase: 'before', camId: null, correctedPeakHp: 350 },
+      { buildId: 2, phase: 'before', camId: null, correctedPeakHp: 354 }, // two baseline pulls → mean 352
+      { buildId: 2, phase: 'after', camId: 9, correctedPeakHp: 404.8 }, // 404.8 / 352 − 1 = +15 %
+      { buildId: 5, phase: 'before', camId: 1, correctedPeakHp: 300 },
+      { buildId: 5, phase: 'after', camId: 4, correctedPeakHp: 330 }, // +10 %
+    ];
+    const history = historyFromRuns(runs, profiles);
+    expect(history).toHaveLength(2);
+    expect(history[0]).toMatchObject({ camId: 9, intakeFlowCfm: 250, headers: 'long-tube', system: 'full', intakeManifold: 'truck' });
+    expect(history[0].measuredGainPctPeakHp).toBeCloseTo(15, 10);
+    // Displacement, arithmetic: π/4 · 4.0² · 3.622 · 8 = 364.1 in³
+    expect(history[0].displacementCi).toBeCloseTo(displacementCi(4.0, 3.622, 8), 10);
+    expect(history[0].displacementCi).toBeCloseTo(364.1, 1);
+    expect(history[1]).toMatchObject({ camId: 4, headers: 'manifold' });
+    expect(history[1].measuredGainPctPeakHp).toBeCloseTo(10, 10);
+  });
+  it('needs both halves of the pair: a build with only before or only after runs gives nothing', () => {
+    expect(historyFromRuns([{ buildId: 2, phase: 'before', camId: null, correctedPeakHp: 350 }], profiles)).toEqual([]);
+    expect(historyFromRuns([{ buildId: 2, phase: 'after', camId: 9, correctedPeakHp: 400 }], profiles)).toEqual([]);
+  });
+  it('skips runs without figures and builds without a readable profile', () => {
+    const runs: RunForHistory[] = [
+      { buildId: 2, phase: 'before', camId: null, correctedPeakHp: null },
+      { buildId: 2, phase: 'after', camId: 9, correctedPeakHp: 400 },
+      { buildId: 7, phase: 'before', camId: null, correctedPeakHp: 300 },
+      { buildId: 7, phase: 'after', camId: 9, correctedPeakHp: 330 },
+    ];
+    expect(historyFromRuns(runs, profiles)).toEqual([]);
+  });
+});
+
+describe('dyno run schema', () => {
+  const air = { buildId: 2, phase: 'before', airTempC: 25, baroKpa: 99, humidityPct: 40 };
+  it('wants peaks or a curve, not both, not neither', () => {
+    expect(DynoRunSchema.safeParse(air).error?.issues.map((i) => i.path.join('.'))).toEqual(['curve']);
+    const both = { ...air, peak: { hp: 300, hpRpm: 5000, torqueLbFt: 350, torqueRpm: 4000 }, curve: [{ rpm: 3000, torqueLbFt: 300 }, { rpm: 4000, torqueLbFt: 320 }, { rpm: 5000, torqueLbFt: 310 }] };
+    expect(DynoRunSchema.safeParse(both).error?.issues.map((i) => i.path.join('.'))).toEqual(['peak']);
+  });
+  it('refuses peak power that implies more torque than the peak torque (hp · 5252 / rpm)', () => {
+    // 400 hp at 4,000 rpm is 400 · 5252 / 4000 = 525.2 lb·ft at that rpm, more than a 350 lb·ft peak.
+    const r = DynoRunSchema.safeParse({ ...air, peak: { hp: 400, hpRpm: 4000, torqueLbFt: 350, torqueRpm: 3500 } });
+    expect(r.error?.issues[0]).toMatchObject({ path: ['peak', 'hp'] });
+    expect(r.error?.issues[0].message).toMatch(/525\.2 lb·ft/);
+  });
+  it('wants rpm rising along the curve and air data within limits', () => {
+    const r = DynoRunSchema.safeParse({ ...air, baroKpa: 200, curve: [{ rpm: 3000, torqueLbFt: 300 }, { rpm: 2900, torqueLbFt: 320 }, { rpm: 5000, torqueLbFt: 310 }] });
+    expect(r.error?.issues.map((i) => i.path.join('.')).sort()).toEqual(['baroKpa', 'curve.1.rpm']);
+  });
+});
+
+describe('pasted CSV', () => {
+  it('reads rpm,torque rows with or without a header', () => {
+    expect(parseCurveCsv('rpm,torque\n3000,310.5\n3500,330\n').points).toEqual([{ rpm: 3000, torqueLbFt: 310.5 }, { rpm: 3500, torqueLbFt: 330 }]);
+    expect(parseCurveCsv('3000\t310\n3500\t330').points).toHaveLength(2);
+    expect(parseCurveCsv('3000;310\n3500;330').points).toHaveLength(2);
+  });
+  it('names the line that is not two numbers', () => {
+    expect(parseCurveCsv('3000,310\n3500,abc').errors).toEqual(['line 2: expected two numbers, rpm and torque in lb·ft (got "3500,abc")']);
+  });
+});
