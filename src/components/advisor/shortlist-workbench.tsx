@@ -20,8 +20,8 @@ async function rank([url, build]: [string, BuildProfile]): Promise<ShopRanking> 
   return body as ShopRanking;
 }
 
-export function ShortlistWorkbench({ builds, notice }: { builds: BuildOption[]; notice: string }) {
-  const [buildId, setBuildId] = useState<number | null>(builds[0]?.id ?? null);
+export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds: BuildOption[]; notice: string; initialBuildId?: number }) {
+  const [buildId, setBuildId] = useState<number | null>(initialBuildId ?? builds[0]?.id ?? null);
   const build = builds.find((b) => b.id === buildId) ?? null;
   const { data, error, isLoading } = useSWR(build ? ['/api/advisor/rank', build.profile] : null, rank, { revalidateOnFocus: false });
   const [openCamId, setOpenCamId] = useState<string | null>(null);
@@ -114,7 +114,7 @@ export function ShortlistWorkbench({ builds, notice }: { builds: BuildOption[]; 
                       </tr>
                       {open ? (
                         <tr>
-                          <td colSpan={9} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} /></td>
+                          <td colSpan={9} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} buildId={buildId ?? undefined} /></td>
                         </tr>
                       ) : null}
                     </RowGroup>

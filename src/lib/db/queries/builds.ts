@@ -1,4 +1,10 @@
-import { Build, Customer, db } from '../models';
+import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import type { SessionUser } from '@/lib/auth/guard';
+import { recordAudit } from '@/lib/audit';
+import { conflict, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { BUILD_RECORD_LIMITS, type BuildCreate, type BuildListQuery, type BuildUpdate } from '@/lib/schemas/build';
+import { Build, Cam, Customer, db } from '../models';
+import { insertCustomer } from './customers';
 
 export type BuildSummary = { id: number; vehicleLabel: string; customerName: string; profile: unknown };
 
@@ -10,8 +16,185 @@ export async function listBuildSummaries(limit = 50): Promise<BuildSummary[]> {
     order: [['updatedAt', 'DESC'], ['id', 'DESC']],
     limit,
   });
-  return builds.map((build) => {
-    const customer = (build as Build & { customer?: Customer }).customer;
-    return { id: build.id, vehicleLabel: build.vehicleLabel, customerName: customer?.name ?? 'Unknown customer', profile: build.profile };
+  return builds.map(toSummary);
+}
+
+/** One build as a summary (the advisor page asks for it when a link names a build beyond the newest). */
+export async function getBuildSummary(id: number): Promise<BuildSummary | null> {
+  db();
+  const build = await Build.findByPk(id, { include: [{ model: Customer, as: 'customer', attributes: ['name'] }] });
+  return build ? toSummary(build) : null;
+}
+
+type BuildWithCustomer = Build & { customer?: Customer | null };
+
+function toSummary(build: Build): BuildSummary {
+  const customer = (build as BuildWithCustomer).customer;
+  return { id: build.id, vehicleLabel: build.vehicleLabel, customerName: customer?.name ?? 'Unknown customer', profile: build.profile };
+}
+
+export type BuildRecord = {
+  id: number;
+  customerId: number;
+  customerName: string;
+  vehicleLabel: string;
+  baselineCamId: number | null;
+  profile: Record<string, unknown>;
+  profileSchemaVersion: number;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+};
+
+/** A row of the recent-builds list: no profile, a few figures a person recognises the build by. */
+export type BuildListItem = Omit<BuildRecord, 'profile'> & {
+  customerPhone: string | null;
+  customerEmail: string | null;
+  primaryUse: string | null;
+  emissionsRequired: boolean | null;
+};
+
+function toBuildRecord(build: Build): BuildRecord {
+  const customer = (build as BuildWithCustomer).customer;
+  return {
+    id: build.id,
+    customerId: build.customerId,
+    customerName: customer?.name ?? 'Unknown customer',
+    vehicleLabel: build.vehicleLabel,
+    baselineCamId: build.baselineCamId ?? null,
+    profile: build.profile,
+    profileSchemaVersion: build.profileSchemaVersion,
+    version: build.version,
+    createdAt: new Date(build.createdAt).toISOString(),
+    updatedAt: new Date(build.updatedAt).toISOString(),
+  };
+}
+
+function toListItem(build: Build): BuildListItem {
+  const { profile, ...rest } = toBuildRecord(build);
+  const customer = (build as BuildWithCustomer).customer;
+  const use = (profile as { use?: { primary?: unknown; emissionsRequired?: unknown } }).use;
+  return {
+    ...rest,
+    customerPhone: customer?.phone ?? null,
+    customerEmail: customer?.email ?? null,
+    primaryUse: typeof use?.primary === 'string' ? use.primary : null,
+    emissionsRequired: typeof use?.emissionsRequired === 'boolean' ? use.emissionsRequired : null,
+  };
+}
+
+const withCustomer = () => [{ model: Customer, as: 'customer', attributes: ['id', 'name', 'email', 'phone'] }];
+
+/** Newest first. q matches the vehicle or the customer's name, e-mail or phone. */
+export async function listBuilds(query: BuildListQuery): Promise<{ items: BuildListItem[]; total: number }> {
+  db();
+  const and: WhereOptions<Build>[] = [];
+  if (query.customerId !== undefined) and.push({ customerId: query.customerId });
+  if (query.q) {
+    const term = likeTerm(query.q);
+    and.push({
+      [Op.or]: [
+        { vehicleLabel: { [Op.like]: term } },
+        { '$customer.name$': { [Op.like]: term } },
+        { '$customer.email$': { [Op.like]: term } },
+        { '$customer.phone$': { [Op.like]: term } },
+      ],
+    });
+  }
+  const { rows, count } = await Build.findAndCountAll({
+    where: { [Op.and]: and },
+    include: withCustomer(),
+    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+    distinct: true,
+    subQuery: false,
   });
+  return { items: rows.map(toListItem), total: count };
+}
+
+export async function getBuild(id: number, transaction?: Transaction): Promise<BuildRecord | null> {
+  db();
+  const build = await Build.findByPk(id, { include: withCustomer(), transaction });
+  return build ? toBuildRecord(build) : null;
+}
+
+/** The fields a PATCH merges its changes over. */
+export function buildFormValues(r: BuildRecord): Record<keyof BuildUpdate, unknown> {
+  return { customerId: r.customerId, vehicleLabel: r.vehicleLabel, baselineCamId: r.baselineCamId, profile: r.profile };
+}
+
+async function checkCustomer(customerId: number, t: Transaction) {
+  if (!(await Customer.findByPk(customerId, { transaction: t }))) throw invalid([{ field: 'customerId', message: `there is no customer with id ${customerId}` }]);
+}
+
+async function checkBaselineCam(camId: number | null, t: Transaction) {
+  if (camId === null) return;
+  if (!(await Cam.findByPk(camId, { attributes: ['id'], transaction: t }))) throw invalid([{ field: 'baselineCamId', message: `there is no cam with id ${camId} in the catalogue` }]);
+}
+
+/** A new build, with a new customer when one is given inline; all in one transaction. */
+export async function createBuild(values: BuildCreate, user: SessionUser): Promise<WriteOutcome<BuildRecord>> {
+  db();
+  return runWrite(async (t) => {
+    let customerId: number;
+    if (values.customer) customerId = (await insertCustomer(values.customer, user, t)).id;
+    else {
+      customerId = values.customerId!;
+      await checkCustomer(customerId, t);
+    }
+    await checkBaselineCam(values.baselineCamId, t);
+    const build = await Build.create(
+      { customerId, vehicleLabel: values.vehicleLabel, baselineCamId: values.baselineCamId, profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion },
+      { transaction: t },
+    );
+    const record = (await getBuild(build.id, t))!;
+    await recordAudit({ user, action: 'build.created', entityType: 'build', entityId: build.id, before: null, after: record }, t);
+    return { record };
+  });
+}
+
+/** Applies validated values when the client's version is still current; otherwise 409 with the current record. */
+export async function updateBuild(id: number, expectedVersion: number, values: BuildUpdate, user: SessionUser): Promise<WriteOutcome<BuildRecord>> {
+  db();
+  return runWrite(
+    async (t) => {
+      const build = await Build.findByPk(id, { include: withCustomer(), transaction: t, lock: t.LOCK.UPDATE });
+      if (!build) throw notFound();
+      const before = toBuildRecord(build);
+      if (build.version !== expectedVersion) throw conflict(before);
+      if (values.customerId !== before.customerId) await checkCustomer(values.customerId, t);
+      if (values.baselineCamId !== before.baselineCamId) await checkBaselineCam(values.baselineCamId, t);
+      const sameProfile = JSON.stringify(values.profile) === JSON.stringify(before.profile);
+      build.set({ customerId: values.customerId, vehicleLabel: values.vehicleLabel, baselineCamId: values.baselineCamId });
+      // JSON columns compare by reference; only mark the profile when its content differs.
+      if (!sameProfile) build.set({ profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion });
+      if (!build.changed()) return { record: before, changed: false };
+      await build.save({ transaction: t });
+      const after = (await getBuild(id, t))!;
+      await recordAudit({ user, action: 'build.updated', entityType: 'build', entityId: id, before, after }, t);
+      return { record: after };
+    },
+    { reload: () => getBuild(id) },
+  );
+}
+
+export type BaselineCardOption = {
+  id: number; sku: string; name: string; baselineForLiters: number | null;
+  intakeDuration050: number; exhaustDuration050: number; intakeAdvertised: number | null; exhaustAdvertised: number | null;
+  intakeLiftIn: number; exhaustLiftIn: number; lsa: number; intakeCenterline: number; rockerRatio: number; springMaxLiftIn: number | null;
+};
+
+/** The catalogue's factory-baseline cards (not archived), for "the cam in the engine now". */
+export async function listBaselineCards(): Promise<BaselineCardOption[]> {
+  db();
+  const cams = await Cam.findAll({ where: { isFactoryBaseline: true, archivedAt: null }, order: [['baselineForLiters', 'ASC'], ['sku', 'ASC']] });
+  const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
+  return cams.map((c) => ({
+    id: c.id, sku: c.sku, name: c.name, baselineForLiters: n(c.baselineForLiters),
+    intakeDuration050: Number(c.intakeDuration050), exhaustDuration050: Number(c.exhaustDuration050),
+    intakeAdvertised: n(c.intakeAdvertised), exhaustAdvertised: n(c.exhaustAdvertised),
+    intakeLiftIn: Number(c.intakeLiftIn), exhaustLiftIn: Number(c.exhaustLiftIn), lsa: Number(c.lsa), intakeCenterline: Number(c.intakeCenterline),
+    rockerRatio: Number(c.rockerRatio), springMaxLiftIn: n(c.springMaxLiftIn),
+  }));
 }
