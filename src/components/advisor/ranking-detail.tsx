@@ -2,6 +2,7 @@
 
 import type { ShopRankingEntry } from '@/lib/advisor-service';
 import { SCORING_WEIGHTS, type SubscoreName } from '@/lib/advisor/weights';
+import { MakeQuoteButton } from '@/components/quotes/make-quote-button';
 import { degText, dollars, rpmText } from './format';
 
 type Ranking = ShopRankingEntry;
@@ -16,7 +17,7 @@ const SUBSCORE_LABELS: Record<SubscoreName, string> = {
   cost: 'Cost against budget',
 };
 
-export function RankingDetail({ ranking }: { ranking: Ranking }) {
+export function RankingDetail({ ranking, buildId }: { ranking: Ranking; buildId?: number }) {
   const v = ranking.valveEvents;
   return (
     <div className="grid gap-4 lg:grid-cols-2">
@@ -57,6 +58,7 @@ export function RankingDetail({ ranking }: { ranking: Ranking }) {
             </tbody>
           </table>
         ) : null}
+        {buildId ? <MakeQuoteButton buildId={buildId} camId={ranking.camId} /> : null}
         <details className="mt-4 text-sm">
           <summary className="cursor-pointer font-semibold">How these numbers were reached</summary>
           <dl className="spec mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-xs">

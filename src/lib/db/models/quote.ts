@@ -74,6 +74,10 @@ export class QuoteLine extends Model<InferAttributes<QuoteLine>, InferCreationAt
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         kind: { type: DataTypes.ENUM(...QUOTE_LINE_KINDS), allowNull: false },
+        // Declared here (no association maps them): without these Sequelize drops the catalogue links on write and read.
+        camId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        partId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        laborOperationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         description: { type: DataTypes.STRING(255), allowNull: false },
         quantity: { type: DataTypes.DECIMAL(8, 2), allowNull: false, defaultValue: 1 },
         unitPriceCents: { type: DataTypes.INTEGER, allowNull: false },

@@ -1,0 +1,117 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { formatCents } from '@/components/catalogue/format';
+import { getQuoteByToken } from '@/lib/db/queries/quotes';
+import { isTaxable } from '@/lib/quotes/pricing';
+
+export const dynamic = 'force-dynamic';
+// A private link: never indexed, never cached, never sent on as a referrer.
+export const metadata: Metadata = { title: 'Your quote', robots: { index: false, follow: false }, referrer: 'no-referrer' };
+
+const CAUTIONS = [
+  'Emissions: many places do not allow an aftermarket cam on a road vehicle unless the part is certified for that vehicle. Ask us about the paperwork for your area.',
+  'Brakes: a bigger cam can lower engine vacuum at idle, and vacuum brake boosters rely on it. We check brake assist before the vehicle leaves.',
+  'Valvetrain: valve springs, piston-to-valve clearance and pushrod length are checked by a qualified technician on your engine, not assumed.',
+  'Tune: the engine must be re-tuned after the swap. A higher-stall converter, if fitted, changes how the vehicle creeps and pulls away.',
+  'Local codes and licensed practice come first: where they ask for more than this, we follow them.',
+];
+
+const STATUS_WORDS: Record<string, { title: string; text: string }> = {
+  sent: { title: 'Waiting for you', text: 'Read it through. When you are happy, accept it and pay the deposit to book the job.' },
+  accepted: { title: 'Accepted, deposit not paid yet', text: 'You can pay the deposit below whenever you are ready.' },
+  'deposit-paid': { title: 'Deposit paid — thank you', text: 'Your job is booked. We will be in touch about the date.' },
+  declined: { title: 'Declined', text: 'This quote was declined. Call the shop if you would like a new one.' },
+  expired: { title: 'Expired', text: 'This quote has run out. Call the shop for an up-to-date price.' },
+  cancelled: { title: 'Cancelled', text: 'This quote was cancelled. Call the shop if that is a surprise.' },
+};
+
+export default async function CustomerQuotePage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
+  const { token } = await params;
+  const found = await getQuoteByToken(token);
+  if (!found) notFound();
+  const { quote, shop } = found;
+  const query = await searchParams;
+  const canPay = (quote.status === 'sent' || quote.status === 'accepted') && quote.depositCents > 0;
+  const state = STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' };
+  return (
+    <div className="mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink">
+      <p className="text-base text-ink-muted">{shop.name}</p>
+      <h1 className="mt-1 text-3xl font-bold leading-tight sm:text-4xl">Your quote {quote.number}</h1>
+      <p className="mt-2">
+        For {quote.customer.name}
+        {quote.build ? `, ${quote.build.vehicleLabel}` : ''}
+      </p>
+
+      {query.paid && quote.status !== 'deposit-paid' ? (
+        <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">
+          <p className="font-semibold">Payment received by the payment service — confirming</p>
+          <p className="text-base">It can take a minute to reach us. Refresh this page shortly; you will not be charged twice.</p>
+        </div>
+      ) : null}
+      {query.cancelled && canPay ? (
+        <div role="status" className="mt-6 rounded-lg border border-steel-300 bg-paper-sunk p-4">
+          <p className="font-semibold">Payment not made</p>
+          <p className="text-base">Nothing was charged. You can pay the deposit below whenever you are ready.</p>
+        </div>
+      ) : null}
+
+      <section aria-labelledby="state" className={`mt-6 rounded-lg border p-4 ${quote.status === 'deposit-paid' ? 'border-ok-700/40 bg-ok-100' : 'border-steel-300 bg-paper-raised'}`}>
+        <h2 id="state" className="text-xl font-semibold">Status: {state.title}</h2>
+        <p className="text-base">{state.text}</p>
+      </section>
+
+      <section aria-labelledby="lines" className="mt-8">
+        <h2 id="lines" className="text-2xl font-semibold">What is included</h2>
+        <ul className="mt-3 divide-y divide-steel-300 rounded-lg border border-steel-300 bg-paper-raised">
+          {quote.lines.map((line) => (
+            <li key={line.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 px-4 py-3">
+              <span className="min-w-0 flex-1">
+                {line.description}
+                <span className="block text-base text-ink-muted">
+                  {line.kind === 'labor' ? `${line.quantity} hours of labour` : `Quantity ${line.quantity}`}
+                  {isTaxable(line.kind) ? '' : ' · no sales tax'}
+                </span>
+              </span>
+              <span className="tabular-nums font-semibold">{formatCents(line.totalCents)}</span>
+            </li>
+          ))}
+        </ul>
+        <dl className="mt-4 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 tabular-nums">
+          <dt>Before tax</dt>
+          <dd className="text-right">{formatCents(quote.subtotalCents)}</dd>
+          <dt>Sales tax ({(quote.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on parts)</dt>
+          <dd className="text-right">{formatCents(quote.taxCents)}</dd>
+          <dt className="text-xl font-bold">Total</dt>
+          <dd className="text-right text-xl font-bold">{formatCents(quote.totalCents)}</dd>
+        </dl>
+      </section>
+
+      <section aria-labelledby="deposit" className="mt-8 rounded-lg border-2 border-ember-500 bg-paper-raised p-5">
+        <h2 id="deposit" className="text-2xl font-semibold">Deposit to book the job: <span className="tabular-nums">{formatCents(quote.depositCents)}</span></h2>
+        <p className="mt-1 text-base">The rest, {formatCents(Math.max(0, quote.totalCents - quote.depositCents))}, is paid when the job is done.</p>
+        <h3 className="mt-4 text-xl font-semibold">Our deposit policy</h3>
+        <p className="mt-1 whitespace-pre-line">{shop.depositPolicyText}</p>
+        {canPay ? (
+          <form method="post" action={`/api/q/${encodeURIComponent(token)}/checkout`} className="mt-6">
+            <button type="submit" className="min-h-14 w-full rounded-lg bg-ember-500 px-6 py-4 text-xl font-semibold text-paper-raised hover:bg-ember-600 focus-visible:outline focus-visible:outline-4 focus-visible:outline-gauge-500">
+              Accept and pay the deposit
+            </button>
+            <p className="mt-2 text-base text-ink-muted">By paying you accept this quote and the deposit policy above. You pay on the payment service’s secure page.</p>
+          </form>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="care" className="mt-8 rounded-lg border border-caution-700/40 bg-caution-100 p-5">
+        <h2 id="care" className="text-2xl font-semibold">Good to know before a cam swap</h2>
+        <ul className="mt-3 flex list-disc flex-col gap-2 pl-6">
+          {CAUTIONS.map((text) => <li key={text}>{text}</li>)}
+        </ul>
+      </section>
+
+      <p className="mt-8 text-base">
+        Questions? Call {shop.name} on <a className="font-semibold text-gauge-700 underline" href={`tel:${shop.phone}`}>{shop.phone}</a>
+        {shop.email ? <> or write to <a className="font-semibold text-gauge-700 underline" href={`mailto:${shop.email}`}>{shop.email}</a></> : null}.
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,211 @@
+'use client';
+
+import Link from 'next/link';
+import { useState } from 'react';
+import useSWR from 'swr';
+import { getJson, sendJson } from '@/components/catalogue/api';
+import { formatCents } from '@/components/catalogue/format';
+import { Banner, buttonClass, PageHeader, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import type { StaffRole } from '@/lib/auth/guard';
+import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
+import { PaymentStatusTag, QuoteStatusTag } from './status';
+
+type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; camId: number | null; partId: number | null; laborOperationId: number | null };
+type Notice = { tone: 'ok' | 'fault' | 'caution'; title: string; detail?: string } | null;
+
+/** "12.5" or "12.50" dollars → 1250 cents, exactly (no float arithmetic); null when it is not money. */
+export function dollarsToCents(text: string): number | null {
+  const m = /^\s*(\d{1,7})(?:\.(\d{1,2}))?\s*$/.exec(text);
+  if (!m) return null;
+  return Number(m[1]) * 100 + Number((m[2] ?? '').padEnd(2, '0'));
+}
+
+const toEdit = (q: QuoteRecord): EditLine[] =>
+  q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: (l.unitPriceCents / 100).toFixed(2), camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
+
+function errorText(body: { message?: string; errors?: { field: string; message: string }[] }) {
+  return body.errors?.length ? body.errors.map((e) => `${e.field}: ${e.message}`).join('; ') : undefined;
+}
+
+export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: StaffRole }) {
+  const url = `/api/quotes/${initial.id}`;
+  const { data, mutate } = useSWR<QuoteRecord>(url, getJson, { fallbackData: initial, revalidateOnMount: false });
+  const quote = data ?? initial;
+  const [editing, setEditing] = useState<EditLine[] | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [notice, setNotice] = useState<Notice>(null);
+  const [refund, setRefund] = useState('');
+  const canWrite = role === 'manager' || role === 'counter';
+  const isDraft = quote.status === 'draft';
+
+  async function run(label: string, call: () => Promise<{ status: number; body: QuoteRecord & { message?: string; errors?: { field: string; message: string }[]; current?: unknown } }>, okTitle: string) {
+    setBusy(true);
+    setNotice(null);
+    const { status, body } = await call();
+    setBusy(false);
+    if (status >= 200 && status < 300) {
+      await mutate(body, { revalidate: false });
+      setNotice({ tone: 'ok', title: okTitle });
+      return true;
+    }
+    if (status === 409 && body.current) await mutate(body.current as QuoteRecord, { revalidate: false });
+    setNotice({ tone: 'fault', title: `${label}: ${body.message ?? `the server answered ${status}`}`, detail: errorText(body) });
+    return false;
+  }
+
+  async function saveLines() {
+    if (!editing) return;
+    const lines: Array<{ kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; camId: number | null; partId: number | null; laborOperationId: number | null }> = [];
+    for (const [i, l] of editing.entries()) {
+      const cents = dollarsToCents(l.price);
+      const quantity = Number(l.quantity);
+      if (cents === null) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the price must be dollars and cents, e.g. 129.50` });
+      if (!Number.isFinite(quantity) || quantity <= 0) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
+      lines.push({ kind: l.kind, description: l.description, quantity, unitPriceCents: cents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId });
+    }
+    if (await run('Not saved', () => sendJson('PATCH', url, { version: quote.version, lines }), 'Lines saved; totals updated.')) setEditing(null);
+  }
+
+  const set = (i: number, change: Partial<EditLine>) => setEditing((rows) => rows!.map((r, j) => (j === i ? { ...r, ...change } : r)));
+  const paid = quote.payments.find((p) => p.status === 'paid' || p.status === 'partially-refunded');
+
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader
+        title={`Quote ${quote.number}`}
+        back={{ href: '/quotes', label: 'Quotes' }}
+        lead={<>{quote.customer.name}{quote.customer.email ? ` <${quote.customer.email}>` : ' (no e-mail on file)'} · {quote.build?.vehicleLabel ?? 'no build'} · <QuoteStatusTag status={quote.status} /></>}
+        actions={
+          canWrite ? (
+            <>
+              {isDraft && !editing ? <button type="button" className={buttonClass.quiet} onClick={() => setEditing(toEdit(quote))}>Edit lines</button> : null}
+              {(isDraft || quote.status === 'sent') && !editing ? (
+                <button type="button" className={buttonClass.primary} disabled={busy} onClick={() => run('Not sent', () => sendJson('POST', `${url}/send`), `Sent to ${quote.customer.email}. The customer’s link is in the e-mail.`)}>
+                  {quote.status === 'sent' ? 'Send again (new link)' : 'Send to customer'}
+                </button>
+              ) : null}
+            </>
+          ) : null
+        }
+      />
+      {notice ? <Banner tone={notice.tone} title={notice.title}>{notice.detail}</Banner> : null}
+      {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft.</p> : null}
+
+      <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
+        <table className={tableClass}>
+          <caption className="sr-only">Quote lines</caption>
+          <thead>
+            <tr>
+              <th className={thClass}>Kind</th>
+              <th className={thClass}>Description</th>
+              <th className={`${thClass} text-right`}>Qty / h</th>
+              <th className={`${thClass} text-right`}>Unit</th>
+              <th className={`${thClass} text-right`}>Line</th>
+              <th className={thClass}>Tax</th>
+              {quote.costCents !== undefined ? <th className={`${thClass} text-right`}>Unit cost</th> : null}
+              {editing ? <th className={thClass}><span className="sr-only">Remove</span></th> : null}
+            </tr>
+          </thead>
+          <tbody>
+            {editing
+              ? editing.map((l, i) => {
+                  const cents = dollarsToCents(l.price);
+                  const q = Number(l.quantity);
+                  const total = cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6 ? lineTotalCents(q, cents) : null;
+                  return (
+                    <tr key={i}>
+                      <td className={tdClass}>
+                        <select aria-label={`Line ${i + 1} kind`} value={l.kind} onChange={(e) => set(i, { kind: e.target.value as QuoteLineKind })} className="rounded border border-steel-300 bg-paper-raised px-1 py-0.5">
+                          {QUOTE_LINE_KIND_LIST.map((k) => <option key={k}>{k}</option>)}
+                        </select>
+                      </td>
+                      <td className={tdClass}><input aria-label={`Line ${i + 1} description`} value={l.description} onChange={(e) => set(i, { description: e.target.value })} className="w-full rounded border border-steel-300 px-1 py-0.5" /></td>
+                      <td className={tdClass}><input aria-label={`Line ${i + 1} quantity`} inputMode="decimal" value={l.quantity} onChange={(e) => set(i, { quantity: e.target.value })} className="spec w-20 rounded border border-steel-300 px-1 py-0.5 text-right" /></td>
+                      <td className={tdClass}><input aria-label={`Line ${i + 1} unit price in dollars`} inputMode="decimal" value={l.price} onChange={(e) => set(i, { price: e.target.value })} className="spec w-24 rounded border border-steel-300 px-1 py-0.5 text-right" /></td>
+                      <td className={`${tdClass} spec text-right`}>{total === null ? 'check' : formatCents(total)}</td>
+                      <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
+                      {quote.costCents !== undefined ? <td className={tdClass} /> : null}
+                      <td className={tdClass}><button type="button" className="text-fault-700 underline" onClick={() => setEditing((rows) => rows!.filter((_, j) => j !== i))}>Remove</button></td>
+                    </tr>
+                  );
+                })
+              : quote.lines.map((l) => (
+                  <tr key={l.id}>
+                    <td className={tdClass}>{l.kind}</td>
+                    <td className={tdClass}>{l.description}</td>
+                    <td className={`${tdClass} spec text-right`}>{l.quantity}{l.kind === 'labor' ? ' h' : ''}</td>
+                    <td className={`${tdClass} spec text-right`}>{formatCents(l.unitPriceCents)}</td>
+                    <td className={`${tdClass} spec text-right`}>{formatCents(l.totalCents)}</td>
+                    <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
+                    {quote.costCents !== undefined ? <td className={`${tdClass} spec text-right`}>{formatCents(l.unitCostCents ?? null)}</td> : null}
+                  </tr>
+                ))}
+          </tbody>
+        </table>
+      </div>
+      {editing ? (
+        <div className="flex flex-wrap gap-2">
+          <button type="button" className={buttonClass.quiet} onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', camId: null, partId: null, laborOperationId: null }])}>Add a line</button>
+          <button type="button" className={buttonClass.primary} disabled={busy} onClick={saveLines}>Save lines</button>
+          <button type="button" className={buttonClass.quiet} onClick={() => setEditing(null)}>Cancel</button>
+        </div>
+      ) : null}
+
+      <div className="grid gap-4 md:grid-cols-2">
+        <section aria-labelledby="totals" className="rounded border border-steel-300 bg-paper-raised p-3">
+          <h2 id="totals" className="text-sm font-semibold">Totals</h2>
+          <dl className="spec mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-sm">
+            <dt className="font-sans">Subtotal</dt><dd className="text-right">{formatCents(quote.subtotalCents)}</dd>
+            <dt className="font-sans">Tax ({quote.taxRateBp} bp on goods)</dt><dd className="text-right">{formatCents(quote.taxCents)}</dd>
+            <dt className="font-sans font-semibold">Total</dt><dd className="text-right font-semibold">{formatCents(quote.totalCents)}</dd>
+            <dt className="font-sans">Deposit</dt><dd className="text-right">{formatCents(quote.depositCents)}</dd>
+            {quote.costCents !== undefined ? (
+              <>
+                <dt className="font-sans">Goods cost</dt><dd className="text-right">{formatCents(quote.costCents)}</dd>
+                <dt className="font-sans">Goods margin</dt><dd className="text-right">{formatCents(quote.marginCents)}</dd>
+              </>
+            ) : null}
+          </dl>
+        </section>
+        <section aria-labelledby="payment" className="rounded border border-steel-300 bg-paper-raised p-3">
+          <h2 id="payment" className="text-sm font-semibold">Deposit payment</h2>
+          <p className="mt-1 text-sm">
+            Paid {formatCents(quote.paidCents)} · refunded {formatCents(quote.refundedCents)} · sent {quote.sentAt ? quote.sentAt.slice(0, 16).replace('T', ' ') : 'not yet'}
+          </p>
+          <ul className="mt-2 flex flex-col gap-1 text-sm">
+            {quote.payments.map((p) => (
+              <li key={p.id} className="flex flex-wrap items-center gap-2">
+                <PaymentStatusTag status={p.status} />
+                <span className="spec">{formatCents(p.amountCents)}</span>
+                {p.refundedCents ? <span className="spec">(refunded {formatCents(p.refundedCents)})</span> : null}
+                <span className="spec text-xs text-ink-muted">{p.providerSessionId}</span>
+              </li>
+            ))}
+            {quote.payments.length === 0 ? <li><PaymentStatusTag status={null} /></li> : null}
+          </ul>
+          {role === 'manager' && paid ? (
+            <form
+              className="mt-3 flex flex-wrap items-end gap-2"
+              onSubmit={(e) => {
+                e.preventDefault();
+                const cents = dollarsToCents(refund);
+                if (cents === null || cents <= 0) return setNotice({ tone: 'fault', title: 'Refund: the amount must be dollars and cents above 0' });
+                void run('Not refunded', () => sendJson('POST', `${url}/refund`, { amountCents: cents }), `Refund of ${formatCents(cents)} sent to the payment service.`).then((ok) => ok && setRefund(''));
+              }}
+            >
+              <label className="text-sm">
+                Refund amount ($, at most {formatCents(paid.amountCents - paid.refundedCents)})
+                <input value={refund} onChange={(e) => setRefund(e.target.value)} inputMode="decimal" className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5" />
+              </label>
+              <button type="submit" className={buttonClass.danger} disabled={busy}>Refund</button>
+            </form>
+          ) : null}
+        </section>
+      </div>
+      <p className="text-xs text-ink-muted">
+        Made from the <Link className="underline" href="/advisor">cam shortlist</Link>. Tax applies to the cam, parts and other goods; labour and the tune are not taxed.
+      </p>
+    </div>
+  );
+}

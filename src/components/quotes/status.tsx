@@ -1,0 +1,24 @@
+import { StateTag } from '@/components/catalogue/ui';
+
+// Quote and payment states, always as a word (the colour only repeats it).
+const QUOTE_TONE: Record<string, 'ok' | 'caution' | 'fault' | 'muted'> = {
+  draft: 'muted', sent: 'caution', accepted: 'caution', 'deposit-paid': 'ok', declined: 'fault', expired: 'fault', cancelled: 'fault',
+};
+const QUOTE_WORD: Record<string, string> = {
+  draft: 'Draft', sent: 'Sent', accepted: 'Accepted, unpaid', 'deposit-paid': 'Deposit paid', declined: 'Declined', expired: 'Expired', cancelled: 'Cancelled',
+};
+const PAYMENT_TONE: Record<string, 'ok' | 'caution' | 'fault' | 'muted'> = {
+  pending: 'caution', paid: 'ok', failed: 'fault', expired: 'muted', refunded: 'muted', 'partially-refunded': 'caution',
+};
+const PAYMENT_WORD: Record<string, string> = {
+  pending: 'Checkout started', paid: 'Paid', failed: 'Failed', expired: 'Checkout expired', refunded: 'Refunded', 'partially-refunded': 'Partly refunded',
+};
+
+export function QuoteStatusTag({ status }: { status: string }) {
+  return <StateTag tone={QUOTE_TONE[status] ?? 'muted'}>{QUOTE_WORD[status] ?? status}</StateTag>;
+}
+
+export function PaymentStatusTag({ status }: { status: string | null }) {
+  if (!status) return <StateTag tone="muted">No payment</StateTag>;
+  return <StateTag tone={PAYMENT_TONE[status] ?? 'muted'}>{PAYMENT_WORD[status] ?? status}</StateTag>;
+}

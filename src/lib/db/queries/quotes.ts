@@ -1,0 +1,555 @@
+import crypto from 'node:crypto';
+import { col, fn, Op, type Transaction } from 'sequelize';
+import type Stripe from 'stripe';
+import { rankForShop } from '@/lib/advisor-service';
+import type { SessionUser } from '@/lib/auth/guard';
+import { recordAudit } from '@/lib/audit';
+import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { appBaseUrl } from '@/lib/env';
+import type { FieldError } from '@/lib/http/responses';
+import { sendMail } from '@/lib/mail';
+import { payments } from '@/lib/payments';
+import { formatQuoteNumber, laborLine, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
+import { quoteEmail } from '@/lib/quotes/email';
+import { BuildProfileSchema } from '@/lib/schemas/build-profile';
+import type { QuoteLineInput } from '@/lib/schemas/quote';
+import { Build, Cam, Customer, db, LaborOperation, Part, Payment, Quote, QuoteLine, ShopSettings } from '../models';
+import type { QuoteStatus } from '../models/quote';
+
+// Quotes: made from a build and a chosen cam, priced by src/lib/quotes/pricing.ts, sent by private
+// link, paid by deposit through the payments SDK. Every write runs in one transaction.
+
+export type QuoteLineRecord = {
+  id: number;
+  kind: QuoteLineKind;
+  camId: number | null;
+  partId: number | null;
+  laborOperationId: number | null;
+  description: string;
+  quantity: number;
+  unitPriceCents: number;
+  totalCents: number;
+  sortOrder: number;
+  /** What the shop pays for one unit (catalogue cost of the cam or part); null for labour and free lines. */
+  unitCostCents?: number | null;
+};
+
+export type PaymentRecord = {
+  id: number;
+  status: Payment['status'];
+  amountCents: number;
+  refundedCents: number;
+  currency: string;
+  providerSessionId: string | null;
+  providerPaymentId: string | null;
+  paidAt: string | null;
+  createdAt: string;
+};
+
+export type QuoteRecord = {
+  id: number;
+  number: string;
+  status: QuoteStatus;
+  customer: { id: number; name: string; email: string | null };
+  build: { id: number; vehicleLabel: string } | null;
+  camId: number | null;
+  lines: QuoteLineRecord[];
+  subtotalCents: number;
+  taxRateBp: number;
+  taxCents: number;
+  totalCents: number;
+  depositCents: number;
+  paidCents: number;
+  refundedCents: number;
+  validUntil: string | null;
+  sentAt: string | null;
+  acceptedAt: string | null;
+  payments: PaymentRecord[];
+  /** Goods cost and margin; left out for technicians (see presentQuote). */
+  costCents?: number;
+  marginCents?: number;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+};
+
+type QuoteRow = Quote & { customer?: Customer; build?: Build | null; lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[]; payments?: Payment[] };
+
+const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null);
+
+function include() {
+  return [
+    { model: Customer, as: 'customer', attributes: ['id', 'name', 'email'] },
+    { model: Build, as: 'build', attributes: ['id', 'vehicleLabel'] },
+    { model: QuoteLine, as: 'lines' },
+    { model: Payment, as: 'payments' },
+  ];
+}
+
+function paymentRecord(p: Payment): PaymentRecord {
+  return {
+    id: p.id,
+    status: p.status,
+    amountCents: p.amountCents,
+    refundedCents: p.refundedCents,
+    currency: p.currency,
+    providerSessionId: p.providerSessionId,
+    providerPaymentId: p.providerPaymentId,
+    paidAt: iso(p.paidAt),
+    createdAt: iso(p.createdAt)!,
+  };
+}
+
+const PAID_STATES: readonly Payment['status'][] = ['paid', 'partially-refunded', 'refunded'];
+
+async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<QuoteRecord> {
+  const lines = [...(row.lines ?? [])].sort((a, b) => a.sortOrder - b.sortOrder || a.id - b.id);
+  const camIds = lines.map((l) => l.camId).filter((v): v is number => v !== null);
+  const partIds = lines.map((l) => l.partId).filter((v): v is number => v !== null);
+  const [cams, parts] = await Promise.all([
+    camIds.length ? Cam.findAll({ where: { id: camIds }, attributes: ['id', 'costCents'], transaction }) : [],
+    partIds.length ? Part.findAll({ where: { id: partIds }, attributes: ['id', 'costCents'], transaction }) : [],
+  ]);
+  const camCost = new Map(cams.map((c) => [c.id, c.costCents]));
+  const partCost = new Map(parts.map((p) => [p.id, p.costCents]));
+  let costCents = 0;
+  let goodsCents = 0;
+  const lineRecords = lines.map((l): QuoteLineRecord => {
+    const unitCostCents = l.camId !== null ? (camCost.get(l.camId) ?? null) : l.partId !== null ? (partCost.get(l.partId) ?? null) : null;
+    const quantity = Number(l.quantity);
+    if (unitCostCents !== null) {
+      costCents += lineTotalCents(quantity, unitCostCents);
+      goodsCents += l.totalCents;
+    }
+    return {
+      id: l.id, kind: l.kind, camId: l.camId ?? null, partId: l.partId ?? null, laborOperationId: l.laborOperationId ?? null,
+      description: l.description, quantity, unitPriceCents: l.unitPriceCents, totalCents: l.totalCents, sortOrder: l.sortOrder, unitCostCents,
+    };
+  });
+  const pays = [...(row.payments ?? [])].sort((a, b) => a.id - b.id);
+  const paid = pays.filter((p) => PAID_STATES.includes(p.status));
+  return {
+    id: row.id,
+    number: row.number,
+    status: row.status,
+    customer: { id: row.customer?.id ?? row.customerId, name: row.customer?.name ?? 'Unknown customer', email: row.customer?.email ?? null },
+    build: row.build ? { id: row.build.id, vehicleLabel: row.build.vehicleLabel } : null,
+    camId: row.camId ?? null,
+    lines: lineRecords,
+    subtotalCents: row.subtotalCents,
+    taxRateBp: row.taxRateBp,
+    taxCents: row.taxCents,
+    totalCents: row.totalCents,
+    depositCents: row.depositCents,
+    paidCents: paid.reduce((s, p) => s + p.amountCents, 0),
+    refundedCents: paid.reduce((s, p) => s + p.refundedCents, 0),
+    validUntil: row.validUntil ?? null,
+    sentAt: iso(row.sentAt),
+    acceptedAt: iso(row.acceptedAt),
+    payments: pays.map(paymentRecord),
+    costCents,
+    marginCents: goodsCents - costCents,
+    version: row.version,
+    createdAt: iso(row.createdAt)!,
+    updatedAt: iso(row.updatedAt)!,
+  };
+}
+
+/** Technicians read quotes without costs or margins. */
+export function presentQuote(record: QuoteRecord, user: SessionUser): QuoteRecord {
+  if (user.role !== 'tech') return record;
+  const { costCents: _c, marginCents: _m, ...rest } = record;
+  void _c;
+  void _m;
+  return { ...rest, lines: rest.lines.map(({ unitCostCents: _u, ...line }) => (void _u, line)) };
+}
+
+export async function getQuote(id: number, transaction?: Transaction): Promise<QuoteRecord | null> {
+  db();
+  const row = (await Quote.findByPk(id, { include: include(), transaction })) as QuoteRow | null;
+  return row ? toQuoteRecord(row, transaction) : null;
+}
+
+export type QuoteSummary = Pick<QuoteRecord, 'id' | 'number' | 'status' | 'totalCents' | 'depositCents' | 'version' | 'updatedAt' | 'sentAt'> & {
+  customerName: string;
+  vehicleLabel: string | null;
+  paymentStatus: Payment['status'] | null;
+};
+
+export async function listQuotes(options: { status?: QuoteStatus; limit?: number } = {}): Promise<QuoteSummary[]> {
+  db();
+  const rows = (await Quote.findAll({
+    where: options.status ? { status: options.status } : {},
+    include: [
+      { model: Customer, as: 'customer', attributes: ['name'] },
+      { model: Build, as: 'build', attributes: ['vehicleLabel'] },
+      { model: Payment, as: 'payments', attributes: ['id', 'status'] },
+    ],
+    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+    limit: options.limit ?? 200,
+  })) as QuoteRow[];
+  return rows.map((q) => {
+    const last = [...(q.payments ?? [])].sort((a, b) => b.id - a.id)[0];
+    return {
+      id: q.id, number: q.number, status: q.status, totalCents: q.totalCents, depositCents: q.depositCents, version: q.version,
+      updatedAt: iso(q.updatedAt)!, sentAt: iso(q.sentAt), customerName: q.customer?.name ?? 'Unknown customer',
+      vehicleLabel: q.build?.vehicleLabel ?? null, paymentStatus: last?.status ?? null,
+    };
+  });
+}
+
+// ---- Building lines ----
+
+type LineDraft = Omit<QuoteLineRecord, 'id' | 'sortOrder' | 'totalCents' | 'unitCostCents'>;
+
+/** Staff-typed lines, with catalogue references filled in from the catalogue and the labour rate. */
+async function resolveLines(inputs: readonly QuoteLineInput[], field: string, laborRateCents: number, t: Transaction): Promise<LineDraft[]> {
+  const errors: FieldError[] = [];
+  const out: LineDraft[] = [];
+  for (const [i, input] of inputs.entries()) {
+    const at = `${field}.${i}`;
+    let description = input.description;
+    let unitPriceCents = input.unitPriceCents;
+    let quantity = input.quantity;
+    if (input.partId) {
+      const part = await Part.findByPk(input.partId, { transaction: t });
+      if (!part) errors.push({ field: `${at}.partId`, message: `there is no part with id ${input.partId}` });
+      else {
+        description ??= `${part.sku} ${part.name}`;
+        unitPriceCents ??= part.priceCents;
+      }
+    }
+    if (input.camId) {
+      const cam = await Cam.findByPk(input.camId, { transaction: t });
+      if (!cam) errors.push({ field: `${at}.camId`, message: `there is no cam with id ${input.camId}` });
+      else {
+        description ??= `${cam.sku} ${cam.name}`;
+        unitPriceCents ??= cam.priceCents;
+      }
+    }
+    if (input.laborOperationId) {
+      const op = await LaborOperation.findByPk(input.laborOperationId, { transaction: t });
+      if (!op) errors.push({ field: `${at}.laborOperationId`, message: `there is no labour operation with id ${input.laborOperationId}` });
+      else {
+        description ??= op.name;
+        quantity ??= Number(op.hours);
+        unitPriceCents ??= laborRateCents;
+      }
+    }
+    if (description === undefined) errors.push({ field: `${at}.description`, message: 'description is required for a line that names no catalogue item' });
+    if (unitPriceCents === undefined) errors.push({ field: `${at}.unitPriceCents`, message: 'unitPriceCents is required for a line that names no catalogue item' });
+    if (description !== undefined && unitPriceCents !== undefined) {
+      out.push({
+        kind: input.kind, camId: input.camId ?? null, partId: input.partId ?? null, laborOperationId: input.laborOperationId ?? null,
+        description, quantity: quantity ?? 1, unitPriceCents,
+      });
+    }
+  }
+  if (errors.length) throw invalid(errors);
+  return out;
+}
+
+async function shopSettings(t: Transaction): Promise<ShopSettings> {
+  const settings = await ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t });
+  if (!settings) throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
+  return settings;
+}
+
+const policyOf = (s: ShopSettings) => ({ percentBp: s.depositPercentBp, minCents: s.depositMinCents, maxCents: s.depositMaxCents });
+
+async function writeLines(quoteId: number, lines: LineDraft[], t: Transaction) {
+  await QuoteLine.destroy({ where: { quoteId }, transaction: t });
+  await QuoteLine.bulkCreate(
+    lines.map((l, i) => ({ ...l, quoteId, quantity: l.quantity.toFixed(2), totalCents: lineTotalCents(l.quantity, l.unitPriceCents), sortOrder: i })),
+    { transaction: t },
+  );
+}
+
+async function nextNumber(t: Transaction): Promise<string> {
+  const year = new Date().getUTCFullYear();
+  // The locking read serialises concurrent creators on the year's range; the unique index is the backstop.
+  const last = await Quote.findOne({
+    where: { number: { [Op.like]: `Q-${year}-%` } },
+    order: [[fn('LENGTH', col('number')), 'DESC'], ['number', 'DESC']],
+    attributes: ['id', 'number'],
+    lock: t.LOCK.UPDATE,
+    transaction: t,
+  });
+  return formatQuoteNumber(year, nextQuoteSequence(last?.number ?? null, year));
+}
+
+export type CreateQuoteInput = { buildId: number; camId: number; extraLines?: QuoteLineInput[] };
+
+/** A draft from a saved build and a chosen cam: the cam, what the need rules add, the staff's extra lines. */
+export async function createQuoteFromBuild(input: CreateQuoteInput, user: SessionUser): Promise<WriteOutcome<QuoteRecord>> {
+  db();
+  const build = await Build.findByPk(input.buildId);
+  const cam = await Cam.findByPk(input.camId);
+  const errors: FieldError[] = [];
+  if (!build) errors.push({ field: 'buildId', message: `there is no build with id ${input.buildId}` });
+  if (!cam) errors.push({ field: 'camId', message: `there is no cam with id ${input.camId}` });
+  else if (cam.isFactoryBaseline) errors.push({ field: 'camId', message: 'a factory baseline card is a reference, not a cam the shop sells' });
+  if (errors.length || !build || !cam) return { ok: false, reason: 'invalid', errors };
+  const profile = BuildProfileSchema.safeParse(build.profile);
+  if (!profile.success) return { ok: false, reason: 'invalid', errors: [{ field: 'buildId', message: 'the saved build is incomplete; finish the interview first' }] };
+  const ranked = await rankForShop(profile.data, { camIds: [cam.id], includeCurves: false });
+  const ranking = ranked.ok ? ranked.result.rankings.find((r) => String(r.camId) === String(cam.id)) : undefined;
+  if (!ranking) return { ok: false, reason: 'invalid', errors: [{ field: 'camId', message: 'the advisor could not rank this cam for this build' }] };
+
+  for (let attempt = 0; ; attempt++) {
+    const outcome = await runWrite(async (t) => {
+      const settings = await shopSettings(t);
+      const lines: LineDraft[] = [{ kind: 'cam', camId: cam.id, partId: null, laborOperationId: null, description: `${cam.sku} ${cam.name}`, quantity: 1, unitPriceCents: cam.priceCents }];
+      for (const need of ranking.neededItems) {
+        if (need.type === 'part' && need.part) {
+          const kind: QuoteLineKind = need.part.category === 'tune' ? 'tune' : 'part';
+          lines.push({ kind, camId: null, partId: need.part.id, laborOperationId: null, description: `${need.part.sku} ${need.part.name}`, quantity: need.quantity, unitPriceCents: need.part.priceCents });
+        } else if (need.type === 'labor' && need.laborOperation) {
+          const { quantity, unitPriceCents } = laborLine(need.laborOperation.hours, need.quantity, settings.laborRateCents);
+          lines.push({ kind: 'labor', camId: null, partId: null, laborOperationId: need.laborOperation.id, description: need.laborOperation.name, quantity, unitPriceCents });
+        }
+      }
+      lines.push(...(await resolveLines(input.extraLines ?? [], 'extraLines', settings.laborRateCents, t)));
+      const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));
+      const quote = await Quote.create(
+        {
+          number: await nextNumber(t), customerId: build.customerId, buildId: build.id, camId: cam.id, createdByUserId: user.id, status: 'draft',
+          publicTokenHash: null, subtotalCents: totals.subtotalCents, taxRateBp: totals.taxRateBp, taxCents: totals.taxCents, totalCents: totals.totalCents,
+          depositCents: totals.depositCents, validUntil: null, sentAt: null, acceptedAt: null,
+        },
+        { transaction: t },
+      );
+      await writeLines(quote.id, lines, t);
+      const record = (await getQuote(quote.id, t))!;
+      await recordAudit({ user, action: 'quote.created', entityType: 'quote', entityId: quote.id, before: null, after: { number: record.number, totalCents: record.totalCents } }, t);
+      return { record };
+    }, { uniqueFields: { number: 'number' } });
+    // Two creators racing for the same number: the loser tries again with the next one.
+    const numberClash = !outcome.ok && outcome.reason === 'invalid' && outcome.errors.some((e) => e.field === 'number');
+    if (!numberClash || attempt >= 3) return outcome;
+  }
+}
+
+export type QuotePatch = { version: number; lines?: QuoteLineInput[]; validUntil?: string | null };
+
+/** Lines (replaced as a whole) and the validity date, while the quote is a draft; totals follow. */
+export async function updateQuote(id: number, patch: QuotePatch, user: SessionUser): Promise<WriteOutcome<QuoteRecord>> {
+  db();
+  return runWrite(
+    async (t) => {
+      const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
+      if (!quote) throw notFound();
+      if (quote.version !== patch.version) throw conflict(await getQuote(id, t));
+      if (quote.status !== 'draft') throw refused(`Quote ${quote.number} is ${quote.status}; only a draft can be changed.`);
+      const before = await getQuote(id, t);
+      const settings = await shopSettings(t);
+      if (patch.lines) {
+        const lines = await resolveLines(patch.lines, 'lines', settings.laborRateCents, t);
+        await writeLines(id, lines, t);
+        const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
+        quote.set({ subtotalCents: totals.subtotalCents, taxCents: totals.taxCents, totalCents: totals.totalCents, depositCents: totals.depositCents });
+        quote.changed('updatedAt', true);
+      }
+      if (patch.validUntil !== undefined) quote.set({ validUntil: patch.validUntil });
+      if (!quote.changed()) return { record: before!, changed: false };
+      await quote.save({ transaction: t });
+      const after = (await getQuote(id, t))!;
+      await recordAudit({ user, action: 'quote.updated', entityType: 'quote', entityId: id, before: { totalCents: before?.totalCents }, after: { totalCents: after.totalCents } }, t);
+      return { record: after };
+    },
+    { reload: () => getQuote(id) },
+  );
+}
+
+// ---- Sending and the customer's link ----
+
+export const sha256 = (text: string) => crypto.createHash('sha256').update(text).digest('hex');
+
+/** 32 random bytes, base64url: 43 characters, 256 bits — not guessable, safe in a URL. */
+export function newQuoteToken(): string {
+  return crypto.randomBytes(32).toString('base64url');
+}
+
+/**
+ * Sends (or sends again) the quote: a fresh private token whose sha256 alone is stored, an e-mail with
+ * the link, status → sent. The mail goes out inside the transaction, so a refused mail changes nothing;
+ * sending again replaces the token, and the old link stops working.
+ */
+export async function sendQuote(id: number, user: SessionUser): Promise<WriteOutcome<QuoteRecord> | { ok: false; reason: 'mail-failed'; message: string }> {
+  db();
+  try {
+    return await runWrite(async (t) => {
+      const quote = (await Quote.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE })) as QuoteRow | null;
+      if (!quote) throw notFound();
+      if (quote.status !== 'draft' && quote.status !== 'sent') throw refused(`Quote ${quote.number} is ${quote.status}; only a draft or a sent quote can be sent.`);
+      const email = quote.customer?.email;
+      if (!email) throw invalid([{ field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' }]);
+      if (!(quote.lines ?? []).length) throw invalid([{ field: 'lines', message: 'the quote has no lines' }]);
+      const token = newQuoteToken();
+      quote.set({ publicTokenHash: sha256(token), status: 'sent', sentAt: new Date() });
+      await quote.save({ transaction: t });
+      const settings = await shopSettings(t);
+      const record = (await getQuote(id, t))!;
+      await recordAudit({ user, action: 'quote.sent', entityType: 'quote', entityId: id, before: null, after: { to: email } }, t);
+      await sendMail({ to: email, ...quoteEmail({ quote: record, shopName: settings.name, link: `${appBaseUrl()}/q/${token}` }) });
+      return { record };
+    });
+  } catch (error) {
+    if (error instanceof Error && /Mail was not accepted|fetch failed|ECONNREFUSED/.test(error.message)) {
+      return { ok: false, reason: 'mail-failed', message: 'The e-mail could not be sent, so the quote was not marked as sent. Try again in a moment.' };
+    }
+    throw error;
+  }
+}
+
+export type PublicQuote = {
+  quote: QuoteRecord;
+  shop: { name: string; phone: string; email: string; address: string; depositPolicyText: string; currency: string };
+};
+
+/** The quote a private link opens, or null for any token that is not a live link (never a hint why). */
+export async function getQuoteByToken(token: string): Promise<PublicQuote | null> {
+  if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
+  db();
+  const row = await Quote.findOne({ where: { publicTokenHash: sha256(token) }, attributes: ['id'] });
+  if (!row) return null;
+  const [quote, settings] = await Promise.all([getQuote(row.id), ShopSettings.findOne({ order: [['id', 'ASC']] })]);
+  if (!quote || !settings || quote.status === 'draft') return null;
+  const { costCents: _c, marginCents: _m, ...rest } = quote;
+  void _c;
+  void _m;
+  return {
+    quote: { ...rest, lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)), payments: [] },
+    shop: { name: settings.name, phone: settings.phone, email: settings.email, address: settings.address, depositPolicyText: settings.depositPolicyText, currency: settings.currency },
+  };
+}
+
+export type CheckoutOutcome = { ok: true; url: string } | { ok: false; status: 404 | 409 | 502; message: string };
+
+/** The customer accepts: a checkout session for the deposit, recorded as a pending payment. */
+export async function startCheckout(token: string): Promise<CheckoutOutcome> {
+  const found = await getQuoteByToken(token);
+  if (!found) return { ok: false, status: 404, message: 'This link does not open a quote.' };
+  const { quote, shop } = found;
+  if (quote.status === 'deposit-paid') return { ok: false, status: 409, message: 'The deposit for this quote has already been paid.' };
+  if (quote.status !== 'sent' && quote.status !== 'accepted') return { ok: false, status: 409, message: `This quote is ${quote.status} and can no longer be paid online. Please call the shop.` };
+  if (quote.depositCents <= 0) return { ok: false, status: 409, message: 'This quote has no deposit to pay.' };
+  const back = `${appBaseUrl()}/q/${token}`;
+  let session: Stripe.Checkout.Session;
+  try {
+    session = await payments().checkout.sessions.create({
+      mode: 'payment',
+      line_items: [{ quantity: 1, price_data: { currency: shop.currency, unit_amount: quote.depositCents, product_data: { name: `Deposit for quote ${quote.number}` } } }],
+      success_url: `${back}?paid=1`,
+      cancel_url: `${back}?cancelled=1`,
+      client_reference_id: String(quote.id),
+      metadata: { quoteId: String(quote.id), quoteNumber: quote.number },
+      payment_intent_data: { metadata: { quoteId: String(quote.id), quoteNumber: quote.number } },
+      ...(quote.customer.email ? { customer_email: quote.customer.email } : {}),
+    });
+  } catch {
+    return { ok: false, status: 502, message: 'The payment service did not answer. Nothing was charged; please try again in a moment.' };
+  }
+  if (!session.url) return { ok: false, status: 502, message: 'The payment service gave no payment page. Nothing was charged; please try again.' };
+  await db().transaction(async (t) => {
+    await Payment.create({ quoteId: quote.id, providerSessionId: session.id, providerPaymentId: null, amountCents: quote.depositCents, currency: shop.currency, status: 'pending', paidAt: null }, { transaction: t });
+    const row = await Quote.findByPk(quote.id, { transaction: t, lock: t.LOCK.UPDATE });
+    if (row && row.status === 'sent') {
+      row.set({ status: 'accepted', acceptedAt: new Date() });
+      await row.save({ transaction: t });
+    }
+    await recordAudit({ actor: 'customer-link', action: 'quote.checkout-started', entityType: 'quote', entityId: quote.id, after: { session: session.id } }, t);
+  });
+  return { ok: true, url: session.url };
+}
+
+// ---- Webhook effects (each idempotent: the same event twice changes nothing) ----
+
+const stripeId = (v: string | { id: string } | null | undefined) => (typeof v === 'string' ? v : (v?.id ?? null));
+
+/** checkout.session.completed: the payment is paid and the quote deposit-paid, together. */
+export async function recordCheckoutCompleted(session: Stripe.Checkout.Session): Promise<'applied' | 'already' | 'ignored'> {
+  if (session.payment_status !== 'paid') return 'ignored';
+  db();
+  return db().transaction(async (t) => {
+    let payment = await Payment.findOne({ where: { providerSessionId: session.id }, transaction: t, lock: t.LOCK.UPDATE });
+    if (!payment) {
+      const quoteId = Number(session.metadata?.quoteId);
+      if (!Number.isSafeInteger(quoteId) || !(await Quote.findByPk(quoteId, { transaction: t }))) return 'ignored';
+      payment = await Payment.create({ quoteId, providerSessionId: session.id, providerPaymentId: null, amountCents: session.amount_total ?? 0, currency: session.currency ?? 'usd', status: 'pending', paidAt: null }, { transaction: t });
+    }
+    if (payment.status !== 'pending' && payment.status !== 'failed' && payment.status !== 'expired') return 'already';
+    payment.set({ status: 'paid', paidAt: new Date(), providerPaymentId: stripeId(session.payment_intent), amountCents: session.amount_total ?? payment.amountCents });
+    await payment.save({ transaction: t });
+    const quote = await Quote.findByPk(payment.quoteId, { transaction: t, lock: t.LOCK.UPDATE });
+    if (quote && quote.status !== 'deposit-paid') {
+      quote.set({ status: 'deposit-paid', acceptedAt: quote.acceptedAt ?? new Date() });
+      await quote.save({ transaction: t });
+    }
+    await recordAudit({ actor: 'payments-webhook', action: 'payment.received', entityType: 'quote', entityId: payment.quoteId, after: { paymentId: payment.id, amountCents: payment.amountCents } }, t);
+    return 'applied';
+  });
+}
+
+function refundState(amountCents: number, refundedCents: number): Payment['status'] {
+  return refundedCents >= amountCents ? 'refunded' : 'partially-refunded';
+}
+
+/** charge.refunded: the provider's running refunded amount is the truth; never counted twice. */
+export async function recordChargeRefunded(charge: Stripe.Charge): Promise<'applied' | 'already' | 'ignored'> {
+  const intent = stripeId(charge.payment_intent);
+  if (!intent) return 'ignored';
+  db();
+  return db().transaction(async (t) => {
+    const payment = await Payment.findOne({ where: { providerPaymentId: intent }, transaction: t, lock: t.LOCK.UPDATE });
+    if (!payment) return 'ignored';
+    const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, charge.amount_refunded));
+    if (refunded === payment.refundedCents) return 'already';
+    payment.set({ refundedCents: refunded, status: refundState(payment.amountCents, refunded) });
+    await payment.save({ transaction: t });
+    await recordAudit({ actor: 'payments-webhook', action: 'payment.refunded', entityType: 'quote', entityId: payment.quoteId, after: { paymentId: payment.id, refundedCents: refunded } }, t);
+    return 'applied';
+  });
+}
+
+export type RefundOutcome = { ok: true; record: QuoteRecord } | { ok: false; status: 404 | 409 | 422 | 502; message: string; errors?: FieldError[] };
+
+/** A manager refunds part or all of the paid deposit through the payments SDK; never more than is left. */
+export async function refundQuote(id: number, amountCents: number, reason: string | undefined, user: SessionUser): Promise<RefundOutcome> {
+  db();
+  const result = await db().transaction(async (t): Promise<RefundOutcome | null> => {
+    const quote = await Quote.findByPk(id, { transaction: t });
+    if (!quote) return { ok: false, status: 404, message: `No quote with id ${id}.` };
+    const payment = await Payment.findOne({
+      where: { quoteId: id, status: { [Op.in]: ['paid', 'partially-refunded'] } },
+      order: [['id', 'DESC']],
+      transaction: t,
+      lock: t.LOCK.UPDATE,
+    });
+    if (!payment || !payment.providerPaymentId) return { ok: false, status: 409, message: `Quote ${quote.number} has no paid deposit to refund.` };
+    const left = payment.amountCents - payment.refundedCents;
+    if (amountCents > left) {
+      return { ok: false, status: 422, message: 'Some fields need attention.', errors: [{ field: 'amountCents', message: `at most ${left} cents can be refunded (paid ${payment.amountCents}, already refunded ${payment.refundedCents})` }] };
+    }
+    try {
+      await payments().refunds.create(
+        { payment_intent: payment.providerPaymentId, amount: amountCents, metadata: { quoteId: String(id), byUser: String(user.id), ...(reason ? { note: reason.slice(0, 200) } : {}) } },
+        { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
+      );
+    } catch (error) {
+      const message = error instanceof Error ? error.message : 'no answer';
+      return { ok: false, status: 502, message: `The payment service refused the refund: ${message}. Nothing was changed.` };
+    }
+    // The webhook may have landed first; both sides take the larger running total, so it is counted once.
+    await payment.reload({ transaction: t, lock: t.LOCK.UPDATE });
+    const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, payment.amountCents - left + amountCents));
+    payment.set({ refundedCents: refunded, status: refundState(payment.amountCents, refunded) });
+    await payment.save({ transaction: t });
+    await recordAudit({ user, action: 'payment.refund-requested', entityType: 'quote', entityId: id, after: { paymentId: payment.id, amountCents, reason: reason ?? null } }, t);
+    return null;
+  });
+  if (result) return result;
+  return { ok: true, record: (await getQuote(id))! };
+}
+
+export type { QuoteStatus };

@@ -1,0 +1,287 @@
+import { QueryTypes, type Sequelize } from 'sequelize';
+import Stripe from 'stripe';
+import request from 'supertest';
+import { signedInAgent } from '../support/auth';
+import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { readRuntime } from '../support/runtime';
+import crypto from 'node:crypto';
+
+// Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: a draft from
+// seeded build 1 (the towing truck, 5.3 L with active deactivation, 2,000 rpm stall) and a seeded cam,
+// sent by e-mail, opened from the link, paid through the payments fake, replayed, tampered, refunded.
+const { appUrl, mailUrl, paymentsUrl, env } = readRuntime();
+const CAM_ID = 13; // F9-219 Foundry Nine Big Truck 219: $439.00, lift 0.595", not deactivation-compatible
+const CAM_SWAP_TRUCK = 1; // labour operation CAM-TRUCK, 8.0 h
+const LABOR_RATE = 13_500; // the demo shop's $135.00 an hour
+const sha256 = (s: string) => crypto.createHash('sha256').update(s).digest('hex');
+const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
+
+type Line = { kind: string; partId: number | null; laborOperationId: number | null; camId: number | null; quantity: number; unitPriceCents: number; totalCents: number; unitCostCents?: number | null; description: string };
+type Quote = { id: number; number: string; status: string; version: number; lines: Line[]; subtotalCents: number; taxCents: number; taxRateBp: number; totalCents: number; depositCents: number; paidCents: number; refundedCents: number; payments: { status: string; amountCents: number; refundedCents: number }[]; costCents?: number; marginCents?: number };
+
+let sequelize: Sequelize;
+let manager: Awaited<ReturnType<typeof signedInAgent>>;
+let counter: Awaited<ReturnType<typeof signedInAgent>>;
+let tech: Awaited<ReturnType<typeof signedInAgent>>;
+
+beforeAll(async () => {
+  sequelize = connectTestDatabase();
+  [manager, counter, tech] = await Promise.all([signedInAgent('manager'), signedInAgent('counter'), signedInAgent('tech')]);
+});
+afterAll(() => disconnectTestDatabase());
+
+async function pollQuote(id: number, until: (q: Quote) => boolean, timeoutMs = 15_000): Promise<Quote> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const q = (await manager.get(`/api/quotes/${id}`)).body as Quote;
+    if (until(q) || Date.now() > deadline) return q;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+}
+
+function signed(payload: string) {
+  return stripe.webhooks.generateTestHeaderString({ payload, secret: env.STRIPE_WEBHOOK_SECRET });
+}
+
+describe('a quote from build 1, sent, paid and refunded', () => {
+  let quote: Quote;
+  let token: string;
+  let sessionId: string;
+  let completedEvent: unknown;
+
+  it('makes a draft whose lines follow the need rules, priced in exact cents', async () => {
+    const build = (await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = 1', { type: QueryTypes.SELECT }))[0];
+    const profile = typeof build.profile === 'string' ? JSON.parse(build.profile) : build.profile;
+    const ranked = await counter.post('/api/advisor/rank').send({ build: profile, camIds: [CAM_ID], includeCurves: false });
+    expect(ranked.status).toBe(200);
+    const needed = ranked.body.rankings[0].neededItems as { type: string; partId: number | null; laborOperationId: number | null; priceCents: number; part?: { sku: string } | null; laborOperation?: { code: string } | null }[];
+
+    const res = await counter.post('/api/quotes').send({ buildId: 1, camId: CAM_ID, extraLines: [{ kind: 'labor', laborOperationId: CAM_SWAP_TRUCK }] });
+    expect(res.status).toBe(201);
+    quote = res.body;
+    expect(quote.status).toBe('draft');
+    expect(quote.number).toMatch(/^Q-\d{4}-\d{4}$/);
+
+    // The cam first, at its catalogue price.
+    expect(quote.lines[0]).toMatchObject({ kind: 'cam', camId: CAM_ID, quantity: 1, unitPriceCents: 43_900, totalCents: 43_900 });
+    // Then exactly what the rules add, in the rules' order and at the advisor's prices.
+    const ruleLines = quote.lines.slice(1, 1 + needed.length);
+    expect(ruleLines.map((l) => [l.partId, l.laborOperationId, l.totalCents])).toEqual(needed.map((n) => [n.partId, n.laborOperationId, n.priceCents]));
+    // Known from the seeded rules: lift 0.595" > 0.570" → ovate springs + install (2 h);
+    // active deactivation with a non-compatible cam → delete kit + 1.5 h; always → tune, tune session, gaskets.
+    const skus = needed.map((n) => n.part?.sku ?? n.laborOperation?.code);
+    expect(skus).toEqual(expect.arrayContaining(['SPR-600', 'SPR-INST', 'DD-KIT-53', 'DD-ADD', 'TUNE-DYNO', 'TUNE-LAB', 'GS-TC']));
+    expect(quote.lines.find((l) => l.laborOperationId === 4)).toMatchObject({ kind: 'labor', quantity: 2, unitPriceCents: LABOR_RATE, totalCents: 27_000 });
+    expect(quote.lines.find((l) => l.laborOperationId === 3)).toMatchObject({ quantity: 1.5, totalCents: 20_250 });
+    expect(quote.lines.find((l) => l.partId === 27)).toMatchObject({ kind: 'tune', totalCents: 49_500 });
+    // The staff's extra line last: 8 h × $135.00.
+    expect(quote.lines.at(-1)).toMatchObject({ kind: 'labor', laborOperationId: CAM_SWAP_TRUCK, quantity: 8, totalCents: 108_000 });
+
+    // Totals: tax 8.25 % on goods only (cam, parts), half up; deposit 20 % clamped to $200…$1,000.
+    const subtotal = quote.lines.reduce((s, l) => s + l.totalCents, 0);
+    const goods = quote.lines.filter((l) => ['cam', 'part', 'other'].includes(l.kind)).reduce((s, l) => s + l.totalCents, 0);
+    const tax = Math.floor((goods * 825 + 5_000) / 10_000);
+    expect(quote).toMatchObject({ subtotalCents: subtotal, taxRateBp: 825, taxCents: tax, totalCents: subtotal + tax });
+    expect(quote.depositCents).toBe(Math.min(100_000, Math.max(20_000, Math.floor(((subtotal + tax) * 2_000 + 5_000) / 10_000))));
+    expect(Number.isInteger(quote.totalCents) && Number.isInteger(quote.depositCents)).toBe(true);
+  });
+
+  it('numbers quotes uniquely, counting up', async () => {
+    const other = await manager.post('/api/quotes').send({ buildId: 2, camId: 11 });
+    expect(other.status).toBe(201);
+    const seq = (n: string) => Number(n.split('-')[2]);
+    expect(other.body.number).not.toBe(quote.number);
+    expect(seq(other.body.number)).toBe(seq(quote.number) + 1);
+  });
+
+  it('shows costs and margins to counter staff, never to technicians', async () => {
+    const seen = (await counter.get(`/api/quotes/${quote.id}`)).body as Quote;
+    expect(seen.costCents).toBeGreaterThan(0);
+    expect(seen.lines[0].unitCostCents).toBe(27_218); // the seeded cost of a $439 cam: round(439 × 62)
+    const techView = await tech.get(`/api/quotes/${quote.id}`);
+    expect(techView.status).toBe(200);
+    expect(techView.body.costCents).toBeUndefined();
+    expect(techView.body.marginCents).toBeUndefined();
+    expect(techView.body.lines.every((l: Line) => !('unitCostCents' in l))).toBe(true);
+    expect((await tech.patch(`/api/quotes/${quote.id}`).send({ version: quote.version })).status).toBe(403);
+    expect((await tech.post('/api/quotes').send({ buildId: 1, camId: CAM_ID })).status).toBe(403);
+    expect((await request(appUrl).get('/api/quotes')).status).toBe(401);
+  });
+
+  it('rejects bad input by field, and bad references by name', async () => {
+    const bad = await counter.post('/api/quotes').send({ buildId: 1, camId: 999_999 });
+    expect(bad.status).toBe(422);
+    expect(bad.body.errors).toEqual([expect.objectContaining({ field: 'camId' })]);
+    const line = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: [{ kind: 'other', description: 'Shop supplies', quantity: 1.005, unitPriceCents: 100 }] });
+    expect(line.status).toBe(422);
+    expect(line.body.errors).toEqual([expect.objectContaining({ field: 'lines.0.quantity' })]);
+    const noPrice = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: [{ kind: 'other', description: 'Shop supplies' }] });
+    expect(noPrice.status).toBe(422);
+    expect(noPrice.body.errors).toEqual([expect.objectContaining({ field: 'lines.0.unitPriceCents' })]);
+  });
+
+  it('edits lines while a draft, and a stale version gets 409 without overwriting', async () => {
+    const lines = [...quote.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId })),
+      { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 }];
+    const saved = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
+    expect(saved.status).toBe(200);
+    expect(saved.body.version).toBe(quote.version + 1);
+    expect(saved.body.subtotalCents).toBe(quote.subtotalCents + 1_999);
+    // 19.99 more in goods at 8.25 %: tax on the new goods sum, rounded once.
+    expect(saved.body.taxCents).toBeGreaterThanOrEqual(quote.taxCents + 164);
+    expect(saved.body.taxCents).toBeLessThanOrEqual(quote.taxCents + 165);
+    const stale = await manager.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: lines.slice(0, 1) });
+    expect(stale.status).toBe(409);
+    expect(stale.body.current.lines).toHaveLength(lines.length);
+    quote = saved.body;
+  });
+
+  it('sends the link by e-mail; only the hash of the token is stored', async () => {
+    const sent = await counter.post(`/api/quotes/${quote.id}/send`);
+    expect(sent.status).toBe(200);
+    expect(sent.body.status).toBe('sent');
+    const messages = (await request(mailUrl).get('/messages').query({ to: 'dana.whitlock@example.com' })).body as { to: string[]; subject: string; text: string; html: string }[];
+    const mail = messages.find((m) => m.subject.includes(quote.number));
+    expect(mail?.to).toEqual(['dana.whitlock@example.com']);
+    const match = new RegExp(`${appUrl.replace(/[.:/]/g, '\\$&')}/q/([A-Za-z0-9_-]+)`).exec(mail!.text);
+    expect(match).not.toBeNull();
+    token = match![1];
+    expect(token.length).toBeGreaterThanOrEqual(43);
+    const row = (await sequelize.query<{ public_token_hash: string }>('SELECT public_token_hash FROM quotes WHERE id = ?', { replacements: [quote.id], type: QueryTypes.SELECT }))[0];
+    expect(row.public_token_hash).toBe(sha256(token));
+    expect((await counter.patch(`/api/quotes/${quote.id}`).send({ version: sent.body.version, lines: [] })).status).toBe(422);
+    const locked = await counter.patch(`/api/quotes/${quote.id}`).send({ version: sent.body.version, validUntil: '2027-03-01' });
+    expect(locked.status).toBe(409);
+    quote = sent.body;
+  });
+
+  it('opens the customer page from the link: the deposit, the policy and the cautions, before payment', async () => {
+    const page = await request(appUrl).get(`/q/${token}`);
+    expect(page.status).toBe(200);
+    const deposit = (quote.depositCents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
+    expect(page.text).toContain(deposit);
+    expect(page.text).toContain('Your deposit holds the parts and a bay for your job.');
+    expect(page.text).toContain('Accept and pay the deposit');
+    expect(page.text).toMatch(/certified/);
+    expect(page.text).toMatch(/piston-to-valve clearance/);
+    expect(page.text).toMatch(/re-tuned/);
+    expect(page.text).not.toContain('unitCostCents');
+    expect(page.text.indexOf('Our deposit policy')).toBeLessThan(page.text.indexOf('Accept and pay the deposit'));
+  });
+
+  it('answers a plain 404 to a wrong token, with no one’s data', async () => {
+    for (const wrong of [`${token.slice(0, -1)}${token.endsWith('A') ? 'B' : 'A'}`, 'short', 'demo-quote-nobody-at-all-000']) {
+      const page = await request(appUrl).get(`/q/${wrong}`);
+      expect(page.status).toBe(404);
+      expect(page.text).not.toContain('Whitlock');
+      expect((await request(appUrl).post(`/api/q/${wrong}/checkout`)).status).toBe(404);
+    }
+  });
+
+  it('checks out through the SDK for exactly the deposit', async () => {
+    const res = await request(appUrl).post(`/api/q/${token}/checkout`);
+    expect(res.status).toBe(303);
+    const url = new URL(res.headers.location);
+    expect(url.pathname).toMatch(/^\/pay\/cs_/);
+    sessionId = url.pathname.split('/').pop()!;
+    const session = await stripe.checkout.sessions.retrieve(sessionId);
+    expect(session.amount_total).toBe(quote.depositCents);
+    expect(session.metadata?.quoteId).toBe(String(quote.id));
+    expect(session.success_url).toBe(`${appUrl}/q/${token}?paid=1`);
+    expect(session.cancel_url).toBe(`${appUrl}/q/${token}?cancelled=1`);
+    const after = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
+    expect(after.status).toBe('accepted');
+    expect(after.payments).toEqual([expect.objectContaining({ status: 'pending', amountCents: quote.depositCents })]);
+  });
+
+  it('marks the quote deposit-paid when the payment completes (signed webhook)', async () => {
+    const done = await request(paymentsUrl).post(`/_test/sessions/${sessionId}/complete`);
+    expect(done.status).toBe(200);
+    completedEvent = done.body.event;
+    const paid = await pollQuote(quote.id, (q) => q.status === 'deposit-paid');
+    expect(paid.status).toBe('deposit-paid');
+    expect(paid.payments).toEqual([expect.objectContaining({ status: 'paid', amountCents: quote.depositCents })]);
+    expect(paid.paidCents).toBe(quote.depositCents);
+    const page = await request(appUrl).get(`/q/${token}`);
+    expect(page.text).toContain('Deposit paid');
+    expect(page.text).not.toContain('Accept and pay the deposit');
+  });
+
+  it('applies the same event twice only once', async () => {
+    const body = JSON.stringify(completedEvent);
+    const again = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', signed(body)).set('content-type', 'application/json').send(body);
+    expect(again.status).toBe(200);
+    expect(again.body.result).toBe('already');
+    const q = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
+    expect(q.payments.filter((p) => p.status === 'paid')).toHaveLength(1);
+    expect(q.paidCents).toBe(quote.depositCents);
+    const audits = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?", { replacements: [String(quote.id)], type: QueryTypes.SELECT });
+    expect(Number(audits[0].n)).toBe(1);
+  });
+
+  it('refuses a tampered or unsigned webhook with 400 and changes nothing', async () => {
+    // A forged "paid" for seeded quote 1 (sent, unpaid): signed, then altered after signing.
+    const forged = JSON.parse(JSON.stringify(completedEvent));
+    forged.id = 'evt_forged';
+    forged.data.object.id = 'cs_forged_session';
+    forged.data.object.metadata = { quoteId: '1' };
+    const original = JSON.stringify(forged);
+    const header = signed(original);
+    const tampered = original.replace('"cs_forged_session"', '"cs_forged_sessioN"');
+    const res = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', header).set('content-type', 'application/json').send(tampered);
+    expect(res.status).toBe(400);
+    const unsigned = await request(appUrl).post('/api/payments/webhook').set('content-type', 'application/json').send(original);
+    expect(unsigned.status).toBe(400);
+    const wrongSecret = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', stripe.webhooks.generateTestHeaderString({ payload: original, secret: 'whsec_someone_else' })).set('content-type', 'application/json').send(original);
+    expect(wrongSecret.status).toBe(400);
+    const seeded = (await manager.get('/api/quotes/1')).body as Quote;
+    expect(seeded.status).toBe('sent');
+    expect(seeded.payments).toEqual([]);
+    const rows = await sequelize.query('SELECT id FROM payments WHERE provider_session_id LIKE ?', { replacements: ['cs_forged%'], type: QueryTypes.SELECT });
+    expect(rows).toEqual([]);
+  });
+
+  it('refunds: managers only, never more than was paid, counted once with the webhook', async () => {
+    expect((await counter.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: 100 })).status).toBe(403);
+    const tooMuch = await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: quote.depositCents + 1 });
+    expect(tooMuch.status).toBe(422);
+    expect(tooMuch.body.errors).toEqual([expect.objectContaining({ field: 'amountCents' })]);
+    const part = await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: 5_000, reason: 'customer dropped the converter' });
+    expect(part.status).toBe(200);
+    expect(part.body.refundedCents).toBe(5_000);
+    expect(part.body.payments[0].status).toBe('partially-refunded');
+    // Let the fake's charge.refunded reach the app, then check it did not count the refund again.
+    const deadline = Date.now() + 10_000;
+    for (;;) {
+      const events = (await request(paymentsUrl).get('/_test/events')).body.data as { event: { type: string; data: { object: { payment_intent?: string } } }; delivery: { status: string } }[];
+      const refundedEvent = events.find((e) => e.event.type === 'charge.refunded');
+      if ((refundedEvent && refundedEvent.delivery.status !== 'pending') || Date.now() > deadline) {
+        expect(refundedEvent?.delivery.status).toBe('delivered');
+        break;
+      }
+      await new Promise((r) => setTimeout(r, 200));
+    }
+    const after = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
+    expect(after.refundedCents).toBe(5_000);
+    const rest = quote.depositCents - 5_000;
+    expect((await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: rest + 1 })).status).toBe(422);
+  });
+});
+
+describe('staff pages', () => {
+  it('lists quotes with their state in words', async () => {
+    const page = await manager.get('/quotes');
+    expect(page.status).toBe(200);
+    expect(page.text).toContain('Q-2026-0102');
+    expect(page.text).toContain('Deposit paid');
+    expect(page.text).toContain('Draft');
+  });
+
+  it('opens one quote with its lines and totals', async () => {
+    const page = await counter.get('/quotes/3');
+    expect(page.status).toBe(200);
+    expect(page.text).toContain('Q-2026-0103');
+    expect(page.text).toContain('Lantern Valley Strip Street 224');
+    expect(page.text).toContain('Send to customer');
+  });
+});
