@@ -94,4 +94,17 @@ export const accessMatrix: AccessRow[] = [
   { method: 'POST', path: '/api/builds', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
   { method: 'GET', path: '/api/builds/[id]', url: '/api/builds/1', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
   { method: 'PATCH', path: '/api/builds/[id]', url: '/api/builds/1', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+
+  // Quotes and the deposit (brief step 3). Staff read; managers and counter staff write; refunds are the
+  // manager's. Writes that would succeed get a body that fails validation (422) or an id that does not
+  // exist (404). The customer's link and the webhook need no account: an unknown token is 404 to
+  // everyone, an unsigned webhook 400.
+  { method: 'GET', path: '/api/quotes', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/quotes', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+  { method: 'GET', path: '/api/quotes/[id]', url: '/api/quotes/1', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'PATCH', path: '/api/quotes/[id]', url: '/api/quotes/3', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+  { method: 'POST', path: '/api/quotes/[id]/send', url: '/api/quotes/999999/send', expect: { anonymous: 401, manager: 404, counter: 404, tech: 403 } },
+  { method: 'POST', path: '/api/quotes/[id]/refund', url: '/api/quotes/2/refund', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  { method: 'POST', path: '/api/q/[token]/checkout', url: '/api/q/not-a-live-link-0123456789abcdef/checkout', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
+  { method: 'POST', path: '/api/payments/webhook', expect: { anonymous: 400, manager: 400, counter: 400, tech: 400 } },
 ];

@@ -114,7 +114,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                       </tr>
                       {open ? (
                         <tr>
-                          <td colSpan={9} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} /></td>
+                          <td colSpan={9} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} buildId={buildId ?? undefined} /></td>
                         </tr>
                       ) : null}
                     </RowGroup>
