@@ -1,6 +1,7 @@
 import { rankCams, type NeedKind, type RankingResult } from '@/lib/advisor';
 import { evaluateNeedRules, type Need as CatalogueNeed, type NeedRuleInput } from '@/lib/catalogue/need-rules';
 import { camCardsForRanking } from '@/lib/db/queries/advisor-cams';
+import { loadDynoHistory } from '@/lib/db/queries/dyno-history';
 import { loadNeedRules } from '@/lib/db/queries/rules';
 import { getShopSettings } from '@/lib/db/queries/settings';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
@@ -48,10 +49,11 @@ export async function rankForShop(
   build: BuildProfile,
   { camIds, includeCurves = true }: { camIds?: number[]; includeCurves?: boolean } = {},
 ): Promise<{ ok: true; result: ShopRanking } | { ok: false; missingIds: number[] }> {
-  const [{ cards, missingIds }, rules, settings] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings()]);
+  // The shop's measured before/after results (dyno runs) nudge the predicted gains of the cams they were measured on.
+  const [{ cards, missingIds }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory()]);
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;
-  const result = rankCams(build, cards, { needPriceCents: needPricesCents(rules, laborRateCents), includeCurves });
+  const result = rankCams(build, cards, { history, needPriceCents: needPricesCents(rules, laborRateCents), includeCurves });
   const byId = new Map(cards.map((card) => [String(card.id), card]));
   const rankings = result.rankings.map((ranking) => {
     const card = byId.get(String(ranking.camId))!;

@@ -107,4 +107,10 @@ export const accessMatrix: AccessRow[] = [
   { method: 'POST', path: '/api/quotes/[id]/refund', url: '/api/quotes/2/refund', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
   { method: 'POST', path: '/api/q/[token]/checkout', url: '/api/q/not-a-live-link-0123456789abcdef/checkout', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
   { method: 'POST', path: '/api/payments/webhook', expect: { anonymous: 400, manager: 400, counter: 400, tech: 400 } },
+  // Dyno runs (the brief's step 6). All staff read; technicians and managers record and delete. The
+  // POST body fails validation and the id rows name a run that does not exist, so nothing changes.
+  { method: 'GET', path: '/api/dyno-runs', url: '/api/dyno-runs?buildId=2', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  { method: 'POST', path: '/api/dyno-runs', expect: { anonymous: 401, manager: 422, counter: 403, tech: 422 } },
+  { method: 'GET', path: '/api/dyno-runs/[id]', url: '/api/dyno-runs/999999', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
+  { method: 'DELETE', path: '/api/dyno-runs/[id]', url: '/api/dyno-runs/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 404 } },
 ];

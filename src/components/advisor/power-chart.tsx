@@ -38,10 +38,15 @@ function series(curve: ChartCurve, index: number | null, metric: 'torqueLbFt' | 
   };
 }
 
-export function PowerChart({ baseline, candidates, markers, band }: {
+export function PowerChart({ baseline, candidates, markers, band, description }: {
   baseline: ChartCurve; candidates: ChartCurve[]; markers: ChartMarker[]; band?: { fromRpm: number; toRpm: number; label: string };
+  /** What the chart shows, for screen readers; defaults to the advisor's predicted curves. */
+  description?: string;
 }) {
   const all = [baseline, ...candidates];
+  // The x range covers every curve: measured pulls need not share one rpm grid or start together.
+  const rpms = all.flatMap((c) => c.points.map((p) => p.rpm));
+  const [minRpm, maxRpm] = rpms.length ? [Math.min(...rpms), Math.max(...rpms)] : [undefined, undefined];
   const maxY = Math.max(...all.flatMap((c) => c.points.flatMap((p) => [p.hp, p.torqueLbFt])), 100);
   const markerSets: ChartDataset<'line', { x: number; y: number }[]>[] = markers.map((m) => ({
     label: `${m.label} (${m.rpm.toLocaleString('en-US')} rpm)`,
@@ -75,14 +80,14 @@ export function PowerChart({ baseline, candidates, markers, band }: {
     maintainAspectRatio: false,
     interaction: { mode: 'nearest', intersect: false },
     scales: {
-      x: { type: 'linear', title: { display: true, text: 'Engine speed (rpm)' }, min: baseline.points[0]?.rpm, max: baseline.points.at(-1)?.rpm },
+      x: { type: 'linear', title: { display: true, text: 'Engine speed (rpm)' }, min: minRpm, max: maxRpm },
       torque: { type: 'linear', position: 'left', title: { display: true, text: 'Torque (lb·ft)' }, min: 0, suggestedMax: maxY },
       hp: { type: 'linear', position: 'right', title: { display: true, text: 'Power (hp)' }, min: 0, suggestedMax: maxY, grid: { drawOnChartArea: false } },
     },
     plugins: { legend: { position: 'bottom', labels: { usePointStyle: true, boxWidth: 10, font: { size: 11 } } } },
   };
   return (
-    <div className="h-96 w-full" role="img" aria-label={`Predicted torque and power from ${baseline.points[0]?.rpm} to ${baseline.points.at(-1)?.rpm} rpm for the current cam and ${candidates.length} candidates`}>
+    <div className="h-96 w-full" role="img" aria-label={description ?? `Predicted torque and power from ${minRpm} to ${maxRpm} rpm for the current cam and ${candidates.length} candidates`}>
       <Line data={data} options={options} />
     </div>
   );

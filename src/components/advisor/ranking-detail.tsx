@@ -3,7 +3,7 @@
 import type { ShopRankingEntry } from '@/lib/advisor-service';
 import { SCORING_WEIGHTS, type SubscoreName } from '@/lib/advisor/weights';
 import { MakeQuoteButton } from '@/components/quotes/make-quote-button';
-import { degText, dollars, rpmText } from './format';
+import { degText, dollars, pctText, rpmText } from './format';
 
 type Ranking = ShopRankingEntry;
 
@@ -41,6 +41,15 @@ export function RankingDetail({ ranking, buildId }: { ranking: Ranking; buildId?
         ) : null}
       </section>
       <section>
+        {ranking.history ? (
+          <div className="mb-3 rounded border border-gauge-500/40 bg-gauge-100 p-2 text-sm text-gauge-700">
+            <h3 className="font-semibold">Measured on {ranking.history.matches} similar build{ranking.history.matches === 1 ? '' : 's'} in this shop</h3>
+            <p>
+              Measured peak-power gain {pctText(ranking.history.measuredGainPctPeakHp)} (dyno, corrected to standard air) against the model’s indicative {pctText(ranking.history.modelGainPctPeakHp)};
+              the prediction shown uses {pctText(ranking.history.adjustedGainPctPeakHp)}, weighing the model as two perfectly similar jobs.
+            </p>
+          </div>
+        ) : null}
         <h3 className="text-sm font-semibold">What the job then needs</h3>
         <ul className="mt-1 list-disc pl-5 text-sm">
           {ranking.needs.map((n, i) => <li key={i}>{n.reason}</li>)}

@@ -100,6 +100,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                           <button type="button" aria-expanded={open} className="text-left font-semibold underline-offset-2 hover:underline" onClick={() => setOpenCamId(open ? null : id)}>
                             {r.camName}
                           </button>
+                          {r.history ? <span className="ml-2 rounded bg-gauge-100 px-1.5 text-xs text-gauge-700">Measured on {r.history.matches} similar build{r.history.matches === 1 ? '' : 's'}: {pctText(r.history.measuredGainPctPeakHp)}</span> : null}
                           {r.subscores.emissions < 100 ? <span className="ml-2 rounded bg-caution-100 px-1.5 text-xs text-caution-700">Emissions: not certified</span> : null}
                         </td>
                         <td className="px-3 py-2 text-right">{r.score.toFixed(0)}/100</td>

@@ -1,0 +1,131 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { DynoPanel } from '@/components/jobs/dyno-panel';
+import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
+import { valveEvents } from '@/lib/advisor/valve-events';
+import { requireRoleForPage } from '@/lib/auth/guard';
+import { getJobSheet } from '@/lib/db/queries/jobs';
+
+export const metadata: Metadata = { title: 'Job' };
+
+function Spec({ label, value }: { label: string; value: React.ReactNode }) {
+  return (
+    <div className="flex flex-col border-b border-steel-100 py-1.5">
+      <dt className="text-xs font-semibold uppercase tracking-wide text-ink-muted">{label}</dt>
+      <dd className="spec text-sm">{value}</dd>
+    </div>
+  );
+}
+
+const deg = (n: number) => `${n.toFixed(1)}°`;
+const inch = (n: number, digits = 3) => `${n.toFixed(digits)} in`;
+const KIND_WORDS: Record<string, string> = { cam: 'Cam', part: 'Part', tune: 'Tune', labor: 'Labour', other: 'Other' };
+
+export default async function JobPage({ params }: { params: Promise<{ id: string }> }) {
+  await requireRoleForPage('tech', 'manager');
+  const { id } = await params;
+  if (!/^\d{1,10}$/.test(id)) notFound();
+  const job = await getJobSheet(Number(id));
+  if (!job) notFound();
+  const p = job.profile;
+  const ci = p ? displacementCi(p.engine.boreIn, p.engine.strokeIn, p.engine.cylinders) : null;
+  const events = job.cam ? valveEvents(job.cam) : null;
+  const parts = job.lines.filter((l) => l.kind !== 'labor');
+  const labour = job.lines.filter((l) => l.kind === 'labor');
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        title={`${job.number} · ${job.vehicleLabel}`}
+        lead={<>{job.customerName} · <StateTag tone={job.status === 'deposit-paid' ? 'ok' : 'muted'}>{job.status === 'deposit-paid' ? 'Deposit paid' : 'Accepted'}</StateTag></>}
+        back={{ href: '/jobs', label: 'Jobs' }}
+      />
+
+      <section aria-labelledby="cautions-title" className="rounded border border-caution-700/40 bg-caution-100 p-3 text-sm text-caution-700">
+        <h2 id="cautions-title" className="font-semibold">Before the engine runs</h2>
+        <ul className="mt-1 list-disc pl-5">
+          <li>Valve springs (seat and open pressure, coil bind), piston-to-valve clearance and pushrod length must be checked by a qualified technician on this engine.</li>
+          <li>The engine must be re-tuned after the swap; record the dyno pulls on the tuned engine.</li>
+          <li>Local codes and licensed practice come first.</li>
+        </ul>
+      </section>
+
+      <h2 className="text-lg font-semibold">Build sheet</h2>
+      <div className="grid gap-6 lg:grid-cols-2">
+        <section aria-labelledby="engine-title">
+          <h3 id="engine-title" className="font-semibold">Engine combination</h3>
+          {p && ci !== null ? (
+            <dl className="grid grid-cols-2 gap-x-6">
+              <Spec label="Displacement" value={`${ci.toFixed(0)} in³ (${litresFromCubicInches(ci).toFixed(1)} L), ${p.engine.cylinders} cylinders`} />
+              <Spec label="Bore × stroke" value={`${inch(p.engine.boreIn)} × ${inch(p.engine.strokeIn)}`} />
+              <Spec label="Rod length" value={inch(p.engine.rodLengthIn)} />
+              <Spec label="Static compression" value={`${p.engine.compressionRatio.toFixed(1)}:1`} />
+              <Spec label="Heads" value={`${p.engine.headMaterial}, ${p.engine.intakeFlowCfm} cfm @ 28 inH₂O`} />
+              <Spec label="Intake manifold" value={p.engine.intakeManifold} />
+              <Spec label="Cylinder deactivation" value={p.engine.cylinderDeactivation} />
+              <Spec label="Headers · exhaust" value={`${p.exhaust.headers}${p.exhaust.primaryIn && p.exhaust.headers !== 'manifold' ? ` ${inch(p.exhaust.primaryIn, 3)} primaries` : ''} · ${p.exhaust.system}`} />
+              <Spec label="Transmission · stall" value={`${p.drivetrain.transmission}${p.drivetrain.stallRpm ? ` · ${p.drivetrain.stallRpm.toLocaleString('en-US')} rpm stall` : ''}`} />
+              <Spec label="Axle ratio · tyre" value={`${p.drivetrain.axleRatio.toFixed(2)}:1 · ${p.drivetrain.tireDiameterIn} in`} />
+              <Spec label="Cam coming out" value={p.baselineCam.name} />
+              <Spec label="Fuel" value={`${p.use.fuelOctane} octane`} />
+            </dl>
+          ) : (
+            <p className="text-sm text-fault-700">The saved build could not be read; ask the counter to check it.</p>
+          )}
+        </section>
+        <section aria-labelledby="cam-title">
+          <h3 id="cam-title" className="font-semibold">Cam going in</h3>
+          {job.cam && events ? (
+            <>
+              <p className="spec text-sm">{job.cam.name}</p>
+              <dl className="grid grid-cols-2 gap-x-6">
+                <Spec label='Duration @0.050" in / ex' value={`${deg(job.cam.intakeDuration050)} / ${deg(job.cam.exhaustDuration050)}`} />
+                <Spec label="Lift at the valve in / ex" value={`${inch(job.cam.intakeLiftIn)} / ${inch(job.cam.exhaustLiftIn)} (${(job.cam.rockerRatio ?? 1.7).toFixed(2)}:1 rocker)`} />
+                <Spec label="Lobe separation angle" value={deg(job.cam.lsa)} />
+                <Spec label="Installed intake centerline" value={`${deg(job.cam.intakeCenterline)} ATDC`} />
+              </dl>
+              <h4 className="mt-3 text-sm font-semibold">Valve events at 0.050&quot;</h4>
+              <dl className="grid grid-cols-3 gap-x-4">
+                <Spec label="IVO" value={`${deg(events.ivo)} BTDC`} />
+                <Spec label="IVC" value={`${deg(events.ivc)} ABDC`} />
+                <Spec label="Overlap" value={deg(events.overlap)} />
+                <Spec label="EVO" value={`${deg(events.evo)} BBDC`} />
+                <Spec label="EVC" value={`${deg(events.evc)} ATDC`} />
+                <Spec label="Exhaust centerline" value={`${deg(events.exhaustCenterline)} BTDC`} />
+              </dl>
+              <p className="mt-1 text-xs text-ink-muted">Degree the cam in at the installed intake centerline above. Events from standard cam-card arithmetic (IVO = dur/2 − ICL, IVC = dur/2 + ICL − 180, ECL = 2·LSA − ICL).</p>
+              {job.cam.supplierNotes ? <p className="mt-2 text-sm text-ink-soft">{job.cam.supplierNotes}</p> : null}
+            </>
+          ) : (
+            <p className="text-sm text-ink-soft">This quote names no cam.</p>
+          )}
+        </section>
+      </div>
+
+      <section aria-labelledby="parts-title">
+        <h3 id="parts-title" className="font-semibold">Parts and work</h3>
+        <table className={tableClass}>
+          <caption className="sr-only">Parts and labour on the quote, without prices</caption>
+          <thead>
+            <tr>
+              <th scope="col" className={thClass}>What</th>
+              <th scope="col" className={thClass}>Item</th>
+              <th scope="col" className={`${thClass} text-right`}>Quantity</th>
+            </tr>
+          </thead>
+          <tbody>
+            {[...parts, ...labour].map((line, i) => (
+              <tr key={i}>
+                <td className={tdClass}>{KIND_WORDS[line.kind] ?? line.kind}</td>
+                <td className={tdClass}>{line.description}</td>
+                <td className={`${tdClass} spec text-right`}>{line.kind === 'labor' ? `${line.quantity.toFixed(1)} h` : `${line.quantity} ×`}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+
+      {job.buildId !== null ? <DynoPanel buildId={job.buildId} quoteId={job.quoteId} /> : null}
+    </div>
+  );
+}

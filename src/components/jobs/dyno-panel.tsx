@@ -1,0 +1,105 @@
+'use client';
+
+import { useState } from 'react';
+import useSWR from 'swr';
+import { PowerChart, type ChartCurve } from '@/components/advisor/power-chart';
+import { buttonClass, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
+import { DynoRunForm } from './dyno-run-form';
+
+// The job's dyno runs: measured figures, observed and corrected, a chart of before against after
+// (corrected curves; the before pull is drawn the neutral baseline way), and the form to add one.
+
+async function fetchRuns(url: string): Promise<DynoRunView[]> {
+  const response = await fetch(url, { credentials: 'same-origin' });
+  if (!response.ok) throw new Error(response.status === 401 ? 'You are signed out. Sign in again.' : `The dyno runs did not load (${response.status}).`);
+  return ((await response.json()) as { runs: DynoRunView[] }).runs;
+}
+
+const STANDARD_NAMES: Record<string, string> = { 'sae-j1349': 'SAE J1349', 'sae-j607': 'SAE J607', 'din-70020': 'DIN 70020', none: 'none' };
+const fixed = (n: number | null | undefined, digits: number, unit: string) => (n === null || n === undefined ? '—' : `${n.toFixed(digits)} ${unit}`);
+const when = (iso: string) => iso.slice(0, 16).replace('T', ' ');
+
+function curveOf(run: DynoRunView): ChartCurve | null {
+  if (!run.correctedCurve) return null;
+  return { label: `${run.phase === 'before' ? 'Before' : 'After'} · ${run.camName ?? 'cam not named'} · ${when(run.runAt)} (measured, ${run.correction ? STANDARD_NAMES[run.correction.standard] : "uncorrected"})`, points: run.correctedCurve };
+}
+
+export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: number }) {
+  const { data, error, isLoading, mutate } = useSWR(`/api/dyno-runs?buildId=${buildId}`, fetchRuns);
+  const [message, setMessage] = useState<string | null>(null);
+  const runs = data ?? [];
+  const before = runs.filter((r) => r.phase === 'before' && r.correctedCurve).at(-1);
+  const baseline = before ? curveOf(before) : null;
+  const afters = runs.filter((r) => r.phase === 'after').map(curveOf).filter((c): c is ChartCurve => c !== null);
+
+  async function remove(run: DynoRunView) {
+    if (!window.confirm(`Delete the ${run.phase} run of ${when(run.runAt)}? The audit log keeps what it said.`)) return;
+    const response = await fetch(`/api/dyno-runs/${run.id}`, { method: 'DELETE', credentials: 'same-origin' });
+    setMessage(response.ok ? 'Run deleted.' : `The run was not deleted (${response.status}).`);
+    await mutate();
+  }
+
+  return (
+    <section aria-labelledby="dyno-title" className="flex flex-col gap-4">
+      <h2 id="dyno-title" className="text-lg font-semibold">Dyno runs</h2>
+      <p className="text-sm text-ink-soft">
+        These are measured results. Once a build has a before and an after pull, the advisor counts the measured gain for similar builds next to its indicative prediction.
+      </p>
+      {error ? <p role="alert" className="text-sm text-fault-700">{(error as Error).message}</p> : null}
+      {isLoading ? <p className="text-sm text-ink-muted">Loading runs…</p> : null}
+      {message ? <p role="status" className="text-sm">{message}</p> : null}
+      {runs.length ? (
+        <table className={tableClass}>
+          <caption className="sr-only">Recorded dyno runs, observed and corrected</caption>
+          <thead>
+            <tr>
+              <th scope="col" className={thClass}>Pull</th>
+              <th scope="col" className={thClass}>When (UTC)</th>
+              <th scope="col" className={thClass}>Cam</th>
+              <th scope="col" className={thClass}>Air</th>
+              <th scope="col" className={`${thClass} text-right`}>Peak power observed</th>
+              <th scope="col" className={`${thClass} text-right`}>Peak torque observed</th>
+              <th scope="col" className={`${thClass} text-right`}>Correction</th>
+              <th scope="col" className={`${thClass} text-right`}>Corrected power · torque</th>
+              <th scope="col" className={thClass}><span className="sr-only">Actions</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            {runs.map((run) => (
+              <tr key={run.id}>
+                <td className={tdClass}>{run.phase === 'before' ? 'Before' : 'After'}</td>
+                <td className={`${tdClass} spec`}>{when(run.runAt)}</td>
+                <td className={`${tdClass} spec`}>{run.camName ?? '—'}</td>
+                <td className={`${tdClass} spec`}>{fixed(run.air.airTempC, 1, '°C')} · {fixed(run.air.baroKpa, 1, 'kPa')} · {fixed(run.air.humidityPct, 0, '%')}</td>
+                <td className={`${tdClass} spec text-right`}>{fixed(run.observed.peakHp, 1, 'hp')} @ {run.observed.peakHpRpm ?? '—'} rpm</td>
+                <td className={`${tdClass} spec text-right`}>{fixed(run.observed.peakTorqueLbFt, 1, 'lb·ft')} @ {run.observed.peakTorqueRpm ?? '—'} rpm</td>
+                <td className={`${tdClass} spec text-right`} title={run.correction ? `${run.correction.formula} — ${run.correction.source}` : 'no air data'}>
+                  {run.correction ? `${STANDARD_NAMES[run.correction.standard]} × ${run.correction.factor.toFixed(4)}` : '—'}
+                </td>
+                <td className={`${tdClass} spec text-right`}>{fixed(run.corrected?.peakHp, 1, 'hp')} · {fixed(run.corrected?.peakTorqueLbFt, 1, 'lb·ft')}</td>
+                <td className={tdClass}><button type="button" className={buttonClass.danger} onClick={() => remove(run)}>Delete</button></td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : !isLoading && !error ? <p className="text-sm text-ink-muted">No runs recorded for this build yet.</p> : null}
+      {baseline || afters.length ? (
+        <figure className="rounded border border-steel-100 bg-paper-raised p-3">
+          <PowerChart
+            baseline={baseline ?? { label: 'Before (no pull recorded as a curve)', points: [] }}
+            candidates={afters}
+            markers={[]}
+            description={`Measured, corrected torque and power: the before pull (solid grey) and ${afters.length} after pull(s), rpm across`}
+          />
+          <figcaption className="mt-2 text-xs text-ink-muted">
+            Measured on this shop’s dyno and corrected to standard air. Torque on the left axis, power on the right; power = lb·ft × rpm ÷ 5252. Runs recorded as peak figures only are in the table, not the chart.
+          </figcaption>
+        </figure>
+      ) : null}
+      <div className="rounded border border-steel-100 bg-paper-raised p-3">
+        <DynoRunForm buildId={buildId} quoteId={quoteId} onSaved={() => void mutate()} />
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,153 @@
+import { Op, type Transaction } from 'sequelize';
+import type { SessionUser } from '@/lib/auth/guard';
+import { recordAudit } from '@/lib/audit';
+import { invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { correctionFor, type Correction } from '@/lib/dyno/correction';
+import { correctedFigure, peaksOf, pullWithPower, round1, type PullPoint } from '@/lib/dyno/figures';
+import type { DynoRunValues } from '@/lib/schemas/dyno-run';
+import { Build, Cam, db, DynoRun, Quote, User } from '../models';
+
+// Dyno runs: written by technicians and managers, read by all staff. Observed figures are stored as
+// recorded; corrected figures are worked out on every read from the stored air data, so they always
+// follow the formula in src/lib/dyno/correction.ts.
+
+export const JOB_QUOTE_STATUSES = ['deposit-paid', 'accepted'] as const;
+
+export type DynoRunView = {
+  id: number;
+  buildId: number;
+  quoteId: number | null;
+  camId: number | null;
+  camName: string | null;
+  phase: 'before' | 'after';
+  runAt: string;
+  recordedBy: string | null;
+  air: { airTempC: number | null; baroKpa: number | null; humidityPct: number | null };
+  correction: Correction | null;
+  observed: { peakHp: number | null; peakHpRpm: number | null; peakTorqueLbFt: number | null; peakTorqueRpm: number | null };
+  corrected: { peakHp: number | null; peakTorqueLbFt: number | null } | null;
+  curve: PullPoint[] | null;
+  correctedCurve: PullPoint[] | null;
+  notes: string | null;
+};
+
+type RunWithRefs = DynoRun & { cam?: Cam | null; recordedBy?: User | null };
+
+const includes = () => [
+  { model: Cam, as: 'cam', attributes: ['id', 'sku', 'name'] },
+  { model: User, as: 'recordedBy', attributes: ['id', 'name'] },
+];
+
+export function runCorrection(run: Pick<DynoRun, 'correctionStandard' | 'airTempC' | 'baroKpa' | 'humidityPct'>): Correction | null {
+  if (run.correctionStandard === 'none') return correctionFor('none', { airTempC: 0, baroKpa: 0, humidityPct: 0 });
+  if (run.airTempC === null || run.baroKpa === null || run.humidityPct === null) return null;
+  return correctionFor(run.correctionStandard, { airTempC: run.airTempC, baroKpa: run.baroKpa, humidityPct: run.humidityPct });
+}
+
+export function viewOf(run: RunWithRefs): DynoRunView {
+  const correction = runCorrection(run);
+  const f = correction?.factor;
+  const scale = (n: number | null) => (n === null || f === undefined ? null : round1(correctedFigure(n, f)));
+  return {
+    id: run.id,
+    buildId: run.buildId,
+    quoteId: run.quoteId ?? null,
+    camId: run.camId ?? null,
+    camName: run.cam ? `${run.cam.sku} ${run.cam.name}` : null,
+    phase: run.phase,
+    runAt: new Date(run.runAt).toISOString(),
+    recordedBy: run.recordedBy?.name ?? null,
+    air: { airTempC: run.airTempC, baroKpa: run.baroKpa, humidityPct: run.humidityPct },
+    correction,
+    observed: { peakHp: run.peakHp, peakHpRpm: run.peakHpRpm, peakTorqueLbFt: run.peakTorqueLbFt, peakTorqueRpm: run.peakTorqueRpm },
+    corrected: correction ? { peakHp: scale(run.peakHp), peakTorqueLbFt: scale(run.peakTorqueLbFt) } : null,
+    curve: run.curve,
+    // Torque is scaled by the factor and power computed again from it, so hp = lb·ft · rpm / 5252 still holds.
+    correctedCurve: run.curve && f !== undefined ? pullWithPower(run.curve.map((p) => ({ rpm: p.rpm, torqueLbFt: correctedFigure(p.torqueLbFt, f) }))) : null,
+    notes: run.notes,
+  };
+}
+
+export async function buildExists(buildId: number): Promise<boolean> {
+  db();
+  return (await Build.count({ where: { id: buildId } })) > 0;
+}
+
+export async function listDynoRuns(buildId: number): Promise<DynoRunView[]> {
+  db();
+  const runs = await DynoRun.findAll({ where: { buildId }, include: includes(), order: [['runAt', 'ASC'], ['id', 'ASC']] });
+  return runs.map((r) => viewOf(r as RunWithRefs));
+}
+
+export async function getDynoRun(id: number, transaction?: Transaction): Promise<DynoRunView | null> {
+  db();
+  const run = await DynoRun.findByPk(id, { include: includes(), transaction });
+  return run ? viewOf(run as RunWithRefs) : null;
+}
+
+/** The job a run belongs to: the named quote (it must be this build's), else the build's latest accepted or paid quote. */
+async function quoteFor(values: DynoRunValues, t: Transaction): Promise<Quote | null> {
+  if (values.quoteId) {
+    const quote = await Quote.findByPk(values.quoteId, { transaction: t });
+    if (!quote) throw invalid([{ field: 'quoteId', message: `no quote with id ${values.quoteId}` }]);
+    if (quote.buildId !== values.buildId) throw invalid([{ field: 'quoteId', message: `quote ${values.quoteId} is not for build ${values.buildId}` }]);
+    return quote;
+  }
+  return Quote.findOne({ where: { buildId: values.buildId, status: { [Op.in]: [...JOB_QUOTE_STATUSES] } }, order: [['updatedAt', 'DESC'], ['id', 'DESC']], transaction: t });
+}
+
+export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip: string | null): Promise<WriteOutcome<DynoRunView>> {
+  return runWrite(async (t) => {
+    const build = await Build.findByPk(values.buildId, { transaction: t });
+    if (!build) throw invalid([{ field: 'buildId', message: `no build with id ${values.buildId}` }]);
+    const quote = await quoteFor(values, t);
+    let camId = values.camId ?? null;
+    if (camId !== null) {
+      if (!(await Cam.count({ where: { id: camId }, transaction: t }))) throw invalid([{ field: 'camId', message: `no cam with id ${camId}` }]);
+    } else {
+      camId = values.phase === 'after' ? (quote?.camId ?? null) : (build.baselineCamId ?? null);
+    }
+    if (values.phase === 'after' && camId === null) {
+      throw invalid([{ field: 'camId', message: 'an after run needs the cam that was fitted: give camId (this build has no accepted quote with a cam)' }]);
+    }
+    const curve = values.curve ? pullWithPower(values.curve) : null;
+    const peaks = curve
+      ? peaksOf(curve)
+      : { peakHp: values.peak!.hp, peakHpRpm: values.peak!.hpRpm, peakTorqueLbFt: values.peak!.torqueLbFt, peakTorqueRpm: values.peak!.torqueRpm };
+    const run = await DynoRun.create(
+      {
+        buildId: values.buildId,
+        quoteId: quote?.id ?? null,
+        camId,
+        recordedByUserId: user.id,
+        phase: values.phase,
+        runAt: values.runAt ? new Date(values.runAt) : new Date(),
+        correctionStandard: values.correctionStandard,
+        airTempC: values.airTempC,
+        baroKpa: values.baroKpa,
+        humidityPct: values.humidityPct,
+        ...peaks,
+        curve,
+        notes: values.notes || null,
+      },
+      { transaction: t },
+    );
+    const record = (await getDynoRun(run.id, t))!;
+    await recordAudit(
+      { user, action: 'dyno-run.recorded', entityType: 'dyno-run', entityId: run.id, after: { buildId: record.buildId, phase: record.phase, camId: record.camId, observed: record.observed, corrected: record.corrected }, ip },
+      t,
+    );
+    return { record };
+  });
+}
+
+export async function deleteDynoRun(id: number, user: SessionUser, ip: string | null): Promise<WriteOutcome<{ id: number; deleted: true }>> {
+  return runWrite(async (t) => {
+    const run = await DynoRun.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
+    if (!run) throw notFound();
+    const before = { buildId: run.buildId, phase: run.phase, camId: run.camId, peakHp: run.peakHp, peakTorqueLbFt: run.peakTorqueLbFt, runAt: run.runAt };
+    await run.destroy({ transaction: t });
+    await recordAudit({ user, action: 'dyno-run.deleted', entityType: 'dyno-run', entityId: id, before, ip }, t);
+    return { record: { id, deleted: true as const } };
+  });
+}
