@@ -1,28 +1,18 @@
 import type { FormikErrors } from 'formik';
 import { setIn } from 'formik';
 import type { z } from 'zod';
+import type { CamRecord } from '@/lib/db/queries/cams';
 import { BUILD_LIMITS } from '@/lib/schemas/build-profile';
 
 // The interview form's values (every input is text, as typed) and the two conversions around them:
 // form → the JSON POST/PATCH /api/builds takes, and a stored build → form. Field names are the API's
 // own dotted paths ("profile.engine.boreIn"), so the server's 422 lands on the same inputs.
 
-export type BaselineCard = {
-  id: number;
-  sku: string;
-  name: string;
-  baselineForLiters: number | null;
-  intakeDuration050: number;
-  exhaustDuration050: number;
-  intakeAdvertised: number | null;
-  exhaustAdvertised: number | null;
-  intakeLiftIn: number;
-  exhaustLiftIn: number;
-  lsa: number;
-  intakeCenterline: number;
-  rockerRatio: number;
-  springMaxLiftIn: number | null;
-};
+export type BaselineCard = Pick<
+  CamRecord,
+  'id' | 'sku' | 'name' | 'baselineForLiters' | 'intakeDuration050' | 'exhaustDuration050' | 'intakeAdvertised' | 'exhaustAdvertised' |
+  'intakeLiftIn' | 'exhaustLiftIn' | 'lsa' | 'intakeCenterline' | 'rockerRatio' | 'springMaxLiftIn'
+>;
 
 type S = string;
 export type InterviewValues = {
