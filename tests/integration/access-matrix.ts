@@ -105,6 +105,9 @@ export const accessMatrix: AccessRow[] = [
   { method: 'PATCH', path: '/api/quotes/[id]', url: '/api/quotes/3', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
   { method: 'POST', path: '/api/quotes/[id]/send', url: '/api/quotes/999999/send', expect: { anonymous: 401, manager: 404, counter: 404, tech: 403 } },
   { method: 'POST', path: '/api/quotes/[id]/refund', url: '/api/quotes/2/refund', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  // The manager's numbers: reads for managers only.
+  { method: 'GET', path: '/api/reports/summary', expect: managerRead },
+  { method: 'GET', path: '/api/reports/quotes.csv', expect: managerRead },
   { method: 'POST', path: '/api/q/[token]/checkout', url: '/api/q/not-a-live-link-0123456789abcdef/checkout', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
   { method: 'POST', path: '/api/payments/webhook', expect: { anonymous: 400, manager: 400, counter: 400, tech: 400 } },
   // Dyno runs (the brief's step 6). All staff read; technicians and managers record and delete. The

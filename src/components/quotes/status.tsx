@@ -14,6 +14,11 @@ const PAYMENT_WORD: Record<string, string> = {
   pending: 'Checkout started', paid: 'Paid', failed: 'Failed', expired: 'Checkout expired', refunded: 'Refunded', 'partially-refunded': 'Partly refunded',
 };
 
+/** The word for a quote state, as every screen says it. */
+export function quoteStatusWord(status: string): string {
+  return QUOTE_WORD[status] ?? status;
+}
+
 export function QuoteStatusTag({ status }: { status: string }) {
   return <StateTag tone={QUOTE_TONE[status] ?? 'muted'}>{QUOTE_WORD[status] ?? status}</StateTag>;
 }

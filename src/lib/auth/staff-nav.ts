@@ -12,6 +12,7 @@ export const STAFF_LINKS: readonly StaffLink[] = [
   { href: '/quotes', label: 'Quotes', description: 'Drafts, sent quotes and deposits, with their state.', roles: ['manager', 'counter', 'tech'] },
   { href: '/jobs', label: 'Jobs', description: 'Accepted jobs: the build sheet, the parts and the dyno runs before and after.', roles: ['manager', 'tech'] },
   { href: '/catalogue', label: 'Catalogue', description: 'Cams, parts, labour operations and the rules that tie them together.', roles: ['manager', 'counter'] },
+  { href: '/reports', label: 'Numbers', description: 'Quotes, conversion, deposits, refunds and margins for a date range.', roles: ['manager'] },
   { href: '/staff', label: 'Staff', description: 'Invite people, change roles, switch accounts off.', roles: ['manager'] },
   { href: '/account', label: 'Account', description: 'Your own password.', roles: ['manager', 'counter', 'tech'] },
 ];
