@@ -10,7 +10,7 @@ import type { Margin } from '@/lib/reports/arithmetic';
 import { StatusChart } from './status-chart';
 
 // The manager's numbers: one calm table, every figure with its unit or currency beside it.
-const pct = (bp: number | null) => (bp === null ? '—' : `${(bp / 100).toLocaleString('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 2 })} %`);
+const pct = (bp: number | null) => (bp === null ? '—' : `${(bp / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} %`);
 const count = (n: number, unit: string) => `${n.toLocaleString('en-US')} ${unit}`;
 const quotes = (n: number) => count(n, n === 1 ? 'quote' : 'quotes');
 
@@ -18,8 +18,8 @@ function Row({ label, figure, value, note }: { label: string; figure: string; va
   return (
     <tr>
       <th scope="row" className={`${tdClass} text-left font-normal`}>{label}</th>
-      <td className={`${tdClass} spec text-right`}>{figure}</td>
-      <td className={`${tdClass} spec text-right`}>{value ?? ''}</td>
+      <td className={`${tdClass} spec whitespace-nowrap text-right`}>{figure}</td>
+      <td className={`${tdClass} spec whitespace-nowrap text-right`}>{value ?? ''}</td>
       <td className={`${tdClass} text-xs text-ink-muted`}>{note ?? ''}</td>
     </tr>
   );
@@ -34,7 +34,7 @@ function Section({ title }: { title: string }) {
 }
 
 function MarginRow({ label, m }: { label: string; m: Margin }) {
-  return <Row label={label} figure={pct(m.marginBp)} value={`${formatCents(m.marginCents)} USD`} note={`sold ${formatCents(m.revenueCents)} USD, cost ${formatCents(m.costCents)} USD`} />;
+  return <Row label={label} figure={pct(m.marginBp)} value={formatCents(m.marginCents)} note={`sold ${formatCents(m.revenueCents)}, cost ${formatCents(m.costCents)}`} />;
 }
 
 export function ReportPanel({ from, to }: { from?: string; to?: string }) {
@@ -94,16 +94,16 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
                   </thead>
                   <tbody>
                     <Section title="Quotes created in the range" />
-                    <Row label="All quotes" figure={quotes(data.created.count)} value={`${formatCents(data.created.valueCents)} USD`} note="total incl. tax" />
+                    <Row label="All quotes" figure={quotes(data.created.count)} value={formatCents(data.created.valueCents)} note="total incl. tax" />
                     {data.byStatus.map((s) => (
-                      <Row key={s.status} label={quoteStatusWord(s.status)} figure={quotes(s.count)} value={`${formatCents(s.valueCents)} USD`} note="state now" />
+                      <Row key={s.status} label={quoteStatusWord(s.status)} figure={quotes(s.count)} value={formatCents(s.valueCents)} note="state now" />
                     ))}
-                    <Row label="Average quote" figure="" value={data.averageQuoteCents === null ? '—' : `${formatCents(data.averageQuoteCents)} USD`} note="total ÷ quotes" />
+                    <Row label="Average quote" figure="" value={formatCents(data.averageQuoteCents)} note="total ÷ quotes" />
                     <Row label="Sent → deposit paid" figure={pct(data.conversion.rateBp)} value={`${data.conversion.depositPaidCount} of ${quotes(data.conversion.sentCount)}`} note="of the quotes ever sent" />
                     <Section title="Deposits paid in the range" />
-                    <Row label="Deposits taken" figure={count(data.deposits.count, data.deposits.count === 1 ? 'payment' : 'payments')} value={`${formatCents(data.deposits.takenCents)} USD`} />
-                    <Row label="Refunded" figure="" value={`${formatCents(data.deposits.refundedCents)} USD`} note="of those deposits, so far" />
-                    <Row label="Net deposits" figure="" value={`${formatCents(data.deposits.netCents)} USD`} note="taken − refunded" />
+                    <Row label="Deposits taken" figure={count(data.deposits.count, data.deposits.count === 1 ? 'payment' : 'payments')} value={formatCents(data.deposits.takenCents)} />
+                    <Row label="Refunded" figure="" value={formatCents(data.deposits.refundedCents)} note="of those deposits, so far" />
+                    <Row label="Net deposits" figure="" value={formatCents(data.deposits.netCents)} note="taken − refunded" />
                     <Section title="Margin on deposit-paid quotes" />
                     <MarginRow label="Cams" m={data.margin.cams} />
                     <MarginRow label="Parts" m={data.margin.parts} />
@@ -127,8 +127,8 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
                       {data.topCams.map((c) => (
                         <tr key={c.camId}>
                           <td className={tdClass}><span className="spec">{c.sku}</span> {c.name}</td>
-                          <td className={`${tdClass} spec text-right`}>{quotes(c.quotes)}</td>
-                          <td className={`${tdClass} spec text-right`}>{quotes(c.deposits)}</td>
+                          <td className={`${tdClass} spec whitespace-nowrap text-right`}>{quotes(c.quotes)}</td>
+                          <td className={`${tdClass} spec whitespace-nowrap text-right`}>{quotes(c.deposits)}</td>
                         </tr>
                       ))}
                       {data.topCams.length === 0 ? <tr><td colSpan={3} className={`${tdClass} text-ink-muted`}>No quote named a cam in this range.</td></tr> : null}
@@ -138,7 +138,7 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
               </div>
             </div>
           )}
-          <p className="text-xs text-ink-muted">Margins use the catalogue’s current cost for each cam and part line. Amounts in US dollars; the store keeps whole cents.</p>
+          <p className="text-xs text-ink-muted">Margins use the catalogue’s current cost for each cam and part line. Amounts in US dollars ($). Quote values include tax; margins are on line prices before tax. The store keeps whole cents.</p>
         </>
       ) : null}
     </div>

@@ -9,8 +9,8 @@ ChartJS.register(CategoryScale, LinearScale, BarElement, Tooltip);
 
 export type StatusBar = { status: string; count: number };
 
-// Bars take the state's tone (the same tones as the status tags), but the state's word is written on
-// the axis under every bar and the count above it, so colour never carries the meaning alone.
+// Horizontal bars take the state's tone (the same tones as the status tags), but the state's word is
+// written beside every bar and the count at its end, so colour never carries the meaning alone.
 const TONE: Record<string, string> = {
   draft: palette.steel[500], sent: palette.gauge[500], accepted: palette.gauge[700], 'deposit-paid': palette.ok[700],
   declined: palette.fault[700], expired: palette.ember[700], cancelled: palette.steel[700],
@@ -25,11 +25,11 @@ const countsOnBars: Plugin<'bar'> = {
     ctx.save();
     ctx.fillStyle = palette.ink.DEFAULT;
     ctx.font = '600 12px ui-monospace, monospace';
-    ctx.textAlign = 'center';
-    ctx.textBaseline = 'bottom';
+    ctx.textAlign = 'left';
+    ctx.textBaseline = 'middle';
     meta.data.forEach((bar, i) => {
       const value = Number(values[i] ?? 0);
-      ctx.fillText(`${value} ${value === 1 ? 'quote' : 'quotes'}`, bar.x, bar.y - 3);
+      ctx.fillText(`${value} ${value === 1 ? 'quote' : 'quotes'}`, bar.x + 6, bar.y);
     });
     ctx.restore();
   },
@@ -45,20 +45,21 @@ export function StatusChart({ bars }: { bars: StatusBar[] }) {
       backgroundColor: bars.map((b) => TONE[b.status] ?? palette.steel[500]),
       borderColor: palette.ink.soft,
       borderWidth: 1,
-      maxBarThickness: 48,
+      maxBarThickness: 22,
     }],
   };
   const options: ChartOptions<'bar'> = {
     animation: false,
     responsive: true,
     maintainAspectRatio: false,
-    layout: { padding: { top: 20 } },
-    plugins: { legend: { display: false }, tooltip: { callbacks: { label: (item) => `${item.parsed.y} quotes` } } },
+    indexAxis: 'y',
+    layout: { padding: { right: 72 } },
+    plugins: { legend: { display: false }, tooltip: { callbacks: { label: (item) => `${item.parsed.x} quotes` } } },
     scales: {
-      x: { ticks: { color: palette.ink.DEFAULT, autoSkip: false, maxRotation: 0 }, grid: { display: false } },
-      y: {
+      y: { ticks: { color: palette.ink.DEFAULT, autoSkip: false }, grid: { display: false } },
+      x: {
         beginAtZero: true,
-        suggestedMax: max + 1,
+        suggestedMax: max,
         ticks: { precision: 0, color: palette.ink.muted },
         grid: { color: palette.steel[100] },
         title: { display: true, text: 'quotes', color: palette.ink.muted },
