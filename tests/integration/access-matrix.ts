@@ -109,6 +109,11 @@ export const accessMatrix: AccessRow[] = [
   { method: 'GET', path: '/api/reports/summary', expect: managerRead },
   { method: 'GET', path: '/api/reports/quotes.csv', expect: managerRead },
   { method: 'POST', path: '/api/q/[token]/checkout', url: '/api/q/not-a-live-link-0123456789abcdef/checkout', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
+  // The at-home questionnaire's leads: anyone may send answers (an empty body fails validation);
+  // managers and counter staff read and move them. The PATCH names a lead that does not exist.
+  { method: 'POST', path: '/api/leads', expect: anyoneValidates },
+  { method: 'GET', path: '/api/leads', expect: { anonymous: 401, manager: 200, counter: 200, tech: 403 } },
+  { method: 'PATCH', path: '/api/leads/[id]', url: '/api/leads/999999', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
   { method: 'POST', path: '/api/payments/webhook', expect: { anonymous: 400, manager: 400, counter: 400, tech: 400 } },
   // Dyno runs (the brief's step 6). All staff read; technicians and managers record and delete. The
   // POST body fails validation and the id rows name a run that does not exist, so nothing changes.

@@ -22,6 +22,9 @@ export default function LandingPage() {
           <Link href="/sign-in" className="rounded-md bg-ember-500 px-5 py-3 font-semibold text-paper-raised hover:bg-ember-600">
             Staff sign-in
           </Link>
+          <Link href="/ask" className="rounded-md px-5 py-3 font-semibold text-gauge-700 underline ring-1 ring-steel-300 hover:bg-paper-raised">
+            Not sure which cam? Answer a few questions
+          </Link>
         </div>
       </section>
 

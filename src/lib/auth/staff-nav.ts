@@ -9,6 +9,7 @@ export const STAFF_LINKS: readonly StaffLink[] = [
   { href: '/interviews/new', label: 'New interview', description: 'Sit with a customer and capture their whole combination.', roles: ['manager', 'counter'] },
   { href: '/interviews', label: 'Interviews', description: 'Recent builds from the counter: search, reopen, edit.', roles: ['manager', 'counter', 'tech'] },
   { href: '/advisor', label: 'Cam shortlist', description: 'Rank the shop’s cams for a customer’s build and see why.', roles: ['manager', 'counter', 'tech'] },
+  { href: '/leads', label: 'Leads', description: 'Customers who answered the questionnaire at home: their answers, the shortlist they saw, follow-up.', roles: ['manager', 'counter'] },
   { href: '/quotes', label: 'Quotes', description: 'Drafts, sent quotes and deposits, with their state.', roles: ['manager', 'counter', 'tech'] },
   { href: '/jobs', label: 'Jobs', description: 'Accepted jobs: the build sheet, the parts and the dyno runs before and after.', roles: ['manager', 'tech'] },
   { href: '/catalogue', label: 'Catalogue', description: 'Cams, parts, labour operations and the rules that tie them together.', roles: ['manager', 'counter'] },

@@ -1,0 +1,43 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { buttonClass } from '@/components/catalogue/ui';
+import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
+import { LEAD_STATUS_WORDS } from './lead-status';
+
+// Moves a lead along with the version it was read at; a stale version (409) says so and reloads.
+export function LeadStatusForm({ id, status, version }: { id: number; status: LeadStatus; version: number }) {
+  const router = useRouter();
+  const [value, setValue] = useState<LeadStatus>(status);
+  const [message, setMessage] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+
+  async function save(event: React.FormEvent) {
+    event.preventDefault();
+    setSaving(true);
+    setMessage(null);
+    try {
+      const response = await fetch(`/api/leads/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version, status: value }) });
+      const body = (await response.json().catch(() => ({}))) as { message?: string };
+      if (response.ok) setMessage('Saved.');
+      else setMessage(body.message ?? `Not saved (${response.status}).`);
+      router.refresh();
+    } catch {
+      setMessage('Not saved: the server could not be reached.');
+    } finally {
+      setSaving(false);
+    }
+  }
+
+  return (
+    <form onSubmit={save} className="flex flex-wrap items-center gap-2 text-sm">
+      <label htmlFor={`lead-status-${id}`} className="font-semibold">Status</label>
+      <select id={`lead-status-${id}`} value={value} onChange={(e) => setValue(e.target.value as LeadStatus)} className="rounded border border-steel-300 bg-paper-raised px-2 py-1">
+        {LEAD_STATUSES.map((s) => <option key={s} value={s}>{LEAD_STATUS_WORDS[s]}</option>)}
+      </select>
+      <button type="submit" disabled={saving || value === status} className={buttonClass.quiet}>{saving ? 'Saving…' : 'Save'}</button>
+      {message ? <span role="status">{message}</span> : null}
+    </form>
+  );
+}

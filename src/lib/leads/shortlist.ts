@@ -1,0 +1,98 @@
+import type { CautionKind, NeedKind } from '@/lib/advisor';
+import { idleCharacter, type IdleCharacter } from '@/lib/advisor/idle';
+import type { ShopRanking, ShopRankingEntry } from '@/lib/advisor-service';
+import type { LeadAnswers } from '@/lib/schemas/lead';
+
+// What the customer saw: the top three of the shop's ranking, retold in plain words for someone who
+// is not in the trade (the advisor's own reasons are written for the counter and carry exact prices),
+// frozen into the lead so the shop later sees exactly the shortlist the customer saw.
+export const SHORTLIST_SIZE = 3;
+
+export type ShortlistEntry = {
+  rank: number;
+  camId: string | number;
+  camName: string;
+  /** Predicted change in peak power against the cam in the engine now, % (indicative). */
+  gainPctPeakHp: number;
+  /** The cam plus what the shop's rules say the job needs, cents: shown only as "from $X". */
+  fromPriceCents: number;
+  reasons: string[];
+  alsoNeeds: string[];
+  cautions: string[];
+  emissionsCertified: boolean;
+};
+export type Shortlist = { entries: ShortlistEntry[]; notice: string; engineLiters: number };
+
+const IDLE_WORDS: Record<IdleCharacter, string> = { smooth: 'idle smoothly', noticeable: 'idle with a little lope you can hear', aggressive: 'idle with a big, choppy lope' };
+const WISH_WORDS: Record<LeadAnswers['idle'], string> = { smooth: 'a smooth idle', noticeable: 'a little lope', aggressive: 'a big lope' };
+const USE_WORDS: Record<LeadAnswers['use'], string> = { daily: 'everyday driving', towing: 'towing', street: 'fun on the street', strip: 'the track' };
+
+const roundTo100 = (rpm: number) => (Math.round(rpm / 100) * 100).toLocaleString('en-US');
+const wholePct = (n: number) => `${Math.round(Math.abs(n))} %`;
+
+function plainReasons(r: ShopRankingEntry, answers: Pick<LeadAnswers, 'idle' | 'use'>, certified: boolean, emissionsRequired: boolean): string[] {
+  const out: string[] = [];
+  const gain = r.predicted.gainPctPeakHp;
+  out.push(gain >= 0.5 ? `About ${wholePct(gain)} more top-end power than the cam in your engine now (an estimate).` : 'About the same top-end power as the cam in your engine now (an estimate).');
+  out.push(
+    r.predicted.lowEndLossPct >= 3
+      ? `It gives up about ${wholePct(r.predicted.lowEndLossPct)} of pulling power low down (below 3,500 engine rpm), which matters for ${USE_WORDS[answers.use]}.`
+      : 'It keeps the low-down pulling power you have now.',
+  );
+  if (r.crossoverRpm !== null) out.push(`It starts pulling harder than your current cam from about ${roundTo100(r.crossoverRpm)} engine rpm.`);
+  const sound = idleCharacter(r.idleVacuumInHg);
+  const matches = sound === answers.idle || (answers.idle === 'aggressive' && sound !== 'smooth');
+  out.push(`It should ${IDLE_WORDS[sound]}${matches ? ', as you asked' : ` (you asked for ${WISH_WORDS[answers.idle]})`}.`);
+  out.push(
+    certified
+      ? 'It is certified for emissions-tested road use where its paperwork covers your vehicle.'
+      : emissionsRequired
+        ? 'It is not certified for emissions-tested road use, so it is only an option if your vehicle does not have to pass that test.'
+        : 'It is not certified for emissions-tested road use; you told us the vehicle does not need to pass that test.',
+  );
+  return out;
+}
+
+function plainNeed(kind: NeedKind, suggestedStallRpm?: number): string {
+  switch (kind) {
+    case 'springs':
+      return 'Stronger valve springs: this cam opens the valves further than the springs in there now are made for.';
+    case 'deactivation-delete':
+      return 'Switching off the cylinder-shutdown system (the fuel saver that runs the engine on four cylinders), with the parts that go with it.';
+    case 'converter':
+      return `A converter that lets the engine rev a little higher before the vehicle moves${suggestedStallRpm ? ` (about ${roundTo100(suggestedStallRpm)} rpm)` : ''}, so the cam works from the moment you pull away.`;
+    case 'tune':
+      return 'A re-tune of the engine computer for the new cam.';
+  }
+}
+
+const PLAIN_CAUTION: Record<CautionKind, string> = {
+  emissions: 'Not certified for emissions-tested road use: where your vehicle is tested, this cam may not be allowed. Your local rules decide.',
+  brakes: 'It lowers engine vacuum at idle, which power brakes rely on. A qualified technician checks brake assist; extra brake assist may be needed.',
+  valvetrain: 'Valve springs, piston-to-valve clearance and pushrod length must be checked on your engine by a qualified technician.',
+  converter: 'A higher-stall converter changes how the vehicle creeps and pulls away from a stop.',
+  tune: 'The engine must be re-tuned after the swap.',
+};
+
+export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineLiters: number, emissionsRequired: boolean, certified: (camId: string | number) => boolean): Shortlist {
+  const entries = result.rankings.slice(0, SHORTLIST_SIZE).map((r) => {
+    const isCertified = certified(r.camId);
+    return {
+      rank: r.rank,
+      camId: r.camId,
+      camName: r.camName,
+      gainPctPeakHp: r.predicted.gainPctPeakHp,
+      fromPriceCents: r.camPriceCents + r.neededItemsCents,
+      reasons: plainReasons(r, answers, isCertified, emissionsRequired),
+      alsoNeeds: r.needs.map((n) => plainNeed(n.kind, n.suggestedStallRpm)),
+      cautions: [...new Set(r.cautions.map((c) => PLAIN_CAUTION[c.kind]))],
+      emissionsCertified: isCertified,
+    };
+  });
+  return { entries, notice: result.notice, engineLiters };
+}
+
+/** "from $1,250": rounded down to whole dollars, never a promise of an exact price. */
+export function fromPrice(cents: number): string {
+  return `from ${Math.floor(cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 })}`;
+}
