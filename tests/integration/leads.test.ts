@@ -208,7 +208,20 @@ describe('the staff side of leads', () => {
     expect(res.text).toContain('Odile Brannock');
     expect(res.text).toContain('Towing or hauling');
     expect(res.text).toContain('Start an interview');
-    expect(res.text).toContain('href="/interviews/new');
+    expect(res.text).toContain(`href="/interviews/new?lead=${leadId}"`);
+  });
+
+  it('starts an interview prefilled from the lead: contact details and the assumed 5.3 L build', async () => {
+    const counter = await signedInAgent('counter');
+    const res = await counter.get(`/interviews/new?lead=${leadId}`);
+    expect(res.status).toBe(200);
+    expect(res.text).toContain('Started from Odile Brannock’s questionnaire answers');
+    expect(res.text).toMatch(/value="Odile Brannock"/);
+    expect(res.text).toContain(`value="${email('staff')}"`);
+    expect(res.text).toMatch(/value="3\.622"/); // the 5.3 L preset's stroke, from memory
+    const plain = await counter.get('/interviews/new?lead=999999');
+    expect(plain.status).toBe(200);
+    expect(plain.text).not.toContain('questionnaire answers');
   });
 
   it('keeps technicians out (403) and signed-out visitors out (401 / sign-in)', async () => {

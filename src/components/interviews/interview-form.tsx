@@ -32,14 +32,14 @@ const WORDS: Record<string, string> = {
 const opts = (values: readonly string[]) => values.map((v) => [v, WORDS[v] ?? v] as const);
 
 type Props =
-  | { mode: 'create'; cards: BaselineCard[] }
+  | { mode: 'create'; cards: BaselineCard[]; prefill?: InterviewValues | null }
   | { mode: 'edit'; cards: BaselineCard[]; build: { id: number; version: number; customerId: number; customerName: string; vehicleLabel: string; baselineCamId: number | null; profile: Record<string, unknown> } };
 
 export function InterviewForm(props: Props) {
   const router = useRouter();
   const { cards, mode } = props;
   const [problem, setProblem] = useState<React.ReactNode>(null);
-  const initial = useMemo(() => (props.mode === 'edit' ? valuesFromBuild(props.build, cards) : blankInterview(cards)), [props, cards]);
+  const initial = useMemo(() => (props.mode === 'edit' ? valuesFromBuild(props.build, cards) : (props.prefill ?? blankInterview(cards))), [props, cards]);
   const validate = useMemo(() => validateWith(mode === 'edit' ? BuildUpdateSchema : BuildCreateSchema, mode), [mode]);
 
   async function onSubmit(values: InterviewValues, helpers: FormikHelpers<InterviewValues>) {

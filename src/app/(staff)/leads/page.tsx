@@ -66,7 +66,7 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
               </div>
               <footer className="mt-3 flex flex-wrap items-center justify-between gap-3">
                 <LeadStatusForm id={lead.id} status={lead.status} version={lead.version} />
-                <ButtonLink href="/interviews/new" tone="primary">Start an interview</ButtonLink>
+                <ButtonLink href={`/interviews/new?lead=${lead.id}`} tone="primary">Start an interview</ButtonLink>
               </footer>
             </article>
           </li>
