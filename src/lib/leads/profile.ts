@@ -1,4 +1,5 @@
 import { ENGINE_PRESETS } from '@/components/interviews/interview-values';
+import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import type { BaselineCardOption } from '@/lib/db/queries/builds';
 import { BuildProfileSchema, type BuildProfile, type BuildProfileInput } from '@/lib/schemas/build-profile';
 import type { LeadAnswers } from '@/lib/schemas/lead';
@@ -79,20 +80,7 @@ export function buildProfileFromAnswers(answers: LeadAnswers, baselineCards: Bas
       cruiseMph: 65,
       budgetCents: BUDGET_CENTS[answers.budget],
     },
-    baselineCam: {
-      id: card.id,
-      name: `${card.sku} ${card.name}`,
-      intakeDuration050: card.intakeDuration050,
-      exhaustDuration050: card.exhaustDuration050,
-      intakeAdvertised: card.intakeAdvertised ?? undefined,
-      exhaustAdvertised: card.exhaustAdvertised ?? undefined,
-      intakeLiftIn: card.intakeLiftIn,
-      exhaustLiftIn: card.exhaustLiftIn,
-      lsa: card.lsa,
-      intakeCenterline: card.intakeCenterline,
-      rockerRatio: card.rockerRatio,
-      springMaxLiftIn: card.springMaxLiftIn ?? undefined,
-    },
+    baselineCam: camCardOf(card),
   };
   const parsed = BuildProfileSchema.safeParse(input);
   return parsed.success ? parsed.data : null;

@@ -1,33 +1,7 @@
 import { Op, type WhereOptions } from 'sequelize';
+import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import type { CamCard } from '@/lib/schemas/cam-card';
 import { Cam, db } from '../models';
-
-type CamCardSource = Pick<
-  Cam,
-  'id' | 'sku' | 'name' | 'intakeDuration050' | 'exhaustDuration050' | 'intakeAdvertised' | 'exhaustAdvertised' | 'intakeLiftIn' |
-  'exhaustLiftIn' | 'lsa' | 'intakeCenterline' | 'rockerRatio' | 'deactivationCompatible' | 'emissionsCertified' | 'springMaxLiftIn' | 'priceCents'
->;
-
-/** A catalogue cam (model row or API record) as the advisor's cam card; the advisor never sees the database. */
-export function camCardOf(cam: CamCardSource): CamCard {
-  return {
-    id: cam.id,
-    name: `${cam.sku} ${cam.name}`,
-    intakeDuration050: cam.intakeDuration050,
-    exhaustDuration050: cam.exhaustDuration050,
-    intakeAdvertised: cam.intakeAdvertised ?? undefined,
-    exhaustAdvertised: cam.exhaustAdvertised ?? undefined,
-    intakeLiftIn: cam.intakeLiftIn,
-    exhaustLiftIn: cam.exhaustLiftIn,
-    lsa: cam.lsa,
-    intakeCenterline: cam.intakeCenterline,
-    rockerRatio: cam.rockerRatio,
-    deactivationCompatible: cam.deactivationCompatible,
-    emissionsCertified: cam.emissionsCertified,
-    springMaxLiftIn: cam.springMaxLiftIn ?? undefined,
-    priceCents: cam.priceCents,
-  };
-}
 
 /**
  * The cams a ranking considers: the named ones (active or not, so a saved shortlist can be re-run),

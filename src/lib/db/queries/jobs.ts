@@ -2,7 +2,7 @@ import { Op } from 'sequelize';
 import type { CamCard } from '@/lib/schemas/cam-card';
 import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profile';
 import { Build, Cam, Customer, db, Quote, QuoteLine } from '../models';
-import { camCardOf } from './advisor-cams';
+import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import { JOB_QUOTE_STATUSES } from './dyno-runs';
 
 // The technician's view of a job: a quote the customer has accepted or paid a deposit on. Never

@@ -6,7 +6,7 @@ import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue
 import { ValveEventDiagram } from '@/components/catalogue/valve-diagram';
 import { valveEvents } from '@/lib/advisor/valve-events';
 import { requireRoleForPage } from '@/lib/auth/guard';
-import { camCardOf } from '@/lib/db/queries/advisor-cams';
+import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import { getCam } from '@/lib/db/queries/cams';
 
 export const metadata: Metadata = { title: 'Cam' };
