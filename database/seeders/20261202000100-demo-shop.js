@@ -8,6 +8,8 @@ const argon2 = require('argon2');
 const DEMO_PASSWORD = 'lobewise-demo';
 const now = new Date();
 const stamp = { created_at: now, updated_at: now };
+// Demo quotes stay valid for 60 days from the day the demo is seeded, never from a fixed date.
+const validUntil = new Date(now.getTime() + 60 * 86_400_000).toISOString().slice(0, 10);
 const sha256 = (text) => crypto.createHash('sha256').update(text).digest('hex');
 
 const suppliers = [
@@ -200,7 +202,7 @@ module.exports = {
       quoteRows.push({
         id: quote.id, number: quote.number, customer_id: quote.customer_id, build_id: quote.build_id, cam_id: camId(quote.cam), created_by_user_id: 2,
         status: quote.status, public_token_hash: quote.token ? sha256(quote.token) : null, subtotal_cents: subtotal, tax_rate_bp: 825, tax_cents: tax,
-        total_cents: total, deposit_cents: deposit, valid_until: '2027-01-31', sent_at: quote.status === 'draft' ? null : now,
+        total_cents: total, deposit_cents: deposit, valid_until: validUntil, sent_at: quote.status === 'draft' ? null : now,
         accepted_at: quote.status === 'deposit-paid' ? now : null, version: 1, ...stamp,
       });
     }

@@ -20,6 +20,8 @@ type RunBody = {
 };
 type History = { matches: number; modelGainPctPeakHp: number; measuredGainPctPeakHp: number; adjustedGainPctPeakHp: number } | null;
 
+// Relative to now so the before run always sorts first, whatever the day the suite runs.
+const hoursAgo = (hours: number) => new Date(Date.now() - hours * 3_600_000).toISOString();
 const points = (rows: [number, number][]) => rows.map(([rpm, torqueLbFt]) => ({ rpm, torqueLbFt }));
 const BEFORE = points([[3000, 360], [4000, 380], [4500, 370], [5000, 345], [5500, 310]]);
 const AFTER = points([[3000, 340], [4000, 385], [4500, 395], [5000, 390], [5500, 372], [6000, 345]]);
@@ -92,7 +94,7 @@ describe('dyno runs', () => {
   });
 
   it('a technician records the before pull: hp from the horsepower definition, peaks derived, SAE J1349 correction', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'before', ...BEFORE_AIR, curve: BEFORE, notes: 'Baseline, stock cam' }).expect(201);
+    const res = await post(tech, { buildId: 2, phase: 'before', ...BEFORE_AIR, curve: BEFORE, notes: 'Baseline, stock cam', runAt: hoursAgo(2) }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
     expect(run).toMatchObject({ buildId: 2, quoteId: 2, phase: 'before' });
@@ -109,7 +111,7 @@ describe('dyno runs', () => {
   });
 
   it('the after pull on F9-219 (the quote’s cam, filled in from the job) corrects down on a cooler, denser day', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'after', ...AFTER_AIR, curve: AFTER, runAt: '2026-12-02T15:00:00Z' }).expect(201);
+    const res = await post(tech, { buildId: 2, phase: 'after', ...AFTER_AIR, curve: AFTER, runAt: hoursAgo(1) }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
     expect(run).toMatchObject({ camId: f9Id, quoteId: 2, phase: 'after' });
