@@ -190,7 +190,8 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     expect(session.success_url).toBe(`${appUrl}/q/${token}?paid=1`);
     expect(session.cancel_url).toBe(`${appUrl}/q/${token}?cancelled=1`);
     const after = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
-    expect(after.status).toBe('accepted');
+    // Starting a checkout is not accepting: the quote stays sent until the deposit is paid.
+    expect(after.status).toBe('sent');
     expect(after.payments).toEqual([expect.objectContaining({ status: 'pending', amountCents: quote.depositCents })]);
   });
 

@@ -65,6 +65,8 @@ export class QuoteLine extends Model<InferAttributes<QuoteLine>, InferCreationAt
   declare quantity: string | number;
   declare unitPriceCents: number;
   declare totalCents: number;
+  /** Taken off this line before tax; see src/lib/quotes/authority.ts for who may give how much. */
+  declare discountCents: CreationOptional<number>;
   declare sortOrder: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -82,6 +84,7 @@ export class QuoteLine extends Model<InferAttributes<QuoteLine>, InferCreationAt
         quantity: { type: DataTypes.DECIMAL(8, 2), allowNull: false, defaultValue: 1 },
         unitPriceCents: { type: DataTypes.INTEGER, allowNull: false },
         totalCents: { type: DataTypes.INTEGER, allowNull: false },
+        discountCents: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         sortOrder: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
@@ -104,6 +107,8 @@ export class Payment extends Model<InferAttributes<Payment>, InferCreationAttrib
   declare currency: CreationOptional<string>;
   declare status: CreationOptional<(typeof PAYMENT_STATUSES)[number]>;
   declare paidAt: Date | null;
+  /** Set on a second paid checkout for a quote already paid: it was refunded and is never counted. */
+  declare duplicateOfPaymentId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -119,6 +124,7 @@ export class Payment extends Model<InferAttributes<Payment>, InferCreationAttrib
         currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'usd' },
         status: { type: DataTypes.ENUM(...PAYMENT_STATUSES), allowNull: false, defaultValue: 'pending' },
         paidAt: { type: DataTypes.DATE, allowNull: true },
+        duplicateOfPaymentId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -13,6 +13,8 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare depositMaxCents: number;
   declare depositPolicyText: string;
   declare currency: CreationOptional<string>;
+  /** The largest discount counter staff may give, as a share of the job before tax (basis points). */
+  declare maxCounterDiscountBp: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -32,6 +34,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         depositMaxCents: { type: DataTypes.INTEGER, allowNull: false },
         depositPolicyText: { type: DataTypes.TEXT, allowNull: false },
         currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'usd' },
+        maxCounterDiscountBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 500 },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -1,6 +1,5 @@
 import crypto from 'node:crypto';
 import { col, fn, Op, type Transaction } from 'sequelize';
-import type Stripe from 'stripe';
 import { rankForShop } from '@/lib/advisor-service';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
@@ -43,6 +42,8 @@ export type PaymentRecord = {
   providerSessionId: string | null;
   providerPaymentId: string | null;
   paidAt: string | null;
+  /** A second paid checkout for an already paid quote: refunded automatically, never counted. */
+  duplicateOfPaymentId: number | null;
   createdAt: string;
 };
 
@@ -96,6 +97,7 @@ function paymentRecord(p: Payment): PaymentRecord {
     providerSessionId: p.providerSessionId,
     providerPaymentId: p.providerPaymentId,
     paidAt: iso(p.paidAt),
+    duplicateOfPaymentId: p.duplicateOfPaymentId ?? null,
     createdAt: iso(p.createdAt)!,
   };
 }
@@ -127,7 +129,8 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
     };
   });
   const pays = [...(row.payments ?? [])].sort((a, b) => a.id - b.id);
-  const paid = pays.filter((p) => PAID_STATES.includes(p.status));
+  // A refunded duplicate took the money and gave it back; the quote was paid once.
+  const paid = pays.filter((p) => PAID_STATES.includes(p.status) && !p.duplicateOfPaymentId);
   return {
     id: row.id,
     number: row.number,
@@ -424,92 +427,8 @@ export async function getQuoteByToken(token: string): Promise<PublicQuote | null
   };
 }
 
-export type CheckoutOutcome = { ok: true; url: string } | { ok: false; status: 404 | 409 | 502; message: string };
-
-/** The customer accepts: a checkout session for the deposit, recorded as a pending payment. */
-export async function startCheckout(token: string): Promise<CheckoutOutcome> {
-  const found = await getQuoteByToken(token);
-  if (!found) return { ok: false, status: 404, message: 'This link does not open a quote.' };
-  const { quote, shop } = found;
-  if (quote.status === 'deposit-paid') return { ok: false, status: 409, message: 'The deposit for this quote has already been paid.' };
-  if (quote.status !== 'sent' && quote.status !== 'accepted') return { ok: false, status: 409, message: `This quote is ${quote.status} and can no longer be paid online. Please call the shop.` };
-  if (quote.depositCents <= 0) return { ok: false, status: 409, message: 'This quote has no deposit to pay.' };
-  const back = `${appBaseUrl()}/q/${token}`;
-  let session: Stripe.Checkout.Session;
-  try {
-    session = await payments().checkout.sessions.create({
-      mode: 'payment',
-      line_items: [{ quantity: 1, price_data: { currency: shop.currency, unit_amount: quote.depositCents, product_data: { name: `Deposit for quote ${quote.number}` } } }],
-      success_url: `${back}?paid=1`,
-      cancel_url: `${back}?cancelled=1`,
-      client_reference_id: String(quote.id),
-      metadata: { quoteId: String(quote.id), quoteNumber: quote.number },
-      payment_intent_data: { metadata: { quoteId: String(quote.id), quoteNumber: quote.number } },
-      ...(quote.customer.email ? { customer_email: quote.customer.email } : {}),
-    });
-  } catch {
-    return { ok: false, status: 502, message: 'The payment service did not answer. Nothing was charged; please try again in a moment.' };
-  }
-  if (!session.url) return { ok: false, status: 502, message: 'The payment service gave no payment page. Nothing was charged; please try again.' };
-  await db().transaction(async (t) => {
-    await Payment.create({ quoteId: quote.id, providerSessionId: session.id, providerPaymentId: null, amountCents: quote.depositCents, currency: shop.currency, status: 'pending', paidAt: null }, { transaction: t });
-    const row = await Quote.findByPk(quote.id, { transaction: t, lock: t.LOCK.UPDATE });
-    if (row && row.status === 'sent') {
-      row.set({ status: 'accepted', acceptedAt: new Date() });
-      await row.save({ transaction: t });
-    }
-    await recordAudit({ actor: 'customer-link', action: 'quote.checkout-started', entityType: 'quote', entityId: quote.id, after: { session: session.id } }, t);
-  });
-  return { ok: true, url: session.url };
-}
-
-// ---- Webhook effects (each idempotent: the same event twice changes nothing) ----
-
-const stripeId = (v: string | { id: string } | null | undefined) => (typeof v === 'string' ? v : (v?.id ?? null));
-
-/** checkout.session.completed: the payment is paid and the quote deposit-paid, together. */
-export async function recordCheckoutCompleted(session: Stripe.Checkout.Session): Promise<'applied' | 'already' | 'ignored'> {
-  if (session.payment_status !== 'paid') return 'ignored';
-  db();
-  return db().transaction(async (t) => {
-    let payment = await Payment.findOne({ where: { providerSessionId: session.id }, transaction: t, lock: t.LOCK.UPDATE });
-    if (!payment) {
-      const quoteId = Number(session.metadata?.quoteId);
-      if (!Number.isSafeInteger(quoteId) || !(await Quote.findByPk(quoteId, { transaction: t }))) return 'ignored';
-      payment = await Payment.create({ quoteId, providerSessionId: session.id, providerPaymentId: null, amountCents: session.amount_total ?? 0, currency: session.currency ?? 'usd', status: 'pending', paidAt: null }, { transaction: t });
-    }
-    if (payment.status !== 'pending' && payment.status !== 'failed' && payment.status !== 'expired') return 'already';
-    payment.set({ status: 'paid', paidAt: new Date(), providerPaymentId: stripeId(session.payment_intent), amountCents: session.amount_total ?? payment.amountCents });
-    await payment.save({ transaction: t });
-    const quote = await Quote.findByPk(payment.quoteId, { transaction: t, lock: t.LOCK.UPDATE });
-    if (quote && quote.status !== 'deposit-paid') {
-      quote.set({ status: 'deposit-paid', acceptedAt: quote.acceptedAt ?? new Date() });
-      await quote.save({ transaction: t });
-    }
-    await recordAudit({ actor: 'payments-webhook', action: 'payment.received', entityType: 'quote', entityId: payment.quoteId, after: { paymentId: payment.id, amountCents: payment.amountCents } }, t);
-    return 'applied';
-  });
-}
-
 function refundState(amountCents: number, refundedCents: number): Payment['status'] {
   return refundedCents >= amountCents ? 'refunded' : 'partially-refunded';
-}
-
-/** charge.refunded: the provider's running refunded amount is the truth; never counted twice. */
-export async function recordChargeRefunded(charge: Stripe.Charge): Promise<'applied' | 'already' | 'ignored'> {
-  const intent = stripeId(charge.payment_intent);
-  if (!intent) return 'ignored';
-  db();
-  return db().transaction(async (t) => {
-    const payment = await Payment.findOne({ where: { providerPaymentId: intent }, transaction: t, lock: t.LOCK.UPDATE });
-    if (!payment) return 'ignored';
-    const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, charge.amount_refunded));
-    if (refunded === payment.refundedCents) return 'already';
-    payment.set({ refundedCents: refunded, status: refundState(payment.amountCents, refunded) });
-    await payment.save({ transaction: t });
-    await recordAudit({ actor: 'payments-webhook', action: 'payment.refunded', entityType: 'quote', entityId: payment.quoteId, after: { paymentId: payment.id, refundedCents: refunded } }, t);
-    return 'applied';
-  });
 }
 
 export type RefundOutcome = { ok: true; record: QuoteRecord } | { ok: false; status: 404 | 409 | 422 | 502; message: string; errors?: FieldError[] };
@@ -518,10 +437,11 @@ export type RefundOutcome = { ok: true; record: QuoteRecord } | { ok: false; sta
 export async function refundQuote(id: number, amountCents: number, reason: string | undefined, user: SessionUser): Promise<RefundOutcome> {
   db();
   const result = await db().transaction(async (t): Promise<RefundOutcome | null> => {
-    const quote = await Quote.findByPk(id, { transaction: t });
+    // The quote row first, then its payments: the order every deposit path locks in (see deposits.ts).
+    const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!quote) return { ok: false, status: 404, message: `No quote with id ${id}.` };
     const payment = await Payment.findOne({
-      where: { quoteId: id, status: { [Op.in]: ['paid', 'partially-refunded'] } },
+      where: { quoteId: id, status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null },
       order: [['id', 'DESC']],
       transaction: t,
       lock: t.LOCK.UPDATE,

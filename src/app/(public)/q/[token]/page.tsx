@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { formatCents } from '@/components/catalogue/format';
 import { getQuoteByToken } from '@/lib/db/queries/quotes';
+import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { isTaxable } from '@/lib/quotes/pricing';
 
 export const dynamic = 'force-dynamic';
@@ -25,14 +26,21 @@ const STATUS_WORDS: Record<string, { title: string; text: string }> = {
   cancelled: { title: 'Cancelled', text: 'This quote was cancelled. Call the shop if that is a surprise.' },
 };
 
+const longDate = (isoDate: string) => new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+
 export default async function CustomerQuotePage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
   const { token } = await params;
   const found = await getQuoteByToken(token);
   if (!found) notFound();
   const { quote, shop } = found;
   const query = await searchParams;
-  const canPay = (quote.status === 'sent' || quote.status === 'accepted') && quote.depositCents > 0;
-  const state = STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' };
+  const open = quote.status === 'sent' || quote.status === 'accepted';
+  // Past its valid-until day an open quote can no longer be accepted or paid (the checkout refuses it too).
+  const lapsed = open && isPastValidUntil(quote.validUntil);
+  const canPay = open && !lapsed && quote.depositCents > 0;
+  const state = lapsed
+    ? { title: 'No longer valid', text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.` }
+    : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
   return (
     <div className="mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink">
       <p className="text-base text-ink-muted">{shop.name}</p>
@@ -41,6 +49,7 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
         For {quote.customer.name}
         {quote.build ? `, ${quote.build.vehicleLabel}` : ''}
       </p>
+      {quote.validUntil && open && !lapsed ? <p className="mt-1 text-base text-ink-muted">Valid until {longDate(quote.validUntil)}</p> : null}
 
       {query.paid && quote.status !== 'deposit-paid' ? (
         <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">

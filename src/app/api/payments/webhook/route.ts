@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import type Stripe from 'stripe';
-import { recordChargeRefunded, recordCheckoutCompleted } from '@/lib/db/queries/quotes';
+import { recordChargeRefunded, recordCheckoutCompleted } from '@/lib/db/queries/deposits';
 import { errorResponse } from '@/lib/http/responses';
 import { payments, webhookSecret } from '@/lib/payments';
 
@@ -9,6 +9,8 @@ export const dynamic = 'force-dynamic';
 /**
  * The payment provider's events. The signature is checked over the raw body, exactly as sent; anything
  * unsigned or altered answers 400 and changes nothing. Effects are idempotent, so a redelivery is harmless.
+ * A refused session still answers 200: the provider would only repeat the same refusal for days.
+ * Anything that could not be finished now answers 503, so the provider delivers the event again.
  */
 export async function POST(request: Request) {
   const raw = await request.text();
@@ -20,12 +22,17 @@ export async function POST(request: Request) {
   } catch {
     return errorResponse(400, 'The webhook signature does not match the body.');
   }
-  switch (event.type) {
-    case 'checkout.session.completed':
-      return NextResponse.json({ received: true, result: await recordCheckoutCompleted(event.data.object) });
-    case 'charge.refunded':
-      return NextResponse.json({ received: true, result: await recordChargeRefunded(event.data.object) });
-    default:
-      return NextResponse.json({ received: true, result: 'ignored' });
+  try {
+    switch (event.type) {
+      case 'checkout.session.completed':
+        return NextResponse.json({ received: true, ...(await recordCheckoutCompleted(event.data.object)) });
+      case 'charge.refunded':
+        return NextResponse.json({ received: true, ...(await recordChargeRefunded(event.data.object)) });
+      default:
+        return NextResponse.json({ received: true, result: 'ignored' });
+    }
+  } catch (error) {
+    console.error(`[payments-webhook] ${event.type} ${event.id} not applied; asking for a redelivery`, error);
+    return errorResponse(503, 'The event could not be applied just now; deliver it again.', {}, { 'Retry-After': '5' });
   }
 }
