@@ -11,7 +11,8 @@ import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { PaymentStatusTag, QuoteStatusTag } from './status';
 
-type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; camId: number | null; partId: number | null; laborOperationId: number | null };
+// discountCents rides along unchanged, so saving other lines keeps a discount already given.
+type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null };
 type Notice = { tone: 'ok' | 'fault' | 'caution'; title: string; detail?: string } | null;
 
 /** "12.5" or "12.50" dollars → 1250 cents, exactly (no float arithmetic); null when it is not money. */
@@ -22,7 +23,7 @@ export function dollarsToCents(text: string): number | null {
 }
 
 const toEdit = (q: QuoteRecord): EditLine[] =>
-  q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: (l.unitPriceCents / 100).toFixed(2), camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
+  q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: (l.unitPriceCents / 100).toFixed(2), discountCents: l.discountCents ?? 0, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
 
 function errorText(body: { message?: string; errors?: { field: string; message: string }[] }) {
   return body.errors?.length ? body.errors.map((e) => `${e.field}: ${e.message}`).join('; ') : undefined;
@@ -56,13 +57,13 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
 
   async function saveLines() {
     if (!editing) return;
-    const lines: Array<{ kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; camId: number | null; partId: number | null; laborOperationId: number | null }> = [];
+    const lines: Array<{ kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null }> = [];
     for (const [i, l] of editing.entries()) {
       const cents = dollarsToCents(l.price);
       const quantity = Number(l.quantity);
       if (cents === null) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the price must be dollars and cents, e.g. 129.50` });
       if (!Number.isFinite(quantity) || quantity <= 0) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
-      lines.push({ kind: l.kind, description: l.description, quantity, unitPriceCents: cents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId });
+      lines.push({ kind: l.kind, description: l.description, quantity, unitPriceCents: cents, discountCents: l.discountCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId });
     }
     if (await run('Not saved', () => sendJson('PATCH', url, { version: quote.version, lines }), 'Lines saved; totals updated.')) setEditing(null);
   }
@@ -112,11 +113,13 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
               ? editing.map((l, i) => {
                   const cents = dollarsToCents(l.price);
                   const q = Number(l.quantity);
-                  const total = cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6 ? lineTotalCents(q, cents) : null;
+                  const total = cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6 ? Math.max(0, lineTotalCents(q, cents) - l.discountCents) : null;
+                  // A catalogue line's kind (and so its tax) follows the catalogue item.
+                  const fromCatalogue = Boolean(l.camId || l.partId || l.laborOperationId);
                   return (
                     <tr key={i}>
                       <td className={tdClass}>
-                        <select aria-label={`Line ${i + 1} kind`} value={l.kind} onChange={(e) => set(i, { kind: e.target.value as QuoteLineKind })} className="rounded border border-steel-300 bg-paper-raised px-1 py-0.5">
+                        <select aria-label={`Line ${i + 1} kind`} value={l.kind} disabled={fromCatalogue} title={fromCatalogue ? 'Follows the catalogue item' : undefined} onChange={(e) => set(i, { kind: e.target.value as QuoteLineKind })} className="rounded border border-steel-300 bg-paper-raised px-1 py-0.5">
                           {QUOTE_LINE_KIND_LIST.map((k) => <option key={k}>{k}</option>)}
                         </select>
                       </td>
@@ -136,7 +139,10 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                     <td className={tdClass}>{l.description}</td>
                     <td className={`${tdClass} spec text-right`}>{l.quantity}{l.kind === 'labor' ? ' h' : ''}</td>
                     <td className={`${tdClass} spec text-right`}>{formatCents(l.unitPriceCents)}</td>
-                    <td className={`${tdClass} spec text-right`}>{formatCents(l.totalCents)}</td>
+                    <td className={`${tdClass} spec text-right`}>
+                      {formatCents(l.totalCents)}
+                      {l.discountCents ? <span className="block text-xs text-ink-muted">after {formatCents(l.discountCents)} off</span> : null}
+                    </td>
                     <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
                     {quote.costCents !== undefined ? <td className={`${tdClass} spec text-right`}>{formatCents(l.unitCostCents ?? null)}</td> : null}
                   </tr>
@@ -146,7 +152,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
       </div>
       {editing ? (
         <div className="flex flex-wrap gap-2">
-          <button type="button" className={buttonClass.quiet} onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', camId: null, partId: null, laborOperationId: null }])}>Add a line</button>
+          <button type="button" className={buttonClass.quiet} onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', discountCents: 0, camId: null, partId: null, laborOperationId: null }])}>Add a line</button>
           <button type="button" className={buttonClass.primary} disabled={busy} onClick={saveLines}>Save lines</button>
           <button type="button" className={buttonClass.quiet} onClick={() => setEditing(null)}>Cancel</button>
         </div>

@@ -4,7 +4,8 @@
 // Rounding, in one place: every product that can leave whole cents (quantity × unit price, a
 // percentage of an amount) is rounded once, half away from zero ("half up" for the positive amounts
 // quotes hold), on exact integers, never on floats:
-//   - a line:    quantity is held in hundredths (DECIMAL(8,2)); total = round(hundredths × unit / 100)
+//   - a line:    quantity is held in hundredths (DECIMAL(8,2)); total = round(hundredths × unit / 100),
+//                less the line's discount (whole cents, never more than the line)
 //   - tax:       on the sum of the taxable lines, not line by line: round(taxable × bp / 10 000)
 //   - deposit:   round(total × percent bp / 10 000), then clamped to the shop's minimum and maximum,
 //                and never more than the quote's total.
@@ -16,7 +17,7 @@
 export const QUOTE_LINE_KIND_LIST = ['cam', 'part', 'labor', 'tune', 'other'] as const;
 export type QuoteLineKind = (typeof QUOTE_LINE_KIND_LIST)[number];
 
-export type PricedLineInput = { kind: QuoteLineKind; quantity: number; unitPriceCents: number };
+export type PricedLineInput = { kind: QuoteLineKind; quantity: number; unitPriceCents: number; discountCents?: number };
 export type DepositPolicy = { percentBp: number; minCents: number; maxCents: number };
 export type QuoteTotals = { subtotalCents: number; taxableCents: number; taxRateBp: number; taxCents: number; totalCents: number; depositCents: number };
 
@@ -50,6 +51,14 @@ export function lineTotalCents(quantity: number, unitPriceCents: number): number
   return divideRoundHalfUp(quantityHundredths(quantity) * unitPriceCents, 100);
 }
 
+/** A line after its discount: a discount on a taxed line lowers the taxed amount with it. */
+export function lineNetCents(line: PricedLineInput): number {
+  const gross = lineTotalCents(line.quantity, line.unitPriceCents);
+  const discount = line.discountCents ?? 0;
+  if (!Number.isSafeInteger(discount) || discount < 0 || discount > gross) throw new RangeError(`a discount must be whole cents between 0 and the line's ${gross} (got ${discount})`);
+  return gross - discount;
+}
+
 /** Tax on an amount at a rate in basis points, rounded half up: 8.25 % of $100.01 = 825.0825 → 825 ¢. */
 export function taxCents(taxableCents: number, rateBp: number): number {
   return divideRoundHalfUp(taxableCents * rateBp, 10_000);
@@ -68,7 +77,7 @@ export function quoteTotals(lines: readonly PricedLineInput[], taxRateBp: number
   let subtotal = 0;
   let taxable = 0;
   for (const line of lines) {
-    const total = lineTotalCents(line.quantity, line.unitPriceCents);
+    const total = lineNetCents(line);
     subtotal += total;
     if (isTaxable(line.kind)) taxable += total;
   }

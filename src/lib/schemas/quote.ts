@@ -43,6 +43,13 @@ export const QuoteLineInputSchema = z.strictObject({
     .min(QUOTE_LIMITS.unitPriceCents.min, { error: 'unitPriceCents must not be negative' })
     .max(QUOTE_LIMITS.unitPriceCents.max, { error: `unitPriceCents must be at most ${QUOTE_LIMITS.unitPriceCents.max}` })
     .optional(),
+  /** Taken off this line before tax; how much counter staff may give is checked on the server (src/lib/quotes/authority.ts). */
+  discountCents: z
+    .number({ error: 'discountCents must be a whole number of cents' })
+    .int({ error: 'discountCents must be a whole number of cents' })
+    .min(0, { error: 'discountCents must not be negative' })
+    .max(QUOTE_LIMITS.unitPriceCents.max, { error: `discountCents must be at most ${QUOTE_LIMITS.unitPriceCents.max}` })
+    .optional(),
   camId: id('camId').nullish(),
   partId: id('partId').nullish(),
   laborOperationId: id('laborOperationId').nullish(),

@@ -32,6 +32,10 @@ export const ShopSettingsSchema = z
       depositPercentBp: boundedNumber('deposit percent', 'bp', S.depositPercentBp).int({ error: 'deposit percent must be a whole number of basis points' }),
       depositMinCents: wholeCents('deposit minimum', S.depositCents),
       depositMaxCents: wholeCents('deposit maximum', S.depositCents),
+      // Optional so a form that does not show it yet keeps the stored value (issue 12 item 8).
+      maxCounterDiscountBp: boundedNumber('counter discount limit', 'bp', S.depositPercentBp)
+        .int({ error: 'counter discount limit must be a whole number of basis points' })
+        .optional(),
       depositPolicyText: text('deposit policy', S.policyMaxLength, true),
     },
     { error: presence('settings', 'an object') },

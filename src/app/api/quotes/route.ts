@@ -1,10 +1,11 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, parseBody } from '@/lib/catalogue/http';
+import { parseBody } from '@/lib/catalogue/http';
 import { createQuoteFromBuild, listQuotes, presentQuote } from '@/lib/db/queries/quotes';
 import { QUOTE_STATUSES, type QuoteStatus } from '@/lib/db/models/quote';
 import { validationFailed } from '@/lib/http/responses';
 import { QuoteCreateSchema } from '@/lib/schemas/quote';
+import { quoteOutcomeResponse } from './outcome';
 
 export const dynamic = 'force-dynamic';
 
@@ -25,5 +26,5 @@ export async function POST(request: Request) {
   if (user instanceof Response) return user;
   const body = await parseBody(request, QuoteCreateSchema);
   if (!body.ok) return body.response;
-  return outcomeResponse(await createQuoteFromBuild(body.value, user), { status: 201, label: 'quote', present: (r) => presentQuote(r, user) });
+  return quoteOutcomeResponse(await createQuoteFromBuild(body.value, user), { status: 201, present: (r) => presentQuote(r, user) });
 }

@@ -8,11 +8,13 @@ import { appBaseUrl } from '@/lib/env';
 import type { FieldError } from '@/lib/http/responses';
 import { sendMail } from '@/lib/mail';
 import { payments } from '@/lib/payments';
-import { formatQuoteNumber, laborLine, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
+import type { AuthorityVerdict } from '@/lib/quotes/authority';
+import { formatQuoteNumber, laborLine, lineNetCents, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { quoteEmail } from '@/lib/quotes/email';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
-import { Build, Cam, Customer, db, LaborOperation, Part, Payment, Quote, QuoteLine, ShopSettings } from '../models';
+import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings } from '../models';
+import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from './quote-lines';
 import type { QuoteStatus } from '../models/quote';
 
 // Quotes: made from a build and a chosen cam, priced by src/lib/quotes/pricing.ts, sent by private
@@ -27,6 +29,8 @@ export type QuoteLineRecord = {
   description: string;
   quantity: number;
   unitPriceCents: number;
+  /** Taken off this line before tax; totalCents is after it. */
+  discountCents: number;
   totalCents: number;
   sortOrder: number;
   /** What the shop pays for one unit (catalogue cost of the cam or part); null for labour and free lines. */
@@ -125,7 +129,7 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
     }
     return {
       id: l.id, kind: l.kind, camId: l.camId ?? null, partId: l.partId ?? null, laborOperationId: l.laborOperationId ?? null,
-      description: l.description, quantity, unitPriceCents: l.unitPriceCents, totalCents: l.totalCents, sortOrder: l.sortOrder, unitCostCents,
+      description: l.description, quantity, unitPriceCents: l.unitPriceCents, discountCents: l.discountCents ?? 0, totalCents: l.totalCents, sortOrder: l.sortOrder, unitCostCents,
     };
   });
   const pays = [...(row.payments ?? [])].sort((a, b) => a.id - b.id);
@@ -201,55 +205,28 @@ export async function listQuotes(options: { status?: QuoteStatus; limit?: number
   });
 }
 
-// ---- Building lines ----
+// ---- Building lines (checked against the catalogue and the user's price authority in ./quote-lines) ----
 
-type LineDraft = Omit<QuoteLineRecord, 'id' | 'sortOrder' | 'totalCents' | 'unitCostCents'>;
+export type QuoteWriteOutcome = WriteOutcome<QuoteRecord> | { ok: false; reason: 'forbidden'; errors: FieldError[] };
 
-/** Staff-typed lines, with catalogue references filled in from the catalogue and the labour rate. */
-async function resolveLines(inputs: readonly QuoteLineInput[], field: string, laborRateCents: number, t: Transaction): Promise<LineDraft[]> {
-  const errors: FieldError[] = [];
-  const out: LineDraft[] = [];
-  for (const [i, input] of inputs.entries()) {
-    const at = `${field}.${i}`;
-    let description = input.description;
-    let unitPriceCents = input.unitPriceCents;
-    let quantity = input.quantity;
-    if (input.partId) {
-      const part = await Part.findByPk(input.partId, { transaction: t });
-      if (!part) errors.push({ field: `${at}.partId`, message: `there is no part with id ${input.partId}` });
-      else {
-        description ??= `${part.sku} ${part.name}`;
-        unitPriceCents ??= part.priceCents;
-      }
-    }
-    if (input.camId) {
-      const cam = await Cam.findByPk(input.camId, { transaction: t });
-      if (!cam) errors.push({ field: `${at}.camId`, message: `there is no cam with id ${input.camId}` });
-      else {
-        description ??= `${cam.sku} ${cam.name}`;
-        unitPriceCents ??= cam.priceCents;
-      }
-    }
-    if (input.laborOperationId) {
-      const op = await LaborOperation.findByPk(input.laborOperationId, { transaction: t });
-      if (!op) errors.push({ field: `${at}.laborOperationId`, message: `there is no labour operation with id ${input.laborOperationId}` });
-      else {
-        description ??= op.name;
-        quantity ??= Number(op.hours);
-        unitPriceCents ??= laborRateCents;
-      }
-    }
-    if (description === undefined) errors.push({ field: `${at}.description`, message: 'description is required for a line that names no catalogue item' });
-    if (unitPriceCents === undefined) errors.push({ field: `${at}.unitPriceCents`, message: 'unitPriceCents is required for a line that names no catalogue item' });
-    if (description !== undefined && unitPriceCents !== undefined) {
-      out.push({
-        kind: input.kind, camId: input.camId ?? null, partId: input.partId ?? null, laborOperationId: input.laborOperationId ?? null,
-        description, quantity: quantity ?? 1, unitPriceCents,
-      });
-    }
+/** Counter staff asking for what only a manager may give: 403 naming the fields, nothing written. */
+async function withPriceAuthority(write: () => Promise<WriteOutcome<QuoteRecord>>): Promise<QuoteWriteOutcome> {
+  try {
+    return await write();
+  } catch (error) {
+    if (error instanceof PriceAuthorityRefused) return { ok: false, reason: 'forbidden', errors: error.errors };
+    throw error;
   }
-  if (errors.length) throw invalid(errors);
-  return out;
+}
+
+/** What a manager allowed beyond the counter's authority, one audit row each. */
+async function auditAuthority(verdict: AuthorityVerdict, limitBp: number, user: SessionUser, quoteId: number, t: Transaction) {
+  if (verdict.overrides.length) {
+    await recordAudit({ user, action: 'quote.price-override', entityType: 'quote', entityId: quoteId, after: { overrides: verdict.overrides } }, t);
+  }
+  if (verdict.discountOverLimit) {
+    await recordAudit({ user, action: 'quote.discount-over-limit', entityType: 'quote', entityId: quoteId, after: { discountBp: verdict.discountBp, counterLimitBp: limitBp } }, t);
+  }
 }
 
 async function shopSettings(t: Transaction): Promise<ShopSettings> {
@@ -263,7 +240,7 @@ const policyOf = (s: ShopSettings) => ({ percentBp: s.depositPercentBp, minCents
 async function writeLines(quoteId: number, lines: LineDraft[], t: Transaction) {
   await QuoteLine.destroy({ where: { quoteId }, transaction: t });
   await QuoteLine.bulkCreate(
-    lines.map((l, i) => ({ ...l, quoteId, quantity: l.quantity.toFixed(2), totalCents: lineTotalCents(l.quantity, l.unitPriceCents), sortOrder: i })),
+    lines.map((l, i) => ({ ...l, quoteId, quantity: l.quantity.toFixed(2), totalCents: lineNetCents(l), sortOrder: i })),
     { transaction: t },
   );
 }
@@ -284,7 +261,7 @@ async function nextNumber(t: Transaction): Promise<string> {
 export type CreateQuoteInput = { buildId: number; camId: number; extraLines?: QuoteLineInput[] };
 
 /** A draft from a saved build and a chosen cam: the cam, what the need rules add, the staff's extra lines. */
-export async function createQuoteFromBuild(input: CreateQuoteInput, user: SessionUser): Promise<WriteOutcome<QuoteRecord>> {
+export async function createQuoteFromBuild(input: CreateQuoteInput, user: SessionUser): Promise<QuoteWriteOutcome> {
   db();
   const build = await Build.findByPk(input.buildId);
   const cam = await Cam.findByPk(input.camId);
@@ -300,19 +277,20 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
   if (!ranking) return { ok: false, reason: 'invalid', errors: [{ field: 'camId', message: 'the advisor could not rank this cam for this build' }] };
 
   for (let attempt = 0; ; attempt++) {
-    const outcome = await runWrite(async (t) => {
+    const outcome = await withPriceAuthority(() => runWrite(async (t) => {
       const settings = await shopSettings(t);
-      const lines: LineDraft[] = [{ kind: 'cam', camId: cam.id, partId: null, laborOperationId: null, description: `${cam.sku} ${cam.name}`, quantity: 1, unitPriceCents: cam.priceCents }];
+      const lines: LineDraft[] = [{ kind: 'cam', camId: cam.id, partId: null, laborOperationId: null, description: `${cam.sku} ${cam.name}`, quantity: 1, unitPriceCents: cam.priceCents, discountCents: 0 }];
       for (const need of ranking.neededItems) {
         if (need.type === 'part' && need.part) {
           const kind: QuoteLineKind = need.part.category === 'tune' ? 'tune' : 'part';
-          lines.push({ kind, camId: null, partId: need.part.id, laborOperationId: null, description: `${need.part.sku} ${need.part.name}`, quantity: need.quantity, unitPriceCents: need.part.priceCents });
+          lines.push({ kind, camId: null, partId: need.part.id, laborOperationId: null, description: `${need.part.sku} ${need.part.name}`, quantity: need.quantity, unitPriceCents: need.part.priceCents, discountCents: 0 });
         } else if (need.type === 'labor' && need.laborOperation) {
           const { quantity, unitPriceCents } = laborLine(need.laborOperation.hours, need.quantity, settings.laborRateCents);
-          lines.push({ kind: 'labor', camId: null, partId: null, laborOperationId: need.laborOperation.id, description: need.laborOperation.name, quantity, unitPriceCents });
+          lines.push({ kind: 'labor', camId: null, partId: null, laborOperationId: need.laborOperation.id, description: need.laborOperation.name, quantity, unitPriceCents, discountCents: 0 });
         }
       }
-      lines.push(...(await resolveLines(input.extraLines ?? [], 'extraLines', settings.laborRateCents, t)));
+      const extra = await resolveLines(input.extraLines ?? [], { field: 'extraLines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user }, t);
+      lines.push(...extra.lines);
       const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));
       const quote = await Quote.create(
         {
@@ -325,8 +303,9 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
       await writeLines(quote.id, lines, t);
       const record = (await getQuote(quote.id, t))!;
       await recordAudit({ user, action: 'quote.created', entityType: 'quote', entityId: quote.id, before: null, after: { number: record.number, totalCents: record.totalCents } }, t);
+      await auditAuthority(extra.verdict, settings.maxCounterDiscountBp, user, quote.id, t);
       return { record };
-    }, { uniqueFields: { number: 'number' } });
+    }, { uniqueFields: { number: 'number' } }));
     // Two creators racing for the same number: the loser tries again with the next one.
     const numberClash = !outcome.ok && outcome.reason === 'invalid' && outcome.errors.some((e) => e.field === 'number');
     if (!numberClash || attempt >= 3) return outcome;
@@ -336,9 +315,9 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
 export type QuotePatch = { version: number; lines?: QuoteLineInput[]; validUntil?: string | null };
 
 /** Lines (replaced as a whole) and the validity date, while the quote is a draft; totals follow. */
-export async function updateQuote(id: number, patch: QuotePatch, user: SessionUser): Promise<WriteOutcome<QuoteRecord>> {
+export async function updateQuote(id: number, patch: QuotePatch, user: SessionUser): Promise<QuoteWriteOutcome> {
   db();
-  return runWrite(
+  return withPriceAuthority(() => runWrite(
     async (t) => {
       const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
       if (!quote) throw notFound();
@@ -347,8 +326,15 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
       const before = await getQuote(id, t);
       const settings = await shopSettings(t);
       if (patch.lines) {
-        const lines = await resolveLines(patch.lines, 'lines', settings.laborRateCents, t);
+        // A price already on the quote (a manager's, or last month's catalogue price) may stay as it is.
+        const kept = new Map<string, number>();
+        for (const l of before?.lines ?? []) {
+          const key = catalogueKey(l);
+          if (key) kept.set(key, l.unitPriceCents);
+        }
+        const { lines, verdict } = await resolveLines(patch.lines, { field: 'lines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user, kept }, t);
         await writeLines(id, lines, t);
+        await auditAuthority(verdict, settings.maxCounterDiscountBp, user, id, t);
         const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
         quote.set({ subtotalCents: totals.subtotalCents, taxCents: totals.taxCents, totalCents: totals.totalCents, depositCents: totals.depositCents });
         quote.changed('updatedAt', true);
@@ -361,7 +347,7 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
       return { record: after };
     },
     { reload: () => getQuote(id) },
-  );
+  ));
 }
 
 // ---- Sending and the customer's link ----

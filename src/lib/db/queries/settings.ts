@@ -32,6 +32,8 @@ export type ShopSettingsRecord = {
   depositMinCents: number;
   depositMaxCents: number;
   depositPolicyText: string;
+  /** The largest discount counter staff may give, as a share of the job before tax (basis points). */
+  maxCounterDiscountBp: number;
   currency: string;
   version: number;
   updatedAt: string;
@@ -50,6 +52,7 @@ export function toShopSettingsRecord(s: ShopSettings): ShopSettingsRecord {
     depositMinCents: s.depositMinCents,
     depositMaxCents: s.depositMaxCents,
     depositPolicyText: s.depositPolicyText,
+    maxCounterDiscountBp: s.maxCounterDiscountBp,
     currency: s.currency,
     version: s.version,
     updatedAt: new Date(s.updatedAt).toISOString(),

@@ -1,9 +1,10 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, parseBody, type IdParams } from '@/lib/catalogue/http';
 import { getQuote, presentQuote, updateQuote } from '@/lib/db/queries/quotes';
 import { errorResponse } from '@/lib/http/responses';
 import { QuotePatchSchema } from '@/lib/schemas/quote';
+import { quoteOutcomeResponse } from '../outcome';
 
 export const dynamic = 'force-dynamic';
 
@@ -25,5 +26,5 @@ export async function PATCH(request: Request, context: IdParams) {
   if (id instanceof Response) return id;
   const body = await parseBody(request, QuotePatchSchema);
   if (!body.ok) return body.response;
-  return outcomeResponse(await updateQuote(id, body.value, user), { label: 'quote', present: (r) => presentQuote(r, user) });
+  return quoteOutcomeResponse(await updateQuote(id, body.value, user), { present: (r) => presentQuote(r, user) });
 }

@@ -1,0 +1,67 @@
+// Who may set a quote line's price (pure: no database, React or Next). Counter staff sell catalogue
+// items at the catalogue price and may give a discount up to the share of the job the manager set in
+// the shop settings; a different price, a discount above that share, or an untaxed line that names no
+// catalogue item needs a manager. A manager may do each of these; the caller audits what was allowed.
+import type { FieldError } from '@/lib/http/responses';
+import { divideRoundHalfUp, lineTotalCents, type QuoteLineKind } from './pricing';
+
+export type PricingRole = 'manager' | 'counter' | 'tech';
+
+export type LineForAuthority = {
+  kind: QuoteLineKind;
+  quantity: number;
+  unitPriceCents: number;
+  discountCents: number;
+  /** The catalogue's price for the item the line names (labour: the shop's rate); null for a free line. */
+  cataloguePriceCents: number | null;
+  /** The price this item already has on the quote (kept when staff edit other lines); null when new. */
+  keptPriceCents: number | null;
+  description: string;
+};
+
+export type Override = { index: number; description: string; what: 'price' | 'untaxed-free-line'; cataloguePriceCents: number | null; unitPriceCents: number };
+export type AuthorityVerdict = { forbidden: FieldError[]; overrides: Override[]; discountBp: number; discountOverLimit: boolean };
+
+/** The discount as a share of the job before discounts, in basis points (rounded half up). */
+export function discountShareBp(lines: readonly Pick<LineForAuthority, 'quantity' | 'unitPriceCents' | 'discountCents'>[]): number {
+  const gross = lines.reduce((s, l) => s + lineTotalCents(l.quantity, l.unitPriceCents), 0);
+  const discount = lines.reduce((s, l) => s + l.discountCents, 0);
+  if (discount <= 0) return 0;
+  if (gross <= 0) return 10_000;
+  return divideRoundHalfUp(discount * 10_000, gross);
+}
+
+const percent = (bp: number) => `${(bp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} %`;
+const dollars = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
+
+export function checkPriceAuthority(lines: readonly LineForAuthority[], options: { role: PricingRole; maxCounterDiscountBp: number; field: string }): AuthorityVerdict {
+  const manager = options.role === 'manager';
+  const forbidden: FieldError[] = [];
+  const overrides: Override[] = [];
+  lines.forEach((line, index) => {
+    const at = `${options.field}.${index}`;
+    if (line.cataloguePriceCents === null) {
+      // A free line is taxed goods at the counter; an untaxed one could carry a cam at a labour line's tax.
+      if (line.kind !== 'other') {
+        if (!manager) forbidden.push({ field: `${at}.kind`, message: `a line that names no catalogue item is "other" (taxed) for counter staff; a ${line.kind} line needs a manager` });
+        else overrides.push({ index, description: line.description, what: 'untaxed-free-line', cataloguePriceCents: null, unitPriceCents: line.unitPriceCents });
+      }
+      return;
+    }
+    const allowed = line.unitPriceCents === line.cataloguePriceCents || line.unitPriceCents === line.keptPriceCents;
+    if (allowed) return;
+    if (!manager) {
+      forbidden.push({ field: `${at}.unitPriceCents`, message: `counter staff sell at the catalogue price (${dollars(line.cataloguePriceCents)}); a different price needs a manager` });
+    } else overrides.push({ index, description: line.description, what: 'price', cataloguePriceCents: line.cataloguePriceCents, unitPriceCents: line.unitPriceCents });
+  });
+  const discountBp = discountShareBp(lines);
+  const discountOverLimit = discountBp > options.maxCounterDiscountBp;
+  if (discountOverLimit && !manager) {
+    const first = lines.findIndex((l) => l.discountCents > 0);
+    forbidden.push({
+      field: `${options.field}.${first}.discountCents`,
+      message: `the discounts come to ${percent(discountBp)} of the job; counter staff may give up to ${percent(options.maxCounterDiscountBp)}, more needs a manager`,
+    });
+  }
+  return { forbidden, overrides, discountBp, discountOverLimit };
+}
