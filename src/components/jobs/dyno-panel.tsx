@@ -5,6 +5,7 @@ import useSWR from 'swr';
 import { PowerChart, type ChartCurve } from '@/components/advisor/power-chart';
 import { buttonClass, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
+import { AIR_DIGITS, AIR_UNIT_TEXT, baroIn, tempIn, type AirUnits } from '@/lib/dyno/units';
 import { DynoRunForm } from './dyno-run-form';
 
 // The job's dyno runs: measured figures, observed and corrected, a chart of before against after
@@ -18,6 +19,14 @@ async function fetchRuns(url: string): Promise<DynoRunView[]> {
 
 const STANDARD_NAMES: Record<string, string> = { 'sae-j1349': 'SAE J1349', 'sae-j607': 'SAE J607', 'din-70020': 'DIN 70020', none: 'none' };
 const fixed = (n: number | null | undefined, digits: number, unit: string) => (n === null || n === undefined ? '—' : `${n.toFixed(digits)} ${unit}`);
+// Shown in the units the form is set to; stored in °C and kPa.
+function airText(air: DynoRunView['air'], units: AirUnits): string {
+  const u = AIR_UNIT_TEXT[units];
+  const d = AIR_DIGITS[units];
+  const temp = air.airTempC === null ? null : tempIn(units, air.airTempC);
+  const baro = air.baroKpa === null ? null : baroIn(units, air.baroKpa);
+  return `${fixed(temp, d.temp, u.temp)} · ${fixed(baro, d.baro, u.baro)} · ${fixed(air.humidityPct, 0, '%')}`;
+}
 const when = (iso: string) => iso.slice(0, 16).replace('T', ' ');
 
 function curveOf(run: DynoRunView): ChartCurve | null {
@@ -28,6 +37,8 @@ function curveOf(run: DynoRunView): ChartCurve | null {
 export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: number }) {
   const { data, error, isLoading, mutate } = useSWR(`/api/dyno-runs?buildId=${buildId}`, fetchRuns);
   const [message, setMessage] = useState<string | null>(null);
+  // Shop units by default; a shop that reads °C and kPa switches in the form (not yet a shop setting).
+  const [units, setUnits] = useState<AirUnits>('imperial');
   const runs = data ?? [];
   const before = runs.filter((r) => r.phase === 'before' && r.correctedCurve).at(-1);
   const baseline = before ? curveOf(before) : null;
@@ -62,7 +73,7 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
               <th scope="col" className={`${thClass} text-right`}>Peak torque observed</th>
               <th scope="col" className={`${thClass} text-right`}>Correction</th>
               <th scope="col" className={`${thClass} text-right`}>Corrected power · torque</th>
-              <th scope="col" className={thClass}><span className="sr-only">Actions</span></th>
+              <th scope="col" className={`${thClass} print:hidden`}><span className="sr-only">Actions</span></th>
             </tr>
           </thead>
           <tbody>
@@ -71,14 +82,14 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
                 <td className={tdClass}>{run.phase === 'before' ? 'Before' : 'After'}</td>
                 <td className={`${tdClass} spec`}>{when(run.runAt)}</td>
                 <td className={`${tdClass} spec`}>{run.camName ?? '—'}</td>
-                <td className={`${tdClass} spec`}>{fixed(run.air.airTempC, 1, '°C')} · {fixed(run.air.baroKpa, 1, 'kPa')} · {fixed(run.air.humidityPct, 0, '%')}</td>
+                <td className={`${tdClass} spec`}>{airText(run.air, units)}</td>
                 <td className={`${tdClass} spec text-right`}>{fixed(run.observed.peakHp, 1, 'hp')} @ {run.observed.peakHpRpm ?? '—'} rpm</td>
                 <td className={`${tdClass} spec text-right`}>{fixed(run.observed.peakTorqueLbFt, 1, 'lb·ft')} @ {run.observed.peakTorqueRpm ?? '—'} rpm</td>
                 <td className={`${tdClass} spec text-right`} title={run.correction ? `${run.correction.formula} — ${run.correction.source}` : 'no air data'}>
                   {run.correction ? `${STANDARD_NAMES[run.correction.standard]} × ${run.correction.factor.toFixed(4)}` : '—'}
                 </td>
                 <td className={`${tdClass} spec text-right`}>{fixed(run.corrected?.peakHp, 1, 'hp')} · {fixed(run.corrected?.peakTorqueLbFt, 1, 'lb·ft')}</td>
-                <td className={tdClass}><button type="button" className={buttonClass.danger} onClick={() => remove(run)}>Delete</button></td>
+                <td className={`${tdClass} print:hidden`}><button type="button" className={buttonClass.danger} onClick={() => remove(run)}>Delete</button></td>
               </tr>
             ))}
           </tbody>
@@ -97,8 +108,8 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
           </figcaption>
         </figure>
       ) : null}
-      <div className="rounded border border-steel-100 bg-paper-raised p-3">
-        <DynoRunForm buildId={buildId} quoteId={quoteId} onSaved={() => void mutate()} />
+      <div className="rounded border border-steel-100 bg-paper-raised p-3 print:hidden">
+        <DynoRunForm buildId={buildId} quoteId={quoteId} units={units} onUnitsChange={setUnits} onSaved={() => void mutate()} />
       </div>
     </section>
   );

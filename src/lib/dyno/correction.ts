@@ -5,6 +5,16 @@ export const CORRECTION_STANDARD_NAMES = ['sae-j1349', 'sae-j607', 'din-70020', 
 export type CorrectionStandard = (typeof CORRECTION_STANDARD_NAMES)[number];
 export type AirReading = { airTempC: number; baroKpa: number; humidityPct: number };
 
+/** The readings each standard's formula uses (below); the others may be left out. */
+export const AIR_NEEDED_BY: Record<CorrectionStandard, readonly (keyof AirReading)[]> = {
+  'sae-j1349': ['airTempC', 'baroKpa', 'humidityPct'],
+  'sae-j607': ['airTempC', 'baroKpa', 'humidityPct'],
+  'din-70020': ['airTempC', 'baroKpa'],
+  none: [],
+};
+
+export const STANDARD_LABELS: Record<CorrectionStandard, string> = { 'sae-j1349': 'SAE J1349', 'sae-j607': 'SAE J607', 'din-70020': 'DIN 70020', none: 'no correction' };
+
 /** 1 inHg = 3.386389 kPa (mercury at 0 °C, standard gravity). */
 export const KPA_PER_INHG = 3.386389;
 

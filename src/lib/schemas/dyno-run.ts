@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CORRECTION_STANDARD_NAMES } from '@/lib/dyno/correction';
+import { AIR_NEEDED_BY, CORRECTION_STANDARD_NAMES, STANDARD_LABELS } from '@/lib/dyno/correction';
 
 // A dyno run as the technician records it: the air on the day, then either the peak figures read off
 // the dyno screen or the pull itself as rpm/torque points (power is then computed, peaks derived).
@@ -26,6 +26,12 @@ function bounded(label: string, unit: string, { min, max }: { min: number; max: 
   if (whole) n = n.int({ error: `${label} must be a whole number of ${unit}` });
   return n;
 }
+
+export const AIR_TEXT = {
+  airTempC: { label: 'air temperature', unit: '°C' },
+  baroKpa: { label: 'barometric pressure', unit: 'kPa' },
+  humidityPct: { label: 'relative humidity', unit: '%' },
+} as const;
 
 const id = (label: string) => z.number({ error: `${label} must be a record id (whole number)` }).int({ error: `${label} must be a whole number` }).positive({ error: `${label} must be a record id` });
 
@@ -62,9 +68,10 @@ export const DynoRunSchema = z
       phase: z.enum(['before', 'after'], { error: 'phase must be before or after' }),
       runAt: z.iso.datetime({ offset: true, error: 'runAt must be a date and time (ISO 8601, e.g. 2026-12-02T14:30:00Z)' }).nullish(),
       correctionStandard: z.enum(CORRECTION_STANDARD_NAMES, { error: `correctionStandard must be one of: ${CORRECTION_STANDARD_NAMES.join(', ')}` }).default('sae-j1349'),
-      airTempC: bounded('air temperature', '°C', L.airTempC),
-      baroKpa: bounded('barometric pressure', 'kPa', L.baroKpa),
-      humidityPct: bounded('relative humidity', '%', L.humidityPct),
+      // Optional here; required below only when the chosen standard's formula uses the reading.
+      airTempC: bounded(AIR_TEXT.airTempC.label, AIR_TEXT.airTempC.unit, L.airTempC).nullish(),
+      baroKpa: bounded(AIR_TEXT.baroKpa.label, AIR_TEXT.baroKpa.unit, L.baroKpa).nullish(),
+      humidityPct: bounded(AIR_TEXT.humidityPct.label, AIR_TEXT.humidityPct.unit, L.humidityPct).nullish(),
       peak: PeakFiguresSchema.nullish(),
       curve: z
         .array(CurvePointSchema, { error: 'curve must be a list of { rpm, torqueLbFt } points' })
@@ -82,6 +89,18 @@ export const DynoRunSchema = z
       notes: z.string({ error: 'notes must be text' }).trim().max(L.notesMaxLength, { error: `notes must be at most ${L.notesMaxLength} characters` }).nullish(),
     },
     { error: 'the dyno run must be an object' },
+  )
+  .superRefine(
+    (run, ctx) => {
+      // Runs even when other fields failed (when: below), so a missing reading is named with every other problem.
+      if (typeof run !== 'object' || run === null || !Object.hasOwn(AIR_NEEDED_BY, run.correctionStandard)) return;
+      for (const field of AIR_NEEDED_BY[run.correctionStandard]) {
+        if (run[field] === undefined || run[field] === null) {
+          ctx.addIssue({ code: 'custom', path: [field], message: `${AIR_TEXT[field].label} is required for ${STANDARD_LABELS[run.correctionStandard]} (${AIR_TEXT[field].unit})` });
+        }
+      }
+    },
+    { when: () => true },
   )
   .superRefine((run, ctx) => {
     if (!run.peak && !run.curve) ctx.addIssue({ code: 'custom', path: ['curve'], message: 'give either the peak figures (peak) or the pull as rpm/torque points (curve)' });

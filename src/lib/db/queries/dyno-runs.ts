@@ -2,7 +2,7 @@ import { Op, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
-import { correctionFor, type Correction } from '@/lib/dyno/correction';
+import { AIR_NEEDED_BY, correctionFor, type Correction, type CorrectionStandard } from '@/lib/dyno/correction';
 import { correctedFigure, peaksOf, pullWithPower, round1, type PullPoint } from '@/lib/dyno/figures';
 import type { DynoRunValues } from '@/lib/schemas/dyno-run';
 import { Build, Cam, db, DynoRun, Quote, User } from '../models';
@@ -39,9 +39,10 @@ const includes = () => [
 ];
 
 export function runCorrection(run: Pick<DynoRun, 'correctionStandard' | 'airTempC' | 'baroKpa' | 'humidityPct'>): Correction | null {
-  if (run.correctionStandard === 'none') return correctionFor('none', { airTempC: 0, baroKpa: 0, humidityPct: 0 });
-  if (run.airTempC === null || run.baroKpa === null || run.humidityPct === null) return null;
-  return correctionFor(run.correctionStandard, { airTempC: run.airTempC, baroKpa: run.baroKpa, humidityPct: run.humidityPct });
+  // A reading the standard does not use may be missing (DIN 70020 ignores humidity); 0 stands in, unused.
+  const standard = run.correctionStandard as CorrectionStandard;
+  if (AIR_NEEDED_BY[standard].some((field) => run[field] === null)) return null;
+  return correctionFor(standard, { airTempC: run.airTempC ?? 0, baroKpa: run.baroKpa ?? 0, humidityPct: run.humidityPct ?? 0 });
 }
 
 export function viewOf(run: RunWithRefs): DynoRunView {
@@ -123,9 +124,9 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
         phase: values.phase,
         runAt: values.runAt ? new Date(values.runAt) : new Date(),
         correctionStandard: values.correctionStandard,
-        airTempC: values.airTempC,
-        baroKpa: values.baroKpa,
-        humidityPct: values.humidityPct,
+        airTempC: values.airTempC ?? null,
+        baroKpa: values.baroKpa ?? null,
+        humidityPct: values.humidityPct ?? null,
         ...peaks,
         curve,
         notes: values.notes || null,

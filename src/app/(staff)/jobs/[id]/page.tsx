@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import { DynoPanel } from '@/components/jobs/dyno-panel';
+import { PrintButton } from '@/components/jobs/print-button';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
 import { valveEvents } from '@/lib/advisor/valve-events';
 import { requireRoleForPage } from '@/lib/auth/guard';
@@ -39,6 +40,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
         title={`${job.number} · ${job.vehicleLabel}`}
         lead={<>{job.customerName} · <StateTag tone={job.status === 'deposit-paid' ? 'ok' : 'muted'}>{job.status === 'deposit-paid' ? 'Deposit paid' : 'Accepted'}</StateTag></>}
         back={{ href: '/jobs', label: 'Jobs' }}
+        actions={<PrintButton />}
       />
 
       <section aria-labelledby="cautions-title" className="rounded border border-caution-700/40 bg-caution-100 p-3 text-sm text-caution-700">

@@ -1,0 +1,58 @@
+import { parseCurveCsv } from '@/lib/dyno/curve-csv';
+import { baroToKpa, celsiusFromFahrenheit, fahrenheitFromCelsius, inHgFromKpa, kpaFromInHg, rangeIn, tempToCelsius } from '@/lib/dyno/units';
+import { DynoRunSchema } from '@/lib/schemas/dyno-run';
+
+// Shop units at the edge, SI inside: °F = °C × 9/5 + 32 (definition of the Fahrenheit scale);
+// 1 inHg = 3.386389 kPa (mercury at 0 °C, standard gravity; the same constant as the J607 correction).
+describe('air units', () => {
+  it('converts the fixed points of water and a standard day both ways', () => {
+    expect(fahrenheitFromCelsius(0)).toBe(32);
+    expect(fahrenheitFromCelsius(100)).toBe(212);
+    expect(celsiusFromFahrenheit(77)).toBe(25);
+    expect(tempToCelsius('imperial', 59)).toBe(15);
+    expect(tempToCelsius('metric', 59)).toBe(59);
+    // 29.92 inHg × 3.386389 = 101.3208 kPa (standard sea-level pressure is 101.325 kPa).
+    expect(kpaFromInHg(29.92)).toBeCloseTo(101.3208, 4);
+    expect(inHgFromKpa(kpaFromInHg(29.53))).toBeCloseTo(29.53, 10);
+    expect(baroToKpa('metric', 99)).toBe(99);
+  });
+
+  it('shows the schema’s SI limits in shop units, rounded inwards so a shown value always passes', () => {
+    // −20 °C = −4 °F, 60 °C = 140 °F; 70 kPa = 20.671 inHg → 20.68, 110 kPa = 32.483 inHg → 32.48.
+    expect(rangeIn('imperial', 'temp', { min: -20, max: 60 })).toEqual({ min: -4, max: 140 });
+    expect(rangeIn('imperial', 'baro', { min: 70, max: 110 })).toEqual({ min: 20.68, max: 32.48 });
+    expect(rangeIn('metric', 'baro', { min: 70, max: 110 })).toEqual({ min: 70, max: 110 });
+    expect(kpaFromInHg(20.68)).toBeGreaterThanOrEqual(70);
+    expect(kpaFromInHg(32.48)).toBeLessThanOrEqual(110);
+  });
+});
+
+describe('pull CSV line numbers', () => {
+  it('names the line the technician sees, counting the header and blank lines', () => {
+    const parsed = parseCurveCsv('rpm,torque\n3000,300\n\n3500,310\n4000;x\n');
+    expect(parsed.points).toEqual([{ rpm: 3000, torqueLbFt: 300 }, { rpm: 3500, torqueLbFt: 310 }]);
+    expect(parsed.lines).toEqual([2, 4]);
+    expect(parsed.errors).toEqual(['line 5: expected two numbers, rpm and torque in lb·ft (got "4000;x")']);
+  });
+  it('skips a header only on the first non-blank line', () => {
+    expect(parseCurveCsv('\n\nrpm,torque\n3000,300').lines).toEqual([4]);
+    expect(parseCurveCsv('3000,300\nrpm,torque').errors).toEqual(['line 2: expected two numbers, rpm and torque in lb·ft (got "rpm,torque")']);
+  });
+});
+
+describe('air readings by correction standard (the route’s schema)', () => {
+  const curve = [{ rpm: 3000, torqueLbFt: 300 }, { rpm: 4000, torqueLbFt: 320 }, { rpm: 5000, torqueLbFt: 310 }];
+  const fields = (body: object) => {
+    const result = DynoRunSchema.safeParse({ buildId: 1, phase: 'before', curve, ...body });
+    return result.success ? [] : result.error.issues.map((i) => i.path.join('.'));
+  };
+  it('needs all three for SAE J1349 and J607, temperature and pressure for DIN 70020, none without correction', () => {
+    expect(fields({ correctionStandard: 'sae-j1349' })).toEqual(['airTempC', 'baroKpa', 'humidityPct']);
+    expect(fields({ correctionStandard: 'sae-j607', airTempC: 20, baroKpa: 99 })).toEqual(['humidityPct']);
+    expect(fields({ correctionStandard: 'din-70020', airTempC: 20, baroKpa: 99 })).toEqual([]);
+    expect(fields({ correctionStandard: 'none' })).toEqual([]);
+  });
+  it('names a missing reading together with every other problem', () => {
+    expect(fields({ phase: 'sideways', baroKpa: 200, humidityPct: 40 }).sort()).toEqual(['airTempC', 'baroKpa', 'phase']);
+  });
+});
