@@ -24,6 +24,7 @@ describe('Make a quote from the shortlist', () => {
     await context.addCookies([{ name, value, url: appUrl }]);
     const page = await context.newPage();
     await page.goto(`${appUrl}/advisor`);
+    await page.getByLabel('Build').selectOption({ index: 1 });
     const firstCam = page.locator('table tbody tr').first().getByRole('button');
     await firstCam.waitFor();
     const camText = (await firstCam.textContent()) ?? '';

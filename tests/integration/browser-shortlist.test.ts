@@ -23,6 +23,10 @@ describe('cam shortlist page in a real browser', () => {
     const page = await context.newPage();
     await page.goto(`${appUrl}/advisor`);
     await page.getByRole('heading', { name: 'Cam shortlist' }).waitFor();
+    // Nothing is ranked until a build is picked (never some other customer's build by default).
+    await page.getByText('Pick the customer’s build above').waitFor();
+    await expect(page.locator('table').count()).resolves.toBe(0);
+    await page.getByLabel('Build').selectOption({ index: 1 });
     const rows = page.locator('table tbody tr');
     await rows.first().waitFor();
     expect(await rows.count()).toBeGreaterThanOrEqual(10);

@@ -21,7 +21,8 @@ async function rank([url, build]: [string, BuildProfile]): Promise<ShopRanking> 
 }
 
 export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds: BuildOption[]; notice: string; initialBuildId?: number }) {
-  const [buildId, setBuildId] = useState<number | null>(initialBuildId ?? builds[0]?.id ?? null);
+  // No silent default: the person picks the customer's build (the page preselects one only from ?build=).
+  const [buildId, setBuildId] = useState<number | null>(initialBuildId ?? null);
   const build = builds.find((b) => b.id === buildId) ?? null;
   const { data, error, isLoading } = useSWR(build ? ['/api/advisor/rank', build.profile] : null, rank, { revalidateOnFocus: false });
   const [openCamId, setOpenCamId] = useState<string | null>(null);
@@ -48,9 +49,11 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
           value={buildId ?? ''}
           onChange={(e) => { setBuildId(Number(e.target.value)); setCharted(null); setOpenCamId(null); }}
         >
+          {buildId === null ? <option value="" disabled>Pick a build…</option> : null}
           {builds.map((b) => <option key={b.id} value={b.id}>{b.label}</option>)}
         </select>
       </label>
+      {buildId === null ? <p className="text-sm text-ink-soft">Pick the customer’s build above to rank the shop’s cams for it.</p> : null}
 
       {isLoading ? <p role="status" className="text-sm text-ink-soft">Ranking the catalogue for this build…</p> : null}
       {error ? <p role="alert" className="rounded border border-fault-700/40 bg-fault-100 p-3 text-sm text-fault-700">Problem: {error.message} Check the build’s details and try again.</p> : null}

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { formatCents } from '@/components/catalogue/format';
 import { PageHeader, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
-import { PaymentStatusTag, QuoteStatusTag } from '@/components/quotes/status';
+import { PaymentStatusTag, QuoteStatusTag, quoteStatusWord } from '@/components/quotes/status';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { QUOTE_STATUSES, type QuoteStatus } from '@/lib/db/models/quote';
 import { listQuotes } from '@/lib/db/queries/quotes';
@@ -20,7 +20,7 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
       <nav aria-label="Filter by status" className="flex flex-wrap gap-2 text-sm">
         {[undefined, ...QUOTE_STATUSES].map((s) => (
           <Link key={s ?? 'all'} href={s ? `?status=${s}` : '?'} aria-current={status === s ? 'page' : undefined} className={`rounded px-2 py-1 ring-1 ring-steel-300 ${status === s ? 'bg-ink text-paper' : 'bg-paper-raised'}`}>
-            {s ?? 'all'}
+            {s ? quoteStatusWord(s) : 'All'}
           </Link>
         ))}
       </nav>
@@ -52,7 +52,7 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
               </tr>
             ))}
             {quotes.length === 0 ? (
-              <tr><td colSpan={8} className={`${tdClass} text-ink-muted`}>No quotes{status ? ` in state “${status}”` : ''} yet.</td></tr>
+              <tr><td colSpan={8} className={`${tdClass} text-ink-muted`}>No quotes{status ? ` in the state “${quoteStatusWord(status)}”` : ''} yet.</td></tr>
             ) : null}
           </tbody>
         </table>
