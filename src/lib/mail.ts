@@ -12,9 +12,25 @@ function resend(): Resend {
   return client;
 }
 
+/**
+ * A value that goes into a mail header, on one line. The schemas already refuse line breaks in names and
+ * addresses; this is the last guard, so no CR/LF from any caller can ever start a new header.
+ */
+export function headerValue(value: string): string {
+  return value.replace(/[\r\n\u2028\u2029]+/g, ' ').replace(/[\u0000-\u001f\u007f]/g, '').trim();
+}
+
 export async function sendMail(mail: OutgoingMail): Promise<{ id: string }> {
-  const from = process.env.MAIL_FROM ?? 'Lobewise <no-reply@lobewise.test>';
-  const { data, error } = await resend().emails.send({ from, ...mail });
+  const { to, subject, replyTo, html, text } = mail;
+  const reply = replyTo === undefined ? '' : headerValue(replyTo);
+  const { data, error } = await resend().emails.send({
+    from: headerValue(process.env.MAIL_FROM ?? 'Lobewise <no-reply@lobewise.test>'),
+    to: Array.isArray(to) ? to.map(headerValue) : headerValue(to),
+    subject: headerValue(subject),
+    ...(reply ? { replyTo: reply } : {}),
+    html,
+    text,
+  });
   if (error || !data) throw new Error(`Mail was not accepted: ${error?.message ?? 'no answer from the mail service'}`);
   return { id: data.id };
 }

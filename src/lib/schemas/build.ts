@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { presence } from './cam-card';
 import { pageParams, VersionSchema } from './catalogue-cam';
 import { BuildProfileSchema } from './build-profile';
@@ -18,9 +19,7 @@ const idOf = (label: string) =>
     .int({ error: `${label} must be a whole number (an id)` })
     .positive({ error: `${label} must be a whole number (an id)` });
 
-export const VehicleLabelSchema = z
-  .string({ error: presence('vehicle', 'text') })
-  .trim()
+export const VehicleLabelSchema = text('vehicle', { error: presence('vehicle', 'text') })
   .min(1, { error: 'vehicle must not be empty (year, body, engine, e.g. "2012 pickup, 5.3 L")' })
   .max(BUILD_RECORD_LIMITS.vehicleLabelMaxLength, { error: `vehicle must be at most ${BUILD_RECORD_LIMITS.vehicleLabelMaxLength} characters` });
 
@@ -65,9 +64,7 @@ export type BuildUpdate = z.output<typeof BuildUpdateSchema>;
 
 export const BuildPatchControlSchema = z.object({ version: VersionSchema });
 
-const customerIdParam = z
-  .string()
-  .trim()
+const customerIdParam = text('customerId')
   .optional()
   .transform((v, ctx) => {
     if (v === undefined || v === '') return undefined;

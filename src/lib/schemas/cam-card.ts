@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 
 // A cam card: what a supplier prints about a grind. Durations are crank degrees, lifts are at the valve.
 // The limits are wide enough for every street and strip grind a pushrod V8 shop sells, and narrow
@@ -35,7 +36,7 @@ const L = CAM_LIMITS;
 
 export const CamIdSchema = z.union(
   [
-    z.string().trim().min(1).max(L.idMaxLength),
+    text('id').min(1).max(L.idMaxLength),
     z.number().int().min(0).max(Number.MAX_SAFE_INTEGER),
   ],
   { error: `id must be a non-empty text (up to ${L.idMaxLength} characters) or a whole number` },
@@ -49,9 +50,7 @@ export function presence(label: string, kind: string) {
 export const CamCardSchema = z
   .strictObject({
     id: CamIdSchema,
-    name: z
-      .string({ error: presence('name', 'text') })
-      .trim()
+    name: text('name', { error: presence('name', 'text') })
       .min(1, { error: 'name must not be empty' })
       .max(L.nameMaxLength, { error: `name must be at most ${L.nameMaxLength} characters` }),
     intakeDuration050: boundedNumber('intake duration at 0.050"', 'deg', L.duration050Deg),

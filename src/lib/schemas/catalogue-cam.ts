@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { boundedNumber, CAM_LIMITS, CamCardSchema, presence } from './cam-card';
 
 // A cam as the shop keeps it: the supplier's card (the advisor's CamCardSchema fields, reused as they
@@ -18,9 +19,7 @@ const card = CamCardSchema.shape;
 
 /** A shop SKU: letters, digits and . _ - / (no spaces), as printed on the shelf label. */
 export function skuSchema(label = 'SKU', maxLength = L.skuMaxLength) {
-  return z
-    .string({ error: presence(label, 'text') })
-    .trim()
+  return text(label, { error: presence(label, 'text') })
     .min(1, { error: `${label} must not be empty` })
     .max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
     .refine((v) => v === '' || /^[A-Za-z0-9][A-Za-z0-9._/-]*$/.test(v), { error: `${label} may hold only letters, digits and . _ - / (no spaces)` });
@@ -39,8 +38,7 @@ export function wholeCount(label: string, unit: string, range: { min: number; ma
 }
 
 export function optionalText(label: string, maxLength: number) {
-  return z
-    .string({ error: `${label} must be text` })
+  return text(label, { multiline: true, error: `${label} must be text` })
     .max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
     .nullish()
     .transform((v) => (v === null || v === undefined || v.trim() === '' ? null : v.trim()));
@@ -116,9 +114,7 @@ export const CAM_SORTS = ['sku', 'name', 'supplier', 'intakeDuration050', 'exhau
 export type CamSort = (typeof CAM_SORTS)[number];
 
 const numberParam = (label: string) =>
-  z
-    .string()
-    .trim()
+  text(label)
     .optional()
     .transform((v, ctx) => {
       if (v === undefined || v === '') return undefined;
@@ -142,7 +138,7 @@ export const pageParams = {
     .pipe(z.number().int({ error: 'pageSize must be a whole number' }).min(1, { error: 'pageSize must be at least 1' }).max(200, { error: 'pageSize must be at most 200' }).optional())
     .transform((v) => v ?? 25),
   dir: z.enum(['asc', 'desc'], { error: 'dir must be asc or desc' }).optional().transform((v) => v ?? 'asc'),
-  q: z.string().trim().max(100, { error: 'q must be at most 100 characters' }).optional().transform((v) => (v ? v : undefined)),
+  q: text('q').max(100, { error: 'q must be at most 100 characters' }).optional().transform((v) => (v ? v : undefined)),
 };
 
 export const CamListQuerySchema = z.strictObject({

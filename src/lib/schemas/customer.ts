@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { presence } from './cam-card';
 import { pageParams, VersionSchema } from './catalogue-cam';
 
@@ -13,12 +14,10 @@ export const CUSTOMER_LIMITS = {
 const L = CUSTOMER_LIMITS;
 
 /** Optional text: blank (or null) is stored as NULL. */
-function optionalText(label: string, maxLength: number) {
+function optionalText(label: string, maxLength: number, multiline = false) {
   return z.preprocess(
     (v) => (typeof v === 'string' && v.trim() === '' ? null : v),
-    z
-      .string({ error: `${label} must be text` })
-      .trim()
+    text(label, { multiline, error: `${label} must be text` })
       .max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
       .nullish()
       .transform((v) => v ?? null),
@@ -27,16 +26,12 @@ function optionalText(label: string, maxLength: number) {
 
 export const CustomerSchema = z.strictObject(
   {
-    name: z
-      .string({ error: presence('name', 'text') })
-      .trim()
+    name: text('name', { error: presence('name', 'text') })
       .min(1, { error: 'name must not be empty' })
       .max(L.nameMaxLength, { error: `name must be at most ${L.nameMaxLength} characters` }),
     email: z.preprocess(
       (v) => (typeof v === 'string' && v.trim() === '' ? null : v),
-      z
-        .string({ error: 'e-mail must be text' })
-        .trim()
+      text('e-mail', { error: 'e-mail must be text' })
         .max(L.emailMaxLength, { error: `e-mail must be at most ${L.emailMaxLength} characters` })
         .pipe(z.email({ error: 'e-mail must look like name@example.com' }))
         .nullish()
@@ -45,7 +40,7 @@ export const CustomerSchema = z.strictObject(
     phone: optionalText('phone', L.phoneMaxLength).refine((v) => v === null || /^[0-9+()./ -]+$/.test(v), {
       error: 'phone may hold only digits, spaces and + ( ) . / -',
     }),
-    notes: optionalText('notes', L.notesMaxLength),
+    notes: optionalText('notes', L.notesMaxLength, true),
   },
   { error: presence('customer', 'an object') },
 );

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { AIR_NEEDED_BY, CORRECTION_STANDARD_NAMES, STANDARD_LABELS } from '@/lib/dyno/correction';
 
 // A dyno run as the technician records it: the air on the day, then either the peak figures read off
@@ -86,7 +87,7 @@ export const DynoRunSchema = z
           }
         })
         .nullish(),
-      notes: z.string({ error: 'notes must be text' }).trim().max(L.notesMaxLength, { error: `notes must be at most ${L.notesMaxLength} characters` }).nullish(),
+      notes: text('notes', { multiline: true, error: 'notes must be text' }).max(L.notesMaxLength, { error: `notes must be at most ${L.notesMaxLength} characters` }).nullish(),
     },
     { error: 'the dyno run must be an object' },
   )

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { presence } from './cam-card';
 import { flag, pageParams, skuSchema, VersionSchema } from './catalogue-cam';
 
@@ -11,9 +12,7 @@ export const ENGINES_PATTERN = /^[a-z0-9.+-]+(\s*,\s*[a-z0-9.+-]+)*$/;
 export const LaborSchema = z.strictObject(
   {
     code: skuSchema('code'),
-    name: z
-      .string({ error: presence('name', 'text') })
-      .trim()
+    name: text('name', { error: presence('name', 'text') })
       .min(1, { error: 'name must not be empty' })
       .max(LABOR_LIMITS.nameMaxLength, { error: `name must be at most ${LABOR_LIMITS.nameMaxLength} characters` }),
     hours: z
@@ -21,9 +20,7 @@ export const LaborSchema = z.strictObject(
       .min(LABOR_LIMITS.hours.min, { error: `hours must be at least ${LABOR_LIMITS.hours.min} h` })
       .max(LABOR_LIMITS.hours.max, { error: `hours must be at most ${LABOR_LIMITS.hours.max} h` })
       .refine((h) => Math.abs(h * 100 - Math.round(h * 100)) < 1e-6, { error: 'hours may have at most two decimals' }),
-    engines: z
-      .string({ error: 'engines must be text' })
-      .trim()
+    engines: text('engines', { error: 'engines must be text' })
       .toLowerCase()
       .max(LABOR_LIMITS.enginesMaxLength, { error: `engines must be at most ${LABOR_LIMITS.enginesMaxLength} characters` })
       .nullish()

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { presence } from './cam-card';
 
 // The at-home questionnaire (/ask): every answer is a choice from a short list, so the customer
@@ -29,9 +30,7 @@ function choice<T extends readonly [string, ...string[]]>(label: string, values:
 }
 
 const optionalText = (label: string, max: number) =>
-  z
-    .string({ error: presence(label, 'text') })
-    .trim()
+  text(label, { error: presence(label, 'text') })
     .max(max, { error: `${label} must be at most ${max} characters` })
     .optional()
     .transform((v) => (v ? v : undefined));
@@ -46,9 +45,7 @@ export const LeadAnswersSchema = z
     driveline: choice('driveline', DRIVELINE_CHOICES),
     exhaust: choice('exhaust', EXHAUST_CHOICES),
     budget: choice('budget', BUDGET_CHOICES),
-    name: z
-      .string({ error: presence('name', 'text') })
-      .trim()
+    name: text('name', { error: presence('name', 'text') })
       .min(1, { error: 'name must not be empty' })
       .max(LEAD_LIMITS.nameMaxLength, { error: `name must be at most ${LEAD_LIMITS.nameMaxLength} characters` }),
     email: optionalText('email', LEAD_LIMITS.emailMaxLength).refine((v) => v === undefined || z.email().safeParse(v).success, {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { CAM_LIMITS, presence } from './cam-card';
 import { flag } from './catalogue-cam';
 
@@ -46,9 +47,7 @@ export const NeedRuleSchema = z
     {
       kind: z.enum(NEED_RULE_KIND_OPTIONS, { error: presence('kind', `one of: ${NEED_RULE_KIND_OPTIONS.join(', ')}`) }),
       threshold: z.number({ error: 'threshold must be a number' }).finite().nullish().transform((v) => v ?? null),
-      label: z
-        .string({ error: presence('label', 'text') })
-        .trim()
+      label: text('label', { error: presence('label', 'text') })
         .min(1, { error: 'label must not be empty' })
         .max(NEED_RULE_LIMITS.labelMaxLength, { error: `label must be at most ${NEED_RULE_LIMITS.labelMaxLength} characters` }),
       active: flag('active', true),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { CATALOGUE_CAM_LIMITS, flag, optionalText, pageParams, skuSchema, supplierIdSchema, VersionSchema, wholeCents, wholeCount } from './catalogue-cam';
 import { presence } from './cam-card';
 
@@ -9,16 +10,14 @@ export const PART_CATEGORY_LIST = [
 export const PART_LIMITS = { nameMaxLength: 160, specKeys: 20, specKeyMaxLength: 40, specTextMaxLength: 200 } as const;
 
 // Free-form spec values a supplier prints (max lift, seat pressure, stall speed): short text, numbers or flags.
-const specValue = z.union([z.number().finite(), z.string().max(PART_LIMITS.specTextMaxLength), z.boolean()], {
+const specValue = z.union([z.number().finite(), text('spec value', { trim: false }).max(PART_LIMITS.specTextMaxLength), z.boolean()], {
   error: `each spec value must be a number, true/false or text up to ${PART_LIMITS.specTextMaxLength} characters`,
 });
 
 export const PartSchema = z.strictObject(
   {
     sku: skuSchema(),
-    name: z
-      .string({ error: presence('name', 'text') })
-      .trim()
+    name: text('name', { error: presence('name', 'text') })
       .min(1, { error: 'name must not be empty' })
       .max(PART_LIMITS.nameMaxLength, { error: `name must be at most ${PART_LIMITS.nameMaxLength} characters` }),
     category: z.enum(PART_CATEGORY_LIST, { error: presence('category', `one of: ${PART_CATEGORY_LIST.join(', ')}`) }),
@@ -27,7 +26,7 @@ export const PartSchema = z.strictObject(
     costCents: wholeCents('cost').nullish().transform((v) => v ?? 0),
     stockOnHand: wholeCount('stock on hand', 'units', CATALOGUE_CAM_LIMITS.stockOnHand).nullish().transform((v) => v ?? 0),
     spec: z
-      .record(z.string().min(1).max(PART_LIMITS.specKeyMaxLength, { error: `spec names must be at most ${PART_LIMITS.specKeyMaxLength} characters` }), specValue, {
+      .record(text('spec name', { trim: false }).min(1).max(PART_LIMITS.specKeyMaxLength, { error: `spec names must be at most ${PART_LIMITS.specKeyMaxLength} characters` }), specValue, {
         error: 'spec must be an object of name → value',
       })
       .refine((r) => Object.keys(r).length <= PART_LIMITS.specKeys, { error: `spec may hold at most ${PART_LIMITS.specKeys} entries` })

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { QUOTE_LINE_KIND_LIST } from '@/lib/quotes/pricing';
 import { VersionSchema } from './catalogue-cam';
 
@@ -25,9 +26,7 @@ const twoDecimals = (n: number) => Math.abs(Math.round(n * 100) - n * 100) < 1e-
  */
 export const QuoteLineInputSchema = z.strictObject({
   kind: z.enum(QUOTE_LINE_KIND_LIST, { error: `kind must be one of: ${QUOTE_LINE_KIND_LIST.join(', ')}` }),
-  description: z
-    .string({ error: 'description must be text' })
-    .trim()
+  description: text('description', { error: 'description must be text' })
     .min(1, { error: 'description must not be empty' })
     .max(QUOTE_LIMITS.descriptionMaxLength, { error: `description must be at most ${QUOTE_LIMITS.descriptionMaxLength} characters` })
     .optional(),
@@ -76,9 +75,9 @@ export const QuoteRefundSchema = z.strictObject({
     .int({ error: 'amountCents must be a whole number of cents' })
     .min(QUOTE_LIMITS.refundCents.min, { error: 'amountCents must be at least 1' })
     .max(QUOTE_LIMITS.refundCents.max, { error: `amountCents must be at most ${QUOTE_LIMITS.refundCents.max}` }),
-  reason: z.string({ error: 'reason must be text' }).trim().max(255, { error: 'reason must be at most 255 characters' }).optional(),
+  reason: text('reason', { error: 'reason must be text' }).max(255, { error: 'reason must be at most 255 characters' }).optional(),
 });
 
 export const QuoteListQuerySchema = z.strictObject({
-  status: z.string().optional(),
+  status: text('status').optional(),
 });

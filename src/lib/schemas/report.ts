@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 
 // The date range every report takes: ?from=YYYY-MM-DD&to=YYYY-MM-DD, both days included, in UTC
 // (the database keeps UTC). Left out, the range is the last 30 days ending today.
@@ -14,9 +15,7 @@ function isCalendarDay(value: string): boolean {
 }
 
 const day = (label: string) =>
-  z
-    .string({ error: `${label} must be a date like 2026-11-30` })
-    .trim()
+  text(label, { error: `${label} must be a date like 2026-11-30` })
     .refine(isCalendarDay, { error: `${label} must be a real date written YYYY-MM-DD, like 2026-11-30` })
     .optional();
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { boundedNumber, presence } from './cam-card';
 import { VersionSchema, wholeCents } from './catalogue-cam';
 
@@ -13,20 +14,18 @@ export const SETTINGS_LIMITS = {
 } as const;
 
 const S = SETTINGS_LIMITS;
-const text = (label: string, max: number, required = false) =>
-  z
-    .string({ error: presence(label, 'text') })
-    .trim()
+const setting = (label: string, max: number, options: { required?: boolean; multiline?: boolean } = {}) =>
+  text(label, { multiline: options.multiline, error: presence(label, 'text') })
     .max(max, { error: `${label} must be at most ${max} characters` })
-    .refine((v) => !required || v.length > 0, { error: `${label} must not be empty` });
+    .refine((v) => !options.required || v.length > 0, { error: `${label} must not be empty` });
 
 export const ShopSettingsSchema = z
   .strictObject(
     {
-      name: text('shop name', 120, true),
-      address: text('address', 255),
-      phone: text('phone', 40),
-      email: z.union([z.literal(''), z.email({ error: 'email must be an e-mail address' }).max(254)], { error: 'email must be an e-mail address' }),
+      name: setting('shop name', 120, { required: true }),
+      address: setting('address', 255, { multiline: true }),
+      phone: setting('phone', 40),
+      email: z.union([z.literal(''), text('email').pipe(z.email({ error: 'email must be an e-mail address' }).max(254))], { error: 'email must be an e-mail address' }),
       laborRateCents: wholeCents('labour rate', S.laborRateCents),
       taxRateBp: boundedNumber('tax rate', 'bp', S.taxRateBp).int({ error: 'tax rate must be a whole number of basis points' }),
       depositPercentBp: boundedNumber('deposit percent', 'bp', S.depositPercentBp).int({ error: 'deposit percent must be a whole number of basis points' }),
@@ -36,7 +35,7 @@ export const ShopSettingsSchema = z
       maxCounterDiscountBp: boundedNumber('counter discount limit', 'bp', S.depositPercentBp)
         .int({ error: 'counter discount limit must be a whole number of basis points' })
         .optional(),
-      depositPolicyText: text('deposit policy', S.policyMaxLength, true),
+      depositPolicyText: setting('deposit policy', S.policyMaxLength, { required: true, multiline: true }),
     },
     { error: presence('settings', 'an object') },
   )

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { emailField } from './auth';
 
 // Staff accounts as the manager's staff page edits them. Limits exported for the forms.
@@ -12,7 +13,7 @@ export const ROLE_LABELS: Record<(typeof STAFF_ROLE_VALUES)[number], string> = {
 };
 
 const roleField = z.enum(STAFF_ROLE_VALUES, { error: 'must be manager, counter or tech' });
-const nameField = z.string({ error: 'required' }).trim().min(1, 'required').max(NAME_MAX, `at most ${NAME_MAX} characters`);
+const nameField = text('name', { error: 'required' }).min(1, 'required').max(NAME_MAX, `at most ${NAME_MAX} characters`);
 
 export const inviteUserSchema = z.strictObject({ email: emailField, name: nameField, role: roleField });
 export type InviteUserInput = z.infer<typeof inviteUserSchema>;
