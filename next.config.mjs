@@ -1,35 +1,43 @@
 /** @type {import('next').NextConfig} */
 
-// Security headers for every response. 'unsafe-inline' for styles and scripts is what the
-// App Router needs without a nonce pipeline; everything else is same-origin only.
-const securityHeaders = [
-  {
-    key: 'Content-Security-Policy',
-    value: [
-      "default-src 'self'",
-      "script-src 'self' 'unsafe-inline'",
-      "style-src 'self' 'unsafe-inline'",
-      "img-src 'self' data: blob:",
-      "font-src 'self'",
-      "connect-src 'self'",
-      "frame-ancestors 'none'",
-      "form-action 'self' http://127.0.0.1:* http://localhost:* https:",
-      "base-uri 'self'",
-      "object-src 'none'",
-    ].join('; '),
-  },
+// Headers for every response. Pages get their Content-Security-Policy from src/proxy.ts at request
+// time (it names the payments host); the one here is the strict fallback for anything the proxy does
+// not see (static files). HSTS is set by the TLS proxy in front of the app (README, Deployment).
+const everyResponse = [
   { key: 'X-Frame-Options', value: 'DENY' },
   { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
   { key: 'X-Content-Type-Options', value: 'nosniff' },
   { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=()' },
 ];
 
+const notApi = [
+  {
+    key: 'Content-Security-Policy',
+    value:
+      "default-src 'self'; img-src 'self' data:; frame-ancestors 'none'; form-action 'self'; base-uri 'self'; object-src 'none'",
+  },
+];
+
+// API answers are data, never pages, and hold private data: nothing may render or keep them.
+const apiResponse = [
+  { key: 'Content-Security-Policy', value: "default-src 'none'; frame-ancestors 'none'" },
+  { key: 'Cache-Control', value: 'no-store' },
+];
+
+// Attachment downloads (/api/{cams,parts,labor}/<id>/attachments/<id>) set their own, stricter policy
+// (a sandbox for an uploaded file shown inline) and cache rule; a header here would replace them.
+const API_EXCEPT_DOWNLOADS = '/api/:path((?!(?:cams|parts|labor)/[^/]+/attachments/[^/]+/?$).*)';
+
 const nextConfig = {
   poweredByHeader: false,
   // Database drivers load dialect modules dynamically; keep them out of the bundle.
   serverExternalPackages: ['sequelize', 'mariadb', 'argon2'],
   async headers() {
-    return [{ source: '/:path*', headers: securityHeaders }];
+    return [
+      { source: '/:path*', headers: everyResponse },
+      { source: '/:path((?!api/).*)', headers: notApi },
+      { source: API_EXCEPT_DOWNLOADS, headers: apiResponse },
+    ];
   },
 };
 
