@@ -5,6 +5,7 @@ import { hashPassword, verifyPassword } from '@/lib/auth/password';
 import { clientIp } from '@/lib/auth/request-info';
 import { currentSession } from '@/lib/auth/session';
 import { db } from '@/lib/db/models';
+import { spendUserTokens } from '@/lib/db/queries/password-tokens';
 import { revokeUserSessions } from '@/lib/db/queries/staff-sessions';
 import { findUserById, setPasswordHash } from '@/lib/db/queries/users';
 import { readJson, validationFailed } from '@/lib/http/responses';
@@ -12,7 +13,7 @@ import { changePasswordSchema } from '@/lib/schemas/auth';
 
 export const dynamic = 'force-dynamic';
 
-/** Changes the signed-in person's own password; their other sessions end, this one stays. */
+/** Changes the signed-in person's own password; their other sessions and any unused reset links end, this session stays. */
 export async function POST(request: Request) {
   const user = await requireRole(request);
   if (user instanceof Response) return user;
@@ -30,6 +31,8 @@ export async function POST(request: Request) {
   let endedSessions = 0;
   await db().transaction(async (transaction) => {
     await setPasswordHash(user.id, newHash, transaction);
+    // A reset link e-mailed before the change must not undo it (or let whoever reads that mailbox in).
+    await spendUserTokens(user.id, transaction);
     endedSessions = await revokeUserSessions(user.id, { exceptSessionId: session?.sessionId, transaction });
     await recordAudit({ user, action: 'auth.password-changed', entityType: 'user', entityId: user.id, after: { otherSessionsEnded: endedSessions }, ip: clientIp(request.headers) }, transaction);
   });
