@@ -62,9 +62,21 @@ export function toStaffRow(user: User): Omit<StaffListRow, 'lastSignInAt'> {
   };
 }
 
-export async function countActiveManagers(transaction?: Transaction): Promise<number> {
+/**
+ * Locks the active managers' rows (SELECT ... FOR UPDATE, in id order) for the rest of the transaction
+ * and returns their ids. Two managers demoting each other at once then queue on these locks instead of
+ * both counting two managers and both succeeding; a locking read also sees the latest committed rows.
+ */
+export async function lockActiveManagerIds(transaction: Transaction): Promise<number[]> {
   db();
-  return User.count({ where: { role: 'manager', active: true }, transaction });
+  const rows = await User.findAll({
+    attributes: ['id'],
+    where: { role: 'manager', active: true },
+    order: [['id', 'ASC']],
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
+  return rows.map((row) => row.id);
 }
 
 /** Writes a new password hash without touching the row's version (it is not an edit of the account). */

@@ -4,7 +4,7 @@ import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
 import { db } from '@/lib/db/models';
 import { revokeUserSessions } from '@/lib/db/queries/staff-sessions';
-import { countActiveManagers, findUserById, toStaffRow } from '@/lib/db/queries/users';
+import { findUserById, lockActiveManagerIds, toStaffRow } from '@/lib/db/queries/users';
 import { errorResponse, readJson, validationFailed, type FieldError } from '@/lib/http/responses';
 import { updateUserSchema, userIdParam } from '@/lib/schemas/user';
 
@@ -32,6 +32,9 @@ export async function PATCH(request: Request, context: { params: Promise<{ id: s
 
   try {
     const updated = await db().transaction(async (transaction) => {
+      // Managers first, then the row: every role or active change takes the locks in the same order,
+      // so concurrent changes queue instead of deadlocking, and the count below cannot go stale.
+      const managers = change.role !== undefined || change.active !== undefined ? await lockActiveManagerIds(transaction) : [];
       const user = await findUserById(id.data, transaction, true);
       if (!user) throw new Refused({ status: 404, message: 'There is no staff member with that id.' });
       if (user.version !== change.version) {
@@ -42,7 +45,7 @@ export async function PATCH(request: Request, context: { params: Promise<{ id: s
       if (self && change.active === false) problems.push({ field: 'active', message: 'you cannot switch off your own account' });
       if (self && change.role !== undefined && change.role !== user.role) problems.push({ field: 'role', message: 'you cannot change your own role' });
       const losesManager = user.role === 'manager' && user.active && ((change.role !== undefined && change.role !== 'manager') || change.active === false);
-      if (losesManager && (await countActiveManagers(transaction)) <= 1) {
+      if (losesManager && managers.filter((managerId) => managerId !== user.id).length < 1) {
         problems.push({ field: change.active === false ? 'active' : 'role', message: 'the shop needs at least one active manager' });
       }
       if (problems.length) throw new Refused(problems);
