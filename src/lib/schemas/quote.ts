@@ -70,6 +70,7 @@ export const QuotePatchSchema = z.strictObject({
 });
 
 export const QuoteRefundSchema = z.strictObject({
+  afterFullRefund: z.enum(['cancel', 'reopen'], { error: "afterFullRefund must be 'cancel' (the job is cancelled) or 'reopen' (the quote can be paid again)" }).optional(),
   amountCents: z
     .number({ error: (iss) => (iss.input === undefined ? 'amountCents is required' : 'amountCents must be a whole number of cents') })
     .int({ error: 'amountCents must be a whole number of cents' })

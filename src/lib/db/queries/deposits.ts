@@ -6,6 +6,7 @@ import { payments } from '@/lib/payments';
 import { isPastValidUntil, retryOnLockContention, sessionMismatches } from '@/lib/quotes/deposit-rules';
 import { db, Payment, Quote } from '../models';
 import { getQuoteByToken, sha256 } from './quotes';
+import { sendRefundNotice, settleFullRefund } from './refund-effects';
 
 // The deposit, taken exactly once. Every path that changes a quote's payments locks the quote row
 // first and its payments second, so checkouts and webhook deliveries queue behind one another instead
@@ -194,17 +195,22 @@ export async function recordChargeRefunded(charge: Stripe.Charge): Promise<Webho
   db();
   const known = await Payment.findOne({ where: { providerPaymentId: intent }, attributes: ['id', 'quoteId'] });
   if (!known) return { result: 'ignored' };
-  return retryOnLockContention(() =>
+  let settled = false;
+  const outcome = await retryOnLockContention(() =>
     db().transaction(async (t): Promise<WebhookResult> => {
-      await Quote.findByPk(known.quoteId, { transaction: t, lock: t.LOCK.UPDATE });
+      const quote = await Quote.findByPk(known.quoteId, { transaction: t, lock: t.LOCK.UPDATE });
       const payment = await Payment.findByPk(known.id, { transaction: t, lock: t.LOCK.UPDATE });
-      if (!payment) return { result: 'ignored' };
+      if (!payment || !quote) return { result: 'ignored' };
       const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, charge.amount_refunded));
       if (refunded === payment.refundedCents) return { result: 'already' };
       payment.set({ refundedCents: refunded, status: refundState(payment.amountCents, refunded) });
       await payment.save({ transaction: t });
       await recordAudit({ actor: 'payments-webhook', action: 'payment.refunded', entityType: 'quote', entityId: payment.quoteId, after: { paymentId: payment.id, refundedCents: refunded } }, t);
+      // A refund made at the provider, outside the app: the job is cancelled, as the app's own default.
+      settled = payment.status === 'refunded' && (await settleFullRefund(quote, 'cancel', { actor: 'payments-webhook' }, t));
       return { result: 'applied' };
     }),
   );
+  if (settled) await sendRefundNotice(known.quoteId);
+  return outcome;
 }

@@ -15,6 +15,7 @@ import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
 import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings } from '../models';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from './quote-lines';
+import { sendRefundNotice, settleFullRefund, type AfterFullRefund } from './refund-effects';
 import type { QuoteStatus } from '../models/quote';
 
 // Quotes: made from a build and a chosen cam, priced by src/lib/quotes/pricing.ts, sent by private
@@ -419,9 +420,13 @@ function refundState(amountCents: number, refundedCents: number): Payment['statu
 
 export type RefundOutcome = { ok: true; record: QuoteRecord } | { ok: false; status: 404 | 409 | 422 | 502; message: string; errors?: FieldError[] };
 
-/** A manager refunds part or all of the paid deposit through the payments SDK; never more than is left. */
-export async function refundQuote(id: number, amountCents: number, reason: string | undefined, user: SessionUser): Promise<RefundOutcome> {
+/**
+ * A manager refunds part or all of the paid deposit through the payments SDK; never more than is left.
+ * A full refund cancels the job (or reopens the quote, as the manager chooses) and e-mails the customer.
+ */
+export async function refundQuote(id: number, amountCents: number, reason: string | undefined, user: SessionUser, afterFullRefund: AfterFullRefund = 'cancel'): Promise<RefundOutcome> {
   db();
+  let settled = false;
   const result = await db().transaction(async (t): Promise<RefundOutcome | null> => {
     // The quote row first, then its payments: the order every deposit path locks in (see deposits.ts).
     const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
@@ -452,9 +457,11 @@ export async function refundQuote(id: number, amountCents: number, reason: strin
     payment.set({ refundedCents: refunded, status: refundState(payment.amountCents, refunded) });
     await payment.save({ transaction: t });
     await recordAudit({ user, action: 'payment.refund-requested', entityType: 'quote', entityId: id, after: { paymentId: payment.id, amountCents, reason: reason ?? null } }, t);
+    settled = payment.status === 'refunded' && (await settleFullRefund(quote, afterFullRefund, { user }, t));
     return null;
   });
   if (result) return result;
+  if (settled) await sendRefundNotice(id);
   return { ok: true, record: (await getQuote(id))! };
 }
 

@@ -7,7 +7,11 @@ import { isTaxable } from '@/lib/quotes/pricing';
 
 export const dynamic = 'force-dynamic';
 // A private link: never indexed, never cached, never sent on as a referrer.
-export const metadata: Metadata = { title: 'Your quote', robots: { index: false, follow: false }, referrer: 'no-referrer' };
+export const metadata: Metadata = {
+  title: 'Your quote',
+  robots: { index: false, follow: false },
+  referrer: 'no-referrer',
+};
 
 const CAUTIONS = [
   'Emissions: many places do not allow an aftermarket cam on a road vehicle unless the part is certified for that vehicle. Ask us about the paperwork for your area.',
@@ -18,17 +22,35 @@ const CAUTIONS = [
 ];
 
 const STATUS_WORDS: Record<string, { title: string; text: string }> = {
-  sent: { title: 'Waiting for you', text: 'Read it through. When you are happy, accept it and pay the deposit to book the job.' },
+  sent: {
+    title: 'Waiting for you',
+    text: 'Read it through. When you are happy, accept it and pay the deposit to book the job.',
+  },
   accepted: { title: 'Accepted, deposit not paid yet', text: 'You can pay the deposit below whenever you are ready.' },
-  'deposit-paid': { title: 'Deposit paid — thank you', text: 'Your job is booked. We will be in touch about the date.' },
+  'deposit-paid': {
+    title: 'Deposit paid — thank you',
+    text: 'Your job is booked. We will be in touch about the date.',
+  },
   declined: { title: 'Declined', text: 'This quote was declined. Call the shop if you would like a new one.' },
   expired: { title: 'Expired', text: 'This quote has run out. Call the shop for an up-to-date price.' },
   cancelled: { title: 'Cancelled', text: 'This quote was cancelled. Call the shop if that is a surprise.' },
 };
 
-const longDate = (isoDate: string) => new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+const longDate = (isoDate: string) =>
+  new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-US', {
+    year: 'numeric',
+    month: 'long',
+    day: 'numeric',
+    timeZone: 'UTC',
+  });
 
-export default async function CustomerQuotePage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function CustomerQuotePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const { token } = await params;
   const found = await getQuoteByToken(token);
   if (!found) notFound();
@@ -38,9 +60,30 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
   // Past its valid-until day an open quote can no longer be accepted or paid (the checkout refuses it too).
   const lapsed = open && isPastValidUntil(quote.validUntil);
   const canPay = open && !lapsed && quote.depositCents > 0;
-  const state = lapsed
-    ? { title: 'No longer valid', text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.` }
-    : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
+  // A refund is told as it is: a paid quote refunded in full is no longer "booked".
+  const refunded = quote.refundedCents > 0 ? formatCents(quote.refundedCents) : null;
+  const state =
+    refunded && quote.status === 'cancelled'
+      ? {
+          title: 'Deposit refunded — job cancelled',
+          text: `We refunded your deposit of ${refunded}; the job is cancelled and this quote is closed. Call or write to ${shop.name} if you would like a new quote.`,
+        }
+      : refunded && quote.status === 'deposit-paid'
+        ? {
+            title: 'Deposit paid, part refunded',
+            text: `${refunded} of your deposit was refunded. The job is still booked; we will be in touch about the date.`,
+          }
+        : refunded && open
+          ? {
+              title: 'Deposit refunded',
+              text: `We refunded your earlier deposit of ${refunded}. This quote is open again: you can pay the deposit below when you are ready.`,
+            }
+          : lapsed
+            ? {
+                title: 'No longer valid',
+                text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.`,
+              }
+            : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
   return (
     <div className="mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink">
       <p className="text-base text-ink-muted">{shop.name}</p>
@@ -49,12 +92,16 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
         For {quote.customer.name}
         {quote.build ? `, ${quote.build.vehicleLabel}` : ''}
       </p>
-      {quote.validUntil && open && !lapsed ? <p className="mt-1 text-base text-ink-muted">Valid until {longDate(quote.validUntil)}</p> : null}
+      {quote.validUntil && open && !lapsed ? (
+        <p className="mt-1 text-base text-ink-muted">Valid until {longDate(quote.validUntil)}</p>
+      ) : null}
 
       {query.paid && quote.status !== 'deposit-paid' ? (
         <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">
           <p className="font-semibold">Payment received by the payment service — confirming</p>
-          <p className="text-base">It can take a minute to reach us. Refresh this page shortly; you will not be charged twice.</p>
+          <p className="text-base">
+            It can take a minute to reach us. Refresh this page shortly; you will not be charged twice.
+          </p>
         </div>
       ) : null}
       {query.cancelled && canPay ? (
@@ -64,13 +111,20 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
         </div>
       ) : null}
 
-      <section aria-labelledby="state" className={`mt-6 rounded-lg border p-4 ${quote.status === 'deposit-paid' ? 'border-ok-700/40 bg-ok-100' : 'border-steel-300 bg-paper-raised'}`}>
-        <h2 id="state" className="text-xl font-semibold">Status: {state.title}</h2>
+      <section
+        aria-labelledby="state"
+        className={`mt-6 rounded-lg border p-4 ${quote.status === 'deposit-paid' ? 'border-ok-700/40 bg-ok-100' : 'border-steel-300 bg-paper-raised'}`}
+      >
+        <h2 id="state" className="text-xl font-semibold">
+          Status: {state.title}
+        </h2>
         <p className="text-base">{state.text}</p>
       </section>
 
       <section aria-labelledby="lines" className="mt-8">
-        <h2 id="lines" className="text-2xl font-semibold">What is included</h2>
+        <h2 id="lines" className="text-2xl font-semibold">
+          What is included
+        </h2>
         <ul className="mt-3 divide-y divide-steel-300 rounded-lg border border-steel-300 bg-paper-raised">
           {quote.lines.map((line) => (
             <li key={line.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 px-4 py-3">
@@ -88,7 +142,9 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
         <dl className="mt-4 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 tabular-nums">
           <dt>Before tax</dt>
           <dd className="text-right">{formatCents(quote.subtotalCents)}</dd>
-          <dt>Sales tax ({(quote.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on parts)</dt>
+          <dt>
+            Sales tax ({(quote.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on parts)
+          </dt>
           <dd className="text-right">{formatCents(quote.taxCents)}</dd>
           <dt className="text-xl font-bold">Total</dt>
           <dd className="text-right text-xl font-bold">{formatCents(quote.totalCents)}</dd>
@@ -96,30 +152,56 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
       </section>
 
       <section aria-labelledby="deposit" className="mt-8 rounded-lg border-2 border-ember-500 bg-paper-raised p-5">
-        <h2 id="deposit" className="text-2xl font-semibold">Deposit to book the job: <span className="tabular-nums">{formatCents(quote.depositCents)}</span></h2>
-        <p className="mt-1 text-base">The rest, {formatCents(Math.max(0, quote.totalCents - quote.depositCents))}, is paid when the job is done.</p>
+        <h2 id="deposit" className="text-2xl font-semibold">
+          Deposit to book the job: <span className="tabular-nums">{formatCents(quote.depositCents)}</span>
+        </h2>
+        <p className="mt-1 text-base">
+          The rest, {formatCents(Math.max(0, quote.totalCents - quote.depositCents))}, is paid when the job is done.
+        </p>
         <h3 className="mt-4 text-xl font-semibold">Our deposit policy</h3>
         <p className="mt-1 whitespace-pre-line">{shop.depositPolicyText}</p>
         {canPay ? (
           <form method="post" action={`/api/q/${encodeURIComponent(token)}/checkout`} className="mt-6">
-            <button type="submit" className="min-h-14 w-full rounded-lg bg-ember-500 px-6 py-4 text-xl font-semibold text-paper-raised hover:bg-ember-600 focus-visible:outline focus-visible:outline-4 focus-visible:outline-gauge-500">
+            <button
+              type="submit"
+              className="min-h-14 w-full rounded-lg bg-ember-500 px-6 py-4 text-xl font-semibold text-paper-raised hover:bg-ember-600 focus-visible:outline focus-visible:outline-4 focus-visible:outline-gauge-500"
+            >
               Accept and pay the deposit
             </button>
-            <p className="mt-2 text-base text-ink-muted">By paying you accept this quote and the deposit policy above. You pay on the payment service’s secure page.</p>
+            <p className="mt-2 text-base text-ink-muted">
+              By paying you accept this quote and the deposit policy above. You pay on the payment service’s secure
+              page.
+            </p>
           </form>
         ) : null}
       </section>
 
       <section aria-labelledby="care" className="mt-8 rounded-lg border border-caution-700/40 bg-caution-100 p-5">
-        <h2 id="care" className="text-2xl font-semibold">Good to know before a cam swap</h2>
+        <h2 id="care" className="text-2xl font-semibold">
+          Good to know before a cam swap
+        </h2>
         <ul className="mt-3 flex list-disc flex-col gap-2 pl-6">
-          {CAUTIONS.map((text) => <li key={text}>{text}</li>)}
+          {CAUTIONS.map((text) => (
+            <li key={text}>{text}</li>
+          ))}
         </ul>
       </section>
 
       <p className="mt-8 text-base">
-        Questions? Call {shop.name} on <a className="font-semibold text-gauge-700 underline" href={`tel:${shop.phone}`}>{shop.phone}</a>
-        {shop.email ? <> or write to <a className="font-semibold text-gauge-700 underline" href={`mailto:${shop.email}`}>{shop.email}</a></> : null}.
+        Questions? Call {shop.name} on{' '}
+        <a className="font-semibold text-gauge-700 underline" href={`tel:${shop.phone}`}>
+          {shop.phone}
+        </a>
+        {shop.email ? (
+          <>
+            {' '}
+            or write to{' '}
+            <a className="font-semibold text-gauge-700 underline" href={`mailto:${shop.email}`}>
+              {shop.email}
+            </a>
+          </>
+        ) : null}
+        .
       </p>
     </div>
   );
