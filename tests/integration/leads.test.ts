@@ -3,6 +3,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import request from 'supertest';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { clearRateLimits } from '../support/rate-limits';
 import { readRuntime } from '../support/runtime';
 
 // The at-home questionnaire end to end over HTTP against the real build, the real MariaDB and the mail
@@ -32,6 +33,7 @@ afterAll(async () => {
     await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", { replacements: [ids.map(String)] });
     await sequelize.query('DELETE FROM leads WHERE id IN (?)', { replacements: [ids] });
   }
+  await clearRateLimits('lead-');
   await disconnectTestDatabase();
 });
 
@@ -154,7 +156,8 @@ describe('POST /api/leads with bad answers', () => {
     createdEmails.push(flood.email);
     const res = await request(appUrl).post('/api/leads').send(flood);
     expect(res.status).toBe(429);
-    expect(res.headers['retry-after']).toBe('3600');
+    expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
+    expect(Number(res.headers['retry-after'])).toBeLessThanOrEqual(3600);
   });
 });
 

@@ -5,6 +5,7 @@ import { SignInAttempt, authDb } from '@/lib/db/models/auth';
 import { User } from '@/lib/db/models';
 import { DEMO_EMAILS } from './auth';
 import { connectTestDatabase } from './database';
+import { clearRateLimits } from './rate-limits';
 
 // Throwaway staff accounts for tests that sign in wrongly, get throttled or deactivated, so the
 // demo users stay usable for every other test file.
@@ -22,14 +23,21 @@ export async function createThrowawayUser(role: 'manager' | 'counter' | 'tech', 
   return { id: user.id, email, password };
 }
 
-/** A documentation-range address (RFC 3849) unique to the caller, to send as X-Forwarded-For. */
+/**
+ * A documentation-range address (RFC 3849) unique to the caller. The app no longer believes a caller's
+ * X-Forwarded-For (TRUSTED_PROXY_HOPS=0 in tests), so this only labels requests; the socket counts.
+ */
 export function testAddress(): string {
   const hex = crypto.randomBytes(6).toString('hex');
   return `2001:db8::${hex.slice(0, 4)}:${hex.slice(4, 8)}:${hex.slice(8)}`;
 }
 
-/** Removes the sign-in attempts made for these e-mails and addresses. */
+/**
+ * Removes the sign-in attempts made for these e-mails and addresses, and the sign-in throttle counters
+ * (rate_limits rows; every test sign-in comes from the loopback socket, so they are shared by the run).
+ */
 export async function clearSignInAttempts(emails: string[], ips: string[] = []): Promise<void> {
+  await clearRateLimits('signin-');
   authDb();
   await SignInAttempt.destroy({ where: { [Op.or]: [{ email: { [Op.in]: emails.length ? emails : [''] } }, { ip: { [Op.in]: ips.length ? ips : [''] } }] } });
 }

@@ -79,8 +79,10 @@ export function Questionnaire() {
     go(step + 1);
   }
 
-  async function send(event: React.FormEvent) {
+  async function send(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
+    // The honeypot: people never see it; a form-filling robot does, and its lead is quietly dropped.
+    const trap = (event.currentTarget.elements.namedItem('website') as HTMLInputElement | null)?.value || undefined;
     const local: FieldErrors = {};
     if (!answers.name?.trim()) local.name = 'Please tell us your name.';
     if (!answers.email?.trim() && !answers.phone?.trim()) local.email = 'Give an e-mail address or a phone number so the shop can reach you.';
@@ -96,6 +98,7 @@ export function Questionnaire() {
         email: answers.email?.trim() || undefined,
         phone: answers.phone?.trim() || undefined,
         consent: true,
+        website: trap,
       };
       const response = await fetch('/api/leads', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(payload) });
       const body = (await response.json().catch(() => ({}))) as { resultUrl?: string; message?: string; errors?: { field: string; message: string }[] };
@@ -179,6 +182,10 @@ export function Questionnaire() {
           <Field id="name" label="Your name" value={answers.name ?? ''} error={errors.name} onChange={(v) => set('name', v)} autoComplete="name" maxLength={LEAD_LIMITS.nameMaxLength} />
           <Field id="email" label="E-mail" type="email" inputMode="email" value={answers.email ?? ''} error={errors.email} onChange={(v) => set('email', v)} autoComplete="email" maxLength={LEAD_LIMITS.emailMaxLength} />
           <Field id="phone" label="Phone" type="tel" inputMode="tel" value={answers.phone ?? ''} error={errors.phone} onChange={(v) => set('phone', v)} autoComplete="tel" maxLength={LEAD_LIMITS.phoneMaxLength} />
+          <div aria-hidden="true" className="absolute -left-[9999px] h-px w-px overflow-hidden">
+            <label htmlFor="website">Leave this empty</label>
+            <input id="website" name="website" type="text" tabIndex={-1} autoComplete="off" defaultValue="" />
+          </div>
           <label className="mt-6 flex min-h-14 cursor-pointer items-start gap-4 rounded-lg border-2 border-steel-300 bg-paper-raised px-4 py-3">
             <input
               type="checkbox"

@@ -1,15 +1,14 @@
+import { CLIENT_ADDRESS_HEADER } from '@/lib/http/client-address';
+
 // Facts about an incoming request that the auth code needs. Server-only.
 
 /**
- * The client address. The rightmost X-Forwarded-For entry is the one the nearest proxy (or
- * Next's own server, when nothing sits in front) wrote; production must run behind a proxy
- * that sets it.
+ * The client address, as the server hook decided it from the socket and TRUSTED_PROXY_HOPS
+ * (src/lib/http/peer-hook.ts). X-Forwarded-For is never read here: without a trusted proxy it is
+ * whatever the caller wrote. 'unknown' only for a request that reached no hook.
  */
 export function clientIp(headers: Headers): string {
-  const forwarded = headers.get('x-forwarded-for');
-  const last = forwarded?.split(',').map((part) => part.trim()).filter(Boolean).pop();
-  const ip = last ?? headers.get('x-real-ip') ?? 'unknown';
-  return ip.replace(/^::ffff:/, '').slice(0, 64);
+  return headers.get(CLIENT_ADDRESS_HEADER)?.slice(0, 64) || 'unknown';
 }
 
 export function userAgent(headers: Headers): string | null {

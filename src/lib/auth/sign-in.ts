@@ -1,6 +1,6 @@
 import { recordAudit } from '@/lib/audit';
 import { findUserByEmail, setPasswordHash } from '@/lib/db/queries/users';
-import { recordSignInAttempt, signInRetryAfter } from '@/lib/db/queries/sign-in-attempts';
+import { reserveSignInAttempt } from '@/lib/throttle/sign-in-limits';
 import type { SessionUser } from './guard';
 import { burnVerifyTime, hashPassword, needsNewHash, verifyPassword } from './password';
 
@@ -10,15 +10,16 @@ export const WRONG_PAIR_MESSAGE = 'The e-mail or the password is wrong.';
 export type SignInOutcome =
   | { kind: 'signed-in'; user: SessionUser }
   | { kind: 'wrong-pair' }
-  | { kind: 'throttled'; retryAfterSeconds: number };
+  | { kind: 'throttled'; retryAfterSeconds: number; pauseStarted: boolean };
 
 /**
  * Checks an e-mail and password pair. Unknown e-mail, deactivated account, account without a
- * password yet and wrong password all give the same answer, after the same work.
+ * password yet and wrong password all give the same answer, after the same work. The attempt is
+ * counted before the password is checked (src/lib/throttle/sign-in-limits.ts).
  */
-export async function checkSignIn(email: string, password: string, ip: string): Promise<SignInOutcome> {
-  const retryAfterSeconds = await signInRetryAfter(email, ip);
-  if (retryAfterSeconds !== null) return { kind: 'throttled', retryAfterSeconds };
+export async function checkSignIn(email: string, password: string, ip: string, knownDeviceId: string | null): Promise<SignInOutcome> {
+  const reservation = await reserveSignInAttempt({ email, ip, knownDeviceId });
+  if (!reservation.ok) return { kind: 'throttled', retryAfterSeconds: reservation.retryAfterSeconds, pauseStarted: reservation.pauseStarted };
 
   const user = await findUserByEmail(email);
   let ok = false;
@@ -28,7 +29,7 @@ export async function checkSignIn(email: string, password: string, ip: string): 
     await burnVerifyTime(password);
   }
 
-  await recordSignInAttempt(email, ip, ok);
+  await reservation.settle(ok && !!user);
   if (!ok || !user) {
     await recordAudit({ actor: email, action: 'auth.sign-in-failed', entityType: user ? 'user' : null, entityId: user?.id ?? null, ip });
     return { kind: 'wrong-pair' };

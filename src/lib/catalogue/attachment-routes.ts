@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
 import { errorResponse } from '@/lib/http/responses';
 import {
-  addAttachment, ATTACHMENT_MAX_BYTES, getAttachment, listAttachments, readAttachmentBytes, removeAttachment, sniffAttachmentType,
+  addAttachment, ATTACHMENT_MAX_BYTES, ATTACHMENT_MAX_PER_RECORD, AttachmentLimitReached, countAttachments, getAttachment, listAttachments, readAttachmentBytes, removeAttachment, sniffAttachmentType,
   type AttachmentEntityType,
 } from '@/lib/storage/attachments';
 import { idFrom, type IdParams } from './http';
@@ -34,6 +34,12 @@ export function attachmentCollectionRoutes(entity: AttachmentEntityType, exists:
       const id = await idFrom(context, label);
       if (id instanceof Response) return id;
       if (!(await exists(id))) return errorResponse(404, `No ${label} with id ${id}.`);
+      const full = () =>
+        errorResponse(409, `This ${label} already has ${ATTACHMENT_MAX_PER_RECORD} spec sheets, the most one record keeps. Remove one before adding another.`, {
+          errors: [{ field: 'file', message: `at most ${ATTACHMENT_MAX_PER_RECORD} attachments per ${label}` }],
+        });
+      // Checked before the upload is read, so a full record costs no upload; checked again under lock in the write.
+      if ((await countAttachments(entity, id)) >= ATTACHMENT_MAX_PER_RECORD) return full();
       const read = await readUpload(request, ATTACHMENT_MAX_BYTES, 'spec sheet');
       if (!read.ok) return read.response;
       const contentType = sniffAttachmentType(read.upload.bytes);
@@ -42,7 +48,13 @@ export function attachmentCollectionRoutes(entity: AttachmentEntityType, exists:
           errors: [{ field: 'file', message: 'not a PDF, PNG or JPEG' }],
         });
       }
-      const record = await addAttachment(entity, id, { fileName: read.upload.file.name, contentType, bytes: read.upload.bytes }, user);
+      let record;
+      try {
+        record = await addAttachment(entity, id, { fileName: read.upload.file.name, contentType, bytes: read.upload.bytes }, user);
+      } catch (error) {
+        if (error instanceof AttachmentLimitReached) return full();
+        throw error;
+      }
       return NextResponse.json({ ...record, maxBytes: megabytes(ATTACHMENT_MAX_BYTES) }, { status: 201 });
     },
   };

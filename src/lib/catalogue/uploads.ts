@@ -1,8 +1,10 @@
 import type { NextResponse } from 'next/server';
+import { BodyTooLarge, limitedBody } from '@/lib/http/body-limit';
 import { errorResponse, validationFailed } from '@/lib/http/responses';
 
 // Reading one uploaded file from a multipart body, with the size refused before the body is read when
-// the client says how big it is (413), and a clear answer when the body is not multipart at all (415).
+// the client says how big it is, and counted while it streams in when it does not (chunked): either
+// way a body past the limit answers 413 without being read to the end; not multipart at all is 415.
 
 const MULTIPART_OVERHEAD = 64 * 1024;
 
@@ -22,9 +24,11 @@ export async function readUpload(request: Request, maxBytes: number, what: strin
   const declared = Number(request.headers.get('content-length') ?? '');
   if (Number.isFinite(declared) && declared > maxBytes + MULTIPART_OVERHEAD) return { ok: false, response: tooLarge() };
   let form: FormData;
+  const body = limitedBody(request, maxBytes + MULTIPART_OVERHEAD);
   try {
-    form = await request.formData();
-  } catch {
+    form = await new Response(body.stream, { headers: { 'content-type': type } }).formData();
+  } catch (error) {
+    if (error instanceof BodyTooLarge || body.passedLimit()) return { ok: false, response: tooLarge() };
     return { ok: false, response: errorResponse(400, 'The upload could not be read as a multipart form.', { errors: [{ field: 'file', message: 'unreadable multipart body' }] }) };
   }
   const file = form.get('file');

@@ -11,6 +11,9 @@ export const LEAD_LIMITS = {
   phoneMinDigits: 7,
   // A flood guard, not a business rule: more than this many leads from one e-mail or phone in an hour answers 429.
   perContactPerHour: 3,
+  // Also a flood guard: leads from one client address in an hour (generous: a café or a carrier shares one).
+  perAddressPerHour: 20,
+  honeypotMaxLength: 500,
   pageSizeMax: 100,
 } as const;
 
@@ -56,6 +59,8 @@ export const LeadAnswersSchema = z
       { error: `phone must be digits (at least ${LEAD_LIMITS.phoneMinDigits}), spaces, +, -, ( or )` },
     ),
     consent: z.literal(true, { error: 'consent must be given: the shop may only contact you if you say so' }),
+    // The honeypot (hidden from people on /ask): anything in it marks the post as a robot's.
+    website: optionalText('website', LEAD_LIMITS.honeypotMaxLength).optional(),
   }, { error: presence('answers', 'an object') })
   .refine((a) => a.email !== undefined || a.phone !== undefined, { path: ['email'], error: 'give an e-mail address or a phone number so the shop can reach you' });
 

@@ -13,6 +13,15 @@ export type AttachmentEntityType = (typeof ATTACHMENT_ENTITY_TYPES)[number];
 export const ATTACHMENT_CONTENT_TYPES = ['application/pdf', 'image/png', 'image/jpeg'] as const;
 export type AttachmentContentType = (typeof ATTACHMENT_CONTENT_TYPES)[number];
 export const ATTACHMENT_MAX_BYTES = 5 * 1024 * 1024;
+// Spec sheets per cam, part or labour operation: enough for every sheet a supplier sends, not a file store.
+export const ATTACHMENT_MAX_PER_RECORD = 10;
+
+/** Thrown inside the write when the record already holds ATTACHMENT_MAX_PER_RECORD files. */
+export class AttachmentLimitReached extends Error {}
+
+export async function countAttachments(entityType: AttachmentEntityType, entityId: number): Promise<number> {
+  return model().count({ where: { entityType, entityId } });
+}
 
 export class CatalogueAttachment extends Model<InferAttributes<CatalogueAttachment>, InferCreationAttributes<CatalogueAttachment>> {
   declare id: CreationOptional<number>;
@@ -120,6 +129,9 @@ export async function addAttachment(
   await blobStore().put(storageKey, input.bytes);
   try {
     return await db().transaction(async (t) => {
+      // Locking the record's attachment rows (and the index gap after them) makes two uploads at once queue for the cap.
+      const existing = await Attachment.findAll({ attributes: ['id'], where: { entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
+      if (existing.length >= ATTACHMENT_MAX_PER_RECORD) throw new AttachmentLimitReached();
       const row = await Attachment.create(
         {
           entityType,

@@ -5,7 +5,7 @@ import { clientIp, isCrossSite } from '@/lib/auth/request-info';
 import { randomToken } from '@/lib/auth/tokens';
 import { paged, parseBody, parseQuery } from '@/lib/catalogue/http';
 import { listBaselineCards } from '@/lib/db/queries/builds';
-import { countRecentLeads, createLead, emissionsCertifiedIds, listLeads } from '@/lib/db/queries/leads';
+import { createLead, emissionsCertifiedIds, listLeads } from '@/lib/db/queries/leads';
 import { getShopSettings } from '@/lib/db/queries/settings';
 import { appBaseUrl } from '@/lib/env';
 import { errorResponse } from '@/lib/http/responses';
@@ -13,7 +13,8 @@ import { newLeadEmail } from '@/lib/leads/email';
 import { buildProfileFromAnswers, engineLiters } from '@/lib/leads/profile';
 import { shortlistFrom } from '@/lib/leads/shortlist';
 import { sendMail } from '@/lib/mail';
-import { LEAD_LIMITS, LeadAnswersSchema, LeadListQuerySchema } from '@/lib/schemas/lead';
+import { LeadAnswersSchema, LeadListQuerySchema } from '@/lib/schemas/lead';
+import { reserveLeadPost } from '@/lib/throttle/lead-limits';
 
 export const dynamic = 'force-dynamic';
 
@@ -39,15 +40,29 @@ export async function POST(request: Request) {
   if (!body.ok) return body.response;
   const answers = body.value;
 
-  const since = new Date(Date.now() - 60 * 60 * 1000);
-  if ((await countRecentLeads(answers, since)) >= LEAD_LIMITS.perContactPerHour) {
-    return errorResponse(429, 'We already have your answers from the last hour. The shop will contact you; there is no need to send them again.', {}, { 'Retry-After': '3600' });
+  // A filled honeypot is a robot: it gets an answer that looks like success, but no lead, no e-mail, no count.
+  if (answers.website) {
+    const token = randomToken();
+    return NextResponse.json({ id: 0, token, resultUrl: `/ask/result/${token}`, shortlist: { entries: [], notice: '' }, shopNotified: true }, { status: 201, headers: { 'Cache-Control': 'no-store' } });
+  }
+
+  const reservation = await reserveLeadPost(answers, clientIp(request.headers));
+  if (!reservation.ok) {
+    const message =
+      reservation.reason === 'contact'
+        ? 'We already have your answers from the last hour. The shop will contact you; there is no need to send them again.'
+        : 'Many answers came from your network in the last hour. Please try again later, or call the shop.';
+    return errorResponse(429, message, { retryAfterSeconds: reservation.retryAfterSeconds }, { 'Retry-After': String(reservation.retryAfterSeconds) });
   }
 
   const profile = buildProfileFromAnswers(answers, await listBaselineCards());
-  if (!profile) return errorResponse(503, 'The shop’s catalogue is not ready for this engine yet. Please call the shop instead.');
+  const unavailable = async (message: string) => {
+    await reservation.release();
+    return errorResponse(503, message);
+  };
+  if (!profile) return unavailable('The shop’s catalogue is not ready for this engine yet. Please call the shop instead.');
   const ranked = await rankForShop(profile, { includeCurves: false });
-  if (!ranked.ok) return errorResponse(503, 'The shop’s catalogue changed while we were working. Please try again.');
+  if (!ranked.ok) return unavailable('The shop’s catalogue changed while we were working. Please try again.');
   const top = ranked.result.rankings.slice(0, 3).map((r) => r.camId);
   const certified = await emissionsCertifiedIds(top);
   const shortlist = shortlistFrom(ranked.result, answers, engineLiters(answers), profile.use.emissionsRequired, (id) => certified.has(String(id)));

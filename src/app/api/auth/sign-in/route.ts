@@ -1,7 +1,9 @@
-import { NextResponse } from 'next/server';
-import { isCrossSite, clientIp } from '@/lib/auth/request-info';
+import { after, NextResponse } from 'next/server';
+import { knownDeviceId, rememberDevice } from '@/lib/auth/device';
+import { clientIp, isCrossSite, isHttps } from '@/lib/auth/request-info';
 import { startSession } from '@/lib/auth/session';
 import { WRONG_PAIR_MESSAGE, checkSignIn } from '@/lib/auth/sign-in';
+import { sendThrottleNotice } from '@/lib/auth/throttle-notice';
 import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
 import { signInSchema } from '@/lib/schemas/auth';
 
@@ -14,12 +16,15 @@ export async function POST(request: Request) {
   const parsed = signInSchema.safeParse(body.value);
   if (!parsed.success) return validationFailed(parsed.error);
 
-  const outcome = await checkSignIn(parsed.data.email, parsed.data.password, clientIp(request.headers));
+  const { email, password } = parsed.data;
+  const outcome = await checkSignIn(email, password, clientIp(request.headers), await knownDeviceId(email));
   if (outcome.kind === 'throttled') {
+    // After the answer, like forgot-password: neither the answer nor its timing says whether the account exists.
+    if (outcome.pauseStarted) after(() => sendThrottleNotice(email, outcome.retryAfterSeconds));
     const minutes = Math.ceil(outcome.retryAfterSeconds / 60);
     return errorResponse(
       429,
-      `Too many sign-in attempts. Try again in about ${minutes} minute${minutes === 1 ? '' : 's'}, or reset your password.`,
+      `Too many sign-in attempts. Try again in about ${minutes} minute${minutes === 1 ? '' : 's'}, sign in from a browser you used before, or reset your password.`,
       { retryAfterSeconds: outcome.retryAfterSeconds },
       { 'Retry-After': String(outcome.retryAfterSeconds) },
     );
@@ -27,5 +32,6 @@ export async function POST(request: Request) {
   if (outcome.kind === 'wrong-pair') return errorResponse(401, WRONG_PAIR_MESSAGE);
 
   await startSession(outcome.user.id);
+  await rememberDevice(email, isHttps(request.headers));
   return NextResponse.json({ user: outcome.user });
 }
