@@ -121,4 +121,10 @@ export const accessMatrix: AccessRow[] = [
   { method: 'POST', path: '/api/dyno-runs', expect: { anonymous: 401, manager: 422, counter: 403, tech: 422 } },
   { method: 'GET', path: '/api/dyno-runs/[id]', url: '/api/dyno-runs/999999', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
   { method: 'DELETE', path: '/api/dyno-runs/[id]', url: '/api/dyno-runs/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 404 } },
+  // The job board and the sign-off (issue 9, items 2 and 3): technicians and managers only. The id rows
+  // name a quote that does not exist; empty bodies fail validation before anything is looked up.
+  { method: 'GET', path: '/api/jobs', expect: { anonymous: 401, manager: 200, counter: 403, tech: 200 } },
+  { method: 'GET', path: '/api/jobs/[id]', url: '/api/jobs/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 404 } },
+  { method: 'PATCH', path: '/api/jobs/[id]', url: '/api/jobs/999999', expect: { anonymous: 401, manager: 422, counter: 403, tech: 422 } },
+  { method: 'POST', path: '/api/jobs/[id]/sign-off', url: '/api/jobs/999999/sign-off', expect: { anonymous: 401, manager: 422, counter: 403, tech: 422 } },
 ];

@@ -1,49 +1,70 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/catalogue/ui';
+import { BoardList } from '@/components/jobs/board-list';
+import { BoardWeek } from '@/components/jobs/board-week';
+import { dayLabel } from '@/components/jobs/job-state-tag';
 import { requireRoleForPage } from '@/lib/auth/guard';
-import { listJobs } from '@/lib/db/queries/jobs';
+import { listBoard, shopToday } from '@/lib/db/queries/job-board';
+import { addDays, mondayOf, weekDays } from '@/lib/jobs/week';
+import { BoardPageQuerySchema } from '@/lib/schemas/job';
 
 export const metadata: Metadata = { title: 'Jobs' };
 
-const STATUS_WORDS: Record<string, string> = { 'deposit-paid': 'Deposit paid', accepted: 'Accepted' };
+const PAGE_SIZE = 50;
+const tab = (active: boolean) =>
+  `rounded px-2.5 py-1 text-sm font-semibold ${active ? 'bg-ink text-paper-raised' : 'bg-paper-raised text-ink ring-1 ring-steel-300 hover:ring-gauge-500'}`;
 
-export default async function JobsPage() {
+export default async function JobsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requireRoleForPage('tech', 'manager');
-  const jobs = await listJobs();
+  const q = BoardPageQuerySchema.parse(await searchParams);
+  const today = shopToday();
+  const monday = mondayOf(q.week ?? today);
+  const days = weekDays(monday);
+  const board =
+    q.view === 'week'
+      ? await listBoard({ view: 'all', from: days[0], to: days[6], page: 1, pageSize: 100 })
+      : await listBoard({ view: q.show, page: q.page, pageSize: PAGE_SIZE });
+  const waiting = q.view === 'week' ? (await listBoard({ view: 'active', page: 1, pageSize: 100 })).items.filter((j) => j.state === 'not-booked') : [];
+  const pages = Math.max(1, Math.ceil(board.total / PAGE_SIZE));
+
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Jobs" lead="Cam swaps the customer has accepted or paid a deposit on: the build sheet, the parts and the dyno runs." />
-      {jobs.length === 0 ? (
-        <p className="text-sm text-ink-soft">No accepted jobs right now.</p>
+      <PageHeader title="Jobs" lead="Paid cam swaps: book a day, a bay and a technician, then move each job along. Overdue and today's jobs come first." />
+      <nav aria-label="Board views" className="flex flex-wrap items-center gap-2">
+        <Link href="/jobs" className={tab(q.view === 'list' && q.show === 'active')} aria-current={q.view === 'list' && q.show === 'active' ? 'page' : undefined}>List</Link>
+        <Link href="/jobs?view=week" className={tab(q.view === 'week')} aria-current={q.view === 'week' ? 'page' : undefined}>Week</Link>
+        <Link href="/jobs?show=collected" className={tab(q.view === 'list' && q.show === 'collected')} aria-current={q.show === 'collected' ? 'page' : undefined}>Collected</Link>
+      </nav>
+
+      {q.view === 'week' ? (
+        <>
+          <div className="flex flex-wrap items-center gap-3 text-sm">
+            <Link href={`/jobs?view=week&week=${addDays(monday, -7)}`} className="text-gauge-700 underline-offset-2 hover:underline">← Previous week</Link>
+            <h2 className="font-semibold">Week of {dayLabel(monday)}</h2>
+            <Link href={`/jobs?view=week&week=${addDays(monday, 7)}`} className="text-gauge-700 underline-offset-2 hover:underline">Next week →</Link>
+          </div>
+          <BoardWeek days={days} jobs={board.items} today={today} />
+          {waiting.length ? (
+            <section aria-labelledby="waiting-title">
+              <h2 id="waiting-title" className="font-semibold">Paid, not booked yet ({waiting.length})</h2>
+              <BoardList jobs={waiting} />
+            </section>
+          ) : null}
+        </>
+      ) : board.items.length === 0 ? (
+        <p className="text-sm text-ink-soft">{q.show === 'collected' ? 'No collected jobs yet.' : 'No paid jobs waiting right now.'}</p>
       ) : (
-        <table className={tableClass}>
-          <caption className="sr-only">Accepted and deposit-paid jobs</caption>
-          <thead>
-            <tr>
-              <th scope="col" className={thClass}>Quote</th>
-              <th scope="col" className={thClass}>State</th>
-              <th scope="col" className={thClass}>Customer</th>
-              <th scope="col" className={thClass}>Vehicle</th>
-              <th scope="col" className={thClass}>Cam going in</th>
-              <th scope="col" className={thClass}>Accepted</th>
-            </tr>
-          </thead>
-          <tbody>
-            {jobs.map((job) => (
-              <tr key={job.quoteId} className="border-t border-steel-100">
-                <td className={tdClass}>
-                  <Link href={`/jobs/${job.quoteId}`} className="spec font-semibold text-gauge-700 underline-offset-2 hover:underline">{job.number}</Link>
-                </td>
-                <td className={tdClass}><StateTag tone={job.status === 'deposit-paid' ? 'ok' : 'muted'}>{STATUS_WORDS[job.status] ?? job.status}</StateTag></td>
-                <td className={tdClass}>{job.customerName}</td>
-                <td className={tdClass}>{job.vehicleLabel}</td>
-                <td className={`${tdClass} spec`}>{job.camName ?? '—'}</td>
-                <td className={`${tdClass} spec`}>{job.acceptedAt ? job.acceptedAt.slice(0, 10) : '—'}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <>
+          <BoardList jobs={board.items} />
+          {pages > 1 ? (
+            <nav aria-label="Pages" className="flex gap-3 text-sm">
+              {q.page > 1 ? <Link href={`/jobs?show=${q.show}&page=${q.page - 1}`} className="text-gauge-700 underline">← Previous</Link> : null}
+              <span className="spec">Page {q.page} of {pages}</span>
+              {q.page < pages ? <Link href={`/jobs?show=${q.show}&page=${q.page + 1}`} className="text-gauge-700 underline">Next →</Link> : null}
+            </nav>
+          ) : null}
+        </>
       )}
     </div>
   );

@@ -4,6 +4,7 @@ import { AuditEntry } from './audit-entry';
 import { Cam } from './cam';
 import { Build, Customer, Interview } from './customer';
 import { DynoRun } from './dyno-run';
+import { Job, JobSignOff } from './job';
 import { LaborOperation } from './labor-operation';
 import { Lead } from './lead';
 import { NeedRule, NeedRuleItem } from './need-rule';
@@ -13,7 +14,7 @@ import { ShopSettings } from './shop-settings';
 import { Supplier } from './supplier';
 import { User } from './user';
 
-export { AuditEntry, Build, Cam, Customer, DynoRun, Interview, LaborOperation, Lead, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
+export { AuditEntry, Build, Cam, Customer, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
 
 let initialised: Sequelize | undefined;
 
@@ -44,13 +45,18 @@ function associate() {
   DynoRun.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
   DynoRun.belongsTo(User, { foreignKey: 'recordedByUserId', as: 'recordedBy' });
   AuditEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Quote.hasOne(Job, { foreignKey: 'quoteId', as: 'job' });
+  Job.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
+  Job.belongsTo(User, { foreignKey: 'technicianUserId', as: 'technician' });
+  Job.hasMany(JobSignOff, { foreignKey: 'jobId', as: 'signOffs' });
+  JobSignOff.belongsTo(User, { foreignKey: 'signedByUserId', as: 'signedBy' });
 }
 
 /** Binds every model to the shared connection once per process and returns it. */
 export function db(): Sequelize {
   const sequelize = getSequelize();
   if (initialised !== sequelize) {
-    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, DynoRun, AuditEntry]) {
+    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, DynoRun, Job, JobSignOff, AuditEntry]) {
       model.initModel(sequelize);
     }
     associate();

@@ -2,11 +2,17 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import { DynoPanel } from '@/components/jobs/dyno-panel';
+import { JobProgress } from '@/components/jobs/job-progress';
 import { PrintButton } from '@/components/jobs/print-button';
+import { SignOffForm } from '@/components/jobs/sign-off-form';
+import { SignOffSheet } from '@/components/jobs/sign-off-sheet';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
 import { valveEvents } from '@/lib/advisor/valve-events';
 import { requireRoleForPage } from '@/lib/auth/guard';
+import { getBoardJob, listAssignableStaff } from '@/lib/db/queries/job-board';
 import { getJobSheet } from '@/lib/db/queries/jobs';
+import { words } from '@/lib/jobs/build-words';
+import { SIGN_OFF_STATES, type JobState } from '@/lib/jobs/states';
 
 export const metadata: Metadata = { title: 'Job' };
 
@@ -29,6 +35,8 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
   if (!/^\d{1,10}$/.test(id)) notFound();
   const job = await getJobSheet(Number(id));
   if (!job) notFound();
+  // Only a deposit-paid quote is on the board; an accepted, unpaid one still shows its sheet.
+  const [board, staff] = await Promise.all([getBoardJob(job.quoteId), listAssignableStaff()]);
   const p = job.profile;
   const ci = p ? displacementCi(p.engine.boreIn, p.engine.strokeIn, p.engine.cylinders) : null;
   const events = job.cam ? valveEvents(job.cam) : null;
@@ -48,9 +56,13 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
         <ul className="mt-1 list-disc pl-5">
           <li>Valve springs (seat and open pressure, coil bind), piston-to-valve clearance and pushrod length must be checked by a qualified technician on this engine.</li>
           <li>The engine must be re-tuned after the swap; record the dyno pulls on the tuned engine.</li>
+          {p?.engine.cylinderDeactivation === 'active' ? <li>This engine has cylinder deactivation working: delete it with the kit on the quote, or fit only a cam and tune made for it.</li> : null}
+          {p?.use.emissionsRequired ? <li>The vehicle must pass emissions: fit only what the quote names and keep the catalytic converters.</li> : null}
           <li>Local codes and licensed practice come first.</li>
         </ul>
       </section>
+
+      {board ? <JobProgress job={board} staff={staff} /> : null}
 
       <h2 className="text-lg font-semibold">Build sheet</h2>
       <div className="grid gap-6 lg:grid-cols-2">
@@ -62,14 +74,16 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
               <Spec label="Bore × stroke" value={`${inch(p.engine.boreIn)} × ${inch(p.engine.strokeIn)}`} />
               <Spec label="Rod length" value={inch(p.engine.rodLengthIn)} />
               <Spec label="Static compression" value={`${p.engine.compressionRatio.toFixed(1)}:1`} />
-              <Spec label="Heads" value={`${p.engine.headMaterial}, ${p.engine.intakeFlowCfm} cfm @ 28 inH₂O`} />
-              <Spec label="Intake manifold" value={p.engine.intakeManifold} />
-              <Spec label="Cylinder deactivation" value={p.engine.cylinderDeactivation} />
-              <Spec label="Headers · exhaust" value={`${p.exhaust.headers}${p.exhaust.primaryIn && p.exhaust.headers !== 'manifold' ? ` ${inch(p.exhaust.primaryIn, 3)} primaries` : ''} · ${p.exhaust.system}`} />
-              <Spec label="Transmission · stall" value={`${p.drivetrain.transmission}${p.drivetrain.stallRpm ? ` · ${p.drivetrain.stallRpm.toLocaleString('en-US')} rpm stall` : ''}`} />
+              <Spec label="Heads" value={`${words.heads(p.engine.headMaterial)}, ${p.engine.intakeFlowCfm} cfm @ 28 inH₂O`} />
+              <Spec label="Intake manifold" value={words.intake(p.engine.intakeManifold)} />
+              <Spec label="Cylinder deactivation" value={words.deactivation(p.engine.cylinderDeactivation)} />
+              <Spec label="Headers · exhaust" value={`${words.headers(p.exhaust.headers)}${p.exhaust.primaryIn && p.exhaust.headers !== 'manifold' ? `, ${inch(p.exhaust.primaryIn, 3)} primaries` : ''} · ${words.exhaust(p.exhaust.system)}`} />
+              <Spec label="Transmission · stall" value={`${words.transmission(p.drivetrain.transmission)}${p.drivetrain.stallRpm ? ` · ${p.drivetrain.stallRpm.toLocaleString('en-US')} rpm stall` : ''}`} />
               <Spec label="Axle ratio · tyre" value={`${p.drivetrain.axleRatio.toFixed(2)}:1 · ${p.drivetrain.tireDiameterIn} in`} />
               <Spec label="Cam coming out" value={p.baselineCam.name} />
               <Spec label="Fuel" value={`${p.use.fuelOctane} octane`} />
+              <Spec label="Brakes" value={words.brakes(p.vehicle.powerBrakes)} />
+              <Spec label="Use" value={words.use(p.use.primary)} />
             </dl>
           ) : (
             <p className="text-sm text-fault-700">The saved build could not be read; ask the counter to check it.</p>
@@ -105,7 +119,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
       </div>
 
       <section aria-labelledby="parts-title">
-        <h3 id="parts-title" className="font-semibold">Parts and work</h3>
+        <h3 id="parts-title" className="font-semibold">Parts to pull and work</h3>
         <table className={tableClass}>
           <caption className="sr-only">Parts and labour on the quote, without prices</caption>
           <thead>
@@ -113,6 +127,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
               <th scope="col" className={thClass}>What</th>
               <th scope="col" className={thClass}>Item</th>
               <th scope="col" className={`${thClass} text-right`}>Quantity</th>
+              <th scope="col" className={thClass}>Pulled</th>
             </tr>
           </thead>
           <tbody>
@@ -121,11 +136,20 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
                 <td className={tdClass}>{KIND_WORDS[line.kind] ?? line.kind}</td>
                 <td className={tdClass}>{line.description}</td>
                 <td className={`${tdClass} spec text-right`}>{line.kind === 'labor' ? `${line.quantity.toFixed(1)} h` : `${line.quantity} ×`}</td>
+                <td className={tdClass}>{line.kind === 'labor' || line.kind === 'tune' ? '' : <span aria-hidden="true" className="inline-block h-3.5 w-3.5 border border-ink-muted" />}</td>
               </tr>
             ))}
           </tbody>
         </table>
       </section>
+
+      {board ? (
+        <section aria-labelledby="checks-title" className="flex flex-col gap-3">
+          <h2 id="checks-title" className="text-lg font-semibold">Checks before first start</h2>
+          {board.signOff ? <SignOffSheet signOff={board.signOff} /> : <p className="text-sm text-ink-soft">No sign-off recorded yet. The job cannot be marked ready without one.</p>}
+          {SIGN_OFF_STATES.includes(board.state as JobState) ? <SignOffForm jobId={board.id} deactivationActive={board.deactivationActive} /> : null}
+        </section>
+      ) : null}
 
       {job.buildId !== null ? <DynoPanel buildId={job.buildId} quoteId={job.quoteId} /> : null}
     </div>

@@ -1,0 +1,104 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { Banner, buttonClass } from '@/components/catalogue/ui';
+import type { BoardJob } from '@/lib/db/queries/job-board';
+import { STATE_WORDS, type JobState } from '@/lib/jobs/states';
+import { JOB_LIMITS } from '@/lib/schemas/job';
+import { sendJob } from './job-api';
+import { JobStateTag } from './job-state-tag';
+
+// Booking (day, bay, technician) and the moves the workshop allows from here. Every save sends the
+// version this page last read; someone else's newer save answers 409 and nothing is overwritten.
+type Staff = { id: number; name: string; role: string };
+const input = 'rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm focus:border-gauge-500 focus:outline-none';
+
+export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
+  const router = useRouter();
+  const [bookedFor, setBookedFor] = useState(job.bookedFor ?? '');
+  const [bay, setBay] = useState(job.bay === null ? '' : String(job.bay));
+  const [technicianId, setTechnicianId] = useState(job.technician ? String(job.technician.id) : '');
+  const [busy, setBusy] = useState(false);
+  const [problem, setProblem] = useState<{ message: string; fields: Record<string, string> } | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+
+  async function save(body: Record<string, unknown>, success: string) {
+    setBusy(true);
+    setProblem(null);
+    setDone(null);
+    const result = await sendJob(`/api/jobs/${job.id}`, 'PATCH', { version: job.version, ...body });
+    setBusy(false);
+    if (!result.ok) return setProblem(result);
+    setDone(success);
+    router.refresh(); // the page reads the job again (new version, sign-off form, printout)
+  }
+
+  const booking = () => save({ bookedFor: bookedFor || undefined, bay: bay ? Number(bay) : null, technicianId: technicianId ? Number(technicianId) : null }, 'Booking saved.');
+  const fieldError = (f: string) => (problem?.fields[f] ? <span className="text-xs text-fault-700">{problem.fields[f]}</span> : null);
+  const moveLabel = (to: JobState) => (job.nextStates.indexOf(to) === 0 ? `Move to: ${STATE_WORDS[to]}` : `Back to: ${STATE_WORDS[to]}`);
+
+  return (
+    <section aria-labelledby="progress-title" className="rounded border border-steel-300 p-3">
+      <h2 id="progress-title" className="flex flex-wrap items-center gap-2 font-semibold">
+        Progress <JobStateTag state={job.state} />
+      </h2>
+      <p className="hidden text-sm print:block">
+        Booked for <span className="spec">{job.bookedFor ?? '—'}</span> · bay <span className="spec">{job.bay ?? '—'}</span> · {job.technician?.name ?? 'no technician'}
+      </p>
+      <form
+        aria-label="Booking"
+        className="mt-2 flex flex-wrap items-end gap-3 print:hidden"
+        onSubmit={(e) => {
+          e.preventDefault();
+          void booking();
+        }}
+      >
+        <div className="flex flex-col text-xs font-semibold text-ink-muted">
+          <label htmlFor="job-bookedFor">Booked for</label>
+          <input id="job-bookedFor" type="date" className={`${input} spec`} value={bookedFor} onChange={(e) => setBookedFor(e.target.value)} disabled={job.state === 'collected'} />
+          {fieldError('bookedFor')}
+        </div>
+        <div className="flex flex-col text-xs font-semibold text-ink-muted">
+          <label htmlFor="job-bay">Bay</label>
+          <select id="job-bay" className={input} value={bay} onChange={(e) => setBay(e.target.value)} disabled={job.state === 'collected'}>
+            <option value="">Not set</option>
+            {Array.from({ length: JOB_LIMITS.bays }, (_, i) => (
+              <option key={i + 1} value={i + 1}>Bay {i + 1}</option>
+            ))}
+          </select>
+          {fieldError('bay')}
+        </div>
+        <div className="flex flex-col text-xs font-semibold text-ink-muted">
+          <label htmlFor="job-technician">Technician</label>
+          <select id="job-technician" className={input} value={technicianId} onChange={(e) => setTechnicianId(e.target.value)} disabled={job.state === 'collected'}>
+            <option value="">Nobody yet</option>
+            {staff.map((s) => (
+              <option key={s.id} value={s.id}>{s.name}{s.role === 'manager' ? ' (manager)' : ''}</option>
+            ))}
+          </select>
+          {fieldError('technicianId')}
+        </div>
+        <button type="submit" className={buttonClass.primary} disabled={busy || job.state === 'collected'}>
+          {job.state === 'not-booked' ? 'Book the job' : 'Save booking'}
+        </button>
+      </form>
+      {job.state !== 'not-booked' && job.nextStates.length ? (
+        <div className="mt-3 flex flex-wrap gap-2 print:hidden" role="group" aria-label="Move the job">
+          {job.nextStates.map((to, i) => (
+            <button key={to} type="button" className={i === 0 ? buttonClass.primary : buttonClass.quiet} disabled={busy} onClick={() => void save({ state: to }, `Moved to: ${STATE_WORDS[to]}.`)}>
+              {moveLabel(to)}
+            </button>
+          ))}
+        </div>
+      ) : null}
+      {job.state === 'on-dyno' && !job.signOff ? (
+        <p className="mt-2 text-xs text-caution-700 print:hidden">Record the sign-off below before the job can be marked ready.</p>
+      ) : null}
+      <div className="mt-2 print:hidden" aria-live="polite">
+        {problem ? <Banner tone="fault" title="Not saved">{problem.message}</Banner> : null}
+        {done ? <Banner tone="ok" title={done} /> : null}
+      </div>
+    </section>
+  );
+}

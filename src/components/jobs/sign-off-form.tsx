@@ -1,0 +1,108 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { Banner, buttonClass } from '@/components/catalogue/ui';
+import type { SignOffWarning } from '@/lib/jobs/sign-off-limits';
+import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
+import { JOB_LIMITS } from '@/lib/schemas/job';
+import { sendJob } from './job-api';
+import { READINGS, type ReadingKey } from './sign-off-fields';
+
+// The technician's checks before first start. Numbers are typed as text and sent as numbers; what the
+// server refuses comes back beside the field. Readings outside the usual limits are saved with a warning.
+const input = 'spec w-28 rounded border border-steel-300 bg-paper-raised px-2 py-1 text-right text-sm focus:border-gauge-500 focus:outline-none';
+const asNumber = (v: string) => (v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : v.trim() === '' ? undefined : v);
+
+export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deactivationActive: boolean }) {
+  const router = useRouter();
+  const [values, setValues] = useState<Record<ReadingKey, string>>(() => Object.fromEntries(READINGS.map((r) => [r.key, ''])) as Record<ReadingKey, string>);
+  const [deleteDone, setDeleteDone] = useState<'' | 'yes' | 'no'>('');
+  const [tuneFile, setTuneFile] = useState('');
+  const [notes, setNotes] = useState('');
+  const [busy, setBusy] = useState(false);
+  const [problem, setProblem] = useState<{ message: string; fields: Record<string, string> } | null>(null);
+  const [saved, setSaved] = useState<SignOffWarning[] | null>(null);
+
+  async function submit() {
+    setBusy(true);
+    setProblem(null);
+    setSaved(null);
+    const body = {
+      ...Object.fromEntries(READINGS.map((r) => [r.key, asNumber(values[r.key])])),
+      ...(deactivationActive && deleteDone ? { deactivationDeleteDone: deleteDone === 'yes' } : {}),
+      tuneFile,
+      ...(notes.trim() ? { notes } : {}),
+    };
+    const result = await sendJob(`/api/jobs/${jobId}/sign-off`, 'POST', body);
+    setBusy(false);
+    if (!result.ok) return setProblem(result);
+    setSaved(result.job.signOff?.warnings ?? []);
+    router.refresh();
+  }
+  const err = (f: string) => (problem?.fields[f] ? <span className="text-xs text-fault-700">{problem.fields[f]}</span> : null);
+
+  return (
+    <form
+      aria-label="Sign-off before first start"
+      className="flex flex-col gap-3 rounded border border-steel-300 p-3 print:hidden"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void submit();
+      }}
+      onKeyDown={(e) => {
+        if (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) {
+          e.preventDefault();
+          void submit();
+        }
+      }}
+    >
+      <h3 className="font-semibold">Record the sign-off</h3>
+      <p className="text-xs text-ink-muted">{LIMITS_NOTE}</p>
+      <div className="grid gap-x-6 gap-y-2 sm:grid-cols-2">
+        {READINGS.map((r) => (
+          <div key={r.key} className="flex flex-col text-sm">
+            <label htmlFor={`sign-off-${r.key}`} className="font-semibold">{r.label} ({r.unit})</label>
+            <span className="flex items-center gap-1">
+              <input id={`sign-off-${r.key}`} className={input} inputMode="decimal" autoComplete="off" value={values[r.key]} onChange={(e) => setValues({ ...values, [r.key]: e.target.value })} aria-describedby={`${r.key}-usual`} />
+              <span className="text-xs text-ink-muted">{r.unit}</span>
+            </span>
+            <span id={`${r.key}-usual`} className="text-xs text-ink-muted">Usual: {r.usual}</span>
+            {err(r.key)}
+          </div>
+        ))}
+      </div>
+      {deactivationActive ? (
+        <fieldset className="text-sm">
+          <legend className="font-semibold">Cylinder deactivation delete (this build has it working)</legend>
+          <label className="mr-4 inline-flex items-center gap-1"><input type="radio" name="deactivation" checked={deleteDone === 'yes'} onChange={() => setDeleteDone('yes')} /> Delete done</label>
+          <label className="inline-flex items-center gap-1"><input type="radio" name="deactivation" checked={deleteDone === 'no'} onChange={() => setDeleteDone('no')} /> Left in place</label>
+          {err('deactivationDeleteDone')}
+        </fieldset>
+      ) : null}
+      <div className="flex flex-col text-sm">
+        <label htmlFor="sign-off-tuneFile" className="font-semibold">Tune file and version</label>
+        <input id="sign-off-tuneFile" className="rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm" maxLength={JOB_LIMITS.tuneFileMaxLength} value={tuneFile} onChange={(e) => setTuneFile(e.target.value)} />
+        {err('tuneFile')}
+      </div>
+      <div className="flex flex-col text-sm">
+        <label htmlFor="sign-off-notes" className="font-semibold">Notes</label>
+        <textarea id="sign-off-notes" className="rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm" rows={2} maxLength={JOB_LIMITS.notesMaxLength} value={notes} onChange={(e) => setNotes(e.target.value)} />
+        {err('notes')}
+      </div>
+      <div>
+        <button type="submit" className={buttonClass.primary} disabled={busy}>{busy ? 'Saving…' : 'Record the sign-off'}</button>
+        <span className="ml-2 text-xs text-ink-muted">Ctrl+Enter records from any field.</span>
+      </div>
+      <div aria-live="polite">
+        {problem ? <Banner tone="fault" title="Sign-off not recorded">{problem.message}</Banner> : null}
+        {saved && saved.length === 0 ? <Banner tone="ok" title="Sign-off recorded." /> : null}
+        {saved && saved.length > 0 ? (
+          <Banner tone="caution" title="Sign-off recorded, with warnings">
+            <ul className="list-disc pl-5">{saved.map((w) => <li key={w.field + w.message}>{w.message}</li>)}</ul>
+          </Banner>
+        ) : null}
+      </div>
+    </form>
+  );
+}
