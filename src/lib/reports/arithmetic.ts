@@ -30,6 +30,11 @@ export function goodsMargin(lines: readonly MarginLine[]): Margin {
     revenueCents += l.totalCents;
     costCents += divideRoundHalfUp(l.quantityHundredths * l.unitCostCents, 100);
   }
+  return marginOfSums(revenueCents, costCents);
+}
+
+/** The margin of summed revenue and cost (the database sums them for the report; see reports.ts). */
+export function marginOfSums(revenueCents: number, costCents: number): Margin {
   const marginCents = revenueCents - costCents;
   const marginBp = revenueCents > 0 ? Math.sign(marginCents) * divideRoundHalfUp(Math.abs(marginCents) * 10_000, revenueCents) : null;
   return { revenueCents, costCents, marginCents, marginBp };

@@ -1,5 +1,5 @@
 import { centsToDollars, toCsv, type CsvCell } from '@/lib/catalogue/csv';
-import type { QuoteExportRow } from '@/lib/db/queries/reports';
+import type { QuoteExportRow } from '@/lib/db/queries/quote-export';
 
 // The quotes export: one row per quote, money in dollars and cents. It goes through the catalogue's
 // toCsv, so any text cell a spreadsheet would run as a formula gets a leading apostrophe.
@@ -15,4 +15,18 @@ export function quotesToCsv(rows: readonly QuoteExportRow[]): string {
     centsToDollars(r.depositCents), centsToDollars(r.paidCents), centsToDollars(r.refundedCents),
   ]);
   return toCsv(QUOTE_CSV_HEADER, data);
+}
+
+/** The header line alone, without its line break: the first thing a streamed export sends. */
+export function quoteCsvHeader(): string {
+  // Plain lower-case names: nothing to quote or neutralise (and papaparse ends an empty table with a CRLF).
+  return QUOTE_CSV_HEADER.join(',');
+}
+
+/** Rows without the header, each ending in CRLF, to follow the header in a stream. */
+export function quoteCsvRows(rows: readonly QuoteExportRow[]): string {
+  if (!rows.length) return '';
+  const csv = quotesToCsv(rows);
+  // The header is fixed text without quotes or line breaks, so the first CRLF ends it.
+  return `${csv.slice(csv.indexOf('\r\n') + 2)}\r\n`;
 }

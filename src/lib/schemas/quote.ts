@@ -79,6 +79,3 @@ export const QuoteRefundSchema = z.strictObject({
   reason: text('reason', { error: 'reason must be text' }).max(255, { error: 'reason must be at most 255 characters' }).optional(),
 });
 
-export const QuoteListQuerySchema = z.strictObject({
-  status: text('status').optional(),
-});

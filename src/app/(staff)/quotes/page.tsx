@@ -1,29 +1,53 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { formatCents } from '@/components/catalogue/format';
-import { PageHeader, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { buttonClass, PageHeader, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import { PaymentStatusTag, QuoteStatusTag, quoteStatusWord } from '@/components/quotes/status';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { QUOTE_STATUSES, type QuoteStatus } from '@/lib/db/models/quote';
-import { listQuotes } from '@/lib/db/queries/quotes';
+import { listQuotes } from '@/lib/db/queries/quote-list';
+import { QuoteListQuerySchema } from '@/lib/schemas/quote-list';
 
 export const metadata: Metadata = { title: 'Quotes' };
+
+/** The page's own address for a state, search and page; empty values are left out of the link. */
+function hrefOf(v: { status?: QuoteStatus; q?: string; page?: number }): string {
+  const p = new URLSearchParams();
+  if (v.status) p.set('status', v.status);
+  if (v.q) p.set('q', v.q);
+  if (v.page && v.page > 1) p.set('page', String(v.page));
+  return `?${p}`;
+}
 
 export default async function QuotesPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
   await requireRoleForPage('manager', 'counter', 'tech');
   const raw = await searchParams;
-  const status = (QUOTE_STATUSES as readonly string[]).includes(raw.status ?? '') ? (raw.status as QuoteStatus) : undefined;
-  const quotes = await listQuotes({ status });
+  const parsed = QuoteListQuerySchema.safeParse({ status: raw.status, q: raw.q, page: raw.page });
+  // A hand-edited address with a bad value shows the first page of everything rather than an error page.
+  const query = parsed.success ? parsed.data : QuoteListQuerySchema.parse({});
+  const { status, q, page, pageSize } = query;
+  const { items: quotes, total } = await listQuotes(query);
+  const pages = Math.max(1, Math.ceil(total / pageSize));
+  const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
   return (
     <div className="flex flex-col gap-4">
       <PageHeader title="Quotes" lead="Newest change first. Make a new one from the cam shortlist." actions={null} />
       <nav aria-label="Filter by status" className="flex flex-wrap gap-2 text-sm">
         {[undefined, ...QUOTE_STATUSES].map((s) => (
-          <Link key={s ?? 'all'} href={s ? `?status=${s}` : '?'} aria-current={status === s ? 'page' : undefined} className={`rounded px-2 py-1 ring-1 ring-steel-300 ${status === s ? 'bg-ink text-paper' : 'bg-paper-raised'}`}>
+          <Link key={s ?? 'all'} href={hrefOf({ status: s, q })} aria-current={status === s ? 'page' : undefined} className={`rounded px-2 py-1 ring-1 ring-steel-300 ${status === s ? 'bg-ink text-paper' : 'bg-paper-raised'}`}>
             {s ? quoteStatusWord(s) : 'All'}
           </Link>
         ))}
       </nav>
+      <form role="search" method="get" className="flex flex-wrap items-end gap-2 text-sm">
+        {status ? <input type="hidden" name="status" value={status} /> : null}
+        <label className="flex flex-col gap-1">
+          <span className="font-semibold">Find a quote</span>
+          <input type="search" name="q" defaultValue={q ?? ''} maxLength={100} placeholder="Number, customer or vehicle" className="w-72 rounded px-2 py-1 ring-1 ring-steel-300" />
+        </label>
+        <button type="submit" className={buttonClass.quiet}>Search</button>
+        {q ? <Link className="text-gauge-700 underline" href={hrefOf({ status })}>Clear the search</Link> : null}
+      </form>
       <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
         <table className={tableClass}>
           <thead>
@@ -52,11 +76,18 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
               </tr>
             ))}
             {quotes.length === 0 ? (
-              <tr><td colSpan={8} className={`${tdClass} text-ink-muted`}>No quotes{status ? ` in the state “${quoteStatusWord(status)}”` : ''} yet.</td></tr>
+              <tr><td colSpan={8} className={`${tdClass} text-ink-muted`}>No quotes{status ? ` in the state “${quoteStatusWord(status)}”` : ''}{q ? ` matching “${q}”` : ''}{page > 1 ? ' on this page' : ' yet'}.</td></tr>
             ) : null}
           </tbody>
         </table>
       </div>
+      <nav aria-label="Pages" className="flex flex-wrap items-center gap-3 text-sm">
+        <span className="tabular-nums">
+          {first}–{first === 0 ? 0 : first + quotes.length - 1} of {total} {total === 1 ? 'quote' : 'quotes'} · page {page} of {pages}
+        </span>
+        {page > 1 ? <Link className={buttonClass.quiet} href={hrefOf({ status, q, page: page - 1 })}>← Newer</Link> : null}
+        {page < pages ? <Link className={buttonClass.quiet} href={hrefOf({ status, q, page: page + 1 })}>Older →</Link> : null}
+      </nav>
     </div>
   );
 }

@@ -1,23 +1,25 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { parseBody } from '@/lib/catalogue/http';
-import { createQuoteFromBuild, listQuotes, presentQuote } from '@/lib/db/queries/quotes';
-import { QUOTE_STATUSES, type QuoteStatus } from '@/lib/db/models/quote';
-import { validationFailed } from '@/lib/http/responses';
+import { paged, parseBody, parseQuery } from '@/lib/catalogue/http';
+import { listQuotes } from '@/lib/db/queries/quote-list';
+import { createQuoteFromBuild, presentQuote } from '@/lib/db/queries/quotes';
 import { QuoteCreateSchema } from '@/lib/schemas/quote';
+import { QuoteListQuerySchema } from '@/lib/schemas/quote-list';
 import { quoteOutcomeResponse } from './outcome';
 
 export const dynamic = 'force-dynamic';
 
-/** Every staff member reads the list (it carries no costs); ?status= narrows it. */
+/**
+ * Every staff member reads the list (it carries no costs), newest change first: ?status=, ?q= (number,
+ * customer, vehicle), ?page= and ?pageSize= (default 50, at most 200). `items` as before, plus the paging.
+ */
 export async function GET(request: Request) {
   const user = await requireRole(request);
   if (user instanceof Response) return user;
-  const status = new URL(request.url).searchParams.get('status');
-  if (status !== null && !(QUOTE_STATUSES as readonly string[]).includes(status)) {
-    return validationFailed([{ field: 'status', message: `status must be one of: ${QUOTE_STATUSES.join(', ')}` }]);
-  }
-  return NextResponse.json({ items: await listQuotes({ status: (status as QuoteStatus | null) ?? undefined }) });
+  const query = parseQuery(request, QuoteListQuerySchema);
+  if (!query.ok) return query.response;
+  const { items, total } = await listQuotes(query.value);
+  return NextResponse.json(paged(items, total, query.value.page, query.value.pageSize));
 }
 
 /** A draft from { buildId, camId, extraLines? }: managers and counter staff. */

@@ -1,10 +1,12 @@
-import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { BUILD_RECORD_LIMITS, type BuildCreate, type BuildListQuery, type BuildUpdate } from '@/lib/schemas/build';
 import { Build, Cam, Customer, db } from '../models';
-import { insertCustomer } from './customers';
+import { linkLeadToCustomer } from './lead-links';
+import { customerMatchSql, insertCustomer } from './customers';
+import { textSearch } from './text-search';
 
 export type BuildSummary = { id: number; vehicleLabel: string; customerName: string; profile: unknown };
 
@@ -85,32 +87,36 @@ function toListItem(build: Build): BuildListItem {
 
 const withCustomer = () => [{ model: Customer, as: 'customer', attributes: ['id', 'name', 'email', 'phone'] }];
 
-/** Newest first. q matches the vehicle or the customer's name, e-mail or phone. */
+/**
+ * The ids of builds whose vehicle or customer matches q, as a UNION of indexed lookups (the builds and
+ * customers FULLTEXT indexes; short words: a prefix of the customer's name, e-mail or phone). One OR
+ * across the join could only be answered by reading every build. Null when q holds nothing searchable.
+ */
+function matchingIdsSql(q: string): string | null {
+  const search = textSearch(q);
+  if (search.kind === 'nothing') return null;
+  const parts = [`SELECT bc.id FROM customers c JOIN builds bc ON bc.customer_id = c.id WHERE ${customerMatchSql(search, 'c')}`];
+  if (search.kind === 'fulltext') parts.push(`SELECT id FROM builds WHERE MATCH(vehicle_label) AGAINST (${db().escape(search.against)} IN BOOLEAN MODE)`);
+  return parts.join(' UNION ');
+}
+
+/** Newest change first (id breaks ties), a page at a time; q matches the vehicle or the customer. */
 export async function listBuilds(query: BuildListQuery): Promise<{ items: BuildListItem[]; total: number }> {
-  db();
-  const and: WhereOptions<Build>[] = [];
-  if (query.customerId !== undefined) and.push({ customerId: query.customerId });
-  if (query.q) {
-    const term = likeTerm(query.q);
-    and.push({
-      [Op.or]: [
-        { vehicleLabel: { [Op.like]: term } },
-        { '$customer.name$': { [Op.like]: term } },
-        { '$customer.email$': { [Op.like]: term } },
-        { '$customer.phone$': { [Op.like]: term } },
-      ],
-    });
-  }
-  const { rows, count } = await Build.findAndCountAll({
-    where: { [Op.and]: and },
-    include: withCustomer(),
-    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
-    distinct: true,
-    subQuery: false,
-  });
-  return { items: rows.map(toListItem), total: count };
+  const sequelize = db();
+  const matching = query.q ? matchingIdsSql(query.q) : undefined;
+  if (matching === null) return { items: [], total: 0 };
+  const from = matching ? `(${matching}) m JOIN builds b ON b.id = m.id` : 'builds b';
+  const where = query.customerId !== undefined ? `WHERE b.customer_id = ${sequelize.escape(query.customerId)}` : '';
+  const offset = (query.page - 1) * query.pageSize;
+  const [ids, counted] = await Promise.all([
+    sequelize.query<{ id: number }>(`SELECT b.id FROM ${from} ${where} ORDER BY b.updated_at DESC, b.id DESC LIMIT ${query.pageSize} OFFSET ${offset}`, { type: QueryTypes.SELECT }),
+    sequelize.query<{ total: unknown }>(`SELECT COUNT(*) AS total FROM ${from} ${where}`, { type: QueryTypes.SELECT }),
+  ]);
+  const total = Number(counted[0]?.total ?? 0);
+  if (!ids.length) return { items: [], total };
+  const rows = await Build.findAll({ where: { id: ids.map((r) => Number(r.id)) }, include: withCustomer() });
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  return { items: ids.flatMap((r) => (byId.has(Number(r.id)) ? [toListItem(byId.get(Number(r.id))!)] : [])), total };
 }
 
 export async function getBuild(id: number, transaction?: Transaction): Promise<BuildRecord | null> {
@@ -148,6 +154,7 @@ export async function createBuild(values: BuildCreate, user: SessionUser): Promi
       { customerId, vehicleLabel: values.vehicleLabel, baselineCamId: values.baselineCamId, profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion },
       { transaction: t },
     );
+    if (values.leadId !== undefined) await linkLeadToCustomer(values.leadId, customerId, user, t);
     const record = (await getBuild(build.id, t))!;
     await recordAudit({ user, action: 'build.created', entityType: 'build', entityId: build.id, before: null, after: record }, t);
     return { record };

@@ -178,34 +178,6 @@ export async function getQuote(id: number, transaction?: Transaction): Promise<Q
   return row ? toQuoteRecord(row, transaction) : null;
 }
 
-export type QuoteSummary = Pick<QuoteRecord, 'id' | 'number' | 'status' | 'totalCents' | 'depositCents' | 'version' | 'updatedAt' | 'sentAt'> & {
-  customerName: string;
-  vehicleLabel: string | null;
-  paymentStatus: Payment['status'] | null;
-};
-
-export async function listQuotes(options: { status?: QuoteStatus; limit?: number } = {}): Promise<QuoteSummary[]> {
-  db();
-  const rows = (await Quote.findAll({
-    where: options.status ? { status: options.status } : {},
-    include: [
-      { model: Customer, as: 'customer', attributes: ['name'] },
-      { model: Build, as: 'build', attributes: ['vehicleLabel'] },
-      { model: Payment, as: 'payments', attributes: ['id', 'status'] },
-    ],
-    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
-    limit: options.limit ?? 200,
-  })) as QuoteRow[];
-  return rows.map((q) => {
-    const last = [...(q.payments ?? [])].sort((a, b) => b.id - a.id)[0];
-    return {
-      id: q.id, number: q.number, status: q.status, totalCents: q.totalCents, depositCents: q.depositCents, version: q.version,
-      updatedAt: iso(q.updatedAt)!, sentAt: iso(q.sentAt), customerName: q.customer?.name ?? 'Unknown customer',
-      vehicleLabel: q.build?.vehicleLabel ?? null, paymentStatus: last?.status ?? null,
-    };
-  });
-}
-
 // ---- Building lines (checked against the catalogue and the user's price authority in ./quote-lines) ----
 
 export type QuoteWriteOutcome = WriteOutcome<QuoteRecord> | { ok: false; reason: 'forbidden'; errors: FieldError[] };

@@ -1,5 +1,5 @@
 import { QueryTypes } from 'sequelize';
-import { averageCents, goodsMargin, netDepositsCents, rateBp, type Margin, type MarginLine } from '@/lib/reports/arithmetic';
+import { averageCents, marginOfSums as marginOf, netDepositsCents, rateBp, type Margin } from '@/lib/reports/arithmetic';
 import { addDays, type ReportRange } from '@/lib/schemas/report';
 import { db } from '../models';
 import { QUOTE_STATUSES, type QuoteStatus } from '../models/quote';
@@ -43,7 +43,7 @@ async function select<T extends object>(sql: string, replacements: Record<string
 export async function quotesByStatus(range: ReportRange): Promise<StatusFigure[]> {
   const rows = await select<{ status: QuoteStatus; count: unknown; value: unknown }>(
     `SELECT status, COUNT(*) AS count, COALESCE(SUM(total_cents), 0) AS value
-       FROM quotes WHERE created_at >= :start AND created_at < :end GROUP BY status`,
+       FROM quotes WHERE created_at >= :start AND created_at < :end GROUP BY status ORDER BY NULL`,
     bounds(range),
   );
   const found = new Map(rows.map((r) => [r.status, r]));
@@ -72,29 +72,39 @@ export async function depositsTaken(range: ReportRange): Promise<ReportSummary['
   return { count: n(row?.count), takenCents, refundedCents, netCents: netDepositsCents(takenCents, refundedCents) };
 }
 
+/**
+ * Summed in the database, one row per kind. A line's cost is ROUND(quantity × unit cost): quantity is a
+ * DECIMAL(…,2) and the cost whole cents, so the product is exact and MariaDB rounds exact values half
+ * away from zero — half up for these non-negative amounts, the rule goodsMargin and the quote lines use.
+ */
 export async function goodsMarginOfPaidQuotes(range: ReportRange): Promise<ReportSummary['margin']> {
-  const rows = await select<{ kind: 'cam' | 'part'; total: unknown; hundredths: unknown; cost: unknown }>(
-    `SELECT ql.kind, ql.total_cents AS total, ROUND(ql.quantity * 100) AS hundredths, COALESCE(c.cost_cents, p.cost_cents) AS cost
-       FROM quote_lines ql
-       JOIN quotes q ON q.id = ql.quote_id
+  const rows = await select<{ kind: 'cam' | 'part'; revenue: unknown; cost: unknown }>(
+    `SELECT ql.kind, SUM(ql.total_cents) AS revenue, SUM(ROUND(ql.quantity * COALESCE(c.cost_cents, p.cost_cents))) AS cost
+       FROM quotes q
+       JOIN quote_lines ql ON ql.quote_id = q.id
        LEFT JOIN cams c ON c.id = ql.cam_id
        LEFT JOIN parts p ON p.id = ql.part_id
       WHERE q.status = 'deposit-paid' AND q.created_at >= :start AND q.created_at < :end
-        AND ql.kind IN ('cam', 'part') AND COALESCE(c.cost_cents, p.cost_cents) IS NOT NULL`,
+        AND ql.kind IN ('cam', 'part') AND COALESCE(c.cost_cents, p.cost_cents) IS NOT NULL
+      GROUP BY ql.kind ORDER BY NULL`,
     bounds(range),
   );
-  const lines = (kind?: 'cam' | 'part'): MarginLine[] =>
-    rows.filter((r) => !kind || r.kind === kind).map((r) => ({ totalCents: n(r.total), quantityHundredths: n(r.hundredths), unitCostCents: n(r.cost) }));
-  return { cams: goodsMargin(lines('cam')), parts: goodsMargin(lines('part')), total: goodsMargin(lines()) };
+  const of = (kind: 'cam' | 'part') => rows.find((r) => r.kind === kind);
+  const cams = marginOf(n(of('cam')?.revenue), n(of('cam')?.cost));
+  const parts = marginOf(n(of('part')?.revenue), n(of('part')?.cost));
+  return { cams, parts, total: marginOf(cams.revenueCents + parts.revenueCents, cams.costCents + parts.costCents) };
 }
 
+/** Counted on the quotes' covering index first, then only the top few joined to their cams. */
 export async function mostQuotedCams(range: ReportRange, limit = 5): Promise<TopCam[]> {
   const rows = await select<{ camId: unknown; sku: string; name: string; quotes: unknown; deposits: unknown }>(
-    `SELECT q.cam_id AS camId, c.sku, c.name, COUNT(*) AS quotes, COALESCE(SUM(q.status = 'deposit-paid'), 0) AS deposits
-       FROM quotes q JOIN cams c ON c.id = q.cam_id
-      WHERE q.created_at >= :start AND q.created_at < :end
-      GROUP BY q.cam_id, c.sku, c.name
-      ORDER BY quotes DESC, deposits DESC, c.sku ASC
+    `SELECT t.cam_id AS camId, c.sku, c.name, t.quotes, t.deposits
+       FROM (SELECT cam_id, COUNT(*) AS quotes, COALESCE(SUM(status = 'deposit-paid'), 0) AS deposits
+               FROM quotes
+              WHERE created_at >= :start AND created_at < :end AND cam_id IS NOT NULL
+              GROUP BY cam_id ORDER BY NULL) t
+       JOIN cams c ON c.id = t.cam_id
+      ORDER BY t.quotes DESC, t.deposits DESC, c.sku ASC
       LIMIT :limit`,
     { ...bounds(range), limit },
   );
@@ -108,37 +118,4 @@ export async function reportSummary(range: ReportRange): Promise<ReportSummary> 
   const count = byStatus.reduce((s, f) => s + f.count, 0);
   const valueCents = byStatus.reduce((s, f) => s + f.valueCents, 0);
   return { range, created: { count, valueCents }, byStatus, conversion, averageQuoteCents: averageCents(valueCents, count), deposits, margin, topCams };
-}
-
-export type QuoteExportRow = {
-  number: string; status: QuoteStatus; createdAt: string; sentAt: string | null; customerName: string; vehicleLabel: string | null;
-  camSku: string | null; subtotalCents: number; taxCents: number; totalCents: number; depositCents: number; paidCents: number; refundedCents: number;
-};
-
-export const QUOTE_EXPORT_MAX_ROWS = 10_000;
-
-const isoOf = (v: unknown) => (v ? new Date(v as string | Date).toISOString() : null);
-
-/** Quotes created in the range, oldest first, with what was paid and refunded on each. */
-export async function quotesForExport(range: ReportRange): Promise<QuoteExportRow[]> {
-  const rows = await select<Record<string, unknown>>(
-    `SELECT q.number, q.status, q.created_at AS createdAt, q.sent_at AS sentAt, cu.name AS customerName, b.vehicle_label AS vehicleLabel,
-            c.sku AS camSku, q.subtotal_cents AS subtotal, q.tax_cents AS tax, q.total_cents AS total, q.deposit_cents AS deposit,
-            COALESCE(pay.paid, 0) AS paid, COALESCE(pay.refunded, 0) AS refunded
-       FROM quotes q
-       JOIN customers cu ON cu.id = q.customer_id
-       LEFT JOIN builds b ON b.id = q.build_id
-       LEFT JOIN cams c ON c.id = q.cam_id
-       LEFT JOIN (SELECT quote_id, SUM(amount_cents) AS paid, SUM(refunded_cents) AS refunded FROM payments WHERE status IN (:states) GROUP BY quote_id) pay
-              ON pay.quote_id = q.id
-      WHERE q.created_at >= :start AND q.created_at < :end
-      ORDER BY q.created_at ASC, q.id ASC
-      LIMIT :limit`,
-    { ...bounds(range), states: PAID_PAYMENT_STATES, limit: QUOTE_EXPORT_MAX_ROWS },
-  );
-  return rows.map((r) => ({
-    number: String(r.number), status: r.status as QuoteStatus, createdAt: isoOf(r.createdAt)!, sentAt: isoOf(r.sentAt),
-    customerName: String(r.customerName ?? ''), vehicleLabel: (r.vehicleLabel as string | null) ?? null, camSku: (r.camSku as string | null) ?? null,
-    subtotalCents: n(r.subtotal), taxCents: n(r.tax), totalCents: n(r.total), depositCents: n(r.deposit), paidCents: n(r.paid), refundedCents: n(r.refunded),
-  }));
 }
