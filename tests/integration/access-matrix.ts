@@ -127,4 +127,6 @@ export const accessMatrix: AccessRow[] = [
   { method: 'GET', path: '/api/jobs/[id]', url: '/api/jobs/999999', expect: { anonymous: 401, manager: 404, counter: 403, tech: 404 } },
   { method: 'PATCH', path: '/api/jobs/[id]', url: '/api/jobs/999999', expect: { anonymous: 401, manager: 422, counter: 403, tech: 422 } },
   { method: 'POST', path: '/api/jobs/[id]/sign-off', url: '/api/jobs/999999/sign-off', expect: { anonymous: 401, manager: 422, counter: 403, tech: 422 } },
+  // A lead's note log (issue 9, item 4): managers and counter staff; an empty body fails validation.
+  { method: 'POST', path: '/api/leads/[id]/notes', url: '/api/leads/999999/notes', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
 ];

@@ -32,7 +32,7 @@ const WORDS: Record<string, string> = {
 const opts = (values: readonly string[]) => values.map((v) => [v, WORDS[v] ?? v] as const);
 
 type Props =
-  | { mode: 'create'; cards: BaselineCard[]; prefill?: InterviewValues | null }
+  | { mode: 'create'; cards: BaselineCard[]; prefill?: InterviewValues | null; leadId?: number }
   | { mode: 'edit'; cards: BaselineCard[]; build: { id: number; version: number; customerId: number; customerName: string; vehicleLabel: string; baselineCamId: number | null; profile: Record<string, unknown> } };
 
 export function InterviewForm(props: Props) {
@@ -47,7 +47,7 @@ export function InterviewForm(props: Props) {
     const payload = payloadFromValues(values, mode);
     const answer = props.mode === 'edit'
       ? await sendJson(`/api/builds/${props.build.id}`, 'PATCH', { ...payload, version: props.build.version })
-      : await sendJson('/api/builds', 'POST', payload);
+      : await sendJson('/api/builds', 'POST', 'leadId' in props && props.leadId ? { ...payload, leadId: props.leadId } : payload);
     if (answer.status === 200 || answer.status === 201) {
       router.push(`/advisor?build=${String(answer.body.id)}`);
       return;

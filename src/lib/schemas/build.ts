@@ -35,6 +35,8 @@ export const BuildCreateSchema = z
       vehicleLabel: VehicleLabelSchema,
       baselineCamId: BaselineCamIdSchema,
       profile: BuildProfileSchema,
+      // Set when the interview was started from a questionnaire lead: links the lead and marks it contacted.
+      leadId: idOf('leadId').optional(),
     },
     { error: presence('build', 'an object') },
   )

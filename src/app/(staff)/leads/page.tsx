@@ -2,9 +2,11 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ButtonLink, PageHeader } from '@/components/catalogue/ui';
 import { LeadStatusTag, LEAD_STATUS_WORDS } from '@/components/leads/lead-status';
+import { LeadNotes } from '@/components/leads/lead-notes';
 import { LeadStatusForm } from '@/components/leads/lead-status-form';
 import { ShortlistCards } from '@/components/leads/shortlist-view';
 import { requireRoleForPage } from '@/lib/auth/guard';
+import { listLeadNotes } from '@/lib/db/queries/lead-notes';
 import { listLeads } from '@/lib/db/queries/leads';
 import { answersInWords } from '@/lib/leads/questions';
 import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
@@ -19,6 +21,7 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
   const status = (LEAD_STATUSES as readonly string[]).includes(raw.status ?? '') ? (raw.status as LeadStatus) : undefined;
   const page = Math.max(1, Math.trunc(Number(raw.page)) || 1);
   const { items, total } = await listLeads({ status, page, pageSize: PAGE_SIZE });
+  const notes = await listLeadNotes(items.map((l) => l.id));
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const href = (p: number) => `?${new URLSearchParams({ ...(status ? { status } : {}), ...(p > 1 ? { page: String(p) } : {}) }).toString()}`;
   return (
@@ -64,6 +67,7 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
                   <div className="mt-1">{lead.shortlist ? <ShortlistCards shortlist={lead.shortlist} compact /> : <p>None stored.</p>}</div>
                 </section>
               </div>
+              <LeadNotes leadId={lead.id} notes={notes.get(lead.id) ?? []} />
               <footer className="mt-3 flex flex-wrap items-center justify-between gap-3">
                 <LeadStatusForm id={lead.id} status={lead.status} version={lead.version} />
                 <ButtonLink href={`/interviews/new?lead=${lead.id}`} tone="primary">Start an interview</ButtonLink>

@@ -7,6 +7,7 @@ import { DynoRun } from './dyno-run';
 import { Job, JobSignOff } from './job';
 import { LaborOperation } from './labor-operation';
 import { Lead } from './lead';
+import { LeadNote } from './lead-note';
 import { NeedRule, NeedRuleItem } from './need-rule';
 import { Part } from './part';
 import { Payment, Quote, QuoteLine } from './quote';
@@ -14,7 +15,7 @@ import { ShopSettings } from './shop-settings';
 import { Supplier } from './supplier';
 import { User } from './user';
 
-export { AuditEntry, Build, Cam, Customer, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
+export { AuditEntry, Build, Cam, Customer, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
 
 let initialised: Sequelize | undefined;
 
@@ -40,6 +41,8 @@ function associate() {
   QuoteLine.belongsTo(Quote, { foreignKey: 'quoteId' });
   Payment.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
   Lead.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  Lead.hasMany(LeadNote, { foreignKey: 'leadId', as: 'notes' });
+  LeadNote.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   DynoRun.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
   DynoRun.belongsTo(Cam, { foreignKey: 'camId', as: 'cam' });
   DynoRun.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
@@ -56,7 +59,7 @@ function associate() {
 export function db(): Sequelize {
   const sequelize = getSequelize();
   if (initialised !== sequelize) {
-    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, DynoRun, Job, JobSignOff, AuditEntry]) {
+    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, LeadNote, DynoRun, Job, JobSignOff, AuditEntry]) {
       model.initModel(sequelize);
     }
     associate();

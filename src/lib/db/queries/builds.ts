@@ -4,6 +4,7 @@ import { recordAudit } from '@/lib/audit';
 import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { BUILD_RECORD_LIMITS, type BuildCreate, type BuildListQuery, type BuildUpdate } from '@/lib/schemas/build';
 import { Build, Cam, Customer, db } from '../models';
+import { linkLeadToCustomer } from './lead-links';
 import { customerMatchSql, insertCustomer } from './customers';
 import { textSearch } from './text-search';
 
@@ -153,6 +154,7 @@ export async function createBuild(values: BuildCreate, user: SessionUser): Promi
       { customerId, vehicleLabel: values.vehicleLabel, baselineCamId: values.baselineCamId, profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion },
       { transaction: t },
     );
+    if (values.leadId !== undefined) await linkLeadToCustomer(values.leadId, customerId, user, t);
     const record = (await getBuild(build.id, t))!;
     await recordAudit({ user, action: 'build.created', entityType: 'build', entityId: build.id, before: null, after: record }, t);
     return { record };

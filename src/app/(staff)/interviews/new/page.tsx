@@ -18,7 +18,7 @@ export default async function NewInterviewPage({ searchParams }: { searchParams:
   return (
     <div className="flex flex-col gap-4">
       <PageHeader title="New interview" lead={prefill ? `Started from ${lead!.name}’s questionnaire answers: the figures are assumed defaults, so check each one with the customer.` : 'Capture the customer’s whole combination, then rank the shop’s cams for it.'} back={{ href: '/interviews', label: 'Interviews' }} />
-      <InterviewForm mode="create" cards={cards} prefill={prefill} />
+      <InterviewForm mode="create" cards={cards} prefill={prefill} leadId={prefill ? lead!.id : undefined} />
     </div>
   );
 }

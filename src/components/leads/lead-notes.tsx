@@ -1,0 +1,76 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { buttonClass } from '@/components/catalogue/ui';
+import type { LeadNoteView } from '@/lib/db/queries/lead-notes';
+import { LEAD_NOTE_LIMITS } from '@/lib/schemas/lead-note';
+
+// The lead's note log: who spoke to the customer, when, what was said; and a box to add the next entry.
+export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteView[] }) {
+  const router = useRouter();
+  const [body, setBody] = useState('');
+  const [message, setMessage] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+
+  async function add() {
+    setSaving(true);
+    setMessage(null);
+    try {
+      const response = await fetch(`/api/leads/${leadId}/notes`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ body }) });
+      const data = (await response.json().catch(() => ({}))) as { message?: string; errors?: { message: string }[] };
+      if (response.ok) {
+        setBody('');
+        setMessage('Note added.');
+        router.refresh();
+      } else setMessage(data.errors?.[0]?.message ?? data.message ?? `Not saved (${response.status}).`);
+    } catch {
+      setMessage('Not saved: the server could not be reached.');
+    } finally {
+      setSaving(false);
+    }
+  }
+
+  return (
+    <section aria-label={`Notes on lead ${leadId}`} className="mt-3">
+      <h3 className="text-xs font-semibold uppercase tracking-wide text-ink-muted">Notes</h3>
+      {notes.length === 0 ? <p className="text-ink-muted">No notes yet.</p> : null}
+      <ol className="mt-1 flex flex-col gap-1">
+        {notes.map((n) => (
+          <li key={n.id} className="border-l-2 border-steel-300 pl-2">
+            <p className="text-xs text-ink-muted">
+              {n.author ?? 'A former staff member'} · <span className="spec">{n.createdAt.slice(0, 16).replace('T', ' ')}</span> UTC
+            </p>
+            <p className="whitespace-pre-line">{n.body}</p>
+          </li>
+        ))}
+      </ol>
+      <form
+        className="mt-2 flex flex-col gap-1 sm:flex-row sm:items-end"
+        onSubmit={(e) => {
+          e.preventDefault();
+          void add();
+        }}
+      >
+        <label htmlFor={`lead-note-${leadId}`} className="sr-only">New note on lead {leadId}</label>
+        <textarea
+          id={`lead-note-${leadId}`}
+          rows={2}
+          maxLength={LEAD_NOTE_LIMITS.bodyMaxLength}
+          placeholder="What was said, and what happens next"
+          className="min-w-0 flex-1 rounded border border-steel-300 bg-paper-raised px-2 py-1"
+          value={body}
+          onChange={(e) => setBody(e.target.value)}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) {
+              e.preventDefault();
+              void add();
+            }
+          }}
+        />
+        <button type="submit" className={buttonClass.quiet} disabled={saving || !body.trim()}>Add note</button>
+      </form>
+      {message ? <p role="status" className="text-xs text-ink-soft">{message}</p> : null}
+    </section>
+  );
+}
