@@ -30,8 +30,9 @@ const API_EXCEPT_DOWNLOADS = '/api/:path((?!(?:cams|parts|labor)/[^/]+/attachmen
 
 const nextConfig = {
   poweredByHeader: false,
-  // Database drivers load dialect modules dynamically; keep them out of the bundle.
-  serverExternalPackages: ['sequelize', 'mariadb', 'argon2'],
+  // Database drivers load dialect modules dynamically, and pdfkit reads its own data files from disk;
+  // keep them out of the bundle.
+  serverExternalPackages: ['sequelize', 'mariadb', 'argon2', 'pdfkit'],
   async headers() {
     return [
       { source: '/:path*', headers: everyResponse },

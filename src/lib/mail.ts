@@ -3,7 +3,7 @@ import { requireEnv } from './env';
 
 // The one place the app sends e-mail. The SDK reads RESEND_BASE_URL itself, so pointing it at the
 // local fake (docker-local/mail-fake) or the real service is a change of environment only.
-export type OutgoingMail = { to: string | string[]; subject: string; html: string; text: string; replyTo?: string };
+export type OutgoingMail = { to: string | string[]; subject: string; html: string; text: string; replyTo?: string; fromName?: string };
 
 let client: Resend | undefined;
 
@@ -20,11 +20,24 @@ export function headerValue(value: string): string {
   return value.replace(/[\r\n\u2028\u2029]+/g, ' ').replace(/[\u0000-\u001f\u007f]/g, '').trim();
 }
 
+/**
+ * The sender: MAIL_FROM's address (the one the mail service lets us send from), under the shop's name
+ * when one is given. The name is quoted, with the characters that could end the quote or the name left
+ * out, so a shop called `Tom "Cams" <x@y>` can never change the address.
+ */
+export function fromHeader(name?: string): string {
+  const configured = headerValue(process.env.MAIL_FROM ?? 'Lobewise <no-reply@lobewise.test>');
+  if (!name) return configured;
+  const address = /<([^<>\s]+)>\s*$/.exec(configured)?.[1] ?? configured;
+  const display = headerValue(name).replace(/["\\<>]/g, '').slice(0, 100).trim();
+  return display ? `"${display}" <${address}>` : configured;
+}
+
 export async function sendMail(mail: OutgoingMail): Promise<{ id: string }> {
   const { to, subject, replyTo, html, text } = mail;
   const reply = replyTo === undefined ? '' : headerValue(replyTo);
   const { data, error } = await resend().emails.send({
-    from: headerValue(process.env.MAIL_FROM ?? 'Lobewise <no-reply@lobewise.test>'),
+    from: fromHeader(mail.fromName),
     to: Array.isArray(to) ? to.map(headerValue) : headerValue(to),
     subject: headerValue(subject),
     ...(reply ? { replyTo: reply } : {}),

@@ -105,10 +105,15 @@ export const accessMatrix: AccessRow[] = [
   { method: 'PATCH', path: '/api/quotes/[id]', url: '/api/quotes/3', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
   { method: 'POST', path: '/api/quotes/[id]/send', url: '/api/quotes/999999/send', expect: { anonymous: 401, manager: 404, counter: 404, tech: 403 } },
   { method: 'POST', path: '/api/quotes/[id]/refund', url: '/api/quotes/2/refund', expect: { anonymous: 401, manager: 422, counter: 403, tech: 403 } },
+  // The quote lifecycle and documents (issue 12, items 2 and 6): an empty body fails validation; a PDF is a read.
+  { method: 'POST', path: '/api/quotes/[id]/transition', url: '/api/quotes/2/transition', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+  { method: 'POST', path: '/api/quotes/[id]/revise', url: '/api/quotes/2/revise', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+  { method: 'GET', path: '/api/quotes/[id]/pdf', url: '/api/quotes/1/pdf', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
   // The manager's numbers: reads for managers only.
   { method: 'GET', path: '/api/reports/summary', expect: managerRead },
   { method: 'GET', path: '/api/reports/quotes.csv', expect: managerRead },
   { method: 'POST', path: '/api/q/[token]/checkout', url: '/api/q/not-a-live-link-0123456789abcdef/checkout', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
+  { method: 'GET', path: '/api/q/[token]/pdf', url: '/api/q/not-a-live-link-0123456789abcdef/pdf', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
   // The at-home questionnaire's leads: anyone may send answers (an empty body fails validation);
   // managers and counter staff read and move them. The PATCH names a lead that does not exist.
   { method: 'POST', path: '/api/leads', expect: anyoneValidates },

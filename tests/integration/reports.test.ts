@@ -11,7 +11,7 @@ const DAY = 86_400_000;
 const utcDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 const TODAY = utcDay(Date.now());
 const FROM = utcDay(Date.now() - 29 * DAY);
-const STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'declined', 'expired', 'cancelled'];
+const STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'closed', 'declined', 'expired', 'cancelled', 'replaced'];
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 type Margin = { revenueCents: number; costCents: number; marginCents: number; marginBp: number | null };

@@ -5,7 +5,7 @@ import { readRuntime } from './runtime';
 // Quotes a test owns from start to finish: its own customer (a unique invented e-mail), build and quote,
 // made through the API as counter staff would, optionally sent so the private link is known.
 type Agent = ReturnType<typeof request.agent>;
-export type FixtureQuote = { id: number; number: string; version: number; depositCents: number; totalCents: number; customerEmail: string; token: string | null };
+export type FixtureQuote = { id: number; number: string; version: number; depositCents: number; totalCents: number; customerEmail: string; token: string | null; buildId: number };
 
 /** YYYY-MM-DD, days from today (UTC); negative for the past. */
 export const dayFromToday = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
@@ -24,9 +24,9 @@ export function truckProfile() {
 
 export const FIXTURE_CAM_ID = 13; // a seeded truck cam the demo's rules price for this build
 
-export async function makeDraftQuote(staff: Agent, label: string, options: { validUntil?: string; extraLines?: unknown[] } = {}): Promise<FixtureQuote> {
+export async function makeDraftQuote(staff: Agent, label: string, options: { validUntil?: string; extraLines?: unknown[]; customerName?: string } = {}): Promise<FixtureQuote> {
   const customerEmail = `${label.toLowerCase().replace(/[^a-z0-9]+/g, '-')}-${crypto.randomBytes(4).toString('hex')}@example.com`;
-  const build = await staff.post('/api/builds').send({ customer: { name: `Fixture ${label}`, email: customerEmail }, vehicleLabel: `Fixture truck (${label})`, profile: truckProfile() });
+  const build = await staff.post('/api/builds').send({ customer: { name: options.customerName ?? `Fixture ${label}`, email: customerEmail }, vehicleLabel: `Fixture truck (${label})`, profile: truckProfile() });
   if (build.status !== 201) throw new Error(`build fixture answered ${build.status}: ${JSON.stringify(build.body)}`);
   const made = await staff.post('/api/quotes').send({ buildId: build.body.id, camId: FIXTURE_CAM_ID, ...(options.extraLines ? { extraLines: options.extraLines } : {}) });
   if (made.status !== 201) throw new Error(`quote fixture answered ${made.status}: ${JSON.stringify(made.body)}`);
@@ -36,11 +36,11 @@ export async function makeDraftQuote(staff: Agent, label: string, options: { val
     if (dated.status !== 200) throw new Error(`validUntil fixture answered ${dated.status}: ${JSON.stringify(dated.body)}`);
     quote = dated.body;
   }
-  return { id: quote.id, number: quote.number, version: quote.version, depositCents: quote.depositCents, totalCents: quote.totalCents, customerEmail, token: null };
+  return { id: quote.id, number: quote.number, version: quote.version, depositCents: quote.depositCents, totalCents: quote.totalCents, customerEmail, token: null, buildId: build.body.id };
 }
 
 /** A draft sent to its customer; the private token is read back from the mail fake. */
-export async function makeSentQuote(staff: Agent, label: string, options: { validUntil?: string } = {}): Promise<FixtureQuote & { token: string }> {
+export async function makeSentQuote(staff: Agent, label: string, options: { validUntil?: string; customerName?: string } = {}): Promise<FixtureQuote & { token: string }> {
   const { appUrl, mailUrl } = readRuntime();
   const draft = await makeDraftQuote(staff, label, options);
   const sent = await staff.post(`/api/quotes/${draft.id}/send`);
@@ -50,4 +50,17 @@ export async function makeSentQuote(staff: Agent, label: string, options: { vali
   const match = mail && new RegExp(`${appUrl.replace(/[.:/]/g, '\\$&')}/q/([A-Za-z0-9_-]+)`).exec(mail.text);
   if (!match) throw new Error(`no quote link e-mailed to ${draft.customerEmail}`);
   return { ...draft, version: sent.body.version, token: match[1] };
+}
+
+/** Pays a sent quote's deposit through the payments fake and waits until the webhook has recorded it. */
+export async function payDeposit(staff: Agent, quote: FixtureQuote & { token: string }): Promise<void> {
+  const { appUrl, paymentsUrl } = readRuntime();
+  const started = await request(appUrl).post(`/api/q/${quote.token}/checkout`).set('Accept', 'application/json');
+  if (started.status !== 200) throw new Error(`checkout fixture answered ${started.status}: ${JSON.stringify(started.body)}`);
+  await request(paymentsUrl).post(`/_test/sessions/${new URL(started.body.url).pathname.split('/').pop()}/complete`).expect(200);
+  const deadline = Date.now() + 15_000;
+  while ((await staff.get(`/api/quotes/${quote.id}`)).body.status !== 'deposit-paid') {
+    if (Date.now() > deadline) throw new Error(`quote ${quote.number} was not marked paid`);
+    await new Promise((r) => setTimeout(r, 150));
+  }
 }

@@ -9,18 +9,18 @@ import { Banner, buttonClass, PageHeader, tableClass, tdClass, thClass } from '@
 import type { StaffRole } from '@/lib/auth/guard';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
+import { LifecyclePanel } from './lifecycle-panel';
+import { dollarsToCents } from './money-input';
+import { QuoteBasis } from './quote-basis';
+import type { QuoteRun } from './quote-run';
+import { RefundForm } from './refund-form';
 import { PaymentStatusTag, QuoteStatusTag } from './status';
 
 // discountCents rides along unchanged, so saving other lines keeps a discount already given.
 type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null };
 type Notice = { tone: 'ok' | 'fault' | 'caution'; title: string; detail?: string } | null;
 
-/** "12.5" or "12.50" dollars → 1250 cents, exactly (no float arithmetic); null when it is not money. */
-export function dollarsToCents(text: string): number | null {
-  const m = /^\s*(\d{1,7})(?:\.(\d{1,2}))?\s*$/.exec(text);
-  if (!m) return null;
-  return Number(m[1]) * 100 + Number((m[2] ?? '').padEnd(2, '0'));
-}
+export { dollarsToCents };
 
 const toEdit = (q: QuoteRecord): EditLine[] =>
   q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: (l.unitPriceCents / 100).toFixed(2), discountCents: l.discountCents ?? 0, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
@@ -36,7 +36,6 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
   const [editing, setEditing] = useState<EditLine[] | null>(null);
   const [busy, setBusy] = useState(false);
   const [notice, setNotice] = useState<Notice>(null);
-  const [refund, setRefund] = useState('');
   const canWrite = role === 'manager' || role === 'counter';
   const isDraft = quote.status === 'draft';
 
@@ -54,6 +53,8 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
     setNotice({ tone: 'fault', title: `${label}: ${body.message ?? `the server answered ${status}`}`, detail: errorText(body) });
     return false;
   }
+
+  const runJson: QuoteRun = (label, method, to, body, okTitle) => run(label, () => sendJson(method, to, body), okTitle);
 
   async function saveLines() {
     if (!editing) return;
@@ -91,7 +92,8 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         }
       />
       {notice ? <Banner tone={notice.tone} title={notice.title}>{notice.detail}</Banner> : null}
-      {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft.</p> : null}
+      <LifecyclePanel quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
+      {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft; revise a sent quote to change them.</p> : null}
 
       <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
         <table className={tableClass}>
@@ -163,7 +165,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           <h2 id="totals" className="text-sm font-semibold">Totals</h2>
           <dl className="spec mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-sm">
             <dt className="font-sans">Subtotal</dt><dd className="text-right">{formatCents(quote.subtotalCents)}</dd>
-            <dt className="font-sans">Tax ({quote.taxRateBp} bp on goods)</dt><dd className="text-right">{formatCents(quote.taxCents)}</dd>
+            <dt className="font-sans">Tax ({(quote.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on goods)</dt><dd className="text-right">{formatCents(quote.taxCents)}</dd>
             <dt className="font-sans font-semibold">Total</dt><dd className="text-right font-semibold">{formatCents(quote.totalCents)}</dd>
             <dt className="font-sans">Deposit</dt><dd className="text-right">{formatCents(quote.depositCents)}</dd>
             {quote.costCents !== undefined ? (
@@ -190,25 +192,10 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
             ))}
             {quote.payments.length === 0 ? <li><PaymentStatusTag status={null} /></li> : null}
           </ul>
-          {role === 'manager' && paid ? (
-            <form
-              className="mt-3 flex flex-wrap items-end gap-2"
-              onSubmit={(e) => {
-                e.preventDefault();
-                const cents = dollarsToCents(refund);
-                if (cents === null || cents <= 0) return setNotice({ tone: 'fault', title: 'Refund: the amount must be dollars and cents above 0' });
-                void run('Not refunded', () => sendJson('POST', `${url}/refund`, { amountCents: cents }), `Refund of ${formatCents(cents)} sent to the payment service.`).then((ok) => ok && setRefund(''));
-              }}
-            >
-              <label className="text-sm">
-                Refund amount ($, at most {formatCents(paid.amountCents - paid.refundedCents)})
-                <input value={refund} onChange={(e) => setRefund(e.target.value)} inputMode="decimal" className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5" />
-              </label>
-              <button type="submit" className={buttonClass.danger} disabled={busy}>Refund</button>
-            </form>
-          ) : null}
+          {role === 'manager' && paid ? <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} /> : null}
         </section>
       </div>
+      {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} compact /> : null}
       <p className="text-xs text-ink-muted">
         Made from the <Link className="underline" href="/advisor">cam shortlist</Link>. Tax applies to the cam, parts and other goods; labour and the tune are not taxed.
       </p>

@@ -1,11 +1,9 @@
 import { StateTag } from '@/components/catalogue/ui';
+import { stateWord } from '@/lib/quotes/lifecycle';
 
 // Quote and payment states, always as a word (the colour only repeats it).
 const QUOTE_TONE: Record<string, 'ok' | 'caution' | 'fault' | 'muted'> = {
-  draft: 'muted', sent: 'caution', accepted: 'caution', 'deposit-paid': 'ok', declined: 'fault', expired: 'fault', cancelled: 'fault',
-};
-const QUOTE_WORD: Record<string, string> = {
-  draft: 'Draft', sent: 'Sent', accepted: 'Accepted, unpaid', 'deposit-paid': 'Deposit paid', declined: 'Declined', expired: 'Expired', cancelled: 'Cancelled',
+  draft: 'muted', sent: 'caution', accepted: 'caution', 'deposit-paid': 'ok', closed: 'ok', declined: 'fault', expired: 'fault', cancelled: 'fault', replaced: 'muted',
 };
 const PAYMENT_TONE: Record<string, 'ok' | 'caution' | 'fault' | 'muted'> = {
   pending: 'caution', paid: 'ok', failed: 'fault', expired: 'muted', refunded: 'muted', 'partially-refunded': 'caution',
@@ -16,11 +14,11 @@ const PAYMENT_WORD: Record<string, string> = {
 
 /** The word for a quote state, as every screen says it. */
 export function quoteStatusWord(status: string): string {
-  return QUOTE_WORD[status] ?? status;
+  return stateWord(status);
 }
 
 export function QuoteStatusTag({ status }: { status: string }) {
-  return <StateTag tone={QUOTE_TONE[status] ?? 'muted'}>{QUOTE_WORD[status] ?? status}</StateTag>;
+  return <StateTag tone={QUOTE_TONE[status] ?? 'muted'}>{stateWord(status)}</StateTag>;
 }
 
 export function PaymentStatusTag({ status }: { status: string | null }) {

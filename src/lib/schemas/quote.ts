@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { text } from './text';
 import { QUOTE_LINE_KIND_LIST } from '@/lib/quotes/pricing';
 import { VersionSchema } from './catalogue-cam';
+import { QUOTE_STATE_LIST as QUOTE_STATUSES } from '@/lib/quotes/lifecycle';
 
 export const QUOTE_LIMITS = {
   descriptionMaxLength: 255,
@@ -79,3 +80,12 @@ export const QuoteRefundSchema = z.strictObject({
   reason: text('reason', { error: 'reason must be text' }).max(255, { error: 'reason must be at most 255 characters' }).optional(),
 });
 
+
+/** A staff move through the lifecycle; which moves are legal is decided by src/lib/quotes/lifecycle.ts (409). */
+export const QuoteTransitionSchema = z.strictObject({
+  to: z.enum(QUOTE_STATUSES, { error: `to must be one of: ${QUOTE_STATUSES.join(', ')}` }),
+  version: VersionSchema,
+  reason: text('reason', { error: 'reason must be text' }).max(255, { error: 'reason must be at most 255 characters' }).optional(),
+});
+
+export const QuoteReviseSchema = z.strictObject({ version: VersionSchema });

@@ -2,8 +2,11 @@ import {
   DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
 } from 'sequelize';
 
-export const QUOTE_STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'declined', 'expired', 'cancelled'] as const;
-export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
+import { QUOTE_STATE_LIST, type QuoteStatus } from '@/lib/quotes/lifecycle';
+
+// The states, their words and the legal moves between them live in src/lib/quotes/lifecycle.ts.
+export const QUOTE_STATUSES = QUOTE_STATE_LIST;
+export type { QuoteStatus };
 
 export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes<Quote>> {
   declare id: CreationOptional<number>;
@@ -22,6 +25,14 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
   declare validUntil: string | null;
   declare sentAt: Date | null;
   declare acceptedAt: Date | null;
+  declare closedAt: CreationOptional<Date | null>;
+  /** 1 for the first quote; a revision is numbered with -R<revision>. */
+  declare revision: CreationOptional<number>;
+  declare revisionOfQuoteId: CreationOptional<number | null>;
+  declare replacedByQuoteId: CreationOptional<number | null>;
+  /** Frozen at the first send: the build profile and the advisor's result the customer was shown. */
+  declare snapshotProfile: CreationOptional<Record<string, unknown> | null>;
+  declare snapshotAdvice: CreationOptional<Record<string, unknown> | null>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -43,6 +54,12 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
         validUntil: { type: DataTypes.DATEONLY, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
         acceptedAt: { type: DataTypes.DATE, allowNull: true },
+        closedAt: { type: DataTypes.DATE, allowNull: true },
+        revision: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 1 },
+        revisionOfQuoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        replacedByQuoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        snapshotProfile: { type: DataTypes.JSON, allowNull: true },
+        snapshotAdvice: { type: DataTypes.JSON, allowNull: true },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -7,6 +7,9 @@ import { isPastValidUntil, retryOnLockContention, sessionMismatches } from '@/li
 import { db, Payment, Quote } from '../models';
 import { getQuoteByToken, sha256 } from './quotes';
 import { sendRefundNotice, settleFullRefund } from './refund-effects';
+import { canTransition, isOpen, stateWord } from '@/lib/quotes/lifecycle';
+import { moveQuote } from './quote-lifecycle';
+import { sendDepositReceipt } from './quote-notices';
 
 // The deposit, taken exactly once. Every path that changes a quote's payments locks the quote row
 // first and its payments second, so checkouts and webhook deliveries queue behind one another instead
@@ -59,7 +62,8 @@ async function checkoutLocked(quoteId: number, token: string, currency: string, 
   if (!quote) return { ok: false, status: 404, message: 'This link does not open a quote.' };
   const rows = await Payment.findAll({ where: { quoteId }, order: [['id', 'ASC']], transaction: t, lock: t.LOCK.UPDATE });
   if (stateOf(quote, rows).depositPaid) return refusal(`The deposit for quote ${quote.number} has already been paid; nothing more is due online.`, quote, rows);
-  if (quote.status !== 'sent' && quote.status !== 'accepted') return refusal(`Quote ${quote.number} is ${quote.status} and can no longer be paid online. Please call the shop.`, quote, rows);
+  if (quote.status === 'replaced') return refusal(`Quote ${quote.number} was replaced by a newer quote; please pay from the newer quote's link we e-mailed you.`, quote, rows);
+  if (!isOpen(quote.status)) return refusal(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be paid online. Please call the shop.`, quote, rows);
   if (isPastValidUntil(quote.validUntil ?? null)) {
     return refusal(`Quote ${quote.number} was valid until ${quote.validUntil} and can no longer be accepted or paid. Ask the shop for a fresh quote.`, quote, rows);
   }
@@ -142,7 +146,10 @@ export async function recordCheckoutCompleted(session: Stripe.Checkout.Session):
     console.warn(`[deposits] refused checkout.session.completed for ${session.id}: no checkout the app opened`);
     return { result: 'refused', reason: 'unknown-session' };
   }
-  return retryOnLockContention(() => db().transaction((t) => completeLocked(session, known.quoteId, known.id, t)));
+  const outcome = await retryOnLockContention(() => db().transaction((t) => completeLocked(session, known.quoteId, known.id, t)));
+  // After the commit, once: a replayed event answers 'already' and sends nothing.
+  if (outcome.result === 'applied') await sendDepositReceipt(known.quoteId, known.id);
+  return outcome;
 }
 
 async function completeLocked(session: Stripe.Checkout.Session, quoteId: number, paymentId: number, t: Transaction): Promise<WebhookResult> {
@@ -159,7 +166,8 @@ async function completeLocked(session: Stripe.Checkout.Session, quoteId: number,
   }
   const others = await Payment.findAll({ where: { quoteId, id: { [Op.ne]: paymentId } }, transaction: t, lock: t.LOCK.UPDATE });
   const earlier = heldDeposit(others);
-  const closed = quote.status === 'cancelled' || quote.status === 'declined';
+  // Money for a quote the lifecycle says cannot be paid now (cancelled, declined, replaced, ...) goes back.
+  const closed = !canTransition(quote.status, 'deposit-paid', 'payment');
   if (earlier || closed) {
     await payments().refunds.create(
       { payment_intent: intent!, reason: earlier ? 'duplicate' : 'requested_by_customer', metadata: { quoteId: String(quoteId), paymentId: String(paymentId) } },
@@ -178,8 +186,7 @@ async function completeLocked(session: Stripe.Checkout.Session, quoteId: number,
   }
   payment.set({ status: 'paid', paidAt: new Date(), providerPaymentId: intent });
   await payment.save({ transaction: t });
-  quote.set({ status: 'deposit-paid', acceptedAt: quote.acceptedAt ?? new Date() });
-  await quote.save({ transaction: t });
+  await moveQuote(quote, 'deposit-paid', 'payment', { actor: 'payments-webhook' }, t, { paymentId });
   await recordAudit({ actor: 'payments-webhook', action: 'payment.received', entityType: 'quote', entityId: quoteId, after: { paymentId, amountCents: payment.amountCents } }, t);
   return { result: 'applied' };
 }

@@ -10,12 +10,15 @@ import { sendMail } from '@/lib/mail';
 import { payments } from '@/lib/payments';
 import type { AuthorityVerdict } from '@/lib/quotes/authority';
 import { formatQuoteNumber, laborLine, lineNetCents, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
-import { quoteEmail } from '@/lib/quotes/email';
+import { stateWord, validUntilFrom } from '@/lib/quotes/lifecycle';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
 import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings } from '../models';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from './quote-lines';
 import { sendRefundNotice, settleFullRefund, type AfterFullRefund } from './refund-effects';
+import { LifecycleRefused, moveQuote } from './quote-lifecycle';
+import { mailShop, quoteSentMail } from './quote-notices';
+import { readJson, takeSnapshot, type QuoteSnapshot } from './quote-snapshot';
 import type { QuoteStatus } from '../models/quote';
 
 // Quotes: made from a build and a chosen cam, priced by src/lib/quotes/pricing.ts, sent by private
@@ -56,6 +59,15 @@ export type QuoteRecord = {
   id: number;
   number: string;
   status: QuoteStatus;
+  /** The state in words (src/lib/quotes/lifecycle.ts), as every screen says it. */
+  stateWord: string;
+  revision: number;
+  /** The quote this revision replaces, and the newer revision that replaced this one. */
+  revisionOf: { id: number; number: string } | null;
+  replacedBy: { id: number; number: string; status: QuoteStatus; sentAt: string | null } | null;
+  /** Frozen at the first send; null for a draft. */
+  snapshot: QuoteSnapshot | null;
+  closedAt: string | null;
   customer: { id: number; name: string; email: string | null };
   build: { id: number; vehicleLabel: string } | null;
   camId: number | null;
@@ -136,10 +148,21 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
   const pays = [...(row.payments ?? [])].sort((a, b) => a.id - b.id);
   // A refunded duplicate took the money and gave it back; the quote was paid once.
   const paid = pays.filter((p) => PAID_STATES.includes(p.status) && !p.duplicateOfPaymentId);
+  const relatedIds = [row.revisionOfQuoteId, row.replacedByQuoteId].filter((v): v is number => typeof v === 'number');
+  const related = relatedIds.length ? await Quote.findAll({ where: { id: relatedIds }, attributes: ['id', 'number', 'status', 'sentAt'], transaction }) : [];
+  const older = related.find((q) => q.id === row.revisionOfQuoteId);
+  const newer = related.find((q) => q.id === row.replacedByQuoteId);
+  const profile = readJson(row.snapshotProfile);
   return {
     id: row.id,
     number: row.number,
     status: row.status,
+    stateWord: stateWord(row.status),
+    revision: row.revision ?? 1,
+    revisionOf: older ? { id: older.id, number: older.number } : null,
+    replacedBy: newer ? { id: newer.id, number: newer.number, status: newer.status, sentAt: iso(newer.sentAt) } : null,
+    snapshot: profile === null ? null : { profile, advice: (readJson(row.snapshotAdvice) as Record<string, unknown> | null) ?? null },
+    closedAt: iso(row.closedAt),
     customer: { id: row.customer?.id ?? row.customerId, name: row.customer?.name ?? 'Unknown customer', email: row.customer?.email ?? null },
     build: row.build ? { id: row.build.id, vehicleLabel: row.build.vehicleLabel } : null,
     camId: row.camId ?? null,
@@ -222,7 +245,8 @@ async function nextNumber(t: Transaction): Promise<string> {
   const year = new Date().getUTCFullYear();
   // The locking read serialises concurrent creators on the year's range; the unique index is the backstop.
   const last = await Quote.findOne({
-    where: { number: { [Op.like]: `Q-${year}-%` } },
+    // Revisions (-R2, -R3) share their first quote's number and never advance the count.
+    where: { number: { [Op.like]: `Q-${year}-%`, [Op.notLike]: '%-R%' } },
     order: [[fn('LENGTH', col('number')), 'DESC'], ['number', 'DESC']],
     attributes: ['id', 'number'],
     lock: t.LOCK.UPDATE,
@@ -295,7 +319,13 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
       const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
       if (!quote) throw notFound();
       if (quote.version !== patch.version) throw conflict(await getQuote(id, t));
-      if (quote.status !== 'draft') throw refused(`Quote ${quote.number} is ${quote.status}; only a draft can be changed.`);
+      // Lines change only on a draft (a sent quote is revised instead); the valid-until day may be moved
+      // while the customer can still act on the quote.
+      if (patch.lines && quote.status !== 'draft') throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft's lines can be changed. Revise it for new lines.`);
+      if (!['draft', 'sent', 'accepted'].includes(quote.status)) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be changed.`);
+      if (patch.validUntil !== undefined && quote.status !== 'draft' && (patch.validUntil === null || patch.validUntil < new Date().toISOString().slice(0, 10))) {
+        throw invalid([{ field: 'validUntil', message: 'a sent quote needs a valid-until day of today or later' }]);
+      }
       const before = await getQuote(id, t);
       const settings = await shopSettings(t);
       if (patch.lines) {
@@ -316,7 +346,7 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
       if (!quote.changed()) return { record: before!, changed: false };
       await quote.save({ transaction: t });
       const after = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.updated', entityType: 'quote', entityId: id, before: { totalCents: before?.totalCents }, after: { totalCents: after.totalCents } }, t);
+      await recordAudit({ user, action: 'quote.updated', entityType: 'quote', entityId: id, before: { totalCents: before?.totalCents, validUntil: before?.validUntil }, after: { totalCents: after.totalCents, validUntil: after.validUntil } }, t);
       return { record: after };
     },
     { reload: () => getQuote(id) },
@@ -334,26 +364,37 @@ export function newQuoteToken(): string {
 
 /**
  * Sends (or sends again) the quote: a fresh private token whose sha256 alone is stored, an e-mail with
- * the link, status → sent. The mail goes out inside the transaction, so a refused mail changes nothing;
- * sending again replaces the token, and the old link stops working.
+ * the link, status → sent (through the lifecycle). The mail goes out inside the transaction, so a refused
+ * mail changes nothing; sending again replaces the token, and the old link stops working. The first send
+ * sets a missing valid-until day and freezes the build profile and the advisor's result for the cam.
  */
 export async function sendQuote(id: number, user: SessionUser): Promise<WriteOutcome<QuoteRecord> | { ok: false; reason: 'mail-failed'; message: string }> {
   db();
+  const peek = await Quote.findByPk(id, { attributes: ['id', 'buildId', 'camId', 'snapshotProfile'] });
+  const snapshot = peek && readJson(peek.snapshotProfile) === null ? await takeSnapshot(peek.buildId, peek.camId) : null;
   try {
     return await runWrite(async (t) => {
       const quote = (await Quote.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE })) as QuoteRow | null;
       if (!quote) throw notFound();
-      if (quote.status !== 'draft' && quote.status !== 'sent') throw refused(`Quote ${quote.number} is ${quote.status}; only a draft or a sent quote can be sent.`);
       const email = quote.customer?.email;
-      if (!email) throw invalid([{ field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' }]);
-      if (!(quote.lines ?? []).length) throw invalid([{ field: 'lines', message: 'the quote has no lines' }]);
+      if (quote.status === 'draft' || quote.status === 'sent') {
+        if (!email) throw invalid([{ field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' }]);
+        if (!(quote.lines ?? []).length) throw invalid([{ field: 'lines', message: 'the quote has no lines' }]);
+      }
       const token = newQuoteToken();
-      quote.set({ publicTokenHash: sha256(token), status: 'sent', sentAt: new Date() });
-      await quote.save({ transaction: t });
+      const now = new Date();
+      quote.set({ publicTokenHash: sha256(token), sentAt: now, validUntil: quote.validUntil ?? validUntilFrom(now) });
+      if (snapshot && readJson(quote.snapshotProfile) === null) quote.set({ snapshotProfile: snapshot.profile as Record<string, unknown>, snapshotAdvice: snapshot.advice });
+      try {
+        await moveQuote(quote, 'sent', 'send', { user }, t, { to: email });
+      } catch (error) {
+        if (error instanceof LifecycleRefused) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft or a sent quote can be sent.`);
+        throw error;
+      }
       const settings = await shopSettings(t);
       const record = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.sent', entityType: 'quote', entityId: id, before: null, after: { to: email } }, t);
-      await sendMail({ to: email, ...quoteEmail({ quote: record, shopName: settings.name, link: `${appBaseUrl()}/q/${token}` }) });
+      await recordAudit({ user, action: 'quote.sent', entityType: 'quote', entityId: id, before: null, after: { to: email, revision: record.revision } }, t);
+      await sendMail(await quoteSentMail(record, mailShop(settings), `${appBaseUrl()}/q/${token}`, record.revisionOf?.number ?? null));
       return { record };
     });
   } catch (error) {
@@ -368,6 +409,13 @@ export type PublicQuote = {
   quote: QuoteRecord;
   shop: { name: string; phone: string; email: string; address: string; depositPolicyText: string; currency: string };
 };
+
+/** The shop's details printed on documents; null until a manager has saved the settings. */
+export async function shopForDocuments(): Promise<PublicQuote['shop'] | null> {
+  db();
+  const s = await ShopSettings.findOne({ order: [['id', 'ASC']] });
+  return s ? { name: s.name, phone: s.phone, email: s.email, address: s.address, depositPolicyText: s.depositPolicyText, currency: s.currency } : null;
+}
 
 /** The quote a private link opens, or null for any token that is not a live link (never a hint why). */
 export async function getQuoteByToken(token: string): Promise<PublicQuote | null> {

@@ -3,7 +3,11 @@ import { notFound } from 'next/navigation';
 import { formatCents } from '@/components/catalogue/format';
 import { getQuoteByToken } from '@/lib/db/queries/quotes';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
+import { CUSTOMER_CAUTIONS as CAUTIONS, REFUND_NOTE } from '@/lib/quotes/cautions';
 import { isTaxable } from '@/lib/quotes/pricing';
+import { QuoteBasis } from '@/components/quotes/quote-basis';
+import { ReplacedNotice } from '@/components/quotes/replaced-notice';
+import './print.css';
 
 export const dynamic = 'force-dynamic';
 // A private link: never indexed, never cached, never sent on as a referrer.
@@ -12,14 +16,6 @@ export const metadata: Metadata = {
   robots: { index: false, follow: false },
   referrer: 'no-referrer',
 };
-
-const CAUTIONS = [
-  'Emissions: many places do not allow an aftermarket cam on a road vehicle unless the part is certified for that vehicle. Ask us about the paperwork for your area.',
-  'Brakes: a bigger cam can lower engine vacuum at idle, and vacuum brake boosters rely on it. We check brake assist before the vehicle leaves.',
-  'Valvetrain: valve springs, piston-to-valve clearance and pushrod length are checked by a qualified technician on your engine, not assumed.',
-  'Tune: the engine must be re-tuned after the swap. A higher-stall converter, if fitted, changes how the vehicle creeps and pulls away.',
-  'Local codes and licensed practice come first: where they ask for more than this, we follow them.',
-];
 
 const STATUS_WORDS: Record<string, { title: string; text: string }> = {
   sent: {
@@ -34,6 +30,8 @@ const STATUS_WORDS: Record<string, { title: string; text: string }> = {
   declined: { title: 'Declined', text: 'This quote was declined. Call the shop if you would like a new one.' },
   expired: { title: 'Expired', text: 'This quote has run out. Call the shop for an up-to-date price.' },
   cancelled: { title: 'Cancelled', text: 'This quote was cancelled. Call the shop if that is a surprise.' },
+  closed: { title: 'Paid in full — thank you', text: 'The job is done and the balance is paid. Keep this page or its PDF as your record.' },
+  replaced: { title: 'Replaced by a newer quote', text: 'This quote was revised; the newer one is the one that counts.' },
 };
 
 const longDate = (isoDate: string) =>
@@ -85,7 +83,7 @@ export default async function CustomerQuotePage({
               }
             : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
   return (
-    <div className="mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink">
+    <div className="customer-quote mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink print:max-w-none print:px-0 print:py-0 print:text-base">
       <p className="text-base text-ink-muted">{shop.name}</p>
       <h1 className="mt-1 text-3xl font-bold leading-tight sm:text-4xl">Your quote {quote.number}</h1>
       <p className="mt-2">
@@ -95,6 +93,14 @@ export default async function CustomerQuotePage({
       {quote.validUntil && open && !lapsed ? (
         <p className="mt-1 text-base text-ink-muted">Valid until {longDate(quote.validUntil)}</p>
       ) : null}
+
+      <p className="mt-3 flex flex-wrap gap-4 text-base print:hidden">
+        <a className="font-semibold text-gauge-700 underline" href={`/api/q/${encodeURIComponent(token)}/pdf`}>
+          Download as PDF
+        </a>
+        <span className="text-ink-muted">or use your browser’s Print to print this page.</span>
+      </p>
+      {quote.status === 'replaced' ? <ReplacedNotice replacedBy={quote.replacedBy} shop={shop} customerEmail={quote.customer.email} /> : null}
 
       {query.paid && quote.status !== 'deposit-paid' ? (
         <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">
@@ -160,8 +166,9 @@ export default async function CustomerQuotePage({
         </p>
         <h3 className="mt-4 text-xl font-semibold">Our deposit policy</h3>
         <p className="mt-1 whitespace-pre-line">{shop.depositPolicyText}</p>
+        <p className="mt-2 text-base">{REFUND_NOTE}</p>
         {canPay ? (
-          <form method="post" action={`/api/q/${encodeURIComponent(token)}/checkout`} className="mt-6">
+          <form method="post" action={`/api/q/${encodeURIComponent(token)}/checkout`} className="mt-6 print:hidden">
             <button
               type="submit"
               className="min-h-14 w-full rounded-lg bg-ember-500 px-6 py-4 text-xl font-semibold text-paper-raised hover:bg-ember-600 focus-visible:outline focus-visible:outline-4 focus-visible:outline-gauge-500"
@@ -175,6 +182,8 @@ export default async function CustomerQuotePage({
           </form>
         ) : null}
       </section>
+
+      {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} /> : null}
 
       <section aria-labelledby="care" className="mt-8 rounded-lg border border-caution-700/40 bg-caution-100 p-5">
         <h2 id="care" className="text-2xl font-semibold">

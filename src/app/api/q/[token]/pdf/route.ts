@@ -1,0 +1,15 @@
+import { getQuoteByToken } from '@/lib/db/queries/quotes';
+import { errorResponse } from '@/lib/http/responses';
+import { pdfResponse } from '../../../quotes/pdf-response';
+
+export const dynamic = 'force-dynamic';
+
+type TokenParams = { params: Promise<{ token: string }> };
+
+/** The customer's PDF of their quote; the private token is the key, and anything else is a plain 404. */
+export async function GET(_request: Request, context: TokenParams) {
+  const { token } = await context.params;
+  const found = await getQuoteByToken(token);
+  if (!found) return errorResponse(404, 'This link does not open a quote.');
+  return pdfResponse(found.quote, found.shop);
+}

@@ -1,0 +1,92 @@
+'use client';
+
+import { useState } from 'react';
+import { formatCents } from '@/components/catalogue/format';
+import { buttonClass } from '@/components/catalogue/ui';
+import { dollarsToCents } from './money-input';
+import type { QuoteRun } from './quote-run';
+
+// A refund is money leaving the shop: the manager types an amount, then confirms it on a second step
+// that says what happens to the job. A full refund asks whether the job is cancelled or the quote
+// reopened for a new payment; nothing is sent until "Confirm refund".
+export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; url: string; run: QuoteRun; busy: boolean }) {
+  const [amount, setAmount] = useState('');
+  const [reason, setReason] = useState('');
+  const [review, setReview] = useState<number | null>(null);
+  const [after, setAfter] = useState<'cancel' | 'reopen'>('cancel');
+  const [problem, setProblem] = useState<string | null>(null);
+  const full = review !== null && review >= leftCents;
+
+  if (review !== null) {
+    return (
+      <div role="alertdialog" aria-labelledby="refund-confirm" className="mt-3 rounded border-2 border-fault-700 bg-fault-100 p-3 text-sm">
+        <p id="refund-confirm" className="font-semibold">
+          Refund {formatCents(review)} to the customer’s card{full ? ' — the whole deposit that is left' : ''}? This cannot be undone.
+        </p>
+        {full ? (
+          <fieldset className="mt-2">
+            <legend className="font-semibold">Then the job…</legend>
+            <label className="mt-1 flex items-center gap-2">
+              <input type="radio" name="after" value="cancel" checked={after === 'cancel'} onChange={() => setAfter('cancel')} />
+              Cancel the job (the quote is closed and leaves the jobs list)
+            </label>
+            <label className="mt-1 flex items-center gap-2">
+              <input type="radio" name="after" value="reopen" checked={after === 'reopen'} onChange={() => setAfter('reopen')} />
+              Reopen the quote (the customer may pay the deposit again)
+            </label>
+          </fieldset>
+        ) : (
+          <p className="mt-1">Part of the deposit stays paid; the job stays booked.</p>
+        )}
+        <p className="mt-1">The customer is e-mailed when the whole deposit has been refunded.</p>
+        <div className="mt-3 flex flex-wrap gap-2">
+          <button
+            type="button"
+            className={buttonClass.danger}
+            disabled={busy}
+            onClick={() =>
+              void run('Not refunded', 'POST', `${url}/refund`, { amountCents: review, ...(reason ? { reason } : {}), ...(full ? { afterFullRefund: after } : {}) }, `Refund of ${formatCents(review)} sent to the payment service.`).then((ok) => {
+                if (ok) {
+                  setAmount('');
+                  setReason('');
+                }
+                setReview(null);
+              })
+            }
+          >
+            Confirm refund
+          </button>
+          <button type="button" className={buttonClass.quiet} onClick={() => setReview(null)}>
+            Go back
+          </button>
+        </div>
+      </div>
+    );
+  }
+  return (
+    <form
+      className="mt-3 flex flex-wrap items-end gap-2"
+      onSubmit={(e) => {
+        e.preventDefault();
+        const cents = dollarsToCents(amount);
+        if (cents === null || cents <= 0) return setProblem('The amount must be dollars and cents above 0.');
+        if (cents > leftCents) return setProblem(`At most ${formatCents(leftCents)} is left to refund.`);
+        setProblem(null);
+        setReview(cents);
+      }}
+    >
+      <label className="text-sm">
+        Refund amount ($, at most {formatCents(leftCents)})
+        <input value={amount} onChange={(e) => setAmount(e.target.value)} inputMode="decimal" className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5" />
+      </label>
+      <label className="text-sm">
+        Reason (optional)
+        <input value={reason} onChange={(e) => setReason(e.target.value)} maxLength={255} className="mt-1 block w-48 rounded border border-steel-300 px-1 py-0.5" />
+      </label>
+      <button type="submit" className={buttonClass.danger} disabled={busy}>
+        Review refund…
+      </button>
+      {problem ? <p className="w-full text-sm text-fault-700" role="alert">{problem}</p> : null}
+    </form>
+  );
+}

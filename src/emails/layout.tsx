@@ -1,0 +1,40 @@
+import { Body, Container, Head, Hr, Html, Preview, Section, Text } from '@react-email/components';
+import type { ReactNode } from 'react';
+import { palette } from '@/lib/palette';
+
+// The shell every customer e-mail shares: the shop's name at the top, its contact details at the foot.
+// React escapes every value, so names and descriptions typed by people never become markup.
+export type MailShop = { name: string; email: string | null; phone: string | null; address: string | null };
+
+const body = { backgroundColor: palette.paper.DEFAULT, fontFamily: 'Helvetica, Arial, sans-serif', color: palette.ink.DEFAULT };
+const card = { backgroundColor: palette.paper.raised, padding: '24px', maxWidth: '560px', margin: '0 auto', borderRadius: '6px' };
+const small = { fontSize: '13px', color: palette.ink.muted, margin: '2px 0' };
+
+export function MailLayout({ shop, preview, children }: { shop: MailShop; preview: string; children: ReactNode }) {
+  return (
+    <Html lang="en">
+      <Head />
+      <Preview>{preview}</Preview>
+      <Body style={body}>
+        <Container style={card}>
+          <Text style={{ fontSize: '14px', fontWeight: 700, margin: '0 0 12px' }}>{shop.name}</Text>
+          {children}
+          <Hr />
+          <Section>
+            <Text style={small}>{shop.name}</Text>
+            {shop.address ? <Text style={small}>{shop.address}</Text> : null}
+            {shop.phone ? <Text style={small}>Phone {shop.phone}</Text> : null}
+            {shop.email ? <Text style={small}>Reply to this e-mail or write to {shop.email}</Text> : null}
+          </Section>
+        </Container>
+      </Body>
+    </Html>
+  );
+}
+
+export const paragraph = { fontSize: '16px', lineHeight: '24px', margin: '0 0 14px' };
+
+export const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
+
+export const longDate = (isoDate: string) =>
+  new Date(`${isoDate.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });

@@ -1,0 +1,107 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import PDFDocument from 'pdfkit';
+import { palette } from '@/lib/palette';
+import { CUSTOMER_CAUTIONS, REFUND_NOTE } from './cautions';
+import { isTaxable, type QuoteLineKind } from './pricing';
+
+// The printable quote as a PDF (pdfkit). Fonts are the app's own Inter files (TrueType copies of the
+// WOFF2 the pages use, in src/app/fonts; pdfkit cannot subset the WOFF2 ones), so nothing is fetched
+// at run time. No costs or margins: the same figures the customer's page shows.
+
+export type QuoteDocument = {
+  number: string;
+  stateWord: string;
+  customerName: string;
+  vehicleLabel: string | null;
+  lines: { kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; discountCents: number; totalCents: number }[];
+  subtotalCents: number;
+  taxRateBp: number;
+  taxCents: number;
+  totalCents: number;
+  depositCents: number;
+  paidCents: number;
+  refundedCents: number;
+  validUntil: string | null;
+  sentAt: string | null;
+  replacedBy: string | null;
+  shop: { name: string; address: string; phone: string; email: string; depositPolicyText: string };
+};
+
+const FONT_DIR = path.join(process.cwd(), 'src', 'app', 'fonts');
+const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
+const longDate = (iso: string) => new Date(`${iso.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+const percent = (bp: number) => `${(bp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} %`;
+
+let fonts: { regular: Buffer; bold: Buffer } | undefined;
+function loadFonts() {
+  fonts ??= { regular: fs.readFileSync(path.join(FONT_DIR, 'inter-latin-400-normal.ttf')), bold: fs.readFileSync(path.join(FONT_DIR, 'inter-latin-700-normal.ttf')) };
+  return fonts;
+}
+
+export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {}): Promise<Buffer> {
+  const { regular, bold } = loadFonts();
+  // `font` replaces pdfkit's default Helvetica, whose metrics file a bundled server may not find.
+  const doc = new PDFDocument({ size: 'LETTER', margin: 54, font: regular as unknown as string, compress: options.compress ?? true, info: { Title: `Quote ${q.number}`, Author: q.shop.name } });
+  doc.registerFont('regular', regular);
+  doc.registerFont('bold', bold);
+  const chunks: Buffer[] = [];
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('data', (c: Buffer) => chunks.push(c));
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
+  const width = doc.page.width - 108;
+  const left = 54;
+
+  doc.font('bold').fontSize(16).text(q.shop.name);
+  doc.font('regular').fontSize(9).fillColor(palette.ink.muted);
+  for (const line of [q.shop.address, q.shop.phone && `Phone ${q.shop.phone}`, q.shop.email].filter(Boolean)) doc.text(String(line));
+  doc.moveDown().fillColor(palette.ink.DEFAULT).font('bold').fontSize(20).text(`Quote ${q.number}`);
+  doc.font('regular').fontSize(10).text(`For ${q.customerName}${q.vehicleLabel ? `, ${q.vehicleLabel}` : ''}`);
+  doc.text(`Status: ${q.stateWord}`);
+  if (q.sentAt) doc.text(`Sent ${longDate(q.sentAt)}`);
+  if (q.validUntil) doc.text(`Valid until ${longDate(q.validUntil)} (prices and parts after that day need a fresh quote)`);
+  if (q.replacedBy) doc.font('bold').text(`Replaced by a newer quote: ${q.replacedBy}`).font('regular');
+  doc.moveDown();
+
+  // The lines: description on the left, the line total on the right.
+  const amountX = left + width - 100;
+  doc.font('bold').fontSize(10).text('What is included', left, doc.y, { width: width - 110 });
+  doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).stroke(palette.steel[500]);
+  doc.moveDown(0.5);
+  for (const line of q.lines) {
+    const y = doc.y;
+    const detail = `${line.kind === 'labor' ? `${line.quantity} h of labour at ${money(line.unitPriceCents)}` : `${line.quantity} × ${money(line.unitPriceCents)}`}${line.discountCents ? `, ${money(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
+    doc.font('regular').fontSize(10).text(line.description, left, y, { width: width - 110 });
+    doc.fontSize(8).fillColor(palette.ink.muted).text(detail, { width: width - 110 }).fillColor(palette.ink.DEFAULT);
+    const after = doc.y;
+    doc.fontSize(10).text(money(line.totalCents), amountX, y, { width: 100, align: 'right' });
+    doc.y = Math.max(after, doc.y) + 4;
+  }
+  doc.moveTo(left, doc.y).lineTo(left + width, doc.y).stroke(palette.steel[500]);
+  doc.moveDown(0.5);
+  const row = (label: string, cents: number, strong = false) => {
+    const y = doc.y;
+    doc.font(strong ? 'bold' : 'regular').fontSize(strong ? 12 : 10).text(label, left, y, { width: width - 110 });
+    doc.text(money(cents), amountX, y, { width: 100, align: 'right' });
+    doc.x = left;
+  };
+  row('Before tax', q.subtotalCents);
+  row(`Sales tax (${percent(q.taxRateBp)} on parts and goods)`, q.taxCents);
+  row('Total', q.totalCents, true);
+  row('Deposit to book the job', q.depositCents, true);
+  row('Balance when the job is done', Math.max(0, q.totalCents - q.depositCents));
+  if (q.paidCents) row('Deposit paid', q.paidCents);
+  if (q.refundedCents) row('Refunded', q.refundedCents);
+
+  doc.moveDown().font('bold').fontSize(12).text('Deposit and refund policy', left);
+  doc.font('regular').fontSize(9).text(q.shop.depositPolicyText, { width });
+  doc.moveDown(0.3).text(REFUND_NOTE, { width });
+  doc.moveDown().font('bold').fontSize(12).text('Good to know before a cam swap');
+  doc.font('regular').fontSize(9);
+  for (const caution of CUSTOMER_CAUTIONS) doc.text(`• ${caution}`, { width }).moveDown(0.2);
+  doc.moveDown().fontSize(8).fillColor(palette.ink.muted).text('Predicted gains are indicative; the dyno has the last word.', { width });
+  doc.end();
+  return done;
+}
