@@ -1,0 +1,69 @@
+import type { Browser, BrowserContext } from 'playwright-core';
+import { signedInAgent, signIn } from '../support/auth';
+import { launchBrowser } from '../support/browser';
+import { waitForMailsTo } from '../support/mail';
+import { makeSentQuote } from '../support/quote-fixtures';
+import { readRuntime } from '../support/runtime';
+
+// Issue 12's browser walk: the customer prints the quote (only the quote on paper), accepts and pays,
+// gets the receipt e-mail; a manager refunds through the confirmation step, choosing to cancel the job,
+// and the customer's page changes.
+const { appUrl } = readRuntime();
+
+describe('a quote from payment to refund in the browser', () => {
+  let browser: Browser;
+  let staff: BrowserContext;
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    const [name, value] = (await signIn('manager')).split('=');
+    staff = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    await staff.addCookies([{ name, value, url: appUrl }]);
+  });
+  afterAll(async () => {
+    await staff?.close();
+    await browser?.close();
+  });
+
+  it('prints, pays, e-mails the receipt, and shows a confirmed refund on the customer page', async () => {
+    const quote = await makeSentQuote(await signedInAgent('counter'), 'Browser money');
+    const link = `${appUrl}/q/${quote.token}`;
+    const customer = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    customer.setDefaultTimeout(10_000);
+    await customer.goto(link);
+
+    // On paper: the quote only — no site header (with its sign-in link), no footer, no pay button, no PDF link.
+    const header = customer.locator('body > header');
+    await expect(header.isVisible()).resolves.toBe(true);
+    await customer.emulateMedia({ media: 'print' });
+    await expect(header.isVisible()).resolves.toBe(false);
+    await expect(customer.locator('body > footer').isVisible()).resolves.toBe(false);
+    await expect(customer.getByRole('button', { name: 'Accept and pay the deposit' }).isVisible()).resolves.toBe(false);
+    await expect(customer.getByRole('link', { name: 'Download as PDF' }).isVisible()).resolves.toBe(false);
+    await expect(customer.getByRole('heading', { level: 1 }).isVisible()).resolves.toBe(true);
+    await expect(customer.getByText('Local codes and licensed practice come first').isVisible()).resolves.toBe(true);
+    await customer.emulateMedia({ media: 'screen' });
+
+    await Promise.all([customer.waitForURL(/\/pay\/cs_/), customer.getByRole('button', { name: 'Accept and pay the deposit' }).click()]);
+    await Promise.all([customer.waitForURL((url) => url.href.startsWith(`${link}?paid=1`)), customer.getByRole('button', { name: /Pay/ }).first().click()]);
+    const receipt = (await waitForMailsTo(quote.customerEmail, 2)).find((m) => m.subject.startsWith('Deposit received'));
+    expect(receipt?.text).toContain(quote.number);
+
+    const page = await staff.newPage();
+    page.setDefaultTimeout(10_000);
+    await page.goto(`${appUrl}/quotes/${quote.id}`);
+    await page.getByLabel(/Refund amount/).fill((quote.depositCents / 100).toFixed(2));
+    await page.getByRole('button', { name: 'Review refund…' }).click();
+    const dialog = page.getByRole('alertdialog');
+    await expect(dialog.textContent()).resolves.toMatch(/cannot be undone/);
+    await dialog.getByLabel(/Cancel the job/).check();
+    await dialog.getByRole('button', { name: 'Confirm refund' }).click();
+    await page.getByText(/Refund of \$[\d,.]+ sent to the payment service/).waitFor();
+    await expect(page.getByRole('heading', { name: 'State: Cancelled' }).isVisible()).resolves.toBe(true);
+
+    await customer.goto(link);
+    await expect(customer.getByRole('heading', { name: /Status: Deposit refunded — job cancelled/ }).isVisible()).resolves.toBe(true);
+    await page.close();
+    await customer.close();
+  });
+});
