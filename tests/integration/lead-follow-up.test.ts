@@ -1,12 +1,17 @@
 import crypto from 'node:crypto';
 import { Op } from 'sequelize';
+import request from 'supertest';
 import { AuditEntry, Build, Customer, Lead, LeadNote } from '@/lib/db/models';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { waitForMailsTo } from '../support/mail';
 import { truckProfile } from '../support/quote-fixtures';
+import { clearRateLimits } from '../support/rate-limits';
+import { readRuntime } from '../support/runtime';
 
-// Leads that are followed up (issue 9, item 4): a note log per lead, and an interview started from a lead
-// links the lead to the interview's customer and marks it contacted, in the build's own transaction.
+// Leads that are followed up (issue 9, item 4): the customer gets their result link by e-mail, a note log
+// per lead, and an interview started from a lead links the lead to the interview's customer and marks it
+// contacted, in the build's own transaction.
 // Leads are made straight in the database (the public form's flood guard counts per address, and other
 // files post leads too); everything made here is removed afterwards.
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
@@ -87,5 +92,29 @@ describe('an interview started from a lead', () => {
     expect(missing.status).toBe(422);
     expect(missing.body.errors).toEqual([expect.objectContaining({ field: 'leadId' })]);
     expect(await Build.count({ where: { vehicleLabel: 'Fixture truck (lead-missing)' } })).toBe(0);
+  });
+});
+
+describe("the customer's copy", () => {
+  it('e-mails the customer their private result link and says the shop will call', async () => {
+    const { appUrl } = readRuntime();
+    await clearRateLimits('lead-'); // other files post leads from this address too
+    const email = `follow-up-copy-${crypto.randomBytes(4).toString('hex')}@example.com`;
+    const answers = { engine: '5.3', use: 'towing', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000', name: 'Fixture <Copy>', email, consent: true };
+    const res = await request(appUrl).post('/api/leads').send(answers);
+    expect(res.status).toBe(201);
+    leads.push(res.body.id);
+    expect(res.body.customerNotified).toBe(true);
+
+    const [mail] = await waitForMailsTo(email);
+    expect(mail.subject).toMatch(/your cam shortlist and what happens next$/);
+    expect(mail.text).toContain(`${appUrl}/ask/result/${res.body.token}`);
+    expect(mail.text).toMatch(/will contact you to check your actual engine/);
+    expect(mail.text).toContain('an estimate from your answers, not a quote');
+    expect(mail.html).toContain('Fixture &lt;Copy&gt;');
+    expect(mail.html).not.toContain('<Copy>');
+    const page = await request(appUrl).get(`/ask/result/${res.body.token}`);
+    expect(page.status).toBe(200);
+    expect(page.text).toContain('The shop will contact you');
   });
 });

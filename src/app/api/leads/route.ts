@@ -9,6 +9,7 @@ import { createLead, emissionsCertifiedIds, listLeads } from '@/lib/db/queries/l
 import { getShopSettings } from '@/lib/db/queries/settings';
 import { appBaseUrl } from '@/lib/env';
 import { errorResponse } from '@/lib/http/responses';
+import { customerResultEmail } from '@/lib/leads/customer-email';
 import { newLeadEmail } from '@/lib/leads/email';
 import { buildProfileFromAnswers, engineLiters } from '@/lib/leads/profile';
 import { shortlistFrom } from '@/lib/leads/shortlist';
@@ -82,8 +83,20 @@ export async function POST(request: Request) {
     }
   }
 
+  // The customer's own copy of the private link, also after the commit: a refused e-mail loses nothing.
+  let customerNotified = false;
+  if (answers.email) {
+    try {
+      const shop = settings ? { name: settings.name, phone: settings.phone, email: settings.email } : null;
+      await sendMail({ to: answers.email, ...customerResultEmail({ name: answers.name, resultUrl: `${appBaseUrl()}/ask/result/${token}`, shop }), replyTo: settings?.email || undefined });
+      customerNotified = true;
+    } catch (error) {
+      console.error(`lead ${lead.id}: the customer's copy was not sent:`, error instanceof Error ? error.message : error);
+    }
+  }
+
   return NextResponse.json(
-    { id: lead.id, token, resultUrl: `/ask/result/${token}`, shortlist, shopNotified },
+    { id: lead.id, token, resultUrl: `/ask/result/${token}`, shortlist, shopNotified, customerNotified },
     { status: 201, headers: { 'Cache-Control': 'no-store' } },
   );
 }
