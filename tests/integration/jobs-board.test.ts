@@ -182,6 +182,30 @@ describe("the technician's sign-off", () => {
   }, 60_000);
 });
 
+describe('a job whose quote is closed at the counter', () => {
+  it('stays on the board until the car is collected', async () => {
+    const job = await paid('Board closed quote');
+    let v = (await book(job.id, 1)).version;
+    v = (await move(job.id, v, 'in-shop')).body.version;
+    const quote = (await counter.get(`/api/quotes/${job.id}`)).body as { version: number };
+    const closed = await counter.post(`/api/quotes/${job.id}/transition`).send({ to: 'closed', version: quote.version });
+    expect(closed.status).toBe(200);
+    const active = async () => ((await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as { id: number }[]).map((j) => j.id);
+    expect(await active()).toContain(job.id);
+    expect((await tech.get(`/api/jobs/${job.id}`)).body.state).toBe('in-shop');
+    const sheet = await tech.get(`/jobs/${job.id}`);
+    expect(sheet.status).toBe(200);
+    expect(sheet.text).toContain('Balance paid, closed');
+    v = (await move(job.id, v, 'on-dyno')).body.version;
+    expect((await tech.post(`/api/jobs/${job.id}/sign-off`).send(GOOD_SIGN_OFF)).status).toBe(201);
+    v = (await move(job.id, v, 'ready')).body.version;
+    expect((await move(job.id, v, 'collected')).status).toBe(200);
+    expect(await active()).not.toContain(job.id);
+    const history = (await tech.get('/api/jobs').query({ view: 'collected', pageSize: 100 })).body.items as { id: number }[];
+    expect(history.map((j) => j.id)).toContain(job.id);
+  }, 60_000);
+});
+
 describe('the board order', () => {
   it('puts overdue first, then today, then not booked, then the coming days; pages are stable', async () => {
     const [later, today, overdue, waiting] = [await paid('Board later'), await paid('Board today'), await paid('Board overdue'), await paid('Board waiting')];

@@ -14,6 +14,20 @@ export type SignOffReadings = {
 };
 export type SignOffWarning = { field: keyof SignOffReadings; message: string };
 
+/** Just the readings, from a stored sign-off or a request (the deactivation answer already settled). */
+export function readingsOf(r: SignOffReadings): SignOffReadings {
+  return {
+    ptvIntakeIn: r.ptvIntakeIn,
+    ptvExhaustIn: r.ptvExhaustIn,
+    springInstalledHeightIn: r.springInstalledHeightIn,
+    springSeatPressureLb: r.springSeatPressureLb,
+    coilBindMarginIn: r.coilBindMarginIn,
+    pushrodLengthIn: r.pushrodLengthIn,
+    lifterPreloadIn: r.lifterPreloadIn,
+    deactivationDeleteDone: r.deactivationDeleteDone,
+  };
+}
+
 export const LIMITS_NOTE =
   'Limits are common practice from memory, not a published source. The cam and spring maker’s figures come first; local codes and licensed practice apply.';
 

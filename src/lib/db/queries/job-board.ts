@@ -1,22 +1,15 @@
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
-import { signOffWarnings, type SignOffWarning } from '@/lib/jobs/sign-off-limits';
+import { readingsOf, signOffWarnings, type SignOffReadings, type SignOffWarning } from '@/lib/jobs/sign-off-limits';
 import { nextStates, type BoardState, type JobState } from '@/lib/jobs/states';
 import type { JobListQuery } from '@/lib/schemas/job';
 import { Build, Cam, Customer, db, Job, JobSignOff, Quote, User } from '../models';
 
 // The job board: every deposit-paid quote is a job. Its booking (date, bay, technician, state) lives in
-// `jobs`; a paid quote with no row there is "not booked yet". Never carries prices: the workshop needs
+// `jobs`; a paid quote with no row there is "not booked yet". A quote closed at the counter (balance paid)
+// stays a job until the car is collected, so closing never hides a car that is still in the bay. Never carries prices: the workshop needs
 // the work, not the money. Jobs are addressed by their quote's id, the same id the job sheet uses.
 
-export type SignOffView = {
-  ptvIntakeIn: number;
-  ptvExhaustIn: number;
-  springInstalledHeightIn: number;
-  springSeatPressureLb: number;
-  coilBindMarginIn: number;
-  pushrodLengthIn: number;
-  lifterPreloadIn: number;
-  deactivationDeleteDone: boolean | null;
+export type SignOffView = SignOffReadings & {
   tuneFile: string;
   notes: string | null;
   signedBy: string | null;
@@ -43,6 +36,9 @@ export type BoardJob = {
   signOff: SignOffView | null;
 };
 
+/** Quote statuses that are jobs: paid, or paid and closed (see src/lib/quotes/lifecycle.ts). */
+export const JOB_QUOTE_STATES = ['deposit-paid', 'closed'] as const;
+
 type QuoteRow = Quote & { customer?: Customer; build?: Build | null; cam?: Cam | null; job?: (Job & { technician?: User | null }) | null };
 type SignOffRow = JobSignOff & { signedBy?: User | null };
 
@@ -60,16 +56,7 @@ export function dueOf(state: BoardState, bookedFor: string | null, today: string
 }
 
 function signOffView(row: SignOffRow): SignOffView {
-  const readings = {
-    ptvIntakeIn: row.ptvIntakeIn,
-    ptvExhaustIn: row.ptvExhaustIn,
-    springInstalledHeightIn: row.springInstalledHeightIn,
-    springSeatPressureLb: row.springSeatPressureLb,
-    coilBindMarginIn: row.coilBindMarginIn,
-    pushrodLengthIn: row.pushrodLengthIn,
-    lifterPreloadIn: row.lifterPreloadIn,
-    deactivationDeleteDone: row.deactivationDeleteDone,
-  };
+  const readings = readingsOf(row);
   // Warnings are worked out on every read, so they always follow the limits in sign-off-limits.ts.
   return { ...readings, tuneFile: row.tuneFile, notes: row.notes, signedBy: row.signedBy?.name ?? null, signedAt: new Date(row.createdAt).toISOString(), warnings: signOffWarnings(readings) };
 }
@@ -122,7 +109,7 @@ async function latestSignOffs(jobIds: number[], transaction?: Transaction): Prom
 /** One job by its quote id; null when the quote is not a deposit-paid job. */
 export async function getBoardJob(quoteId: number, transaction?: Transaction): Promise<BoardJob | null> {
   db();
-  const q = (await Quote.findOne({ where: { id: quoteId, status: 'deposit-paid' }, include: includes(), transaction })) as QuoteRow | null;
+  const q = (await Quote.findOne({ where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATES] } }, include: includes(), transaction })) as QuoteRow | null;
   if (!q) return null;
   const signOffs = q.job ? await latestSignOffs([q.job.id], transaction) : new Map();
   return viewOf(q, shopToday(), (q.job && signOffs.get(q.job.id)) ?? null);
@@ -135,8 +122,9 @@ export async function getBoardJob(quoteId: number, transaction?: Transaction): P
 export async function listBoard(query: JobListQuery): Promise<{ items: BoardJob[]; total: number; page: number; pageSize: number; today: string }> {
   const sequelize = db();
   const today = shopToday();
-  const where: WhereOptions[] = [{ status: 'deposit-paid' }];
-  if (query.view === 'active') where.push({ [Op.or]: [{ '$job.id$': null }, { '$job.state$': { [Op.ne]: 'collected' } }] });
+  const where: WhereOptions[] = [{ status: { [Op.in]: [...JOB_QUOTE_STATES] } }];
+  // Active: paid and not booked yet, or booked and not collected (a closed quote never booked is history).
+  if (query.view === 'active') where.push({ [Op.or]: [{ status: 'deposit-paid', '$job.id$': null }, { '$job.state$': { [Op.ne]: 'collected' } }] });
   if (query.view === 'collected') where.push({ '$job.state$': 'collected' });
   if (query.from) where.push({ '$job.booked_for$': { [Op.gte]: query.from } });
   if (query.to) where.push({ '$job.booked_for$': { [Op.lte]: query.to } });

@@ -1,18 +1,18 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
-import { signOffWarnings } from '@/lib/jobs/sign-off-limits';
+import { readingsOf, signOffWarnings } from '@/lib/jobs/sign-off-limits';
 import { canMove, illegalMoveMessage, SIGN_OFF_STATES, STATE_WORDS, type BoardState, type JobState } from '@/lib/jobs/states';
 import type { JobPatch, SignOffInput } from '@/lib/schemas/job';
 import { Build, Job, JobSignOff, Quote } from '../models';
-import { deactivationActiveOf, getBoardJob, listAssignableStaff, type BoardJob } from './job-board';
+import { deactivationActiveOf, getBoardJob, JOB_QUOTE_STATES, listAssignableStaff, type BoardJob } from './job-board';
 
 // Writes to the board. Each locks the quote row first (then the job row), so two people booking the same
 // freshly paid job queue instead of racing to create two bookings, and every write carries its audit row.
 
 async function lockPaidJob(quoteId: number, t: Transaction): Promise<{ quote: Quote; job: Job | null }> {
-  const quote = await Quote.findOne({ where: { id: quoteId, status: 'deposit-paid' }, transaction: t, lock: t.LOCK.UPDATE });
+  const quote = await Quote.findOne({ where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATES] } }, transaction: t, lock: t.LOCK.UPDATE });
   if (!quote) throw notFound();
   const job = await Job.findOne({ where: { quoteId }, transaction: t, lock: t.LOCK.UPDATE });
   return { quote, job };
@@ -81,16 +81,7 @@ export async function recordSignOff(quoteId: number, input: SignOffInput, user: 
     if (asked && input.deactivationDeleteDone === undefined) {
       throw invalid([{ field: 'deactivationDeleteDone', message: 'deactivationDeleteDone is required: this build has active cylinder deactivation' }]);
     }
-    const readings = {
-      ptvIntakeIn: input.ptvIntakeIn,
-      ptvExhaustIn: input.ptvExhaustIn,
-      springInstalledHeightIn: input.springInstalledHeightIn,
-      springSeatPressureLb: input.springSeatPressureLb,
-      coilBindMarginIn: input.coilBindMarginIn,
-      pushrodLengthIn: input.pushrodLengthIn,
-      lifterPreloadIn: input.lifterPreloadIn,
-      deactivationDeleteDone: asked ? input.deactivationDeleteDone! : null,
-    };
+    const readings = readingsOf({ ...input, deactivationDeleteDone: asked ? input.deactivationDeleteDone! : null });
     const row = await JobSignOff.create({ jobId: job.id, ...readings, tuneFile: input.tuneFile, notes: input.notes ?? null, signedByUserId: user.id }, { transaction: t });
     await recordAudit({ user, action: 'job.signed-off', entityType: 'job', entityId: job.id, after: { signOffId: row.id, ...readings, tuneFile: input.tuneFile, warnings: signOffWarnings(readings).map((w) => w.field) }, ip }, t);
     return { record: await current(quoteId, t) };

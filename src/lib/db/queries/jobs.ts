@@ -51,7 +51,8 @@ export async function listJobs(): Promise<JobSummary[]> {
 export async function getJobSheet(quoteId: number): Promise<JobSheet | null> {
   db();
   const quote = (await Quote.findOne({
-    where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATUSES] } },
+    // A closed quote (balance paid) keeps its sheet: the board shows the job until the car is collected.
+    where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATUSES, 'closed'] } },
     include: [...refs(), { model: QuoteLine, as: 'lines', attributes: ['id', 'kind', 'description', 'quantity', 'sortOrder'] }],
     order: [[{ model: QuoteLine, as: 'lines' }, 'sortOrder', 'ASC']],
   })) as QuoteWithRefs | null;

@@ -13,6 +13,7 @@ import { getBoardJob, listAssignableStaff } from '@/lib/db/queries/job-board';
 import { getJobSheet } from '@/lib/db/queries/jobs';
 import { words } from '@/lib/jobs/build-words';
 import { SIGN_OFF_STATES, type JobState } from '@/lib/jobs/states';
+import { stateWord } from '@/lib/quotes/lifecycle';
 
 export const metadata: Metadata = { title: 'Job' };
 
@@ -46,7 +47,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
     <div className="flex flex-col gap-6">
       <PageHeader
         title={`${job.number} · ${job.vehicleLabel}`}
-        lead={<>{job.customerName} · <StateTag tone={job.status === 'deposit-paid' ? 'ok' : 'muted'}>{job.status === 'deposit-paid' ? 'Deposit paid' : 'Accepted'}</StateTag></>}
+        lead={<>{job.customerName} · <StateTag tone={job.status === 'accepted' ? 'muted' : 'ok'}>{stateWord(job.status)}</StateTag></>}
         back={{ href: '/jobs', label: 'Jobs' }}
         actions={<PrintButton />}
       />
