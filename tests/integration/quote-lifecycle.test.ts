@@ -8,7 +8,7 @@ import { readRuntime } from '../support/runtime';
 
 // The quote lifecycle (issue 12, item 2) over HTTP against the real build, MariaDB and both fakes.
 // Every test makes its own quotes; dates are relative to the day the test runs.
-const { appUrl } = readRuntime();
+const { appUrl, paymentsUrl } = readRuntime();
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 let sequelize: Sequelize;
@@ -193,6 +193,23 @@ describe('revising a sent quote', () => {
     expect(third.body.number).toBe(`${old.number}-R3`);
     const fresh = await makeDraftQuote(counter, 'After revisions');
     expect(fresh.number).toMatch(/^Q-\d{4}-\d{4}$/);
+  });
+
+  it('gives back money paid after the revision on a checkout opened before it, and never counts it', async () => {
+    const old = await makeSentQuote(counter, 'Paid after revise');
+    const started = await request(appUrl).post(`/api/q/${old.token}/checkout`).set('Accept', 'application/json');
+    expect(started.status).toBe(200);
+    expect((await counter.post(`/api/quotes/${old.id}/revise`).send({ version: old.version })).status).toBe(201);
+    await request(paymentsUrl).post(`/_test/sessions/${new URL(started.body.url).pathname.split('/').pop()}/complete`).expect(200);
+    const deadline = Date.now() + 15_000;
+    let after = (await manager.get(`/api/quotes/${old.id}`)).body;
+    while (after.payments[0]?.status !== 'refunded' && Date.now() < deadline) {
+      await new Promise((r) => setTimeout(r, 150));
+      after = (await manager.get(`/api/quotes/${old.id}`)).body;
+    }
+    expect(after.status).toBe('replaced');
+    expect(after.paidCents - after.refundedCents).toBe(0); // taken and given back: nothing held
+    expect(after.payments[0]).toMatchObject({ status: 'refunded', refundedCents: old.depositCents });
   });
 
   it('refuses to revise a draft or a paid quote (409 with the state)', async () => {

@@ -6,7 +6,8 @@ import { useState } from 'react';
 import { sendJson } from '@/components/catalogue/api';
 import { buttonClass } from '@/components/catalogue/ui';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
-import { canRevise, staffMoves, stateWord, type QuoteStatus } from '@/lib/quotes/lifecycle';
+import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
+import { canRevise, isOpen, staffMoves, stateWord, type QuoteStatus } from '@/lib/quotes/lifecycle';
 import type { QuoteRun } from './quote-run';
 
 // Where the quote stands and what staff may do next: only the moves the lifecycle allows from here are
@@ -48,6 +49,11 @@ export function LifecyclePanel({ quote, url, run, busy, canWrite }: { quote: Quo
         {quote.validUntil ? `Valid until ${quote.validUntil}. ` : 'Valid-until is set when the quote is sent (30 days unless you choose). '}
         {quote.closedAt ? `Closed ${quote.closedAt.slice(0, 10)}.` : ''}
       </p>
+      {isOpen(quote.status) && isPastValidUntil(quote.validUntil) ? (
+        <p role="status" className="mt-1 font-semibold text-caution-700">
+          Past its valid-until day: the customer can no longer accept or pay it. Move the date, revise it, or mark it expired.
+        </p>
+      ) : null}
       <div className="mt-2 flex flex-wrap gap-2">
         {moves.map((to) =>
           confirming === to ? null : (

@@ -92,7 +92,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         }
       />
       {notice ? <Banner tone={notice.tone} title={notice.title}>{notice.detail}</Banner> : null}
-      <LifecyclePanel quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
+      <LifecyclePanel key={quote.version} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
       {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft; revise a sent quote to change them.</p> : null}
 
       <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">

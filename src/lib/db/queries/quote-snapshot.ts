@@ -17,8 +17,12 @@ export async function takeSnapshot(buildId: number | null, camId: number | null)
   let advice: Record<string, unknown> | null = null;
   const parsed = BuildProfileSchema.safeParse(profile);
   if (parsed.success && camId !== null) {
-    const ranked = await rankForShop(parsed.data, { camIds: [camId], includeCurves: false });
-    const ranking = ranked.ok ? ranked.result.rankings.find((r) => String(r.camId) === String(camId)) : undefined;
+    // The advice is what the customer is shown beside the price; without it the profile is still frozen.
+    const ranked = await rankForShop(parsed.data, { camIds: [camId], includeCurves: false }).catch((error: unknown) => {
+      console.error(`[quotes] the advisor could not rank cam ${camId} for build ${buildId}; sending without its advice`, error);
+      return null;
+    });
+    const ranking = ranked?.ok ? ranked.result.rankings.find((r) => String(r.camId) === String(camId)) : undefined;
     if (ranking) {
       const { curve: _curve, ...rest } = ranking as typeof ranking & { curve?: unknown };
       void _curve;
