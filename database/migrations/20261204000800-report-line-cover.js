@@ -11,6 +11,10 @@ module.exports = {
   },
 
   async down(q) {
+    // InnoDB drops the index it made for the quote_id foreign key once this one can serve the key, and
+    // then refuses to drop this one: give the key its own index back first (unless it is still there).
+    const [rows] = await q.sequelize.query("SHOW INDEX FROM quote_lines WHERE Seq_in_index = 1 AND Column_name = 'quote_id'");
+    if (!rows.some((r) => r.Key_name !== 'quote_lines_report_cover')) await q.addIndex('quote_lines', ['quote_id'], { name: 'quote_id' });
     await q.removeIndex('quote_lines', 'quote_lines_report_cover');
   },
 };

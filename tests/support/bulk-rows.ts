@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { seededRandom } from '@/lib/seeded-random';
 
 // Enough invented rows that MariaDB's optimizer plans as it would for a busy shop: with the demo's
 // three quotes a full scan is the cheapest plan and no EXPLAIN could tell a missing index. Every row
@@ -12,18 +13,6 @@ const LAST = ['Quillfeather', 'Brackenridge', 'Ostrowind', 'Tallowmere', 'Dunfal
 const VEHICLES = ['crew-cab pickup', 'long-bed work truck', 'two-door coupe', 'wagon', 'club-cab pickup', 'sedan'];
 const STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'declined', 'expired', 'cancelled'] as const;
 const LEAD_STATUSES = ['new', 'contacted', 'quoted', 'closed'] as const;
-
-/** A fixed-seed generator, so a failing plan can be reproduced with the same rows. */
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
-  };
-}
 
 const pad = (n: number) => String(n).padStart(2, '0');
 const sqlTime = (ms: number) => {
@@ -59,7 +48,7 @@ export async function removeBulkRows(sequelize: Sequelize) {
 /** Customers, builds, quotes over three years with cam and part lines, deposits, leads; then fresh statistics. */
 export async function insertBulkRows(sequelize: Sequelize, now = Date.now()) {
   await removeBulkRows(sequelize);
-  const rnd = seeded(11);
+  const rnd = seededRandom(11);
   const pick = <T>(list: readonly T[]) => list[Math.floor(rnd() * list.length)];
   const span = BULK.years * 365 * 86_400_000;
   const when = () => now - Math.floor(rnd() * span);

@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { seededRandom } from '../../lib/seeded-random';
 
 // Invented rows for the scale database: names from made-up syllables, dates over three years, every
 // state a quote or lead can be in. Build profiles are the demo builds' own (they pass the schema);
@@ -17,21 +18,11 @@ const QUOTE_STATES = ['draft', 'sent', 'sent', 'accepted', 'deposit-paid', 'decl
 const LEAD_STATES = ['new', 'contacted', 'quoted', 'closed'] as const;
 const DAY = 86_400_000;
 
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = Math.imul(a ^ (a >>> 15), a | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
-  };
-}
-
 const sqlTime = (ms: number) => new Date(ms).toISOString().slice(0, 19).replace('T', ' ');
 const cap = (s: string) => s[0].toUpperCase() + s.slice(1);
 
 export class ScaleWriter {
-  private rnd = seeded(2026);
+  private rnd = seededRandom(2026);
   constructor(private db: Sequelize, private now = Date.now()) {}
 
   private pick<T>(list: readonly T[]): T {
