@@ -126,4 +126,11 @@ describe('body size limits', () => {
     expect(written.status).toBe(413);
     expect(written.bytes).toBeLessThan(16 * 1024 * 1024);
   });
+
+  it('refuses a webhook body over 1 MB with 413 before checking its signature', async () => {
+    const res = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', 't=1,v1=00').set('content-type', 'application/json').send(JSON.stringify({ pad: 'x'.repeat(2 * 1024 * 1024) }));
+    expect(res.status).toBe(413);
+    const small = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', 't=1,v1=00').set('content-type', 'application/json').send('{}');
+    expect(small.status).toBe(400);
+  });
 });

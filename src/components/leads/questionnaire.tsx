@@ -182,7 +182,8 @@ export function Questionnaire() {
           <Field id="name" label="Your name" value={answers.name ?? ''} error={errors.name} onChange={(v) => set('name', v)} autoComplete="name" maxLength={LEAD_LIMITS.nameMaxLength} />
           <Field id="email" label="E-mail" type="email" inputMode="email" value={answers.email ?? ''} error={errors.email} onChange={(v) => set('email', v)} autoComplete="email" maxLength={LEAD_LIMITS.emailMaxLength} />
           <Field id="phone" label="Phone" type="tel" inputMode="tel" value={answers.phone ?? ''} error={errors.phone} onChange={(v) => set('phone', v)} autoComplete="tel" maxLength={LEAD_LIMITS.phoneMaxLength} />
-          <div aria-hidden="true" className="absolute -left-[9999px] h-px w-px overflow-hidden">
+          {/* Not shown, not focusable, not filled by autofill; a robot reading the markup fills it. */}
+          <div hidden>
             <label htmlFor="website">Leave this empty</label>
             <input id="website" name="website" type="text" tabIndex={-1} autoComplete="off" defaultValue="" />
           </div>

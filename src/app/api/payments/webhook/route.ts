@@ -1,10 +1,13 @@
 import { NextResponse } from 'next/server';
 import type Stripe from 'stripe';
 import { recordChargeRefunded, recordCheckoutCompleted } from '@/lib/db/queries/deposits';
+import { BodyTooLarge, readLimitedBytes } from '@/lib/http/body-limit';
 import { errorResponse } from '@/lib/http/responses';
 import { payments, webhookSecret } from '@/lib/payments';
 
 export const dynamic = 'force-dynamic';
+
+const WEBHOOK_BODY_LIMIT_BYTES = 1024 * 1024;
 
 /**
  * The payment provider's events. The signature is checked over the raw body, exactly as sent; anything
@@ -13,9 +16,16 @@ export const dynamic = 'force-dynamic';
  * Anything that could not be finished now answers 503, so the provider delivers the event again.
  */
 export async function POST(request: Request) {
-  const raw = await request.text();
   const signature = request.headers.get('stripe-signature');
   if (!signature) return errorResponse(400, 'The Stripe-Signature header is missing.');
+  // The provider's events are a few kilobytes; anything near the limit is not one of them.
+  let raw: string;
+  try {
+    raw = new TextDecoder().decode(await readLimitedBytes(request, WEBHOOK_BODY_LIMIT_BYTES));
+  } catch (error) {
+    if (error instanceof BodyTooLarge) return errorResponse(413, 'A webhook body is at most 1 MB.');
+    return errorResponse(400, 'The webhook body could not be read.');
+  }
   let event: Stripe.Event;
   try {
     event = payments().webhooks.constructEvent(raw, signature, webhookSecret());
