@@ -223,6 +223,17 @@ describe('sign-in throttling (rate-limiter-flexible counters in MariaDB)', () =>
     await request(appUrl).post('/api/auth/sign-in').set('Cookie', otherDevice.replace(/^lobewise_device_[^=]+/, device.split('=')[0])).send({ email: person.email, password: person.password }).expect(429);
   });
 
+  it('lifts the pause once the owner sets a new password from an e-mailed link', async () => {
+    const person = await createThrowawayUser('counter');
+    for (let i = 0; i < 10; i += 1) await attempt(person.email, `guess-${i}`).expect(401);
+    await attempt(person.email, person.password).expect(429);
+    await request(appUrl).post('/api/auth/forgot-password').send({ email: person.email }).expect(202);
+    const link = (await waitForMailsTo(person.email, 2)).map((m) => /\/reset-password\?token=([A-Za-z0-9_-]{43})/.exec(m.text)).find(Boolean)!;
+    const fresh = `a-fresh-password-${crypto.randomBytes(4).toString('hex')}`;
+    await request(appUrl).post('/api/auth/reset-password').send({ token: link[1], password: fresh }).expect(200);
+    await attempt(person.email, fresh).expect(200);
+  });
+
   it('does not lock a colleague out because ten colleagues at the same shop address mistyped', async () => {
     // One shop, one public address: no forwarded header, every attempt from the same socket address.
     const fromTheShop = (email: string, password: string) => request(appUrl).post('/api/auth/sign-in').send({ email, password });

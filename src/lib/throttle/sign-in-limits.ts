@@ -94,3 +94,13 @@ async function reserveUnknownDevice(email: string, ip: string): Promise<SignInRe
 export function reserveSignInAttempt(input: { email: string; ip: string; knownDeviceId: string | null }): Promise<SignInReservation> {
   return input.knownDeviceId ? reserveKnownDevice(input.knownDeviceId) : reserveUnknownDevice(input.email, input.ip);
 }
+
+/**
+ * A password set from an e-mailed link proves the owner: the account's failures and pauses are
+ * forgotten, so "reset your password" (the 429's advice) really lets them in from any browser.
+ */
+export async function forgetAccountFailures(email: string): Promise<void> {
+  const { account, pauses } = signInLimiters();
+  const key = accountKey(email);
+  await Promise.all([account.delete(key), pauses.delete(key)]);
+}

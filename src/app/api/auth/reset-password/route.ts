@@ -7,6 +7,7 @@ import { db } from '@/lib/db/models';
 import { findTokenByHash, lockTokenByHash, spendUserTokens, type PasswordTokenRow } from '@/lib/db/queries/password-tokens';
 import { revokeUserSessions } from '@/lib/db/queries/staff-sessions';
 import { findUserById, setPasswordHash } from '@/lib/db/queries/users';
+import { forgetAccountFailures } from '@/lib/throttle/sign-in-limits';
 import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
 import { resetPasswordSchema } from '@/lib/schemas/auth';
 
@@ -49,6 +50,7 @@ export async function POST(request: Request) {
       );
       return { email: user.email };
     });
+    await forgetAccountFailures(outcome.email);
     return NextResponse.json({ message: 'Your password is set. Sign in with it now.', email: outcome.email });
   } catch (error) {
     if (error instanceof LinkRefused) return errorResponse(400, error.message, { errors: [{ field: 'token', message: error.message }] });
