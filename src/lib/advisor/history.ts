@@ -11,7 +11,6 @@ export const HISTORY_SETTINGS = {
   mismatch: { headers: 0.6, system: 0.7, intakeManifold: 0.7 },
   minSimilarity: 0.05,
   gainLimitsPct: { min: -50, max: 100 }, // measured gains outside this are treated as typos and ignored
-  maxCurveFactor: { min: 0.75, max: 1.25 },
 } as const;
 
 // Our choice: Gaussian similarity on relative differences, times a factor per mismatched part.
@@ -37,31 +36,70 @@ function usable(e: HistoryEntry): boolean {
     && (e.intakeFlowCfm === undefined || (Number.isFinite(e.intakeFlowCfm) && e.intakeFlowCfm > 0));
 }
 
-// Weighted blend: adjusted = (prior · model + Σ wᵢ · measuredᵢ) / (prior + Σ wᵢ), wᵢ = similarity · weight.
-export function adjustGainForHistory(
-  camId: string | number, modelGainPct: number, history: readonly HistoryEntry[], build: BuildProfile, displacementCi: number,
-): HistoryAdjustment | null {
+/** A peak-power record speaks for the top end only: full weight from 80 % of the peak-power rpm, none below 60 % (our choice). */
+export const PEAK_ONLY_TAPER = { fromShare: 0.6, fullShare: 0.8 } as const;
+
+function peakOnlyTaper(rpm: number, peakHpRpm: number): number {
+  const share = rpm / peakHpRpm;
+  return Math.min(1, Math.max(0, (share - PEAK_ONLY_TAPER.fromShare) / (PEAK_ONLY_TAPER.fullShare - PEAK_ONLY_TAPER.fromShare)));
+}
+
+function gainAt(points: readonly { rpm: number; gainPct: number }[], rpm: number): number | null {
+  if (points.length === 0 || rpm < points[0].rpm || rpm > points[points.length - 1].rpm) return null;
+  for (let i = 1; i < points.length; i++) {
+    const a = points[i - 1];
+    const b = points[i];
+    if (rpm <= b.rpm) return a.gainPct + ((b.gainPct - a.gainPct) * (rpm - a.rpm)) / (b.rpm - a.rpm || 1);
+  }
+  return points[0].gainPct;
+}
+
+export type HistoryBlend = { torque: Float64Array; evidence: Float64Array; adjustment: HistoryAdjustment };
+
+/**
+ * The shop's measured gains blended into the model's, rpm by rpm (our choice of rule, documented):
+ * gain(r) = (prior · model(r) + Σ wᵢ(r) · measuredᵢ(r)) / (prior + Σ wᵢ(r)), wᵢ = similarity · weight,
+ * where a record with a measured curve speaks where it was measured and a peak-only record speaks for
+ * the top end (its peak gain, as an offset on the model's). With few records it stays near the model.
+ */
+export function blendHistory(
+  camId: string | number, rpms: Float64Array, torque: Float64Array, baseline: Float64Array, peakHpRpm: number, modelPeakGainPct: number,
+  history: readonly HistoryEntry[], build: BuildProfile, displacementCi: number,
+): HistoryBlend | null {
   const h = HISTORY_SETTINGS;
-  let matches = 0;
-  let wsum = 0;
-  let gsum = 0;
+  const used: { w: number; e: HistoryEntry }[] = [];
   for (const e of history) {
     if (String(e.camId) !== String(camId) || !usable(e)) continue;
     const w = historySimilarity(e, build, displacementCi) * (e.weight ?? 1);
-    if (!(w >= h.minSimilarity)) continue;
-    matches++;
-    wsum += w;
-    gsum += w * e.measuredGainPctPeakHp;
+    if (w >= h.minSimilarity) used.push({ w, e });
   }
-  if (matches === 0) return null;
-  const measured = gsum / wsum;
-  const adjusted = (h.priorWeight * modelGainPct + wsum * measured) / (h.priorWeight + wsum);
-  return { matches, evidenceWeight: wsum, modelGainPctPeakHp: modelGainPct, measuredGainPctPeakHp: measured, adjustedGainPctPeakHp: adjusted };
-}
-
-/** The factor the whole candidate curve is scaled by so its peak-hp gain becomes the adjusted one. */
-export function historyCurveFactor(adj: HistoryAdjustment): number {
-  const f = (1 + adj.adjustedGainPctPeakHp / 100) / (1 + adj.modelGainPctPeakHp / 100);
-  const lim = HISTORY_SETTINGS.maxCurveFactor;
-  return Number.isFinite(f) ? Math.min(lim.max, Math.max(lim.min, f)) : 1;
+  if (used.length === 0) return null;
+  const out = new Float64Array(torque.length);
+  const evidence = new Float64Array(torque.length);
+  for (let i = 0; i < rpms.length; i++) {
+    const modelGain = baseline[i] > 0 ? (torque[i] / baseline[i] - 1) * 100 : 0;
+    let wsum = 0;
+    let gsum = 0;
+    for (const { w, e } of used) {
+      const byRpm = e.measuredGainPctByRpm && e.measuredGainPctByRpm.length >= 2 ? gainAt(e.measuredGainPctByRpm, rpms[i]) : null;
+      if (byRpm !== null) {
+        wsum += w;
+        gsum += w * byRpm;
+      } else if (!e.measuredGainPctByRpm || e.measuredGainPctByRpm.length < 2) {
+        const t = w * peakOnlyTaper(rpms[i], peakHpRpm);
+        wsum += t;
+        gsum += t * (modelGain + e.measuredGainPctPeakHp - modelPeakGainPct);
+      }
+    }
+    const gain = (h.priorWeight * modelGain + gsum) / (h.priorWeight + wsum);
+    out[i] = baseline[i] * (1 + gain / 100);
+    evidence[i] = wsum;
+  }
+  const wTotal = used.reduce((s, u) => s + u.w, 0);
+  const measured = used.reduce((s, u) => s + u.w * u.e.measuredGainPctPeakHp, 0) / wTotal;
+  return {
+    torque: out,
+    evidence,
+    adjustment: { matches: used.length, evidenceWeight: wTotal, modelGainPctPeakHp: modelPeakGainPct, measuredGainPctPeakHp: measured, adjustedGainPctPeakHp: NaN },
+  };
 }

@@ -11,9 +11,10 @@ export const IDLE_VACUUM = {
   maxInHg: 21,
   // Vacuum brake boosters want roughly 15+ inHg at idle (common practice).
   brakeBoosterMinInHg: 15,
-  // Plain-words labels for what the customer will hear (our choice of cut-offs).
-  smoothAtLeastInHg: 17,
-  noticeableAtLeastInHg: 13,
+  // Plain-words labels for what the customer will hear (our choice of cut-offs, from memory: stock-like
+  // cams idle at 15+ inHg and sound smooth; a mild street cam at 11–15 has a noticeable lope).
+  smoothAtLeastInHg: 15,
+  noticeableAtLeastInHg: 11,
 } as const;
 
 // Common practice (values from memory): vacuum ≈ 20.5 − 0.18 · overlap · (40 / cylinder in³), clamped.

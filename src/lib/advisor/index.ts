@@ -7,10 +7,12 @@ export { displacementCi, cylinderVolumeCi, litresFromCubicInches, meanPistonSpee
 export { cruiseRpm, buildCruiseRpm, pullAwayRpm } from './drivetrain';
 export { horsepower, HP_TORQUE_CONSTANT } from './horsepower';
 export { idleVacuumInHg } from './idle';
-export { crossoverRpm } from './crossover';
+export { crossoverRpm, leadStretch } from './crossover';
+export { engineContext, camModel, torqueCurve } from './prediction';
+export { revLimitRpm, rpmGrid, VALVETRAIN_LIMIT_RPM } from './rpm-grid';
+export { BAND, bandHalfWidthPct } from './bands';
 export { SCORING_WEIGHTS, SUBSCORE_NAMES } from './weights';
 export type { SubscoreName } from './weights';
-export { MODEL } from './coefficients';
 export type { CurvePoint, PredictedSummary } from './curve';
 export type {
   BaselineResult, CamRanking, Caution, CautionKind, EngineFacts, HistoryAdjustment, HistoryEntry, Need, NeedKind,

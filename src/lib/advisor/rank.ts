@@ -2,15 +2,16 @@ import type { BuildProfile } from '@/lib/schemas/build-profile';
 import type { CamCard } from '@/lib/schemas/cam-card';
 import { camCautions } from './cautions';
 import { dynamicCompression } from './compression';
-import { aheadAt, crossoverRpm } from './crossover';
+import { BAND, bandHalfWidthPct } from './bands';
+import { aheadAt, crossoverRpm, leadStretch } from './crossover';
 import { curvePeaks, curvePoints, percentChange, summarize } from './curve';
 import { buildCruiseRpm, pullAwayRpm } from './drivetrain';
 import { roundTo } from './format';
 import { litresFromCubicInches, meanPistonSpeedFtMin } from './geometry';
-import { adjustGainForHistory, historyCurveFactor } from './history';
+import { blendHistory } from './history';
 import { idleVacuumInHg } from './idle';
 import { camNeeds } from './needs';
-import { engineContext, torqueCurve, type EngineContext } from './power-model';
+import { engineContext, torqueCurve, type EngineContext } from './prediction';
 import {
   compressionReason, converterReason, costReason, emissionsReason, fitReason, idleReason, powerbandReason,
 } from './reasons';
@@ -18,11 +19,12 @@ import {
   powerbandWeights, scoreCompression, scoreConverter, scoreCost, scoreEmissions, scoreFit, scoreIdle, scorePowerband,
   totalScore,
 } from './scoring';
+import { revLimitRpm } from './rpm-grid';
 import type { BaselineResult, CamRanking, EngineFacts, RankingResult, RankOptions, Reason } from './types';
 import { overlap050Deg, seatOverlapDeg, valveEvents } from './valve-events';
 import { SCORING_WEIGHTS } from './weights';
 
-export const PREDICTION_NOTICE = 'Predictions are indicative: a model calibrated on a few engine-dyno results, not a measurement of this engine.';
+export const PREDICTION_NOTICE = 'Predictions are indicative: an engine-cycle model with a few physical constants fitted to engine-dyno results, shown with its band; not a measurement of this engine.';
 
 /** Work shared by every cam of one ranking. */
 type BuildWork = {
@@ -30,6 +32,7 @@ type BuildWork = {
   ctx: EngineContext;
   baseTorque: Float64Array;
   basePeakHp: number;
+  baseLimitRpm: number;
   cruiseRpm: number;
   pullAway: ReturnType<typeof pullAwayRpm>;
   weights: Float64Array;
@@ -40,8 +43,9 @@ function prepare(build: BuildProfile): BuildWork {
   const baseTorque = torqueCurve(ctx, build.baselineCam);
   const cruiseRpm = buildCruiseRpm(build);
   const pullAway = pullAwayRpm(build);
+  const baseLimitRpm = revLimitRpm(build, ctx.rpms[ctx.rpms.length - 1], false);
   return {
-    build, ctx, baseTorque, basePeakHp: curvePeaks(ctx.rpms, baseTorque).peakHp, cruiseRpm, pullAway,
+    build, ctx, baseTorque, basePeakHp: curvePeaks(ctx.rpms, baseTorque, baseLimitRpm).peakHp, baseLimitRpm, cruiseRpm, pullAway,
     weights: powerbandWeights(build, ctx.rpms, pullAway.rpm, cruiseRpm),
   };
 }
@@ -57,45 +61,61 @@ function engineFacts(w: BuildWork): EngineFacts {
     pullAwayRpm: w.pullAway.rpm,
     pullAwaySource: w.pullAway.source,
     rpmLimit: limit,
+    revLimitRpm: w.baseLimitRpm,
     meanPistonSpeedFtMinAtLimit: Math.round(meanPistonSpeedFtMin(build.engine.strokeIn, limit)),
     headFlowCeilingHp: Math.round(ctx.ceilingHp),
   };
+}
+
+/** Band half-width (%) per rpm, narrowed where the shop has measured similar builds. */
+function bandPcts(rpms: Float64Array, evidence: Float64Array | null): Float64Array {
+  return rpms.map((r, i) => bandHalfWidthPct(r, evidence ? evidence[i] : 0));
 }
 
 function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRanking {
   const { build, ctx, baseTorque } = w;
   const rpms = ctx.rpms;
   let torque = torqueCurve(ctx, cam);
+  const fit0 = scoreFit(build, cam, overlap050Deg(cam));
+  const limitRpm = revLimitRpm(build, rpms[rpms.length - 1], fit0.springsNeeded);
 
-  // History: blend the model's peak-hp gain with the shop's measured gains, then scale the curve.
+  // History: the shop's measured gains for this cam on similar builds, blended in rpm by rpm.
   let history = null;
+  let evidence: Float64Array | null = null;
   if (options.history && options.history.length > 0) {
-    const modelGain = percentChange(curvePeaks(rpms, torque).peakHp, w.basePeakHp);
-    history = adjustGainForHistory(cam.id, modelGain, options.history, build, ctx.displacementCi);
-    if (history) {
-      const f = historyCurveFactor(history);
-      torque = torque.map((t) => t * f);
+    const peaks = curvePeaks(rpms, torque, limitRpm);
+    const blend = blendHistory(cam.id, rpms, torque, baseTorque, peaks.peakHpRpm, percentChange(peaks.peakHp, w.basePeakHp), options.history, build, ctx.displacementCi);
+    if (blend) {
+      torque = blend.torque;
+      evidence = blend.evidence;
+      const a = blend.adjustment;
       history = {
-        ...history,
-        evidenceWeight: roundTo(history.evidenceWeight, 2),
-        modelGainPctPeakHp: roundTo(history.modelGainPctPeakHp, 1),
-        measuredGainPctPeakHp: roundTo(history.measuredGainPctPeakHp, 1),
-        adjustedGainPctPeakHp: roundTo(history.adjustedGainPctPeakHp, 1),
+        ...a,
+        evidenceWeight: roundTo(a.evidenceWeight, 2),
+        modelGainPctPeakHp: roundTo(a.modelGainPctPeakHp, 1),
+        measuredGainPctPeakHp: roundTo(a.measuredGainPctPeakHp, 1),
+        adjustedGainPctPeakHp: roundTo(percentChange(curvePeaks(rpms, torque, limitRpm).peakHp, w.basePeakHp), 1),
       };
     }
   }
 
-  const predicted = summarize(rpms, torque, baseTorque, w.basePeakHp);
-  const crossover = crossoverRpm(rpms, torque, baseTorque);
+  const predicted = summarize(rpms, torque, baseTorque, w.basePeakHp, limitRpm);
+  const crossover = crossoverRpm(rpms, torque, baseTorque, limitRpm);
+  const lead = leadStretch(rpms, torque, baseTorque, limitRpm);
+  // The crossover's range: the same comparison with the candidate's gain moved by its calibration uncertainty.
+  const shift = BAND.gainUncertaintyPct / 100;
+  const early = crossoverRpm(rpms, torque.map((t) => t * (1 + shift)), baseTorque, limitRpm);
+  const late = crossoverRpm(rpms, torque.map((t) => t * (1 - shift)), baseTorque, limitRpm);
+  const crossoverRange = crossover === null ? null : ([early ?? crossover, late ?? rpms[rpms.length - 1]] as [number, number]);
   const events = valveEvents(cam);
   const dcr = dynamicCompression(build, cam);
   const vacuum = idleVacuumInHg(seatOverlapDeg(cam), ctx.cylinderCi);
 
   const powerband = scorePowerband(w.weights, rpms, torque, baseTorque);
-  const converter = scoreConverter(build, w.pullAway.rpm, crossover, aheadAt(rpms, torque, baseTorque, w.pullAway.rpm));
+  const converter = scoreConverter(build, w.pullAway.rpm, crossover, aheadAt(rpms, torque, baseTorque, w.pullAway.rpm), crossoverRange, lead);
   const idle = scoreIdle(build, vacuum);
   const compression = scoreCompression(build, dcr);
-  const fit = scoreFit(build, cam, overlap050Deg(cam));
+  const fit = fit0;
   const emissions = scoreEmissions(build, cam);
   const needs = camNeeds(fit, converter);
   const cost = scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents);
@@ -124,8 +144,11 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
     score: roundTo(totalScore(raw, emissions.gated), 1),
     subscores,
     crossoverRpm: crossover,
+    crossoverRangeRpm: crossoverRange,
+    leads: lead,
+    revLimitRpm: limitRpm,
     predicted,
-    curve: options.includeCurves === false ? [] : curvePoints(rpms, torque),
+    curve: options.includeCurves === false ? [] : curvePoints(rpms, torque, bandPcts(rpms, evidence)),
     valveEvents: events,
     dynamicCompression: roundTo(dcr, 2),
     idleVacuumInHg: roundTo(vacuum, 1),
@@ -142,8 +165,8 @@ function baselineResult(w: BuildWork, includeCurves: boolean): BaselineResult {
   return {
     camId: cam.id,
     camName: cam.name,
-    predicted: summarize(rpms, w.baseTorque, w.baseTorque, w.basePeakHp),
-    curve: includeCurves ? curvePoints(rpms, w.baseTorque) : [],
+    predicted: summarize(rpms, w.baseTorque, w.baseTorque, w.basePeakHp, w.baseLimitRpm),
+    curve: includeCurves ? curvePoints(rpms, w.baseTorque, bandPcts(rpms, null)) : [],
     valveEvents: valveEvents(cam),
     dynamicCompression: roundTo(dynamicCompression(w.build, cam), 2),
     idleVacuumInHg: roundTo(idleVacuumInHg(seatOverlapDeg(cam), w.ctx.cylinderCi), 1),
@@ -180,9 +203,11 @@ export function rankCams(build: BuildProfile, cams: readonly CamCard[], options:
 export function predictCurve(build: BuildProfile, cam: CamCard) {
   const w = prepare(build);
   const torque = torqueCurve(w.ctx, cam);
+  const limitRpm = revLimitRpm(build, w.ctx.rpms[w.ctx.rpms.length - 1], scoreFit(build, cam, overlap050Deg(cam)).springsNeeded);
   return {
-    curve: curvePoints(w.ctx.rpms, torque),
-    predicted: summarize(w.ctx.rpms, torque, w.baseTorque, w.basePeakHp),
-    crossoverRpm: crossoverRpm(w.ctx.rpms, torque, w.baseTorque),
+    curve: curvePoints(w.ctx.rpms, torque, bandPcts(w.ctx.rpms, null)),
+    predicted: summarize(w.ctx.rpms, torque, w.baseTorque, w.basePeakHp, limitRpm),
+    crossoverRpm: crossoverRpm(w.ctx.rpms, torque, w.baseTorque, limitRpm),
+    revLimitRpm: limitRpm,
   };
 }

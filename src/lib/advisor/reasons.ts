@@ -30,16 +30,20 @@ export function converterReason(d: ConverterDetail): Reason {
   const what = d.transmission === 'automatic' ? `your ${groupThousands(d.pullAwayRpm)} converter` : `a ${aboutRpm(d.pullAwayRpm)} rpm launch`;
   let text: string;
   if (d.crossoverRpm === null) {
-    text = d.aheadAtPullAway
-      ? `Pulls harder than your current cam down low but never passes it up top; ${what} suits it.`
-      : 'Never out-pulls your current cam between the bottom and the top of the curve, so it gives nothing back for the swap.';
+    if (d.lead && d.aheadAtPullAway) text = `Pulls harder than your current cam from ${what} up to about ${aboutRpm(d.lead.toRpm)} rpm, then falls a little behind near the limit.`;
+    else if (d.lead) text = `Out-pulls your current cam from about ${aboutRpm(d.lead.fromRpm)} to ${aboutRpm(d.lead.toRpm)} rpm, then falls a little behind near the limit.`;
+    else if (d.aheadAtPullAway) text = `Pulls harder than your current cam down low but never passes it up top; ${what} suits it.`;
+    else text = 'Never out-pulls your current cam anywhere up to the engine\'s rev limit, so it gives nothing back for the swap.';
   } else if (d.marginRpm !== null && d.marginRpm <= 0) {
     text = `Starts out-pulling your current cam at about ${aboutRpm(d.crossoverRpm)} rpm, already below ${what}, so it pulls from the moment the engine is loaded.`;
   } else if (d.score >= 95) {
     text = `Starts out-pulling your current cam at about ${aboutRpm(d.crossoverRpm)} rpm, close to ${what} — a good match.`;
   } else if (d.transmission === 'automatic') {
     const pair = d.suggestedStallRpm !== null ? ` — pair it with a ${groupThousands(d.suggestedStallRpm)} stall` : '';
-    text = `Starts out-pulling your current cam at about ${aboutRpm(d.crossoverRpm)} rpm; ${what} will feel soft off the line${pair}.`;
+    const range = d.crossoverRangeRpm ? ` (somewhere between ${aboutRpm(d.crossoverRangeRpm[0])} and ${aboutRpm(d.crossoverRangeRpm[1])})` : '';
+    text = d.suggestedStallRpm !== null
+      ? `Starts out-pulling your current cam at about ${aboutRpm(d.crossoverRpm)} rpm${range}; ${what} will feel soft off the line${pair}.`
+      : `Starts out-pulling your current cam at about ${aboutRpm(d.crossoverRpm)} rpm${range}, a little above ${what}; it will feel much like now off the line.`;
   } else {
     text = `Starts out-pulling your current cam at about ${aboutRpm(d.crossoverRpm)} rpm, well above ${what}; expect to slip the clutch more or launch higher.`;
   }

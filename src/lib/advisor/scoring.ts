@@ -69,24 +69,34 @@ export type ConverterDetail = {
   transmission: 'automatic' | 'manual';
   pullAwayRpm: number;
   crossoverRpm: number | null;
+  crossoverRangeRpm: [number, number] | null;
   marginRpm: number | null; // crossover − pull-away
   aheadAtPullAway: boolean;
+  lead: { fromRpm: number; toRpm: number } | null; // where it out-pulls the current cam, within the rev limit
   suggestedStallRpm: number | null;
 };
 
 // Crossover against converter stall (or launch rpm): full marks when the cam already pulls by then.
-export function scoreConverter(build: BuildProfile, pullAwayRpm: number, crossover: number | null, aheadAtPullAway: boolean): ConverterDetail {
+// A converter is a need only when even the earliest end of the crossover's range sits well above the stall.
+export function scoreConverter(
+  build: BuildProfile, pullAwayRpm: number, crossover: number | null, aheadAtPullAway: boolean,
+  crossoverRange: [number, number] | null = null, lead: { fromRpm: number; toRpm: number } | null = null,
+): ConverterDetail {
   const c = CONVERTER_SCORING;
   const transmission = build.drivetrain.transmission;
+  const base = { transmission, pullAwayRpm, crossoverRpm: crossover, crossoverRangeRpm: crossoverRange, aheadAtPullAway, lead };
   if (crossover === null) {
-    const score = aheadAtPullAway ? 100 : c.neverCrossesScore;
-    return { score, transmission, pullAwayRpm, crossoverRpm: null, marginRpm: null, aheadAtPullAway, suggestedStallRpm: null };
+    // Leads somewhere below the limit without holding to it: judge it where it starts to lead.
+    const from = lead?.fromRpm ?? null;
+    const score = aheadAtPullAway ? 100 : from !== null ? clamp(100 - Math.max(0, from - pullAwayRpm - c.toleranceRpm) * c.manualPointsPerRpm) : c.neverCrossesScore;
+    return { ...base, score, marginRpm: null, suggestedStallRpm: null };
   }
   const margin = crossover - pullAwayRpm;
   const slope = transmission === 'automatic' ? c.automaticPointsPerRpm : c.manualPointsPerRpm;
   const score = clamp(100 - Math.max(0, margin - c.toleranceRpm) * slope);
-  const suggest = transmission === 'automatic' && margin > c.suggestConverterAboveStallRpm ? Math.ceil(crossover / 100) * 100 : null;
-  return { score, transmission, pullAwayRpm, crossoverRpm: crossover, marginRpm: margin, aheadAtPullAway, suggestedStallRpm: suggest };
+  const earliest = crossoverRange ? crossoverRange[0] : crossover;
+  const suggest = transmission === 'automatic' && earliest - pullAwayRpm > c.suggestConverterAboveStallRpm ? Math.ceil(crossover / 100) * 100 : null;
+  return { ...base, score, marginRpm: margin, suggestedStallRpm: suggest };
 }
 
 export type IdleDetail = { score: number; vacuumInHg: number; wish: BuildProfile['use']['idle']; brakesShortInHg: number };
@@ -115,12 +125,16 @@ export function compressionWindow(build: BuildProfile): { minDcr: number; maxDcr
   return { minDcr: m.minDcr, maxDcr: m.maxDcrAt91 + c.maxDcrPerOctane * (build.use.fuelOctane - c.refOctane) };
 }
 
+// Judged on the figures as the text shows them (one decimal), so the words never contradict the numbers.
+const oneDp = (v: number) => Math.round(v * 10) / 10;
+
 export function scoreCompression(build: BuildProfile, dcr: number): CompressionDetail {
   const c = COMPRESSION_SCORING;
-  const { minDcr, maxDcr } = compressionWindow(build);
-  const over = Math.max(0, dcr - maxDcr);
-  const under = Math.max(0, minDcr - dcr);
-  return { score: clamp(100 - over * c.pointsPerDcrOver - under * c.pointsPerDcrUnder), dcr, minDcr, maxDcr };
+  const window = compressionWindow(build);
+  const [shown, minDcr, maxDcr] = [oneDp(dcr), oneDp(window.minDcr), oneDp(window.maxDcr)];
+  const over = Math.max(0, shown - maxDcr);
+  const under = Math.max(0, minDcr - shown);
+  return { score: clamp(100 - over * c.pointsPerDcrOver - under * c.pointsPerDcrUnder), dcr: shown, minDcr, maxDcr };
 }
 
 export type FitDetail = {

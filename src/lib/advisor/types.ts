@@ -35,6 +35,8 @@ export type HistoryEntry = {
   intakeManifold?: 'truck' | 'car' | 'single-plane';
   /** Trust in this record (e.g. number of pulls averaged); default 1. */
   weight?: number;
+  /** The measured torque gain over the cam that came out, per rpm, where both pulls covered it (rising rpm). */
+  measuredGainPctByRpm?: { rpm: number; gainPct: number }[];
 };
 
 export type HistoryAdjustment = {
@@ -60,6 +62,12 @@ export type CamRanking = {
   score: number;
   subscores: Subscores;
   crossoverRpm: number | null;
+  /** The crossover moved by the model's calibration uncertainty on a cam's gain: [earliest, latest]. */
+  crossoverRangeRpm: [number, number] | null;
+  /** The longest stretch within the rev limit where it out-pulls the cam in the engine now. */
+  leads: { fromRpm: number; toRpm: number } | null;
+  /** The engine's real rev limit with this cam (valvetrain, upgraded when the cam comes with springs). */
+  revLimitRpm: number;
   predicted: PredictedSummary;
   curve: CurvePoint[];
   valveEvents: ValveEvents;
@@ -89,6 +97,7 @@ export type EngineFacts = {
   pullAwayRpm: number;
   pullAwaySource: 'stall' | 'launch' | 'default-launch';
   rpmLimit: number; // top of the curves: 7,000 or the mean-piston-speed limit
+  revLimitRpm: number; // the valvetrain's limit with the cam in the engine now
   meanPistonSpeedFtMinAtLimit: number;
   headFlowCeilingHp: number;
 };

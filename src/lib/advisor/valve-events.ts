@@ -1,4 +1,5 @@
 import type { CamCard } from '@/lib/schemas/cam-card';
+import { DEFAULT_RAMP_DEG } from './cycle/valve-lift';
 
 // Valve events in crank degrees: IVO and EVC around TDC, IVC and EVO around BDC.
 // A positive IVO means "opens before TDC", positive IVC "closes after BDC", and so on.
@@ -17,11 +18,12 @@ export type ValveEvents = ValveEventSet & {
 };
 
 /**
- * Seat-timing allowance: how much later the valve really seats than it passes 0.050" tappet lift,
- * per event. Common practice for dynamic-compression estimates, no published source; 20° chosen
- * from the usual 15–20° (value from memory). Used only when a card has no advertised duration.
+ * Seat-timing allowance: how much later the valve really seats than it passes 0.050" tappet lift, per
+ * event — half the default ramp the cycle model's lift curves use (advertised − 0.050" = 52° for a
+ * hydraulic roller, so 26° per side), so a card with and without advertised figures gives the same
+ * seat timing, overlap, dynamic compression and idle. Used only when a card has no advertised duration.
  */
-export const SEAT_TIMING_ALLOWANCE_DEG = 20;
+export const SEAT_TIMING_ALLOWANCE_DEG = DEFAULT_RAMP_DEG['hydraulic-roller'] / 2;
 
 // Standard cam-card arithmetic, common practice: ECL = 2·LSA − ICL.
 export function exhaustCenterlineDeg(lsaDeg: number, intakeCenterlineDeg: number): number {

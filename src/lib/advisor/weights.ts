@@ -72,19 +72,21 @@ export const CONVERTER_SCORING = {
 
 /** Idle: points lost per inHg outside what the wish wants; vacuum brakes lose more below 15 inHg. */
 export const IDLE_SCORING = {
-  smooth: { wantAtLeastInHg: 17, pointsPerInHgShort: 10 },
-  noticeable: { wantFromInHg: 12, wantToInHg: 16, pointsPerInHgShort: 10, pointsPerInHgMild: 5 },
-  aggressive: { wantAtMostInHg: 12.5, pointsPerInHgMild: 10 },
+  smooth: { wantAtLeastInHg: 15, pointsPerInHgShort: 10 },
+  noticeable: { wantFromInHg: 11, wantToInHg: 14.5, pointsPerInHgShort: 10, pointsPerInHgMild: 5 },
+  aggressive: { wantAtMostInHg: 11, pointsPerInHgMild: 10 },
   brakePointsPerInHgShort: 5,
 } as const;
 
 /**
  * Dynamic compression window for pump gas, common practice (values from memory): about 7.5–8.5:1,
  * iron heads at the low end, aluminium tolerating more; each octane point (AKI) moves the top by 0.1.
+ * The tops are set so the factory combinations we remember pass on their factory fuel, with this
+ * module's seat timing (docs/advisor.md lists them: a 5.3 L truck at 9.9:1 on 87 works out to 8.4:1).
  */
 export const COMPRESSION_SCORING = {
-  iron: { minDcr: 7.2, maxDcrAt91: 8.0 },
-  aluminum: { minDcr: 7.5, maxDcrAt91: 8.7 },
+  iron: { minDcr: 7.2, maxDcrAt91: 8.4 },
+  aluminum: { minDcr: 7.5, maxDcrAt91: 8.9 },
   refOctane: 91,
   maxDcrPerOctane: 0.1,
   pointsPerDcrOver: 40,

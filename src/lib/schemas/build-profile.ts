@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { cruiseRpm } from '@/lib/advisor/drivetrain';
+import { VALVETRAIN_LIMIT_RPM } from '@/lib/advisor/rpm-grid';
 import { boundedNumber, CamCardSchema, presence } from './cam-card';
 
 // The customer's combination as the counter interview captures it. Every number carries its unit in
@@ -23,6 +25,11 @@ export const BUILD_LIMITS = {
   fuelOctane: { min: 80, max: 120 },
   cruiseMph: { min: 20, max: 90 },
   budgetCents: { min: 0, max: 100_000_000 },
+  valveIn: { min: 1.2, max: 2.6 },
+  flowSheetLiftIn: { min: 0.01, max: 1.0 },
+  flowSheetCfm: { min: 1, max: 600 },
+  flowSheetPoints: { min: 2, max: 40 },
+  primaryLengthIn: { min: 4, max: 60 },
 } as const;
 
 export const HEAD_MATERIALS = ['iron', 'aluminum'] as const;
@@ -34,8 +41,22 @@ export const TRANSMISSIONS = ['automatic', 'manual'] as const;
 export const POWER_BRAKES = ['vacuum', 'hydraulic', 'none'] as const;
 export const PRIMARY_USES = ['daily', 'towing', 'street', 'strip'] as const;
 export const IDLE_WISHES = ['smooth', 'noticeable', 'aggressive'] as const;
+export const HEAD_PRESETS = ['stock-cathedral', 'ported-cathedral', 'stock-rectangle', 'ported-rectangle'] as const;
+/** What limits the engine's safe rpm: stock hydraulic valvetrain, upgraded springs, or a solid roller. */
+export const VALVETRAINS = ['stock-hydraulic', 'upgraded-hydraulic', 'solid-roller'] as const;
+export const FUELS = ['gasoline', 'e85'] as const;
 
 const B = BUILD_LIMITS;
+
+/** A head's flow-bench sheet: cfm at 28 inH2O against valve lift, lifts rising. */
+export const FlowSheetSchema = z
+  .array(z.strictObject({
+    liftIn: boundedNumber('flow sheet lift', 'in', B.flowSheetLiftIn),
+    cfm: boundedNumber('flow sheet flow at 28 inH2O', 'cfm', B.flowSheetCfm),
+  }), { error: 'a flow sheet must be a list of { liftIn, cfm } points' })
+  .min(B.flowSheetPoints.min, { error: `a flow sheet needs at least ${B.flowSheetPoints.min} points` })
+  .max(B.flowSheetPoints.max, { error: `a flow sheet takes at most ${B.flowSheetPoints.max} points` })
+  .refine((pts) => pts.every((p, i) => i === 0 || p.liftIn > pts[i - 1].liftIn), { error: 'flow sheet lifts must rise from one point to the next' });
 
 function oneOf<T extends readonly [string, ...string[]]>(label: string, values: T) {
   return z.enum(values, { error: presence(label, `one of: ${values.join(', ')}`) });
@@ -52,6 +73,13 @@ export const EngineSchema = z
     intakeFlowCfm: boundedNumber('intake port flow at 28 inH2O', 'cfm', B.intakeFlowCfm),
     intakeManifold: oneOf('intake manifold', INTAKE_MANIFOLDS),
     cylinderDeactivation: oneOf('cylinder deactivation', DEACTIVATION_STATES),
+    // Added in profile schema 2, all optional: the head as the cycle model sees it, and the valvetrain.
+    headPreset: oneOf('head preset', HEAD_PRESETS).optional(),
+    intakeValveIn: boundedNumber('intake valve diameter', 'in', B.valveIn).optional(),
+    exhaustValveIn: boundedNumber('exhaust valve diameter', 'in', B.valveIn).optional(),
+    intakeFlowSheet: FlowSheetSchema.optional(),
+    exhaustFlowSheet: FlowSheetSchema.optional(),
+    valvetrain: oneOf('valvetrain', VALVETRAINS).optional(),
   }, { error: presence('engine', 'an object') })
   .refine((e) => e.rodLengthIn / e.strokeIn >= B.rodStrokeRatio.min, {
     path: ['rodLengthIn'],
@@ -62,6 +90,8 @@ export const ExhaustSchema = z.strictObject({
   headers: oneOf('headers', HEADER_TYPES),
   // Ignored for cast manifolds; defaults to 1.75" for headers.
   primaryIn: boundedNumber('header primary tube diameter', 'in', B.primaryIn).optional(),
+  // Schema 2: primary length; by header type when absent (see docs/advisor.md).
+  primaryLengthIn: boundedNumber('header primary length', 'in', B.primaryLengthIn).optional(),
   system: oneOf('exhaust system', EXHAUST_SYSTEMS),
 }, { error: presence('exhaust', 'an object') });
 
@@ -89,6 +119,8 @@ export const UseSchema = z.strictObject({
   primary: oneOf('primary use', PRIMARY_USES),
   idle: oneOf('idle wish', IDLE_WISHES),
   fuelOctane: boundedNumber('fuel octane (pump, (R+M)/2)', 'AKI', B.fuelOctane),
+  // Schema 2: gasoline unless the customer runs E85.
+  fuel: oneOf('fuel', FUELS).optional(),
   emissionsRequired: z.boolean({ error: presence('emissionsRequired', 'true or false') }),
   cruiseMph: boundedNumber('cruise speed', 'mph', B.cruiseMph),
   budgetCents: boundedNumber('budget', 'cents', B.budgetCents).int({ error: 'budget must be a whole number of cents' }),
@@ -102,7 +134,16 @@ export const BuildProfileSchema = z.strictObject({
   use: UseSchema,
   // The cam in the engine now; its springMaxLiftIn, when given, is the limit of the springs installed now.
   baselineCam: CamCardSchema,
-}, { error: presence('build profile', 'an object') });
+}, { error: presence('build profile', 'an object') })
+  // A cruise the engine cannot turn is a typo in the gearing, not a build to advise on.
+  .superRefine((b, ctx) => {
+    const rpm = cruiseRpm(b.use.cruiseMph, b.drivetrain.axleRatio, b.drivetrain.topGearRatio, b.drivetrain.tireDiameterIn);
+    const limit = VALVETRAIN_LIMIT_RPM[b.engine.valvetrain ?? 'stock-hydraulic'];
+    if (rpm > limit) {
+      const message = `cruising at ${b.use.cruiseMph} mph works out to ${Math.round(rpm).toLocaleString('en-US')} rpm, past the engine's ${limit.toLocaleString('en-US')} rpm limit: check the axle ratio, top gear ratio and tyre diameter`;
+      for (const path of [['use', 'cruiseMph'], ['drivetrain', 'axleRatio'], ['drivetrain', 'topGearRatio'], ['drivetrain', 'tireDiameterIn']]) ctx.addIssue({ code: 'custom', path, message });
+    }
+  });
 
 /** A validated build profile (defaults applied inside the baseline cam card). */
 export type BuildProfile = z.output<typeof BuildProfileSchema>;

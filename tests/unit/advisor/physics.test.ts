@@ -96,14 +96,14 @@ describe('dynamic compression', () => {
     expect(dynamicCompressionRatio(3.622, 6.098, 10.0, 0)).toBeCloseTo(10.0, 9);
   });
 
-  it('uses the advertised IVC when given, else 0.050" IVC + 20° (seat-timing allowance, common practice ~15–20°, from memory)', () => {
-    // 0.050" IVC = 220/2 + 108 − 180 = 38°, + 20° = 58°; advertised 276°: 138 + 108 − 180 = 66°.
+  it('uses the advertised IVC when given, else 0.050" IVC + 26° (half the 52° hydraulic-roller ramp the lift curves use; from memory)', () => {
+    // 0.050" IVC = 220/2 + 108 − 180 = 38°, + 26° = 64°; advertised 276°: 138 + 108 − 180 = 66°.
     const base = { id: 3, name: 'x', intakeDuration050: 220, exhaustDuration050: 226, intakeLiftIn: 0.58, exhaustLiftIn: 0.58, lsa: 112, intakeCenterline: 108 };
     const b = variant({ engine: { compressionRatio: 10 } });
-    expect(dynamicCompression(b, cam(base))).toBeCloseTo(dynamicCompressionRatio(3.622, 6.098, 10, 58), 9);
+    expect(dynamicCompression(b, cam(base))).toBeCloseTo(dynamicCompressionRatio(3.622, 6.098, 10, 64), 9);
     expect(dynamicCompression(b, cam({ ...base, intakeAdvertised: 276 }))).toBeCloseTo(dynamicCompressionRatio(3.622, 6.098, 10, 66), 9);
     // A later-closing intake traps less charge: lower DCR (Heywood ch. 2).
-    expect(dynamicCompressionRatio(3.622, 6.098, 10, 66)).toBeLessThan(dynamicCompressionRatio(3.622, 6.098, 10, 58));
+    expect(dynamicCompressionRatio(3.622, 6.098, 10, 66)).toBeLessThan(dynamicCompressionRatio(3.622, 6.098, 10, 64));
   });
 });
 

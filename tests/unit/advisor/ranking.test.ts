@@ -108,7 +108,7 @@ describe('cautions and gates', () => {
   });
 
   it('dynamic compression above the pump-gas window costs points; better fuel restores them (common practice, from memory)', () => {
-    const hot = variant({ engine: { compressionRatio: 10.5, headMaterial: 'iron' }, use: { fuelOctane: 87 } });
+    const hot = variant({ engine: { compressionRatio: 11.5, headMaterial: 'iron' }, use: { fuelOctane: 87 } });
     const cool = variant({ engine: { compressionRatio: 10.5, headMaterial: 'aluminum' }, use: { fuelOctane: 100 } });
     const s = (b: typeof hot) => rankCams(b, [truckCam]).rankings[0];
     expect(s(hot).subscores.compression).toBeLessThan(50);
