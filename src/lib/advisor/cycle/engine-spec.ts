@@ -2,7 +2,7 @@ import type { BuildProfile } from '@/lib/schemas/build-profile';
 import { pistonTravelFromTdcIn } from '../geometry';
 import { AMBIENT_TEMPERATURE_K, CRANK_STEP_DEG, E85_EQUIVALENT_AKI, FITTED, FUELS, GAMMA_AIR, INTAKE_CHARGE_HEATING_K, M_PER_IN, type FittedConstants } from './constants';
 import { speedOfSoundMPerS } from './gas-flow';
-import { headFromPeak, presetHead, type HeadSpec } from './head-flow';
+import { HEAD_PRESET_FIGURES, headFromPeak, type HeadSpec } from './head-flow';
 import { researchOctaneFromAki } from './knock';
 import { reflectionCoefficient, type Echo } from './wave-pipes';
 
@@ -73,10 +73,10 @@ function headOf(build: BuildProfile): HeadSpec {
     return { ...fromPeak, intakeFlow: e.intakeFlowSheet, exhaustFlow: e.exhaustFlowSheet && e.exhaustFlowSheet.length >= 2 ? e.exhaustFlowSheet : fromPeak.exhaustFlow };
   }
   if (e.headPreset) {
-    const preset = presetHead(e.headPreset);
-    // The interview's peak figure wins over the preset's, keeping the preset's valves and curve shape.
-    const scaled = headFromPeak(e.intakeFlowCfm, e.intakeValveIn ?? preset.intakeValveIn, e.exhaustValveIn ?? preset.exhaustValveIn);
-    return scaled;
+    // The interview's peak figure wins over the preset's; the preset gives the valve sizes. (The generic
+    // 0.75 exhaust ratio is kept, as in the fit, rather than the preset's own.)
+    const preset = HEAD_PRESET_FIGURES[e.headPreset];
+    return headFromPeak(e.intakeFlowCfm, e.intakeValveIn ?? preset.intakeValveIn, e.exhaustValveIn ?? preset.exhaustValveIn);
   }
   return headFromPeak(e.intakeFlowCfm, e.intakeValveIn, e.exhaustValveIn);
 }

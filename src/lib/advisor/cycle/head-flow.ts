@@ -1,3 +1,4 @@
+import type { HEAD_PRESETS } from '@/lib/schemas/build-profile';
 import { benchEffectiveAreaM2 } from './gas-flow';
 
 // Cylinder heads as the model sees them: valve sizes and a flow-bench curve (cfm at 28 inH2O against
@@ -12,7 +13,6 @@ export type HeadSpec = {
   exhaustFlow: FlowPoint[];
 };
 
-export const HEAD_PRESETS = ['stock-cathedral', 'ported-cathedral', 'stock-rectangle', 'ported-rectangle'] as const;
 export type HeadPreset = (typeof HEAD_PRESETS)[number];
 
 /** Peak intake cfm, valve sizes and the exhaust-to-intake flow ratio of each preset (from memory). */
@@ -53,11 +53,6 @@ export function valveSizeFromPeakCfm(peakCfm: number): number {
   return Math.sqrt(peakCfm / 66);
 }
 
-export function presetHead(preset: HeadPreset): HeadSpec {
-  const f = HEAD_PRESET_FIGURES[preset];
-  return headFromPeak(f.peakCfm, f.intakeValveIn, f.exhaustValveIn, f.exhaustRatio);
-}
-
 export function headFromPeak(peakCfm: number, intakeValveIn?: number, exhaustValveIn?: number, exhaustRatio = 0.75): HeadSpec {
   const di = intakeValveIn ?? valveSizeFromPeakCfm(peakCfm);
   const de = exhaustValveIn ?? di * 0.8;
@@ -82,9 +77,4 @@ export function flowAtLiftCfm(curve: readonly FlowPoint[], liftIn: number): numb
 /** Effective flow area (m²) at a lift, from the bench curve (Heywood app. C, incompressible at 28 inH2O). */
 export function effectiveAreaAtLiftM2(curve: readonly FlowPoint[], liftIn: number): number {
   return benchEffectiveAreaM2(flowAtLiftCfm(curve, liftIn));
-}
-
-/** The peak of a flow curve (cfm). */
-export function peakFlowCfm(curve: readonly FlowPoint[]): number {
-  return curve.reduce((m, p) => Math.max(m, p.cfm), 0);
 }

@@ -9,7 +9,7 @@ import { REFERENCE_ENGINE_AIRFLOW_KG_S } from './engine-spec';
 import { frictionMeanEffectivePressurePa } from './friction';
 import { orificeMassFlowKgPerS, speedOfSoundMPerS } from './gas-flow';
 import { WOSCHNI, woschniCoefficientWPerM2K, woschniGasSpeedMPerS } from './heat-transfer';
-import { ignitionDelayMs, KNOCK_MAX_RETARD_DEG, KNOCK_RETARD_STEP_DEG } from './knock';
+import { endGasTemperatureK, ignitionDelayMs, KNOCK_MAX_RETARD_DEG, KNOCK_RETARD_STEP_DEG } from './knock';
 import { backwardWavePa, launchWave, makeWavePipe, type WavePipe } from './wave-pipes';
 
 // Heywood ch. 14, filling and emptying: one cylinder (the others identical) integrated crank step by
@@ -161,8 +161,7 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
         closedWork += p * dV;
         // The end gas: unburned charge compressed isentropically from intake closing (Heywood ch. 9).
         if (burned < 0.9) {
-          const tUnburned = tRef * Math.pow(p / pRef, (gU - 1) / gU);
-          knockIntegral += dtMs / ignitionDelayMs(engine.researchOctane, p, tUnburned);
+          knockIntegral += dtMs / ignitionDelayMs(engine.researchOctane, p, endGasTemperatureK(tRef, pRef, p, gU));
         }
         gas.air = trappedAir * (1 - nextBurned);
         burned = nextBurned;

@@ -50,9 +50,3 @@ export function valveLiftIn(shape: LobeShape, crankDeg: number): number {
   if (Math.abs(phi) >= shape.halfBaseDeg) return 0;
   return shape.valveLiftIn * Math.pow(Math.cos((Math.PI * phi) / (2 * shape.halfBaseDeg)), shape.fullness);
 }
-
-/** Duration (crank deg) of this lobe above a tappet lift: 2·H·(2/π)·acos((lift/Lt)^(1/n)). */
-export function durationAtTappetLiftDeg(shape: LobeShape, tappetLiftIn: number, rockerRatio: number): number {
-  const ratio = Math.min(1, tappetLiftIn / (shape.valveLiftIn / rockerRatio));
-  return ((4 * shape.halfBaseDeg) / Math.PI) * Math.acos(Math.pow(ratio, 1 / shape.fullness));
-}
