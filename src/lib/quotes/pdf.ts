@@ -3,27 +3,22 @@ import path from 'node:path';
 import PDFDocument from 'pdfkit';
 import { palette } from '@/lib/palette';
 import { CUSTOMER_CAUTIONS, REFUND_NOTE } from './cautions';
+import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isTaxable, type QuoteLineKind } from './pricing';
 
 // The printable quote as a PDF (pdfkit). Fonts are the app's own Inter files (TrueType copies of the
 // WOFF2 the pages use, in src/app/fonts; pdfkit cannot subset the WOFF2 ones), so nothing is fetched
 // at run time. No costs or margins: the same figures the customer's page shows.
 
-export type QuoteDocument = {
+/** The money and dates are the quote record's own, so the document can never drift from it. */
+type QuoteFigures = Pick<QuoteRecord, 'subtotalCents' | 'taxRateBp' | 'taxCents' | 'totalCents' | 'depositCents' | 'paidCents' | 'refundedCents' | 'validUntil' | 'sentAt'>;
+
+export type QuoteDocument = QuoteFigures & {
   number: string;
   stateWord: string;
   customerName: string;
   vehicleLabel: string | null;
   lines: { kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; discountCents: number; totalCents: number }[];
-  subtotalCents: number;
-  taxRateBp: number;
-  taxCents: number;
-  totalCents: number;
-  depositCents: number;
-  paidCents: number;
-  refundedCents: number;
-  validUntil: string | null;
-  sentAt: string | null;
   replacedBy: string | null;
   shop: { name: string; address: string; phone: string; email: string; depositPolicyText: string };
 };
