@@ -31,7 +31,7 @@ describe('cam shortlist page in a real browser', () => {
     await rows.first().waitFor();
     expect(await rows.count()).toBeGreaterThanOrEqual(10);
     expect(await page.locator('canvas').count()).toBe(1);
-    await expect(page.getByText('Predictions are indicative: a model').isVisible()).resolves.toBe(true);
+    await expect(page.getByText('Predictions are indicative: an engine-cycle model').isVisible()).resolves.toBe(true);
 
     const firstCam = page.locator('table tbody tr').first().getByRole('button');
     await firstCam.focus();
