@@ -1,5 +1,6 @@
 import { RateLimiterMySQL, RateLimiterRes } from 'rate-limiter-flexible';
 import { getSequelize } from '@/lib/db/connection';
+import { retryOnLockContention } from '@/lib/db/lock-contention';
 
 // rate-limiter-flexible's MySQL store speaks the callback API of the `mysql` driver (`??` for
 // identifiers, `query(sql, values, cb)`); Sequelize here runs on the promise-based `mariadb` driver.
@@ -91,14 +92,18 @@ export function makeLimiter(options: LimiterOptions): RateLimiterMySQL {
 /**
  * consume() rejects with a RateLimiterRes when the limit is passed and with an Error when the store
  * failed; this keeps the first as an answer and lets the second propagate (a database fault).
+ * Concurrent consumes of one key can deadlock on the upsert's row lock (MariaDB rolls one back, 1213);
+ * that one is counted again rather than answered 500.
  */
 export async function consumePoint(limiter: RateLimiterMySQL, key: string, points = 1): Promise<{ allowed: boolean; res: RateLimiterRes }> {
-  try {
-    return { allowed: true, res: await limiter.consume(key, points) };
-  } catch (outcome) {
-    if (outcome instanceof RateLimiterRes) return { allowed: false, res: outcome };
-    throw outcome;
-  }
+  return retryOnLockContention(async () => {
+    try {
+      return { allowed: true, res: await limiter.consume(key, points) };
+    } catch (outcome) {
+      if (outcome instanceof RateLimiterRes) return { allowed: false, res: outcome };
+      throw outcome;
+    }
+  });
 }
 
 export function retryAfterSeconds(res: RateLimiterRes): number {

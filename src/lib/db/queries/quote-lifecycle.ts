@@ -1,7 +1,8 @@
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { isPastValidUntil, retryOnLockContention } from '@/lib/quotes/deposit-rules';
+import { retryOnLockContention } from '@/lib/db/lock-contention';
+import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { canRevise, canTransition, refusalMessage, revisionNumber, staffMoves, stateWord, type QuoteStatus, type TransitionVia } from '@/lib/quotes/lifecycle';
 import { db, Quote, QuoteLine } from '../models';
 import { getQuote, type QuoteRecord } from './quotes';

@@ -2,6 +2,7 @@ import { NextResponse } from 'next/server';
 import { recordAudit } from '@/lib/audit';
 import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
+import { retryOnLockContention } from '@/lib/db/lock-contention';
 import { db } from '@/lib/db/models';
 import { revokeUserSessions } from '@/lib/db/queries/staff-sessions';
 import { findUserById, lockActiveManagerIds, toStaffRow } from '@/lib/db/queries/users';
@@ -31,7 +32,8 @@ export async function PATCH(request: Request, context: { params: Promise<{ id: s
   const ip = clientIp(request.headers);
 
   try {
-    const updated = await db().transaction(async (transaction) => {
+    // The lock order below prevents most deadlocks; MariaDB can still pick a victim (gap locks), which runs again.
+    const updated = await retryOnLockContention(() => db().transaction(async (transaction) => {
       // Managers first, then the row: every role or active change takes the locks in the same order,
       // so concurrent changes queue instead of deadlocking, and the count below cannot go stale.
       const managers = change.role !== undefined || change.active !== undefined ? await lockActiveManagerIds(transaction) : [];
@@ -66,7 +68,7 @@ export async function PATCH(request: Request, context: { params: Promise<{ id: s
       }
       if (before.name !== user.name) await audit('user.renamed', 'name');
       return user;
-    });
+    }));
     return NextResponse.json({ user: toStaffRow(updated) });
   } catch (error) {
     if (error instanceof Refused) {
