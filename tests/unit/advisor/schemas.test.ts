@@ -5,6 +5,11 @@ import { CAM_LIMITS, CamCardSchema, CamCatalogueSchema } from '@/lib/schemas/cam
 import { formatZodIssues } from '@/lib/schemas/errors';
 import { dynoInput, truckCam } from './fixtures';
 
+// A fixed seed keeps CI repeatable (a property that fails once fails every time); FC_SEED explores others
+// locally. No shrinking in CI: shrinking a failure through the cycle model ran for over an hour; the
+// failing value and seed are reported as found.
+const FC = { seed: Number(process.env.FC_SEED ?? 20261203), endOnFailure: true } as const;
+
 const inRange = (r: { min: number; max: number }) => fc.double({ min: r.min, max: r.max, noNaN: true, noDefaultInfinity: true });
 const pick = <T,>(values: readonly T[]) => fc.constantFrom(...values);
 
@@ -74,7 +79,7 @@ describe('schemas under random and hostile input (fast-check)', () => {
           for (const i of issues) expect(typeof i.field === 'string' && i.field.length > 0 && i.message.length > 0).toBe(true);
         }
       }
-    }), { numRuns: 400 });
+    }), { ...FC, numRuns: 400 });
   });
 
   it('a valid profile with one field made hostile is rejected at that field (or accepted if still valid), never a throw', () => {
@@ -84,7 +89,7 @@ describe('schemas under random and hostile input (fast-check)', () => {
         const fields = formatZodIssues(r.error).map((i) => i.field);
         expect(fields.some((f) => f === path.join('.') || f.startsWith(`${path[0]}`))).toBe(true);
       }
-    }), { numRuns: 400 });
+    }), { ...FC, numRuns: 400 });
   });
 
   it('out-of-range numbers are rejected with the unit in the message', () => {
@@ -100,6 +105,22 @@ describe('schemas under random and hostile input (fast-check)', () => {
     const c = CamCardSchema.parse({ ...truckCam, rockerRatio: undefined, intakeAdvertised: null, springMaxLiftIn: null });
     expect(c.rockerRatio).toBe(1.7);
     expect(c.intakeAdvertised).toBeUndefined();
+  });
+
+  it('a huge exhaust lift on a tiny engine cannot empty the cylinder through both valves at once (was NaN; found by seed 873046452)', () => {
+    // The exact values fast-check found: the cylinder empties only at this corner, so they are kept unrounded.
+    const build = BuildProfileSchema.parse({
+      engine: { cylinders: 4, boreIn: 2.5, strokeIn: 2.5, rodLengthIn: 6.3, compressionRatio: 11.021676169890881, headMaterial: 'iron', intakeFlowCfm: 253.80204538495576, intakeManifold: 'truck', cylinderDeactivation: 'none' },
+      exhaust: { headers: 'long-tube', primaryIn: 1.5826838597250672, system: 'full' },
+      drivetrain: { transmission: 'automatic', stallRpm: 1000, axleRatio: 2.0000000000000053, topGearRatio: 0.8517972033768756, tireDiameterIn: 20.000000000000018 },
+      vehicle: { weightLb: 1500.0000000000018, powerBrakes: 'hydraulic' },
+      use: { primary: 'daily', idle: 'aggressive', fuelOctane: 90.70973827174862, emissionsRequired: false, cruiseMph: 20.00000000000005, budgetCents: 39688777 },
+      baselineCam: { id: 'm', name: 'odd grind', intakeDuration050: 299.9999999999997, exhaustDuration050: 195.68888824674156, intakeLiftIn: 0.25000000000000067, exhaustLiftIn: 0.43716696100495955, lsa: 100.00000000000023, intakeCenterline: 116.5762100443325 },
+    });
+    const cams = CamCatalogueSchema.parse([{ id: 1, name: 'odd grind 2', intakeDuration050: 150.0000000000001, exhaustDuration050: 225.51161483361258, intakeLiftIn: 0.4129960923815172, exhaustLiftIn: 0.8999999999999997, lsa: 108.5110447635302, intakeCenterline: 101.93121396768522 }]);
+    const r = rankCams(build, cams);
+    expect(Number.isFinite(r.rankings[0].score)).toBe(true);
+    expect(r.rankings[0].curve.every((p) => Number.isFinite(p.torqueLbFt) && p.torqueLbFt > 0)).toBe(true);
   });
 
   it('the ranking never throws for schema-valid input and always gives finite numbers', () => {
@@ -124,6 +145,6 @@ describe('schemas under random and hostile input (fast-check)', () => {
         for (const p of x.curve) expect(p.hp).toBe((p.torqueLbFt * p.rpm) / 5252);
       }
       // Each ranking now runs the engine-cycle model (tens of ms per cam under ts-jest): 40 random builds keep the suite in minutes.
-    }), { numRuns: 40 });
+    }), { ...FC, numRuns: 40 });
   });
 });

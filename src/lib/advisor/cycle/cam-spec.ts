@@ -29,13 +29,13 @@ export function camLobes(cam: CamCard): { intake: LobeShape; exhaust: LobeShape 
   };
 }
 
-export function camSpec(cam: CamCard, head: HeadSpec): CamSpec {
+export function camSpec(cam: CamCard, head: HeadSpec, crankStepDeg: number = CRANK_STEP_DEG): CamSpec {
   const { intake, exhaust } = camLobes(cam);
-  const slots = Math.round(720 / CRANK_STEP_DEG);
+  const slots = Math.round(720 / crankStepDeg);
   const intakeAreaM2 = new Float64Array(slots);
   const exhaustAreaM2 = new Float64Array(slots);
   for (let s = 0; s < slots; s++) {
-    const deg = s * CRANK_STEP_DEG;
+    const deg = s * crankStepDeg;
     intakeAreaM2[s] = effectiveAreaAtLiftM2(head.intakeFlow, valveLiftIn(intake, deg));
     exhaustAreaM2[s] = effectiveAreaAtLiftM2(head.exhaustFlow, valveLiftIn(exhaust, deg));
   }

@@ -8,11 +8,11 @@ import { simulateRpm, type CyclePoint, type Fitted, type WarmStart } from './sim
 export const SIMULATION_STEP_RPM = 500;
 
 /** The rpm points the cycle is simulated at: every 500 from the first grid rpm, and the last grid rpm. */
-export function simulationRpms(gridRpms: ArrayLike<number>): number[] {
+export function simulationRpms(gridRpms: ArrayLike<number>, stepRpm: number = SIMULATION_STEP_RPM): number[] {
   const first = gridRpms[0];
   const last = gridRpms[gridRpms.length - 1];
   const out: number[] = [];
-  for (let r = first; r < last - SIMULATION_STEP_RPM / 2; r += SIMULATION_STEP_RPM) out.push(r);
+  for (let r = first; r < last - stepRpm / 2; r += stepRpm) out.push(r);
   out.push(last);
   return out;
 }
@@ -20,8 +20,8 @@ export function simulationRpms(gridRpms: ArrayLike<number>): number[] {
 export type ModelCurve = { torqueLbFt: Float64Array; points: CyclePoint[] };
 
 /** Torque (lb·ft) over the grid for one cam in one engine, with the simulated points for "how it was reached". */
-export function modelCurve(engine: EngineSpec, cam: CamSpec, gridRpms: Float64Array, fitted: Fitted = FITTED): ModelCurve {
-  const rpms = simulationRpms(gridRpms);
+export function modelCurve(engine: EngineSpec, cam: CamSpec, gridRpms: Float64Array, fitted: Fitted = FITTED, stepRpm: number = SIMULATION_STEP_RPM): ModelCurve {
+  const rpms = simulationRpms(gridRpms, stepRpm);
   const points: CyclePoint[] = [];
   let warm: WarmStart | undefined;
   for (const rpm of rpms) {

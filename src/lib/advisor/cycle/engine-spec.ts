@@ -60,6 +60,7 @@ export type EngineSpec = {
   intakeRestrictionPaAtRef: number;
   fuel: { lhvMjPerKg: number; stoichAfr: number };
   researchOctane: number;
+  crankStepDeg: number;
   // Per crank step over 720°, firing TDC at 0: volume, its change, and the heat-transfer area.
   volumeM3: Float64Array;
   dVolumeM3: Float64Array;
@@ -83,7 +84,7 @@ function headOf(build: BuildProfile): HeadSpec {
 
 const area = (diameterIn: number) => (Math.PI / 4) * (diameterIn * M_PER_IN) ** 2;
 
-export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED): EngineSpec {
+export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED, crankStepDeg: number = CRANK_STEP_DEG): EngineSpec {
   const e = build.engine;
   const x = build.exhaust;
   const boreM = e.boreIn * M_PER_IN;
@@ -118,13 +119,13 @@ export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED
     return echoes;
   };
 
-  const slots = Math.round(720 / CRANK_STEP_DEG);
+  const slots = Math.round(720 / crankStepDeg);
   const volumeM3 = new Float64Array(slots);
   const dVolumeM3 = new Float64Array(slots);
   const wallAreaM2 = new Float64Array(slots);
   const clearanceHeightM = clearanceM3 / pistonAreaM2;
   for (let s = 0; s < slots; s++) {
-    const travelM = pistonTravelFromTdcIn(e.strokeIn, e.rodLengthIn, (s * CRANK_STEP_DEG) % 360) * M_PER_IN;
+    const travelM = pistonTravelFromTdcIn(e.strokeIn, e.rodLengthIn, (s * crankStepDeg) % 360) * M_PER_IN;
     volumeM3[s] = clearanceM3 + pistonAreaM2 * travelM;
     // Head and piston crown (10 % more than flat for the chamber's shape, our choice) plus the exposed liner.
     wallAreaM2[s] = 2.2 * pistonAreaM2 + Math.PI * boreM * (travelM + clearanceHeightM);
@@ -134,7 +135,7 @@ export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED
   const fuel = build.use.fuel === 'e85' ? FUELS.e85 : FUELS.gasoline;
   const aki = build.use.fuel === 'e85' ? Math.max(E85_EQUIVALENT_AKI, build.use.fuelOctane) : build.use.fuelOctane;
   return {
-    cylinders: e.cylinders, boreM, strokeM, sweptM3, clearanceM3, pistonAreaM2, head,
+    cylinders: e.cylinders, crankStepDeg, boreM, strokeM, sweptM3, clearanceM3, pistonAreaM2, head,
     runner: { lengthM: runnerLengthM, areaM2: runnerAreaM2 },
     primary: { lengthM: primaryLengthM, areaM2: primaryAreaM2 },
     exhaustEchoes,

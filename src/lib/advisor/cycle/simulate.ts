@@ -1,5 +1,5 @@
 import {
-  AMBIENT_PRESSURE_PA, AMBIENT_TEMPERATURE_K, CRANK_STEP_DEG, type FittedConstants, GAMMA_AIR, GAMMA_BURNED, GAMMA_UNBURNED,
+  AMBIENT_PRESSURE_PA, AMBIENT_TEMPERATURE_K, type FittedConstants, GAMMA_AIR, GAMMA_BURNED, GAMMA_UNBURNED,
   GAS_CONSTANT_J_PER_KG_K as R, WALL_TEMPERATURE_K,
 } from './constants';
 import { chargeHeatJ, startOfBurnDegAtdc, wiebeFractionBurned } from './combustion';
@@ -86,13 +86,14 @@ function fromBuffer(b: Buffer, dm: number, farAirShare: number, farT: number): {
 
 export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitted: Fitted, warm?: WarmStart): { point: CyclePoint; warm: WarmStart } {
   const slots = engine.volumeM3.length;
-  const dt = CRANK_STEP_DEG / (6 * rpm);
+  const stepDeg = engine.crankStepDeg;
+  const dt = stepDeg / (6 * rpm);
   const dtMs = dt * 1000;
   const meanPistonSpeed = (2 * engine.strokeM * rpm) / 60;
   const vol = engine.volumeM3;
   const dVol = engine.dVolumeM3;
   const wall = engine.wallAreaM2;
-  const start = Math.round(cam.intakeClosedDeg / CRANK_STEP_DEG);
+  const start = Math.round(cam.intakeClosedDeg / stepDeg);
   const tIn = engine.intakeTemperatureK;
 
   let exhaustTempK = warm?.exhaustTempK ?? 900;
@@ -144,10 +145,10 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
       for (let k = 0; ; k++) {
         const s = (start + k) % slots;
         if (k > 0 && s === exhaustOpens) break;
-        const deg = (start + k) * CRANK_STEP_DEG;
+        const deg = (start + k) * stepDeg;
         const v = vol[s];
         const p = (gas.m * R * gas.t) / v;
-        const nextBurned = wiebeFractionBurned(deg + CRANK_STEP_DEG - sob, burnDeg);
+        const nextBurned = wiebeFractionBurned(deg + stepDeg - sob, burnDeg);
         const dQ = q * (nextBurned - burned);
         const gU = GAMMA_UNBURNED;
         const pMotored = pRef * Math.pow(vRef / v, gU);
@@ -212,6 +213,13 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
       let dmEx = -mdotEx * dt;
       dmIn = Math.max(-capKg, Math.min(capKg, dmIn));
       dmEx = Math.max(-capKg, Math.min(capKg, dmEx));
+      // Both valves together may not empty more than that half either (coarse steps could empty the cylinder).
+      const outKg = Math.max(0, -dmIn) + Math.max(0, -dmEx);
+      if (outKg > capKg) {
+        const keep = capKg / outKg;
+        if (dmIn < 0) dmIn *= keep;
+        if (dmEx < 0) dmEx *= keep;
+      }
 
       let mass = gas.m;
       let air = gas.air;
@@ -238,7 +246,7 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
       const h = woschniCoefficientWPerM2K(engine.boreM, p, gas.t, w);
       energy -= h * wall[s] * (gas.t - WALL_TEMPERATURE_K) * dt;
       work += p * dVol[s];
-      const crankInCycle = s * CRANK_STEP_DEG;
+      const crankInCycle = s * stepDeg;
       if (crankInCycle >= 180 && crankInCycle < 540) pumpWork += p * dVol[s];
       gas.m = mass;
       gas.air = Math.max(0, Math.min(air, mass));
