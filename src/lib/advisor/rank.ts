@@ -20,6 +20,7 @@ import {
   totalScore,
 } from './scoring';
 import { revLimitRpm } from './rpm-grid';
+import { SCREENING, type RuledOut } from './screening';
 import type { BaselineResult, CamRanking, EngineFacts, RankingResult, RankOptions, Reason } from './types';
 import { overlap050Deg, seatOverlapDeg, valveEvents } from './valve-events';
 import { SCORING_WEIGHTS } from './weights';
@@ -36,17 +37,17 @@ type BuildWork = {
   cruiseRpm: number;
   pullAway: ReturnType<typeof pullAwayRpm>;
   weights: Float64Array;
+  torqueOf: (cam: CamCard) => Float64Array;
 };
 
-function prepare(build: BuildProfile): BuildWork {
-  const ctx = engineContext(build);
-  const baseTorque = torqueCurve(ctx, build.baselineCam);
+function prepare(build: BuildProfile, ctx = engineContext(build), torqueOf = (cam: CamCard) => torqueCurve(ctx, cam)): BuildWork {
+  const baseTorque = torqueOf(build.baselineCam);
   const cruiseRpm = buildCruiseRpm(build);
   const pullAway = pullAwayRpm(build);
   const baseLimitRpm = revLimitRpm(build, ctx.rpms[ctx.rpms.length - 1], false);
   return {
     build, ctx, baseTorque, basePeakHp: curvePeaks(ctx.rpms, baseTorque, baseLimitRpm).peakHp, baseLimitRpm, cruiseRpm, pullAway,
-    weights: powerbandWeights(build, ctx.rpms, pullAway.rpm, cruiseRpm),
+    weights: powerbandWeights(build, ctx.rpms, pullAway.rpm, cruiseRpm), torqueOf,
   };
 }
 
@@ -75,7 +76,7 @@ function bandPcts(rpms: Float64Array, evidence: Float64Array | null): Float64Arr
 function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRanking {
   const { build, ctx, baseTorque } = w;
   const rpms = ctx.rpms;
-  let torque = torqueCurve(ctx, cam);
+  let torque = w.torqueOf(cam);
   const fit0 = scoreFit(build, cam, overlap050Deg(cam));
   const limitRpm = revLimitRpm(build, rpms[rpms.length - 1], fit0.springsNeeded);
 
@@ -173,6 +174,50 @@ function baselineResult(w: BuildWork, includeCurves: boolean): BaselineResult {
   };
 }
 
+/** The highest total a cam could reach: full marks where the curve decides, the cheapest job its fit allows. */
+function upperBoundScore(w: BuildWork, cam: CamCard, options: RankOptions): number {
+  const { build, ctx } = w;
+  const fit = scoreFit(build, cam, overlap050Deg(cam));
+  const emissions = scoreEmissions(build, cam);
+  // Cost never rises when a need is left out (prices are counted as at least zero), so the converter,
+  // which only the curve can call for, is left out: a converter verdict "ahead at pull-away" asks for none.
+  const needs = camNeeds(fit, scoreConverter(build, w.pullAway.rpm, null, true)).map((n) => n.kind);
+  const raw = {
+    powerband: 100, converter: 100,
+    idle: scoreIdle(build, idleVacuumInHg(seatOverlapDeg(cam), ctx.cylinderCi)).score,
+    compression: scoreCompression(build, dynamicCompression(build, cam)).score,
+    fit: fit.score, emissions: emissions.score,
+    cost: scoreCost(build, cam, needs, options.needPriceCents).score,
+  };
+  return totalScore(raw, emissions.gated);
+}
+
+/** The large-catalogue path (see screening.ts): exact top ten, the cycle model run only where it can matter. */
+function boundedRankings(w: BuildWork, cams: readonly CamCard[], options: RankOptions): { rankings: CamRanking[]; ruledOut: RuledOut[] } {
+  const bounded = cams.map((cam) => ({ cam, bound: upperBoundScore(w, cam, options) })).sort((a, b) => b.bound - a.bound || compareIds(a.cam.id, b.cam.id));
+  const modelled: CamRanking[] = [];
+  const top: number[] = []; // the best modelled scores, highest first, at most protectedTop long
+  let next = 0;
+  for (; next < bounded.length; next++) {
+    const tenth = top.length >= SCREENING.protectedTop ? top[SCREENING.protectedTop - 1] : -Infinity;
+    if (bounded[next].bound + SCREENING.roundingPoints < tenth) break;
+    const r = analyseCam(w, bounded[next].cam, options);
+    modelled.push(r);
+    top.push(r.score);
+    top.sort((a, b) => b - a).splice(SCREENING.protectedTop);
+  }
+  const ruledOut = bounded.slice(next).map(({ cam, bound }) => ({ camId: cam.id, camName: cam.name, maxScore: roundTo(bound, 1) }));
+  return { rankings: sortRankings(modelled), ruledOut };
+}
+
+function compareRankings(a: CamRanking, b: CamRanking): number {
+  return b.score - a.score || b.subscores.powerband - a.subscores.powerband || compareIds(a.camId, b.camId);
+}
+
+function sortRankings(rankings: CamRanking[]): CamRanking[] {
+  return rankings.sort(compareRankings);
+}
+
 // Deterministic, locale-free order of ids for ties: by their text, code unit by code unit.
 function compareIds(a: CamCard['id'], b: CamCard['id']): number {
   const x = String(a);
@@ -186,8 +231,9 @@ function compareIds(a: CamCard['id'], b: CamCard['id']): number {
  */
 export function rankCams(build: BuildProfile, cams: readonly CamCard[], options: RankOptions = {}): RankingResult {
   const w = prepare(build);
-  const scored = cams.map((cam) => analyseCam(w, cam, options));
-  scored.sort((a, b) => b.score - a.score || b.subscores.powerband - a.subscores.powerband || compareIds(a.camId, b.camId));
+  const { rankings: scored, ruledOut } = cams.length <= SCREENING.fullModelUpToCams
+    ? { rankings: sortRankings(cams.map((cam) => analyseCam(w, cam, options))), ruledOut: [] }
+    : boundedRankings(w, cams, options);
   scored.forEach((r, i) => {
     r.rank = i + 1;
   });
@@ -196,6 +242,7 @@ export function rankCams(build: BuildProfile, cams: readonly CamCard[], options:
     baseline: baselineResult(w, options.includeCurves !== false),
     engine: engineFacts(w),
     notice: PREDICTION_NOTICE,
+    ruledOut,
   };
 }
 

@@ -107,4 +107,6 @@ export type RankingResult = {
   baseline: BaselineResult;
   engine: EngineFacts;
   notice: string;
+  /** Cams of a large catalogue that could not reach the top ten, with the most they could score (screening.ts). */
+  ruledOut: { camId: CamCard['id']; camName: string; maxScore: number }[];
 };
