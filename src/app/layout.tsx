@@ -23,12 +23,13 @@ export default async function RootLayout({ children }: { children: React.ReactNo
           Skip to content
         </a>
         <header className="border-b border-steel-300 bg-ink text-paper">
-          <div className="mx-auto flex max-w-6xl items-center justify-between gap-4 px-4 py-3">
+          {/* Wider than the pages below it so a manager's eleven links, name and sign-out fit one row at 1280 px. */}
+          <div className="mx-auto flex max-w-7xl items-center justify-between gap-4 px-4 py-3">
             <Link href="/" className="flex items-baseline gap-2 text-lg font-semibold tracking-tight">
               <span aria-hidden className="inline-block h-3 w-3 rotate-45 rounded-sm bg-ember-500" />
               Lobewise
             </Link>
-            <nav aria-label="Main" className="flex flex-wrap items-center justify-end gap-4 text-sm">
+            <nav aria-label="Main" className="flex flex-wrap items-center justify-end gap-x-3 gap-y-2 text-sm">
               <StaffHeaderNav />
             </nav>
           </div>

@@ -11,7 +11,11 @@ import type { BuildProfile } from '@/lib/schemas/build-profile';
 // which parts and labour operations those are, so the shortlist and the quote agree.
 
 export type PricedItem = CatalogueNeed & { priceCents: number };
-export type ShopRankingEntry = RankingResult['rankings'][number] & { camPriceCents: number; neededItems: PricedItem[]; neededItemsCents: number };
+export type ShopRankingEntry = RankingResult['rankings'][number] & {
+  camPriceCents: number; neededItems: PricedItem[]; neededItemsCents: number;
+  /** Units on the shop's shelf (the catalogue's stock on hand), and whether the cam is emissions-certified. */
+  stockOnHand: number; emissionsCertified: boolean;
+};
 export type ShopRanking = Omit<RankingResult, 'rankings'> & {
   rankings: ShopRankingEntry[];
 };
@@ -50,7 +54,7 @@ export async function rankForShop(
   { camIds, includeCurves = true }: { camIds?: number[]; includeCurves?: boolean } = {},
 ): Promise<{ ok: true; result: ShopRanking } | { ok: false; missingIds: number[] }> {
   // The shop's measured before/after results (dyno runs) nudge the predicted gains of the cams they were measured on.
-  const [{ cards, missingIds }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory()]);
+  const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory()]);
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;
   const result = rankCams(build, cards, { history, needPriceCents: needPricesCents(rules, laborRateCents), includeCurves });
@@ -62,7 +66,14 @@ export async function rankForShop(
       build: { cylinderDeactivation: build.engine.cylinderDeactivation, stallRpm: build.drivetrain.stallRpm },
       crossoverRpm: ranking.crossoverRpm,
     }).map((need) => ({ ...need, priceCents: itemPriceCents(need, laborRateCents) }));
-    return { ...ranking, camPriceCents: card.priceCents ?? 0, neededItems, neededItemsCents: neededItems.reduce((sum, item) => sum + item.priceCents, 0) };
+    return {
+      ...ranking,
+      camPriceCents: card.priceCents ?? 0,
+      neededItems,
+      neededItemsCents: neededItems.reduce((sum, item) => sum + item.priceCents, 0),
+      stockOnHand: stockOnHand.get(String(ranking.camId)) ?? 0,
+      emissionsCertified: card.emissionsCertified === true,
+    };
   });
   return { ok: true, result: { ...result, rankings } };
 }

@@ -78,9 +78,10 @@ describe('dyno runs', () => {
   });
 
   it('answers 422 naming each field and why', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'sideways', baroKpa: 200, humidityPct: 40, curve: points([[3000, 300], [2900, 310], [4000, 320]]) }).expect(422);
+    const res = await post(tech, { buildId: 2, phase: 'sideways', dynoType: 'rollers', baroKpa: 200, humidityPct: 40, curve: points([[3000, 300], [2900, 310], [4000, 320]]) }).expect(422);
     const fields = (res.body.errors as { field: string; message: string }[]).map((e) => e.field).sort();
-    expect(fields).toEqual(['airTempC', 'baroKpa', 'curve.1.rpm', 'phase']);
+    expect(fields).toEqual(['airTempC', 'baroKpa', 'curve.1.rpm', 'dynoType', 'phase']);
+    expect(res.body.errors.find((e: { field: string }) => e.field === 'dynoType').message).toBe('dynoType must be one of: chassis, engine');
     expect(res.body.errors.find((e: { field: string }) => e.field === 'baroKpa').message).toBe('barometric pressure must be at most 110 kPa');
     const noBuild = await post(tech, { buildId: 999999, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
     expect(noBuild.body.errors).toEqual([{ field: 'buildId', message: 'no build with id 999999' }]);
@@ -97,7 +98,8 @@ describe('dyno runs', () => {
     const res = await post(tech, { buildId: 2, phase: 'before', ...BEFORE_AIR, curve: BEFORE, notes: 'Baseline, stock cam', runAt: hoursAgo(2) }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
-    expect(run).toMatchObject({ buildId: 2, quoteId: 2, phase: 'before' });
+    // Left out, the kind of dyno is a chassis dyno: every run before the flag existed was one.
+    expect(run).toMatchObject({ buildId: 2, quoteId: 2, phase: 'before', dynoType: 'chassis' });
     // Definition of horsepower: hp = lb·ft · rpm / 5252 on every point; 345 · 5000 / 5252 = 328.446 hp is the peak.
     for (const p of run.curve) expect(p.hp).toBeCloseTo((p.torqueLbFt * p.rpm) / 5252, 9);
     expect(run.observed.peakHp).toBeCloseTo(328.446, 3);
@@ -111,7 +113,7 @@ describe('dyno runs', () => {
   });
 
   it('the after pull on F9-219 (the quote’s cam, filled in from the job) corrects down on a cooler, denser day', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'after', ...AFTER_AIR, curve: AFTER, runAt: hoursAgo(1) }).expect(201);
+    const res = await post(tech, { buildId: 2, phase: 'after', dynoType: 'chassis', ...AFTER_AIR, curve: AFTER, runAt: hoursAgo(1) }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
     expect(run).toMatchObject({ camId: f9Id, quoteId: 2, phase: 'after' });
@@ -137,6 +139,26 @@ describe('dyno runs', () => {
     const [lo, hi] = [Math.min(h.modelGainPctPeakHp, h.measuredGainPctPeakHp), Math.max(h.modelGainPctPeakHp, h.measuredGainPctPeakHp)];
     expect(h.adjustedGainPctPeakHp).toBeGreaterThan(lo);
     expect(h.adjustedGainPctPeakHp).toBeLessThan(hi);
+  });
+
+  it('an engine-dyno pull is never compared with the chassis-dyno before pull', async () => {
+    // At the flywheel the same cam reads far more than at the wheels: 430 · 6000 / 5252 = 491.2 hp observed.
+    // Paired with the chassis before pull it would claim about +40 %; the measured gain must stay +12.90 %.
+    const flywheel = points([[3000, 420], [4000, 450], [5000, 445], [6000, 430]]);
+    const res = await post(tech, { buildId: 2, phase: 'after', dynoType: 'engine', ...AFTER_AIR, curve: flywheel, runAt: hoursAgo(0.5) }).expect(201);
+    created.push(res.body.id);
+    expect(res.body).toMatchObject({ dynoType: 'engine', phase: 'after', camId: f9Id });
+    expect((await DynoRun.findByPk(res.body.id))!.dynoType).toBe('engine');
+    const h = (await rankF9(counter)).history!;
+    expect(h.measuredGainPctPeakHp).toBeCloseTo(12.90, 1);
+    // An engine-dyno before pull completes the engine pair: 410 · 5000 / 5252 = 390.3 hp observed, so the
+    // flywheel gain (491.2 / 390.3 − 1 = +25.9 %, both on the after run's air) now counts as its own job beside the wheel one.
+    const stand = points([[3000, 400], [4000, 415], [5000, 410], [5500, 380]]);
+    const before = await post(tech, { buildId: 2, phase: 'before', dynoType: 'engine', ...AFTER_AIR, curve: stand, runAt: hoursAgo(0.75) }).expect(201);
+    created.push(before.body.id);
+    const both = (await rankF9(counter)).history!;
+    expect(both.measuredGainPctPeakHp).toBeGreaterThan(h.measuredGainPctPeakHp);
+    expect(both.measuredGainPctPeakHp).toBeLessThan(25.9);
   });
 
   it('the job page shows the technician the build sheet and keeps counter staff out', async () => {

@@ -107,19 +107,30 @@ describe('POST /api/leads with a full answer set', () => {
     expect((await request(appUrl).get('/ask/result/short')).status).toBe(404);
   });
 
-  it('ranks the emissions case conservatively: a "not sure" about emissions flags non-certified cams', async () => {
-    const res = await request(appUrl).post('/api/leads').send({ ...fullAnswers, emissions: 'unsure', engine: 'unsure', email: email('unsure'), phone: undefined });
-    expect(res.status).toBe(201);
-    createdEmails.push(email('unsure'));
-    // Every cam shown either is certified or says plainly that it is only an option without the test.
-    for (const entry of res.body.shortlist.entries as Entry[]) {
-      if (entry.emissionsCertified) expect(entry.reasons.join(' ')).toContain('It is certified for emissions-tested road use');
-      else {
-        expect(entry.reasons.join(' ')).toContain('only an option if your vehicle does not have to pass that test');
-        expect(entry.cautions.join(' ')).toMatch(/may not be allowed/);
+  it('a vehicle that must pass emissions ("not sure" counts as yes) is shown certified cams only; one that need not pass is not limited', async () => {
+    const certified = (await sequelize.query<{ id: number }>('SELECT id FROM cams WHERE emissions_certified = 1 AND is_factory_baseline = 0 AND active = 1 AND archived_at IS NULL', { type: QueryTypes.SELECT })).map((r) => r.id);
+    // The demo shop stocks fewer certified cams than a full shortlist: without the filter an uncertified one would be listed.
+    expect(certified.length).toBeLessThan(3);
+    for (const emissions of ['unsure', 'yes']) {
+      const res = await request(appUrl).post('/api/leads').send({ ...fullAnswers, emissions, engine: 'unsure', email: email(`emissions-${emissions}`), phone: undefined });
+      expect(res.status).toBe(201);
+      const entries = res.body.shortlist.entries as Entry[];
+      expect(entries.map((e) => e.rank)).toEqual(certified.map((_, i) => i + 1));
+      expect(entries.map((e) => Number(e.camId)).sort()).toEqual([...certified].sort());
+      for (const entry of entries) {
+        expect(entry.emissionsCertified).toBe(true);
+        expect(entry.reasons.join(' ')).toContain('It is certified for emissions-tested road use');
       }
+      expect(res.body.shortlist.engineLiters).toBe(5.3);
+      const page = await request(appUrl).get(res.body.resultUrl).expect(200);
+      expect(page.text).toContain('only cams certified for emissions-tested road use are listed');
+      expect(page.text).not.toContain('not certified for emissions-tested road use');
     }
-    expect(res.body.shortlist.engineLiters).toBe(5.3);
+    // The full answer set above said "no": its three choices are not limited to certified cams.
+    const stored = await sequelize.query<{ shortlist: string | { entries: Entry[] } }>('SELECT shortlist FROM leads WHERE email = ?', { replacements: [fullAnswers.email], type: QueryTypes.SELECT });
+    const list = typeof stored[0].shortlist === 'string' ? (JSON.parse(stored[0].shortlist) as { entries: Entry[] }) : stored[0].shortlist;
+    expect(list.entries).toHaveLength(3);
+    expect(list.entries.some((e) => !e.emissionsCertified)).toBe(true);
   });
 });
 

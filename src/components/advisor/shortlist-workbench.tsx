@@ -27,8 +27,11 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
   const { data, error, isLoading } = useSWR(build ? ['/api/advisor/rank', build.profile] : null, rank, { revalidateOnFocus: false });
   const [openCamId, setOpenCamId] = useState<string | null>(null);
   const [charted, setCharted] = useState<string[] | null>(null);
+  // Off at first: the whole ranking, uncertified cams marked; the counter narrows it for a road-legal build.
+  const [certifiedOnly, setCertifiedOnly] = useState(false);
+  const shown = useMemo(() => (data ? data.rankings.filter((r) => !certifiedOnly || r.emissionsCertified) : []), [data, certifiedOnly]);
 
-  const chartIds = useMemo(() => charted ?? data?.rankings.slice(0, 3).map((r) => String(r.camId)) ?? [], [charted, data]);
+  const chartIds = useMemo(() => charted ?? shown.slice(0, 3).map((r) => String(r.camId)), [charted, shown]);
 
   if (builds.length === 0) {
     return <p className="rounded border border-steel-300 bg-paper-raised p-4">No saved builds yet. Record a customer’s engine combination first, then come back here for the shortlist.</p>;
@@ -47,7 +50,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
         <select
           className="rounded border border-steel-300 bg-paper-raised px-3 py-2 font-normal"
           value={buildId ?? ''}
-          onChange={(e) => { setBuildId(Number(e.target.value)); setCharted(null); setOpenCamId(null); }}
+          onChange={(e) => { setBuildId(Number(e.target.value)); setCharted(null); setOpenCamId(null); setCertifiedOnly(false); }}
         >
           {buildId === null ? <option value="" disabled>Pick a build…</option> : null}
           {builds.map((b) => <option key={b.id} value={b.id}>{b.label}</option>)}
@@ -65,16 +68,25 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
             <h2 id="chart-heading" className="text-sm font-semibold">Predicted curves against the cam in the engine now</h2>
             <PowerChart
               baseline={{ label: `Now: ${data.baseline.camName}`, points: data.baseline.curve }}
-              candidates={data.rankings.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ label: `#${r.rank} ${r.camName}`, points: r.curve }))}
+              candidates={shown.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ label: `#${r.rank} ${r.camName}`, points: r.curve }))}
               markers={[
                 ...((build.profile.drivetrain.stallRpm ?? 0) > 0 ? [{ label: 'Converter stall', rpm: build.profile.drivetrain.stallRpm ?? 0 }] : []),
-                ...data.rankings.filter((r) => chartIds.includes(String(r.camId)) && r.crossoverRpm !== null).map((r) => ({ label: `#${r.rank} crossover`, rpm: r.crossoverRpm! })),
+                ...shown.filter((r) => chartIds.includes(String(r.camId)) && r.crossoverRpm !== null).map((r) => ({ label: `#${r.rank} crossover`, rpm: r.crossoverRpm! })),
               ]}
               band={{ fromRpm: data.engine.cruiseRpm, toRpm: Math.max(data.engine.cruiseRpm + 200, data.engine.pullAwayRpm), label: `Where it’s driven (cruise ${Math.round(data.engine.cruiseRpm)} rpm)` }}
             />
             <p className="mt-2 text-xs text-ink-muted">{notice}</p>
           </section>
 
+          <div className="flex flex-wrap items-center gap-x-4 gap-y-1 text-sm">
+            <label className="flex items-center gap-2">
+              <input type="checkbox" checked={certifiedOnly} onChange={(e) => { setCertifiedOnly(e.target.checked); setCharted(null); }} />
+              Only emissions-certified cams
+            </label>
+            <span role="status" className="text-ink-soft">
+              {certifiedOnly ? `${shown.length} of ${data.rankings.length} cams shown; ${data.rankings.length - shown.length} not certified left out.` : `All ${data.rankings.length} cams shown.`}
+            </span>
+          </div>
           <div className="overflow-x-auto rounded-lg border border-steel-300 bg-paper-raised">
             <table className="w-full text-sm">
               <caption className="sr-only">Cams ranked for this build</caption>
@@ -88,11 +100,12 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                   <th scope="col" className="px-3 py-2 text-right">Peak torque</th>
                   <th scope="col" className="px-3 py-2 text-right">Low-end loss</th>
                   <th scope="col" className="px-3 py-2 text-right">Cam + needs</th>
+                  <th scope="col" className="px-3 py-2 text-right">On hand</th>
                   <th scope="col" className="px-3 py-2">Chart</th>
                 </tr>
               </thead>
               <tbody className="spec">
-                {data.rankings.map((r) => {
+                {shown.map((r) => {
                   const id = String(r.camId);
                   const open = openCamId === id;
                   return (
@@ -112,13 +125,14 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                         <td className="px-3 py-2 text-right">{torqueText(r.predicted.peakTorqueLbFt)}</td>
                         <td className="px-3 py-2 text-right">{r.predicted.lowEndLossPct.toFixed(1)} %</td>
                         <td className="px-3 py-2 text-right">{dollars(r.camPriceCents + r.neededItemsCents)}</td>
+                        <td className="whitespace-nowrap px-3 py-2 text-right">{r.stockOnHand > 0 ? `${r.stockOnHand} in stock` : <span className="font-sans text-caution-700">None: order</span>}</td>
                         <td className="px-3 py-2">
                           <input type="checkbox" aria-label={`Show ${r.camName} on the chart`} checked={chartIds.includes(id)} onChange={() => toggleChart(id)} />
                         </td>
                       </tr>
                       {open ? (
                         <tr>
-                          <td colSpan={9} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} buildId={buildId ?? undefined} /></td>
+                          <td colSpan={10} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} buildId={buildId ?? undefined} /></td>
                         </tr>
                       ) : null}
                     </RowGroup>

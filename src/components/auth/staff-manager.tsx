@@ -50,59 +50,63 @@ export function StaffManager({ selfId }: { selfId: number }) {
         {error ? <Notice tone="fault">{(error as Error).message}</Notice> : null}
         {isLoading ? <p className="text-sm text-ink-muted">Loading the staff list…</p> : null}
         {data ? (
-          <table className="w-full border-collapse text-sm">
-            <thead>
-              <tr className="border-b border-steel-300 text-left text-ink-muted">
-                <th scope="col" className="py-2 pr-3 font-semibold">Name</th>
-                <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
-                <th scope="col" className="py-2 pr-3 font-semibold">Role</th>
-                <th scope="col" className="py-2 pr-3 font-semibold">State</th>
-                <th scope="col" className="py-2 pr-3 font-semibold">Last sign-in</th>
-                <th scope="col" className="py-2 font-semibold"><span className="sr-only">Actions</span></th>
-              </tr>
-            </thead>
-            <tbody>
-              {data.map((row) => {
-                const state = stateOf(row);
-                const self = row.id === selfId;
-                return (
-                  <tr key={row.id} className="border-b border-steel-100 align-middle">
-                    <td className="py-1.5 pr-3">{row.name}{self ? <span className="ml-1 text-ink-muted">(you)</span> : null}</td>
-                    <td className="spec py-1.5 pr-3">{row.email}</td>
-                    <td className="py-1.5 pr-3">
-                      <label className="sr-only" htmlFor={`role-${row.id}`}>Role of {row.name}</label>
-                      <select
-                        id={`role-${row.id}`}
-                        value={row.role}
-                        disabled={self || busyId === row.id}
-                        onChange={(event) => change(row, { role: event.target.value as Role }, `${row.name} is now ${ROLE_LABELS[event.target.value as Role].toLowerCase()}.`)}
-                        className="rounded border border-steel-300 bg-paper-raised px-2 py-1"
-                      >
-                        {STAFF_ROLE_VALUES.map((role) => <option key={role} value={role}>{ROLE_LABELS[role]}</option>)}
-                      </select>
-                    </td>
-                    <td className="py-1.5 pr-3"><span className={`rounded px-2 py-0.5 text-xs font-semibold ${state.style}`}>{state.word}</span></td>
-                    <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateFormat.format(new Date(row.lastSignInAt)) : 'never'}</td>
-                    <td className="py-1.5 text-right">
-                      {self ? null : (
-                        <button
-                          type="button"
-                          disabled={busyId === row.id}
-                          onClick={() => {
-                            if (row.active && !window.confirm(`Switch off ${row.name}'s account? They are signed out at once.`)) return;
-                            void change(row, { active: !row.active }, row.active ? `${row.name}'s account is switched off and signed out.` : `${row.name}'s account is switched on again.`);
-                          }}
-                          className={`rounded px-3 py-1 text-xs font-semibold ring-1 ${row.active ? 'text-fault-700 ring-fault-700/50 hover:bg-fault-100' : 'text-ok-700 ring-ok-700/50 hover:bg-ok-100'}`}
+          // A phone scrolls the table, not the page (each row carries a role picker and buttons); relative keeps
+          // the screen-reader-only header text, positioned absolutely, inside the scrolling box.
+          <div className="relative overflow-x-auto">
+            <table className="w-full border-collapse text-sm">
+              <thead>
+                <tr className="border-b border-steel-300 text-left text-ink-muted">
+                  <th scope="col" className="py-2 pr-3 font-semibold">Name</th>
+                  <th scope="col" className="py-2 pr-3 font-semibold">E-mail</th>
+                  <th scope="col" className="py-2 pr-3 font-semibold">Role</th>
+                  <th scope="col" className="py-2 pr-3 font-semibold">State</th>
+                  <th scope="col" className="py-2 pr-3 font-semibold">Last sign-in</th>
+                  <th scope="col" className="py-2 font-semibold"><span className="sr-only">Actions</span></th>
+                </tr>
+              </thead>
+              <tbody>
+                {data.map((row) => {
+                  const state = stateOf(row);
+                  const self = row.id === selfId;
+                  return (
+                    <tr key={row.id} className="border-b border-steel-100 align-middle">
+                      <td className="py-1.5 pr-3">{row.name}{self ? <span className="ml-1 text-ink-muted">(you)</span> : null}</td>
+                      <td className="spec py-1.5 pr-3">{row.email}</td>
+                      <td className="py-1.5 pr-3">
+                        <label className="sr-only" htmlFor={`role-${row.id}`}>Role of {row.name}</label>
+                        <select
+                          id={`role-${row.id}`}
+                          value={row.role}
+                          disabled={self || busyId === row.id}
+                          onChange={(event) => change(row, { role: event.target.value as Role }, `${row.name} is now ${ROLE_LABELS[event.target.value as Role].toLowerCase()}.`)}
+                          className="rounded border border-steel-300 bg-paper-raised px-2 py-1"
                         >
-                          {row.active ? 'Switch off' : 'Switch on'}
-                        </button>
-                      )}
-                    </td>
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
+                          {STAFF_ROLE_VALUES.map((role) => <option key={role} value={role}>{ROLE_LABELS[role]}</option>)}
+                        </select>
+                      </td>
+                      <td className="py-1.5 pr-3"><span className={`rounded px-2 py-0.5 text-xs font-semibold ${state.style}`}>{state.word}</span></td>
+                      <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateFormat.format(new Date(row.lastSignInAt)) : 'never'}</td>
+                      <td className="py-1.5 text-right">
+                        {self ? null : (
+                          <button
+                            type="button"
+                            disabled={busyId === row.id}
+                            onClick={() => {
+                              if (row.active && !window.confirm(`Switch off ${row.name}'s account? They are signed out at once.`)) return;
+                              void change(row, { active: !row.active }, row.active ? `${row.name}'s account is switched off and signed out.` : `${row.name}'s account is switched on again.`);
+                            }}
+                            className={`rounded px-3 py-1 text-xs font-semibold ring-1 ${row.active ? 'text-fault-700 ring-fault-700/50 hover:bg-fault-100' : 'text-ok-700 ring-ok-700/50 hover:bg-ok-100'}`}
+                          >
+                            {row.active ? 'Switch off' : 'Switch on'}
+                          </button>
+                        )}
+                      </td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
         ) : null}
       </section>
 

@@ -162,8 +162,9 @@ export function CamList({ suppliers, canEdit }: { suppliers: { id: number; name:
                 </td>
                 <td className={tdClass}>{cam.name}</td>
                 <td className={tdClass}>{cam.supplierName ?? <span className="text-ink-muted">reference card</span>}</td>
-                <td className={`${tdClass} spec text-right`}>{deg(cam.intakeDuration050)} / {deg(cam.exhaustDuration050)}</td>
-                <td className={`${tdClass} spec text-right`}>{inches(cam.intakeLiftIn)} / {inches(cam.exhaustLiftIn)}</td>
+                {/* Intake / exhaust pairs read as one value: never broken over two lines. */}
+                <td className={`${tdClass} spec whitespace-nowrap text-right`}>{deg(cam.intakeDuration050)} / {deg(cam.exhaustDuration050)}</td>
+                <td className={`${tdClass} spec whitespace-nowrap text-right`}>{inches(cam.intakeLiftIn)} / {inches(cam.exhaustLiftIn)}</td>
                 <td className={`${tdClass} spec text-right`}>{deg(cam.lsa)}</td>
                 <td className={`${tdClass} spec text-right`}>{formatCents(cam.priceCents)}</td>
                 <td className={`${tdClass} spec text-right`}>{cam.stockOnHand}</td>

@@ -80,6 +80,7 @@ export function SettingsForm({ settings }: { settings: Rec }) {
     { name: 'depositMinCents', label: 'Deposit minimum', kind: 'money', unit: '$' },
     { name: 'depositMaxCents', label: 'Deposit maximum', kind: 'money', unit: '$' },
     { name: 'depositPolicyText', label: 'Deposit policy (shown to the customer before paying)', kind: 'textarea' },
+    { name: 'leadStaleDays', label: 'Flag a new lead nobody has contacted after', kind: 'integer', unit: 'days', hint: `${S.leadStaleDays.min}–${S.leadStaleDays.max}; a note, or moving it past New, counts as contact` },
   ];
   return (
     <div className="flex flex-col gap-3">

@@ -277,7 +277,12 @@ function WishesSection() {
       <Choice name="profile.use.idle" label="Idle" options={opts(IDLE_WISHES)} />
       <NumberField name="profile.use.fuelOctane" label="Pump fuel octane, (R+M)/2" unit="AKI" range={B.fuelOctane} decimals={false} />
       <Choice name="profile.use.emissionsRequired" label="Must it stay road-legal for emissions?" options={[['yes', 'Yes, road-legal emissions needed'], ['no', 'No (off-road or exempt)']]} />
-      <NumberField name="profile.use.budgetCents" label="Budget for the whole job" unit="$" hint="Dollars, parts and labour together." />
+      <Choice name="profile.use.budgetKnown" label="Budget" options={[['figure', 'The customer named a figure'], ['unsure', 'Not sure yet']]} />
+      {u.budgetKnown === 'figure' ? (
+        <NumberField name="profile.use.budgetCents" label="Budget for the whole job" unit="$" hint="Dollars, parts and labour together." />
+      ) : (
+        <p className="self-end text-sm text-ink-soft">No budget: the shortlist judges no cam against a figure; ask again before quoting.</p>
+      )}
       <div className="flex flex-col gap-2 sm:col-span-2 lg:col-span-4">
         {u.emissionsRequired === 'yes' ? (
           <Notice tone="caution">

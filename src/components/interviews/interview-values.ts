@@ -26,8 +26,9 @@ export type InterviewValues = {
     exhaust: { headers: S; primaryIn: S; system: S };
     drivetrain: { transmission: S; stallRpm: S; launchRpm: S; axleRatio: S; topGearRatio: S; tireDiameterIn: S };
     vehicle: { weightLb: S; powerBrakes: S };
-    // budgetCents holds dollars as typed; the payload turns them into whole cents.
-    use: { primary: S; idle: S; fuelOctane: S; emissionsRequired: 'yes' | 'no'; cruiseMph: S; budgetCents: S };
+    // budgetCents holds dollars as typed; the payload turns them into whole cents. budgetKnown 'unsure' is
+    // the customer's "not sure yet": no budget is sent (stored as 0, "none given").
+    use: { primary: S; idle: S; fuelOctane: S; emissionsRequired: 'yes' | 'no'; cruiseMph: S; budgetKnown: 'figure' | 'unsure'; budgetCents: S };
     baselineCam: {
       id: S; name: S; intakeDuration050: S; exhaustDuration050: S; intakeAdvertised: S; exhaustAdvertised: S;
       intakeLiftIn: S; exhaustLiftIn: S; lsa: S; intakeCenterline: S; rockerRatio: S; springMaxLiftIn: S;
@@ -115,7 +116,7 @@ export function blankInterview(cards: BaselineCard[]): InterviewValues {
       exhaust: { headers: 'manifold', primaryIn: '', system: 'full-with-cats' },
       drivetrain: { transmission: 'automatic', stallRpm: '2000', launchRpm: '', axleRatio: '3.42', topGearRatio: '0.70', tireDiameterIn: '31' },
       vehicle: { weightLb: '5200', powerBrakes: 'vacuum' },
-      use: { primary: 'daily', idle: 'smooth', fuelOctane: '87', emissionsRequired: 'yes', cruiseMph: '65', budgetCents: '' },
+      use: { primary: 'daily', idle: 'smooth', fuelOctane: '87', emissionsRequired: 'yes', cruiseMph: '65', budgetKnown: 'figure', budgetCents: '' },
       baselineCam: { id: 'typed', name: '', intakeDuration050: '', exhaustDuration050: '', intakeAdvertised: '', exhaustAdvertised: '', intakeLiftIn: '', exhaustLiftIn: '', lsa: '', intakeCenterline: '', rockerRatio: '1.7', springMaxLiftIn: '' },
     },
   };
@@ -134,7 +135,9 @@ export function valuesFromBuild(build: { customerId: number; customerName: strin
   const use = section('use');
   use.emissionsRequired = p.use?.emissionsRequired === false ? 'no' : 'yes';
   const budget = Number(p.use?.budgetCents);
-  use.budgetCents = Number.isFinite(budget) ? String(budget / 100) : '';
+  // None stored, or 0 (the schema's "none given"), is the customer's "not sure yet".
+  use.budgetKnown = Number.isFinite(budget) && budget > 0 ? 'figure' : 'unsure';
+  use.budgetCents = use.budgetKnown === 'figure' ? String(budget / 100) : '';
   return {
     customerMode: 'existing',
     customerId: String(build.customerId),
@@ -193,7 +196,7 @@ export function payloadFromValues(values: InterviewValues, mode: 'create' | 'edi
         fuelOctane: num(p.use.fuelOctane),
         emissionsRequired: p.use.emissionsRequired === 'yes',
         cruiseMph: num(p.use.cruiseMph),
-        budgetCents: budgetDollars === undefined ? undefined : Math.round(budgetDollars * 100),
+        budgetCents: p.use.budgetKnown === 'unsure' || budgetDollars === undefined ? undefined : Math.round(budgetDollars * 100),
       },
       baselineCam: {
         id: values.baselineCamId || 'typed',
@@ -217,7 +220,7 @@ const budgetMax = BUILD_LIMITS.budgetCents.max / 100;
 
 /** The budget is typed in dollars; say its limit in dollars too. */
 function reword(field: string, message: string): string {
-  if (field === 'profile.use.budgetCents') return message.includes('required') ? 'budget is required ($)' : `budget must be between $0 and $${budgetMax.toLocaleString('en-US')}`;
+  if (field === 'profile.use.budgetCents') return message.includes('required') ? 'budget is required ($), or choose “Not sure yet”' : `budget must be between $0 and $${budgetMax.toLocaleString('en-US')}`;
   return message;
 }
 
@@ -234,9 +237,11 @@ export function nestErrors(list: { field: string; message: string }[]): FormikEr
 export function validateWith(schema: z.ZodType, mode: 'create' | 'edit') {
   return (values: InterviewValues): FormikErrors<InterviewValues> => {
     const result = schema.safeParse(payloadFromValues(values, mode));
-    if (result.success) return {};
-    const seen = new Set<string>();
-    const list: { field: string; message: string }[] = [];
+    // The schema takes a missing budget as "none given"; the form asks for a figure unless "not sure" was picked.
+    const budgetMissing = values.profile.use.budgetKnown === 'figure' && num(values.profile.use.budgetCents) === undefined;
+    const list: { field: string; message: string }[] = budgetMissing ? [{ field: 'profile.use.budgetCents', message: 'budget is required' }] : [];
+    if (result.success) return nestErrors(list);
+    const seen = new Set<string>(list.map((l) => l.field));
     for (const issue of result.error.issues) {
       const field = issue.path.map(String).join('.') || '(body)';
       if (seen.has(field)) continue;

@@ -5,6 +5,7 @@ import useSWR from 'swr';
 import { PowerChart, type ChartCurve } from '@/components/advisor/power-chart';
 import { buttonClass, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
+import { DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_DIGITS, AIR_UNIT_TEXT, baroIn, tempIn, type AirUnits } from '@/lib/dyno/units';
 import { DynoRunForm } from './dyno-run-form';
 
@@ -31,7 +32,7 @@ const when = (iso: string) => iso.slice(0, 16).replace('T', ' ');
 
 function curveOf(run: DynoRunView): ChartCurve | null {
   if (!run.correctedCurve) return null;
-  return { label: `${run.phase === 'before' ? 'Before' : 'After'} · ${run.camName ?? 'cam not named'} · ${when(run.runAt)} (measured, ${run.correction ? STANDARD_NAMES[run.correction.standard] : "uncorrected"})`, points: run.correctedCurve };
+  return { label: `${run.phase === 'before' ? 'Before' : 'After'} · ${DYNO_TYPE_WORDS[run.dynoType].short.toLowerCase()} dyno · ${run.camName ?? 'cam not named'} · ${when(run.runAt)} (measured, ${run.correction ? STANDARD_NAMES[run.correction.standard] : "uncorrected"})`, points: run.correctedCurve };
 }
 
 export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: number }) {
@@ -42,7 +43,11 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
   const runs = data ?? [];
   const before = runs.filter((r) => r.phase === 'before' && r.correctedCurve).at(-1);
   const baseline = before ? curveOf(before) : null;
-  const afters = runs.filter((r) => r.phase === 'after').map(curveOf).filter((c): c is ChartCurve => c !== null);
+  // Wheel and flywheel figures differ by the driveline's loss: the chart compares one kind of dyno only.
+  const chartType = before?.dynoType ?? runs.filter((r) => r.phase === 'after' && r.correctedCurve).at(-1)?.dynoType ?? 'chassis';
+  const afterRuns = runs.filter((r) => r.phase === 'after' && r.correctedCurve);
+  const afters = afterRuns.filter((r) => r.dynoType === chartType).map(curveOf).filter((c): c is ChartCurve => c !== null);
+  const leftOut = afterRuns.length - afters.length;
 
   async function remove(run: DynoRunView) {
     if (!window.confirm(`Delete the ${run.phase} run of ${when(run.runAt)}? The audit log keeps what it said.`)) return;
@@ -66,6 +71,7 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
           <thead>
             <tr>
               <th scope="col" className={thClass}>Pull</th>
+              <th scope="col" className={thClass}>Dyno</th>
               <th scope="col" className={thClass}>When (UTC)</th>
               <th scope="col" className={thClass}>Cam</th>
               <th scope="col" className={thClass}>Air</th>
@@ -80,6 +86,7 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
             {runs.map((run) => (
               <tr key={run.id}>
                 <td className={tdClass}>{run.phase === 'before' ? 'Before' : 'After'}</td>
+                <td className={tdClass}>{DYNO_TYPE_WORDS[run.dynoType].short}</td>
                 <td className={`${tdClass} spec`}>{when(run.runAt)}</td>
                 <td className={`${tdClass} spec`}>{run.camName ?? '—'}</td>
                 <td className={`${tdClass} spec`}>{airText(run.air, units)}</td>
@@ -101,10 +108,11 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
             baseline={baseline ?? { label: 'Before (no pull recorded as a curve)', points: [] }}
             candidates={afters}
             markers={[]}
-            description={`Measured, corrected torque and power: the before pull (solid grey) and ${afters.length} after pull(s), rpm across`}
+            description={`Measured, corrected torque and power on the ${chartType} dyno: the before pull (solid grey) and ${afters.length} after pull(s), rpm across`}
           />
           <figcaption className="mt-2 text-xs text-ink-muted">
             Measured on this shop’s dyno and corrected to standard air. Torque on the left axis, power on the right; power = lb·ft × rpm ÷ 5252. Runs recorded as peak figures only are in the table, not the chart.
+            {leftOut ? ` ${leftOut} after pull${leftOut === 1 ? '' : 's'} on the ${chartType === 'chassis' ? 'engine' : 'chassis'} dyno ${leftOut === 1 ? 'is' : 'are'} left out: a ${chartType} run is compared only with ${chartType} runs.` : ''}
           </figcaption>
         </figure>
       ) : null}

@@ -4,6 +4,7 @@ import { ErrorMessage, Field, Form, Formik, type FormikHelpers } from 'formik';
 import { useMemo } from 'react';
 import { buttonClass } from '@/components/catalogue/ui';
 import { AIR_NEEDED_BY, CORRECTION_TEXT, STANDARD_LABELS } from '@/lib/dyno/correction';
+import { DYNO_TYPES, DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_UNIT_TEXT, type AirUnits } from '@/lib/dyno/units';
 import { sendJson } from '@/lib/forms/zod-formik';
 import { DYNO_LIMITS as L } from '@/lib/schemas/dyno-run';
@@ -29,7 +30,7 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
     const answer = await sendJson('/api/dyno-runs', 'POST', payload);
     if (answer.status === 201) {
       // The next pull is usually the same day and the same cell: keep the air and the choices.
-      const keep = { phase: values.phase, correctionStandard: values.correctionStandard, airTemp: values.airTemp, baro: values.baro, humidityPct: values.humidityPct, entry: values.entry };
+      const keep = { phase: values.phase, dynoType: values.dynoType, correctionStandard: values.correctionStandard, airTemp: values.airTemp, baro: values.baro, humidityPct: values.humidityPct, entry: values.entry };
       helpers.resetForm({ values: { ...initialValues, ...keep } });
       helpers.setStatus({ tone: 'ok', text: 'Run recorded.' });
       onSaved();
@@ -64,6 +65,13 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
                 <option value="before">Before (cam coming out)</option>
                 <option value="after">After (cam going in)</option>
               </Field>
+            </div>
+            <div className="flex flex-col gap-1 text-sm">
+              <label htmlFor="dyno-type" className="font-semibold">Dyno</label>
+              <Field as="select" id="dyno-type" name="dynoType" aria-describedby="dyno-type-hint" className={selectClass}>
+                {DYNO_TYPES.map((t) => <option key={t} value={t}>{DYNO_TYPE_WORDS[t].long}</option>)}
+              </Field>
+              <span id="dyno-type-hint" className="max-w-xs text-xs text-ink-muted">Compared only with runs on the same kind of dyno.</span>
             </div>
             <div className="flex flex-col gap-1 text-sm">
               <label htmlFor="dyno-runAt" className="font-semibold">When</label>

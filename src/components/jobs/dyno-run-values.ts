@@ -1,5 +1,6 @@
 import type { FormikErrors } from 'formik';
 import type { CorrectionStandard } from '@/lib/dyno/correction';
+import type { DynoType } from '@/lib/dyno/dyno-type';
 import { parseCurveCsv } from '@/lib/dyno/curve-csv';
 import { baroIn, baroToKpa, roundTo, tempIn, tempToCelsius, type AirUnits } from '@/lib/dyno/units';
 import { DynoRunSchema } from '@/lib/schemas/dyno-run';
@@ -10,6 +11,7 @@ import { DynoRunSchema } from '@/lib/schemas/dyno-run';
 type Num = number | '';
 export type Values = {
   phase: 'before' | 'after';
+  dynoType: DynoType;
   runAt: string;
   correctionStandard: CorrectionStandard;
   /** In the shop's units (°F or °C, inHg or kPa); converted to °C and kPa only in the payload. */
@@ -21,7 +23,7 @@ export type Values = {
 };
 
 export const initialValues: Values = {
-  phase: 'before', runAt: '', correctionStandard: 'sae-j1349', airTemp: '', baro: '', humidityPct: '',
+  phase: 'before', dynoType: 'chassis', runAt: '', correctionStandard: 'sae-j1349', airTemp: '', baro: '', humidityPct: '',
   entry: 'curve', curveCsv: '', hp: '', hpRpm: '', torqueLbFt: '', torqueRpm: '', notes: '',
 };
 
@@ -37,7 +39,7 @@ export function payloadOf(values: Values, ids: { buildId: number; quoteId: numbe
   const temp = num(values.airTemp);
   const baro = num(values.baro);
   const payload: Record<string, unknown> = {
-    ...ids, phase: values.phase, correctionStandard: values.correctionStandard,
+    ...ids, phase: values.phase, dynoType: values.dynoType, correctionStandard: values.correctionStandard,
     airTempC: temp === undefined ? undefined : tempToCelsius(units, temp),
     baroKpa: baro === undefined ? undefined : baroToKpa(units, baro),
     humidityPct: num(values.humidityPct),

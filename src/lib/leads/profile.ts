@@ -22,10 +22,11 @@ const TOP_GEAR = { automatic: 0.7, manual: 0.62 } as const;
 // Converter stall, from memory: about 2,000 rpm for a factory converter; a changed one is assumed to be a
 // modest 2,800 rpm (a bigger guess would let the advisor pick a bigger cam than the car may suit).
 const STALL_RPM = { stock: 2000, changed: 2800 } as const;
-// Budget ranges → the top of each range in cents ("not sure" → the middle range), so a cam is never
-// ranked down for a budget the customer did not rule out.
-const BUDGET_CENTS: Record<LeadAnswers['budget'], number> = {
-  'under-1500': 150_000, '1500-3000': 300_000, '3000-5000': 500_000, 'over-5000': 800_000, unsure: 300_000,
+// Budget ranges → the top of each range in cents, so a cam is never ranked down for a budget the customer
+// did not rule out. "Not sure" gives no budget at all (undefined; the schema stores 0, "none given") rather
+// than a guessed range that would rank the dearer cams down for a limit the customer never set.
+const BUDGET_CENTS: Record<LeadAnswers['budget'], number | undefined> = {
+  'under-1500': 150_000, '1500-3000': 300_000, '3000-5000': 500_000, 'over-5000': 800_000, unsure: undefined,
 };
 
 export function engineLiters(answers: Pick<LeadAnswers, 'engine'>): number {

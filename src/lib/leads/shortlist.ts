@@ -74,11 +74,17 @@ const PLAIN_CAUTION: Record<CautionKind, string> = {
   tune: 'The engine must be re-tuned after the swap.',
 };
 
+/**
+ * The top of the ranking the customer may choose from. A vehicle that must pass emissions (or "not sure",
+ * treated as yes) never sees a cam that is not certified: the next certified cams move up instead, and
+ * the choices are numbered 1, 2, 3 as shown. The advisor only scores such a cam down; this removes it.
+ */
 export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineLiters: number, emissionsRequired: boolean, certified: (camId: string | number) => boolean): Shortlist {
-  const entries = result.rankings.slice(0, SHORTLIST_SIZE).map((r) => {
+  const allowed = result.rankings.filter((r) => !emissionsRequired || certified(r.camId));
+  const entries = allowed.slice(0, SHORTLIST_SIZE).map((r, index) => {
     const isCertified = certified(r.camId);
     return {
-      rank: r.rank,
+      rank: index + 1,
       camId: r.camId,
       camName: r.camName,
       gainPctPeakHp: r.predicted.gainPctPeakHp,
@@ -95,4 +101,14 @@ export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineL
 /** "from $1,250": rounded down to whole dollars, never a promise of an exact price. */
 export function fromPrice(cents: number): string {
   return `from ${Math.floor(cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 })}`;
+}
+
+/**
+ * A stored shortlist as the customer may see it now: leads saved before the emissions filter could hold a
+ * non-certified cam for a vehicle that must pass; it is left out and the rest renumbered.
+ */
+export function shortlistForCustomer(shortlist: Shortlist, answers: Partial<Pick<LeadAnswers, 'emissions'>>): Shortlist {
+  if (answers.emissions === 'no') return shortlist;
+  const entries = shortlist.entries.filter((e) => e.emissionsCertified).map((e, index) => ({ ...e, rank: index + 1 }));
+  return { ...shortlist, entries };
 }

@@ -123,7 +123,9 @@ export const UseSchema = z.strictObject({
   fuel: oneOf('fuel', FUELS).optional(),
   emissionsRequired: z.boolean({ error: presence('emissionsRequired', 'true or false') }),
   cruiseMph: boundedNumber('cruise speed', 'mph', B.cruiseMph),
-  budgetCents: boundedNumber('budget', 'cents', B.budgetCents).int({ error: 'budget must be a whole number of cents' }),
+  // Optional: a customer who is "not sure" gives none, and none is stored as 0, which the advisor already
+  // reads as "no budget was given" (it then judges no cam against a figure the customer never named).
+  budgetCents: boundedNumber('budget', 'cents', B.budgetCents).int({ error: 'budget must be a whole number of cents' }).default(0),
 }, { error: presence('use', 'an object') });
 
 export const BuildProfileSchema = z.strictObject({

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { text } from './text';
 import { AIR_NEEDED_BY, CORRECTION_STANDARD_NAMES, STANDARD_LABELS } from '@/lib/dyno/correction';
+import { DYNO_TYPES } from '@/lib/dyno/dyno-type';
 
 // A dyno run as the technician records it: the air on the day, then either the peak figures read off
 // the dyno screen or the pull itself as rpm/torque points (power is then computed, peaks derived).
@@ -67,6 +68,8 @@ export const DynoRunSchema = z
       quoteId: id('quoteId').nullish(),
       camId: id('camId').nullish(),
       phase: z.enum(['before', 'after'], { error: 'phase must be before or after' }),
+      // Optional for callers that predate it: a run without it was made on the rollers, as every run was then.
+      dynoType: z.enum(DYNO_TYPES, { error: `dynoType must be one of: ${DYNO_TYPES.join(', ')}` }).default('chassis'),
       runAt: z.iso.datetime({ offset: true, error: 'runAt must be a date and time (ISO 8601, e.g. 2026-12-02T14:30:00Z)' }).nullish(),
       correctionStandard: z.enum(CORRECTION_STANDARD_NAMES, { error: `correctionStandard must be one of: ${CORRECTION_STANDARD_NAMES.join(', ')}` }).default('sae-j1349'),
       // Optional here; required below only when the chosen standard's formula uses the reading.

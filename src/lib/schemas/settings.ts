@@ -11,6 +11,7 @@ export const SETTINGS_LIMITS = {
   depositPercentBp: { min: 0, max: 10_000 },
   depositCents: { min: 0, max: 10_000_000 },
   policyMaxLength: 4000,
+  leadStaleDays: { min: 1, max: 60 },
 } as const;
 
 const S = SETTINGS_LIMITS;
@@ -36,6 +37,10 @@ export const ShopSettingsSchema = z
         .int({ error: 'counter discount limit must be a whole number of basis points' })
         .optional(),
       depositPolicyText: setting('deposit policy', S.policyMaxLength, { required: true, multiline: true }),
+      // Optional for callers that predate it; left out, the stored value stays.
+      leadStaleDays: boundedNumber('days before a lead is flagged', 'days', S.leadStaleDays)
+        .int({ error: 'days before a lead is flagged must be a whole number of days' })
+        .optional(),
     },
     { error: presence('settings', 'an object') },
   )

@@ -32,11 +32,11 @@ describe('history from before/after pairs', () => {
   const profiles = new Map([[2, profile()], [5, profile({ boreIn: 3.78, headers: 'manifold' })]]);
   it('one entry per build and fitted cam, from the corrected peaks, with the build’s engine for similarity', () => {
     const runs: RunForHistory[] = [
-      { buildId: 2, phase: 'before', camId: null, correctedPeakHp: 350 },
-      { buildId: 2, phase: 'before', camId: null, correctedPeakHp: 354 }, // two baseline pulls → mean 352
-      { buildId: 2, phase: 'after', camId: 9, correctedPeakHp: 404.8 }, // 404.8 / 352 − 1 = +15 %
-      { buildId: 5, phase: 'before', camId: 1, correctedPeakHp: 300 },
-      { buildId: 5, phase: 'after', camId: 4, correctedPeakHp: 330 }, // +10 %
+      { buildId: 2, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 350 },
+      { buildId: 2, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 354 }, // two baseline pulls → mean 352
+      { buildId: 2, phase: 'after', dynoType: 'chassis', camId: 9, correctedPeakHp: 404.8 }, // 404.8 / 352 − 1 = +15 %
+      { buildId: 5, phase: 'before', dynoType: 'chassis', camId: 1, correctedPeakHp: 300 },
+      { buildId: 5, phase: 'after', dynoType: 'chassis', camId: 4, correctedPeakHp: 330 }, // +10 %
     ];
     const history = historyFromRuns(runs, profiles);
     expect(history).toHaveLength(2);
@@ -49,15 +49,32 @@ describe('history from before/after pairs', () => {
     expect(history[1].measuredGainPctPeakHp).toBeCloseTo(10, 10);
   });
   it('needs both halves of the pair: a build with only before or only after runs gives nothing', () => {
-    expect(historyFromRuns([{ buildId: 2, phase: 'before', camId: null, correctedPeakHp: 350 }], profiles)).toEqual([]);
-    expect(historyFromRuns([{ buildId: 2, phase: 'after', camId: 9, correctedPeakHp: 400 }], profiles)).toEqual([]);
+    expect(historyFromRuns([{ buildId: 2, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 350 }], profiles)).toEqual([]);
+    expect(historyFromRuns([{ buildId: 2, phase: 'after', dynoType: 'chassis', camId: 9, correctedPeakHp: 400 }], profiles)).toEqual([]);
+  });
+  it('pairs a chassis run only with chassis runs and an engine run only with engine runs', () => {
+    const runs: RunForHistory[] = [
+      // Build 2 on the rollers before, on the engine stand after: no pair, so no gain from it.
+      { buildId: 2, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 300 },
+      { buildId: 2, phase: 'after', dynoType: 'engine', camId: 9, correctedPeakHp: 400 },
+      // Build 5 on both: wheels 300 → 330 (+10 %), flywheel 360 → 405 (+12.5 %); each compared with its own kind.
+      { buildId: 5, phase: 'before', dynoType: 'engine', camId: null, correctedPeakHp: 360 },
+      { buildId: 5, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 300 },
+      { buildId: 5, phase: 'after', dynoType: 'chassis', camId: 4, correctedPeakHp: 330 },
+      { buildId: 5, phase: 'after', dynoType: 'engine', camId: 4, correctedPeakHp: 405 },
+    ];
+    const history = historyFromRuns(runs, profiles);
+    // Mixed pairs would have given build 2 +33 % and build 5 (405 / 300) +35 % or (330 / 360) −8 %.
+    expect(history.map((h) => h.camId)).toEqual([4, 4]);
+    expect(history[0].measuredGainPctPeakHp).toBeCloseTo(10, 10); // chassis sorts before engine
+    expect(history[1].measuredGainPctPeakHp).toBeCloseTo(12.5, 10);
   });
   it('skips runs without figures and builds without a readable profile', () => {
     const runs: RunForHistory[] = [
-      { buildId: 2, phase: 'before', camId: null, correctedPeakHp: null },
-      { buildId: 2, phase: 'after', camId: 9, correctedPeakHp: 400 },
-      { buildId: 7, phase: 'before', camId: null, correctedPeakHp: 300 },
-      { buildId: 7, phase: 'after', camId: 9, correctedPeakHp: 330 },
+      { buildId: 2, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: null },
+      { buildId: 2, phase: 'after', dynoType: 'chassis', camId: 9, correctedPeakHp: 400 },
+      { buildId: 7, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 300 },
+      { buildId: 7, phase: 'after', dynoType: 'chassis', camId: 9, correctedPeakHp: 330 },
     ];
     expect(historyFromRuns(runs, profiles)).toEqual([]);
   });

@@ -27,6 +27,12 @@ describe('buildProfileFromAnswers', () => {
     expect(profile.engine.cylinders).toBe(8);
   });
 
+  it('gives no budget for "not sure yet" (0, the schema’s "none given"), and the top of the range otherwise', () => {
+    expect(build({ budget: 'unsure' }).use.budgetCents).toBe(0);
+    expect(build({ budget: 'under-1500' }).use.budgetCents).toBe(150_000);
+    expect(build({ budget: '3000-5000' }).use.budgetCents).toBe(500_000);
+  });
+
   it('treats "not sure" about emissions as a yes, and keeps the catalytic converters with stock exhaust', () => {
     expect(build({ emissions: 'unsure' }).use.emissionsRequired).toBe(true);
     expect(build({ emissions: 'no' }).use.emissionsRequired).toBe(false);

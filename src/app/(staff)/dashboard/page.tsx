@@ -3,6 +3,9 @@ import Link from 'next/link';
 import { Notice } from '@/components/auth/form-parts';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { ROLE_NAMES, linksFor } from '@/lib/auth/staff-nav';
+import { countStaleLeads } from '@/lib/db/queries/leads';
+import { getShopSettings } from '@/lib/db/queries/settings';
+import { staleCutoff } from '@/lib/leads/stale';
 
 export const metadata: Metadata = { title: 'Staff home' };
 
@@ -11,6 +14,9 @@ export default async function DashboardPage({ searchParams }: { searchParams: Pr
   const params = await searchParams;
   const denied = typeof params.denied === 'string' ? params.denied : null;
   const links = linksFor(user.role).filter((link) => link.href !== '/dashboard');
+  // Leads that have gone cold, for the people who follow leads up (technicians never see leads).
+  const limitDays = user.role === 'tech' ? null : ((await getShopSettings())?.leadStaleDays ?? 2);
+  const staleLeads = limitDays === null ? 0 : await countStaleLeads(staleCutoff(new Date(), limitDays));
   return (
     <div className="flex flex-col gap-6">
       <header>
@@ -18,6 +24,12 @@ export default async function DashboardPage({ searchParams }: { searchParams: Pr
         <p className="text-sm text-ink-soft">Signed in as <span className="font-semibold">{ROLE_NAMES[user.role]}</span> ({user.email}).</p>
       </header>
       {denied ? <Notice tone="caution">The page <span className="spec">{denied}</span> is not open to the {ROLE_NAMES[user.role].toLowerCase()} role. Ask a manager if you need it.</Notice> : null}
+      {staleLeads > 0 ? (
+        <Notice tone="caution">
+          {staleLeads} new lead{staleLeads === 1 ? ' has' : 's have'} waited {limitDays} day{limitDays === 1 ? '' : 's'} or more without contact.{' '}
+          <Link href="/leads?status=new" className="font-semibold underline">Follow them up on Leads</Link>.
+        </Notice>
+      ) : null}
       <nav aria-label="Your pages">
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
           {links.map((link) => (

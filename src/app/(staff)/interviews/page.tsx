@@ -36,7 +36,8 @@ export default async function InterviewsPage({ searchParams }: { searchParams: P
       </form>
       {!parsed.success ? <p className="text-sm text-fault-700">Problem: that search could not be read; showing the newest builds.</p> : null}
       <p className="text-sm text-ink-soft" aria-live="polite">{total === 1 ? '1 build' : `${total} builds`}{query.q ? ` matching “${query.q}”` : ''}</p>
-      <div className="overflow-x-auto rounded-lg border border-steel-300 bg-paper-raised">
+      {/* relative: the header's screen-reader-only text is positioned absolutely and would otherwise widen the page on a phone. */}
+      <div className="relative overflow-x-auto rounded-lg border border-steel-300 bg-paper-raised">
         <table className={tableClass}>
           <caption className="sr-only">Recent builds</caption>
           <thead>

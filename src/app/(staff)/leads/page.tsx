@@ -1,14 +1,16 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { ButtonLink, PageHeader } from '@/components/catalogue/ui';
+import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue/ui';
 import { LeadStatusTag, LEAD_STATUS_WORDS } from '@/components/leads/lead-status';
 import { LeadNotes } from '@/components/leads/lead-notes';
 import { LeadStatusForm } from '@/components/leads/lead-status-form';
 import { ShortlistCards } from '@/components/leads/shortlist-view';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listLeadNotes } from '@/lib/db/queries/lead-notes';
-import { listLeads } from '@/lib/db/queries/leads';
+import { countStaleLeads, listLeads } from '@/lib/db/queries/leads';
+import { getShopSettings } from '@/lib/db/queries/settings';
 import { answersInWords } from '@/lib/leads/questions';
+import { staleCutoff, staleDays } from '@/lib/leads/stale';
 import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
 
 export const metadata: Metadata = { title: 'Leads' };
@@ -22,6 +24,11 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
   const page = Math.max(1, Math.trunc(Number(raw.page)) || 1);
   const { items, total } = await listLeads({ status, page, pageSize: PAGE_SIZE });
   const notes = await listLeadNotes(items.map((l) => l.id));
+  // The server's clock decides "now"; the shop's setting decides how long a new lead may wait.
+  const now = new Date();
+  const limitDays = (await getShopSettings())?.leadStaleDays ?? 2;
+  const staleTotal = await countStaleLeads(staleCutoff(now, limitDays));
+  const waited = (lead: (typeof items)[number]) => staleDays(lead, (notes.get(lead.id) ?? []).map((n) => n.createdAt), now, limitDays);
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const href = (p: number) => `?${new URLSearchParams({ ...(status ? { status } : {}), ...(p > 1 ? { page: String(p) } : {}) }).toString()}`;
   return (
@@ -34,6 +41,11 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
           </Link>
         ))}
       </nav>
+      {staleTotal > 0 ? (
+        <Banner tone="caution" title={`${staleTotal} new lead${staleTotal === 1 ? ' has' : 's have'} waited ${limitDays} day${limitDays === 1 ? '' : 's'} or more without contact`}>
+          Call or write to them, then add a note or move them on. They are marked “Waiting” below. The number of days is set under Settings.
+        </Banner>
+      ) : null}
       {items.length === 0 ? <p className="text-sm text-ink-muted">No leads{status ? ` with status “${LEAD_STATUS_WORDS[status]}”` : ''} yet.</p> : null}
       <ul className="flex flex-col gap-3">
         {items.map((lead) => (
@@ -43,7 +55,10 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
                 <h2 id={`lead-${lead.id}`} className="text-base font-semibold">
                   {lead.name} <span className="spec text-xs text-ink-muted">#{lead.id} · {lead.createdAt.slice(0, 16).replace('T', ' ')}</span>
                 </h2>
-                <LeadStatusTag status={lead.status} />
+                <span className="flex flex-wrap gap-2">
+                  {waited(lead) !== null ? <StateTag tone="fault">Waiting {waited(lead)} day{waited(lead) === 1 ? '' : 's'} without contact</StateTag> : null}
+                  <LeadStatusTag status={lead.status} />
+                </span>
               </header>
               <p className="mt-1">
                 {lead.email ? <a className="text-gauge-700 underline" href={`mailto:${lead.email}`}>{lead.email}</a> : null}

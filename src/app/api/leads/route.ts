@@ -64,8 +64,8 @@ export async function POST(request: Request) {
   if (!profile) return unavailable('The shop’s catalogue is not ready for this engine yet. Please call the shop instead.');
   const ranked = await rankForShop(profile, { includeCurves: false });
   if (!ranked.ok) return unavailable('The shop’s catalogue changed while we were working. Please try again.');
-  const top = ranked.result.rankings.slice(0, 3).map((r) => r.camId);
-  const certified = await emissionsCertifiedIds(top);
+  // Every ranked cam, not just the top three: when emissions rule some out, the next ones move up.
+  const certified = await emissionsCertifiedIds(ranked.result.rankings.map((r) => r.camId));
   const shortlist = shortlistFrom(ranked.result, answers, engineLiters(answers), profile.use.emissionsRequired, (id) => certified.has(String(id)));
 
   const token = randomToken();

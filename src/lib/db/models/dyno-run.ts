@@ -1,6 +1,7 @@
 import {
   DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
 } from 'sequelize';
+import { DYNO_TYPES, type DynoType } from '@/lib/dyno/dyno-type';
 
 export const CORRECTION_STANDARDS = ['sae-j1349', 'sae-j607', 'din-70020', 'none'] as const;
 
@@ -11,6 +12,7 @@ export class DynoRun extends Model<InferAttributes<DynoRun>, InferCreationAttrib
   declare camId: ForeignKey<number> | null;
   declare recordedByUserId: ForeignKey<number> | null;
   declare phase: 'before' | 'after';
+  declare dynoType: CreationOptional<DynoType>;
   declare runAt: Date;
   declare correctionStandard: CreationOptional<(typeof CORRECTION_STANDARDS)[number]>;
   declare airTempC: number | null;
@@ -33,6 +35,7 @@ export class DynoRun extends Model<InferAttributes<DynoRun>, InferCreationAttrib
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         phase: { type: DataTypes.ENUM('before', 'after'), allowNull: false },
+        dynoType: { type: DataTypes.ENUM(...DYNO_TYPES), allowNull: false, defaultValue: 'chassis' },
         runAt: { type: DataTypes.DATE, allowNull: false },
         correctionStandard: { type: DataTypes.ENUM(...CORRECTION_STANDARDS), allowNull: false, defaultValue: 'sae-j1349' },
         airTempC: optional(),

@@ -15,6 +15,8 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare currency: CreationOptional<string>;
   /** The largest discount counter staff may give, as a share of the job before tax (basis points). */
   declare maxCounterDiscountBp: CreationOptional<number>;
+  /** A new lead nobody has contacted or noted for this many days is flagged as waiting too long. */
+  declare leadStaleDays: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -35,6 +37,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         depositPolicyText: { type: DataTypes.TEXT, allowNull: false },
         currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'usd' },
         maxCounterDiscountBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 500 },
+        leadStaleDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 2 },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

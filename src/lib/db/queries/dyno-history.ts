@@ -13,7 +13,7 @@ import { runCorrection } from './dyno-runs';
 export async function loadDynoHistory(): Promise<HistoryEntry[]> {
   db();
   const runs = await DynoRun.findAll({
-    attributes: ['id', 'buildId', 'phase', 'camId', 'peakHp', 'correctionStandard', 'airTempC', 'baroKpa', 'humidityPct'],
+    attributes: ['id', 'buildId', 'phase', 'dynoType', 'camId', 'peakHp', 'correctionStandard', 'airTempC', 'baroKpa', 'humidityPct'],
     order: [['buildId', 'ASC'], ['id', 'ASC']],
   });
   if (!runs.length) return [];
@@ -26,7 +26,7 @@ export async function loadDynoHistory(): Promise<HistoryEntry[]> {
   }
   const forHistory: RunForHistory[] = runs.map((r) => {
     const c = runCorrection(r);
-    return { buildId: r.buildId, phase: r.phase, camId: r.camId ?? null, correctedPeakHp: c && r.peakHp !== null ? correctedFigure(r.peakHp, c.factor) : null };
+    return { buildId: r.buildId, phase: r.phase, dynoType: r.dynoType, camId: r.camId ?? null, correctedPeakHp: c && r.peakHp !== null ? correctedFigure(r.peakHp, c.factor) : null };
   });
   return historyFromRuns(forHistory, profiles);
 }

@@ -3,6 +3,7 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { AIR_NEEDED_BY, correctionFor, type Correction, type CorrectionStandard } from '@/lib/dyno/correction';
+import type { DynoType } from '@/lib/dyno/dyno-type';
 import { correctedFigure, peaksOf, pullWithPower, round1, type PullPoint } from '@/lib/dyno/figures';
 import type { DynoRunValues } from '@/lib/schemas/dyno-run';
 import { Build, Cam, db, DynoRun, Quote, User } from '../models';
@@ -20,6 +21,7 @@ export type DynoRunView = {
   camId: number | null;
   camName: string | null;
   phase: 'before' | 'after';
+  dynoType: DynoType;
   runAt: string;
   recordedBy: string | null;
   air: { airTempC: number | null; baroKpa: number | null; humidityPct: number | null };
@@ -56,6 +58,7 @@ export function viewOf(run: RunWithRefs): DynoRunView {
     camId: run.camId ?? null,
     camName: run.cam ? `${run.cam.sku} ${run.cam.name}` : null,
     phase: run.phase,
+    dynoType: run.dynoType,
     runAt: new Date(run.runAt).toISOString(),
     recordedBy: run.recordedBy?.name ?? null,
     air: { airTempC: run.airTempC, baroKpa: run.baroKpa, humidityPct: run.humidityPct },
@@ -122,6 +125,7 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
         camId,
         recordedByUserId: user.id,
         phase: values.phase,
+        dynoType: values.dynoType,
         runAt: values.runAt ? new Date(values.runAt) : new Date(),
         correctionStandard: values.correctionStandard,
         airTempC: values.airTempC ?? null,
@@ -135,7 +139,7 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
     );
     const record = (await getDynoRun(run.id, t))!;
     await recordAudit(
-      { user, action: 'dyno-run.recorded', entityType: 'dyno-run', entityId: run.id, after: { buildId: record.buildId, phase: record.phase, camId: record.camId, observed: record.observed, corrected: record.corrected }, ip },
+      { user, action: 'dyno-run.recorded', entityType: 'dyno-run', entityId: run.id, after: { buildId: record.buildId, phase: record.phase, dynoType: record.dynoType, camId: record.camId, observed: record.observed, corrected: record.corrected }, ip },
       t,
     );
     return { record };
@@ -146,7 +150,7 @@ export async function deleteDynoRun(id: number, user: SessionUser, ip: string | 
   return runWrite(async (t) => {
     const run = await DynoRun.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!run) throw notFound();
-    const before = { buildId: run.buildId, phase: run.phase, camId: run.camId, peakHp: run.peakHp, peakTorqueLbFt: run.peakTorqueLbFt, runAt: run.runAt };
+    const before = { buildId: run.buildId, phase: run.phase, dynoType: run.dynoType, camId: run.camId, peakHp: run.peakHp, peakTorqueLbFt: run.peakTorqueLbFt, runAt: run.runAt };
     await run.destroy({ transaction: t });
     await recordAudit({ user, action: 'dyno-run.deleted', entityType: 'dyno-run', entityId: id, before, ip }, t);
     return { record: { id, deleted: true as const } };

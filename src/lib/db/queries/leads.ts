@@ -1,4 +1,4 @@
-import { Op, type WhereOptions } from 'sequelize';
+import { literal, Op, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken } from '@/lib/auth/tokens';
 import { recordAudit } from '@/lib/audit';
@@ -96,6 +96,22 @@ export async function listLeads({ status, page, pageSize }: { status?: LeadStatu
     offset: (page - 1) * pageSize,
   });
   return { items: rows.map(toRecord), total: count };
+}
+
+/**
+ * New leads nobody has touched since `cutoff`: arrived before it, still "new", no note written since.
+ * The same rule as staleDays() in src/lib/leads/stale.ts, counted over every page of the list.
+ */
+export async function countStaleLeads(cutoff: Date): Promise<number> {
+  db();
+  return Lead.count({
+    where: {
+      status: 'new',
+      createdAt: { [Op.lt]: cutoff },
+      // A subquery of its own, not one that names the outer table: the model's alias is minified in the build.
+      id: { [Op.notIn]: literal(`(SELECT n.lead_id FROM lead_notes n WHERE n.created_at >= ${db().escape(cutoff)})`) },
+    },
+  });
 }
 
 /** Moves a lead to another status; a stale version is a conflict (409) with the current lead. */

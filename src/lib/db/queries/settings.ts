@@ -34,6 +34,8 @@ export type ShopSettingsRecord = {
   depositPolicyText: string;
   /** The largest discount counter staff may give, as a share of the job before tax (basis points). */
   maxCounterDiscountBp: number;
+  /** A new lead untouched for this many days is flagged on the leads list and the staff home page. */
+  leadStaleDays: number;
   currency: string;
   version: number;
   updatedAt: string;
@@ -53,6 +55,7 @@ export function toShopSettingsRecord(s: ShopSettings): ShopSettingsRecord {
     depositMaxCents: s.depositMaxCents,
     depositPolicyText: s.depositPolicyText,
     maxCounterDiscountBp: s.maxCounterDiscountBp,
+    leadStaleDays: s.leadStaleDays,
     currency: s.currency,
     version: s.version,
     updatedAt: new Date(s.updatedAt).toISOString(),

@@ -3,6 +3,9 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { CUSTOMER_CAUTIONS, ShortlistCards } from '@/components/leads/shortlist-view';
 import { getLeadByToken } from '@/lib/db/queries/leads';
+import { SHORTLIST_SIZE, shortlistForCustomer } from '@/lib/leads/shortlist';
+
+const SHOWN_WORDS: Record<number, string> = { 1: 'The one', 2: 'The two', 3: 'The three' };
 
 export const dynamic = 'force-dynamic';
 // A private link: never indexed, never sent on as a referrer.
@@ -13,7 +16,7 @@ export default async function AskResultPage({ params }: { params: Promise<{ toke
   const found = await getLeadByToken(token);
   if (!found || !found.lead.shortlist) notFound();
   const { lead, shop } = found;
-  const shortlist = lead.shortlist!;
+  const shortlist = shortlistForCustomer(lead.shortlist!, lead.answers);
   return (
     <div className="mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink">
       <p className="text-base text-ink-muted">{shop?.name ?? 'The shop'}</p>
@@ -35,7 +38,13 @@ export default async function AskResultPage({ params }: { params: Promise<{ toke
       </section>
 
       <section aria-labelledby="cams" className="mt-8">
-        <h2 id="cams" className="text-2xl font-semibold">The three that fit best</h2>
+        <h2 id="cams" className="text-2xl font-semibold">{SHOWN_WORDS[shortlist.entries.length] ?? 'The ones'} that fit best</h2>
+        {lead.answers.emissions === 'no' ? null : (
+          <p className="mt-2 text-base">
+            Your vehicle has to pass an emissions test{lead.answers.emissions === 'unsure' ? ' (you were not sure, so we assume it does)' : ''}, so only cams certified for
+            emissions-tested road use are listed{shortlist.entries.length < SHORTLIST_SIZE ? '; the shop has no more of those that suit your answers' : ''}.
+          </p>
+        )}
         <div className="mt-3">
           <ShortlistCards shortlist={shortlist} />
         </div>

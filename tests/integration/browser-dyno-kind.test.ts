@@ -1,0 +1,89 @@
+import type { Browser, Page } from 'playwright-core';
+import { Op } from 'sequelize';
+import { AuditEntry, DynoRun } from '@/lib/db/models';
+import { launchBrowser } from '../support/browser';
+import { signIn } from '../support/auth';
+import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { readRuntime } from '../support/runtime';
+
+// Engine dyno or chassis dyno, chosen on the job page as the technician records each pull: the table says
+// which, and the chart compares a chassis before pull only with chassis after pulls (an engine-dyno pull
+// reads at the flywheel, without the driveline's loss). Demo job Q-2026-0102 (quote 2, build 2); runs made
+// here are deleted afterwards.
+const { appUrl } = readRuntime();
+const BUILD_ID = 2;
+const WHEELS_BEFORE = '3000,300\n4000,330\n5000,310\n5500,290';
+const FLYWHEEL_AFTER = '3000,370\n4000,405\n5000,400\n6000,380';
+const WHEELS_AFTER = '3000,295\n4000,335\n5000,330\n6000,310';
+
+describe('chassis and engine dyno runs on the job page', () => {
+  let browser: Browser;
+  let page: Page;
+  let firstNewId = 0;
+  const pageErrors: string[] = [];
+  const form = () => page.getByRole('form', { name: 'Record a dyno run' });
+  const runRows = () => page.getByRole('table').filter({ has: page.getByText('Recorded dyno runs') }).locator('tbody tr');
+
+  async function typePull(pull: string) {
+    await form().getByLabel(/^Pull points/).click();
+    await page.keyboard.press('ControlOrMeta+a');
+    await page.keyboard.press('Backspace');
+    await page.keyboard.type(pull);
+  }
+  async function record(phase: 'before' | 'after', dyno: 'chassis' | 'engine', pull: string, rows: number) {
+    await form().getByLabel('Pull', { exact: true }).selectOption(phase);
+    await form().getByLabel('Dyno', { exact: true }).selectOption(dyno);
+    await typePull(pull);
+    await page.keyboard.press('ControlOrMeta+Enter');
+    await form().getByRole('status').filter({ hasText: 'Run recorded.' }).waitFor();
+    await runRows().nth(rows - 1).waitFor();
+  }
+
+  beforeAll(async () => {
+    connectTestDatabase();
+    firstNewId = ((await DynoRun.max<number, DynoRun>('id')) ?? 0) + 1;
+    browser = await launchBrowser();
+    const [name, value] = (await signIn('tech')).split('=');
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    await context.addCookies([{ name, value, url: appUrl }]);
+    page = await context.newPage();
+    page.setDefaultTimeout(10_000);
+    page.on('pageerror', (error) => pageErrors.push(error.message));
+  }, 60_000);
+  afterAll(async () => {
+    await browser?.close();
+    const ids = (await DynoRun.findAll({ where: { buildId: BUILD_ID, id: { [Op.gte]: firstNewId } }, attributes: ['id'] })).map((r) => r.id);
+    await DynoRun.destroy({ where: { id: { [Op.in]: ids } } });
+    await AuditEntry.destroy({ where: { entityType: 'dyno-run', entityId: { [Op.in]: ids.map(String) } } });
+    await disconnectTestDatabase();
+  });
+  afterEach(() => expect(pageErrors).toEqual([]));
+
+  it('records a chassis before pull and an engine after pull, and leaves the engine pull out of the chassis chart', async () => {
+    await page.goto(`${appUrl}/jobs`);
+    await page.getByRole('link', { name: 'Q-2026-0102' }).click();
+    await form().waitFor();
+    // Chassis is the preselected kind: the shop's usual dyno for a car on the rollers.
+    await expect(form().getByLabel('Dyno', { exact: true }).inputValue()).resolves.toBe('chassis');
+    await form().getByLabel('Correction to standard air').selectOption('none');
+    await record('before', 'chassis', WHEELS_BEFORE, 1);
+    await record('after', 'engine', FLYWHEEL_AFTER, 2);
+
+    const rows = await runRows().allTextContents();
+    expect(rows[0]).toMatch(/^BeforeChassis/);
+    expect(rows[1]).toMatch(/^AfterEngine/);
+    const stored = await DynoRun.findAll({ where: { buildId: BUILD_ID, id: { [Op.gte]: firstNewId } }, order: [['id', 'ASC']] });
+    expect(stored.map((r) => [r.phase, r.dynoType])).toEqual([['before', 'chassis'], ['after', 'engine']]);
+
+    await page.getByRole('img', { name: /on the chassis dyno: the before pull \(solid grey\) and 0 after pull/ }).waitFor();
+    await page.getByText('1 after pull on the engine dyno is left out: a chassis run is compared only with chassis runs.').waitFor();
+  }, 90_000);
+
+  it('a chassis after pull is drawn against the chassis before pull', async () => {
+    await record('after', 'chassis', WHEELS_AFTER, 3);
+    await page.getByRole('img', { name: /on the chassis dyno: the before pull \(solid grey\) and 1 after pull/ }).waitFor();
+    await page.getByText('1 after pull on the engine dyno is left out').waitFor();
+    // The form keeps the last choice of dyno for the next pull, like the air and the correction.
+    await expect(form().getByLabel('Dyno', { exact: true }).inputValue()).resolves.toBe('chassis');
+  }, 90_000);
+});
