@@ -33,6 +33,7 @@ export const accessMatrix: AccessRow[] = [
 
   // The advisor (issue 3): any signed-in staff member may rank; an empty body fails validation.
   { method: 'POST', path: '/api/advisor/rank', expect: staffValidates },
+  { method: 'POST', path: '/api/advisor/model', expect: staffValidates },
 
   // Sign-in, roles and staff accounts (issue 4)
   { method: 'POST', path: '/api/auth/sign-in', expect: anyoneValidates },

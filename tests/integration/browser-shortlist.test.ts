@@ -31,6 +31,14 @@ describe('cam shortlist page in a real browser', () => {
     await rows.first().waitFor();
     expect(await rows.count()).toBeGreaterThanOrEqual(10);
     expect(await page.locator('canvas').count()).toBe(1);
+    // One metric at a time by default, each prediction with its shaded band; the reader can switch.
+    await expect(page.getByLabel('Torque', { exact: true }).isChecked()).resolves.toBe(true);
+    await page.getByText('Shaded: the prediction’s band').waitFor();
+    await page.getByLabel('Power', { exact: true }).check();
+    await expect(page.getByRole('img', { name: /Predicted power from/ }).isVisible()).resolves.toBe(true);
+    // The crossover is a range, not one rpm: the table shows both ends where the band moves it.
+    const crossoverCells = await rows.locator('td:nth-child(4)').allTextContents();
+    expect(crossoverCells.some((t) => /\d–[\d,]+ rpm/.test(t))).toBe(true);
     await expect(page.getByText('Predictions are indicative: an engine-cycle model').isVisible()).resolves.toBe(true);
 
     const firstCam = page.locator('table tbody tr').first().getByRole('button');
@@ -40,6 +48,15 @@ describe('cam shortlist page in a real browser', () => {
     await page.getByText('Why it ranks here').waitFor();
     await page.getByText('How these numbers were reached').click();
     await expect(page.getByText('definition of horsepower').isVisible()).resolves.toBe(true);
+    // The model's own figures load on opening: one row per simulated rpm, BMEP = IMEP − friction.
+    const perRpm = page.getByRole('table', { name: 'Per simulated rpm' });
+    await perRpm.waitFor();
+    const modelRows = perRpm.locator('tbody tr');
+    expect(await modelRows.count()).toBeGreaterThanOrEqual(8);
+    const cells = (await modelRows.first().locator('td').allTextContents()).map((t) => Number(t.replace(/,/g, '')));
+    expect(cells[0]).toBe(1500);
+    expect(Math.abs(cells[3] - cells[5] - cells[6])).toBeLessThanOrEqual(0.15);
+    await page.getByRole('table', { name: /Head flow against valve lift/ }).waitFor();
     await page.screenshot({ path: path.join(SHOTS, 'shortlist-desktop.png'), fullPage: true });
     await context.close();
   });

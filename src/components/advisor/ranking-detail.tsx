@@ -3,7 +3,10 @@
 import type { ShopRankingEntry } from '@/lib/advisor-service';
 import { SCORING_WEIGHTS, type SubscoreName } from '@/lib/advisor/weights';
 import { MakeQuoteButton } from '@/components/quotes/make-quote-button';
-import { degText, dollars, pctText, rpmText } from './format';
+import type { BuildProfile } from '@/lib/schemas/build-profile';
+import { useState } from 'react';
+import { degText, dollars, pctText, rpmRangeText, rpmText } from './format';
+import { ModelFigures } from './model-figures';
 
 type Ranking = ShopRankingEntry;
 
@@ -17,8 +20,9 @@ const SUBSCORE_LABELS: Record<SubscoreName, string> = {
   cost: 'Cost against budget',
 };
 
-export function RankingDetail({ ranking, buildId }: { ranking: Ranking; buildId?: number }) {
+export function RankingDetail({ ranking, buildId, build }: { ranking: Ranking; buildId?: number; build?: BuildProfile }) {
   const v = ranking.valveEvents;
+  const [explaining, setExplaining] = useState(false);
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <section>
@@ -68,7 +72,7 @@ export function RankingDetail({ ranking, buildId }: { ranking: Ranking; buildId?
           </table>
         ) : null}
         {buildId ? <MakeQuoteButton buildId={buildId} camId={ranking.camId} /> : null}
-        <details className="mt-4 text-sm">
+        <details className="mt-4 text-sm" onToggle={(e) => setExplaining(e.currentTarget.open)}>
           <summary className="cursor-pointer font-semibold">How these numbers were reached</summary>
           <dl className="spec mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-xs">
             <dt>Valve events at 0.050&quot;</dt>
@@ -80,7 +84,7 @@ export function RankingDetail({ ranking, buildId }: { ranking: Ranking; buildId?
             <dt>Idle vacuum</dt>
             <dd>about {ranking.idleVacuumInHg.toFixed(1)} inHg <span className="font-sans">— estimated from overlap and cylinder size (common practice; vacuum brake boosters want about 15+)</span></dd>
             <dt>Crossover</dt>
-            <dd>{ranking.crossoverRpm === null ? 'never in range' : rpmText(ranking.crossoverRpm)} <span className="font-sans">— first rpm from which the predicted torque stays above the current cam’s</span></dd>
+            <dd>{ranking.crossoverRpm === null ? 'never in range' : rpmText(ranking.crossoverRpm)}{ranking.crossoverRangeRpm ? ` (range ${rpmRangeText(ranking.crossoverRangeRpm)})` : ''} <span className="font-sans">— first rpm from which the predicted torque stays above the current cam’s; the range moves the candidate’s gain by the model’s calibration uncertainty</span></dd>
             <dt>Power</dt>
             <dd><span className="font-sans">hp = torque (lb·ft) × rpm ÷ 5252 (definition of horsepower, 33,000 ft·lbf/min)</span></dd>
             <dt>Score</dt>
@@ -94,6 +98,7 @@ export function RankingDetail({ ranking, buildId }: { ranking: Ranking; buildId?
               </>
             ) : null}
           </dl>
+          {explaining && build && typeof ranking.camId === 'number' ? <ModelFigures build={build} camId={ranking.camId} /> : null}
         </details>
       </section>
     </div>

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import useSWR from 'swr';
 import type { ShopRanking } from '@/lib/advisor-service';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
-import { dollars, hpText, pctText, rpmText, torqueText } from './format';
+import { dollars, hpText, pctText, rpmRangeText, rpmText, torqueText } from './format';
 import { PowerChart } from './power-chart';
 import { RankingDetail } from './ranking-detail';
 
@@ -74,6 +74,11 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                 ...shown.filter((r) => chartIds.includes(String(r.camId)) && r.crossoverRpm !== null).map((r) => ({ label: `#${r.rank} crossover`, rpm: r.crossoverRpm! })),
               ]}
               band={{ fromRpm: data.engine.cruiseRpm, toRpm: Math.max(data.engine.cruiseRpm + 200, data.engine.pullAwayRpm), label: `Where it’s driven (cruise ${Math.round(data.engine.cruiseRpm)} rpm)` }}
+              ranges={shown.filter((r) => chartIds.includes(String(r.camId))).flatMap((r, index) => (r.crossoverRangeRpm === null ? [] : [{
+                label: `#${r.rank} out-pulls now from ${rpmRangeText(r.crossoverRangeRpm)}`,
+                fromRpm: r.crossoverRangeRpm[0], toRpm: r.crossoverRangeRpm[1], index,
+              }]))}
+              initialMetric="torque"
             />
             <p className="mt-2 text-xs text-ink-muted">{notice}</p>
           </section>
@@ -120,7 +125,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                           {r.subscores.emissions < 100 ? <span className="ml-2 rounded bg-caution-100 px-1.5 text-xs text-caution-700">Emissions: not certified</span> : null}
                         </td>
                         <td className="px-3 py-2 text-right">{r.score.toFixed(0)}/100</td>
-                        <td className="px-3 py-2 text-right">{r.crossoverRpm === null ? 'never' : rpmText(r.crossoverRpm)}</td>
+                        <td className="px-3 py-2 text-right">{r.crossoverRangeRpm === null ? 'never' : rpmRangeText(r.crossoverRangeRpm)}</td>
                         <td className="px-3 py-2 text-right">{hpText(r.predicted.peakHp)} <span className="text-ink-muted">({pctText(r.predicted.gainPctPeakHp)})</span></td>
                         <td className="px-3 py-2 text-right">{torqueText(r.predicted.peakTorqueLbFt)}</td>
                         <td className="px-3 py-2 text-right">{r.predicted.lowEndLossPct.toFixed(1)} %</td>
@@ -132,7 +137,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                       </tr>
                       {open ? (
                         <tr>
-                          <td colSpan={10} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} buildId={buildId ?? undefined} /></td>
+                          <td colSpan={10} className="bg-paper px-3 py-3 font-sans"><RankingDetail ranking={r} buildId={buildId ?? undefined} build={build.profile} /></td>
                         </tr>
                       ) : null}
                     </RowGroup>
@@ -141,6 +146,11 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
               </tbody>
             </table>
           </div>
+          {data.ruledOut.length ? (
+            <p className="text-sm text-ink-soft">
+              {data.ruledOut.length} more cam{data.ruledOut.length === 1 ? '' : 's'} could not reach the top ten for this build whatever their curves (best possible score {Math.max(...data.ruledOut.map((x) => x.maxScore)).toFixed(0)}/100), so they were not modelled.
+            </p>
+          ) : null}
         </>
       ) : null}
     </div>

@@ -9,6 +9,8 @@ export { horsepower, HP_TORQUE_CONSTANT } from './horsepower';
 export { idleVacuumInHg } from './idle';
 export { crossoverRpm, leadStretch } from './crossover';
 export { engineContext, camModel, torqueCurve } from './prediction';
+export { modelDetail } from './model-detail';
+export type { ModelDetail, SimulatedPoint } from './model-detail';
 export { revLimitRpm, rpmGrid, VALVETRAIN_LIMIT_RPM } from './rpm-grid';
 export { BAND, bandHalfWidthPct } from './bands';
 export { SCORING_WEIGHTS, SUBSCORE_NAMES } from './weights';

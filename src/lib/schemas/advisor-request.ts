@@ -17,3 +17,9 @@ export const RankRequestSchema = z.strictObject({
 });
 
 export type RankRequest = z.output<typeof RankRequestSchema>;
+
+// POST /api/advisor/model: the cycle model's intermediate values for one catalogue cam (or the build's own cam).
+export const ModelDetailRequestSchema = z.strictObject({
+  build: BuildProfileSchema,
+  camId: z.union([z.number().int().positive(), z.literal('baseline')], { error: 'camId must be a catalogue cam id or "baseline"' }),
+});
