@@ -69,10 +69,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
             <PowerChart
               baseline={{ label: `Now: ${data.baseline.camName}`, points: data.baseline.curve }}
               candidates={shown.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ label: `#${r.rank} ${r.camName}`, points: r.curve }))}
-              markers={[
-                ...((build.profile.drivetrain.stallRpm ?? 0) > 0 ? [{ label: 'Converter stall', rpm: build.profile.drivetrain.stallRpm ?? 0 }] : []),
-                ...shown.filter((r) => chartIds.includes(String(r.camId)) && r.crossoverRpm !== null).map((r) => ({ label: `#${r.rank} crossover`, rpm: r.crossoverRpm! })),
-              ]}
+              markers={(build.profile.drivetrain.stallRpm ?? 0) > 0 ? [{ label: 'Converter stall', rpm: build.profile.drivetrain.stallRpm ?? 0 }] : []}
               band={{ fromRpm: data.engine.cruiseRpm, toRpm: Math.max(data.engine.cruiseRpm + 200, data.engine.pullAwayRpm), label: `Where it’s driven (cruise ${Math.round(data.engine.cruiseRpm)} rpm)` }}
               ranges={shown.filter((r) => chartIds.includes(String(r.camId))).flatMap((r, index) => (r.crossoverRangeRpm === null ? [] : [{
                 label: `#${r.rank} out-pulls now from ${rpmRangeText(r.crossoverRangeRpm)}`,
