@@ -1,52 +1,42 @@
-import { rankCams, type NeedKind, type RankingResult } from '@/lib/advisor';
+import { rankCams, type Need as AdvisorNeed, type RankingResult } from '@/lib/advisor';
 import { evaluateNeedRules, type Need as CatalogueNeed, type NeedRuleInput } from '@/lib/catalogue/need-rules';
 import { camCardsForRanking } from '@/lib/db/queries/advisor-cams';
 import { loadDynoHistory } from '@/lib/db/queries/dyno-history';
 import { loadNeedRules } from '@/lib/db/queries/rules';
 import { getShopSettings } from '@/lib/db/queries/settings';
-import type { BuildProfile } from '@/lib/schemas/build-profile';
+import { jobItemLine, jobLines, jobPriceCents } from '@/lib/quotes/job-price';
+import { lineNetCents } from '@/lib/quotes/pricing';
+import { vehicleClassOf, type BuildProfile, type VehicleClass } from '@/lib/schemas/build-profile';
+import type { CamCard } from '@/lib/schemas/cam-card';
 
 // Joins the pure advisor to the shop's data: its catalogue, its need rules and its labour rate.
-// The advisor says what a cam needs in kinds ("springs", "converter"); the manager's rules say
-// which parts and labour operations those are, so the shortlist and the quote agree.
+// The advisor says what a cam needs in kinds ("springs", "install"); the manager's rules say which
+// parts and labour those are for this vehicle class; jobLines()/jobPriceCents() price the whole job
+// once, and that one number is what the cost reason, the shortlist, the customer and the quote show.
 
 export type PricedItem = CatalogueNeed & { priceCents: number };
 export type ShopRankingEntry = RankingResult['rankings'][number] & {
-  camPriceCents: number; neededItems: PricedItem[]; neededItemsCents: number;
+  camPriceCents: number;
+  neededItems: PricedItem[];
+  neededItemsCents: number;
+  /** The whole job before tax (cam, needed parts and labour, tune), cents; null when the cam has no price. */
+  jobPriceCents: number | null;
   /** Units on the shop's shelf (the catalogue's stock on hand), and whether the cam is emissions-certified. */
   stockOnHand: number; emissionsCertified: boolean;
 };
 export type ShopRanking = Omit<RankingResult, 'rankings'> & {
   rankings: ShopRankingEntry[];
+  vehicleClass: VehicleClass;
 };
 
-const RULE_KIND_FOR_NEED: Record<NeedKind, NeedRuleInput['kind']> = {
-  springs: 'lift-over',
-  'deactivation-delete': 'deactivation-active',
-  converter: 'crossover-over-stall',
-  tune: 'always',
-};
+type Priced = { items: PricedItem[]; jobPriceCents: number | null };
 
-function itemPriceCents(need: CatalogueNeed, laborRateCents: number): number {
-  if (need.type === 'part') return Math.round((need.part?.priceCents ?? 0) * need.quantity);
-  return Math.round((need.laborOperation?.hours ?? 0) * need.quantity * laborRateCents);
-}
-
-/** What each kind of need costs under the shop's rules, so the budget check sees the whole job. */
-function needPricesCents(rules: NeedRuleInput[], laborRateCents: number): Partial<Record<NeedKind, number>> {
-  const prices: Partial<Record<NeedKind, number>> = {};
-  for (const [kind, ruleKind] of Object.entries(RULE_KIND_FOR_NEED) as [NeedKind, NeedRuleInput['kind']][]) {
-    const total = rules
-      .filter((r) => r.kind === ruleKind)
-      .flatMap((r) => r.items)
-      .reduce((sum, item) => {
-        const part = (item.part?.priceCents ?? 0) * item.quantity;
-        const labor = (item.laborOperation?.hours ?? 0) * item.quantity * laborRateCents;
-        return sum + part + labor;
-      }, 0);
-    if (total > 0) prices[kind] = Math.round(total);
-  }
-  return prices;
+/** The rules' parts and labour for a cam's needs, each priced as its quote line will be. */
+export function pricedItems(rules: readonly NeedRuleInput[], needs: readonly AdvisorNeed[], vehicleClass: VehicleClass, laborRateCents: number): PricedItem[] {
+  return evaluateNeedRules(rules, { needs, vehicleClass }).map((need) => {
+    const line = jobItemLine(need, laborRateCents);
+    return { ...need, priceCents: line ? lineNetCents(line) : 0 };
+  });
 }
 
 export async function rankForShop(
@@ -57,23 +47,29 @@ export async function rankForShop(
   const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory()]);
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;
-  const result = rankCams(build, cards, { history, needPriceCents: needPricesCents(rules, laborRateCents), includeCurves });
+  const vehicleClass = vehicleClassOf(build);
+  const priced = new Map<string, Priced>();
+  // Called by the advisor once per cam with the needs it found; the job it prices is kept for the entry.
+  const priceJob = (cam: CamCard, needs: readonly AdvisorNeed[]): number | null => {
+    const items = pricedItems(rules, needs, vehicleClass, laborRateCents);
+    const job = cam.priceCents === undefined ? null : jobPriceCents(jobLines({ id: 0, description: cam.name, priceCents: cam.priceCents }, items, laborRateCents));
+    priced.set(String(cam.id), { items, jobPriceCents: job });
+    return job;
+  };
+  const result = rankCams(build, cards, { history, jobPriceCents: priceJob, includeCurves });
   const byId = new Map(cards.map((card) => [String(card.id), card]));
   const rankings = result.rankings.map((ranking) => {
     const card = byId.get(String(ranking.camId))!;
-    const neededItems = evaluateNeedRules(rules, {
-      cam: { intakeLiftIn: card.intakeLiftIn, exhaustLiftIn: card.exhaustLiftIn, deactivationCompatible: Boolean(card.deactivationCompatible) },
-      build: { cylinderDeactivation: build.engine.cylinderDeactivation, stallRpm: build.drivetrain.stallRpm },
-      crossoverRpm: ranking.crossoverRpm,
-    }).map((need) => ({ ...need, priceCents: itemPriceCents(need, laborRateCents) }));
+    const { items, jobPriceCents: job } = priced.get(String(ranking.camId)) ?? { items: [], jobPriceCents: null };
     return {
       ...ranking,
       camPriceCents: card.priceCents ?? 0,
-      neededItems,
-      neededItemsCents: neededItems.reduce((sum, item) => sum + item.priceCents, 0),
+      neededItems: items,
+      neededItemsCents: items.reduce((sum, item) => sum + item.priceCents, 0),
+      jobPriceCents: job,
       stockOnHand: stockOnHand.get(String(ranking.camId)) ?? 0,
       emissionsCertified: card.emissionsCertified === true,
     };
   });
-  return { ok: true, result: { ...result, rankings } };
+  return { ok: true, result: { ...result, rankings, vehicleClass } };
 }

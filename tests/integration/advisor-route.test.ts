@@ -12,8 +12,10 @@ type RankingBody = {
   rankings: {
     camId: number; rank: number; score: number; crossoverRpm: number | null;
     curve: { rpm: number; torqueLbFt: number; hp: number }[];
-    neededItems: { type: string; part: { sku: string } | null; priceCents: number }[];
+    neededItems: { type: string; part: { sku: string } | null; laborOperation: { code: string } | null; priceCents: number }[];
     neededItemsCents: number;
+    camPriceCents: number;
+    jobPriceCents: number;
     cautions: { kind: string; text: string }[];
     reasons: { subscore: string; text: string }[];
   }[];
@@ -55,9 +57,14 @@ describe('POST /api/advisor/rank', () => {
     for (const ranking of body.rankings) {
       // Definition of horsepower: hp = torque (lb·ft) · rpm / 5252.
       for (const point of ranking.curve) expect(point.hp).toBe((point.torqueLbFt * point.rpm) / 5252);
-      // The seeded "always" rule adds the dyno tune to every cam.
+      // Every cam needs fitting and a tune: the seeded rules add the truck cam swap and the dyno tune.
       expect(ranking.neededItems.some((item) => item.part?.sku === 'TUNE-DYNO')).toBe(true);
+      expect(ranking.neededItems.some((item) => item.laborOperation?.code === 'CAM-TRUCK')).toBe(true);
       expect(ranking.neededItemsCents).toBe(ranking.neededItems.reduce((sum, item) => sum + item.priceCents, 0));
+      // The one job price: the cam plus every needed item, and the cost reason quotes that number.
+      expect(ranking.jobPriceCents).toBe(ranking.camPriceCents + ranking.neededItemsCents);
+      const dollars = `$${Math.floor(ranking.jobPriceCents / 100).toLocaleString('en-US')}.${String(ranking.jobPriceCents % 100).padStart(2, '0')}`;
+      expect(ranking.reasons.find((r) => r.subscore === 'cost')?.text).toContain(`about ${dollars} before tax`);
     }
     // The truck still has active cylinder deactivation: a cam not made for it brings the delete kit.
     const cams = await Cam.findAll({ where: { id: sellableCamIds } });

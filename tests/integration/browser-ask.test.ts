@@ -57,12 +57,12 @@ describe('the questionnaire on a phone', () => {
     await page.evaluate(() => window.sessionStorage.clear());
     await page.reload();
 
-    const progress = page.getByText(/^Question \d+ of 9$/);
+    const progress = page.getByText(/^Question \d+ of 10$/);
     const heading = page.getByRole('heading', { level: 1 });
     const next = page.getByRole('button', { name: 'Next' });
 
     // 1. Engine: by keyboard (Tab onto the first choice, arrow down to 5.3, Enter goes on).
-    await expect(progress.textContent()).resolves.toBe('Question 1 of 9');
+    await expect(progress.textContent()).resolves.toBe('Question 1 of 10');
     await expect(heading.textContent()).resolves.toBe('Which engine is it?');
     await noHorizontalOverflow(page);
     await touchTargetsAreBig(page);
@@ -75,8 +75,9 @@ describe('the questionnaire on a phone', () => {
     await expect(page.getByRole('radio', { name: /5\.3 litre/ }).isChecked()).resolves.toBe(true);
     await page.keyboard.press('Enter');
 
-    // 2–8 by taps on the answer cards.
+    // 2–9 by taps on the answer cards.
     const taps: [RegExp, RegExp][] = [
+      [/kind of vehicle/, /Pickup truck/],
       [/mostly use it for/, /Towing or hauling/],
       [/sound when it is standing still/, /A little lope you can hear/],
       [/emissions test/, /^No$/],
@@ -86,25 +87,25 @@ describe('the questionnaire on a phone', () => {
       [/spend/, /\$1,500 to \$3,000/],
     ];
     for (const [index, [title, answer]] of taps.entries()) {
-      await expect(progress.textContent()).resolves.toBe(`Question ${index + 2} of 9`);
+      await expect(progress.textContent()).resolves.toBe(`Question ${index + 2} of 10`);
       await expect(heading.textContent()).resolves.toMatch(title);
       await page.locator('label').filter({ hasText: answer }).first().tap();
       await touchTargetsAreBig(page);
       await noHorizontalOverflow(page);
-      if (index === 2) {
+      if (index === 3) {
         // Back keeps the earlier answer; a reload keeps everything.
         await page.getByRole('button', { name: 'Back' }).tap();
         await expect(page.getByRole('radio', { name: /A little lope/ }).isChecked()).resolves.toBe(true);
         await next.tap();
         await page.reload();
-        await expect(progress.textContent()).resolves.toBe('Question 4 of 9');
+        await expect(progress.textContent()).resolves.toBe('Question 5 of 10');
         await expect(page.getByRole('radio', { name: /^No$/ }).isChecked()).resolves.toBe(true);
       }
       await next.tap();
     }
 
-    // 9. Contact, typed, consent ticked with the space bar, sent with Enter.
-    await expect(progress.textContent()).resolves.toBe('Question 9 of 9');
+    // 10. Contact, typed, consent ticked with the space bar, sent with Enter.
+    await expect(progress.textContent()).resolves.toBe('Question 10 of 10');
     await page.getByLabel('Your name').fill('Pim Ardengast');
     await page.getByLabel('E-mail').fill(EMAIL);
     await touchTargetsAreBig(page);
@@ -117,16 +118,23 @@ describe('the questionnaire on a phone', () => {
     await expect(page.getByRole('heading', { name: 'This is an estimate, not a quote' }).isVisible()).resolves.toBe(true);
     await expect(page.getByRole('heading', { name: 'The shop will contact you' }).isVisible()).resolves.toBe(true);
     await expect(page.getByRole('heading', { level: 3, name: /^Choice [123]: / }).count()).resolves.toBe(3);
-    // No prices beyond "from $X": whole dollars only, never an exact figure with cents.
+    // Each choice shows the whole job's price before tax — the number the shop's shortlist and quote show
+    // for the same build — and no other figure.
     const text = (await page.locator('main').textContent()) ?? '';
-    expect(text.match(/from \$[\d,]+/g)).toHaveLength(3);
-    expect(text).not.toMatch(/\$[\d,]+\.\d\d/);
+    const prices = text.match(/About \$[\d,]+\.\d\d for the whole job — the cam, the parts it needs, fitting and the tune — before tax/g) ?? [];
+    expect(prices).toHaveLength(3);
+    expect(text.match(/\$[\d,]+(\.\d\d)?/g)).toHaveLength(3);
     await noHorizontalOverflow(page);
     await page.screenshot({ path: path.join(SHOTS, 'ask-phone-result.png'), fullPage: true });
     // Sent answers are no longer kept in the tab.
-    await expect(page.evaluate(() => window.sessionStorage.getItem('lobewise.ask.v1'))).resolves.toBeNull();
-    const [row] = await sequelize.query<{ name: string }>('SELECT name FROM leads WHERE email = ?', { replacements: [EMAIL], type: QueryTypes.SELECT });
+    await expect(page.evaluate(() => window.sessionStorage.getItem('lobewise.ask.v2'))).resolves.toBeNull();
+    const [row] = await sequelize.query<{ name: string; answers: string | object; shortlist: string | object }>('SELECT name, answers, shortlist FROM leads WHERE email = ?', { replacements: [EMAIL], type: QueryTypes.SELECT });
     expect(row.name).toBe('Pim Ardengast');
+    const json = (v: string | object) => (typeof v === 'string' ? JSON.parse(v) : v);
+    expect(json(row.answers)).toMatchObject({ vehicle: 'truck' });
+    // The prices on the page are the stored job prices, to the cent.
+    const stored = (json(row.shortlist) as { entries: { jobPriceCents: number }[] }).entries.map((e) => e.jobPriceCents);
+    expect(prices.map((p) => p.match(/\$([\d,]+\.\d\d)/)![1])).toEqual(stored.map((c) => (c / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })));
     expect(consoleErrors).toEqual([]);
     await page.close();
   });

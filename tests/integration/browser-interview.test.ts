@@ -58,7 +58,12 @@ describe('counter interview in a real browser', () => {
     expect(await focusedId(page)).toBe('f-vehicleLabel');
     await page.keyboard.type('2015 crew-cab pickup, 5.3 L');
 
-    // Vehicle → weight → brakes → use → cruise → cylinders → bore (pre-filled from the 5.3 L preset).
+    // Vehicle → kind of vehicle (a truck by default; this one is an SUV) → weight → brakes → use → cruise
+    // → cylinders → bore (pre-filled from the 5.3 L preset).
+    await page.keyboard.press('Enter');
+    expect(await focusedId(page)).toBe('f-profile-vehicle-class');
+    expect(await page.inputValue('#f-profile-vehicle-class')).toBe('truck');
+    await page.selectOption('#f-profile-vehicle-class', 'suv');
     for (let i = 0; i < 6; i++) await page.keyboard.press('Enter');
     expect(await focusedId(page)).toBe('f-profile-engine-boreIn');
     expect(await page.inputValue('#f-profile-engine-boreIn')).toBe('3.78');
@@ -89,6 +94,8 @@ describe('counter interview in a real browser', () => {
     expect((stored as Build & { customer: Customer }).customer.name).toBe(`${MARK} Walk-in`);
     expect(stored!.vehicleLabel).toBe('2015 crew-cab pickup, 5.3 L');
     expect((stored!.profile as { use: { budgetCents: number } }).use.budgetCents).toBe(350000);
+    expect((stored!.profile as { vehicle: { class: string } }).vehicle.class).toBe('suv');
+    expect(stored!.profileSchemaVersion).toBe(2);
 
     await page.getByRole('heading', { name: 'Cam shortlist' }).waitFor();
     expect(await page.inputValue('select')).toBe(String(buildId));

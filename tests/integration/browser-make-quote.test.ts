@@ -6,7 +6,8 @@ import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
 
 // From the shortlist to a draft quote in a real browser: "Make a quote" under a cam posts the build
-// and the cam and opens the new draft, whose lines and totals are on the staff quote page.
+// and the cam and opens the new draft, whose lines and totals are on the staff quote page. The job
+// price the shortlist shows for the cam is the draft's subtotal (before tax), to the cent.
 const { appUrl } = readRuntime();
 const SHOTS = path.resolve(__dirname, '../../var/test/screenshots');
 
@@ -18,17 +19,23 @@ describe('Make a quote from the shortlist', () => {
   });
   afterAll(() => browser?.close());
 
-  it('opens a new draft for the build and the cam', async () => {
+  it('opens a new draft for the build and the cam, at the job price the shortlist showed', async () => {
     const [name, value] = (await signIn('counter')).split('=');
     const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
     await context.addCookies([{ name, value, url: appUrl }]);
     const page = await context.newPage();
-    await page.goto(`${appUrl}/advisor`);
-    await page.getByLabel('Build').selectOption({ index: 1 });
+    // The demo 5.3 L pickup (seeded build 1), preselected as the interview's "see the shortlist" link does.
+    await page.goto(`${appUrl}/advisor?build=1`);
     const firstCam = page.locator('table tbody tr').first().getByRole('button');
     await firstCam.waitFor();
     const camText = (await firstCam.textContent()) ?? '';
+    const jobPrice = ((await page.locator('table tbody tr').first().locator('[data-job-price]').textContent()) ?? '').trim();
+    expect(jobPrice).toMatch(/^\$\d{1,3}(,\d{3})*\.\d{2}$/);
+    await expect(page.getByRole('columnheader', { name: 'Job before tax' }).isVisible()).resolves.toBe(true);
     await firstCam.click();
+    // The opened row says the same price, and the cost reason quotes it too.
+    await expect(page.getByText(`Job before tax: ${jobPrice}`).isVisible()).resolves.toBe(true);
+    await expect(page.getByText(`about ${jobPrice} before tax`).isVisible()).resolves.toBe(true);
     await Promise.all([page.waitForURL(/\/quotes\/\d+$/), page.getByRole('button', { name: 'Make a quote' }).click()]);
     await page.getByRole('heading', { name: /Quote Q-\d{4}-\d{4}/ }).waitFor();
     await expect(page.getByText('Draft', { exact: true }).first().isVisible()).resolves.toBe(true);
@@ -36,6 +43,10 @@ describe('Make a quote from the shortlist', () => {
     // The cam line names the cam that was opened on the shortlist.
     const sku = camText.trim().split(/\s+/)[0];
     await expect(page.locator('table tbody tr').first().textContent()).resolves.toContain(sku);
+    // Same number on the quote: its subtotal (before tax), with the truck cam swap among its lines.
+    const subtotal = page.locator('dt', { hasText: /^Subtotal$/ }).locator('xpath=following-sibling::dd[1]');
+    await expect(subtotal.textContent()).resolves.toBe(jobPrice);
+    await expect(page.getByText('Cam swap, truck (front of engine, lifters inspected)').first().isVisible()).resolves.toBe(true);
     await page.screenshot({ path: path.join(SHOTS, 'quote-draft-desktop.png'), fullPage: true });
     await context.close();
   });

@@ -58,18 +58,22 @@ describe('shop settings', () => {
 });
 
 describe('need rules', () => {
-  it('lists the rules with their parts and labour for any staff member', async () => {
+  it('lists the rules with their parts and labour for any staff member: one per need kind, install by vehicle class', async () => {
     const response = await app().get('/api/rules').set('Cookie', tech);
     expect(response.status).toBe(200);
-    const lift = response.body.items.find((r: { kind: string }) => r.kind === 'lift-over');
-    expect(lift).toMatchObject({ threshold: 0.57, items: [expect.objectContaining({ part: expect.objectContaining({ sku: 'SPR-600' }), laborOperation: expect.objectContaining({ code: 'SPR-INST' }) })] });
+    const springs = response.body.items.find((r: { kind: string }) => r.kind === 'springs');
+    expect(springs).toMatchObject({ vehicleClass: null, items: [expect.objectContaining({ part: expect.objectContaining({ sku: 'SPR-600' }), laborOperation: expect.objectContaining({ code: 'SPR-INST' }) })] });
+    // No threshold of its own: the advisor's installed-springs limit decides when springs are needed.
+    expect(springs).not.toHaveProperty('threshold');
+    const installs = response.body.items.filter((r: { kind: string }) => r.kind === 'install');
+    expect(installs.map((r: { vehicleClass: string | null; items: { laborOperation: { code: string } }[] }) => [r.vehicleClass, r.items[0].laborOperation.code])).toEqual([[null, 'CAM-TRUCK'], ['car', 'CAM-CAR']]);
   });
 
   it('creates, changes (items and version) and deletes a rule, auditing each step', async () => {
-    const created = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', threshold: 0.66, label: 'Test: big lift wants the dual springs', items: [{ partId: 3, laborOperationId: 4 }] });
+    const created = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'springs', vehicleClass: 'van', label: 'Test: vans get the dual springs', items: [{ partId: 3, laborOperationId: 4 }] });
     expect(created.status).toBe(201);
     madeRules.push(created.body.id);
-    expect(created.body).toMatchObject({ kind: 'lift-over', threshold: 0.66, version: 1, items: [{ partId: 3, laborOperationId: 4, quantity: 1 }] });
+    expect(created.body).toMatchObject({ kind: 'springs', vehicleClass: 'van', version: 1, items: [{ partId: 3, laborOperationId: 4, quantity: 1 }] });
 
     const changed = await app().patch(`/api/rules/${created.body.id}`).set('Cookie', manager).send({ version: 1, items: [{ partId: 3, laborOperationId: null, quantity: 1 }, { partId: 6, quantity: 1 }] });
     expect(changed.status).toBe(200);
@@ -87,20 +91,23 @@ describe('need rules', () => {
     expect(actions).toEqual(['rule.created', 'rule.updated', 'rule.deleted']);
   });
 
-  it('checks the threshold against the kind, and the items against the catalogue', async () => {
-    const noThreshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', label: 'x', items: [{ partId: 1 }] });
-    expect(noThreshold.body.errors).toEqual([expect.objectContaining({ field: 'threshold' })]);
-    const extraThreshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'always', threshold: 5, label: 'x', items: [{ partId: 1 }] });
-    expect(extraThreshold.body.errors).toEqual([expect.objectContaining({ field: 'threshold' })]);
-    const badItems = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'always', label: 'x', items: [{ partId: 99999 }, {}] });
+  it('checks the kind, the vehicle class and the items against the catalogue; a threshold is refused', async () => {
+    const oldKind = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', label: 'x', items: [{ partId: 1 }] });
+    expect(oldKind.status).toBe(422);
+    expect(oldKind.body.errors).toEqual([expect.objectContaining({ field: 'kind', message: expect.stringContaining('springs') })]);
+    const threshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'springs', threshold: 0.57, label: 'x', items: [{ partId: 1 }] });
+    expect(threshold.body.errors).toEqual([expect.objectContaining({ field: 'threshold', message: expect.stringContaining('the advisor decides') })]);
+    const badClass = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'install', vehicleClass: 'boat', label: 'x', items: [{ partId: 1 }] });
+    expect(badClass.body.errors).toEqual([expect.objectContaining({ field: 'vehicleClass' })]);
+    const badItems = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'tune', label: 'x', items: [{ partId: 99999 }, {}] });
     expect(badItems.status).toBe(422);
     expect(badItems.body.errors.map((e: { field: string }) => e.field)).toEqual(['items.1.partId']);
-    const unknownPart = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'always', label: 'x', items: [{ partId: 99999 }] });
+    const unknownPart = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'tune', label: 'x', items: [{ partId: 99999 }] });
     expect(unknownPart.body.errors).toEqual([{ field: 'items.0.partId', message: 'there is no part with id 99999' }]);
   });
 
   it('refuses counter and tech changes', async () => {
-    expect((await app().post('/api/rules').set('Cookie', counter).send({ kind: 'always', label: 'x', items: [{ partId: 1 }] })).status).toBe(403);
+    expect((await app().post('/api/rules').set('Cookie', counter).send({ kind: 'tune', label: 'x', items: [{ partId: 1 }] })).status).toBe(403);
     expect((await app().patch('/api/rules/1').set('Cookie', tech).send({ version: 1, active: false })).status).toBe(403);
     expect((await app().delete('/api/rules/1').set('Cookie', counter)).status).toBe(403);
     expect((await NeedRule.findByPk(1))?.active).toBe(true);

@@ -52,7 +52,7 @@ describe('customers and builds API (counter interview)', () => {
       vehicleLabel: '2014 crew-cab pickup, 5.3 L',
       profile: truckProfile(),
     }).expect(201);
-    expect(created.body).toMatchObject({ vehicleLabel: '2014 crew-cab pickup, 5.3 L', customerName: `${MARK} Walk-in`, profileSchemaVersion: 1, version: 1, baselineCamId: null });
+    expect(created.body).toMatchObject({ vehicleLabel: '2014 crew-cab pickup, 5.3 L', customerName: `${MARK} Walk-in`, profileSchemaVersion: 2, version: 1, baselineCamId: null });
     const id = created.body.id as number;
 
     const read = await request(appUrl).get(`/api/builds/${id}`).set('Cookie', tech).expect(200);
@@ -60,7 +60,7 @@ describe('customers and builds API (counter interview)', () => {
     expect(read.body.profile.baselineCam.rockerRatio).toBe(1.7); // the schema's default, stored
 
     const row = await Build.findByPk(id);
-    expect(row!.profileSchemaVersion).toBe(1);
+    expect(row!.profileSchemaVersion).toBe(2);
     const customer = await request(appUrl).get(`/api/customers/${read.body.customerId}`).set('Cookie', tech).expect(200);
     expect(customer.body).toMatchObject({ name: `${MARK} Walk-in`, phone: '555-0100', email: 'walk.in@example.com' });
     expect(customer.body.builds.map((b: { id: number }) => b.id)).toEqual([id]);

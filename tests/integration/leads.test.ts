@@ -16,7 +16,7 @@ const run = crypto.randomBytes(4).toString('hex');
 const email = (tag: string) => `ask-${tag}-${run}@example.com`;
 
 const fullAnswers = {
-  engine: '5.3', use: 'towing', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000',
+  engine: '5.3', vehicle: 'suv', use: 'towing', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000',
   name: 'Wren Halvorsen', email: email('full'), phone: '555-0107', consent: true,
 };
 
@@ -37,7 +37,7 @@ afterAll(async () => {
   await disconnectTestDatabase();
 });
 
-type Entry = { rank: number; camId: number; camName: string; fromPriceCents: number; reasons: string[]; alsoNeeds: string[]; cautions: string[]; emissionsCertified: boolean };
+type Entry = { rank: number; camId: number; camName: string; jobPriceCents: number; reasons: string[]; alsoNeeds: string[]; cautions: string[]; emissionsCertified: boolean };
 
 describe('POST /api/leads with a full answer set', () => {
   let body: { id: number; token: string; resultUrl: string; shortlist: { entries: Entry[]; notice: string } };
@@ -54,7 +54,7 @@ describe('POST /api/leads with a full answer set', () => {
     for (const entry of body.shortlist.entries) {
       expect(entry.camName).toEqual(expect.any(String));
       expect(entry.reasons.length).toBeGreaterThan(0);
-      expect(entry.fromPriceCents).toBeGreaterThan(0);
+      expect(Number.isInteger(entry.jobPriceCents) && entry.jobPriceCents > 0).toBe(true);
     }
     expect(new Set(body.shortlist.entries.map((e) => e.camId)).size).toBe(3);
     // Plain words for the customer: no exact prices, no counter jargon like inHg or dynamic compression.

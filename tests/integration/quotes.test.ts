@@ -11,7 +11,8 @@ import crypto from 'node:crypto';
 // sent by e-mail, opened from the link, paid through the payments fake, replayed, tampered, refunded.
 const { appUrl, mailUrl, paymentsUrl, env } = readRuntime();
 const CAM_ID = 13; // F9-219 Foundry Nine Big Truck 219: $439.00, lift 0.595", not deactivation-compatible
-const CAM_SWAP_TRUCK = 1; // labour operation CAM-TRUCK, 8.0 h
+const CAM_SWAP_TRUCK = 1; // labour operation CAM-TRUCK, 8.0 h (the seeded install rule for every vehicle but cars)
+const PTV_CHECK = 5; // labour operation PTV-CHK, 1.0 h
 const LABOR_RATE = 13_500; // the demo shop's $135.00 an hour
 const sha256 = (s: string) => crypto.createHash('sha256').update(s).digest('hex');
 const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
@@ -56,7 +57,7 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     expect(ranked.status).toBe(200);
     const needed = ranked.body.rankings[0].neededItems as { type: string; partId: number | null; laborOperationId: number | null; priceCents: number; part?: { sku: string } | null; laborOperation?: { code: string } | null }[];
 
-    const res = await counter.post('/api/quotes').send({ buildId: 1, camId: CAM_ID, extraLines: [{ kind: 'labor', laborOperationId: CAM_SWAP_TRUCK }] });
+    const res = await counter.post('/api/quotes').send({ buildId: 1, camId: CAM_ID, extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }] });
     expect(res.status).toBe(201);
     quote = res.body;
     expect(quote.status).toBe('draft');
@@ -67,15 +68,19 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     // Then exactly what the rules add, in the rules' order and at the advisor's prices.
     const ruleLines = quote.lines.slice(1, 1 + needed.length);
     expect(ruleLines.map((l) => [l.partId, l.laborOperationId, l.totalCents])).toEqual(needed.map((n) => [n.partId, n.laborOperationId, n.priceCents]));
-    // Known from the seeded rules: lift 0.595" > 0.570" → ovate springs + install (2 h);
-    // active deactivation with a non-compatible cam → delete kit + 1.5 h; always → tune, tune session, gaskets.
+    // Known from the seeded rules and the advisor's needs: a truck → the truck cam swap (8 h) and gaskets;
+    // lift 0.595" past the installed springs' 0.500" → ovate springs + install (2 h); 0.595" ≥ 0.580" →
+    // hardened pushrods; active deactivation with a non-compatible cam → delete kit + 1.5 h; tune + session.
     const skus = needed.map((n) => n.part?.sku ?? n.laborOperation?.code);
-    expect(skus).toEqual(expect.arrayContaining(['SPR-600', 'SPR-INST', 'DD-KIT-53', 'DD-ADD', 'TUNE-DYNO', 'TUNE-LAB', 'GS-TC']));
+    expect(skus).toEqual(expect.arrayContaining(['CAM-TRUCK', 'GS-TC', 'SPR-600', 'SPR-INST', 'PR-7400', 'DD-KIT-53', 'DD-ADD', 'TUNE-DYNO', 'TUNE-LAB']));
+    expect(skus).not.toContain('CAM-CAR');
+    expect(quote.lines.find((l) => l.laborOperationId === CAM_SWAP_TRUCK)).toMatchObject({ kind: 'labor', quantity: 8, totalCents: 108_000 });
     expect(quote.lines.find((l) => l.laborOperationId === 4)).toMatchObject({ kind: 'labor', quantity: 2, unitPriceCents: LABOR_RATE, totalCents: 27_000 });
     expect(quote.lines.find((l) => l.laborOperationId === 3)).toMatchObject({ quantity: 1.5, totalCents: 20_250 });
     expect(quote.lines.find((l) => l.partId === 27)).toMatchObject({ kind: 'tune', totalCents: 49_500 });
-    // The staff's extra line last: 8 h × $135.00.
-    expect(quote.lines.at(-1)).toMatchObject({ kind: 'labor', laborOperationId: CAM_SWAP_TRUCK, quantity: 8, totalCents: 108_000 });
+    // The staff's extra line last: 1 h × $135.00; before it the draft is exactly the shortlist's job price.
+    expect(quote.lines.at(-1)).toMatchObject({ kind: 'labor', laborOperationId: PTV_CHECK, quantity: 1, totalCents: 13_500 });
+    expect(quote.subtotalCents - 13_500).toBe(ranked.body.rankings[0].jobPriceCents);
 
     // Totals: tax 8.25 % on goods only (cam, parts), half up; deposit 20 % clamped to $200…$1,000.
     const subtotal = quote.lines.reduce((s, l) => s + l.totalCents, 0);

@@ -4,7 +4,8 @@ import { useMemo, useState } from 'react';
 import useSWR from 'swr';
 import type { ShopRanking } from '@/lib/advisor-service';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
-import { dollars, hpText, pctText, rpmRangeText, rpmText, torqueText } from './format';
+import { formatCents } from '@/components/catalogue/format';
+import { hpText, pctText, rpmRangeText, rpmText, torqueText } from './format';
 import { PowerChart } from './power-chart';
 import { RankingDetail } from './ranking-detail';
 
@@ -101,7 +102,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                   <th scope="col" className="px-3 py-2 text-right">Peak power</th>
                   <th scope="col" className="px-3 py-2 text-right">Peak torque</th>
                   <th scope="col" className="px-3 py-2 text-right">Low-end loss</th>
-                  <th scope="col" className="px-3 py-2 text-right">Cam + needs</th>
+                  <th scope="col" className="px-3 py-2 text-right">Job before tax</th>
                   <th scope="col" className="px-3 py-2 text-right">On hand</th>
                   <th scope="col" className="px-3 py-2">Chart</th>
                 </tr>
@@ -126,7 +127,8 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                         <td className="px-3 py-2 text-right">{hpText(r.predicted.peakHp)} <span className="text-ink-muted">({pctText(r.predicted.gainPctPeakHp)})</span></td>
                         <td className="px-3 py-2 text-right">{torqueText(r.predicted.peakTorqueLbFt)}</td>
                         <td className="px-3 py-2 text-right">{r.predicted.lowEndLossPct.toFixed(1)} %</td>
-                        <td className="px-3 py-2 text-right">{dollars(r.camPriceCents + r.neededItemsCents)}</td>
+                        {/* The one job price (cam, needed parts and labour, tune): a quote drafted from this row totals the same before tax. */}
+                        <td className="px-3 py-2 text-right" data-job-price>{formatCents(r.jobPriceCents)}</td>
                         <td className="whitespace-nowrap px-3 py-2 text-right">{r.stockOnHand > 0 ? `${r.stockOnHand} in stock` : <span className="font-sans text-caution-700">None: order</span>}</td>
                         <td className="px-3 py-2">
                           <input type="checkbox" aria-label={`Show ${r.camName} on the chart`} checked={chartIds.includes(id)} onChange={() => toggleChart(id)} />

@@ -3,17 +3,18 @@
 import { FieldArray, Form, Formik } from 'formik';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, NeedRuleSchema } from '@/lib/schemas/need-rule';
+import { VEHICLE_CLASSES, type VehicleClass } from '@/lib/schemas/build-profile';
+import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, NeedRuleSchema, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
 import { sendJson } from './api';
 import { Banner, buttonClass } from './ui';
 
 type Item = { partId: string; laborOperationId: string; quantity: string };
-type Values = { kind: (typeof NEED_RULE_KIND_OPTIONS)[number]; threshold: string; label: string; active: boolean; items: Item[] };
-type RuleRecord = { id: number; version: number; kind: Values['kind']; threshold: number | null; label: string; active: boolean; items: { partId: number | null; laborOperationId: number | null; quantity: number }[] };
+type Values = { kind: (typeof NEED_RULE_KIND_OPTIONS)[number]; vehicleClass: VehicleClass | 'any'; label: string; active: boolean; items: Item[] };
+type RuleRecord = { id: number; version: number; kind: Values['kind']; vehicleClass: VehicleClass | null; label: string; active: boolean; items: { partId: number | null; laborOperationId: number | null; quantity: number }[] };
 
 const toPayload = (v: Values) => ({
   kind: v.kind,
-  threshold: NEED_RULE_KIND_TEXT[v.kind].threshold && v.threshold.trim() !== '' ? Number(v.threshold) : null,
+  vehicleClass: v.vehicleClass === 'any' ? null : v.vehicleClass,
   label: v.label,
   active: v.active,
   items: v.items.map((i) => ({ partId: i.partId ? Number(i.partId) : null, laborOperationId: i.laborOperationId ? Number(i.laborOperationId) : null, quantity: i.quantity ? Number(i.quantity) : 1 })),
@@ -25,8 +26,8 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
   const [problem, setProblem] = useState<string | null>(null);
   const [conflict, setConflict] = useState<RuleRecord | null>(null);
   const initial: Values = {
-    kind: rule?.kind ?? 'lift-over',
-    threshold: rule?.threshold === null || rule?.threshold === undefined ? '' : String(rule.threshold),
+    kind: rule?.kind ?? 'install',
+    vehicleClass: rule?.vehicleClass ?? 'any',
     label: rule?.label ?? '',
     active: rule?.active ?? true,
     items: rule?.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) ?? [{ partId: '', laborOperationId: '', quantity: '1' }],
@@ -54,17 +55,15 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
     >
       {({ values, errors, submitCount, isSubmitting, handleChange, setValues }) => {
         const show = (key: string) => (submitCount > 0 ? (errors as Record<string, string>)[key] : undefined);
-        const threshold = NEED_RULE_KIND_TEXT[values.kind].threshold;
         return (
           <Form noValidate className="flex flex-col gap-4">
             {conflict ? (
               <Banner tone="caution" title="Someone else saved this rule while you were editing it. Nothing was overwritten.">
                 <p>
-                  Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}
-                  {conflict.threshold !== null ? ` at ${conflict.threshold}` : ''}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
+                  Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}, {RULE_VEHICLE_CLASS_TEXT[conflict.vehicleClass ?? 'any']}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
                 </p>
                 <div className="mt-2 flex gap-2">
-                  <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setValues({ ...values, kind: conflict.kind, threshold: conflict.threshold === null ? '' : String(conflict.threshold), label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); setConflict(null); }}>
+                  <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setValues({ ...values, kind: conflict.kind, vehicleClass: conflict.vehicleClass ?? 'any', label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); setConflict(null); }}>
                     Load their version
                   </button>
                   <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setConflict(null); }}>
@@ -75,7 +74,7 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
             ) : null}
             {problem ? <Banner tone="fault" title="Not saved">{problem}</Banner> : null}
             <fieldset className="flex flex-col gap-2">
-              <legend className="text-sm font-semibold">When does this rule apply?</legend>
+              <legend className="text-sm font-semibold">Which need does it price? (The advisor decides when a cam has it.)</legend>
               {NEED_RULE_KIND_OPTIONS.map((kind) => (
                 <label key={kind} className="flex items-center gap-2 text-sm">
                   <input type="radio" name="kind" value={kind} checked={values.kind === kind} onChange={handleChange} />
@@ -83,13 +82,13 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                 </label>
               ))}
             </fieldset>
-            {threshold ? (
-              <label className="flex max-w-xs flex-col gap-1 text-sm font-semibold">
-                N ({threshold.label}, {threshold.unit})
-                <input name="threshold" inputMode="decimal" className={`${input} spec`} value={values.threshold} onChange={handleChange} aria-invalid={show('threshold') ? true : undefined} />
-                {show('threshold') ? <span className="text-xs font-normal text-fault-700">Problem: {show('threshold')}</span> : null}
-              </label>
-            ) : null}
+            <label className="flex max-w-xs flex-col gap-1 text-sm font-semibold">
+              For which vehicles
+              <select name="vehicleClass" className={input} value={values.vehicleClass} onChange={handleChange}>
+                {(['any', ...VEHICLE_CLASSES] as const).map((vc) => <option key={vc} value={vc}>{RULE_VEHICLE_CLASS_TEXT[vc]}</option>)}
+              </select>
+              <span className="text-xs font-normal text-ink-muted">A rule for one class replaces the “every vehicle” rules of the same need for that class.</span>
+            </label>
             <label className="flex flex-col gap-1 text-sm font-semibold">
               Label (what staff and customers read)
               <input name="label" className={input} value={values.label} onChange={handleChange} aria-invalid={show('label') ? true : undefined} />

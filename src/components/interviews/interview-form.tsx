@@ -10,6 +10,7 @@ import { sendJson } from '@/lib/forms/zod-formik';
 import { BuildCreateSchema, BuildUpdateSchema } from '@/lib/schemas/build';
 import {
   BUILD_LIMITS as B, DEACTIVATION_STATES, EXHAUST_SYSTEMS, HEAD_MATERIALS, HEADER_TYPES, IDLE_WISHES, INTAKE_MANIFOLDS, POWER_BRAKES, PRIMARY_USES, TRANSMISSIONS,
+  VEHICLE_CLASSES,
 } from '@/lib/schemas/build-profile';
 import { CAM_LIMITS as C } from '@/lib/schemas/cam-card';
 import { CUSTOMER_LIMITS } from '@/lib/schemas/customer';
@@ -30,6 +31,8 @@ const WORDS: Record<string, string> = {
   smooth: 'Smooth, like stock', noticeable: 'A noticeable lope', aggressive: 'Aggressive, choppy',
 };
 const opts = (values: readonly string[]) => values.map((v) => [v, WORDS[v] ?? v] as const);
+// Vehicle classes get their own words: "truck" above is the intake's name.
+const VEHICLE_WORDS: Record<(typeof VEHICLE_CLASSES)[number], string> = { truck: 'Pickup truck', suv: 'SUV', van: 'Van', car: 'Car' };
 
 type Props =
   | { mode: 'create'; cards: BaselineCard[]; prefill?: InterviewValues | null; leadId?: number }
@@ -200,6 +203,7 @@ function VehicleSection() {
   return (
     <Section step={2} title="Vehicle and use" lead="What it is, what it weighs, and what the customer does with it.">
       <TextInput name="vehicleLabel" label="Vehicle" hint="Year, body, engine, e.g. “2012 crew-cab pickup, 5.3 L”." wide />
+      <Choice name="profile.vehicle.class" label="Kind of vehicle" options={VEHICLE_CLASSES.map((v) => [v, VEHICLE_WORDS[v]] as const)} hint="The shop prices the cam install by it." />
       <NumberField name="profile.vehicle.weightLb" label="Weight as driven" unit="lb" range={B.weightLb} decimals={false} />
       <Choice name="profile.vehicle.powerBrakes" label="Power brakes" options={opts(POWER_BRAKES)} hint="A vacuum booster wants about 15 inHg at idle." />
       <Choice name="profile.use.primary" label="Mostly used for" options={opts(PRIMARY_USES)} />

@@ -2,7 +2,7 @@ import type { FormikErrors } from 'formik';
 import { setIn } from 'formik';
 import type { z } from 'zod';
 import type { CamRecord } from '@/lib/db/queries/cams';
-import { BUILD_LIMITS } from '@/lib/schemas/build-profile';
+import { BUILD_LIMITS, vehicleClassOf } from '@/lib/schemas/build-profile';
 
 // The interview form's values (every input is text, as typed) and the two conversions around them:
 // form → the JSON POST/PATCH /api/builds takes, and a stored build → form. Field names are the API's
@@ -25,7 +25,7 @@ export type InterviewValues = {
     engine: { cylinders: S; boreIn: S; strokeIn: S; rodLengthIn: S; compressionRatio: S; headMaterial: S; intakeFlowCfm: S; intakeManifold: S; cylinderDeactivation: S };
     exhaust: { headers: S; primaryIn: S; system: S };
     drivetrain: { transmission: S; stallRpm: S; launchRpm: S; axleRatio: S; topGearRatio: S; tireDiameterIn: S };
-    vehicle: { weightLb: S; powerBrakes: S };
+    vehicle: { weightLb: S; powerBrakes: S; class: S };
     // budgetCents holds dollars as typed; the payload turns them into whole cents. budgetKnown 'unsure' is
     // the customer's "not sure yet": no budget is sent (stored as 0, "none given").
     use: { primary: S; idle: S; fuelOctane: S; emissionsRequired: 'yes' | 'no'; cruiseMph: S; budgetKnown: 'figure' | 'unsure'; budgetCents: S };
@@ -115,7 +115,7 @@ export function blankInterview(cards: BaselineCard[]): InterviewValues {
       engine: { cylinders: '8', boreIn: '', strokeIn: '', rodLengthIn: '', compressionRatio: '', headMaterial: 'aluminum', intakeFlowCfm: '', intakeManifold: 'truck', cylinderDeactivation: 'none' },
       exhaust: { headers: 'manifold', primaryIn: '', system: 'full-with-cats' },
       drivetrain: { transmission: 'automatic', stallRpm: '2000', launchRpm: '', axleRatio: '3.42', topGearRatio: '0.70', tireDiameterIn: '31' },
-      vehicle: { weightLb: '5200', powerBrakes: 'vacuum' },
+      vehicle: { weightLb: '5200', powerBrakes: 'vacuum', class: 'truck' },
       use: { primary: 'daily', idle: 'smooth', fuelOctane: '87', emissionsRequired: 'yes', cruiseMph: '65', budgetKnown: 'figure', budgetCents: '' },
       baselineCam: { id: 'typed', name: '', intakeDuration050: '', exhaustDuration050: '', intakeAdvertised: '', exhaustAdvertised: '', intakeLiftIn: '', exhaustLiftIn: '', lsa: '', intakeCenterline: '', rockerRatio: '1.7', springMaxLiftIn: '' },
     },
@@ -132,6 +132,9 @@ export function valuesFromBuild(build: { customerId: number; customerName: strin
     for (const field of Object.keys(out)) out[field] = str(p[key]?.[field]);
     return out as InterviewValues['profile'][K];
   };
+  const vehicle = section('vehicle');
+  // A profile saved before schema 2 has no class: show the default the advisor and the rules use.
+  if (!vehicle.class) vehicle.class = vehicleClassOf({ vehicle: {}, engine: { intakeManifold: str(p.engine?.intakeManifold) } });
   const use = section('use');
   use.emissionsRequired = p.use?.emissionsRequired === false ? 'no' : 'yes';
   const budget = Number(p.use?.budgetCents);
@@ -144,7 +147,7 @@ export function valuesFromBuild(build: { customerId: number; customerName: strin
     customer: { name: build.customerName, phone: '', email: '', notes: '' },
     vehicleLabel: build.vehicleLabel,
     baselineCamId: build.baselineCamId === null ? '' : String(build.baselineCamId),
-    profile: { engine: section('engine'), exhaust: section('exhaust'), drivetrain: section('drivetrain'), vehicle: section('vehicle'), use, baselineCam: section('baselineCam') },
+    profile: { engine: section('engine'), exhaust: section('exhaust'), drivetrain: section('drivetrain'), vehicle, use, baselineCam: section('baselineCam') },
   };
 }
 
@@ -189,7 +192,7 @@ export function payloadFromValues(values: InterviewValues, mode: 'create' | 'edi
         topGearRatio: num(p.drivetrain.topGearRatio),
         tireDiameterIn: num(p.drivetrain.tireDiameterIn),
       },
-      vehicle: { weightLb: num(p.vehicle.weightLb), powerBrakes: p.vehicle.powerBrakes },
+      vehicle: { weightLb: num(p.vehicle.weightLb), powerBrakes: p.vehicle.powerBrakes, class: p.vehicle.class || undefined },
       use: {
         primary: p.use.primary,
         idle: p.use.idle,

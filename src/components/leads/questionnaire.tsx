@@ -7,7 +7,8 @@ import { LEAD_LIMITS } from '@/lib/schemas/lead';
 
 // The at-home questionnaire: one question per screen, big targets, plain words. Answers live in
 // sessionStorage so a reload (or a phone that drops the tab) keeps them until they are sent.
-export const STORAGE_KEY = 'lobewise.ask.v1';
+// v2: the vehicle question moved every later step by one, so answers saved under v1 are not resumed.
+export const STORAGE_KEY = 'lobewise.ask.v2';
 
 type Answers = Record<string, string> & { name?: string; email?: string; phone?: string; consent?: string };
 type Saved = { step: number; answers: Answers };

@@ -1,5 +1,5 @@
 import type { Shortlist } from '@/lib/leads/shortlist';
-import { fromPrice } from '@/lib/leads/shortlist';
+import { fromPrice, jobPrice, type ShortlistEntry } from '@/lib/leads/shortlist';
 
 // The customer's indicative shortlist in plain words (also shown to staff on the leads page, compact).
 export const CUSTOMER_CAUTIONS = [
@@ -9,6 +9,13 @@ export const CUSTOMER_CAUTIONS = [
   'The engine must be re-tuned after the swap. A changed converter alters how the vehicle creeps and pulls away.',
   'Local codes and licensed practice come first: where they ask for more than this, the shop follows them.',
 ];
+
+/** The job price the shop would quote, before tax; older saved shortlists carried only "from" the cam and parts. */
+function priceWords(entry: ShortlistEntry): string {
+  if (typeof entry.jobPriceCents === 'number') return `About ${jobPrice(entry.jobPriceCents)} for the whole job — the cam, the parts it needs, fitting and the tune — before tax`;
+  if (typeof entry.fromPriceCents === 'number') return `${fromPrice(entry.fromPriceCents)} for the cam and what it needs; fitting comes on top`;
+  return 'Ask the shop for the price';
+}
 
 export function ShortlistCards({ shortlist, compact = false }: { shortlist: Shortlist; compact?: boolean }) {
   if (!shortlist.entries.length) {
@@ -22,7 +29,7 @@ export function ShortlistCards({ shortlist, compact = false }: { shortlist: Shor
             Choice {entry.rank}: {entry.camName}
           </h3>
           <p className={compact ? 'text-sm text-ink-soft' : 'mt-1 text-base text-ink-soft'}>
-            {fromPrice(entry.fromPriceCents)} for the cam and what it needs; fitting comes on top ·{' '}
+            {priceWords(entry)} ·{' '}
             {entry.emissionsCertified ? 'certified for emissions-tested road use' : 'not certified for emissions-tested road use'}
             {compact ? ` · peak power ${entry.gainPctPeakHp >= 0 ? '+' : ''}${entry.gainPctPeakHp.toLocaleString('en-US', { maximumFractionDigits: 1 })} % (indicative)` : ''}
           </p>

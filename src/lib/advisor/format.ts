@@ -30,6 +30,12 @@ export function dollars(cents: number): string {
   return `$${groupThousands(cents / 100)}`;
 }
 
+/** Dollars and cents from cents, as a quote shows them: 301250 → "$3,012.50". */
+export function dollarsAndCents(cents: number): string {
+  const whole = Math.round(cents);
+  return `${whole < 0 ? '-' : ''}$${groupThousands(Math.floor(Math.abs(whole) / 100))}.${String(Math.abs(whole) % 100).padStart(2, '0')}`;
+}
+
 /** Valve lift in inches with three decimals: 0.595 → '0.595"'. */
 export function inches(value: number): string {
   return `${value.toFixed(3)}"`;

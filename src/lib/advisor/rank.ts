@@ -118,8 +118,8 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
   const compression = scoreCompression(build, dcr);
   const fit = fit0;
   const emissions = scoreEmissions(build, cam);
-  const needs = camNeeds(fit, converter);
-  const cost = scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents);
+  const needs = camNeeds(fit, converter, build, cam);
+  const cost = scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents, options.jobPriceCents?.(cam, needs));
 
   const raw = { powerband: powerband.score, converter: converter.score, idle: idle.score, compression: compression.score, fit: fit.score, emissions: emissions.score, cost: cost.score };
   const subscores = {

@@ -1,5 +1,5 @@
 import type { BuildProfile } from '@/lib/schemas/build-profile';
-import { aboutRpm, dollars, groupThousands, inches, oneDecimal, pct } from './format';
+import { aboutRpm, dollars, dollarsAndCents, groupThousands, inches, oneDecimal, pct } from './format';
 import { idleCharacter } from './idle';
 import type {
   CompressionDetail, ConverterDetail, CostDetail, EmissionsDetail, FitDetail, IdleDetail, PowerbandDetail,
@@ -101,7 +101,11 @@ export function costReason(d: CostDetail): Reason {
   let text: string;
   if (d.priceCents === null || d.jobCents === null) text = 'No price on file for this cam; ask the manager before quoting.';
   else if (d.budgetCents <= 0) text = `The cam lists at ${dollars(d.priceCents)}; no budget was given.`;
-  else if (d.partsPriced) {
+  else if (d.wholeJob) {
+    // The same number the shortlist, the customer's result and the quote's pre-tax total show.
+    const share = (d.jobCents / d.budgetCents) * 100;
+    text = `The whole job — the cam, the parts it needs, labour and the tune — comes to about ${dollarsAndCents(d.jobCents)} before tax, ${pct(share)} of your ${dollars(d.budgetCents)} budget.`;
+  } else if (d.partsPriced) {
     const share = (d.jobCents / d.budgetCents) * 100;
     text = `The cam and the parts it needs come to about ${dollars(d.jobCents)}, ${pct(share)} of your ${dollars(d.budgetCents)} budget before labour.`;
   } else {

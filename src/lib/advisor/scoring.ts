@@ -186,16 +186,20 @@ export function scoreEmissions(build: BuildProfile, cam: CamCard): EmissionsDeta
   return { score: gated ? 0 : 100, required, certified, gated };
 }
 
-export type CostDetail = { score: number; priceCents: number | null; jobCents: number | null; budgetCents: number; partsPriced: boolean };
+/** wholeJob: jobCents is the shop's full job price before tax (labour and tune included). */
+export type CostDetail = { score: number; priceCents: number | null; jobCents: number | null; budgetCents: number; partsPriced: boolean; wholeJob?: boolean };
 
-// Price against the budget: the whole job when part prices are known, else the cam against its share.
-export function scoreCost(build: BuildProfile, cam: CamCard, needKinds: NeedKind[], needPriceCents?: Partial<Record<NeedKind, number>>): CostDetail {
+// Price against the budget: the whole job when the shop priced it (or part prices are known), else the cam against its share.
+export function scoreCost(
+  build: BuildProfile, cam: CamCard, needKinds: NeedKind[], needPriceCents?: Partial<Record<NeedKind, number>>, jobPriceCents?: number | null,
+): CostDetail {
   const c = COST_SCORING;
   const budget = build.use.budgetCents;
-  if (cam.priceCents === undefined) return { score: c.noPriceScore, priceCents: null, jobCents: null, budgetCents: budget, partsPriced: false };
-  const partsPriced = needPriceCents !== undefined && Object.keys(needPriceCents).length > 0;
-  let job = cam.priceCents;
-  if (partsPriced) for (const k of needKinds) job += Math.max(0, needPriceCents?.[k] ?? 0);
+  if (cam.priceCents === undefined || jobPriceCents === null) return { score: c.noPriceScore, priceCents: null, jobCents: null, budgetCents: budget, partsPriced: false };
+  const wholeJob = jobPriceCents !== undefined;
+  const partsPriced = wholeJob || (needPriceCents !== undefined && Object.keys(needPriceCents).length > 0);
+  let job = wholeJob ? jobPriceCents : cam.priceCents;
+  if (partsPriced && !wholeJob) for (const k of needKinds) job += Math.max(0, needPriceCents?.[k] ?? 0);
   const allowance = partsPriced ? budget : budget * c.camShareOfBudget;
   let score: number;
   if (allowance <= 0) score = job <= 0 ? 100 : 0;
@@ -203,7 +207,7 @@ export function scoreCost(build: BuildProfile, cam: CamCard, needKinds: NeedKind
     const r = job / allowance;
     score = clamp((100 * (c.zeroAtRatio - r)) / (c.zeroAtRatio - c.fullMarksBelowRatio));
   }
-  return { score, priceCents: cam.priceCents, jobCents: job, budgetCents: budget, partsPriced };
+  return { score, priceCents: cam.priceCents, jobCents: job, budgetCents: budget, partsPriced, wholeJob };
 }
 
 /** Weighted total from the one table; a cam that fails a required emissions check is capped. */

@@ -3,7 +3,8 @@ import type { CurvePoint, PredictedSummary } from './curve';
 import type { ValveEvents } from './valve-events';
 import type { SubscoreName } from './weights';
 
-export type NeedKind = 'springs' | 'deactivation-delete' | 'converter' | 'tune';
+/** What a cam swap can need; the manager's rules map each kind (and the vehicle class) to parts and labour. */
+export type NeedKind = 'install' | 'springs' | 'pushrods' | 'lifters' | 'deactivation-delete' | 'converter' | 'tune';
 
 /** Something the cam requires; the catalogue rules map these to parts and labour. */
 export type Need = {
@@ -51,6 +52,11 @@ export type RankOptions = {
   history?: HistoryEntry[];
   /** Prices of what the needs map to (cents), so cost can compare the whole job with the budget. */
   needPriceCents?: Partial<Record<NeedKind, number>>;
+  /**
+   * The whole job before tax (cam, what its needs map to, labour, tune) in cents, from the shop's one
+   * pricing function; when given, cost and its reason use this number (null: the cam has no price).
+   */
+  jobPriceCents?: (cam: CamCard, needs: readonly Need[]) => number | null;
   /** Leave the curves out of the output (the ranking itself is unchanged). Default true. */
   includeCurves?: boolean;
 };

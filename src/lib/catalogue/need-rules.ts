@@ -1,9 +1,15 @@
-// What a cam needs besides itself: the manager's plain rules, evaluated without any I/O so the
-// advisor (its "needs" list) and the quote builder (its lines) reach the same answer from the same rows.
-// Load the rules with loadNeedRules() from '@/lib/db/queries/rules' and pass them in.
+// What a cam needs besides itself, in this shop's parts and labour. The advisor alone decides WHICH
+// kinds of need a cam has (src/lib/advisor/needs.ts: install, springs past the installed springs'
+// limit, pushrods, lifters, the deactivation delete, a converter, the tune); the manager's rules only
+// say what each kind — for each vehicle class — adds here. Evaluated without I/O so the shortlist and
+// the quote builder reach the same lines from the same rows. Load the rules with loadNeedRules() from
+// '@/lib/db/queries/rules' and pass them in.
+import type { NeedKind } from '@/lib/advisor/types';
+import { NEED_KIND_LIST } from '@/lib/advisor/needs';
+import type { VehicleClass } from '@/lib/schemas/build-profile';
 
-export const NEED_RULE_KIND_LIST = ['lift-over', 'deactivation-active', 'crossover-over-stall', 'always'] as const;
-export type NeedRuleKindName = (typeof NEED_RULE_KIND_LIST)[number];
+export const NEED_RULE_KIND_LIST = NEED_KIND_LIST;
+export type NeedRuleKindName = NeedKind;
 
 /** One thing a rule adds: a part, a labour operation, or both (each becomes its own need). */
 export type NeedRuleItemInput = {
@@ -17,23 +23,17 @@ export type NeedRuleItemInput = {
 export type NeedRuleInput = {
   id: number;
   kind: NeedRuleKindName;
-  /** lift-over: inches at the valve; crossover-over-stall: rpm; the other kinds: null. */
-  threshold: number | null;
+  /** The vehicle class the rule is for; null: every class without a rule of its own for this kind. */
+  vehicleClass: VehicleClass | null;
   label: string;
   active: boolean;
   items: NeedRuleItemInput[];
 };
 
 export type NeedContext = {
-  cam: { intakeLiftIn: number; exhaustLiftIn: number; deactivationCompatible: boolean };
-  build: {
-    /** 'active' is the only state that needs a delete kit; 'none' and 'deleted' do not. */
-    cylinderDeactivation: 'none' | 'active' | 'deleted' | (string & {});
-    /** Converter stall; 0, null or undefined means no converter (a manual). */
-    stallRpm: number | null | undefined;
-  };
-  /** Where the new cam starts to out-pull the one in the engine; null when there is none. */
-  crossoverRpm: number | null | undefined;
+  /** The advisor's typed needs for this cam and build (its reason is the one the customer is told). */
+  needs: readonly { kind: NeedKind; reason: string }[];
+  vehicleClass: VehicleClass;
 };
 
 export type Need = {
@@ -43,54 +43,37 @@ export type Need = {
   quantity: number;
   part: NeedRuleItemInput['part'];
   laborOperation: NeedRuleItemInput['laborOperation'];
-  rule: { id: number; kind: NeedRuleKindName; label: string };
-  /** Why the rule fired, in words a customer can be told. */
+  rule: { id: number; kind: NeedRuleKindName; label: string; vehicleClass: VehicleClass | null };
+  /** Why the rule fired: the advisor's reason for the need, in words a customer can be told. */
   reason: string;
 };
 
-const inches = (n: number) => `${n.toFixed(3)}"`;
-const rpm = (n: number) => `${Math.round(n).toLocaleString('en-US')} rpm`;
-
-/** Why a rule fires for this cam and build, or null when it does not. */
-export function ruleReason(rule: NeedRuleInput, context: NeedContext): string | null {
-  const { cam, build, crossoverRpm } = context;
-  switch (rule.kind) {
-    case 'lift-over': {
-      if (rule.threshold === null) return null;
-      const lift = Math.max(cam.intakeLiftIn, cam.exhaustLiftIn);
-      if (!(lift > rule.threshold)) return null;
-      const which = cam.intakeLiftIn >= cam.exhaustLiftIn ? 'intake' : 'exhaust';
-      return `The cam's ${which} lift at the valve, ${inches(lift)}, is over ${inches(rule.threshold)}.`;
-    }
-    case 'deactivation-active':
-      if (build.cylinderDeactivation !== 'active' || cam.deactivationCompatible) return null;
-      return 'The engine still has cylinder deactivation working and this cam is not made for it, so deactivation has to be deleted.';
-    case 'crossover-over-stall': {
-      const stall = build.stallRpm ?? 0;
-      if (rule.threshold === null || crossoverRpm === null || crossoverRpm === undefined || stall <= 0) return null;
-      const gap = crossoverRpm - stall;
-      if (gap < rule.threshold) return null;
-      return `The cam starts to out-pull the current one at ${rpm(crossoverRpm)}, ${rpm(gap)} above the converter's ${rpm(stall)} stall (the rule asks for at least ${rpm(rule.threshold)}).`;
-    }
-    case 'always':
-      return 'Every cam swap needs this.';
-    default:
-      return null;
-  }
+/**
+ * The active rules that apply to one need kind for one vehicle class: the rules written for that class
+ * when there are any, else the ones for every class (a "truck" install rule overrides the general one).
+ */
+export function rulesFor(rules: readonly NeedRuleInput[], kind: NeedKind, vehicleClass: VehicleClass): NeedRuleInput[] {
+  const ofKind = rules.filter((r) => r.active && r.kind === kind);
+  const own = ofKind.filter((r) => r.vehicleClass === vehicleClass);
+  return own.length ? own : ofKind.filter((r) => r.vehicleClass === null);
 }
 
 /**
- * The parts and labour to add, each with the rule that fired and a plain reason. Inactive rules are
- * skipped. A part or labour operation asked for by several rules appears once, for the first rule
- * (rules are taken in the order given), with the largest quantity any of them asked for.
+ * The parts and labour to add, each with the rule that fired and the advisor's reason. Rules are taken
+ * in the order given. A part or labour operation asked for by several rules appears once, for the first
+ * rule, with the largest quantity any of them asked for.
  */
 export function evaluateNeedRules(rules: readonly NeedRuleInput[], context: NeedContext): Need[] {
+  const reasons = new Map<NeedKind, string>();
+  for (const need of context.needs) if (!reasons.has(need.kind)) reasons.set(need.kind, need.reason);
+  const firing = new Set<number>();
+  for (const kind of reasons.keys()) for (const rule of rulesFor(rules, kind, context.vehicleClass)) firing.add(rule.id);
+
   const needs: Need[] = [];
   const byKey = new Map<string, Need>();
   for (const rule of rules) {
-    if (!rule.active) continue;
-    const reason = ruleReason(rule, context);
-    if (reason === null) continue;
+    if (!firing.has(rule.id)) continue;
+    const reason = reasons.get(rule.kind)!;
     for (const item of rule.items) {
       const entries: Array<Pick<Need, 'type' | 'partId' | 'laborOperationId' | 'part' | 'laborOperation'>> = [];
       if (item.partId !== null) entries.push({ type: 'part', partId: item.partId, laborOperationId: null, part: item.part ?? null, laborOperation: null });
@@ -104,11 +87,16 @@ export function evaluateNeedRules(rules: readonly NeedRuleInput[], context: Need
           seen.quantity = Math.max(seen.quantity, item.quantity);
           continue;
         }
-        const need: Need = { ...entry, quantity: item.quantity, rule: { id: rule.id, kind: rule.kind, label: rule.label }, reason };
+        const need: Need = { ...entry, quantity: item.quantity, rule: { id: rule.id, kind: rule.kind, label: rule.label, vehicleClass: rule.vehicleClass }, reason };
         byKey.set(key, need);
         needs.push(need);
       }
     }
   }
   return needs;
+}
+
+/** Need kinds with no active rule for a vehicle class: jobs of that class would be quoted without them. */
+export function unmappedKinds(rules: readonly NeedRuleInput[], vehicleClass: VehicleClass): NeedKind[] {
+  return NEED_KIND_LIST.filter((kind) => rulesFor(rules, kind, vehicleClass).length === 0);
 }

@@ -72,7 +72,7 @@ export function buildProfileFromAnswers(answers: LeadAnswers, baselineCards: Bas
       tireDiameterIn: vehicle.tireDiameterIn,
     },
     // Vacuum brakes: the case where a lumpy idle costs brake assist, so the advisor keeps it in view.
-    vehicle: { weightLb: vehicle.weightLb, powerBrakes: 'vacuum' },
+    vehicle: { weightLb: vehicle.weightLb, powerBrakes: 'vacuum', ...(answers.vehicle ? { class: answers.vehicle } : {}) },
     use: {
       primary: answers.use,
       idle: answers.idle,

@@ -2,7 +2,7 @@ import type { LeadAnswers } from '@/lib/schemas/lead';
 
 // The questionnaire's questions in plain words, one screen each. The staff leads page reads the same
 // labels, so the shop sees exactly what the customer picked.
-export type ChoiceKey = 'engine' | 'use' | 'idle' | 'emissions' | 'transmission' | 'driveline' | 'exhaust' | 'budget';
+export type ChoiceKey = 'engine' | 'vehicle' | 'use' | 'idle' | 'emissions' | 'transmission' | 'driveline' | 'exhaust' | 'budget';
 export type ChoiceQuestion = {
   key: ChoiceKey;
   title: string;
@@ -22,6 +22,17 @@ export const CHOICE_QUESTIONS: readonly ChoiceQuestion[] = [
       { value: '6.0', label: '6.0 litre' },
       { value: '6.2', label: '6.2 litre' },
       { value: 'unsure', label: 'Not sure', hint: 'We will assume the most common one and check with you.' },
+    ],
+  },
+  {
+    key: 'vehicle',
+    title: 'What kind of vehicle is it?',
+    help: 'Getting at the cam is more work in some vehicles than others, so the price of fitting it depends on this.',
+    options: [
+      { value: 'truck', label: 'Pickup truck' },
+      { value: 'suv', label: 'SUV', hint: 'A sport utility vehicle.' },
+      { value: 'van', label: 'Van' },
+      { value: 'car', label: 'Car', hint: 'A coupe, sedan or convertible.' },
     ],
   },
   {

@@ -14,8 +14,13 @@ export type ShortlistEntry = {
   camName: string;
   /** Predicted change in peak power against the cam in the engine now, % (indicative). */
   gainPctPeakHp: number;
-  /** The cam plus what the shop's rules say the job needs, cents: shown only as "from $X". */
-  fromPriceCents: number;
+  /**
+   * The whole job before tax (cam, the parts and labour the shop's rules add, the tune), cents: the same
+   * number the staff shortlist and a quote drafted from it show. Null when the cam has no price.
+   */
+  jobPriceCents?: number | null;
+  /** Leads saved before the job price: the cam plus needed parts only, shown as "from $X". */
+  fromPriceCents?: number;
   reasons: string[];
   alsoNeeds: string[];
   cautions: string[];
@@ -55,6 +60,12 @@ function plainReasons(r: ShopRankingEntry, answers: Pick<LeadAnswers, 'idle' | '
 
 function plainNeed(kind: NeedKind, suggestedStallRpm?: number): string {
   switch (kind) {
+    case 'install':
+      return 'Fitting the cam: the front of the engine comes apart, so this is most of the work.';
+    case 'pushrods':
+      return 'Stronger pushrods, because this cam opens the valves further and the new springs push harder.';
+    case 'lifters':
+      return 'Lifters made for a cam that opens the valves this far.';
     case 'springs':
       return 'Stronger valve springs: this cam opens the valves further than the springs in there now are made for.';
     case 'deactivation-delete':
@@ -88,7 +99,7 @@ export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineL
       camId: r.camId,
       camName: r.camName,
       gainPctPeakHp: r.predicted.gainPctPeakHp,
-      fromPriceCents: r.camPriceCents + r.neededItemsCents,
+      jobPriceCents: r.jobPriceCents,
       reasons: plainReasons(r, answers, isCertified, emissionsRequired),
       alsoNeeds: r.needs.map((n) => plainNeed(n.kind, n.suggestedStallRpm)),
       cautions: [...new Set(r.cautions.map((c) => PLAIN_CAUTION[c.kind]))],
@@ -96,6 +107,11 @@ export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineL
     };
   });
   return { entries, notice: result.notice, engineLiters };
+}
+
+/** The whole job's price as every screen shows it, to the cent: "$3,007.00". */
+export function jobPrice(cents: number): string {
+  return (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 2 });
 }
 
 /** "from $1,250": rounded down to whole dollars, never a promise of an exact price. */

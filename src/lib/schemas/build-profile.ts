@@ -45,6 +45,9 @@ export const HEAD_PRESETS = ['stock-cathedral', 'ported-cathedral', 'stock-recta
 /** What limits the engine's safe rpm: stock hydraulic valvetrain, upgraded springs, or a solid roller. */
 export const VALVETRAINS = ['stock-hydraulic', 'upgraded-hydraulic', 'solid-roller'] as const;
 export const FUELS = ['gasoline', 'e85'] as const;
+/** Body class (profile schema 2): the rules price cam-install labour and parts by it. */
+export const VEHICLE_CLASSES = ['truck', 'suv', 'van', 'car'] as const;
+export type VehicleClass = (typeof VEHICLE_CLASSES)[number];
 
 const B = BUILD_LIMITS;
 
@@ -113,6 +116,8 @@ export const DrivetrainSchema = z
 export const VehicleSchema = z.strictObject({
   weightLb: boundedNumber('vehicle weight', 'lb', B.weightLb),
   powerBrakes: oneOf('power brakes', POWER_BRAKES),
+  // Optional: a profile without it reads as vehicleClassOf() says.
+  class: oneOf('vehicle class', VEHICLE_CLASSES).optional(),
 }, { error: presence('vehicle', 'an object') });
 
 export const UseSchema = z.strictObject({
@@ -150,3 +155,11 @@ export const BuildProfileSchema = z.strictObject({
 /** A validated build profile (defaults applied inside the baseline cam card). */
 export type BuildProfile = z.output<typeof BuildProfileSchema>;
 export type BuildProfileInput = z.input<typeof BuildProfileSchema>;
+
+/**
+ * The vehicle class, or the default when the profile does not say: a truck-style intake means a truck
+ * engine (pickups and SUVs share it, and their cam swaps are priced alike), anything else a car.
+ */
+export function vehicleClassOf(profile: { vehicle: { class?: VehicleClass }; engine: { intakeManifold: string } }): VehicleClass {
+  return profile.vehicle.class ?? (profile.engine.intakeManifold === 'truck' ? 'truck' : 'car');
+}

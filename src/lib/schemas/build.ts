@@ -9,8 +9,11 @@ import { CustomerSchema } from './customer';
 // reused as it is so a saved build is always one the advisor accepts).
 export const BUILD_RECORD_LIMITS = {
   vehicleLabelMaxLength: 160,
-  /** The profile shape this code writes; stored beside each profile so old rows can be migrated in code. */
-  profileSchemaVersion: 1,
+  /**
+   * The profile shape this code writes, stored beside each profile. 2: the cycle model's optional engine,
+   * exhaust and fuel fields and vehicle.class (migration 20261205000100-profile-vehicle-class fills the class in).
+   */
+  profileSchemaVersion: 2,
 } as const;
 
 const idOf = (label: string) =>

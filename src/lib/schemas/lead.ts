@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { text } from './text';
+import { VEHICLE_CLASSES } from './build-profile';
 import { presence } from './cam-card';
 
 // The at-home questionnaire (/ask): every answer is a choice from a short list, so the customer
@@ -18,6 +19,8 @@ export const LEAD_LIMITS = {
 } as const;
 
 export const ENGINE_CHOICES = ['4.8', '5.3', '5.7', '6.0', '6.2', 'unsure'] as const;
+/** The build profile's vehicle classes, asked in plain words (src/lib/leads/questions.ts). */
+export const VEHICLE_CHOICES = VEHICLE_CLASSES;
 export const USE_CHOICES = ['daily', 'towing', 'street', 'strip'] as const;
 export const IDLE_CHOICES = ['smooth', 'noticeable', 'aggressive'] as const;
 export const EMISSIONS_CHOICES = ['yes', 'no', 'unsure'] as const;
@@ -41,6 +44,8 @@ const optionalText = (label: string, max: number) =>
 export const LeadAnswersSchema = z
   .strictObject({
     engine: choice('engine', ENGINE_CHOICES),
+    // Optional so answers saved before the question existed still read; the questionnaire always asks it.
+    vehicle: choice('vehicle', VEHICLE_CHOICES).optional(),
     use: choice('use', USE_CHOICES),
     idle: choice('idle', IDLE_CHOICES),
     emissions: choice('emissions', EMISSIONS_CHOICES),

@@ -1,25 +1,35 @@
 import { z } from 'zod';
 import { text } from './text';
-import { CAM_LIMITS, presence } from './cam-card';
+import { NEED_KIND_LIST } from '@/lib/advisor/needs';
+import { VEHICLE_CLASSES, type VehicleClass } from './build-profile';
+import { presence } from './cam-card';
 import { flag } from './catalogue-cam';
 
-export const NEED_RULE_KIND_OPTIONS = ['lift-over', 'deactivation-active', 'crossover-over-stall', 'always'] as const;
+// A rule says what one kind of need adds in this shop, for one vehicle class or for every class. It
+// never says WHEN a cam has that need: the advisor decides (src/lib/advisor/needs.ts), so the shortlist's
+// "needs springs" and the quote's spring kit come from one threshold.
+export const NEED_RULE_KIND_OPTIONS = NEED_KIND_LIST;
+export type NeedRuleKindOption = (typeof NEED_RULE_KIND_OPTIONS)[number];
 
 export const NEED_RULE_LIMITS = {
-  liftIn: CAM_LIMITS.liftIn,
-  crossoverGapRpm: { min: 0, max: 4000 },
   quantity: { min: 0.01, max: 99 },
   items: 12,
   labelMaxLength: 160,
 } as const;
 
-/** How each kind reads to the manager; the threshold unit when it has one. */
-export const NEED_RULE_KIND_TEXT: Record<(typeof NEED_RULE_KIND_OPTIONS)[number], { title: string; threshold: null | { label: string; unit: string } }> = {
-  'lift-over': { title: 'When lift at the valve exceeds N in', threshold: { label: 'lift', unit: 'in' } },
-  'deactivation-active': { title: 'When cylinder deactivation is active and the cam is not compatible', threshold: null },
-  'crossover-over-stall': { title: 'When the crossover is N rpm or more above the converter stall', threshold: { label: 'rpm above stall', unit: 'rpm' } },
-  always: { title: 'Always, on every cam swap', threshold: null },
+/** How each kind reads to the manager. */
+export const NEED_RULE_KIND_TEXT: Record<NeedRuleKindOption, { title: string }> = {
+  install: { title: 'Fitting the cam (every cam swap)' },
+  springs: { title: 'Springs: the cam lifts past the installed springs’ limit' },
+  pushrods: { title: 'Pushrods: high lift, or the cam is specified with other rockers' },
+  lifters: { title: 'Lifters: high lift on a stock hydraulic valvetrain' },
+  'deactivation-delete': { title: 'Deactivation delete: active cylinder deactivation and a cam not made for it' },
+  converter: { title: 'Converter: the cam pulls well above the converter’s stall' },
+  tune: { title: 'Tune (every cam swap)' },
 };
+
+/** The vehicle-class choice of a rule: one class, or every class without a rule of its own. */
+export const RULE_VEHICLE_CLASS_TEXT: Record<VehicleClass | 'any', string> = { any: 'Every vehicle', truck: 'Trucks', suv: 'SUVs', van: 'Vans', car: 'Cars' };
 
 const id = (label: string) =>
   z
@@ -42,38 +52,27 @@ export const NeedRuleItemSchema = z
   })
   .refine((i) => i.partId !== null || i.laborOperationId !== null, { path: ['partId'], error: 'each item needs a part, a labour operation or both' });
 
-export const NeedRuleSchema = z
-  .strictObject(
-    {
-      kind: z.enum(NEED_RULE_KIND_OPTIONS, { error: presence('kind', `one of: ${NEED_RULE_KIND_OPTIONS.join(', ')}`) }),
-      threshold: z.number({ error: 'threshold must be a number' }).finite().nullish().transform((v) => v ?? null),
-      label: text('label', { error: presence('label', 'text') })
-        .min(1, { error: 'label must not be empty' })
-        .max(NEED_RULE_LIMITS.labelMaxLength, { error: `label must be at most ${NEED_RULE_LIMITS.labelMaxLength} characters` }),
-      active: flag('active', true),
-      items: z
-        .array(NeedRuleItemSchema, { error: 'items must be a list of parts and labour' })
-        .min(1, { error: 'a rule must add at least one part or labour operation' })
-        .max(NEED_RULE_LIMITS.items, { error: `a rule may add at most ${NEED_RULE_LIMITS.items} items` }),
-    },
-    { error: presence('rule', 'an object') },
-  )
-  .superRefine((rule, ctx) => {
-    const { liftIn, crossoverGapRpm } = NEED_RULE_LIMITS;
-    if (rule.kind === 'lift-over') {
-      if (rule.threshold === null) ctx.addIssue({ code: 'custom', path: ['threshold'], message: 'a lift rule needs the lift at the valve it starts at (in)' });
-      else if (rule.threshold < liftIn.min || rule.threshold > liftIn.max) {
-        ctx.addIssue({ code: 'custom', path: ['threshold'], message: `lift must be between ${liftIn.min} and ${liftIn.max} in` });
-      }
-    } else if (rule.kind === 'crossover-over-stall') {
-      if (rule.threshold === null) ctx.addIssue({ code: 'custom', path: ['threshold'], message: 'a crossover rule needs the rpm above stall it starts at' });
-      else if (!Number.isInteger(rule.threshold) || rule.threshold < crossoverGapRpm.min || rule.threshold > crossoverGapRpm.max) {
-        ctx.addIssue({ code: 'custom', path: ['threshold'], message: `rpm above stall must be a whole number between ${crossoverGapRpm.min} and ${crossoverGapRpm.max}` });
-      }
-    } else if (rule.threshold !== null) {
-      ctx.addIssue({ code: 'custom', path: ['threshold'], message: `a rule of kind ${rule.kind} takes no threshold` });
-    }
-  });
+export const NeedRuleSchema = z.strictObject(
+  {
+    kind: z.enum(NEED_RULE_KIND_OPTIONS, { error: presence('kind', `one of: ${NEED_RULE_KIND_OPTIONS.join(', ')}`) }),
+    // null or absent: every vehicle class that has no rule of its own for this kind.
+    vehicleClass: z
+      .enum(VEHICLE_CLASSES, { error: `vehicleClass must be one of: ${VEHICLE_CLASSES.join(', ')} (or null for every vehicle)` })
+      .nullish()
+      .transform((v) => v ?? null),
+    // Schema 1 rules carried their own lift or rpm threshold; that decision is the advisor's now.
+    threshold: z.null({ error: 'rules take no threshold: the advisor decides when a cam needs springs (past the installed springs’ limit), a converter or the rest' }).optional(),
+    label: text('label', { error: presence('label', 'text') })
+      .min(1, { error: 'label must not be empty' })
+      .max(NEED_RULE_LIMITS.labelMaxLength, { error: `label must be at most ${NEED_RULE_LIMITS.labelMaxLength} characters` }),
+    active: flag('active', true),
+    items: z
+      .array(NeedRuleItemSchema, { error: 'items must be a list of parts and labour' })
+      .min(1, { error: 'a rule must add at least one part or labour operation' })
+      .max(NEED_RULE_LIMITS.items, { error: `a rule may add at most ${NEED_RULE_LIMITS.items} items` }),
+  },
+  { error: presence('rule', 'an object') },
+);
 export type NeedRuleValues = z.output<typeof NeedRuleSchema>;
 export type NeedRuleFormInput = z.input<typeof NeedRuleSchema>;
 

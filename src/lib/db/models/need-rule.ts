@@ -2,14 +2,18 @@ import {
   DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
 } from 'sequelize';
 
-export const NEED_RULE_KINDS = ['lift-over', 'deactivation-active', 'crossover-over-stall', 'always'] as const;
+import { NEED_KIND_LIST } from '@/lib/advisor/needs';
+import { VEHICLE_CLASSES, type VehicleClass } from '@/lib/schemas/build-profile';
+
+export const NEED_RULE_KINDS = NEED_KIND_LIST;
 export type NeedRuleKind = (typeof NEED_RULE_KINDS)[number];
 
-// A plain rule the manager picks: "when <kind> (past threshold) → add these parts and labour".
+// A plain rule the manager picks: "when the advisor says a cam needs <kind> (for <vehicle class>) → add
+// these parts and labour". The table's threshold column is left over from schema 1 and no longer read.
 export class NeedRule extends Model<InferAttributes<NeedRule>, InferCreationAttributes<NeedRule>> {
   declare id: CreationOptional<number>;
   declare kind: NeedRuleKind;
-  declare threshold: number | null;
+  declare vehicleClass: VehicleClass | null;
   declare label: string;
   declare active: CreationOptional<boolean>;
   declare version: CreationOptional<number>;
@@ -21,7 +25,7 @@ export class NeedRule extends Model<InferAttributes<NeedRule>, InferCreationAttr
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         kind: { type: DataTypes.ENUM(...NEED_RULE_KINDS), allowNull: false },
-        threshold: { type: DataTypes.DOUBLE, allowNull: true },
+        vehicleClass: { type: DataTypes.ENUM(...VEHICLE_CLASSES), allowNull: true },
         label: { type: DataTypes.STRING(160), allowNull: false },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },

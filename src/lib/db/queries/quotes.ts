@@ -9,7 +9,8 @@ import type { FieldError } from '@/lib/http/responses';
 import { sendMail } from '@/lib/mail';
 import { payments } from '@/lib/payments';
 import type { AuthorityVerdict } from '@/lib/quotes/authority';
-import { formatQuoteNumber, laborLine, lineNetCents, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
+import { jobLines } from '@/lib/quotes/job-price';
+import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { stateWord, validUntilFrom } from '@/lib/quotes/lifecycle';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
@@ -276,16 +277,8 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
   for (let attempt = 0; ; attempt++) {
     const outcome = await withPriceAuthority(() => runWrite(async (t) => {
       const settings = await shopSettings(t);
-      const lines: LineDraft[] = [{ kind: 'cam', camId: cam.id, partId: null, laborOperationId: null, description: `${cam.sku} ${cam.name}`, quantity: 1, unitPriceCents: cam.priceCents, discountCents: 0 }];
-      for (const need of ranking.neededItems) {
-        if (need.type === 'part' && need.part) {
-          const kind: QuoteLineKind = need.part.category === 'tune' ? 'tune' : 'part';
-          lines.push({ kind, camId: null, partId: need.part.id, laborOperationId: null, description: `${need.part.sku} ${need.part.name}`, quantity: need.quantity, unitPriceCents: need.part.priceCents, discountCents: 0 });
-        } else if (need.type === 'labor' && need.laborOperation) {
-          const { quantity, unitPriceCents } = laborLine(need.laborOperation.hours, need.quantity, settings.laborRateCents);
-          lines.push({ kind: 'labor', camId: null, partId: null, laborOperationId: need.laborOperation.id, description: need.laborOperation.name, quantity, unitPriceCents, discountCents: 0 });
-        }
-      }
+      // The very lines the shortlist priced (jobLines), so the draft's pre-tax total is its job price.
+      const lines: LineDraft[] = jobLines({ id: cam.id, description: `${cam.sku} ${cam.name}`, priceCents: cam.priceCents }, ranking.neededItems, settings.laborRateCents);
       const extra = await resolveLines(input.extraLines ?? [], { field: 'extraLines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user }, t);
       lines.push(...extra.lines);
       const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));

@@ -29,7 +29,7 @@ export function toRuleRecord(rule: RuleRow): NeedRuleRecord {
   return {
     id: rule.id,
     kind: rule.kind,
-    threshold: rule.threshold ?? null,
+    vehicleClass: rule.vehicleClass ?? null,
     label: rule.label,
     active: Boolean(rule.active),
     version: rule.version,
@@ -88,7 +88,7 @@ export async function createRule(values: NeedRuleValues, user: SessionUser): Pro
   db();
   return runWrite(async (t) => {
     await checkItems(values, t);
-    const rule = await NeedRule.create({ kind: values.kind, threshold: values.threshold, label: values.label, active: values.active }, { transaction: t });
+    const rule = await NeedRule.create({ kind: values.kind, vehicleClass: values.vehicleClass, label: values.label, active: values.active }, { transaction: t });
     await writeItems(rule.id, values, t);
     const record = (await getRule(rule.id, t))!;
     await recordAudit({ user, action: 'rule.created', entityType: 'need_rule', entityId: String(rule.id), before: null, after: record }, t);
@@ -108,7 +108,7 @@ export async function updateRule(id: number, expectedVersion: number, values: Ne
       if (rule.version !== expectedVersion) throw conflict(before);
       await checkItems(values, t);
       const itemsChanged = itemsKey(before) !== itemsKey({ items: values.items.map((i) => ({ ...i, quantity: Number(i.quantity.toFixed(2)) })) });
-      rule.set({ kind: values.kind, threshold: values.threshold, label: values.label, active: values.active });
+      rule.set({ kind: values.kind, vehicleClass: values.vehicleClass, label: values.label, active: values.active });
       if (!rule.changed() && !itemsChanged) return { record: before, changed: false };
       if (itemsChanged) {
         await writeItems(id, values, t);

@@ -3,7 +3,9 @@ import Link from 'next/link';
 import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue/ui';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listRules } from '@/lib/db/queries/rules';
-import { NEED_RULE_KIND_TEXT } from '@/lib/schemas/need-rule';
+import { unmappedKinds } from '@/lib/catalogue/need-rules';
+import { VEHICLE_CLASSES } from '@/lib/schemas/build-profile';
+import { NEED_RULE_KIND_TEXT, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
 
 export const metadata: Metadata = { title: 'What a cam needs' };
 
@@ -12,16 +14,27 @@ export default async function RulesPage({ searchParams }: { searchParams: Promis
   const raw = await searchParams;
   const rules = await listRules();
   const manager = user.role === 'manager';
+  const active = rules.filter((r) => r.active);
+  // Installing and tuning are part of every job: say plainly which vehicle classes would be quoted without them.
+  const gaps = VEHICLE_CLASSES.flatMap((vc) =>
+    unmappedKinds(active, vc).filter((kind) => kind === 'install' || kind === 'tune').map((kind) => `${RULE_VEHICLE_CLASS_TEXT[vc]}: ${NEED_RULE_KIND_TEXT[kind].title}`),
+  );
   return (
     <div className="flex flex-col gap-4">
       <PageHeader
         title="What a cam needs"
-        lead="Plain rules that add parts and labour to a cam swap. The advisor lists them as needs; the quote builder adds them as lines."
+        lead="What each need the advisor names costs in this shop, by vehicle class. The advisor decides when a cam needs springs, a converter or the rest; these rules add the parts and labour, and the shortlist and the quote price the job from them."
         back={{ href: '/catalogue', label: 'Catalogue' }}
         actions={manager ? <ButtonLink href="/catalogue/rules/new" tone="primary">Add a rule</ButtonLink> : null}
       />
       {raw.saved ? <Banner tone="ok" title="Rule saved" /> : null}
       {raw.deleted ? <Banner tone="ok" title="Rule deleted" /> : null}
+      {gaps.length ? (
+        <Banner tone="caution" title="Needs without a rule">
+          <ul className="list-disc pl-5">{gaps.map((gap) => <li key={gap}>{gap}</li>)}</ul>
+          <p className="mt-1">Jobs that need these are priced and quoted without them until a rule says what they add.</p>
+        </Banner>
+      ) : null}
       {rules.length === 0 ? <p className="text-sm text-ink-soft">No rules yet: quotes will carry only what staff add by hand.</p> : null}
       <ol className="flex flex-col gap-3">
         {rules.map((rule) => {
@@ -36,8 +49,7 @@ export default async function RulesPage({ searchParams }: { searchParams: Promis
                 </span>
               </div>
               <p className="text-sm text-ink-soft">
-                {kind.title.replace(' N ', ` ${rule.threshold ?? 'N'} `)}
-                {kind.threshold && rule.threshold !== null ? <span className="spec"> (N = {rule.threshold} {kind.threshold.unit})</span> : null}
+                {kind.title} · {RULE_VEHICLE_CLASS_TEXT[rule.vehicleClass ?? 'any']}
               </p>
               <ul className="mt-2 text-sm">
                 {rule.items.map((item, i) => (

@@ -25,7 +25,7 @@ export async function PATCH(request: Request, context: IdParams) {
   if (!current) return errorResponse(404, `No rule with id ${id}.`);
   const values = {
     kind: current.kind,
-    threshold: current.threshold,
+    vehicleClass: current.vehicleClass,
     label: current.label,
     active: current.active,
     items: current.items.map((i) => ({ partId: i.partId, laborOperationId: i.laborOperationId, quantity: i.quantity })),
