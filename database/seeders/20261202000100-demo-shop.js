@@ -82,6 +82,8 @@ function camCard(row, id) {
   const card = { id: String(id), name: `${sku} ${name}`, intakeDuration050: in050, exhaustDuration050: ex050, intakeLiftIn: inLift, exhaustLiftIn: exLift, lsa, intakeCenterline: icl, rockerRatio: 1.7 };
   if (inAdv) card.intakeAdvertised = inAdv;
   if (exAdv) card.exhaustAdvertised = exAdv;
+  // The springs fitted with that cam: the advisor's "needs springs" limit (a factory card states it).
+  if (row[15]) card.springMaxLiftIn = row[15];
   return card;
 }
 

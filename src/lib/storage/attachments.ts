@@ -49,7 +49,7 @@ export class CatalogueAttachment extends Model<InferAttributes<CatalogueAttachme
         uploadedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'catalogue_attachments', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'CatalogueAttachment', tableName: 'catalogue_attachments', underscored: true, updatedAt: false },
     );
   }
 }

@@ -27,7 +27,7 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
         ip: { type: DataTypes.STRING(64), allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'audit_log', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'AuditEntry', tableName: 'audit_log', underscored: true, updatedAt: false },
     );
   }
 }

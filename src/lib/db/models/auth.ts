@@ -30,7 +30,7 @@ export class StaffSession extends Model<InferAttributes<StaffSession>, InferCrea
         expiresAt: { type: DataTypes.DATE, allowNull: false },
         revokedAt: { type: DataTypes.DATE, allowNull: true },
       },
-      { sequelize, tableName: 'staff_sessions', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'StaffSession', tableName: 'staff_sessions', underscored: true, updatedAt: false },
     );
   }
 }
@@ -58,7 +58,7 @@ export class PasswordToken extends Model<InferAttributes<PasswordToken>, InferCr
         usedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'password_reset_tokens', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'PasswordToken', tableName: 'password_reset_tokens', underscored: true, updatedAt: false },
     );
   }
 }
@@ -79,7 +79,7 @@ export class SignInAttempt extends Model<InferAttributes<SignInAttempt>, InferCr
         succeeded: { type: DataTypes.BOOLEAN, allowNull: false },
         createdAt: DataTypes.DATE(3),
       },
-      { sequelize, tableName: 'sign_in_attempts', underscored: true, updatedAt: false },
+      { sequelize, modelName: 'SignInAttempt', tableName: 'sign_in_attempts', underscored: true, updatedAt: false },
     );
   }
 }

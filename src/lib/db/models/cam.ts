@@ -67,7 +67,7 @@ export class Cam extends Model<InferAttributes<Cam>, InferCreationAttributes<Cam
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'cams', underscored: true, version: true },
+      { sequelize, modelName: 'Cam', tableName: 'cams', underscored: true, version: true },
     );
   }
 }

@@ -24,7 +24,7 @@ export class Customer extends Model<InferAttributes<Customer>, InferCreationAttr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'customers', underscored: true, version: true },
+      { sequelize, modelName: 'Customer', tableName: 'customers', underscored: true, version: true },
     );
   }
 }
@@ -53,7 +53,7 @@ export class Build extends Model<InferAttributes<Build>, InferCreationAttributes
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'builds', underscored: true, version: true },
+      { sequelize, modelName: 'Build', tableName: 'builds', underscored: true, version: true },
     );
   }
 }
@@ -83,7 +83,7 @@ export class Interview extends Model<InferAttributes<Interview>, InferCreationAt
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'interviews', underscored: true, version: true },
+      { sequelize, modelName: 'Interview', tableName: 'interviews', underscored: true, version: true },
     );
   }
 }

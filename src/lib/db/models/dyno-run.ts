@@ -50,7 +50,7 @@ export class DynoRun extends Model<InferAttributes<DynoRun>, InferCreationAttrib
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'dyno_runs', underscored: true },
+      { sequelize, modelName: 'DynoRun', tableName: 'dyno_runs', underscored: true },
     );
   }
 }

@@ -31,7 +31,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'jobs', underscored: true, version: true },
+      { sequelize, modelName: 'Job', tableName: 'jobs', underscored: true, version: true },
     );
   }
 }
@@ -75,7 +75,7 @@ export class JobSignOff extends Model<InferAttributes<JobSignOff>, InferCreation
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'job_sign_offs', underscored: true },
+      { sequelize, modelName: 'JobSignOff', tableName: 'job_sign_offs', underscored: true },
     );
   }
 }

@@ -25,7 +25,7 @@ export class LaborOperation extends Model<InferAttributes<LaborOperation>, Infer
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'labor_operations', underscored: true, version: true },
+      { sequelize, modelName: 'LaborOperation', tableName: 'labor_operations', underscored: true, version: true },
     );
   }
 }

@@ -21,7 +21,7 @@ export class LeadNote extends Model<InferAttributes<LeadNote>, InferCreationAttr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'lead_notes', underscored: true },
+      { sequelize, modelName: 'LeadNote', tableName: 'lead_notes', underscored: true },
     );
   }
 }

@@ -31,7 +31,7 @@ export class Lead extends Model<InferAttributes<Lead>, InferCreationAttributes<L
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'leads', underscored: true, version: true },
+      { sequelize, modelName: 'Lead', tableName: 'leads', underscored: true, version: true },
     );
   }
 }

@@ -32,7 +32,7 @@ export class NeedRule extends Model<InferAttributes<NeedRule>, InferCreationAttr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'need_rules', underscored: true, version: true },
+      { sequelize, modelName: 'NeedRule', tableName: 'need_rules', underscored: true, version: true },
     );
   }
 }
@@ -54,7 +54,7 @@ export class NeedRuleItem extends Model<InferAttributes<NeedRuleItem>, InferCrea
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'need_rule_items', underscored: true },
+      { sequelize, modelName: 'NeedRuleItem', tableName: 'need_rule_items', underscored: true },
     );
   }
 }

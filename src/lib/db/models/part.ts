@@ -41,7 +41,7 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'parts', underscored: true, version: true },
+      { sequelize, modelName: 'Part', tableName: 'parts', underscored: true, version: true },
     );
   }
 }

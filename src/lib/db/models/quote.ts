@@ -64,7 +64,7 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'quotes', underscored: true, version: true },
+      { sequelize, modelName: 'Quote', tableName: 'quotes', underscored: true, version: true },
     );
   }
 }
@@ -106,7 +106,7 @@ export class QuoteLine extends Model<InferAttributes<QuoteLine>, InferCreationAt
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'quote_lines', underscored: true },
+      { sequelize, modelName: 'QuoteLine', tableName: 'quote_lines', underscored: true },
     );
   }
 }
@@ -145,7 +145,7 @@ export class Payment extends Model<InferAttributes<Payment>, InferCreationAttrib
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'payments', underscored: true },
+      { sequelize, modelName: 'Payment', tableName: 'payments', underscored: true },
     );
   }
 }

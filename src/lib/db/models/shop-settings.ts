@@ -42,7 +42,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'shop_settings', underscored: true, version: true },
+      { sequelize, modelName: 'ShopSettings', tableName: 'shop_settings', underscored: true, version: true },
     );
   }
 }

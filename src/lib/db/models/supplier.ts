@@ -16,7 +16,7 @@ export class Supplier extends Model<InferAttributes<Supplier>, InferCreationAttr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'suppliers', underscored: true },
+      { sequelize, modelName: 'Supplier', tableName: 'suppliers', underscored: true },
     );
   }
 }

@@ -27,7 +27,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'users', underscored: true, version: true },
+      { sequelize, modelName: 'User', tableName: 'users', underscored: true, version: true },
     );
   }
 }
