@@ -2,6 +2,7 @@ import type { BaselineCardOption } from '@/lib/db/queries/builds';
 import { buildProfileFromAnswers } from '@/lib/leads/profile';
 import { answersInWords, CHOICE_QUESTIONS } from '@/lib/leads/questions';
 import { fromPrice } from '@/lib/leads/shortlist';
+import { vehicleClassOf } from '@/lib/schemas/build-profile';
 import { ENGINE_CHOICES, LeadAnswersSchema, type LeadAnswers } from '@/lib/schemas/lead';
 
 // The questionnaire's answers → a conservative build profile. The defaults are our own choices and
@@ -31,6 +32,15 @@ describe('buildProfileFromAnswers', () => {
     expect(build({ budget: 'unsure' }).use.budgetCents).toBe(0);
     expect(build({ budget: 'under-1500' }).use.budgetCents).toBe(150_000);
     expect(build({ budget: '3000-5000' }).use.budgetCents).toBe(500_000);
+  });
+
+  it('carries the kind of vehicle into the profile; answers saved before the question read with the default', () => {
+    for (const vehicle of ['truck', 'suv', 'van', 'car'] as const) expect(build({ vehicle }).vehicle.class).toBe(vehicle);
+    const older = build({});
+    expect(older.vehicle.class).toBeUndefined();
+    expect(vehicleClassOf(older)).toBe('truck'); // the 5.3 L's truck intake
+    expect(vehicleClassOf(build({ engine: '5.7' }))).toBe('car');
+    expect(LeadAnswersSchema.safeParse({ ...base, vehicle: 'boat' }).error?.issues[0].path).toEqual(['vehicle']);
   });
 
   it('treats "not sure" about emissions as a yes, and keeps the catalytic converters with stock exhaust', () => {
