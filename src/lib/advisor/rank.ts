@@ -181,13 +181,13 @@ function upperBoundScore(w: BuildWork, cam: CamCard, options: RankOptions): numb
   const emissions = scoreEmissions(build, cam);
   // Cost never rises when a need is left out (prices are counted as at least zero), so the converter,
   // which only the curve can call for, is left out: a converter verdict "ahead at pull-away" asks for none.
-  const needs = camNeeds(fit, scoreConverter(build, w.pullAway.rpm, null, true)).map((n) => n.kind);
+  const needs = camNeeds(fit, scoreConverter(build, w.pullAway.rpm, null, true), build, cam);
   const raw = {
     powerband: 100, converter: 100,
     idle: scoreIdle(build, idleVacuumInHg(seatOverlapDeg(cam), ctx.cylinderCi)).score,
     compression: scoreCompression(build, dynamicCompression(build, cam)).score,
     fit: fit.score, emissions: emissions.score,
-    cost: scoreCost(build, cam, needs, options.needPriceCents).score,
+    cost: scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents, options.jobPriceCents?.(cam, needs)).score,
   };
   return totalScore(raw, emissions.gated);
 }
