@@ -59,7 +59,7 @@ describe('parts', () => {
   });
 
   it('refuses to delete a part a need rule uses, and deletes an unused one', async () => {
-    const used = await app().delete('/api/parts/2').set('Cookie', manager); // SPR-600, in the seeded lift rule
+    const used = await app().delete('/api/parts/2').set('Cookie', manager); // SPR-600, in the seeded springs rule
     expect(used.status).toBe(409);
     expect(used.body.message).toMatch(/need rule/);
     expect(await Part.findByPk(2)).not.toBeNull();
@@ -69,10 +69,10 @@ describe('parts', () => {
   });
 
   it('makes a part on a quote line inactive instead of deleting it', async () => {
-    const response = await app().delete('/api/parts/4').set('Cookie', manager); // PR-7400, on seeded quotes, in no rule
+    const response = await app().delete('/api/parts/13').set('Cookie', manager); // TS-DR, on a seeded quote, in no rule
     expect(response.status).toBe(200);
     expect(response.body.outcome).toBe('deactivated');
-    const restored = await app().patch('/api/parts/4').set('Cookie', manager).send({ version: response.body.part.version, active: true });
+    const restored = await app().patch('/api/parts/13').set('Cookie', manager).send({ version: response.body.part.version, active: true });
     expect(restored.body.active).toBe(true);
   });
 });
