@@ -100,7 +100,11 @@ export function emissionsReason(d: EmissionsDetail): Reason {
 export function costReason(d: CostDetail): Reason {
   let text: string;
   if (d.priceCents === null || d.jobCents === null) text = 'No price on file for this cam; ask the manager before quoting.';
-  else if (d.budgetCents <= 0) text = `The cam lists at ${dollars(d.priceCents)}; no budget was given.`;
+  else if (d.budgetCents <= 0) {
+    text = d.wholeJob
+      ? `The whole job — the cam, the parts it needs, labour and the tune — comes to about ${dollarsAndCents(d.jobCents)} before tax; no budget was given.`
+      : `The cam lists at ${dollars(d.priceCents)}; no budget was given.`;
+  }
   else if (d.wholeJob) {
     // The same number the shortlist, the customer's result and the quote's pre-tax total show.
     const share = (d.jobCents / d.budgetCents) * 100;
