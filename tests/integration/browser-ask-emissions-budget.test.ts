@@ -56,7 +56,7 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     await page.goto(`${appUrl}/ask`);
     await page.evaluate(() => window.sessionStorage.clear());
     await page.reload();
-    const answers: RegExp[] = [/^5\.3 litre/, /^Everyday driving/, /^A little lope you can hear/, /^Yes$/, /^Automatic/, /^No, both as they came/, /^Stock/, /^Not sure yet/];
+    const answers: RegExp[] = [/^5\.3 litre/, /^Pickup truck/, /^Everyday driving/, /^A little lope you can hear/, /^Yes$/, /^Automatic/, /^No, both as they came/, /^Stock/, /^Not sure yet/];
     for (const answer of answers) {
       await page.locator('label').filter({ hasText: answer }).first().tap();
       await page.getByRole('button', { name: 'Next' }).tap();
