@@ -9,6 +9,23 @@ const config = [
     files: ['database/**/*.js', 'database/**/*.cjs', 'docker-local/**/*.mjs', '.sequelizerc'],
     rules: { '@typescript-eslint/no-require-imports': 'off' },
   },
+  // Layers point down only: lib never reaches up into components or app.
+  {
+    files: ['src/lib/**/*.ts', 'src/lib/**/*.tsx'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: [{ group: ['@/components/*', '@/app/*', '**/components/*', '**/app/*'], message: 'lib must not import components or app: move the shared piece into lib.' }] }],
+    },
+  },
+  // The advisor is a pure module: no database, React, Next or outside services.
+  {
+    files: ['src/lib/advisor/**/*.ts'],
+    rules: {
+      'no-restricted-imports': ['error', {
+        paths: ['react', 'next', 'sequelize'],
+        patterns: [{ group: ['@/components/*', '@/app/*', '@/lib/db/*', 'next/*', '@/lib/mail*', '@/lib/payments*'], message: 'the advisor stays pure (docs/advisor.md): no database, React, Next or services.' }],
+      }],
+    },
+  },
 ];
 
 export default config;

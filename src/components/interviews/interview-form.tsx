@@ -16,8 +16,9 @@ import { CAM_LIMITS as C } from '@/lib/schemas/cam-card';
 import { CUSTOMER_LIMITS } from '@/lib/schemas/customer';
 import { Choice, NumberField, Section, TextInput } from './fields';
 import {
-  applyCard, applyPreset, blankInterview, ENGINE_PRESETS, nestErrors, payloadFromValues, validateWith, valuesFromBuild, type BaselineCard, type InterviewValues,
-} from './interview-values';
+  applyCard, applyPreset, blankInterview, ENGINE_PRESETS, valuesFromBuild, type BaselineCard, type InterviewValues,
+} from '@/lib/builds/interview-values';
+import { nestErrors, payloadFromValues, validateWith } from './interview-values';
 
 // The counter interview: one form, sections in the order the conversation goes. Enter moves to the
 // next field (Ctrl+Enter saves from anywhere); Tab order follows the page. Checked in the browser with

@@ -1,4 +1,4 @@
-import { valuesFromBuild, type InterviewValues } from '@/components/interviews/interview-values';
+import { valuesFromBuild, type InterviewValues } from '@/lib/builds/interview-values';
 import type { BaselineCardOption } from '@/lib/db/queries/builds';
 import type { LeadRecord } from '@/lib/db/queries/leads';
 import { LeadAnswersSchema } from '@/lib/schemas/lead';

@@ -1,4 +1,4 @@
-import { ENGINE_PRESETS } from '@/components/interviews/interview-values';
+import { ENGINE_PRESETS } from '@/lib/builds/interview-values';
 import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import type { BaselineCardOption } from '@/lib/db/queries/builds';
 import { BuildProfileSchema, type BuildProfile, type BuildProfileInput } from '@/lib/schemas/build-profile';
