@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { closeSequelize, getSequelize } from '../lib/db/connection';
+import { refreshAllDynoGains } from '../lib/db/queries/dyno-gains';
 import { SIZES, ScaleWriter } from './scale/rows';
 
 // npm run seed:scale -- --size M|L: fills the scratch database lobewise_scale (docker-local/bin/seed-scale
@@ -28,8 +29,10 @@ async function main() {
   const owners = await writer.customersAndBuilds(size.customers);
   const made = await writer.quotes(size, owners, camIds);
   await writer.leads(size.leads);
-  await db.query('ANALYZE TABLE cams, customers, builds, quotes, quote_lines, payments, leads');
-  console.log(`seed:scale ${args.data.size}: ${camIds.length} cams, ${owners.length} customers and builds, ${made.quotes} quotes, ${made.lines} lines, ${made.payments} payments, ${size.leads} leads in ${((Date.now() - started) / 1000).toFixed(0)} s`);
+  const runs = await writer.dynoRuns(size.dynoRuns, owners, camIds);
+  await refreshAllDynoGains();
+  await db.query('ANALYZE TABLE cams, customers, builds, quotes, quote_lines, payments, leads, dyno_runs, dyno_gains');
+  console.log(`seed:scale ${args.data.size}: ${camIds.length} cams, ${owners.length} customers and builds, ${made.quotes} quotes, ${made.lines} lines, ${made.payments} payments, ${size.leads} leads, ${runs} dyno runs in ${((Date.now() - started) / 1000).toFixed(0)} s`);
   await closeSequelize();
 }
 

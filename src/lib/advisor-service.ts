@@ -27,7 +27,12 @@ export type ShopRankingEntry = RankingResult['rankings'][number] & {
 export type ShopRanking = Omit<RankingResult, 'rankings'> & {
   rankings: ShopRankingEntry[];
   vehicleClass: VehicleClass;
+  /** How many of the rankings, from the top, carry their curve; the rest have an empty one (ask for them by camIds). */
+  curvesIncluded: number;
 };
+
+/** Curves are the bulk of an answer (2,000 cams: ~18 MB); by default only the top of the list carries them. */
+export const DEFAULT_CURVE_LIMIT = 20;
 
 type Priced = { items: PricedItem[]; jobPriceCents: number | null };
 
@@ -41,10 +46,10 @@ export function pricedItems(rules: readonly NeedRuleInput[], needs: readonly Adv
 
 export async function rankForShop(
   build: BuildProfile,
-  { camIds, includeCurves = true }: { camIds?: number[]; includeCurves?: boolean } = {},
+  { camIds, includeCurves = true, curveLimit = DEFAULT_CURVE_LIMIT }: { camIds?: number[]; includeCurves?: boolean; curveLimit?: number } = {},
 ): Promise<{ ok: true; result: ShopRanking } | { ok: false; missingIds: number[] }> {
-  // The shop's measured before/after results (dyno runs) nudge the predicted gains of the cams they were measured on.
-  const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory()]);
+  // The shop's measured before/after results on similar engines nudge the predicted gains of the cams they were measured on.
+  const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory(build, camIds)]);
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;
   const vehicleClass = vehicleClassOf(build);
@@ -58,7 +63,9 @@ export async function rankForShop(
   };
   const result = rankCams(build, cards, { history, jobPriceCents: priceJob, includeCurves });
   const byId = new Map(cards.map((card) => [String(card.id), card]));
-  const rankings = result.rankings.map((ranking) => {
+  const curvesIncluded = includeCurves ? Math.min(curveLimit, result.rankings.length) : 0;
+  const rankings = result.rankings.map((full, index) => {
+    const ranking = index < curvesIncluded ? full : { ...full, curve: [] };
     const card = byId.get(String(ranking.camId))!;
     const { items, jobPriceCents: job } = priced.get(String(ranking.camId)) ?? { items: [], jobPriceCents: null };
     return {
@@ -71,5 +78,5 @@ export async function rankForShop(
       emissionsCertified: card.emissionsCertified === true,
     };
   });
-  return { ok: true, result: { ...result, rankings, vehicleClass } };
+  return { ok: true, result: { ...result, rankings, vehicleClass, curvesIncluded } };
 }

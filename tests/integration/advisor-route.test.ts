@@ -42,6 +42,20 @@ describe('POST /api/advisor/rank', () => {
     await request(appUrl).post('/api/advisor/rank').send({ build: towingTruck }).expect(401);
   });
 
+  it('carries curves for the top curveLimit cams only; a lower cam’s curve comes when asked for by camIds', async () => {
+    const body = (await rank({ build: towingTruck, curveLimit: 2 }).expect(200)).body as RankingBody & { curvesIncluded: number };
+    expect(body.curvesIncluded).toBe(2);
+    expect(body.rankings.slice(0, 2).every((r) => r.curve.length > 10)).toBe(true);
+    expect(body.rankings.slice(2).every((r) => r.curve.length === 0)).toBe(true);
+    const last = body.rankings[body.rankings.length - 1];
+    const alone = (await rank({ build: towingTruck, camIds: [last.camId], curveLimit: 1 }).expect(200)).body as RankingBody;
+    expect(alone.rankings[0].curve.length).toBeGreaterThan(10);
+    // Default: the top 20, which is every cam of the demo catalogue.
+    expect(((await rank({ build: towingTruck, includeCurves: false }).expect(200)).body as { curvesIncluded: number }).curvesIncluded).toBe(0);
+    const bad = await rank({ build: towingTruck, curveLimit: -1 }).expect(422);
+    expect(bad.body.errors[0].field).toBe('curveLimit');
+  });
+
   it('every demo build in the database is a valid build profile', async () => {
     const builds = await Build.findAll();
     expect(builds.length).toBeGreaterThanOrEqual(3);

@@ -5,6 +5,7 @@ import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { removeDynoRuns } from '../support/dyno-runs';
 
 // Engine dyno or chassis dyno, chosen on the job page as the technician records each pull: the table says
 // which, and the chart compares a chassis before pull only with chassis after pulls (an engine-dyno pull
@@ -53,7 +54,7 @@ describe('chassis and engine dyno runs on the job page', () => {
   afterAll(async () => {
     await browser?.close();
     const ids = (await DynoRun.findAll({ where: { buildId: BUILD_ID, id: { [Op.gte]: firstNewId } }, attributes: ['id'] })).map((r) => r.id);
-    await DynoRun.destroy({ where: { id: { [Op.in]: ids } } });
+    await removeDynoRuns(ids);
     await AuditEntry.destroy({ where: { entityType: 'dyno-run', entityId: { [Op.in]: ids.map(String) } } });
     await disconnectTestDatabase();
   });

@@ -7,6 +7,7 @@ import { launchBrowser } from '../support/browser';
 import { DEMO_EMAILS, DEMO_PASSWORD } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { removeDynoRuns } from '../support/dyno-runs';
 
 // The technician records the before and the after pull on the demo job Q-2026-0102 (quote 2, build 2)
 // through the page, typing like a person, in shop units (°F, inHg). Runs made here are deleted afterwards.
@@ -72,7 +73,7 @@ describe('dyno runs through the job page', () => {
   afterAll(async () => {
     await browser?.close();
     const ids = (await DynoRun.findAll({ where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId } }, attributes: ['id'] })).map((r) => r.id);
-    await DynoRun.destroy({ where: { id: { [Op.in]: ids } } });
+    await removeDynoRuns(ids);
     await AuditEntry.destroy({ where: { entityType: 'dyno-run', entityId: { [Op.in]: ids.map(String) } } });
     await disconnectTestDatabase();
   });

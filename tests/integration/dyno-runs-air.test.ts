@@ -4,6 +4,7 @@ import { AuditEntry, DynoRun } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { removeDynoRuns } from '../support/dyno-runs';
 
 // POST /api/dyno-runs asks for the air readings the chosen correction's formula uses, and no others:
 // SAE J1349 and J607 use temperature, pressure and humidity; DIN 70020 temperature and total pressure;
@@ -20,7 +21,7 @@ describe('dyno run air readings by correction standard', () => {
   });
   afterAll(async () => {
     if (created.length) {
-      await DynoRun.destroy({ where: { id: { [Op.in]: created } } });
+      await removeDynoRuns(created);
       await AuditEntry.destroy({ where: { entityType: 'dyno-run', entityId: { [Op.in]: created.map(String) } } });
     }
     await disconnectTestDatabase();

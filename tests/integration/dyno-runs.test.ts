@@ -5,6 +5,7 @@ import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { removeDynoRuns } from '../support/dyno-runs';
 
 // Dyno runs for the seeded job: build 2, quote 2 (deposit paid), cam F9-219 going in. A technician
 // records a before and an after pull; the advisor then shows the measured result for a similar build.
@@ -46,7 +47,7 @@ describe('dyno runs', () => {
   });
   afterAll(async () => {
     if (created.length) {
-      await DynoRun.destroy({ where: { id: { [Op.in]: created } } });
+      await removeDynoRuns(created);
       await AuditEntry.destroy({ where: { entityType: 'dyno-run', entityId: { [Op.in]: created.map(String) } } });
     }
     await disconnectTestDatabase();
@@ -136,9 +137,12 @@ describe('dyno runs', () => {
     // Measured gain from corrected peaks: 388.824 / 344.394 − 1 = +12.90 %.
     expect(h.measuredGainPctPeakHp).toBeCloseTo(12.90, 1);
     expect(h.modelGainPctPeakHp).not.toBeCloseTo(h.measuredGainPctPeakHp, 1);
+    // The pulls were recorded as curves, so the advisor blends their torque gain rpm by rpm where both
+    // covered (3,000–5,500 rpm): the predicted peak may lie above that and keep the model's figure. It never
+    // leaves the span between the model and the measurement. (The per-rpm blend: dyno-history.test.ts.)
     const [lo, hi] = [Math.min(h.modelGainPctPeakHp, h.measuredGainPctPeakHp), Math.max(h.modelGainPctPeakHp, h.measuredGainPctPeakHp)];
-    expect(h.adjustedGainPctPeakHp).toBeGreaterThan(lo);
-    expect(h.adjustedGainPctPeakHp).toBeLessThan(hi);
+    expect(h.adjustedGainPctPeakHp).toBeGreaterThanOrEqual(lo);
+    expect(h.adjustedGainPctPeakHp).toBeLessThanOrEqual(hi);
   });
 
   it('an engine-dyno pull is never compared with the chassis-dyno before pull', async () => {

@@ -1,11 +1,13 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { listBuilds } from '@/lib/db/queries/builds';
+import { loadDynoHistory } from '@/lib/db/queries/dyno-history';
 import { listCustomers } from '@/lib/db/queries/customers';
 import { listLeads } from '@/lib/db/queries/leads';
 import { quoteExportChunks } from '@/lib/db/queries/quote-export';
 import { listQuotes } from '@/lib/db/queries/quote-list';
 import { reportSummary } from '@/lib/db/queries/reports';
 import { BuildListQuerySchema } from '@/lib/schemas/build';
+import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import { CustomerListQuerySchema } from '@/lib/schemas/customer';
 import { LeadListQuerySchema } from '@/lib/schemas/lead';
 import { QuoteListQuerySchema } from '@/lib/schemas/quote-list';
@@ -106,6 +108,21 @@ describe('EXPLAIN of the lists', () => {
   it('leads, newest first and by status', async () => {
     await expectIndexedPlans(() => listLeads(LeadListQuerySchema.parse({ page: '1', pageSize: '25' })));
     await expectIndexedPlans(() => listLeads(LeadListQuerySchema.parse({ status: 'new', page: '3', pageSize: '25' })));
+  });
+});
+
+describe('EXPLAIN of the advisor’s measured history', () => {
+  it('reads dyno_gains by similar displacement (and cam), in index order, never the whole table', async () => {
+    const [demo] = await sequelize.query<{ profile: unknown }>('SELECT profile FROM builds WHERE id = 1', { type: QueryTypes.SELECT });
+    const profile = BuildProfileSchema.parse(typeof demo.profile === 'string' ? JSON.parse(demo.profile) : demo.profile);
+    const [cam] = await sequelize.query<{ camId: number }>('SELECT cam_id AS camId FROM dyno_gains ORDER BY id LIMIT 1', { type: QueryTypes.SELECT });
+    await expectIndexedPlans(() => loadDynoHistory(profile));
+    await expectIndexedPlans(() => loadDynoHistory(profile, [cam.camId]));
+    const selects = await selectsOf(() => loadDynoHistory(profile));
+    for (const sql of selects) {
+      const plan = await sequelize.query<PlanRow>(`EXPLAIN ${sql}`, { type: QueryTypes.SELECT });
+      expect(plan.map((row) => [row.type, row.key, (row.Extra ?? '').includes('filesort')])).toEqual([['range', 'dyno_gains_similar', false]]);
+    }
   });
 });
 

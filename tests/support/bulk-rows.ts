@@ -67,6 +67,10 @@ export async function insertBulkRows(sequelize: Sequelize, now = Date.now()) {
   await insertRows(sequelize, 'builds', ['customer_id', 'vehicle_label', 'profile', 'created_at', 'updated_at'],
     customerIds.map((id, i) => [id, `${2000 + (i % 24)} ${pick(VEHICLES)}, ${pick(['4.8', '5.3', '5.7', '6.2'])} L`, '{}', people[i][3], sqlTime(Date.parse(`${people[i][3]}Z`) + 86_400_000)]));
   const builds = await ids(sequelize, `SELECT b.id FROM builds b JOIN customers c ON c.id = b.customer_id WHERE c.name LIKE '${BULK_MARK} %' ORDER BY b.customer_id`);
+  // A measured result per build for the advisor's history, engines from 230 to 460 in³ (plans only: the
+  // builds' profiles are empty, so these rows are written here rather than filed from dyno runs).
+  await insertRows(sequelize, 'dyno_gains', ['build_id', 'cam_id', 'dyno_type', 'displacement_ci', 'intake_flow_cfm', 'headers', 'exhaust_system', 'intake_manifold', 'gain_pct_peak_hp', 'gain_pct_by_rpm'],
+    builds.map((id) => [id, pick(cams).id, 'chassis', 230 + rnd() * 230, 190 + rnd() * 130, pick(['manifold', 'shorty', 'long-tube']), 'full', 'truck', rnd() * 15, JSON.stringify([{ rpm: 3000, gainPct: 1 }, { rpm: 3250, gainPct: 2 }])]));
 
   const quotes: unknown[][] = [];
   customerIds.forEach((customerId, i) => {
@@ -106,6 +110,6 @@ export async function insertBulkRows(sequelize: Sequelize, now = Date.now()) {
     }));
 
   // Fresh statistics now, not whenever InnoDB gets round to it, so the plans are the ones a full table gets.
-  await sequelize.query('ANALYZE TABLE customers, builds, quotes, quote_lines, payments, leads');
+  await sequelize.query('ANALYZE TABLE customers, builds, quotes, quote_lines, payments, leads, dyno_gains');
   return { customers: customerIds.length, quotes: made.length, payments: payments.length };
 }

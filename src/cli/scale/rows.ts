@@ -5,11 +5,11 @@ import { seededRandom } from '../../lib/seeded-random';
 // state a quote or lead can be in. Build profiles are the demo builds' own (they pass the schema);
 // cams are the demo grinds cloned under invented SKUs with their figures nudged.
 
-export type ScaleSize = { customers: number; quotes: number; linesPerQuote: number; payments: number; leads: number; cams: number };
+export type ScaleSize = { customers: number; quotes: number; linesPerQuote: number; payments: number; leads: number; cams: number; dynoRuns: number };
 
 export const SIZES: Record<'M' | 'L', ScaleSize> = {
-  M: { customers: 10_000, quotes: 20_000, linesPerQuote: 9, payments: 5_000, leads: 5_000, cams: 200 },
-  L: { customers: 100_000, quotes: 200_000, linesPerQuote: 9, payments: 50_000, leads: 50_000, cams: 2_000 },
+  M: { customers: 10_000, quotes: 20_000, linesPerQuote: 9, payments: 5_000, leads: 5_000, cams: 200, dynoRuns: 5_000 },
+  L: { customers: 100_000, quotes: 200_000, linesPerQuote: 9, payments: 50_000, leads: 50_000, cams: 2_000, dynoRuns: 50_000 },
 };
 
 const SYL = ['ka', 'vel', 'dor', 'min', 'tas', 'ro', 'quil', 'bre', 'sen', 'ul', 'fa', 'mor', 'ith', 'wen', 'ga', 'lio'];
@@ -80,10 +80,51 @@ export class ScaleWriter {
       customerIds.map((id, i) => {
         const p = profiles[i % profiles.length];
         const at = people[i][3];
-        return [id, `${1998 + (i % 27)} ${this.pick(BODIES)}`, JSON.stringify(typeof p.profile === 'string' ? JSON.parse(p.profile) : p.profile), p.cam, at, at];
+        return [id, `${1998 + (i % 27)} ${this.pick(BODIES)}`, JSON.stringify(this.varied(typeof p.profile === 'string' ? JSON.parse(p.profile) : p.profile)), p.cam, at, at];
       }));
     const builds = await this.ids("SELECT b.id FROM builds b JOIN customers c ON c.id = b.customer_id WHERE c.email LIKE '%@example.test' ORDER BY b.customer_id");
     return customerIds.map((id, i) => ({ customerId: id, buildId: builds[i] }));
+  }
+
+  /** A demo profile with its engine resized (230–460 in³, 190–320 cfm), so the builds are not three engines repeated. */
+  private varied(profile: { engine: Record<string, unknown> }) {
+    const r3 = (n: number) => Math.round(n * 1000) / 1000;
+    return {
+      ...profile,
+      engine: { ...profile.engine, boreIn: r3(3.6 + this.rnd() * 0.55), strokeIn: r3(3.25 + this.rnd() * 0.75), intakeFlowCfm: Math.round(190 + this.rnd() * 130) },
+    };
+  }
+
+  /**
+   * A before and an after pull (curves, SAE J1349 air) on count / 2 builds, then dyno_gains filed from them
+   * by the app's own code. The after pull gains more at the top than at the bottom, by the cam's number.
+   */
+  async dynoRuns(count: number, owners: { buildId: number }[], camIds: number[]) {
+    const grid = Array.from({ length: 15 }, (_, i) => 2500 + i * 250);
+    const pull = (peakLbFt: number, gainAt: (rpm: number) => number) => {
+      const curve = grid.map((rpm) => {
+        const shape = 1 - ((rpm - 4000) / 4000) ** 2; // torque peaks at 4,000 rpm
+        return { rpm, torqueLbFt: Math.round(peakLbFt * shape * (1 + gainAt(rpm) / 100) * 10) / 10, hp: 0 };
+      });
+      for (const point of curve) point.hp = (point.torqueLbFt * point.rpm) / 5252; // definition of horsepower
+      const hpAt = curve.reduce((a, b) => (b.hp > a.hp ? b : a));
+      const tqAt = curve.reduce((a, b) => (b.torqueLbFt > a.torqueLbFt ? b : a));
+      return { curve, peakHp: hpAt.hp, peakHpRpm: hpAt.rpm, peakTorqueLbFt: tqAt.torqueLbFt, peakTorqueRpm: tqAt.rpm };
+    };
+    const builds = owners.slice(0, Math.floor(count / 2));
+    const rows: unknown[][] = [];
+    for (const { buildId } of builds) {
+      const cam = this.pick(camIds);
+      const peak = 280 + this.rnd() * 200;
+      const top = 4 + (cam % 13);
+      const at = this.when();
+      for (const [phase, gainAt, when] of [['before', () => 0, at], ['after', (rpm: number) => -4 + ((rpm - 2500) / 3500) * (top + 4), at + DAY]] as const) {
+        const p = pull(peak, gainAt);
+        rows.push([buildId, phase === 'after' ? cam : null, phase, sqlTime(when), 'sae-j1349', 25, 99, 40, p.peakHp, p.peakHpRpm, p.peakTorqueLbFt, p.peakTorqueRpm, JSON.stringify(p.curve), sqlTime(when), sqlTime(when)]);
+      }
+    }
+    await this.insert('dyno_runs', ['build_id', 'cam_id', 'phase', 'run_at', 'correction_standard', 'air_temp_c', 'baro_kpa', 'humidity_pct', 'peak_hp', 'peak_hp_rpm', 'peak_torque_lb_ft', 'peak_torque_rpm', 'curve', 'created_at', 'updated_at'], rows);
+    return rows.length;
   }
 
   async quotes(size: ScaleSize, owners: { customerId: number; buildId: number }[], camIds: number[]) {
@@ -92,16 +133,15 @@ export class ScaleWriter {
     const perYear = new Map<number, number>();
     const rows: unknown[][] = [];
     const lines: unknown[][] = [];
-    for (let n = 0; n < size.quotes; n++) {
-      const created = this.when();
+    // Written oldest first, as a shop writes them: ids follow created_at, as they do in a real table.
+    const drafts = Array.from({ length: size.quotes }, () => ({ created: this.when(), owner: this.pick(owners), status: this.pick(QUOTE_STATES), total: 60_000 + Math.floor(this.rnd() * 250_000), cam: this.pick(camIds), changedDays: Math.floor(this.rnd() * 30) }));
+    drafts.sort((a, b) => a.created - b.created);
+    for (const { created, owner, status, total, cam, changedDays } of drafts) {
       const year = new Date(created).getUTCFullYear();
       const seq = (perYear.get(year) ?? 0) + 1;
       perYear.set(year, seq);
-      const owner = this.pick(owners);
-      const status = this.pick(QUOTE_STATES);
-      const total = 60_000 + Math.floor(this.rnd() * 250_000);
-      rows.push([`Q-${year}-${String(seq).padStart(5, '0')}`, owner.customerId, owner.buildId, this.pick(camIds), status, total, 825, Math.round(total * 0.0825), total + Math.round(total * 0.0825),
-        Math.round(total / 5), status === 'draft' ? null : sqlTime(created + 3_600_000), sqlTime(created), sqlTime(created + Math.floor(this.rnd() * 30) * DAY)]);
+      rows.push([`Q-${year}-${String(seq).padStart(5, '0')}`, owner.customerId, owner.buildId, cam, status, total, 825, Math.round(total * 0.0825), total + Math.round(total * 0.0825),
+        Math.round(total / 5), status === 'draft' ? null : sqlTime(created + 3_600_000), sqlTime(created), sqlTime(created + changedDays * DAY)]);
     }
     await this.insert('quotes', ['number', 'customer_id', 'build_id', 'cam_id', 'status', 'subtotal_cents', 'tax_rate_bp', 'tax_cents', 'total_cents', 'deposit_cents', 'sent_at', 'created_at', 'updated_at'], rows);
     const [made] = await this.db.query("SELECT id, cam_id AS cam, status, deposit_cents AS deposit, created_at AS at FROM quotes WHERE number REGEXP '^Q-[0-9]{4}-[0-9]{5}$' ORDER BY id");

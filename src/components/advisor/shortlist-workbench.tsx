@@ -11,14 +11,17 @@ import { RankingDetail } from './ranking-detail';
 
 type BuildOption = { id: number; label: string; profile: BuildProfile };
 
-async function rank([url, build]: [string, BuildProfile]): Promise<ShopRanking> {
-  const response = await fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ build }) });
-  const body = await response.json().catch(() => null);
+async function rank([url, build, camIds]: [string, BuildProfile, string?]): Promise<ShopRanking> {
+  // camIds (comma-separated, so the SWR key stays a plain value): just these cams, curves and all.
+  const ids = camIds ? camIds.split(',').map(Number) : undefined;
+  const body = ids ? { build, camIds: ids, curveLimit: ids.length } : { build };
+  const response = await fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) });
+  const answer = await response.json().catch(() => null);
   if (!response.ok) {
-    const fields = body?.errors?.map((e: { field: string; message: string }) => `${e.field}: ${e.message}`).join('; ');
-    throw new Error(fields || body?.message || `The advisor answered ${response.status}.`);
+    const fields = answer?.errors?.map((e: { field: string; message: string }) => `${e.field}: ${e.message}`).join('; ');
+    throw new Error(fields || answer?.message || `The advisor answered ${response.status}.`);
   }
-  return body as ShopRanking;
+  return answer as ShopRanking;
 }
 
 export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds: BuildOption[]; notice: string; initialBuildId?: number }) {
@@ -33,6 +36,10 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
   const shown = useMemo(() => (data ? data.rankings.filter((r) => !certifiedOnly || r.emissionsCertified) : []), [data, certifiedOnly]);
 
   const chartIds = useMemo(() => charted ?? shown.slice(0, 3).map((r) => String(r.camId)), [charted, shown]);
+  // The answer carries curves for the top of the list only; a cam charted from further down is asked for on its own.
+  const withoutCurve = data ? chartIds.filter((id) => data.rankings.find((r) => String(r.camId) === id)?.curve.length === 0) : [];
+  const { data: extra } = useSWR(build && withoutCurve.length ? ['/api/advisor/rank', build.profile, withoutCurve.join(',')] : null, rank, { revalidateOnFocus: false });
+  const curveOf = (r: ShopRanking['rankings'][number]) => (r.curve.length ? r.curve : extra?.rankings.find((x) => String(x.camId) === String(r.camId))?.curve ?? []);
 
   if (builds.length === 0) {
     return <p className="rounded border border-steel-300 bg-paper-raised p-4">No saved builds yet. Record a customer’s engine combination first, then come back here for the shortlist.</p>;
@@ -69,7 +76,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
             <h2 id="chart-heading" className="text-sm font-semibold">Predicted curves against the cam in the engine now</h2>
             <PowerChart
               baseline={{ label: `Now: ${data.baseline.camName}`, points: data.baseline.curve }}
-              candidates={shown.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ label: `#${r.rank} ${r.camName}`, points: r.curve }))}
+              candidates={shown.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ label: `#${r.rank} ${r.camName}`, points: curveOf(r) }))}
               markers={(build.profile.drivetrain.stallRpm ?? 0) > 0 ? [{ label: 'Converter stall', rpm: build.profile.drivetrain.stallRpm ?? 0 }] : []}
               band={{ fromRpm: data.engine.cruiseRpm, toRpm: Math.max(data.engine.cruiseRpm + 200, data.engine.pullAwayRpm), label: `Where it’s driven (cruise ${Math.round(data.engine.cruiseRpm)} rpm)` }}
               ranges={shown.filter((r) => chartIds.includes(String(r.camId))).flatMap((r, index) => (r.crossoverRangeRpm === null ? [] : [{

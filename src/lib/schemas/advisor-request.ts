@@ -14,6 +14,13 @@ export const RankRequestSchema = z.strictObject({
     .max(ADVISOR_REQUEST_LIMITS.camIdsMax, { error: `camIds may name at most ${ADVISOR_REQUEST_LIMITS.camIdsMax} cams` })
     .optional(),
   includeCurves: z.boolean({ error: 'includeCurves must be true or false' }).optional(),
+  // How many of the best-ranked cams carry their predicted curve (default 20; the rest come without one).
+  curveLimit: z
+    .number({ error: 'curveLimit must be a whole number' })
+    .int({ error: 'curveLimit must be a whole number' })
+    .min(0, { error: 'curveLimit must be at least 0' })
+    .max(ADVISOR_REQUEST_LIMITS.camIdsMax, { error: `curveLimit may be at most ${ADVISOR_REQUEST_LIMITS.camIdsMax}` })
+    .optional(),
 });
 
 export type RankRequest = z.output<typeof RankRequestSchema>;

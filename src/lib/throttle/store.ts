@@ -63,10 +63,17 @@ function sequelizePool() {
     getConnection(cb: (error: Error | null, conn?: ReturnType<typeof callbackConnection>) => void) {
       const manager = getSequelize().connectionManager as unknown as {
         getConnection(): Promise<DriverConnection>;
-        releaseConnection(conn: DriverConnection): Promise<void>;
+        // Synchronous in Sequelize 6 (returns nothing): chaining .catch on it threw an unhandled TypeError per release.
+        releaseConnection(conn: DriverConnection): void;
       };
       manager.getConnection().then(
-        (conn) => cb(null, callbackConnection(conn, () => void manager.releaseConnection(conn).catch(() => undefined))),
+        (conn) => cb(null, callbackConnection(conn, () => {
+          try {
+            manager.releaseConnection(conn);
+          } catch {
+            // released twice: nothing left to give back
+          }
+        })),
         (error: Error) => cb(error),
       );
     },

@@ -1,7 +1,10 @@
 import { displacementCi } from '@/lib/advisor/geometry';
 import { parseCurveCsv } from '@/lib/dyno/curve-csv';
 import { gainPct, peaksOf, pullWithPower } from '@/lib/dyno/figures';
-import { historyFromRuns, type RunForHistory } from '@/lib/dyno/history';
+import { rankCams } from '@/lib/advisor';
+import { HISTORY_SETTINGS, historySimilarity } from '@/lib/advisor/history';
+import { gainByRpm, historyFromRuns, similarityWindow, type RunForHistory } from '@/lib/dyno/history';
+import { dynoBuild, truckCam } from '../advisor/fixtures';
 import { DynoRunSchema } from '@/lib/schemas/dyno-run';
 import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profile';
 
@@ -77,6 +80,69 @@ describe('history from before/after pairs', () => {
       { buildId: 7, phase: 'after', dynoType: 'chassis', camId: 9, correctedPeakHp: 330 },
     ];
     expect(historyFromRuns(runs, profiles)).toEqual([]);
+  });
+});
+
+describe('per-rpm gains from the pulls', () => {
+  const flat = (from: number, to: number, torqueLbFt: number) => Array.from({ length: (to - from) / 500 + 1 }, (_, i) => ({ rpm: from + i * 500, torqueLbFt }));
+
+  it('torque gain on a 250 rpm grid where every pull of both phases was measured, pulls of a phase averaged', () => {
+    // Before: two pulls, 300 and 320 lb·ft (mean 310), 2,000–6,000 rpm; after: 341 lb·ft from 2,500 to 5,500 rpm.
+    const gains = gainByRpm([flat(2000, 6000, 300), flat(2000, 6000, 320)], [flat(2500, 5500, 341)])!;
+    expect(gains[0].rpm).toBe(2500);
+    expect(gains[gains.length - 1].rpm).toBe(5500);
+    expect(gains.map((g) => g.rpm)).toEqual(Array.from({ length: 13 }, (_, i) => 2500 + i * 250));
+    for (const g of gains) expect(g.gainPct).toBeCloseTo(10, 10); // 341 / 310 − 1
+  });
+
+  it('interpolates between the points and says nothing without two shared points', () => {
+    const gains = gainByRpm([[{ rpm: 3000, torqueLbFt: 300 }, { rpm: 4000, torqueLbFt: 300 }]], [[{ rpm: 3000, torqueLbFt: 300 }, { rpm: 4000, torqueLbFt: 360 }]])!;
+    expect(gains.find((g) => g.rpm === 3500)!.gainPct).toBeCloseTo(10, 10); // 330 / 300 − 1, halfway
+    expect(gainByRpm([flat(2000, 3000, 300)], [flat(3000, 4000, 300)])).toBeUndefined(); // one shared rpm only
+    expect(gainByRpm([], [flat(3000, 4000, 300)])).toBeUndefined();
+  });
+
+  it('historyFromRuns gives the advisor measuredGainPctByRpm from corrected curves, none for peak-only runs', () => {
+    const profiles = new Map([[2, profile()]]);
+    const runs: RunForHistory[] = [
+      { buildId: 2, phase: 'before', dynoType: 'chassis', camId: null, correctedPeakHp: 300, correctedCurve: flat(2000, 6000, 300) },
+      { buildId: 2, phase: 'after', dynoType: 'chassis', camId: 9, correctedPeakHp: 330, correctedCurve: flat(2000, 6000, 315) },
+      { buildId: 2, phase: 'after', dynoType: 'chassis', camId: 4, correctedPeakHp: 320 },
+    ];
+    const [four, nine] = historyFromRuns(runs, profiles);
+    expect(four.camId).toBe(4);
+    expect(four.measuredGainPctByRpm).toBeUndefined();
+    expect(nine.measuredGainPctByRpm).toHaveLength(17);
+    for (const g of nine.measuredGainPctByRpm!) expect(g.gainPct).toBeCloseTo(5, 10);
+  });
+
+  it('reach the ranking: a gain measured low down lifts the low end, where a peak-only record counts for nothing', () => {
+    const e = dynoBuild.engine;
+    const at = (rpm: number, r: ReturnType<typeof rankCams>['rankings'][number]) => r.curve.find((p) => p.rpm === rpm)!.torqueLbFt;
+    const engine = { displacementCi: displacementCi(e.boreIn, e.strokeIn, e.cylinders), intakeFlowCfm: e.intakeFlowCfm, headers: dynoBuild.exhaust.headers, system: dynoBuild.exhaust.system, intakeManifold: e.intakeManifold };
+    const model = rankCams(dynoBuild, [truckCam]).rankings[0];
+    const lowRpm = model.curve.find((p) => p.rpm <= model.predicted.peakHpRpm * 0.5)!.rpm;
+    const peakOnly = rankCams(dynoBuild, [truckCam], { history: [{ camId: truckCam.id, measuredGainPctPeakHp: model.predicted.gainPctPeakHp, ...engine }] }).rankings[0];
+    const byRpm = rankCams(dynoBuild, [truckCam], {
+      history: [{ camId: truckCam.id, measuredGainPctPeakHp: model.predicted.gainPctPeakHp, ...engine, measuredGainPctByRpm: [{ rpm: 1000, gainPct: 30 }, { rpm: 8000, gainPct: 30 }] }],
+    }).rankings[0];
+    expect(at(lowRpm, peakOnly)).toBeCloseTo(at(lowRpm, model), 9);
+    expect(at(lowRpm, byRpm)).toBeGreaterThan(at(lowRpm, model) * 1.05);
+  });
+});
+
+describe('similarity window', () => {
+  const build = profile();
+  const here = displacementCi(4.0, 3.622, 8);
+  const entry = (d: number, flow: number) => ({ camId: 1, measuredGainPctPeakHp: 5, displacementCi: d, intakeFlowCfm: flow });
+  it('holds every record the advisor can count and none it cannot (the edges, from HISTORY_SETTINGS)', () => {
+    const w = similarityWindow(here, 250);
+    const min = HISTORY_SETTINGS.minSimilarity;
+    for (const d of w.displacementCi) expect(historySimilarity(entry(d, 250), build, here)).toBeCloseTo(min, 9);
+    for (const f of w.intakeFlowCfm) expect(historySimilarity(entry(here, f), build, here)).toBeCloseTo(min, 9);
+    expect(historySimilarity(entry(w.displacementCi[1] * 1.001, 250), build, here)).toBeLessThan(min);
+    expect(historySimilarity(entry(w.displacementCi[1] * 0.999, 250), build, here)).toBeGreaterThan(min);
+    expect(historySimilarity(entry(here, w.intakeFlowCfm[0] * 0.999), build, here)).toBeLessThan(min);
   });
 });
 

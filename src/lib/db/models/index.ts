@@ -3,6 +3,7 @@ import { getSequelize } from '../connection';
 import { AuditEntry } from './audit-entry';
 import { Cam } from './cam';
 import { Build, Customer, Interview } from './customer';
+import { DynoGain } from './dyno-gain';
 import { DynoRun } from './dyno-run';
 import { Job, JobSignOff } from './job';
 import { LaborOperation } from './labor-operation';
@@ -15,7 +16,7 @@ import { ShopSettings } from './shop-settings';
 import { Supplier } from './supplier';
 import { User } from './user';
 
-export { AuditEntry, Build, Cam, Customer, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
+export { AuditEntry, Build, Cam, Customer, DynoGain, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
 
 let initialised: Sequelize | undefined;
 
@@ -47,6 +48,8 @@ function associate() {
   DynoRun.belongsTo(Cam, { foreignKey: 'camId', as: 'cam' });
   DynoRun.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
   DynoRun.belongsTo(User, { foreignKey: 'recordedByUserId', as: 'recordedBy' });
+  DynoGain.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
+  DynoGain.belongsTo(Cam, { foreignKey: 'camId', as: 'cam' });
   AuditEntry.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   Quote.hasOne(Job, { foreignKey: 'quoteId', as: 'job' });
   Job.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
@@ -59,7 +62,7 @@ function associate() {
 export function db(): Sequelize {
   const sequelize = getSequelize();
   if (initialised !== sequelize) {
-    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, LeadNote, DynoRun, Job, JobSignOff, AuditEntry]) {
+    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, LeadNote, DynoRun, DynoGain, Job, JobSignOff, AuditEntry]) {
       model.initModel(sequelize);
     }
     associate();

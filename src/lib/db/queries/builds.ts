@@ -4,6 +4,7 @@ import { recordAudit } from '@/lib/audit';
 import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
 import { BUILD_RECORD_LIMITS, type BuildCreate, type BuildListQuery, type BuildUpdate } from '@/lib/schemas/build';
 import { Build, Cam, Customer, db } from '../models';
+import { refreshDynoGains } from './dyno-gains';
 import { linkLeadToCustomer } from './lead-links';
 import { customerMatchSql, insertCustomer } from './customers';
 import { textSearch } from './text-search';
@@ -178,6 +179,8 @@ export async function updateBuild(id: number, expectedVersion: number, values: B
       if (!sameProfile) build.set({ profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion });
       if (!build.changed()) return { record: before, changed: false };
       await build.save({ transaction: t });
+      // The measured history is filed under the engine's figures: a new profile refiles it.
+      if (!sameProfile) await refreshDynoGains([id], t);
       const after = (await getBuild(id, t))!;
       await recordAudit({ user, action: 'build.updated', entityType: 'build', entityId: id, before, after }, t);
       return { record: after };

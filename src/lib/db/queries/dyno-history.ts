@@ -1,32 +1,61 @@
+import { Op, type WhereOptions } from 'sequelize';
+import { displacementCi } from '@/lib/advisor/geometry';
 import type { HistoryEntry } from '@/lib/advisor/types';
-import { historyFromRuns, type RunForHistory } from '@/lib/dyno/history';
-import { correctedFigure } from '@/lib/dyno/figures';
-import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profile';
-import { Build, db, DynoRun } from '../models';
-import { runCorrection } from './dyno-runs';
+import { similarityWindow } from '@/lib/dyno/history';
+import type { BuildProfile } from '@/lib/schemas/build-profile';
+import { db, DynoGain } from '../models';
 
 /**
- * The shop's measured results as the advisor's options.history: before/after pairs on the same build,
- * corrected figures, the build's engine for similarity. Builds whose saved profile no longer parses are
- * left out rather than guessed at.
+ * The most records a ranking reads on each side of the engine's displacement (so twice this in all).
+ * Our choice: the advisor counts the shop's evidence against a prior worth two perfect matches, so a
+ * few hundred nearest jobs say all the history can say; the bound keeps a ranking's cost flat however
+ * many runs the shop has stored.
  */
-export async function loadDynoHistory(): Promise<HistoryEntry[]> {
+export const HISTORY_ROWS_PER_SIDE = 200;
+
+type InferredGain = Pick<DynoGain, 'id' | 'camId' | 'displacementCi' | 'intakeFlowCfm' | 'headers' | 'exhaustSystem' | 'intakeManifold' | 'gainPctPeakHp' | 'gainPctByRpm'>;
+
+function entryOf(row: InferredGain): HistoryEntry {
+  return {
+    camId: row.camId,
+    measuredGainPctPeakHp: row.gainPctPeakHp,
+    displacementCi: row.displacementCi,
+    intakeFlowCfm: row.intakeFlowCfm,
+    headers: row.headers,
+    system: row.exhaustSystem,
+    intakeManifold: row.intakeManifold,
+    ...(row.gainPctByRpm && row.gainPctByRpm.length >= 2 ? { measuredGainPctByRpm: row.gainPctByRpm } : {}),
+  };
+}
+
+/**
+ * The shop's measured results that can count for this engine, as the advisor's options.history: the
+ * jobs within the similarity window (src/lib/dyno/history.ts), nearest displacement first on each side,
+ * at most HISTORY_ROWS_PER_SIDE per side, read off the dyno_gains indexes. With exactly one cam asked
+ * for, only that cam's jobs are read.
+ */
+export async function loadDynoHistory(build: BuildProfile, camIds?: readonly number[]): Promise<HistoryEntry[]> {
   db();
-  const runs = await DynoRun.findAll({
-    attributes: ['id', 'buildId', 'phase', 'dynoType', 'camId', 'peakHp', 'correctionStandard', 'airTempC', 'baroKpa', 'humidityPct'],
-    order: [['buildId', 'ASC'], ['id', 'ASC']],
-  });
-  if (!runs.length) return [];
-  const buildIds = [...new Set(runs.map((r) => r.buildId))];
-  const builds = await Build.findAll({ where: { id: buildIds }, attributes: ['id', 'profile'] });
-  const profiles = new Map<number, BuildProfile>();
-  for (const b of builds) {
-    const parsed = BuildProfileSchema.safeParse(b.profile);
-    if (parsed.success) profiles.set(b.id, parsed.data);
-  }
-  const forHistory: RunForHistory[] = runs.map((r) => {
-    const c = runCorrection(r);
-    return { buildId: r.buildId, phase: r.phase, dynoType: r.dynoType, camId: r.camId ?? null, correctedPeakHp: c && r.peakHp !== null ? correctedFigure(r.peakHp, c.factor) : null };
-  });
-  return historyFromRuns(forHistory, profiles);
+  const e = build.engine;
+  const here = displacementCi(e.boreIn, e.strokeIn, e.cylinders);
+  const window = similarityWindow(here, e.intakeFlowCfm);
+  const oneCam = camIds?.length === 1 ? { camId: camIds[0] } : {};
+  const flow = { intakeFlowCfm: { [Op.between]: window.intakeFlowCfm } };
+  const side = (where: WhereOptions<DynoGain>, direction: 'ASC' | 'DESC') =>
+    DynoGain.findAll({
+      attributes: ['id', 'camId', 'displacementCi', 'intakeFlowCfm', 'headers', 'exhaustSystem', 'intakeManifold', 'gainPctPeakHp', 'gainPctByRpm'],
+      where: { ...oneCam, ...where, ...flow },
+      // The index order: no sort, and the LIMIT stops the range read early.
+      order: [['displacementCi', direction], ['intakeFlowCfm', direction], ['id', direction]],
+      limit: HISTORY_ROWS_PER_SIDE,
+    });
+  const [above, below] = await Promise.all([
+    side({ displacementCi: { [Op.gte]: here, [Op.lte]: window.displacementCi[1] } }, 'ASC'),
+    side({ displacementCi: { [Op.gte]: window.displacementCi[0], [Op.lt]: here } }, 'DESC'),
+  ]);
+  const wanted = camIds && camIds.length > 1 ? new Set(camIds.map(String)) : null;
+  return [...above, ...below]
+    .sort((a, b) => a.id - b.id)
+    .filter((row) => !wanted || wanted.has(String(row.camId)))
+    .map(entryOf);
 }

@@ -7,6 +7,7 @@ import type { DynoType } from '@/lib/dyno/dyno-type';
 import { correctedFigure, peaksOf, pullWithPower, round1, type PullPoint } from '@/lib/dyno/figures';
 import type { DynoRunValues } from '@/lib/schemas/dyno-run';
 import { Build, Cam, db, DynoRun, Quote, User } from '../models';
+import { refreshDynoGains } from './dyno-gains';
 
 // Dyno runs: written by technicians and managers, read by all staff. Observed figures are stored as
 // recorded; corrected figures are worked out on every read from the stored air data, so they always
@@ -102,7 +103,8 @@ async function quoteFor(values: DynoRunValues, t: Transaction): Promise<Quote | 
 
 export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip: string | null): Promise<WriteOutcome<DynoRunView>> {
   return runWrite(async (t) => {
-    const build = await Build.findByPk(values.buildId, { transaction: t });
+    // Locked first: the build's dyno_gains rows are rewritten below, one write to a build at a time.
+    const build = await Build.findByPk(values.buildId, { transaction: t, lock: t.LOCK.UPDATE });
     if (!build) throw invalid([{ field: 'buildId', message: `no build with id ${values.buildId}` }]);
     const quote = await quoteFor(values, t);
     let camId = values.camId ?? null;
@@ -137,6 +139,7 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
       },
       { transaction: t },
     );
+    await refreshDynoGains([values.buildId], t);
     const record = (await getDynoRun(run.id, t))!;
     await recordAudit(
       { user, action: 'dyno-run.recorded', entityType: 'dyno-run', entityId: run.id, after: { buildId: record.buildId, phase: record.phase, dynoType: record.dynoType, camId: record.camId, observed: record.observed, corrected: record.corrected }, ip },
@@ -148,10 +151,15 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
 
 export async function deleteDynoRun(id: number, user: SessionUser, ip: string | null): Promise<WriteOutcome<{ id: number; deleted: true }>> {
   return runWrite(async (t) => {
+    // The build before the run, in the order every dyno write takes its locks (no deadlock with a create).
+    const owner = await DynoRun.findByPk(id, { attributes: ['id', 'buildId'], transaction: t });
+    if (!owner) throw notFound();
+    await Build.findByPk(owner.buildId, { attributes: ['id'], transaction: t, lock: t.LOCK.UPDATE });
     const run = await DynoRun.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!run) throw notFound();
     const before = { buildId: run.buildId, phase: run.phase, dynoType: run.dynoType, camId: run.camId, peakHp: run.peakHp, peakTorqueLbFt: run.peakTorqueLbFt, runAt: run.runAt };
     await run.destroy({ transaction: t });
+    await refreshDynoGains([run.buildId], t);
     await recordAudit({ user, action: 'dyno-run.deleted', entityType: 'dyno-run', entityId: id, before, ip }, t);
     return { record: { id, deleted: true as const } };
   });

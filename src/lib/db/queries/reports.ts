@@ -40,25 +40,23 @@ async function select<T extends object>(sql: string, replacements: Record<string
   return db().query<T>(sql, { type: QueryTypes.SELECT, replacements });
 }
 
-export async function quotesByStatus(range: ReportRange): Promise<StatusFigure[]> {
-  const rows = await select<{ status: QuoteStatus; count: unknown; value: unknown }>(
-    `SELECT status, COUNT(*) AS count, COALESCE(SUM(total_cents), 0) AS value
-       FROM quotes WHERE created_at >= :start AND created_at < :end GROUP BY status ORDER BY NULL`,
+/**
+ * Counts and values by state and the sent conversion in one pass over the covering index, as sums of
+ * conditions rather than GROUP BY status: no temporary table, one range read instead of two.
+ */
+export async function quoteFigures(range: ReportRange): Promise<{ byStatus: StatusFigure[]; conversion: ReportSummary['conversion'] }> {
+  const e = (v: string) => db().escape(v);
+  const perStatus = QUOTE_STATUSES.map((status, i) =>
+    `COALESCE(SUM(status = ${e(status)}), 0) AS c${i}, COALESCE(SUM(IF(status = ${e(status)}, total_cents, 0)), 0) AS v${i}`).join(', ');
+  const [row] = await select<Record<string, unknown>>(
+    `SELECT ${perStatus}, COALESCE(SUM(sent_at IS NOT NULL), 0) AS sent, COALESCE(SUM(sent_at IS NOT NULL AND status = 'deposit-paid'), 0) AS paid
+       FROM quotes WHERE created_at >= :start AND created_at < :end`,
     bounds(range),
   );
-  const found = new Map(rows.map((r) => [r.status, r]));
-  return QUOTE_STATUSES.map((status) => ({ status, count: n(found.get(status)?.count), valueCents: n(found.get(status)?.value) }));
-}
-
-export async function sentConversion(range: ReportRange): Promise<ReportSummary['conversion']> {
-  const [row] = await select<{ sent: unknown; paid: unknown }>(
-    `SELECT COUNT(*) AS sent, COALESCE(SUM(status = 'deposit-paid'), 0) AS paid
-       FROM quotes WHERE created_at >= :start AND created_at < :end AND sent_at IS NOT NULL`,
-    bounds(range),
-  );
+  const byStatus = QUOTE_STATUSES.map((status, i) => ({ status, count: n(row?.[`c${i}`]), valueCents: n(row?.[`v${i}`]) }));
   const sentCount = n(row?.sent);
   const depositPaidCount = n(row?.paid);
-  return { sentCount, depositPaidCount, rateBp: rateBp(depositPaidCount, sentCount) };
+  return { byStatus, conversion: { sentCount, depositPaidCount, rateBp: rateBp(depositPaidCount, sentCount) } };
 }
 
 export async function depositsTaken(range: ReportRange): Promise<ReportSummary['deposits']> {
@@ -76,17 +74,22 @@ export async function depositsTaken(range: ReportRange): Promise<ReportSummary['
  * Summed in the database, one row per kind. A line's cost is ROUND(quantity × unit cost): quantity is a
  * DECIMAL(…,2) and the cost whole cents, so the product is exact and MariaDB rounds exact values half
  * away from zero — half up for these non-negative amounts, the rule goodsMargin and the quote lines use.
+ * The lines are first counted per (kind, cam, part, quantity) off their covering index, so the catalogue
+ * costs are looked up once per group instead of once per line (75,000 lookups at 200,000 quotes); lines
+ * in one group share their rounded cost, so n × ROUND(quantity × cost) is exactly the sum per line.
  */
 export async function goodsMarginOfPaidQuotes(range: ReportRange): Promise<ReportSummary['margin']> {
   const rows = await select<{ kind: 'cam' | 'part'; revenue: unknown; cost: unknown }>(
-    `SELECT ql.kind, SUM(ql.total_cents) AS revenue, SUM(ROUND(ql.quantity * COALESCE(c.cost_cents, p.cost_cents))) AS cost
-       FROM quotes q
-       JOIN quote_lines ql ON ql.quote_id = q.id
-       LEFT JOIN cams c ON c.id = ql.cam_id
-       LEFT JOIN parts p ON p.id = ql.part_id
-      WHERE q.status = 'deposit-paid' AND q.created_at >= :start AND q.created_at < :end
-        AND ql.kind IN ('cam', 'part') AND COALESCE(c.cost_cents, p.cost_cents) IS NOT NULL
-      GROUP BY ql.kind ORDER BY NULL`,
+    `SELECT g.kind, SUM(g.revenue) AS revenue, SUM(g.n * ROUND(g.quantity * COALESCE(c.cost_cents, p.cost_cents))) AS cost
+       FROM (SELECT ql.kind, ql.cam_id, ql.part_id, ql.quantity, COUNT(*) AS n, SUM(ql.total_cents) AS revenue
+               FROM quotes q
+               JOIN quote_lines ql ON ql.quote_id = q.id
+              WHERE q.status = 'deposit-paid' AND q.created_at >= :start AND q.created_at < :end AND ql.kind IN ('cam', 'part')
+              GROUP BY ql.kind, ql.cam_id, ql.part_id, ql.quantity ORDER BY NULL) g
+       LEFT JOIN cams c ON c.id = g.cam_id
+       LEFT JOIN parts p ON p.id = g.part_id
+      WHERE COALESCE(c.cost_cents, p.cost_cents) IS NOT NULL
+      GROUP BY g.kind ORDER BY NULL`,
     bounds(range),
   );
   const of = (kind: 'cam' | 'part') => rows.find((r) => r.kind === kind);
@@ -112,8 +115,8 @@ export async function mostQuotedCams(range: ReportRange, limit = 5): Promise<Top
 }
 
 export async function reportSummary(range: ReportRange): Promise<ReportSummary> {
-  const [byStatus, conversion, deposits, margin, topCams] = await Promise.all([
-    quotesByStatus(range), sentConversion(range), depositsTaken(range), goodsMarginOfPaidQuotes(range), mostQuotedCams(range),
+  const [{ byStatus, conversion }, deposits, margin, topCams] = await Promise.all([
+    quoteFigures(range), depositsTaken(range), goodsMarginOfPaidQuotes(range), mostQuotedCams(range),
   ]);
   const count = byStatus.reduce((s, f) => s + f.count, 0);
   const valueCents = byStatus.reduce((s, f) => s + f.valueCents, 0);

@@ -14,7 +14,7 @@ export async function POST(request: Request) {
   if (!body.ok) return body.response;
   const parsed = RankRequestSchema.safeParse(body.value);
   if (!parsed.success) return validationFailed(parsed.error);
-  const outcome = await rankForShop(parsed.data.build, { camIds: parsed.data.camIds, includeCurves: parsed.data.includeCurves });
+  const outcome = await rankForShop(parsed.data.build, { camIds: parsed.data.camIds, includeCurves: parsed.data.includeCurves, curveLimit: parsed.data.curveLimit });
   if (!outcome.ok) {
     return validationFailed([{ field: 'camIds', message: `no cam in the catalogue has id ${outcome.missingIds.join(', ')}` }]);
   }
