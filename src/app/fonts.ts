@@ -18,4 +18,7 @@ export const specFont = localFont({
   ],
   variable: '--font-spec',
   display: 'swap',
+  // Figures in mono are staff screens' business; the customer's pages (Lighthouse's mobile profile counts every
+  // preloaded byte before the largest paint) fetch these two files only when a page actually uses them.
+  preload: false,
 });

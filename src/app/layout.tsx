@@ -25,7 +25,8 @@ export default async function RootLayout({ children }: { children: React.ReactNo
         <header className="border-b border-steel-300 bg-ink text-paper">
           {/* Wider than the pages below it so a manager's eleven links, name and sign-out fit one row at 1280 px. */}
           <div className="mx-auto flex max-w-7xl items-center justify-between gap-4 px-4 py-3">
-            <Link href="/" className="flex items-baseline gap-2 text-lg font-semibold tracking-tight">
+            {/* No prefetch: on a customer's phone the start page's data would compete with the page being read. */}
+            <Link href="/" prefetch={false} className="flex items-baseline gap-2 text-lg font-semibold tracking-tight">
               <span aria-hidden className="inline-block h-3 w-3 rotate-45 rounded-sm bg-ember-500" />
               Lobewise
             </Link>

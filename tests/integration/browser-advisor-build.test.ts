@@ -1,4 +1,5 @@
 import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
@@ -41,6 +42,7 @@ describe('which build the shortlist shows', () => {
     const page = await open('?build=99999');
     await expect(notFound(page).textContent()).resolves.toContain('Build 99999 was not found');
     await nothingRanked(page);
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 
@@ -48,6 +50,7 @@ describe('which build the shortlist shows', () => {
     const page = await open('?build=abc');
     await expect(notFound(page).textContent()).resolves.toContain('“abc” is not a build number');
     await nothingRanked(page);
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 
@@ -59,6 +62,7 @@ describe('which build the shortlist shows', () => {
     await page.keyboard.press('ArrowDown');
     await page.locator('table tbody tr').first().waitFor();
     expect(await page.locator('table tbody tr').count()).toBeGreaterThanOrEqual(10);
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 
@@ -67,6 +71,7 @@ describe('which build the shortlist shows', () => {
     await expect(page.getByLabel('Build').inputValue()).resolves.toBe('2');
     await page.locator('table tbody tr').first().waitFor();
     await expect(notFound(page).count()).resolves.toBe(0);
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 });

@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import type { Browser, Page } from 'playwright-core';
 import { Op } from 'sequelize';
 import { AuditEntry, Build, Cam, Customer, Lead } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -73,6 +74,7 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     expect(main).toContain('only cams certified for emissions-tested road use are listed');
     expect(main).not.toContain('not certified for emissions-tested road use');
     expect(main.match(/certified for emissions-tested road use where its paperwork covers your vehicle/g)).toHaveLength(certifiedStock);
+    await expectNoSeriousA11yViolations(page);
 
     const lead = await Lead.findOne({ where: { email: EMAIL } });
     leadId = lead!.id;
@@ -108,6 +110,7 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     await page.locator('table tbody tr').first().waitFor();
     await page.locator('table tbody button').first().click();
     await page.getByText(/no budget was given/).first().waitFor();
+    await expectNoSeriousA11yViolations(page);
 
     // Editing: the counter picks "named a figure"; left blank it is asked for, then saved in cents.
     await page.goto(`${appUrl}/interviews/${buildId}/edit`);
@@ -115,6 +118,7 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     await page.getByLabel('Budget', { exact: true }).selectOption('figure');
     await page.getByRole('button', { name: 'Save and open the shortlist' }).click();
     await page.getByText('Problem: budget is required ($), or choose “Not sure yet”').waitFor();
+    await expectNoSeriousA11yViolations(page);
     await page.getByLabel('Budget for the whole job').fill('2800');
     await page.keyboard.press('Control+Enter');
     await page.waitForURL(/\/advisor\?build=\d+$/);

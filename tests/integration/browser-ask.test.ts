@@ -3,6 +3,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
@@ -65,11 +66,13 @@ describe('the questionnaire on a phone', () => {
     await expect(progress.textContent()).resolves.toBe('Question 1 of 10');
     await expect(heading.textContent()).resolves.toBe('Which engine is it?');
     await noHorizontalOverflow(page);
+    await expectNoSeriousA11yViolations(page);
     await touchTargetsAreBig(page);
     await page.screenshot({ path: path.join(SHOTS, 'ask-phone-first.png'), fullPage: true });
     // Going on without an answer says what is missing.
     await next.tap();
     await expect(page.locator('main').getByRole('alert').textContent()).resolves.toMatch(/Pick one of the answers/);
+    await expectNoSeriousA11yViolations(page);
     await page.getByRole('radio', { name: /4\.8 litre/ }).focus();
     await page.keyboard.press('ArrowDown');
     await expect(page.getByRole('radio', { name: /5\.3 litre/ }).isChecked()).resolves.toBe(true);
@@ -98,6 +101,8 @@ describe('the questionnaire on a phone', () => {
         await expect(page.getByRole('radio', { name: /A little lope/ }).isChecked()).resolves.toBe(true);
         await next.tap();
         await page.reload();
+        // The server renders question 1; the saved place comes back once the page is live.
+        await page.getByText('Question 5 of 10').waitFor();
         await expect(progress.textContent()).resolves.toBe('Question 5 of 10');
         await expect(page.getByRole('radio', { name: /^No$/ }).isChecked()).resolves.toBe(true);
       }
@@ -111,6 +116,7 @@ describe('the questionnaire on a phone', () => {
     await touchTargetsAreBig(page);
     await page.getByRole('checkbox').focus();
     await page.keyboard.press('Space');
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'ask-phone-contact.png'), fullPage: true });
     await Promise.all([page.waitForURL(/\/ask\/result\/[A-Za-z0-9_-]{43}$/), page.getByLabel('E-mail').press('Enter')]);
 
@@ -125,6 +131,7 @@ describe('the questionnaire on a phone', () => {
     expect(prices).toHaveLength(3);
     expect(text.match(/\$[\d,]+(\.\d\d)?/g)).toHaveLength(3);
     await noHorizontalOverflow(page);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'ask-phone-result.png'), fullPage: true });
     // Sent answers are no longer kept in the tab.
     await expect(page.evaluate(() => window.sessionStorage.getItem('lobewise.ask.v2'))).resolves.toBeNull();

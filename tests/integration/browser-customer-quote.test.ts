@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { Browser } from 'playwright-core';
 import request from 'supertest';
 import { signedInAgent } from '../support/auth';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { readRuntime } from '../support/runtime';
 
@@ -45,6 +46,7 @@ describe('the customer quote page on a phone', () => {
     expect(box!.height).toBeGreaterThanOrEqual(48); // a generous touch target
     const bodySize = await page.evaluate(() => parseFloat(getComputedStyle(document.querySelector('main > div')!).fontSize));
     expect(bodySize).toBeGreaterThanOrEqual(18);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'customer-quote-phone.png'), fullPage: true });
 
     await Promise.all([page.waitForURL(/\/pay\/cs_/), button.click()]);
@@ -56,6 +58,7 @@ describe('the customer quote page on a phone', () => {
     }
     await expect(page.getByRole('heading', { name: /Status: Deposit paid/ }).isVisible()).resolves.toBe(true);
     await expect(page.getByRole('button', { name: 'Accept and pay the deposit' }).count()).resolves.toBe(0);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'customer-quote-paid-phone.png'), fullPage: true });
     expect(consoleErrors).toEqual([]);
     await page.close();

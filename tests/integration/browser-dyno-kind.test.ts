@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { Op } from 'sequelize';
 import { AuditEntry, DynoRun } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -78,6 +79,7 @@ describe('chassis and engine dyno runs on the job page', () => {
 
     await page.getByRole('img', { name: /on the chassis dyno: the before pull \(solid grey\) and 0 after pull/ }).waitFor();
     await page.getByText('1 after pull on the engine dyno is left out: a chassis run is compared only with chassis runs.').waitFor();
+    await expectNoSeriousA11yViolations(page);
   }, 90_000);
 
   it('a chassis after pull is drawn against the chassis before pull', async () => {
@@ -86,5 +88,6 @@ describe('chassis and engine dyno runs on the job page', () => {
     await page.getByText('1 after pull on the engine dyno is left out').waitFor();
     // The form keeps the last choice of dyno for the next pull, like the air and the correction.
     await expect(form().getByLabel('Dyno', { exact: true }).inputValue()).resolves.toBe('chassis');
+    await expectNoSeriousA11yViolations(page);
   }, 90_000);
 });

@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { Op } from 'sequelize';
 import { AuditEntry, DynoRun } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { DEMO_EMAILS, DEMO_PASSWORD } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -98,6 +99,7 @@ describe('dyno runs through the job page', () => {
     await expect(form().getByText('barometric pressure is required for DIN 70020 (inHg)').count()).resolves.toBe(1);
     await form().getByLabel('Correction to standard air').selectOption('none');
     await form().getByText('barometric pressure is required', { exact: false }).waitFor({ state: 'detached' });
+    await expectNoSeriousA11yViolations(page);
     await typeInto(page, 'Air temperature', '');
   }, 90_000);
 
@@ -157,6 +159,7 @@ describe('dyno runs through the job page', () => {
       return n;
     });
     expect(painted).toBeGreaterThan(1000);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'job-dyno-desktop.png'), fullPage: true });
   }, 90_000);
 
@@ -177,6 +180,7 @@ describe('dyno runs through the job page', () => {
     expect(last).toContain('none × 1.0000');
     const stored = await DynoRun.findOne({ where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId }, peakHp: 401.5 } });
     expect(stored).toMatchObject({ correctionStandard: 'none', airTempC: null, baroKpa: null, humidityPct: null });
+    await expectNoSeriousA11yViolations(page);
   }, 90_000);
 
   it('loads a pull from a CSV file, names the line of a problem, and offers the template', async () => {
@@ -203,6 +207,7 @@ describe('dyno runs through the job page', () => {
     // The template, pasted back, is a valid pull.
     await typeInto(page, /^Pull points/, template.trim());
     await page.locator('#dyno-curveCsv-error').waitFor({ state: 'detached' });
+    await expectNoSeriousA11yViolations(page);
   }, 90_000);
 
   it('prints the job sheet without the app around it or the form', async () => {
@@ -214,5 +219,6 @@ describe('dyno runs through the job page', () => {
     await expect(page.getByRole('img', { name: /before pull/ }).isVisible()).resolves.toBe(true);
     await page.pdf({ path: path.join(SHOTS, 'job-sheet.pdf') });
     await page.emulateMedia({ media: 'screen' });
+    await expectNoSeriousA11yViolations(page);
   }, 90_000);
 });

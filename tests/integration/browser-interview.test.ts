@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { Op } from 'sequelize';
 import { Build, Customer } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -85,6 +86,7 @@ describe('counter interview in a real browser', () => {
     await page.waitForFunction(() => document.activeElement?.id === 'f-profile-use-budgetCents');
     await page.getByText('Problem: budget is required ($)').waitFor();
     await page.keyboard.type('3500');
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'interview-desktop.png'), fullPage: true });
     await page.keyboard.press('Control+Enter');
 
@@ -103,6 +105,7 @@ describe('counter interview in a real browser', () => {
     await rows.first().waitFor();
     expect(await rows.count()).toBeGreaterThanOrEqual(10);
     await expect(page.getByText('Emissions: not certified').first().isVisible()).resolves.toBe(true);
+    await expectNoSeriousA11yViolations(page);
     await page.context().close();
   });
 
@@ -111,6 +114,7 @@ describe('counter interview in a real browser', () => {
     await page.goto(`${appUrl}/interviews/new`);
     await page.getByRole('heading', { name: 'New interview' }).waitFor();
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'interview-phone.png'), fullPage: true });
     expect(overflow).toBeLessThanOrEqual(0);
     await page.context().close();

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { AuditEntry, Job } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { DEMO_EMAILS, DEMO_PASSWORD, signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -77,6 +78,7 @@ describe('the job board in the browser', () => {
     await progress().getByText('Booked', { exact: true }).waitFor();
     const row = await Job.findOne({ where: { quoteId: job.id } });
     expect(row).toMatchObject({ state: 'booked', bookedFor: shopDay(0), bay: 2 });
+    await expectNoSeriousA11yViolations(page);
   }, 60_000);
 
   it('moves it into the shop and onto the dyno, and will not mark it ready without a sign-off', async () => {
@@ -88,6 +90,7 @@ describe('the job board in the browser', () => {
     await progress().getByRole('button', { name: 'Move to: Ready to collect' }).click();
     await progress().getByRole('alert').filter({ hasText: 'has no sign-off' }).waitFor();
     expect((await Job.findOne({ where: { quoteId: job.id } }))!.state).toBe('on-dyno');
+    await expectNoSeriousA11yViolations(page);
   }, 60_000);
 
   it('takes the sign-off typed like a person, warns about a tight clearance, and prints it on the sheet', async () => {
@@ -119,6 +122,7 @@ describe('the job board in the browser', () => {
     await expect(sheet.isVisible()).resolves.toBe(true);
     await expect(signOff().isVisible()).resolves.toBe(false);
     await page.emulateMedia({ media: 'screen' });
+    await expectNoSeriousA11yViolations(page);
   }, 60_000);
 
   it('marks it ready and finds it on the board and in the week', async () => {
@@ -131,6 +135,7 @@ describe('the job board in the browser', () => {
     const text = await boardRow().textContent();
     expect(text).toContain('Ready to collect');
     expect(text).toContain('Aurelio Banks');
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'jobs-board-desktop.png'), fullPage: true });
 
     await page.getByRole('link', { name: 'Week', exact: true }).click();
@@ -139,6 +144,7 @@ describe('the job board in the browser', () => {
 
     await page.setViewportSize({ width: 390, height: 844 });
     await noSidewaysScroll(page);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'jobs-week-phone.png'), fullPage: true });
     await page.goto(`${appUrl}/jobs`);
     await boardRow().waitFor();
@@ -146,6 +152,7 @@ describe('the job board in the browser', () => {
     await page.goto(`${appUrl}/jobs/${job.id}`);
     await progress().waitFor();
     await noSidewaysScroll(page);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'job-sheet-phone.png'), fullPage: true });
   }, 60_000);
 });

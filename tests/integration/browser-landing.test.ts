@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { readRuntime } from '../support/runtime';
 
@@ -28,6 +29,7 @@ describe('landing page in a real browser', () => {
     // Nothing may overflow sideways on a phone.
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'landing-phone.png'), fullPage: true });
     expect(consoleErrors).toEqual([]);
     await page.close();
@@ -38,6 +40,7 @@ describe('landing page in a real browser', () => {
     await page.goto(appUrl);
     await page.keyboard.press('Tab');
     await expect(page.evaluate(() => document.activeElement?.textContent)).resolves.toBe('Skip to content');
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'landing-desktop.png') });
     await page.close();
   });

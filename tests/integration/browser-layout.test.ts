@@ -1,4 +1,5 @@
 import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { seriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn, type TestRole } from '../support/auth';
 import { readRuntime } from '../support/runtime';
@@ -122,14 +123,17 @@ describe('layout at 1280 px and 390 px', () => {
     expect(cells[0].text).toMatch(/^0\.\d{3}" \/ 0\.\d{3}"$|^0\.\d{3} \/ 0\.\d{3}/);
   }, 60_000);
 
-  it.each(Object.keys(PAGES) as (keyof typeof PAGES)[])('at 390 px no %s page scrolls sideways', async (role) => {
+  it.each(Object.keys(PAGES) as (keyof typeof PAGES)[])('at 390 px no %s page scrolls sideways or has a serious accessibility fault (axe)', async (role) => {
     const page = await pageFor(role, 390);
     const problems: string[] = [];
+    const a11y: string[] = [];
     for (const path of PAGES[role]) {
       await open(page, path);
       const { excess, widest } = await sidewaysOverflow(page);
       if (excess > 0) problems.push(`${path}: ${excess} px too wide (widest: <${widest?.tag}> “${widest?.text}” to ${widest?.right} px)`);
+      a11y.push(...(await seriousA11yViolations(page)));
     }
     expect(problems).toEqual([]);
-  }, 180_000);
+    expect(a11y).toEqual([]);
+  }, 240_000);
 });

@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import type { Browser, Page } from 'playwright-core';
 import request from 'supertest';
 import { AuditEntry, Build, Customer, Lead } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -64,10 +65,12 @@ describe('following a lead up in the browser', () => {
     const log = card.getByRole('region', { name: `Notes on lead ${leadId}` });
     await log.getByText('Rang at 10, left a message; will try after lunch.').waitFor();
     await expect(log.textContent()).resolves.toMatch(/UTC/);
+    await expectNoSeriousA11yViolations(page);
 
     await card.getByRole('link', { name: 'Start an interview' }).click();
     await page.waitForURL(/\/interviews\/new\?lead=\d+$/);
     await page.getByRole('heading', { name: 'New interview' }).waitFor();
+    await expectNoSeriousA11yViolations(page);
     await page.keyboard.press('Control+Enter');
     await page.waitForURL(/\/advisor\?build=\d+$/);
 
@@ -77,5 +80,6 @@ describe('following a lead up in the browser', () => {
     expect(lead!.customerId).toBe(build!.customerId);
     await page.goto(`${appUrl}/leads`);
     await expect(card.textContent()).resolves.toContain('Contacted');
+    await expectNoSeriousA11yViolations(page);
   }, 90_000);
 });

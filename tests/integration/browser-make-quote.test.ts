@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
@@ -47,6 +48,7 @@ describe('Make a quote from the shortlist', () => {
     const subtotal = page.locator('dt', { hasText: /^Subtotal$/ }).locator('xpath=following-sibling::dd[1]');
     await expect(subtotal.textContent()).resolves.toBe(jobPrice);
     await expect(page.getByText('Cam swap, truck (front of engine, lifters inspected)').first().isVisible()).resolves.toBe(true);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'quote-draft-desktop.png'), fullPage: true });
     await context.close();
   });

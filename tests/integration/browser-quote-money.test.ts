@@ -1,5 +1,6 @@
 import type { Browser, BrowserContext } from 'playwright-core';
 import { signedInAgent, signIn } from '../support/auth';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { waitForMailsTo } from '../support/mail';
 import { makeSentQuote } from '../support/quote-fixtures';
@@ -43,6 +44,7 @@ describe('a quote from payment to refund in the browser', () => {
     await expect(customer.getByRole('heading', { level: 1 }).isVisible()).resolves.toBe(true);
     await expect(customer.getByText('Local codes and licensed practice come first').isVisible()).resolves.toBe(true);
     await customer.emulateMedia({ media: 'screen' });
+    await expectNoSeriousA11yViolations(customer);
 
     await Promise.all([customer.waitForURL(/\/pay\/cs_/), customer.getByRole('button', { name: 'Accept and pay the deposit' }).click()]);
     await Promise.all([customer.waitForURL((url) => url.href.startsWith(`${link}?paid=1`)), customer.getByRole('button', { name: /Pay/ }).first().click()]);
@@ -60,9 +62,11 @@ describe('a quote from payment to refund in the browser', () => {
     await dialog.getByRole('button', { name: 'Confirm refund' }).click();
     await page.getByText(/Refund of \$[\d,.]+ sent to the payment service/).waitFor();
     await expect(page.getByRole('heading', { name: 'State: Cancelled' }).isVisible()).resolves.toBe(true);
+    await expectNoSeriousA11yViolations(page);
 
     await customer.goto(link);
     await expect(customer.getByRole('heading', { name: /Status: Deposit refunded — job cancelled/ }).isVisible()).resolves.toBe(true);
+    await expectNoSeriousA11yViolations(customer);
     await page.close();
     await customer.close();
   });

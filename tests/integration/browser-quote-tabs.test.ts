@@ -1,4 +1,5 @@
 import type { Browser, BrowserContext } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
@@ -34,6 +35,7 @@ describe('quote filter tabs', () => {
     await expect(tabs.filter({ hasText: 'Deposit paid' }).getAttribute('aria-current')).resolves.toBe('page');
     const states = await page.locator('table tbody tr td:nth-child(2)').allTextContents();
     expect(states.length).toBeGreaterThan(0);
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 });

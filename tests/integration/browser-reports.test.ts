@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser, BrowserContext } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
@@ -35,6 +36,7 @@ describe('the Numbers page', () => {
     await expect(page.locator('canvas').count()).resolves.toBe(1);
     await expect(page.getByRole('img', { name: /Bar chart of quotes by state\. Draft: \d+, Sent: \d+/ }).count()).resolves.toBe(1);
     await expect(page.getByRole('link', { name: 'Numbers' }).count()).resolves.toBeGreaterThan(0);
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'reports-desktop.png'), fullPage: true });
     await page.close();
   });
@@ -43,6 +45,7 @@ describe('the Numbers page', () => {
     const page = await context.newPage();
     await page.goto(`${appUrl}/reports?from=2001-01-01&to=2001-01-31`);
     await page.getByText('No quotes in this range yet').waitFor();
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 
@@ -51,6 +54,7 @@ describe('the Numbers page', () => {
     await page.goto(`${appUrl}/reports?from=2026-12-05&to=2026-12-01`);
     await page.getByText('That date range cannot be used.').waitFor();
     await expect(page.getByRole('alert').filter({ hasText: 'That date range' }).textContent()).resolves.toContain('from (2026-12-05) must be on or before to');
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'reports-bad-range.png'), fullPage: true });
     await page.close();
   });

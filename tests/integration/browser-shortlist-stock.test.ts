@@ -1,5 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { Cam } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -62,6 +63,7 @@ describe('the shortlist: stock on hand and the certified-only filter', () => {
     // Unfiltered, the table holds the uncertified cams too.
     const uncertified = cams.filter((c) => !c.emissionsCertified).map((c) => `${c.sku} ${c.name}`);
     expect(shown.filter((r) => uncertified.includes(r.cam)).length).toBe(uncertified.length);
+    await expectNoSeriousA11yViolations(page);
   }, 60_000);
 
   it('ticking “Only emissions-certified cams” leaves out every uncertified cam, and unticking brings them back', async () => {
@@ -71,6 +73,7 @@ describe('the shortlist: stock on hand and the certified-only filter', () => {
     await page.getByRole('status').filter({ hasText: `${certified.length} of ${all} cams shown; ${all - certified.length} not certified left out.` }).waitFor();
     const shown = await table();
     expect(shown.map((r) => r.cam).sort()).toEqual(certified.map((c) => `${c.sku} ${c.name}`).sort());
+    await expectNoSeriousA11yViolations(page);
     await page.getByLabel('Only emissions-certified cams').uncheck();
     await page.getByRole('status').filter({ hasText: `All ${all} cams shown.` }).waitFor();
     expect((await table()).length).toBe(all);

@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
@@ -57,6 +58,7 @@ describe('cam shortlist page in a real browser', () => {
     expect(cells[0]).toBe(1500);
     expect(Math.abs(cells[3] - cells[5] - cells[6])).toBeLessThanOrEqual(0.15);
     await page.getByRole('table', { name: /Head flow against valve lift/ }).waitFor();
+    await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'shortlist-desktop.png'), fullPage: true });
     await context.close();
   });
@@ -66,6 +68,7 @@ describe('cam shortlist page in a real browser', () => {
     await page.goto(`${appUrl}/advisor`);
     expect(new URL(page.url()).pathname).toBe('/sign-in');
     expect(new URL(page.url()).searchParams.get('next')).toBe('/advisor');
+    await expectNoSeriousA11yViolations(page);
     await page.close();
   });
 });

@@ -3,6 +3,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import { AuditEntry, Lead, LeadNote, ShopSettings } from '@/lib/db/models';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
@@ -94,6 +95,7 @@ describe('stale leads are flagged', () => {
     await counter.getByRole('status').getByText(new RegExp(`^${expected} new leads? ha(s|ve) waited 2 days or more without contact$`)).waitFor();
     await expect(card(counter, `Oldfield ${tag}`).textContent()).resolves.toContain('Waiting 5 days without contact');
     await expect(card(counter, `Youngman ${tag}`).textContent()).resolves.not.toContain('Waiting');
+    await expectNoSeriousA11yViolations(counter);
   }, 60_000);
 
   it('a note of the call takes the flag away', async () => {
@@ -105,6 +107,7 @@ describe('stale leads are flagged', () => {
     await counter.reload();
     await old.getByText('Called, booked in for Thursday').waitFor();
     await expect(old.textContent()).resolves.not.toContain('Waiting');
+    await expectNoSeriousA11yViolations(counter);
   }, 60_000);
 
   it('the manager sets one day, and the lead from yesterday is flagged', async () => {
@@ -116,6 +119,7 @@ describe('stale leads are flagged', () => {
     await manager.getByRole('button', { name: 'Save settings' }).click();
     await manager.getByText('Settings saved').waitFor();
     expect((await ShopSettings.findOne({ order: [['id', 'ASC']] }))!.leadStaleDays).toBe(1);
+    await expectNoSeriousA11yViolations(manager);
 
     await counter.reload();
     await expect(card(counter, `Youngman ${tag}`).textContent()).resolves.toContain('Waiting 1 day without contact');
@@ -128,6 +132,7 @@ describe('stale leads are flagged', () => {
     await manager.keyboard.type('0');
     await manager.getByRole('button', { name: 'Save settings' }).click();
     await manager.getByText('days before a lead is flagged must be at least 1 days').waitFor();
+    await expectNoSeriousA11yViolations(manager);
     expect((await ShopSettings.findOne({ order: [['id', 'ASC']] }))!.leadStaleDays).toBe(1);
   }, 60_000);
 });

@@ -138,7 +138,8 @@ export function PowerChart({ baseline, candidates, markers, band, ranges = [], d
         {hasBands ? <span className="text-xs text-ink-muted">Shaded: the prediction’s band</span> : null}
       </fieldset>
       <div className="h-96 w-full" role="img" aria-label={description ?? `Predicted ${metric === 'both' ? 'torque and power' : metric} from ${minRpm} to ${maxRpm} rpm for the current cam and ${candidates.length} candidates, each with its band`}>
-        <Line data={data} options={options} />
+        {/* The box above names the chart; the canvas itself (role="img" from react-chartjs-2) is left out. */}
+        <Line data={data} options={options} aria-hidden />
       </div>
     </div>
   );

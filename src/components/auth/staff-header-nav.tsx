@@ -16,8 +16,9 @@ async function headerUser(): Promise<SessionUser | null> {
 export async function StaffHeaderNav() {
   const user = await headerUser();
   if (!user) {
+    // Signed out means a customer's page (or the start page): no prefetch of the staff sign-in on their data plan.
     return (
-      <Link href="/sign-in" className="rounded px-3 py-1.5 ring-1 ring-steel-500 hover:bg-steel-900">
+      <Link href="/sign-in" prefetch={false} className="rounded px-3 py-1.5 ring-1 ring-steel-500 hover:bg-steel-900">
         Staff sign-in
       </Link>
     );

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { getJson, sendJson } from '@/components/catalogue/api';
 import { formatCents } from '@/components/catalogue/format';
-import { Banner, buttonClass, PageHeader, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { Banner, buttonClass, PageHeader, TableScroll, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import type { StaffRole } from '@/lib/auth/guard';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
@@ -95,7 +95,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
       <LifecyclePanel key={quote.version} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
       {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft; revise a sent quote to change them.</p> : null}
 
-      <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
+      <TableScroll label="Quote lines">
         <table className={tableClass}>
           <caption className="sr-only">Quote lines</caption>
           <thead>
@@ -151,7 +151,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                 ))}
           </tbody>
         </table>
-      </div>
+      </TableScroll>
       {editing ? (
         <div className="flex flex-wrap gap-2">
           <button type="button" className={buttonClass.quiet} onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', discountCents: 0, camId: null, partId: null, laborOperationId: null }])}>Add a line</button>

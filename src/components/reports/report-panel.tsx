@@ -3,7 +3,7 @@
 import useSWR from 'swr';
 import { ApiError, getJson } from '@/components/catalogue/api';
 import { formatCents } from '@/components/catalogue/format';
-import { Banner, buttonClass, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { Banner, buttonClass, TableScroll, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import { quoteStatusWord } from '@/components/quotes/status';
 import type { ReportSummary } from '@/lib/db/queries/reports';
 import type { Margin } from '@/lib/reports/arithmetic';
@@ -81,7 +81,7 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
             </Banner>
           ) : (
             <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-              <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
+              <TableScroll label="Quotes, deposits and margin">
                 <table className={tableClass}>
                   <caption className="sr-only">Quotes and deposits from {data.range.from} to {data.range.to}</caption>
                   <thead>
@@ -110,10 +110,10 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
                     <MarginRow label="Cams and parts" m={data.margin.total} />
                   </tbody>
                 </table>
-              </div>
+              </TableScroll>
               <div className="flex flex-col gap-6">
                 <StatusChart bars={data.byStatus} />
-                <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
+                <TableScroll label="Most-quoted cams">
                   <table className={tableClass}>
                     <caption className="px-2 py-1.5 text-left text-sm font-semibold">Most-quoted cams</caption>
                     <thead>
@@ -134,7 +134,7 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
                       {data.topCams.length === 0 ? <tr><td colSpan={3} className={`${tdClass} text-ink-muted`}>No quote named a cam in this range.</td></tr> : null}
                     </tbody>
                   </table>
-                </div>
+                </TableScroll>
               </div>
             </div>
           )}

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
-import { QuestionnaireLoader } from '@/components/leads/questionnaire-loader';
+import { Questionnaire } from '@/components/leads/questionnaire';
 
 export const metadata: Metadata = { title: 'Which cam suits your engine?' };
 
 export default function AskPage() {
-  return <QuestionnaireLoader />;
+  return <Questionnaire />;
 }

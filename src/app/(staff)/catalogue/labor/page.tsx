@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { formatCents } from '@/components/catalogue/format';
-import { Banner, ButtonLink, PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { Banner, ButtonLink, PageHeader, StateTag, TableScroll, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listLabor } from '@/lib/db/queries/labor';
 import { getShopSettingsRecord } from '@/lib/db/queries/settings';
@@ -26,7 +26,7 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
       {raw.saved ? <Banner tone="ok" title="Labour operation saved" /> : null}
       {raw.deleted ? <Banner tone="ok" title="Labour operation deleted" /> : null}
       {raw.deactivated ? <Banner tone="info" title="Labour operation switched off">Quotes refer to it, so it was kept and made inactive.</Banner> : null}
-      <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
+      <TableScroll label="Labour operations">
         <table className={tableClass}>
           <thead>
             <tr>
@@ -58,7 +58,7 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
           </tbody>
         </table>
         {items.length === 0 ? <p className="p-4 text-sm text-ink-soft">No labour operations yet.</p> : null}
-      </div>
+      </TableScroll>
       <p className="text-xs text-ink-muted tabular-nums">{total} operation(s)</p>
     </div>
   );

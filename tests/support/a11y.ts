@@ -1,0 +1,26 @@
+import { AxeBuilder } from '@axe-core/playwright';
+import type { Page } from 'playwright-core';
+
+// axe-core's own rules (WCAG 2.0–2.2 A/AA and its best practices), run in the page as it stands. Only
+// "serious" and "critical" findings fail a test (issue 13 item 11); "moderate" and "minor" ones are
+// advice. Call it once the page shows its main content, so axe sees what a person sees.
+
+/** One line per serious or critical violation: rule id, impact, and the selectors of the offending nodes. */
+export async function seriousA11yViolations(page: Page, options: { exclude?: string[] } = {}): Promise<string[]> {
+  // Legacy mode runs axe inside the page itself: the default opens a second page in the page's context to
+  // combine frame results, which fails for pages made with browser.newPage() (and our pages have no frames).
+  let builder = new AxeBuilder({ page }).setLegacyMode(true);
+  for (const selector of options.exclude ?? []) builder = builder.exclude(selector);
+  const results = await builder.analyze();
+  return results.violations
+    .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
+    .map((violation) => {
+      const nodes = violation.nodes.map((node) => node.target.map(String).join(' >>> '));
+      return `${violation.id} (${violation.impact}) on ${new URL(page.url()).pathname}: ${violation.help} — ${nodes.join(', ')}`;
+    });
+}
+
+/** Fails the test, listing each serious or critical violation, when axe finds any on the page now. */
+export async function expectNoSeriousA11yViolations(page: Page, options: { exclude?: string[] } = {}): Promise<void> {
+  expect(await seriousA11yViolations(page, options)).toEqual([]);
+}
