@@ -173,7 +173,7 @@ function apiView(m) {
 }
 
 function listView(m) {
-  return { id: m.id, from: m.from, to: m.to, cc: m.cc, subject: m.subject, html: m.html, text: m.text, createdAt: m.createdAt };
+  return { id: m.id, from: m.from, to: m.to, cc: m.cc, subject: m.subject, html: m.html, text: m.text, attachments: m.attachments ?? [], createdAt: m.createdAt };
 }
 
 function newestFirst(to) {

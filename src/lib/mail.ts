@@ -3,7 +3,9 @@ import { requireEnv } from './env';
 
 // The one place the app sends e-mail. The SDK reads RESEND_BASE_URL itself, so pointing it at the
 // local fake (docker-local/mail-fake) or the real service is a change of environment only.
-export type OutgoingMail = { to: string | string[]; subject: string; html: string; text: string; replyTo?: string; fromName?: string };
+/** A file sent with a mail (a receipt or invoice PDF); the SDK sends its bytes as base64. */
+export type MailAttachment = { filename: string; content: Buffer; contentType?: string };
+export type OutgoingMail = { to: string | string[]; subject: string; html: string; text: string; replyTo?: string; fromName?: string; attachments?: MailAttachment[] };
 
 let client: Resend | undefined;
 
@@ -43,6 +45,7 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: string }> {
     ...(reply ? { replyTo: reply } : {}),
     html,
     text,
+    ...(mail.attachments?.length ? { attachments: mail.attachments.map((a) => ({ filename: headerValue(a.filename), content: a.content, contentType: a.contentType ?? 'application/pdf' })) } : {}),
   });
   if (error || !data) throw new Error(`Mail was not accepted: ${error?.message ?? 'no answer from the mail service'}`);
   return { id: data.id };

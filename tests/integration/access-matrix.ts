@@ -110,6 +110,15 @@ export const accessMatrix: AccessRow[] = [
   { method: 'POST', path: '/api/quotes/[id]/transition', url: '/api/quotes/2/transition', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
   { method: 'POST', path: '/api/quotes/[id]/revise', url: '/api/quotes/2/revise', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
   { method: 'GET', path: '/api/quotes/[id]/pdf', url: '/api/quotes/1/pdf', expect: { anonymous: 401, manager: 200, counter: 200, tech: 200 } },
+  // The balance and the payment documents (issue 12, items 6 and 7): an empty body fails validation; a
+  // receipt or invoice of a quote or payment that does not exist is a 404 read for any staff member.
+  { method: 'POST', path: '/api/quotes/[id]/payments', url: '/api/quotes/2/payments', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+  { method: 'POST', path: '/api/quotes/[id]/balance-request', url: '/api/quotes/2/balance-request', expect: { anonymous: 401, manager: 422, counter: 422, tech: 403 } },
+  { method: 'GET', path: '/api/quotes/[id]/payments/[paymentId]/receipt', url: '/api/quotes/1/payments/999999/receipt', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
+  { method: 'GET', path: '/api/quotes/[id]/invoice', url: '/api/quotes/999999/invoice', expect: { anonymous: 401, manager: 404, counter: 404, tech: 404 } },
+  { method: 'POST', path: '/api/q/[token]/balance-checkout', url: '/api/q/not-a-live-link-0123456789abcdef/balance-checkout', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
+  { method: 'GET', path: '/api/q/[token]/receipts/[paymentId]', url: '/api/q/not-a-live-link-0123456789abcdef/receipts/1', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
+  { method: 'GET', path: '/api/q/[token]/invoice', url: '/api/q/not-a-live-link-0123456789abcdef/invoice', expect: { anonymous: 404, manager: 404, counter: 404, tech: 404 } },
   // The manager's numbers: reads for managers only.
   { method: 'GET', path: '/api/reports/summary', expect: managerRead },
   { method: 'GET', path: '/api/reports/quotes.csv', expect: managerRead },

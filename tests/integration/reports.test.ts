@@ -22,6 +22,7 @@ type Summary = {
   conversion: { sentCount: number; depositPaidCount: number; rateBp: number | null };
   averageQuoteCents: number | null;
   deposits: { count: number; takenCents: number; refundedCents: number; netCents: number };
+  balances: { count: number; takenCents: number; refundedCents: number; netCents: number };
   margin: { cams: Margin; parts: Margin; total: Margin };
   topCams: { camId: number; sku: string; name: string; quotes: number; deposits: number }[];
 };
@@ -43,6 +44,8 @@ const inRange = (d: Date | string | null) => {
   const day = utcDay(new Date(d).getTime());
   return day >= FROM && day <= TODAY;
 };
+// Converted: the deposit was paid, whether the job is still open or was closed since.
+const converted = (status: string) => status === 'deposit-paid' || status === 'closed';
 const halfUp = (num: number, den: number) => Math.floor((2 * num + den) / (2 * den)); // for num ≥ 0, den > 0
 
 /** The report, worked out independently from the raw rows of the last 30 days. */
@@ -56,14 +59,18 @@ async function expectedFromRows() {
   });
   const valueCents = quotes.reduce((s, q) => s + Number(q.total_cents), 0);
   const sent = quotes.filter((q) => q.sent_at !== null);
-  const sentPaid = sent.filter((q) => q.status === 'deposit-paid');
+  const sentPaid = sent.filter((q) => converted(q.status));
 
-  const payments = (await rows<{ amount_cents: number; refunded_cents: number; status: string; paid_at: Date | null }>('SELECT amount_cents, refunded_cents, status, paid_at FROM payments'))
+  const allPayments = (await rows<{ amount_cents: number; refunded_cents: number; status: string; paid_at: Date | null; purpose: string }>('SELECT amount_cents, refunded_cents, status, paid_at, purpose FROM payments'))
     .filter((p) => ['paid', 'partially-refunded', 'refunded'].includes(p.status) && inRange(p.paid_at));
-  const taken = payments.reduce((s, p) => s + Number(p.amount_cents), 0);
-  const refunded = payments.reduce((s, p) => s + Number(p.refunded_cents), 0);
+  const money = (purpose: string) => {
+    const these = allPayments.filter((p) => p.purpose === purpose);
+    const takenCents = these.reduce((s, p) => s + Number(p.amount_cents), 0);
+    const refundedCents = these.reduce((s, p) => s + Number(p.refunded_cents), 0);
+    return { count: these.length, takenCents, refundedCents, netCents: takenCents - refundedCents };
+  };
 
-  const paidIds = new Set(quotes.filter((q) => q.status === 'deposit-paid').map((q) => q.id));
+  const paidIds = new Set(quotes.filter((q) => converted(q.status)).map((q) => q.id));
   const lines = await rows<{ quote_id: number; kind: string; cam_id: number | null; part_id: number | null; quantity: string; total_cents: number }>(
     'SELECT quote_id, kind, cam_id, part_id, quantity, total_cents FROM quote_lines',
   );
@@ -90,7 +97,7 @@ async function expectedFromRows() {
     if (q.cam_id === null) continue;
     const e = perCam.get(q.cam_id) ?? { quotes: 0, deposits: 0 };
     e.quotes += 1;
-    if (q.status === 'deposit-paid') e.deposits += 1;
+    if (converted(q.status)) e.deposits += 1;
     perCam.set(q.cam_id, e);
   }
   const topCams = [...perCam.entries()]
@@ -104,7 +111,8 @@ async function expectedFromRows() {
     byStatus,
     conversion: { sentCount: sent.length, depositPaidCount: sentPaid.length, rateBp: sent.length ? halfUp(sentPaid.length * 10_000, sent.length) : null },
     averageQuoteCents: quotes.length ? halfUp(valueCents, quotes.length) : null,
-    deposits: { count: payments.length, takenCents: taken, refundedCents: refunded, netCents: taken - refunded },
+    deposits: money('deposit'),
+    balances: money('balance'),
     margin: { cams: margin('cam'), parts: margin('part'), total: margin(null) },
     topCams,
   };
@@ -193,6 +201,27 @@ describe('a quote made in the test moves the numbers', () => {
     expect(after.margin.cams.revenueCents).toBeGreaterThan(before.margin.cams.revenueCents);
     expect(after.topCams.find((c) => c.camId === 13)!.deposits).toBe((before.topCams.find((c) => c.camId === 13)?.deposits ?? 0) + 1);
     expect(after).toEqual(await expectedFromRows());
+  });
+
+  it('still counts it as converted once the job is closed, and its balance payment as a balance, not a deposit', async () => {
+    const before = await summary();
+    const [q] = await rows<{ total_cents: number; deposit_cents: number }>('SELECT total_cents, deposit_cents FROM quotes WHERE id = :quoteId', { quoteId });
+    const balance = Number(q.total_cents) - Number(q.deposit_cents);
+    await sequelize.query("UPDATE quotes SET status = 'closed', closed_at = NOW() WHERE id = :quoteId", { replacements: { quoteId } });
+    await sequelize.query(
+      "INSERT INTO payments (quote_id, provider, amount_cents, refunded_cents, currency, status, paid_at, purpose, method, created_at, updated_at) VALUES (:quoteId, 'counter', :amount, 0, 'usd', 'paid', NOW(), 'balance', 'cash', NOW(), NOW())",
+      { replacements: { quoteId, amount: balance } },
+    );
+    const after = await summary();
+    // The conversion, the margin and the cam's conversions are those of the deposit-paid quote it was.
+    expect(after.conversion).toEqual(before.conversion);
+    expect(after.margin).toEqual(before.margin);
+    expect(after.topCams).toEqual(before.topCams);
+    expect(after.deposits).toEqual(before.deposits);
+    expect(after.balances.count).toBe(before.balances.count + 1);
+    expect(after.balances.takenCents).toBe(before.balances.takenCents + balance);
+    expect(after).toEqual(await expectedFromRows());
+    await sequelize.query("DELETE FROM payments WHERE quote_id = :quoteId AND purpose = 'balance'", { replacements: { quoteId } });
   });
 });
 

@@ -26,7 +26,8 @@ export function LifecyclePanel({ quote, url, run, busy, canWrite }: { quote: Quo
   const [confirming, setConfirming] = useState<QuoteStatus | null>(null);
   const [validUntil, setValidUntil] = useState(quote.validUntil ?? '');
   const [reviseError, setReviseError] = useState<string | null>(null);
-  const moves = canWrite ? staffMoves(quote.status) : [];
+  // Closing by hand is for a job with nothing left to pay; otherwise the balance panel takes the money.
+  const moves = canWrite ? staffMoves(quote.status).filter((to) => to !== 'closed' || quote.balanceDueCents === 0) : [];
   const datable = canWrite && ['draft', 'sent', 'accepted'].includes(quote.status);
 
   async function revise() {

@@ -9,12 +9,14 @@ import { Banner, buttonClass, PageHeader, TableScroll, tableClass, tdClass, thCl
 import type { StaffRole } from '@/lib/auth/guard';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
+import { BalancePanel } from './balance-panel';
 import { LifecyclePanel } from './lifecycle-panel';
 import { dollarsToCents } from './money-input';
 import { QuoteBasis } from './quote-basis';
 import type { QuoteRun } from './quote-run';
 import { RefundForm } from './refund-form';
-import { PaymentStatusTag, QuoteStatusTag } from './status';
+import { PaymentList } from './payment-list';
+import { QuoteStatusTag } from './status';
 
 // discountCents rides along unchanged, so saving other lines keeps a discount already given.
 type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null };
@@ -70,7 +72,8 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
   }
 
   const set = (i: number, change: Partial<EditLine>) => setEditing((rows) => rows!.map((r, j) => (j === i ? { ...r, ...change } : r)));
-  const paid = quote.payments.find((p) => p.status === 'paid' || p.status === 'partially-refunded');
+  // Refunds here are of the deposit; a balance taken at the counter is given back at the counter.
+  const paid = quote.payments.find((p) => p.purpose === 'deposit' && !p.duplicateOfPaymentId && (p.status === 'paid' || p.status === 'partially-refunded'));
 
   return (
     <div className="flex flex-col gap-4">
@@ -93,6 +96,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
       />
       {notice ? <Banner tone={notice.tone} title={notice.title}>{notice.detail}</Banner> : null}
       <LifecyclePanel key={quote.version} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
+      {quote.status === 'deposit-paid' || quote.status === 'closed' ? <BalancePanel key={`balance-${quote.version}`} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} /> : null}
       {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft; revise a sent quote to change them.</p> : null}
 
       <TableScroll label="Quote lines">
@@ -177,21 +181,12 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           </dl>
         </section>
         <section aria-labelledby="payment" className="rounded border border-steel-300 bg-paper-raised p-3">
-          <h2 id="payment" className="text-sm font-semibold">Deposit payment</h2>
+          <h2 id="payment" className="text-sm font-semibold">Payments</h2>
           <p className="mt-1 text-sm">
             Paid {formatCents(quote.paidCents)} · refunded {formatCents(quote.refundedCents)} · sent {quote.sentAt ? quote.sentAt.slice(0, 16).replace('T', ' ') : 'not yet'}
           </p>
-          <ul className="mt-2 flex flex-col gap-1 text-sm">
-            {quote.payments.map((p) => (
-              <li key={p.id} className="flex flex-wrap items-center gap-2">
-                <PaymentStatusTag status={p.status} />
-                <span className="spec">{formatCents(p.amountCents)}</span>
-                {p.refundedCents ? <span className="spec">(refunded {formatCents(p.refundedCents)})</span> : null}
-                <span className="spec text-xs text-ink-muted">{p.providerSessionId}</span>
-              </li>
-            ))}
-            {quote.payments.length === 0 ? <li><PaymentStatusTag status={null} /></li> : null}
-          </ul>
+          <PaymentList payments={quote.payments} receiptHref={(id) => `${url}/payments/${id}/receipt`} />
+          {quote.status === 'closed' && quote.balanceDueCents === 0 ? <p className="mt-2 text-sm"><a className="underline" href={`${url}/invoice`}>Final invoice (PDF)</a></p> : null}
           {role === 'manager' && paid ? <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} /> : null}
         </section>
       </div>

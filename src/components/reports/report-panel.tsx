@@ -99,12 +99,13 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
                       <Row key={s.status} label={quoteStatusWord(s.status)} figure={quotes(s.count)} value={formatCents(s.valueCents)} note="state now" />
                     ))}
                     <Row label="Average quote" figure="" value={formatCents(data.averageQuoteCents)} note="total ÷ quotes" />
-                    <Row label="Sent → deposit paid" figure={pct(data.conversion.rateBp)} value={`${data.conversion.depositPaidCount} of ${quotes(data.conversion.sentCount)}`} note="of the quotes ever sent" />
+                    <Row label="Sent → deposit paid" figure={pct(data.conversion.rateBp)} value={`${data.conversion.depositPaidCount} of ${quotes(data.conversion.sentCount)}`} note="of the quotes ever sent; a job closed later still counts" />
                     <Section title="Deposits paid in the range" />
                     <Row label="Deposits taken" figure={count(data.deposits.count, data.deposits.count === 1 ? 'payment' : 'payments')} value={formatCents(data.deposits.takenCents)} />
                     <Row label="Refunded" figure="" value={formatCents(data.deposits.refundedCents)} note="of those deposits, so far" />
                     <Row label="Net deposits" figure="" value={formatCents(data.deposits.netCents)} note="taken − refunded" />
-                    <Section title="Margin on deposit-paid quotes" />
+                    <Row label="Balances taken" figure={count(data.balances.count, data.balances.count === 1 ? 'payment' : 'payments')} value={formatCents(data.balances.takenCents)} note="online and at the counter" />
+                    <Section title="Margin on deposit-paid and closed quotes" />
                     <MarginRow label="Cams" m={data.margin.cams} />
                     <MarginRow label="Parts" m={data.margin.parts} />
                     <MarginRow label="Cams and parts" m={data.margin.total} />

@@ -32,3 +32,8 @@ export function sessionMismatches(session: CompletedSession, asked: AskedFor): s
   if ((session.currency ?? '').toLowerCase() !== asked.currency.toLowerCase()) problems.push(`the session is in ${session.currency ?? 'no currency'}, not ${asked.currency}`);
   return problems;
 }
+
+/** A YYYY-MM-DD day plus n whole days (UTC). */
+export function addDaysUtc(day: string, n: number): string {
+  return new Date(Date.parse(`${day}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
+}

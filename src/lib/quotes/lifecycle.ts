@@ -19,7 +19,10 @@ const EDGES: readonly Edge[] = [
   { from: 'sent', to: 'sent', via: 'send', why: 'sent again with a new link' },
   { from: 'sent', to: 'accepted', via: 'staff', why: 'the customer accepted in person or by phone' },
   ...OPEN.map((from): Edge => ({ from, to: 'deposit-paid', via: 'payment', why: 'the deposit arrived' })),
-  { from: 'deposit-paid', to: 'closed', via: 'staff', why: 'the job is done and the balance paid' },
+  // Closing is the balance being paid in full (online or at the counter). Staff may close by hand only a
+  // job with nothing left to pay; the transition route checks the balance (quote-lifecycle.ts).
+  { from: 'deposit-paid', to: 'closed', via: 'payment', why: 'the balance was paid in full' },
+  { from: 'deposit-paid', to: 'closed', via: 'staff', why: 'the job is done and nothing is left to pay' },
   ...OPEN.map((from): Edge => ({ from, to: 'declined', via: 'staff', why: 'the customer said no' })),
   ...OPEN.map((from): Edge => ({ from, to: 'expired', via: 'staff', why: 'past its valid-until day' })),
   ...(['draft', ...OPEN] as QuoteStatus[]).map((from): Edge => ({ from, to: 'cancelled', via: 'staff', why: 'withdrawn by the shop' })),

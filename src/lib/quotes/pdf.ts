@@ -24,8 +24,8 @@ export type QuoteDocument = QuoteFigures & {
 };
 
 const FONT_DIR = path.join(process.cwd(), 'src', 'app', 'fonts');
-const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
-const longDate = (iso: string) => new Date(`${iso.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+export const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
+export const longDate = (iso: string) => new Date(`${iso.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
 const percent = (bp: number) => `${(bp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} %`;
 
 let fonts: { regular: Buffer; bold: Buffer } | undefined;
@@ -34,10 +34,11 @@ function loadFonts() {
   return fonts;
 }
 
-export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {}): Promise<Buffer> {
+/** A letter-size document in the app's fonts with the shop's name and contacts at the top; `done` is its bytes. */
+export function openPdf(title: string, shop: { name: string; address: string; phone: string; email: string }, options: { compress?: boolean } = {}) {
   const { regular, bold } = loadFonts();
   // `font` replaces pdfkit's default Helvetica, whose metrics file a bundled server may not find.
-  const doc = new PDFDocument({ size: 'LETTER', margin: 54, font: regular as unknown as string, compress: options.compress ?? true, info: { Title: `Quote ${q.number}`, Author: q.shop.name } });
+  const doc = new PDFDocument({ size: 'LETTER', margin: 54, font: regular as unknown as string, compress: options.compress ?? true, info: { Title: title, Author: shop.name } });
   doc.registerFont('regular', regular);
   doc.registerFont('bold', bold);
   const chunks: Buffer[] = [];
@@ -46,12 +47,15 @@ export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {})
     doc.on('end', () => resolve(Buffer.concat(chunks)));
     doc.on('error', reject);
   });
-  const width = doc.page.width - 108;
-  const left = 54;
-
-  doc.font('bold').fontSize(16).text(q.shop.name);
+  doc.font('bold').fontSize(16).text(shop.name);
   doc.font('regular').fontSize(9).fillColor(palette.ink.muted);
-  for (const line of [q.shop.address, q.shop.phone && `Phone ${q.shop.phone}`, q.shop.email].filter(Boolean)) doc.text(String(line));
+  for (const line of [shop.address, shop.phone && `Phone ${shop.phone}`, shop.email].filter(Boolean)) doc.text(String(line));
+  return { doc, done, left: 54, width: doc.page.width - 108 };
+}
+
+export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {}): Promise<Buffer> {
+  const { doc, done, left, width } = openPdf(`Quote ${q.number}`, q.shop, options);
+
   doc.moveDown().fillColor(palette.ink.DEFAULT).font('bold').fontSize(20).text(`Quote ${q.number}`);
   doc.font('regular').fontSize(10).text(`For ${q.customerName}${q.vehicleLabel ? `, ${q.vehicleLabel}` : ''}`);
   doc.text(`Status: ${q.stateWord}`);

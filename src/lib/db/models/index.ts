@@ -12,11 +12,12 @@ import { LeadNote } from './lead-note';
 import { NeedRule, NeedRuleItem } from './need-rule';
 import { Part } from './part';
 import { Payment, Quote, QuoteLine } from './quote';
+import { QuoteLink } from './quote-link';
 import { ShopSettings } from './shop-settings';
 import { Supplier } from './supplier';
 import { User } from './user';
 
-export { AuditEntry, Build, Cam, Customer, DynoGain, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, ShopSettings, Supplier, User };
+export { AuditEntry, Build, Cam, Customer, DynoGain, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, QuoteLink, ShopSettings, Supplier, User };
 
 let initialised: Sequelize | undefined;
 
@@ -41,6 +42,7 @@ function associate() {
   Quote.hasMany(Payment, { foreignKey: 'quoteId', as: 'payments' });
   QuoteLine.belongsTo(Quote, { foreignKey: 'quoteId' });
   Payment.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
+  Payment.belongsTo(User, { foreignKey: 'recordedByUserId', as: 'recordedBy' });
   Lead.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
   Lead.hasMany(LeadNote, { foreignKey: 'leadId', as: 'notes' });
   LeadNote.belongsTo(User, { foreignKey: 'userId', as: 'user' });
@@ -62,7 +64,7 @@ function associate() {
 export function db(): Sequelize {
   const sequelize = getSequelize();
   if (initialised !== sequelize) {
-    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, Payment, Lead, LeadNote, DynoRun, DynoGain, Job, JobSignOff, AuditEntry]) {
+    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, QuoteLink, Payment, Lead, LeadNote, DynoRun, DynoGain, Job, JobSignOff, AuditEntry]) {
       model.initModel(sequelize);
     }
     associate();

@@ -26,6 +26,10 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
   declare sentAt: Date | null;
   declare acceptedAt: Date | null;
   declare closedAt: CreationOptional<Date | null>;
+  /** When staff last e-mailed the pay-the-balance link; the customer's page offers the balance from then on. */
+  declare balanceRequestedAt: CreationOptional<Date | null>;
+  /** When the expiry reminder was e-mailed; set once, so the reminder never goes twice. */
+  declare expiryRemindedAt: CreationOptional<Date | null>;
   /** 1 for the first quote; a revision is numbered with -R<revision>. */
   declare revision: CreationOptional<number>;
   declare revisionOfQuoteId: CreationOptional<number | null>;
@@ -55,6 +59,8 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
         sentAt: { type: DataTypes.DATE, allowNull: true },
         acceptedAt: { type: DataTypes.DATE, allowNull: true },
         closedAt: { type: DataTypes.DATE, allowNull: true },
+        balanceRequestedAt: { type: DataTypes.DATE, allowNull: true },
+        expiryRemindedAt: { type: DataTypes.DATE, allowNull: true },
         revision: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false, defaultValue: 1 },
         revisionOfQuoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         replacedByQuoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
@@ -112,6 +118,12 @@ export class QuoteLine extends Model<InferAttributes<QuoteLine>, InferCreationAt
 }
 
 export const PAYMENT_STATUSES = ['pending', 'paid', 'failed', 'expired', 'refunded', 'partially-refunded'] as const;
+/** 'deposit' books the job; 'balance' is the rest, paid when the job is done. */
+export const PAYMENT_PURPOSES = ['deposit', 'balance'] as const;
+/** 'online' went through the payments SDK; 'cash' and 'card-present' were taken at the counter. */
+export const PAYMENT_METHODS = ['online', 'cash', 'card-present'] as const;
+export type PaymentPurpose = (typeof PAYMENT_PURPOSES)[number];
+export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
 
 export class Payment extends Model<InferAttributes<Payment>, InferCreationAttributes<Payment>> {
   declare id: CreationOptional<number>;
@@ -126,6 +138,10 @@ export class Payment extends Model<InferAttributes<Payment>, InferCreationAttrib
   declare paidAt: Date | null;
   /** Set on a second paid checkout for a quote already paid: it was refunded and is never counted. */
   declare duplicateOfPaymentId: CreationOptional<number | null>;
+  declare purpose: CreationOptional<PaymentPurpose>;
+  declare method: CreationOptional<PaymentMethod>;
+  /** Who took a counter payment; null for online payments. */
+  declare recordedByUserId: CreationOptional<ForeignKey<number> | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -142,6 +158,9 @@ export class Payment extends Model<InferAttributes<Payment>, InferCreationAttrib
         status: { type: DataTypes.ENUM(...PAYMENT_STATUSES), allowNull: false, defaultValue: 'pending' },
         paidAt: { type: DataTypes.DATE, allowNull: true },
         duplicateOfPaymentId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        purpose: { type: DataTypes.ENUM(...PAYMENT_PURPOSES), allowNull: false, defaultValue: 'deposit' },
+        method: { type: DataTypes.ENUM(...PAYMENT_METHODS), allowNull: false, defaultValue: 'online' },
+        recordedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -10,7 +10,8 @@ import { getQuoteByToken, sha256 } from './quotes';
 import { sendRefundNotice, settleFullRefund } from './refund-effects';
 import { canTransition, isOpen, stateWord } from '@/lib/quotes/lifecycle';
 import { moveQuote } from './quote-lifecycle';
-import { sendDepositReceipt } from './quote-notices';
+import { completeBalanceLocked } from './balance';
+import { sendPaymentReceipt } from './payment-notices';
 
 // The deposit, taken exactly once. Every path that changes a quote's payments locks the quote row
 // first and its payments second, so checkouts and webhook deliveries queue behind one another instead
@@ -28,7 +29,7 @@ const HELD: readonly Payment['status'][] = ['paid', 'partially-refunded'];
 const REUSE_MARGIN_SECONDS = 10 * 60;
 
 /** The deposit payment that counts: paid (or partly refunded) and not a refunded duplicate. */
-const heldDeposit = (rows: readonly Payment[]) => rows.find((p) => p.duplicateOfPaymentId === null && HELD.includes(p.status));
+const heldDeposit = (rows: readonly Payment[]) => rows.find((p) => p.purpose !== 'balance' && p.duplicateOfPaymentId === null && HELD.includes(p.status));
 
 function stateOf(quote: Quote, rows: readonly Payment[], paymentConfirming = false): CheckoutState {
   const depositPaid = Boolean(heldDeposit(rows)) || quote.status === 'deposit-paid';
@@ -39,6 +40,36 @@ const refusal = (message: string, quote: Quote, rows: readonly Payment[], confir
   ok: false, status: 409, message, state: stateOf(quote, rows, confirming),
 });
 const providerDown: CheckoutOutcome = { ok: false, status: 502, message: 'The payment service did not answer. Nothing was charged; please try again in a moment.' };
+
+/**
+ * The open checkouts among `rows` (one purpose: the deposit or the balance): one for exactly `amountCents`
+ * that is not about to lapse is handed out again; any other is expired through the SDK first. Returns the
+ * answer to give (that session, "being confirmed", the provider down), or null to open a new session.
+ */
+export async function settleOpenSessions(rows: readonly Payment[], amountCents: number, confirming: (message: string) => CheckoutOutcome, t: Transaction): Promise<CheckoutOutcome | null> {
+  for (const pending of rows.filter((p) => p.status === 'pending' && p.providerSessionId)) {
+    let session: Stripe.Checkout.Session;
+    try {
+      session = await payments().checkout.sessions.retrieve(pending.providerSessionId!);
+    } catch {
+      return providerDown;
+    }
+    if (session.status === 'complete') return confirming('Your payment has reached the payment service and is being confirmed. Refresh this page in a minute; you will not be charged twice.');
+    const fits = session.amount_total === amountCents && (session.currency ?? '') === pending.currency && session.expires_at - Date.now() / 1000 > REUSE_MARGIN_SECONDS;
+    if (session.status === 'open' && fits && session.url) return { ok: true, url: session.url, reused: true };
+    if (session.status === 'open') {
+      try {
+        await payments().checkout.sessions.expire(session.id);
+      } catch {
+        // It may have been paid in the meantime; its webhook decides, and a second payment is refunded.
+        return confirming('A payment for this quote is in progress. Refresh this page in a minute.');
+      }
+    }
+    pending.set({ status: 'expired' });
+    await pending.save({ transaction: t });
+  }
+  return null;
+}
 
 /**
  * The customer's "Accept and pay the deposit". An open session for the same deposit is handed out again;
@@ -70,29 +101,8 @@ async function checkoutLocked(quoteId: number, token: string, currency: string, 
   }
   if (quote.depositCents <= 0) return refusal('This quote has no deposit to pay.', quote, rows);
 
-  for (const pending of rows.filter((p) => p.status === 'pending' && p.providerSessionId)) {
-    let session: Stripe.Checkout.Session;
-    try {
-      session = await payments().checkout.sessions.retrieve(pending.providerSessionId!);
-    } catch {
-      return providerDown;
-    }
-    if (session.status === 'complete') {
-      return refusal('Your payment has reached the payment service and is being confirmed. Refresh this page in a minute; you will not be charged twice.', quote, rows, true);
-    }
-    const fits = session.amount_total === quote.depositCents && (session.currency ?? '') === pending.currency && session.expires_at - Date.now() / 1000 > REUSE_MARGIN_SECONDS;
-    if (session.status === 'open' && fits && session.url) return { ok: true, url: session.url, reused: true };
-    if (session.status === 'open') {
-      try {
-        await payments().checkout.sessions.expire(session.id);
-      } catch {
-        // It may have been paid in the meantime; its webhook decides, and a second payment is refunded.
-        return refusal('A payment for this quote is in progress. Refresh this page in a minute.', quote, rows, true);
-      }
-    }
-    pending.set({ status: 'expired' });
-    await pending.save({ transaction: t });
-  }
+  const open = await settleOpenSessions(rows.filter((p) => p.purpose !== 'balance'), quote.depositCents, (message) => refusal(message, quote, rows, true), t);
+  if (open) return open;
 
   const back = `${appBaseUrl()}/q/${token}`;
   let session: Stripe.Checkout.Session;
@@ -149,7 +159,7 @@ export async function recordCheckoutCompleted(session: Stripe.Checkout.Session):
   }
   const outcome = await retryOnLockContention(() => db().transaction((t) => completeLocked(session, known.quoteId, known.id, t)));
   // After the commit, once: a replayed event answers 'already' and sends nothing.
-  if (outcome.result === 'applied') await sendDepositReceipt(known.quoteId, known.id);
+  if (outcome.result === 'applied') await sendPaymentReceipt(known.quoteId, known.id);
   return outcome;
 }
 
@@ -165,6 +175,7 @@ async function completeLocked(session: Stripe.Checkout.Session, quoteId: number,
     await recordAudit({ actor: 'payments-webhook', action: 'payment.refused', entityType: 'quote', entityId: quoteId, after: { paymentId, session: session.id, problems } }, t);
     return { result: 'refused', reason: problems.join('; ') };
   }
+  if (payment.purpose === 'balance') return completeBalanceLocked(quote, payment, intent!, session.id, t);
   const others = await Payment.findAll({ where: { quoteId, id: { [Op.ne]: paymentId } }, transaction: t, lock: t.LOCK.UPDATE });
   const earlier = heldDeposit(others);
   // Money for a quote the lifecycle says cannot be paid now (cancelled, declined, replaced, ...) goes back.

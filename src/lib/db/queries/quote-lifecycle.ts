@@ -4,7 +4,8 @@ import { recordAudit } from '@/lib/audit';
 import { retryOnLockContention } from '@/lib/db/lock-contention';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { canRevise, canTransition, refusalMessage, revisionNumber, staffMoves, stateWord, type QuoteStatus, type TransitionVia } from '@/lib/quotes/lifecycle';
-import { db, Quote, QuoteLine } from '../models';
+import { balanceDueCents } from '@/lib/quotes/balance';
+import { db, Payment, Quote, QuoteLine } from '../models';
 import { getQuote, type QuoteRecord } from './quotes';
 
 // Every change of a quote's state goes through moveQuote, with the row locked by the caller: the
@@ -83,6 +84,14 @@ export function transitionQuote(id: number, input: { to: QuoteStatus; version: n
   return withLockedQuote(id, input.version, async (quote, t) => {
     if (input.to === 'accepted' && isPastValidUntil(quote.validUntil ?? null)) {
       await refuse(quote, `Quote ${quote.number} was valid until ${quote.validUntil}; it can no longer be accepted. Revise it for a fresh price and date.`, t);
+    }
+    if (input.to === 'closed') {
+      // A job closes when it is paid for: by hand only when nothing is left to pay.
+      const rows = await Payment.findAll({ where: { quoteId: quote.id }, transaction: t, lock: t.LOCK.UPDATE });
+      const due = balanceDueCents(quote.totalCents, rows);
+      if (due > 0) {
+        await refuse(quote, `Quote ${quote.number} still has a balance of ${(due / 100).toFixed(2)} dollars to pay. Record the payment taken at the counter or e-mail the customer the pay-the-balance link; the job closes when it is paid in full.`, t);
+      }
     }
     await moveQuote(quote, input.to, 'staff', { user }, t, input.reason ? { reason: input.reason } : undefined);
     return quote.id;

@@ -1,5 +1,4 @@
 import { createElement } from 'react';
-import { DepositReceiptEmail, depositReceiptSubject } from '@/emails/deposit-receipt';
 import type { MailShop } from '@/emails/layout';
 import { QuoteSentEmail, quoteSentSubject } from '@/emails/quote-sent';
 import { RefundNoticeEmail, refundNoticeSubject } from '@/emails/refund-notice';
@@ -35,19 +34,6 @@ async function quoteWithCustomer(quoteId: number) {
     | null;
   const settings = await ShopSettings.findOne({ order: [['id', 'ASC']] });
   return { quote, customer: quote?.customer, payments: (quote?.payments ?? []).filter((p) => !p.duplicateOfPaymentId), shop: mailShop(settings) };
-}
-
-/** The receipt for a deposit that has just been recorded as paid. */
-export async function sendDepositReceipt(quoteId: number, paymentId: number): Promise<void> {
-  try {
-    const { quote, customer, payments, shop } = await quoteWithCustomer(quoteId);
-    const payment = payments.find((p) => p.id === paymentId);
-    if (!quote || !customer?.email || !payment) return;
-    const props = { shop, customerName: customer.name, number: quote.number, amountCents: payment.amountCents, paidAt: (payment.paidAt ?? new Date()).toISOString(), totalCents: quote.totalCents };
-    await sendMail({ ...envelope(shop, customer.email), ...(await renderMail(depositReceiptSubject(props), createElement(DepositReceiptEmail, props))) });
-  } catch (error) {
-    console.error(`[deposits] the receipt for quote ${quoteId} was not sent`, error);
-  }
 }
 
 /** The refund notice after the deposit was refunded in full. It carries no link: only the token's hash is kept. */

@@ -14,7 +14,9 @@ import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence, quo
 import { stateWord, validUntilFrom } from '@/lib/quotes/lifecycle';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
-import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings } from '../models';
+import { balanceDueCents, counts, moneyIn, type PaymentMethod, type PaymentPurpose } from '@/lib/quotes/balance';
+import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings, User } from '../models';
+import { quoteIdByLinkHash } from './quote-links';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from './quote-lines';
 import { sendRefundNotice, settleFullRefund, type AfterFullRefund } from './refund-effects';
 import { LifecycleRefused, moveQuote } from './quote-lifecycle';
@@ -53,6 +55,11 @@ export type PaymentRecord = {
   paidAt: string | null;
   /** A second paid checkout for an already paid quote: refunded automatically, never counted. */
   duplicateOfPaymentId: number | null;
+  /** 'deposit' books the job, 'balance' is the rest; 'online' or taken at the counter (cash, card). */
+  purpose: PaymentPurpose;
+  method: PaymentMethod;
+  /** Who took a counter payment. */
+  recordedBy: { id: number; name: string } | null;
   createdAt: string;
 };
 
@@ -78,8 +85,15 @@ export type QuoteRecord = {
   taxCents: number;
   totalCents: number;
   depositCents: number;
+  /** Every payment taken (deposits and balance), before refunds; refunded duplicates never count. */
   paidCents: number;
   refundedCents: number;
+  depositPaidCents: number;
+  balancePaidCents: number;
+  /** total − (paid − refunded), never below zero (src/lib/quotes/balance.ts). */
+  balanceDueCents: number;
+  /** When staff last e-mailed the pay-the-balance link. */
+  balanceRequestedAt: string | null;
   validUntil: string | null;
   sentAt: string | null;
   acceptedAt: string | null;
@@ -92,7 +106,8 @@ export type QuoteRecord = {
   updatedAt: string;
 };
 
-type QuoteRow = Quote & { customer?: Customer; build?: Build | null; lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[]; payments?: Payment[] };
+type PaymentRow = Payment & { recordedBy?: User | null };
+type QuoteRow = Quote & { customer?: Customer; build?: Build | null; lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[]; payments?: PaymentRow[] };
 
 const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null);
 
@@ -101,11 +116,11 @@ function include() {
     { model: Customer, as: 'customer', attributes: ['id', 'name', 'email'] },
     { model: Build, as: 'build', attributes: ['id', 'vehicleLabel'] },
     { model: QuoteLine, as: 'lines' },
-    { model: Payment, as: 'payments' },
+    { model: Payment, as: 'payments', include: [{ model: User, as: 'recordedBy', attributes: ['id', 'name'] }] },
   ];
 }
 
-function paymentRecord(p: Payment): PaymentRecord {
+function paymentRecord(p: PaymentRow): PaymentRecord {
   return {
     id: p.id,
     status: p.status,
@@ -116,6 +131,9 @@ function paymentRecord(p: Payment): PaymentRecord {
     providerPaymentId: p.providerPaymentId,
     paidAt: iso(p.paidAt),
     duplicateOfPaymentId: p.duplicateOfPaymentId ?? null,
+    purpose: p.purpose ?? 'deposit',
+    method: p.method ?? 'online',
+    recordedBy: p.recordedBy ? { id: p.recordedBy.id, name: p.recordedBy.name } : null,
     createdAt: iso(p.createdAt)!,
   };
 }
@@ -149,6 +167,8 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
   const pays = [...(row.payments ?? [])].sort((a, b) => a.id - b.id);
   // A refunded duplicate took the money and gave it back; the quote was paid once.
   const paid = pays.filter((p) => PAID_STATES.includes(p.status) && !p.duplicateOfPaymentId);
+  const records = pays.map(paymentRecord);
+  const money = moneyIn(records);
   const relatedIds = [row.revisionOfQuoteId, row.replacedByQuoteId].filter((v): v is number => typeof v === 'number');
   const related = relatedIds.length ? await Quote.findAll({ where: { id: relatedIds }, attributes: ['id', 'number', 'status', 'sentAt'], transaction }) : [];
   const older = related.find((q) => q.id === row.revisionOfQuoteId);
@@ -174,11 +194,15 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
     totalCents: row.totalCents,
     depositCents: row.depositCents,
     paidCents: paid.reduce((s, p) => s + p.amountCents, 0),
-    refundedCents: paid.reduce((s, p) => s + p.refundedCents, 0),
+    refundedCents: money.refundedCents,
+    depositPaidCents: money.depositsCents,
+    balancePaidCents: money.balancePaidCents,
+    balanceDueCents: balanceDueCents(row.totalCents, records),
+    balanceRequestedAt: iso(row.balanceRequestedAt),
     validUntil: row.validUntil ?? null,
     sentAt: iso(row.sentAt),
     acceptedAt: iso(row.acceptedAt),
-    payments: pays.map(paymentRecord),
+    payments: records,
     costCents,
     marginCents: goodsCents - costCents,
     version: row.version,
@@ -414,17 +438,25 @@ export async function shopForDocuments(): Promise<PublicQuote['shop'] | null> {
 export async function getQuoteByToken(token: string): Promise<PublicQuote | null> {
   if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
   db();
-  const row = await Quote.findOne({ where: { publicTokenHash: sha256(token) }, attributes: ['id'] });
-  if (!row) return null;
-  const [quote, settings] = await Promise.all([getQuote(row.id), ShopSettings.findOne({ order: [['id', 'ASC']] })]);
+  // The link e-mailed with the quote, or one e-mailed later (the balance request, the expiry reminder).
+  const hash = sha256(token);
+  const row = await Quote.findOne({ where: { publicTokenHash: hash }, attributes: ['id'] });
+  const quoteId = row?.id ?? (await quoteIdByLinkHash(hash));
+  if (!quoteId) return null;
+  const [quote, settings] = await Promise.all([getQuote(quoteId), ShopSettings.findOne({ order: [['id', 'ASC']] })]);
   if (!quote || !settings || quote.status === 'draft') return null;
   const { costCents: _c, marginCents: _m, ...rest } = quote;
   void _c;
   void _m;
   return {
-    quote: { ...rest, lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)), payments: [] },
+    // The customer sees the money that was taken (for their receipts), never provider ids or who took it.
+    quote: { ...rest, lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)), payments: rest.payments.filter(counts).map(customerPayment) },
     shop: { name: settings.name, phone: settings.phone, email: settings.email, address: settings.address, depositPolicyText: settings.depositPolicyText, currency: settings.currency },
   };
+}
+
+function customerPayment(p: PaymentRecord): PaymentRecord {
+  return { ...p, providerSessionId: null, providerPaymentId: null, recordedBy: null };
 }
 
 function refundState(amountCents: number, refundedCents: number): Payment['status'] {
@@ -445,7 +477,8 @@ export async function refundQuote(id: number, amountCents: number, reason: strin
     const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!quote) return { ok: false, status: 404, message: `No quote with id ${id}.` };
     const payment = await Payment.findOne({
-      where: { quoteId: id, status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null },
+      // The deposit: balance payments are settled at the counter or by the provider's dashboard for now.
+      where: { quoteId: id, purpose: 'deposit', status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null },
       order: [['id', 'DESC']],
       transaction: t,
       lock: t.LOCK.UPDATE,

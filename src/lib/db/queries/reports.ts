@@ -7,11 +7,13 @@ import { QUOTE_STATUSES, type QuoteStatus } from '../models/quote';
 // The manager's numbers for a date range (both days included, UTC). What each number counts:
 // - quotes by status, their values, the average and the conversion: quotes *created* in the range,
 //   in the state they are in now; "sent" for the conversion means the quote was ever sent (sent_at set);
-// - deposits taken and their refunds: payments *paid* in the range (paid_at), with what has been refunded
-//   of them so far;
-// - margin: cam and part lines of deposit-paid quotes created in the range, price − the catalogue's
+//   a quote is converted once its deposit is paid, and stays converted when the job is later closed
+//   (`converted`: deposit paid or closed; a deposit refunded in full moves the quote back out);
+// - deposits taken and their refunds: deposit payments *paid* in the range (paid_at), with what has been
+//   refunded of them so far; balances the same for the balance payments (online and at the counter);
+// - margin: cam and part lines of converted quotes created in the range, price − the catalogue's
 //   current cost (quote lines keep no cost of their own);
-// - most-quoted cams: the quote's chosen cam, top 5 by number of quotes, with how many got a deposit.
+// - most-quoted cams: the quote's chosen cam, top 5 by number of quotes, with how many converted.
 // Every amount is integer cents; formatting is the page's job.
 
 export type StatusFigure = { status: QuoteStatus; count: number; valueCents: number };
@@ -23,11 +25,14 @@ export type ReportSummary = {
   conversion: { sentCount: number; depositPaidCount: number; rateBp: number | null };
   averageQuoteCents: number | null;
   deposits: { count: number; takenCents: number; refundedCents: number; netCents: number };
+  balances: { count: number; takenCents: number; refundedCents: number; netCents: number };
   margin: { cams: Margin; parts: Margin; total: Margin };
   topCams: TopCam[];
 };
 
 const PAID_PAYMENT_STATES = ['paid', 'partially-refunded', 'refunded'];
+/** A quote whose deposit was paid: booked, or done and closed (fixed words, so written into the SQL). */
+const converted = (column: string) => `${column} IN ('deposit-paid', 'closed')`;
 
 /** The range as half-open UTC datetimes: [from 00:00, the day after to 00:00). */
 function bounds(range: Pick<ReportRange, 'from' | 'to'>) {
@@ -49,7 +54,7 @@ export async function quoteFigures(range: ReportRange): Promise<{ byStatus: Stat
   const perStatus = QUOTE_STATUSES.map((status, i) =>
     `COALESCE(SUM(status = ${e(status)}), 0) AS c${i}, COALESCE(SUM(IF(status = ${e(status)}, total_cents, 0)), 0) AS v${i}`).join(', ');
   const [row] = await select<Record<string, unknown>>(
-    `SELECT ${perStatus}, COALESCE(SUM(sent_at IS NOT NULL), 0) AS sent, COALESCE(SUM(sent_at IS NOT NULL AND status = 'deposit-paid'), 0) AS paid
+    `SELECT ${perStatus}, COALESCE(SUM(sent_at IS NOT NULL), 0) AS sent, COALESCE(SUM(sent_at IS NOT NULL AND ${converted('status')}), 0) AS paid
        FROM quotes WHERE created_at >= :start AND created_at < :end`,
     bounds(range),
   );
@@ -59,11 +64,11 @@ export async function quoteFigures(range: ReportRange): Promise<{ byStatus: Stat
   return { byStatus, conversion: { sentCount, depositPaidCount, rateBp: rateBp(depositPaidCount, sentCount) } };
 }
 
-export async function depositsTaken(range: ReportRange): Promise<ReportSummary['deposits']> {
+export async function depositsTaken(range: ReportRange, purpose: 'deposit' | 'balance' = 'deposit'): Promise<ReportSummary['deposits']> {
   const [row] = await select<{ count: unknown; taken: unknown; refunded: unknown }>(
     `SELECT COUNT(*) AS count, COALESCE(SUM(amount_cents), 0) AS taken, COALESCE(SUM(refunded_cents), 0) AS refunded
-       FROM payments WHERE status IN (:states) AND paid_at >= :start AND paid_at < :end`,
-    { ...bounds(range), states: PAID_PAYMENT_STATES },
+       FROM payments WHERE status IN (:states) AND purpose = :purpose AND paid_at >= :start AND paid_at < :end`,
+    { ...bounds(range), states: PAID_PAYMENT_STATES, purpose },
   );
   const takenCents = n(row?.taken);
   const refundedCents = n(row?.refunded);
@@ -84,7 +89,7 @@ export async function goodsMarginOfPaidQuotes(range: ReportRange): Promise<Repor
        FROM (SELECT ql.kind, ql.cam_id, ql.part_id, ql.quantity, COUNT(*) AS n, SUM(ql.total_cents) AS revenue
                FROM quotes q
                JOIN quote_lines ql ON ql.quote_id = q.id
-              WHERE q.status = 'deposit-paid' AND q.created_at >= :start AND q.created_at < :end AND ql.kind IN ('cam', 'part')
+              WHERE ${converted('q.status')} AND q.created_at >= :start AND q.created_at < :end AND ql.kind IN ('cam', 'part')
               GROUP BY ql.kind, ql.cam_id, ql.part_id, ql.quantity ORDER BY NULL) g
        LEFT JOIN cams c ON c.id = g.cam_id
        LEFT JOIN parts p ON p.id = g.part_id
@@ -102,7 +107,7 @@ export async function goodsMarginOfPaidQuotes(range: ReportRange): Promise<Repor
 export async function mostQuotedCams(range: ReportRange, limit = 5): Promise<TopCam[]> {
   const rows = await select<{ camId: unknown; sku: string; name: string; quotes: unknown; deposits: unknown }>(
     `SELECT t.cam_id AS camId, c.sku, c.name, t.quotes, t.deposits
-       FROM (SELECT cam_id, COUNT(*) AS quotes, COALESCE(SUM(status = 'deposit-paid'), 0) AS deposits
+       FROM (SELECT cam_id, COUNT(*) AS quotes, COALESCE(SUM(${converted('status')}), 0) AS deposits
                FROM quotes
               WHERE created_at >= :start AND created_at < :end AND cam_id IS NOT NULL
               GROUP BY cam_id ORDER BY NULL) t
@@ -115,10 +120,10 @@ export async function mostQuotedCams(range: ReportRange, limit = 5): Promise<Top
 }
 
 export async function reportSummary(range: ReportRange): Promise<ReportSummary> {
-  const [{ byStatus, conversion }, deposits, margin, topCams] = await Promise.all([
-    quoteFigures(range), depositsTaken(range), goodsMarginOfPaidQuotes(range), mostQuotedCams(range),
+  const [{ byStatus, conversion }, deposits, balances, margin, topCams] = await Promise.all([
+    quoteFigures(range), depositsTaken(range, 'deposit'), depositsTaken(range, 'balance'), goodsMarginOfPaidQuotes(range), mostQuotedCams(range),
   ]);
   const count = byStatus.reduce((s, f) => s + f.count, 0);
   const valueCents = byStatus.reduce((s, f) => s + f.valueCents, 0);
-  return { range, created: { count, valueCents }, byStatus, conversion, averageQuoteCents: averageCents(valueCents, count), deposits, margin, topCams };
+  return { range, created: { count, valueCents }, byStatus, conversion, averageQuoteCents: averageCents(valueCents, count), deposits, balances, margin, topCams };
 }

@@ -5,6 +5,7 @@ import { getQuoteByToken } from '@/lib/db/queries/quotes';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { CUSTOMER_CAUTIONS as CAUTIONS, REFUND_NOTE } from '@/lib/quotes/cautions';
 import { isTaxable } from '@/lib/quotes/pricing';
+import { CustomerPayments } from '@/components/quotes/customer-payments';
 import { QuoteBasis } from '@/components/quotes/quote-basis';
 import { ReplacedNotice } from '@/components/quotes/replaced-notice';
 import './print.css';
@@ -76,6 +77,11 @@ export default async function CustomerQuotePage({
               title: 'Deposit refunded',
               text: `We refunded your earlier deposit of ${refunded}. This quote is open again: you can pay the deposit below when you are ready.`,
             }
+          : quote.status === 'deposit-paid' && quote.balanceRequestedAt && quote.balanceDueCents > 0
+            ? {
+                title: 'Job done — balance to pay',
+                text: `The work is done. ${formatCents(quote.balanceDueCents)} is left to pay: below, or when you collect the car.`,
+              }
           : lapsed
             ? {
                 title: 'No longer valid',
@@ -102,7 +108,13 @@ export default async function CustomerQuotePage({
       </p>
       {quote.status === 'replaced' ? <ReplacedNotice replacedBy={quote.replacedBy} shop={shop} customerEmail={quote.customer.email} /> : null}
 
-      {query.paid && quote.status !== 'deposit-paid' ? (
+      {query.paid === 'balance' && quote.status !== 'closed' ? (
+        <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">
+          <p className="font-semibold">Payment received by the payment service — confirming</p>
+          <p className="text-base">It can take a minute to reach us. Refresh this page shortly; you will not be charged twice.</p>
+        </div>
+      ) : null}
+      {query.paid === '1' && quote.status !== 'deposit-paid' && quote.status !== 'closed' ? (
         <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">
           <p className="font-semibold">Payment received by the payment service — confirming</p>
           <p className="text-base">
@@ -119,7 +131,7 @@ export default async function CustomerQuotePage({
 
       <section
         aria-labelledby="state"
-        className={`mt-6 rounded-lg border p-4 ${quote.status === 'deposit-paid' ? 'border-ok-700/40 bg-ok-100' : 'border-steel-300 bg-paper-raised'}`}
+        className={`mt-6 rounded-lg border p-4 ${quote.status === 'deposit-paid' || quote.status === 'closed' ? 'border-ok-700/40 bg-ok-100' : 'border-steel-300 bg-paper-raised'}`}
       >
         <h2 id="state" className="text-xl font-semibold">
           Status: {state.title}
@@ -182,6 +194,8 @@ export default async function CustomerQuotePage({
           </form>
         ) : null}
       </section>
+
+      {quote.payments.length ? <CustomerPayments quote={quote} token={token} /> : null}
 
       {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} /> : null}
 

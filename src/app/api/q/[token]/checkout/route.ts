@@ -1,6 +1,5 @@
-import { NextResponse } from 'next/server';
 import { startCheckout } from '@/lib/db/queries/deposits';
-import { errorResponse } from '@/lib/http/responses';
+import { checkoutResponse } from '../../checkout-response';
 
 export const dynamic = 'force-dynamic';
 
@@ -14,12 +13,5 @@ type TokenParams = { params: Promise<{ token: string }> };
  */
 export async function POST(request: Request, context: TokenParams) {
   const { token } = await context.params;
-  const outcome = await startCheckout(token);
-  const wantsJson = (request.headers.get('accept') ?? '').includes('application/json');
-  if (!outcome.ok) {
-    if (wantsJson) return errorResponse(outcome.status, outcome.message, outcome.state ? { state: outcome.state } : {});
-    return new NextResponse(`${outcome.message}\n`, { status: outcome.status, headers: { 'content-type': 'text/plain; charset=utf-8' } });
-  }
-  if (wantsJson) return NextResponse.json({ url: outcome.url, reused: outcome.reused });
-  return NextResponse.redirect(outcome.url, 303);
+  return checkoutResponse(request, await startCheckout(token));
 }

@@ -1,5 +1,4 @@
-import { getQuoteByToken } from '@/lib/db/queries/quotes';
-import { errorResponse } from '@/lib/http/responses';
+import { customerDocument } from '../../../quotes/document-response';
 import { pdfResponse } from '../../../quotes/pdf-response';
 
 export const dynamic = 'force-dynamic';
@@ -9,7 +8,5 @@ type TokenParams = { params: Promise<{ token: string }> };
 /** The customer's PDF of their quote; the private token is the key, and anything else is a plain 404. */
 export async function GET(_request: Request, context: TokenParams) {
   const { token } = await context.params;
-  const found = await getQuoteByToken(token);
-  if (!found) return errorResponse(404, 'This link does not open a quote.');
-  return pdfResponse(found.quote, found.shop);
+  return customerDocument(token, pdfResponse);
 }
