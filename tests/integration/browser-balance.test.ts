@@ -1,4 +1,5 @@
 import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { signedInAgent, signIn } from '../support/auth';
 import { launchBrowser } from '../support/browser';
 import { waitForMailsTo } from '../support/mail';
@@ -43,6 +44,7 @@ describe('the balance in the browser', () => {
     await page.getByRole('button', { name: 'E-mail the pay-the-balance link' }).click();
     await page.getByText(`E-mailed ${job.customerEmail} the balance of ${dollars(due)}`).waitFor();
     await page.getByText(/Pay-the-balance link last e-mailed/).waitFor();
+    await expectNoSeriousA11yViolations(page);
 
     const mail = (await waitForMailsTo(job.customerEmail, 3)).find((m) => m.subject.includes('left to pay'))!;
     const link = /(http:\/\/\S+\/q\/[A-Za-z0-9_-]+)/.exec(mail.text)![1];
@@ -50,6 +52,7 @@ describe('the balance in the browser', () => {
     customer.setDefaultTimeout(10_000);
     await customer.goto(link);
     await customer.getByRole('heading', { name: 'Status: Job done — balance to pay' }).waitFor();
+    await expectNoSeriousA11yViolations(customer);
     await Promise.all([customer.waitForURL(/\/pay\/cs_/), customer.getByRole('button', { name: `Pay the balance of ${dollars(due)}` }).click()]);
     await Promise.all([customer.waitForURL((url) => url.href.startsWith(`${link}?paid=balance`)), customer.getByRole('button', { name: /Pay/ }).first().click()]);
     for (let i = 0; i < 20 && !(await customer.getByText('Paid in full — thank you.').count()); i++) {
@@ -63,6 +66,7 @@ describe('the balance in the browser', () => {
     expect([invoice.status(), invoice.headers()['content-type']]).toEqual([200, 'application/pdf']);
     expect((await invoice.body()).subarray(0, 5).toString()).toBe('%PDF-');
     await expect(customer.getByRole('link', { name: 'Receipt (PDF)' }).count()).resolves.toBe(2);
+    await expectNoSeriousA11yViolations(customer);
     await customer.close();
 
     await page.reload();
@@ -83,6 +87,7 @@ describe('the balance in the browser', () => {
     await page.getByText('Recorded $100.00 taken at the counter').waitFor();
     await expect(page.getByTestId('balance-due').textContent()).resolves.toBe(dollars(due - 10_000));
     await page.getByText(/Cash at the counter, taken by/).waitFor();
+    await expectNoSeriousA11yViolations(page);
 
     // Too much is stopped before it is sent.
     await page.getByLabel('Amount taken ($)').fill(((due - 10_000) / 100 + 1).toFixed(2));
