@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { CHOICE_QUESTIONS, QUESTION_COUNT } from '@/lib/leads/questions';
-import { LEAD_LIMITS } from '@/lib/schemas/lead';
+import { LEAD_LIMITS } from '@/lib/leads/limits';
 
 // The at-home questionnaire: one question per screen, big targets, plain words. Answers live in
 // sessionStorage so a reload (or a phone that drops the tab) keeps them until they are sent. The server

@@ -2,21 +2,12 @@ import { z } from 'zod';
 import { text } from './text';
 import { VEHICLE_CLASSES } from './build-profile';
 import { presence } from './cam-card';
+import { LEAD_LIMITS } from '@/lib/leads/limits';
 
 // The at-home questionnaire (/ask): every answer is a choice from a short list, so the customer
 // never has to know a figure. src/lib/leads/profile.ts turns the answers into a conservative build.
-export const LEAD_LIMITS = {
-  nameMaxLength: 120,
-  emailMaxLength: 254,
-  phoneMaxLength: 40,
-  phoneMinDigits: 7,
-  // A flood guard, not a business rule: more than this many leads from one e-mail or phone in an hour answers 429.
-  perContactPerHour: 3,
-  // Also a flood guard: leads from one client address in an hour (generous: a café or a carrier shares one).
-  perAddressPerHour: 20,
-  honeypotMaxLength: 500,
-  pageSizeMax: 100,
-} as const;
+// The limits live in a zod-free module so the questionnaire's browser bundle can use them without zod.
+export { LEAD_LIMITS };
 
 export const ENGINE_CHOICES = ['4.8', '5.3', '5.7', '6.0', '6.2', 'unsure'] as const;
 /** The build profile's vehicle classes, asked in plain words (src/lib/leads/questions.ts). */
