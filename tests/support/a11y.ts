@@ -7,11 +7,11 @@ import type { Page } from 'playwright-core';
 
 /** One line per serious or critical violation: rule id, impact, and the selectors of the offending nodes. */
 export async function seriousA11yViolations(page: Page, options: { exclude?: string[] } = {}): Promise<string[]> {
-  // Legacy mode runs axe inside the page itself: the default opens a second page in the page's context to
-  // combine frame results, which fails for pages made with browser.newPage() (and our pages have no frames).
   // Next streams a dynamic page's metadata after its body: wait for the <title> so axe does not judge a
   // page that is still arriving (the document-title rule failed that way once, depending on timing).
   await page.waitForFunction(() => document.title.trim().length > 0, undefined, { timeout: 10_000 });
+  // Legacy mode runs axe inside the page itself: the default opens a second page in the page's context to
+  // combine frame results, which fails for pages made with browser.newPage() (and our pages have no frames).
   let builder = new AxeBuilder({ page }).setLegacyMode(true);
   for (const selector of options.exclude ?? []) builder = builder.exclude(selector);
   const results = await builder.analyze();
