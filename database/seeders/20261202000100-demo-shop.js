@@ -172,9 +172,9 @@ module.exports = {
     const camPrice = (sku) => camRows[camId(sku) - 1][11] * 100;
     const laborRate = 13500;
     const quotes = [
-      { id: 1, number: 'Q-2026-0101', customer_id: 1, build_id: 1, cam: 'RB-198', status: 'sent', token: 'demo-quote-whitlock',
+      { id: 1, number: 'Q-2026-0101', customer_id: 1, build_id: 1, cam: 'RB-198', status: 'sent', token: 'demo-quote-whitlock-link-2026',
         parts: ['GS-TC', 'SPR-600', 'TUNE-DYNO'], labor: ['CAM-TRUCK', 'SPR-INST', 'TUNE-LAB'] },
-      { id: 2, number: 'Q-2026-0102', customer_id: 2, build_id: 2, cam: 'F9-219', status: 'deposit-paid', token: 'demo-quote-okafor',
+      { id: 2, number: 'Q-2026-0102', customer_id: 2, build_id: 2, cam: 'F9-219', status: 'deposit-paid', token: 'demo-quote-okafor-link-2026',
         parts: ['SPR-600', 'PR-7400', 'TS-DR', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-TRUCK', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
       { id: 3, number: 'Q-2026-0103', customer_id: 3, build_id: 3, cam: 'LV-224', status: 'draft', token: null,
         parts: ['SPR-660', 'PR-7400', 'HW-TRUN', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-CAR', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
