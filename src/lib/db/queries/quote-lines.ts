@@ -3,6 +3,7 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { invalid } from '@/lib/catalogue/versioned-write';
 import type { FieldError } from '@/lib/http/responses';
 import { checkPriceAuthority, type AuthorityVerdict } from '@/lib/quotes/authority';
+import type { JobLine } from '@/lib/quotes/job-price';
 import { lineTotalCents, type QuoteLineKind } from '@/lib/quotes/pricing';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
 import { Cam, LaborOperation, Part } from '../models';
@@ -11,16 +12,8 @@ import { Cam, LaborOperation, Part } from '../models';
 // operation takes its kind from it (so tax follows the item) and, unless a manager says otherwise,
 // its price. Who may price differently is decided in src/lib/quotes/authority.ts.
 
-export type LineDraft = {
-  kind: QuoteLineKind;
-  camId: number | null;
-  partId: number | null;
-  laborOperationId: number | null;
-  description: string;
-  quantity: number;
-  unitPriceCents: number;
-  discountCents: number;
-};
+/** A line ready to write: the same shape the job-price function builds a drafted quote's lines in. */
+export type LineDraft = JobLine;
 
 /** Counter staff asked for a price, kind or discount only a manager may give: answered 403 naming the fields. */
 export class PriceAuthorityRefused extends Error {
