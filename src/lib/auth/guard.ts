@@ -4,16 +4,18 @@ import { NextResponse } from 'next/server';
 import { errorResponse } from '@/lib/http/responses';
 import { PATH_HEADER, safeNextPath, signInUrl } from './guard-paths';
 import { isCrossSite } from './request-info';
+import { roleCan, type Permission } from './policy';
+import type { SessionUser, StaffRole } from './roles';
 import { currentSession } from './session';
 
-// The one guard. Route handlers: requireRole(request, ...roles). Server components and server
-// actions: requireRoleForPage(...roles). With no roles listed, any signed-in staff member passes.
-export type StaffRole = 'manager' | 'counter' | 'tech';
-export type SessionUser = { id: number; email: string; name: string; role: StaffRole };
+// The session checks. Route handlers get theirs from the route kit (lib/http/route.ts); server
+// components call requireAccessForPage(permission). There are no server actions: every change goes
+// through a route handler. requireRole / requireRoleForPage are the older, role-list forms.
+
+export type { SessionUser, StaffRole } from './roles';
+export { ALL_STAFF } from './roles';
 
 export { PATH_HEADER, safeNextPath, signInUrl };
-
-export const ALL_STAFF: readonly StaffRole[] = ['manager', 'counter', 'tech'];
 
 export async function currentUser(): Promise<SessionUser | null> {
   const session = await currentSession();
@@ -48,5 +50,18 @@ export async function requireRoleForPage(...roles: StaffRole[]): Promise<Session
   if (!roleAllows(user, roles)) {
     redirect(`/dashboard?denied=${encodeURIComponent(safeNextPath(path, '/'))}`);
   }
+  return user;
+}
+
+/**
+ * For server components: the page's permission from the one table (lib/auth/policy.ts). Signed out:
+ * redirects to /sign-in?next=<this page>; a role without the permission goes to the staff home, which
+ * says the page is not open to that role.
+ */
+export async function requireAccessForPage(permission: Permission): Promise<SessionUser> {
+  const user = await currentUser();
+  const path = (await headers()).get(PATH_HEADER);
+  if (!user) redirect(signInUrl(path));
+  if (!roleCan(user.role, permission)) redirect(`/dashboard?denied=${encodeURIComponent(safeNextPath(path, '/'))}`);
   return user;
 }

@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import type { ZodError } from 'zod';
 import { formatZodIssues, type FieldIssue } from '@/lib/schemas/errors';
+import { HttpError } from './errors';
 import { BodyTooLarge, JSON_BODY_LIMIT_BYTES, kilobytes, readLimitedBytes } from './body-limit';
 
 // One shape for every error the API answers, so forms and tests read them the same way.
@@ -17,21 +18,36 @@ export function errorResponse(status: number, message: string, extra: Record<str
 
 /**
  * Parses a JSON body of at most `limitBytes` (counted as it streams in, 413 past it); a body that is
- * not JSON is the client's mistake (400), never a crash.
+ * not JSON is the client's mistake (400), never a crash. Throws an HttpError for the route kit.
  */
-export async function readJson(request: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<{ ok: true; value: unknown } | { ok: false; response: NextResponse }> {
+export async function readJsonBody(request: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<unknown> {
   let bytes: Uint8Array;
   try {
     bytes = await readLimitedBytes(request, limitBytes);
   } catch (error) {
     if (error instanceof BodyTooLarge) {
-      return { ok: false, response: errorResponse(413, `The request body is larger than ${kilobytes(limitBytes)}, the limit for this request.`, { errors: [{ field: '(body)', message: `larger than ${kilobytes(limitBytes)}` }] }) };
+      throw new HttpError(413, `The request body is larger than ${kilobytes(limitBytes)}, the limit for this request.`, { errors: [{ field: '(body)', message: `larger than ${kilobytes(limitBytes)}` }] });
     }
-    return { ok: false, response: errorResponse(400, 'The request body could not be read.', { errors: [{ field: '(body)', message: 'unreadable' }] }) };
+    throw new HttpError(400, 'The request body could not be read.', { errors: [{ field: '(body)', message: 'unreadable' }] });
   }
   try {
-    return { ok: true, value: JSON.parse(new TextDecoder().decode(bytes)) };
+    return JSON.parse(new TextDecoder().decode(bytes));
   } catch {
-    return { ok: false, response: errorResponse(400, 'The request body must be valid JSON.', { errors: [{ field: '(body)', message: 'not valid JSON' }] }) };
+    throw new HttpError(400, 'The request body must be valid JSON.', { errors: [{ field: '(body)', message: 'not valid JSON' }] });
   }
+}
+
+/** The same, answering `{ ok: false, response }` instead of throwing, for handlers not yet on the route kit. */
+export async function readJson(request: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<{ ok: true; value: unknown } | { ok: false; response: NextResponse }> {
+  try {
+    return { ok: true, value: await readJsonBody(request, limitBytes) };
+  } catch (error) {
+    if (error instanceof HttpError) return { ok: false, response: errorResponse(error.status, error.message, error.extra, error.headers) };
+    throw error;
+  }
+}
+
+/** A 422 to throw: the fields and what is wrong with each. */
+export function invalidFields(errors: ZodError | FieldError[]): HttpError {
+  return new HttpError(422, 'Some fields need attention.', { errors: Array.isArray(errors) ? errors : formatZodIssues(errors) });
 }

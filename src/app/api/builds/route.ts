@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, paged, parseBody, parseQuery } from '@/lib/catalogue/http';
+import { outcomeResponse, paged, parseBody, parseQuery } from '@/lib/http/kit';
 import { createBuild, listBuilds } from '@/lib/db/queries/builds';
 import { BuildCreateSchema, BuildListQuerySchema } from '@/lib/schemas/build';
 

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, paged, parseBody, parseQuery } from '@/lib/catalogue/http';
+import { outcomeResponse, paged, parseBody, parseQuery } from '@/lib/http/kit';
 import { createCustomer, listCustomers } from '@/lib/db/queries/customers';
 import { CustomerListQuerySchema, CustomerSchema } from '@/lib/schemas/customer';
 

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
-import { outcomeResponse, parseBody, parseQuery } from '@/lib/catalogue/http';
+import { outcomeResponse, parseBody, parseQuery } from '@/lib/http/kit';
 import { buildExists, createDynoRun, listDynoRuns } from '@/lib/db/queries/dyno-runs';
 import { errorResponse } from '@/lib/http/responses';
 import { DynoRunListQuerySchema, DynoRunSchema } from '@/lib/schemas/dyno-run';

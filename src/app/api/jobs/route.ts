@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { parseQuery } from '@/lib/catalogue/http';
+import { parseQuery } from '@/lib/http/kit';
 import { listBoard } from '@/lib/db/queries/job-board';
 import { JobListQuerySchema } from '@/lib/schemas/job';
 

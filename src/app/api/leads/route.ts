@@ -3,7 +3,7 @@ import { rankForShop } from '@/lib/advisor-service';
 import { requireRole } from '@/lib/auth/guard';
 import { clientIp, isCrossSite } from '@/lib/auth/request-info';
 import { randomToken } from '@/lib/auth/tokens';
-import { paged, parseBody, parseQuery } from '@/lib/catalogue/http';
+import { paged, parseBody, parseQuery } from '@/lib/http/kit';
 import { listBaselineCards } from '@/lib/db/queries/builds';
 import { createLead, emissionsCertifiedIds, listLeads } from '@/lib/db/queries/leads';
 import { getShopSettings } from '@/lib/db/queries/settings';

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, paged, parseBody, parseQuery, withoutCosts } from '@/lib/catalogue/http';
+import { outcomeResponse, paged, parseBody, parseQuery, withoutCosts } from '@/lib/http/kit';
 import { createPart, listParts } from '@/lib/db/queries/parts';
 import { PartListQuerySchema, PartSchema } from '@/lib/schemas/part';
 

@@ -1,5 +1,5 @@
 import type { NextResponse } from 'next/server';
-import { outcomeResponse } from '@/lib/catalogue/http';
+import { outcomeResponse } from '@/lib/http/kit';
 import type { QuoteRecord, QuoteWriteOutcome } from '@/lib/db/queries/quotes';
 import { errorResponse } from '@/lib/http/responses';
 

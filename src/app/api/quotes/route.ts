@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { paged, parseBody, parseQuery } from '@/lib/catalogue/http';
+import { paged, parseBody, parseQuery } from '@/lib/http/kit';
 import { listQuotes } from '@/lib/db/queries/quote-list';
 import { createQuoteFromBuild, presentQuote } from '@/lib/db/queries/quotes';
 import { QuoteCreateSchema } from '@/lib/schemas/quote';

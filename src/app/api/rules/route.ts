@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, parseBody } from '@/lib/catalogue/http';
+import { outcomeResponse, parseBody } from '@/lib/http/kit';
 import { createRule, listRules } from '@/lib/db/queries/rules';
 import { NeedRuleSchema } from '@/lib/schemas/need-rule';
 

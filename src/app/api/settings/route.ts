@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, parsePatch } from '@/lib/catalogue/http';
+import { outcomeResponse, parsePatch } from '@/lib/http/kit';
 import { getShopSettingsRecord, updateShopSettings } from '@/lib/db/queries/settings';
 import { errorResponse } from '@/lib/http/responses';
 import { SettingsPatchControlSchema, SHOP_SETTINGS_FIELDS, ShopSettingsSchema } from '@/lib/schemas/settings';

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
 import { buildFormValues, getBuild, updateBuild } from '@/lib/db/queries/builds';
 import { errorResponse } from '@/lib/http/responses';
 import { BuildPatchControlSchema, BuildUpdateSchema } from '@/lib/schemas/build';

@@ -1,6 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
 import { camsToCsv } from '@/lib/catalogue/cam-csv';
-import { canSeeCosts } from '@/lib/catalogue/http';
+import { canSeeCosts } from '@/lib/http/kit';
 import { allCams } from '@/lib/db/queries/cams';
 
 export const dynamic = 'force-dynamic';

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
 import { commitCams, previewCamImport } from '@/lib/catalogue/cam-csv';
 import { CSV_MAX_BYTES, notCsvReason } from '@/lib/catalogue/csv';
-import { readUpload } from '@/lib/catalogue/uploads';
+import { readUpload } from '@/lib/http/uploads';
 import { errorResponse, validationFailed } from '@/lib/http/responses';
 
 export const dynamic = 'force-dynamic';

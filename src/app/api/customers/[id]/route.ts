@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
 import { customerFormValues, getCustomer, getCustomerDetail, updateCustomer } from '@/lib/db/queries/customers';
 import { errorResponse } from '@/lib/http/responses';
 import { CustomerPatchControlSchema, CustomerSchema } from '@/lib/schemas/customer';

@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
-import { idFrom, outcomeResponse, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, type IdParams } from '@/lib/http/kit';
 import { deleteDynoRun, getDynoRun } from '@/lib/db/queries/dyno-runs';
 import { errorResponse } from '@/lib/http/responses';
 

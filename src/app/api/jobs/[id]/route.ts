@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
-import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/http/kit';
 import { getBoardJob } from '@/lib/db/queries/job-board';
 import { updateJob } from '@/lib/db/queries/job-writes';
 import { errorResponse } from '@/lib/http/responses';

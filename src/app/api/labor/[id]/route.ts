@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
 import { getLabor, laborFormValues, removeLabor, updateLabor } from '@/lib/db/queries/labor';
 import { errorResponse } from '@/lib/http/responses';
 import { LaborPatchControlSchema, LaborSchema } from '@/lib/schemas/labor';

@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/http/kit';
 import { updateLeadStatus } from '@/lib/db/queries/leads';
 import { LeadPatchSchema } from '@/lib/schemas/lead';
 

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, withoutCosts, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parsePatch, withoutCosts, type IdParams } from '@/lib/http/kit';
 import { getPart, partFormValues, removePart, updatePart } from '@/lib/db/queries/parts';
 import { errorResponse } from '@/lib/http/responses';
 import { PartPatchControlSchema, PartSchema } from '@/lib/schemas/part';

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, parseBody, type IdParams } from '@/lib/http/kit';
 import { getQuote, presentQuote, updateQuote } from '@/lib/db/queries/quotes';
 import { errorResponse } from '@/lib/http/responses';
 import { QuotePatchSchema } from '@/lib/schemas/quote';

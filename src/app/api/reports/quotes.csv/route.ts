@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { parseQuery } from '@/lib/catalogue/http';
+import { parseQuery } from '@/lib/http/kit';
 import { quoteExportChunks } from '@/lib/db/queries/quote-export';
 import { quoteCsvHeader, quoteCsvRows } from '@/lib/reports/quotes-csv';
 import { ReportRangeSchema } from '@/lib/schemas/report';

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { parseQuery } from '@/lib/catalogue/http';
+import { parseQuery } from '@/lib/http/kit';
 import { reportSummary } from '@/lib/db/queries/reports';
 import { ReportRangeSchema } from '@/lib/schemas/report';
 

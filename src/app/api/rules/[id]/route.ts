@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
 import { getRule, removeRule, updateRule } from '@/lib/db/queries/rules';
 import { errorResponse } from '@/lib/http/responses';
 import { NeedRulePatchControlSchema, NeedRuleSchema } from '@/lib/schemas/need-rule';

@@ -1,4 +1,4 @@
-import { attachmentCollectionRoutes } from '@/lib/catalogue/attachment-routes';
+import { attachmentCollectionRoutes } from '@/lib/http/attachment-routes';
 import { getCam } from '@/lib/db/queries/cams';
 
 export const dynamic = 'force-dynamic';

@@ -1,6 +1,6 @@
 import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
-import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/http/kit';
 import { getBoardJob } from '@/lib/db/queries/job-board';
 import { recordSignOff } from '@/lib/db/queries/job-writes';
 import { errorResponse } from '@/lib/http/responses';

@@ -1,4 +1,4 @@
-import { attachmentCollectionRoutes } from '@/lib/catalogue/attachment-routes';
+import { attachmentCollectionRoutes } from '@/lib/http/attachment-routes';
 import { getLabor } from '@/lib/db/queries/labor';
 
 export const dynamic = 'force-dynamic';

@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/http/kit';
 import { addLeadNote } from '@/lib/db/queries/lead-notes';
 import { LeadNoteSchema } from '@/lib/schemas/lead-note';
 

@@ -1,4 +1,4 @@
-import { attachmentCollectionRoutes } from '@/lib/catalogue/attachment-routes';
+import { attachmentCollectionRoutes } from '@/lib/http/attachment-routes';
 import { getPart } from '@/lib/db/queries/parts';
 
 export const dynamic = 'force-dynamic';

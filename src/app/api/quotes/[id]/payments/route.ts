@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, parseBody, type IdParams } from '@/lib/http/kit';
 import { recordCounterPayment } from '@/lib/db/queries/balance';
 import { CounterPaymentSchema } from '@/lib/schemas/quote-payment';
 import { balanceResponse } from '../../balance-response';

@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, type IdParams } from '@/lib/http/kit';
 import { staffDocument } from '../../document-response';
 import { pdfResponse } from '../../pdf-response';
 

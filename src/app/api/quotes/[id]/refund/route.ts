@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, parseBody, type IdParams } from '@/lib/http/kit';
 import { presentQuote, refundQuote } from '@/lib/db/queries/quotes';
 import { errorResponse } from '@/lib/http/responses';
 import { QuoteRefundSchema } from '@/lib/schemas/quote';

@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, parseBody, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, parseBody, type IdParams } from '@/lib/http/kit';
 import { reviseQuote } from '@/lib/db/queries/quote-lifecycle';
 import { QuoteReviseSchema } from '@/lib/schemas/quote';
 import { lifecycleResponse } from '../../lifecycle-response';

@@ -1,5 +1,5 @@
 import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, type IdParams } from '@/lib/catalogue/http';
+import { idFrom, outcomeResponse, type IdParams } from '@/lib/http/kit';
 import { presentQuote, sendQuote } from '@/lib/db/queries/quotes';
 import { errorResponse } from '@/lib/http/responses';
 

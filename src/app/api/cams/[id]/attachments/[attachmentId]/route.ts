@@ -1,4 +1,4 @@
-import { attachmentItemRoutes } from '@/lib/catalogue/attachment-routes';
+import { attachmentItemRoutes } from '@/lib/http/attachment-routes';
 
 export const dynamic = 'force-dynamic';
 

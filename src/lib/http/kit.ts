@@ -1,9 +1,10 @@
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import type { SessionUser } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
 import { formatZodIssues as fieldErrorsOf } from '@/lib/schemas/errors';
-import type { WriteOutcome } from './versioned-write';
+import type { WriteOutcome } from '@/lib/catalogue/versioned-write';
 
 // Small pieces every catalogue route handler shares: ids from the path, query strings through zod,
 // PATCH merging with the version check, outcomes to status codes, and hiding costs from technicians.
@@ -77,7 +78,7 @@ export function outcomeResponse<R>(outcome: WriteOutcome<R>, options: { status?:
 
 /** Technicians do not see costs or margins; everyone else on the staff does. */
 export function canSeeCosts(user: SessionUser): boolean {
-  return user.role !== 'tech';
+  return can(user, 'costs.read');
 }
 
 export function withoutCosts<T extends { costCents?: number }>(record: T, user: SessionUser): T | Omit<T, 'costCents'> {

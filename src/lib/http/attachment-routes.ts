@@ -5,7 +5,7 @@ import {
   addAttachment, ATTACHMENT_MAX_BYTES, ATTACHMENT_MAX_PER_RECORD, AttachmentLimitReached, countAttachments, getAttachment, listAttachments, readAttachmentBytes, removeAttachment, sniffAttachmentType,
   type AttachmentEntityType,
 } from '@/lib/storage/attachments';
-import { idFrom, type IdParams } from './http';
+import { idFrom, type IdParams } from './kit';
 import { megabytes, readUpload } from './uploads';
 
 // The same attachment routes for cams, parts and labour: list and upload on the collection, download and
