@@ -1,13 +1,11 @@
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
-import type { SessionUser } from '@/lib/auth/guard';
-import { can } from '@/lib/auth/policy';
 import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
 import { formatZodIssues as fieldErrorsOf } from '@/lib/schemas/errors';
 import type { WriteOutcome } from '@/lib/catalogue/versioned-write';
 
 // Small pieces every catalogue route handler shares: ids from the path, query strings through zod,
-// PATCH merging with the version check, outcomes to status codes, and hiding costs from technicians.
+// PATCH merging with the version check, and outcomes to status codes.
 
 export type IdParams = { params: Promise<{ id: string }> };
 
@@ -76,17 +74,9 @@ export function outcomeResponse<R>(outcome: WriteOutcome<R>, options: { status?:
   }
 }
 
-/** Technicians do not see costs or margins; everyone else on the staff does. */
-export function canSeeCosts(user: SessionUser): boolean {
-  return can(user, 'costs.read');
-}
-
-export function withoutCosts<T extends { costCents?: number }>(record: T, user: SessionUser): T | Omit<T, 'costCents'> {
-  if (canSeeCosts(user)) return record;
-  const { costCents: _hidden, ...rest } = record;
-  void _hidden;
-  return rest;
-}
+// Cost hiding lives in lib/auth/costs.ts (the `costs.read` permission). Forwarded here only for the
+// route handlers that still import it from the kit; new code imports '@/lib/auth/costs'.
+export { canSeeCosts, withoutCosts } from '@/lib/auth/costs';
 
 export function paged<T>(items: T[], total: number, page: number, pageSize: number) {
   return { items, total, page, pageSize };

@@ -1,6 +1,7 @@
 import crypto from 'node:crypto';
 import { col, fn, Op, type Transaction } from 'sequelize';
 import { rankForShop } from '@/lib/advisor-service';
+import { canSeeCosts } from '@/lib/auth/costs';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
@@ -213,7 +214,7 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
 
 /** Technicians read quotes without costs or margins. */
 export function presentQuote(record: QuoteRecord, user: SessionUser): QuoteRecord {
-  if (user.role !== 'tech') return record;
+  if (canSeeCosts(user)) return record;
   const { costCents: _c, marginCents: _m, ...rest } = record;
   void _c;
   void _m;
