@@ -1,84 +1,100 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
-import { errorResponse } from '@/lib/http/responses';
 import {
-  addAttachment, ATTACHMENT_MAX_BYTES, ATTACHMENT_MAX_PER_RECORD, AttachmentLimitReached, countAttachments, getAttachment, listAttachments, readAttachmentBytes, removeAttachment, sniffAttachmentType,
+  addAttachment,
+  ATTACHMENT_MAX_BYTES,
+  ATTACHMENT_MAX_PER_RECORD,
+  AttachmentLimitReached,
+  countAttachments,
+  getAttachment,
+  listAttachments,
+  readAttachmentBytes,
+  removeAttachment,
+  sniffAttachmentType,
   type AttachmentEntityType,
 } from '@/lib/storage/attachments';
-import { idFrom, type IdParams } from './kit';
+import { HttpError, notFound } from './errors';
+import { route } from './route';
 import { megabytes, readUpload } from './uploads';
 
 // The same attachment routes for cams, parts and labour: list and upload on the collection, download and
 // remove on one attachment. Staff read; managers add and remove.
 
-type ItemParams = { params: Promise<{ id: string; attachmentId: string }> };
-
 const LABELS: Record<AttachmentEntityType, string> = { cam: 'cam', part: 'part', labor: 'labour operation' };
+
+function collectionPath(entity: AttachmentEntityType): string {
+  return entity === 'labor' ? 'labor' : `${entity}s`;
+}
 
 export function attachmentCollectionRoutes(entity: AttachmentEntityType, exists: (id: number) => Promise<boolean>) {
   const label = LABELS[entity];
+  const full = () =>
+    new HttpError(
+      409,
+      `This ${label} already has ${ATTACHMENT_MAX_PER_RECORD} spec sheets, the most one record keeps. Remove one before adding another.`,
+      {
+        errors: [{ field: 'file', message: `at most ${ATTACHMENT_MAX_PER_RECORD} attachments per ${label}` }],
+      },
+    );
   return {
-    async GET(request: Request, context: IdParams) {
-      const user = await requireRole(request);
-      if (user instanceof Response) return user;
-      const id = await idFrom(context, label);
-      if (id instanceof Response) return id;
-      if (!(await exists(id))) return errorResponse(404, `No ${label} with id ${id}.`);
-      const items = await listAttachments(entity, id);
-      return NextResponse.json({ items: items.map((a) => ({ ...a, url: `/api/${entity === 'labor' ? 'labor' : `${entity}s`}/${id}/attachments/${a.id}` })) });
-    },
+    GET: route({ permission: 'catalogue.read', ids: { id: label } }, async ({ ids }) => {
+      if (!(await exists(ids.id))) throw notFound(label, ids.id);
+      const items = await listAttachments(entity, ids.id);
+      return NextResponse.json({
+        items: items.map((a) => ({ ...a, url: `/api/${collectionPath(entity)}/${ids.id}/attachments/${a.id}` })),
+      });
+    }),
 
-    async POST(request: Request, context: IdParams) {
-      const user = await requireRole(request, 'manager');
-      if (user instanceof Response) return user;
-      const id = await idFrom(context, label);
-      if (id instanceof Response) return id;
-      if (!(await exists(id))) return errorResponse(404, `No ${label} with id ${id}.`);
-      const full = () =>
-        errorResponse(409, `This ${label} already has ${ATTACHMENT_MAX_PER_RECORD} spec sheets, the most one record keeps. Remove one before adding another.`, {
-          errors: [{ field: 'file', message: `at most ${ATTACHMENT_MAX_PER_RECORD} attachments per ${label}` }],
-        });
+    POST: route({ permission: 'catalogue.write', ids: { id: label } }, async ({ request, user, ids }) => {
+      if (!(await exists(ids.id))) throw notFound(label, ids.id);
       // Checked before the upload is read, so a full record costs no upload; checked again under lock in the write.
-      if ((await countAttachments(entity, id)) >= ATTACHMENT_MAX_PER_RECORD) return full();
-      const read = await readUpload(request, ATTACHMENT_MAX_BYTES, 'spec sheet');
-      if (!read.ok) return read.response;
-      const contentType = sniffAttachmentType(read.upload.bytes);
+      if ((await countAttachments(entity, ids.id)) >= ATTACHMENT_MAX_PER_RECORD) throw full();
+      const upload = await readUpload(request, ATTACHMENT_MAX_BYTES, 'spec sheet');
+      const contentType = sniffAttachmentType(upload.bytes);
       if (!contentType) {
-        return errorResponse(415, 'A spec sheet must be a PDF, PNG or JPEG file; this file is none of those (judged by its contents, not its name).', {
-          errors: [{ field: 'file', message: 'not a PDF, PNG or JPEG' }],
-        });
+        throw new HttpError(
+          415,
+          'A spec sheet must be a PDF, PNG or JPEG file; this file is none of those (judged by its contents, not its name).',
+          {
+            errors: [{ field: 'file', message: 'not a PDF, PNG or JPEG' }],
+          },
+        );
       }
-      let record;
       try {
-        record = await addAttachment(entity, id, { fileName: read.upload.file.name, contentType, bytes: read.upload.bytes }, user);
+        const record = await addAttachment(
+          entity,
+          ids.id,
+          { fileName: upload.file.name, contentType, bytes: upload.bytes },
+          user,
+        );
+        return NextResponse.json({ ...record, maxBytes: megabytes(ATTACHMENT_MAX_BYTES) }, { status: 201 });
       } catch (error) {
-        if (error instanceof AttachmentLimitReached) return full();
+        if (error instanceof AttachmentLimitReached) throw full();
         throw error;
       }
-      return NextResponse.json({ ...record, maxBytes: megabytes(ATTACHMENT_MAX_BYTES) }, { status: 201 });
-    },
+    }),
   };
 }
 
 export function attachmentItemRoutes(entity: AttachmentEntityType) {
   const label = LABELS[entity];
-  async function ids(context: ItemParams) {
-    const { id, attachmentId } = await context.params;
-    const parse = (v: string) => (/^\d{1,10}$/.test(v) ? Number(v) : null);
-    return { entityId: parse(id), attachmentId: parse(attachmentId) };
-  }
-  const missing = () => errorResponse(404, `No such attachment on this ${label}.`);
+  const missing = () => new HttpError(404, `No such attachment on this ${label}.`);
+  // Not the kit's `ids`: any id here that names no attachment (malformed ones too) answers the same
+  // "no such attachment" 404, so the answer never says which half of the path was wrong.
+  const attachmentIds = (params: Record<string, string>) => {
+    const parse = (v: string | undefined) => (v !== undefined && /^\d{1,10}$/.test(v) ? Number(v) : null);
+    const entityId = parse(params.id);
+    const attachmentId = parse(params.attachmentId);
+    if (entityId === null || attachmentId === null) throw missing();
+    return { entityId, attachmentId };
+  };
   return {
     /** Serves the file to signed-in staff only, with the type that was sniffed at upload. */
-    async GET(request: Request, context: ItemParams) {
-      const user = await requireRole(request);
-      if (user instanceof Response) return user;
-      const { entityId, attachmentId } = await ids(context);
-      if (entityId === null || attachmentId === null) return missing();
+    GET: route({ permission: 'catalogue.read' }, async ({ params }) => {
+      const { entityId, attachmentId } = attachmentIds(params);
       const attachment = await getAttachment(entity, entityId, attachmentId);
-      if (!attachment) return missing();
+      if (!attachment) throw missing();
       const bytes = await readAttachmentBytes(attachment.storageKey);
-      if (!bytes) return errorResponse(410, 'The file for this attachment is missing from storage.');
+      if (!bytes) throw new HttpError(410, 'The file for this attachment is missing from storage.');
       return new NextResponse(new Uint8Array(bytes), {
         headers: {
           'Content-Type': attachment.contentType,
@@ -88,18 +104,15 @@ export function attachmentItemRoutes(entity: AttachmentEntityType) {
           'Content-Security-Policy': "default-src 'none'; img-src 'self'; object-src 'self'; sandbox",
         },
       });
-    },
+    }),
 
-    async DELETE(request: Request, context: ItemParams) {
-      const user = await requireRole(request, 'manager');
-      if (user instanceof Response) return user;
-      const { entityId, attachmentId } = await ids(context);
-      if (entityId === null || attachmentId === null) return missing();
+    DELETE: route({ permission: 'catalogue.write' }, async ({ user, params }) => {
+      const { entityId, attachmentId } = attachmentIds(params);
       const removed = await removeAttachment(entity, entityId, attachmentId, user);
-      if (!removed) return missing();
+      if (!removed) throw missing();
       const { storageKey: _key, ...record } = removed;
       void _key;
       return NextResponse.json({ outcome: 'deleted', attachment: record });
-    },
+    }),
   };
 }

@@ -1,28 +1,25 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
-import { outcomeResponse, parsePatch } from '@/lib/http/kit';
-import { getShopSettingsRecord, updateShopSettings } from '@/lib/db/queries/settings';
-import { errorResponse } from '@/lib/http/responses';
-import { SettingsPatchControlSchema, SHOP_SETTINGS_FIELDS, ShopSettingsSchema } from '@/lib/schemas/settings';
+import { getShopSettingsRecord, settingsFormValues, updateShopSettings } from '@/lib/db/queries/settings';
+import { HttpError } from '@/lib/http/errors';
+import { outcomeResponse } from '@/lib/http/kit';
+import { readPatch } from '@/lib/http/parse';
+import { route } from '@/lib/http/route';
+import { SettingsPatchControlSchema, ShopSettingsSchema } from '@/lib/schemas/settings';
 
-export const dynamic = 'force-dynamic';
-
-const missing = () => errorResponse(404, 'The shop has no settings yet; run the seed or migrations.');
-
-export async function GET(request: Request) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
+async function storedSettings() {
   const settings = await getShopSettingsRecord();
-  return settings ? NextResponse.json(settings) : missing();
+  if (!settings) throw new HttpError(404, 'The shop has no settings yet; run the seed or migrations.');
+  return settings;
 }
 
-export async function PATCH(request: Request) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
-  const current = await getShopSettingsRecord();
-  if (!current) return missing();
-  const values = Object.fromEntries(SHOP_SETTINGS_FIELDS.map((f) => [f, current[f]]));
-  const patch = await parsePatch(request, SettingsPatchControlSchema, ShopSettingsSchema, values);
-  if (!patch.ok) return patch.response;
+export const GET = route({ permission: 'settings.manage' }, async () => NextResponse.json(await storedSettings()));
+
+export const PATCH = route({ permission: 'settings.manage' }, async ({ request, user }) => {
+  const patch = await readPatch(
+    request,
+    SettingsPatchControlSchema,
+    ShopSettingsSchema,
+    settingsFormValues(await storedSettings()),
+  );
   return outcomeResponse(await updateShopSettings(patch.control.version, patch.values, user), { label: 'settings' });
-}
+});

@@ -59,6 +59,17 @@ export async function loadNeedRules(): Promise<NeedRuleInput[]> {
   return (await listRules()).filter((r) => r.active);
 }
 
+/** The stored rule as the form's values: what a PATCH body is laid over before the whole rule is checked again. */
+export function ruleFormValues(rule: NeedRuleRecord): Omit<Record<keyof NeedRuleValues, unknown>, 'threshold'> {
+  return {
+    kind: rule.kind,
+    vehicleClass: rule.vehicleClass,
+    label: rule.label,
+    active: rule.active,
+    items: rule.items.map((i) => ({ partId: i.partId, laborOperationId: i.laborOperationId, quantity: i.quantity })),
+  };
+}
+
 export async function getRule(id: number, transaction?: Transaction): Promise<NeedRuleRecord | null> {
   db();
   const rule = await NeedRule.findByPk(id, { include: include(), transaction });

@@ -1,7 +1,7 @@
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
-import type { ShopSettingsValues } from '@/lib/schemas/settings';
+import { SHOP_SETTINGS_FIELDS, type ShopSettingsValues } from '@/lib/schemas/settings';
 import { db, ShopSettings } from '../models';
 
 export async function getShopSettings(): Promise<ShopSettings | null> {
@@ -60,6 +60,11 @@ export function toShopSettingsRecord(s: ShopSettings): ShopSettingsRecord {
     version: s.version,
     updatedAt: new Date(s.updatedAt).toISOString(),
   };
+}
+
+/** The stored settings as the form's values: what a PATCH body is laid over before the whole record is checked again. */
+export function settingsFormValues(settings: ShopSettingsRecord): Record<string, unknown> {
+  return Object.fromEntries(SHOP_SETTINGS_FIELDS.map((f) => [f, settings[f]]));
 }
 
 export async function getShopSettingsRecord(): Promise<ShopSettingsRecord | null> {

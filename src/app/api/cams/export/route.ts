@@ -1,14 +1,10 @@
-import { requireRole } from '@/lib/auth/guard';
 import { camsToCsv } from '@/lib/catalogue/cam-csv';
-import { canSeeCosts } from '@/lib/http/kit';
 import { allCams } from '@/lib/db/queries/cams';
-
-export const dynamic = 'force-dynamic';
+import { canSeeCosts } from '@/lib/http/kit';
+import { route } from '@/lib/http/route';
 
 /** The whole cam catalogue as CSV, in the import's columns (costs left out for technicians). */
-export async function GET(request: Request) {
-  const user = await requireRole(request);
-  if (user instanceof Response) return user;
+export const GET = route({ permission: 'catalogue.read' }, async ({ user }) => {
   const csv = camsToCsv(await allCams(), { includeCosts: canSeeCosts(user) });
   const date = new Date().toISOString().slice(0, 10);
   return new Response(`\uFEFF${csv}\r\n`, {
@@ -18,4 +14,4 @@ export async function GET(request: Request) {
       'Cache-Control': 'no-store',
     },
   });
-}
+});

@@ -1,38 +1,27 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
 import { getLabor, laborFormValues, removeLabor, updateLabor } from '@/lib/db/queries/labor';
-import { errorResponse } from '@/lib/http/responses';
+import { notFound } from '@/lib/http/errors';
+import { outcomeResponse } from '@/lib/http/kit';
+import { readPatch } from '@/lib/http/parse';
+import { route } from '@/lib/http/route';
 import { LaborPatchControlSchema, LaborSchema } from '@/lib/schemas/labor';
 
-export const dynamic = 'force-dynamic';
+const LABEL = 'labour operation';
 
-export async function GET(request: Request, context: IdParams) {
-  const user = await requireRole(request);
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'labour operation');
-  if (id instanceof Response) return id;
-  const op = await getLabor(id);
-  if (!op) return errorResponse(404, `No labour operation with id ${id}.`);
+export const GET = route({ permission: 'catalogue.read', ids: { id: LABEL } }, async ({ ids }) => {
+  const op = await getLabor(ids.id);
+  if (!op) throw notFound(LABEL, ids.id);
   return NextResponse.json(op);
-}
+});
 
-export async function PATCH(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'labour operation');
-  if (id instanceof Response) return id;
-  const current = await getLabor(id);
-  if (!current) return errorResponse(404, `No labour operation with id ${id}.`);
-  const patch = await parsePatch(request, LaborPatchControlSchema, LaborSchema, laborFormValues(current));
-  if (!patch.ok) return patch.response;
-  return outcomeResponse(await updateLabor(id, patch.control.version, patch.values, user), { label: 'labour operation' });
-}
+/** The body is read after the lookup: a missing operation is 404 whatever the body says. */
+export const PATCH = route({ permission: 'catalogue.write', ids: { id: LABEL } }, async ({ request, user, ids }) => {
+  const current = await getLabor(ids.id);
+  if (!current) throw notFound(LABEL, ids.id);
+  const patch = await readPatch(request, LaborPatchControlSchema, LaborSchema, laborFormValues(current));
+  return outcomeResponse(await updateLabor(ids.id, patch.control.version, patch.values, user), { label: LABEL });
+});
 
-export async function DELETE(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'labour operation');
-  if (id instanceof Response) return id;
-  return outcomeResponse(await removeLabor(id, user), { label: 'labour operation' });
-}
+export const DELETE = route({ permission: 'catalogue.write', ids: { id: LABEL } }, async ({ user, ids }) =>
+  outcomeResponse(await removeLabor(ids.id, user), { label: LABEL }),
+);

@@ -1,44 +1,25 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
-import { getRule, removeRule, updateRule } from '@/lib/db/queries/rules';
-import { errorResponse } from '@/lib/http/responses';
+import { getRule, removeRule, ruleFormValues, updateRule } from '@/lib/db/queries/rules';
+import { notFound } from '@/lib/http/errors';
+import { outcomeResponse } from '@/lib/http/kit';
+import { readPatch } from '@/lib/http/parse';
+import { route } from '@/lib/http/route';
 import { NeedRulePatchControlSchema, NeedRuleSchema } from '@/lib/schemas/need-rule';
 
-export const dynamic = 'force-dynamic';
+export const GET = route({ permission: 'catalogue.read', ids: { id: 'rule' } }, async ({ ids }) => {
+  const rule = await getRule(ids.id);
+  if (!rule) throw notFound('rule', ids.id);
+  return NextResponse.json(rule);
+});
 
-export async function GET(request: Request, context: IdParams) {
-  const user = await requireRole(request);
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'rule');
-  if (id instanceof Response) return id;
-  const rule = await getRule(id);
-  return rule ? NextResponse.json(rule) : errorResponse(404, `No rule with id ${id}.`);
-}
+/** The body is read after the lookup: a missing rule is 404 whatever the body says. */
+export const PATCH = route({ permission: 'catalogue.write', ids: { id: 'rule' } }, async ({ request, user, ids }) => {
+  const current = await getRule(ids.id);
+  if (!current) throw notFound('rule', ids.id);
+  const patch = await readPatch(request, NeedRulePatchControlSchema, NeedRuleSchema, ruleFormValues(current));
+  return outcomeResponse(await updateRule(ids.id, patch.control.version, patch.values, user), { label: 'rule' });
+});
 
-export async function PATCH(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'rule');
-  if (id instanceof Response) return id;
-  const current = await getRule(id);
-  if (!current) return errorResponse(404, `No rule with id ${id}.`);
-  const values = {
-    kind: current.kind,
-    vehicleClass: current.vehicleClass,
-    label: current.label,
-    active: current.active,
-    items: current.items.map((i) => ({ partId: i.partId, laborOperationId: i.laborOperationId, quantity: i.quantity })),
-  };
-  const patch = await parsePatch(request, NeedRulePatchControlSchema, NeedRuleSchema, values);
-  if (!patch.ok) return patch.response;
-  return outcomeResponse(await updateRule(id, patch.control.version, patch.values, user), { label: 'rule' });
-}
-
-export async function DELETE(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'rule');
-  if (id instanceof Response) return id;
-  return outcomeResponse(await removeRule(id, user), { label: 'rule', present: (r) => ({ outcome: 'deleted', rule: r }) });
-}
+export const DELETE = route({ permission: 'catalogue.write', ids: { id: 'rule' } }, async ({ user, ids }) =>
+  outcomeResponse(await removeRule(ids.id, user), { label: 'rule', present: (r) => ({ outcome: 'deleted', rule: r }) }),
+);

@@ -1,8 +1,6 @@
 import { attachmentCollectionRoutes } from '@/lib/http/attachment-routes';
 import { getCam } from '@/lib/db/queries/cams';
 
-export const dynamic = 'force-dynamic';
-
 const routes = attachmentCollectionRoutes('cam', async (id) => (await getCam(id)) !== null);
 export const GET = routes.GET;
 export const POST = routes.POST;

@@ -1,8 +1,6 @@
 import { attachmentCollectionRoutes } from '@/lib/http/attachment-routes';
 import { getPart } from '@/lib/db/queries/parts';
 
-export const dynamic = 'force-dynamic';
-
 const routes = attachmentCollectionRoutes('part', async (id) => (await getPart(id)) !== null);
 export const GET = routes.GET;
 export const POST = routes.POST;

@@ -1,7 +1,5 @@
 import { attachmentItemRoutes } from '@/lib/http/attachment-routes';
 
-export const dynamic = 'force-dynamic';
-
 const routes = attachmentItemRoutes('part');
 export const GET = routes.GET;
 export const DELETE = routes.DELETE;
