@@ -34,7 +34,5 @@ export function MailLayout({ shop, preview, children }: { shop: MailShop; previe
 
 export const paragraph = { fontSize: '16px', lineHeight: '24px', margin: '0 0 14px' };
 
-export const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
-
-export const longDate = (isoDate: string) =>
-  new Date(`${isoDate.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
+// E-mails format figures the way the screens do (src/lib/format.ts).
+export { formatMoney as money, longDate } from '@/lib/format';

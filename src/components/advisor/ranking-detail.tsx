@@ -5,8 +5,7 @@ import { SCORING_WEIGHTS, type SubscoreName } from '@/lib/advisor/weights';
 import { MakeQuoteButton } from '@/components/quotes/make-quote-button';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
 import { useState } from 'react';
-import { formatCents } from '@/components/catalogue/format';
-import { degText, pctText, rpmRangeText, rpmText } from './format';
+import { degText, formatMoney, pctText, rpmRangeText, rpmText } from '@/lib/format';
 import { ModelFigures } from './model-figures';
 
 type Ranking = ShopRankingEntry;
@@ -66,13 +65,13 @@ export function RankingDetail({ ranking, buildId, build }: { ranking: Ranking; b
               {ranking.neededItems.map((item, i) => (
                 <tr key={i} className="border-t border-steel-100">
                   <td className="py-1 font-sans">{item.part ? `${item.part.sku} ${item.part.name}` : `${item.laborOperation?.name} (${item.laborOperation?.hours} h)`}</td>
-                  <td className="py-1 text-right">{formatCents(item.priceCents)}</td>
+                  <td className="py-1 text-right">{formatMoney(item.priceCents)}</td>
                 </tr>
               ))}
             </tbody>
           </table>
         ) : null}
-        <p className="mt-2 text-sm"><span className="font-semibold">Job before tax:</span> <span className="spec">{formatCents(ranking.jobPriceCents)}</span> <span className="text-ink-muted">(cam, the parts and labour above, and the tune)</span></p>
+        <p className="mt-2 text-sm"><span className="font-semibold">Job before tax:</span> <span className="spec">{formatMoney(ranking.jobPriceCents)}</span> <span className="text-ink-muted">(cam, the parts and labour above, and the tune)</span></p>
         {buildId ? <MakeQuoteButton buildId={buildId} camId={ranking.camId} /> : null}
         <details className="mt-4 text-sm" onToggle={(e) => setExplaining(e.currentTarget.open)}>
           <summary className="cursor-pointer font-semibold">How these numbers were reached</summary>

@@ -4,8 +4,7 @@ import { useMemo, useState } from 'react';
 import useSWR from 'swr';
 import type { ShopRanking } from '@/lib/advisor-service';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
-import { formatCents } from '@/components/catalogue/format';
-import { hpText, pctText, rpmRangeText, rpmText, torqueText } from './format';
+import { formatMoney, hpText, pctText, rpmRangeText, rpmText, torqueText } from '@/lib/format';
 import { PowerChart } from './power-chart';
 import { RankingDetail } from './ranking-detail';
 
@@ -135,7 +134,7 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
                         <td className="px-3 py-2 text-right">{torqueText(r.predicted.peakTorqueLbFt)}</td>
                         <td className="px-3 py-2 text-right">{r.predicted.lowEndLossPct.toFixed(1)} %</td>
                         {/* The one job price (cam, needed parts and labour, tune): a quote drafted from this row totals the same before tax. */}
-                        <td className="px-3 py-2 text-right" data-job-price>{formatCents(r.jobPriceCents)}</td>
+                        <td className="px-3 py-2 text-right" data-job-price>{formatMoney(r.jobPriceCents)}</td>
                         <td className="whitespace-nowrap px-3 py-2 text-right">{r.stockOnHand > 0 ? `${r.stockOnHand} in stock` : <span className="font-sans text-caution-700">None: order</span>}</td>
                         <td className="px-3 py-2">
                           <input type="checkbox" aria-label={`Show ${r.camName} on the chart`} checked={chartIds.includes(id)} onChange={() => toggleChart(id)} />

@@ -5,7 +5,8 @@ import { useState } from 'react';
 import { z } from 'zod';
 import { PASSWORD_MAX, PASSWORD_MIN, changePasswordSchema } from '@/lib/schemas/auth';
 import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
-import { Notice, SubmitButton, TextField } from './form-parts';
+import { SubmitButton, TextField } from './form-parts';
+import { Banner } from '@/components/ui/banner';
 
 type Values = { currentPassword: string; newPassword: string; repeat: string };
 
@@ -37,7 +38,7 @@ export function ChangePasswordForm() {
     >
       {({ isSubmitting }) => (
         <Form className="flex max-w-md flex-col gap-4" noValidate>
-          {result ? <Notice tone={result.tone}>{result.text}</Notice> : null}
+          {result ? <Banner tone={result.tone}>{result.text}</Banner> : null}
           <TextField name="currentPassword" label="Current password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
           <TextField name="newPassword" label="New password" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more.`} />
           <TextField name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />

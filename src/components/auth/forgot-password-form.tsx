@@ -4,7 +4,8 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import { EMAIL_MAX, forgotPasswordSchema } from '@/lib/schemas/auth';
 import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
-import { Notice, SubmitButton, TextField } from './form-parts';
+import { SubmitButton, TextField } from './form-parts';
+import { Banner } from '@/components/ui/banner';
 
 type Values = { email: string };
 
@@ -23,7 +24,7 @@ export function ForgotPasswordForm() {
     >
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
-          {answer ? <Notice tone={answer.tone}>{answer.text}</Notice> : null}
+          {answer ? <Banner tone={answer.tone}>{answer.text}</Banner> : null}
           <TextField name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
           <div><SubmitButton busy={isSubmitting}>Send the link</SubmitButton></div>
         </Form>

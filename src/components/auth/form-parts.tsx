@@ -29,21 +29,6 @@ export function TextField({ name, label, type = 'text', autoComplete, hint, auto
   );
 }
 
-export function Notice({ tone, children }: { tone: 'ok' | 'fault' | 'caution' | 'info'; children: React.ReactNode }) {
-  const styles = {
-    ok: 'border-ok-700/40 bg-ok-100 text-ok-700',
-    fault: 'border-fault-700/40 bg-fault-100 text-fault-700',
-    caution: 'border-caution-700/40 bg-caution-100 text-caution-700',
-    info: 'border-gauge-500/40 bg-gauge-100 text-gauge-700',
-  }[tone];
-  const word = { ok: 'Done', fault: 'Problem', caution: 'Note', info: 'Info' }[tone];
-  return (
-    <div role={tone === 'fault' ? 'alert' : 'status'} className={`rounded border px-3 py-2 text-sm ${styles}`}>
-      <span className="font-semibold">{word}:</span> {children}
-    </div>
-  );
-}
-
 export function SubmitButton({ busy, children }: { busy: boolean; children: React.ReactNode }) {
   return (
     <button type="submit" disabled={busy} className="rounded bg-ember-500 px-4 py-2 font-semibold text-paper-raised hover:bg-ember-600 disabled:opacity-60">

@@ -6,7 +6,8 @@ import { useState } from 'react';
 import { PASSWORD_MAX, PASSWORD_MIN, newPasswordField } from '@/lib/schemas/auth';
 import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
 import { z } from 'zod';
-import { Notice, SubmitButton, TextField } from './form-parts';
+import { SubmitButton, TextField } from './form-parts';
+import { Banner } from '@/components/ui/banner';
 
 type Values = { password: string; repeat: string };
 
@@ -19,7 +20,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   if (result?.tone === 'ok') {
     return (
       <div className="flex flex-col gap-4">
-        <Notice tone="ok">{result.text}</Notice>
+        <Banner tone="ok">{result.text}</Banner>
         <Link href="/sign-in" className="self-start rounded bg-ember-500 px-4 py-2 font-semibold text-paper-raised hover:bg-ember-600">Go to sign-in</Link>
       </div>
     );
@@ -37,7 +38,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     >
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
-          {result ? <Notice tone={result.tone}>{result.text}</Notice> : null}
+          {result ? <Banner tone={result.tone}>{result.text}</Banner> : null}
           <TextField name="password" label="New password" type="password" autoComplete="new-password" autoFocus maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more; a short sentence works well.`} />
           <TextField name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
           <div><SubmitButton busy={isSubmitting}>Save the password</SubmitButton></div>

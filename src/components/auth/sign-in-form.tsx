@@ -6,7 +6,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { EMAIL_MAX, PASSWORD_MAX, signInSchema } from '@/lib/schemas/auth';
 import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
-import { Notice, SubmitButton, TextField } from './form-parts';
+import { SubmitButton, TextField } from './form-parts';
+import { Banner } from '@/components/ui/banner';
 
 type Values = { email: string; password: string };
 
@@ -32,7 +33,7 @@ export function SignInForm({ next }: { next: string }) {
     >
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
-          {problem ? <Notice tone="fault">{problem}</Notice> : null}
+          {problem ? <Banner tone="fault">{problem}</Banner> : null}
           <TextField name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
           <TextField name="password" label="Password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
           <div className="flex items-center justify-between gap-4">

@@ -6,7 +6,9 @@ import useSWR from 'swr';
 import { EMAIL_MAX } from '@/lib/schemas/auth';
 import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES, inviteUserSchema } from '@/lib/schemas/user';
 import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
-import { Notice, SubmitButton, TextField } from './form-parts';
+import { SubmitButton, TextField } from './form-parts';
+import { Banner } from '@/components/ui/banner';
+import { dateTime } from '@/lib/format';
 
 type Role = (typeof STAFF_ROLE_VALUES)[number];
 type StaffRow = { id: number; email: string; name: string; role: Role; active: boolean; version: number; hasPassword: boolean; lastSignInAt: string | null };
@@ -24,7 +26,6 @@ function stateOf(row: StaffRow): { word: string; style: string } {
   return { word: 'Active', style: 'bg-ok-100 text-ok-700' };
 }
 
-const dateFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 export function StaffManager({ selfId }: { selfId: number }) {
   const { data, error, isLoading, mutate } = useSWR('/api/users', fetchStaff);
@@ -46,8 +47,8 @@ export function StaffManager({ selfId }: { selfId: number }) {
     <div className="flex flex-col gap-8">
       <section aria-labelledby="staff-list-title">
         <h2 id="staff-list-title" className="sr-only">Staff accounts</h2>
-        <div aria-live="polite" className="mb-3 min-h-[2.5rem]">{message ? <Notice tone={message.tone}>{message.text}</Notice> : null}</div>
-        {error ? <Notice tone="fault">{(error as Error).message}</Notice> : null}
+        <div aria-live="polite" className="mb-3 min-h-[2.5rem]">{message ? <Banner tone={message.tone}>{message.text}</Banner> : null}</div>
+        {error ? <Banner tone="fault">{(error as Error).message}</Banner> : null}
         {isLoading ? <p className="text-sm text-ink-muted">Loading the staff list…</p> : null}
         {data ? (
           // A phone scrolls the table, not the page (each row carries a role picker and buttons); relative keeps
@@ -85,7 +86,7 @@ export function StaffManager({ selfId }: { selfId: number }) {
                         </select>
                       </td>
                       <td className="py-1.5 pr-3"><span className={`rounded px-2 py-0.5 text-xs font-semibold ${state.style}`}>{state.word}</span></td>
-                      <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateFormat.format(new Date(row.lastSignInAt)) : 'never'}</td>
+                      <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateTime(row.lastSignInAt) : 'never'}</td>
                       <td className="py-1.5 text-right">
                         {self ? null : (
                           <button
@@ -141,7 +142,7 @@ function InviteForm({ onInvited }: { onInvited: (text: string) => Promise<void> 
     >
       {({ isSubmitting, values, setFieldValue }) => (
         <Form className="flex flex-col gap-4" noValidate>
-          {problem ? <Notice tone="fault">{problem}</Notice> : null}
+          {problem ? <Banner tone="fault">{problem}</Banner> : null}
           <TextField name="name" label="Name" autoComplete="off" maxLength={NAME_MAX} />
           <TextField name="email" label="E-mail" type="email" autoComplete="off" maxLength={EMAIL_MAX} />
           <div className="flex flex-col gap-1">

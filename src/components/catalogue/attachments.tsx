@@ -3,8 +3,9 @@
 import { useRef, useState } from 'react';
 import useSWR from 'swr';
 import { getJson, sendJson } from './api';
-import { bytes } from './format';
-import { Banner, buttonClass } from './ui';
+import { bytes } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { buttonClass } from '@/components/ui/button';
 
 type Attachment = { id: number; fileName: string; contentType: string; byteSize: number; createdAt: string; url: string };
 
@@ -70,7 +71,7 @@ export function Attachments({ baseUrl, canEdit }: { baseUrl: string; canEdit: bo
       </ul>
       {canEdit ? (
         <div className="flex flex-wrap items-center gap-2">
-          <label className={`${buttonClass.quiet} cursor-pointer`}>
+          <label className={buttonClass('quiet', 'cursor-pointer')}>
             {busy ? 'Uploading…' : 'Attach a PDF, PNG or JPEG (up to 5 MB)'}
             <input ref={input} type="file" accept="application/pdf,image/png,image/jpeg" className="sr-only" disabled={busy} onChange={(e) => e.target.files?.[0] && upload(e.target.files[0])} />
           </label>

@@ -6,8 +6,11 @@ import { useEffect, useState } from 'react';
 import useSWR from 'swr';
 import type { CamRecord } from '@/lib/db/queries/cams';
 import { getJson, type ApiError } from './api';
-import { deg, formatCents, inches } from './format';
-import { Banner, buttonClass, StateTag, tableClass, tdClass, thClass } from './ui';
+import { deg, formatMoney, inches } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 
 // The cam list: filters and sort live in the address (so a filtered list can be shared and the back
 // button works), the server does the paging, SWR keeps the previous page on screen while the next loads.
@@ -118,10 +121,10 @@ export function CamList({ suppliers, canEdit }: { suppliers: { id: number; name:
           </div>
         </div>
         <div className="flex items-end gap-2 sm:col-span-3 lg:col-span-6">
-          <button type="submit" className={buttonClass.quiet}>Apply filters</button>
-          <button type="button" className={buttonClass.quiet} onClick={() => { setDraft(Object.fromEntries(FILTERS.map((f) => [f, ''])) as typeof draft); router.replace('?', { scroll: false }); }}>
+          <Button type="submit" variant="quiet">Apply filters</Button>
+          <Button type="button" variant="quiet" onClick={() => { setDraft(Object.fromEntries(FILTERS.map((f) => [f, ''])) as typeof draft); router.replace('?', { scroll: false }); }}>
             Clear
-          </button>
+          </Button>
           <span className="ml-auto text-xs text-ink-muted" aria-live="polite">
             {isLoading ? 'Loading cams…' : isValidating ? 'Updating…' : data ? `${data.total} cam${data.total === 1 ? '' : 's'}` : ''}
           </span>
@@ -166,7 +169,7 @@ export function CamList({ suppliers, canEdit }: { suppliers: { id: number; name:
                 <td className={`${tdClass} spec whitespace-nowrap text-right`}>{deg(cam.intakeDuration050)} / {deg(cam.exhaustDuration050)}</td>
                 <td className={`${tdClass} spec whitespace-nowrap text-right`}>{inches(cam.intakeLiftIn)} / {inches(cam.exhaustLiftIn)}</td>
                 <td className={`${tdClass} spec text-right`}>{deg(cam.lsa)}</td>
-                <td className={`${tdClass} spec text-right`}>{formatCents(cam.priceCents)}</td>
+                <td className={`${tdClass} spec text-right`}>{formatMoney(cam.priceCents)}</td>
                 <td className={`${tdClass} spec text-right`}>{cam.stockOnHand}</td>
                 <td className={tdClass}>
                   {cam.archivedAt ? <StateTag tone="muted">Archived</StateTag> : cam.active ? <StateTag tone="ok">Active</StateTag> : <StateTag tone="caution">Inactive</StateTag>}{' '}
@@ -185,15 +188,15 @@ export function CamList({ suppliers, canEdit }: { suppliers: { id: number; name:
       </div>
 
       <nav aria-label="Pages" className="flex items-center gap-2 text-sm">
-        <button type="button" className={buttonClass.quiet} disabled={page <= 1} onClick={() => apply({ page: String(page - 1) }, false)}>
+        <Button type="button" variant="quiet" disabled={page <= 1} onClick={() => apply({ page: String(page - 1) }, false)}>
           ← Previous
-        </button>
+        </Button>
         <span className="tabular-nums">
           Page {page} of {pages}
         </span>
-        <button type="button" className={buttonClass.quiet} disabled={page >= pages} onClick={() => apply({ page: String(page + 1) }, false)}>
+        <Button type="button" variant="quiet" disabled={page >= pages} onClick={() => apply({ page: String(page + 1) }, false)}>
           Next →
-        </button>
+        </Button>
       </nav>
     </div>
   );

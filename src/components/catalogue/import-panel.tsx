@@ -1,8 +1,11 @@
 'use client';
 
 import { useState } from 'react';
-import { formatCents } from './format';
-import { Banner, buttonClass, StateTag, tableClass, tdClass, thClass } from './ui';
+import { formatMoney } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { Button, buttonClass } from '@/components/ui/button';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 
 type Report = {
   mode: 'preview' | 'commit';
@@ -45,7 +48,7 @@ function post(file: File, mode: 'preview' | 'commit', onProgress: (fraction: num
 
 function cell(field: string, value: unknown) {
   if (value === null || value === undefined || value === '') return '(blank)';
-  if (field.endsWith('Cents')) return formatCents(Number(value));
+  if (field.endsWith('Cents')) return formatMoney(Number(value));
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return String(value);
 }
@@ -98,17 +101,16 @@ export function ImportPanel() {
           />
         </label>
         <div className="flex flex-wrap items-center gap-2">
-          <button type="button" className={buttonClass.quiet} disabled={!file || stage === 'uploading' || stage === 'checking'} onClick={() => run('preview')}>
+          <Button type="button" variant="quiet" disabled={!file || stage === 'uploading' || stage === 'checking'} onClick={() => run('preview')}>
             Check the file (nothing is saved)
-          </button>
-          <button
-            type="button"
-            className={buttonClass.primary}
+          </Button>
+          <Button
+            type="button" variant="primary"
             disabled={!file || !report || report.mode !== 'preview' || report.errors.length > 0 || stage === 'uploading' || stage === 'checking'}
             onClick={() => run('commit')}
           >
             Import {report && report.mode === 'preview' ? `${report.summary.create + report.summary.update} change(s)` : ''}
-          </button>
+          </Button>
           <a href={TEMPLATE_URL} download className="text-sm text-gauge-700 underline">
             Download the template
           </a>
@@ -140,7 +142,7 @@ export function ImportPanel() {
           ))}
           <div className="flex gap-2 text-sm" role="group" aria-label="Rows to show">
             {(['all', 'problems', 'changes'] as const).map((v) => (
-              <button key={v} type="button" aria-pressed={show === v} className={`${buttonClass.quiet} ${show === v ? 'ring-2 ring-gauge-500' : ''}`} onClick={() => setShow(v)}>
+              <button key={v} type="button" aria-pressed={show === v} className={buttonClass('quiet', show === v ? 'ring-2 ring-gauge-500' : '')} onClick={() => setShow(v)}>
                 {v === 'all' ? 'All rows' : v === 'problems' ? 'Problems only' : 'Changes only'}
               </button>
             ))}

@@ -4,8 +4,9 @@ import { Form, Formik, useField, type FormikErrors, type FormikHelpers } from 'f
 import { useState } from 'react';
 import type { z } from 'zod';
 import { sendJson } from './api';
-import { formatCents } from './format';
-import { Banner, buttonClass } from './ui';
+import { centsFromText, formatMoney } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
 
 // One formik form for every catalogue record. Fields are described once (FieldDef); the browser checks
 // them with the same zod schema the server uses, the server's 422 lands on the same fields, and a 409
@@ -50,8 +51,7 @@ export function payloadFromValues(fields: FieldDef[], values: FormValues): Recor
     if (text === '') out[f.name] = null;
     else if (f.kind === 'number' || f.kind === 'integer') out[f.name] = Number.isFinite(Number(text)) ? Number(text) : text;
     else if (f.kind === 'money') {
-      const m = /^\$?(\d+)(?:\.(\d{1,2}))?$/.exec(text.replace(/,/g, ''));
-      out[f.name] = m ? Number(m[1]) * 100 + Number((m[2] ?? '0').padEnd(2, '0')) : text;
+      out[f.name] = centsFromText(text) ?? text;
     } else if (f.kind === 'select' && /^\d+$/.test(text) && f.name.endsWith('Id')) out[f.name] = Number(text);
     else out[f.name] = text;
   }
@@ -130,7 +130,7 @@ function Field({ def }: { def: FieldDef }) {
 
 function show(def: FieldDef | undefined, value: unknown): string {
   if (value === null || value === undefined || value === '') return '(blank)';
-  if (def?.kind === 'money') return formatCents(Number(value));
+  if (def?.kind === 'money') return formatMoney(Number(value));
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return `${String(value)}${def?.unit ? ` ${def.unit}` : ''}`;
 }
@@ -226,9 +226,8 @@ export function RecordForm({
                   <p>Their save changed nothing you can see in this form.</p>
                 )}
                 <div className="mt-3 flex flex-wrap gap-2">
-                  <button
-                    type="button"
-                    className={buttonClass.quiet}
+                  <Button
+                    type="button" variant="quiet"
                     onClick={() => {
                       setBase(conflict.current as typeof base);
                       setValues(valuesFromRecord(fields, conflict.current));
@@ -236,17 +235,16 @@ export function RecordForm({
                     }}
                   >
                     Load their version
-                  </button>
-                  <button
-                    type="button"
-                    className={buttonClass.quiet}
+                  </Button>
+                  <Button
+                    type="button" variant="quiet"
                     onClick={() => {
                       setBase(conflict.current as typeof base);
                       setConflict(null);
                     }}
                   >
                     Keep my values (then save again)
-                  </button>
+                  </Button>
                 </div>
               </Banner>
             ) : null}
@@ -257,9 +255,9 @@ export function RecordForm({
               ))}
             </div>
             <div className="flex items-center gap-3">
-              <button type="submit" className={buttonClass.primary} disabled={isSubmitting || Boolean(conflict)}>
+              <Button type="submit" variant="primary" disabled={isSubmitting || Boolean(conflict)}>
                 {isSubmitting ? 'Saving…' : submitLabel}
-              </button>
+              </Button>
               {base?.version ? <span className="text-xs text-ink-muted">Version {String(base.version)}</span> : null}
             </div>
           </Form>

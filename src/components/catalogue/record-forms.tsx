@@ -6,7 +6,7 @@ import { LaborSchema, LABOR_LIMITS } from '@/lib/schemas/labor';
 import { PART_CATEGORY_LIST, PartSchema } from '@/lib/schemas/part';
 import { SETTINGS_LIMITS, ShopSettingsSchema } from '@/lib/schemas/settings';
 import { RecordForm, type FieldDef } from './record-form';
-import { Banner } from './ui';
+import { Banner } from '@/components/ui/banner';
 
 type Rec = (Record<string, unknown> & { id: number; version: number }) | null;
 

@@ -6,7 +6,8 @@ import { useState } from 'react';
 import { VEHICLE_CLASSES, type VehicleClass } from '@/lib/schemas/build-profile';
 import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, NeedRuleSchema, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
 import { sendJson } from './api';
-import { Banner, buttonClass } from './ui';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
 
 type Item = { partId: string; laborOperationId: string; quantity: string };
 type Values = { kind: (typeof NEED_RULE_KIND_OPTIONS)[number]; vehicleClass: VehicleClass | 'any'; label: string; active: boolean; items: Item[] };
@@ -63,12 +64,12 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                   Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}, {RULE_VEHICLE_CLASS_TEXT[conflict.vehicleClass ?? 'any']}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
                 </p>
                 <div className="mt-2 flex gap-2">
-                  <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setValues({ ...values, kind: conflict.kind, vehicleClass: conflict.vehicleClass ?? 'any', label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); setConflict(null); }}>
+                  <Button type="button" variant="quiet" onClick={() => { setVersion(conflict.version); setValues({ ...values, kind: conflict.kind, vehicleClass: conflict.vehicleClass ?? 'any', label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); setConflict(null); }}>
                     Load their version
-                  </button>
-                  <button type="button" className={buttonClass.quiet} onClick={() => { setVersion(conflict.version); setConflict(null); }}>
+                  </Button>
+                  <Button type="button" variant="quiet" onClick={() => { setVersion(conflict.version); setConflict(null); }}>
                     Keep mine (then save again)
-                  </button>
+                  </Button>
                 </div>
               </Banner>
             ) : null}
@@ -134,16 +135,16 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                     </div>
                   ))}
                   {show('items') ? <p className="text-xs text-fault-700">Problem: {show('items')}</p> : null}
-                  <button type="button" className={`${buttonClass.quiet} self-start`} onClick={() => push({ partId: '', laborOperationId: '', quantity: '1' })}>
+                  <Button type="button" variant="quiet" className="self-start" onClick={() => push({ partId: '', laborOperationId: '', quantity: '1' })}>
                     Add another item
-                  </button>
+                  </Button>
                 </fieldset>
               )}
             </FieldArray>
             <div>
-              <button type="submit" className={buttonClass.primary} disabled={isSubmitting || Boolean(conflict)}>
+              <Button type="submit" variant="primary" disabled={isSubmitting || Boolean(conflict)}>
                 {isSubmitting ? 'Saving…' : rule ? 'Save rule' : 'Add rule'}
-              </button>
+              </Button>
             </div>
           </Form>
         );
@@ -157,9 +158,8 @@ export function DeleteButton({ url, label, after }: { url: string; label: string
   const [message, setMessage] = useState<string | null>(null);
   return (
     <span className="inline-flex flex-col gap-1">
-      <button
-        type="button"
-        className={buttonClass.danger}
+      <Button
+        type="button" variant="danger"
         onClick={async () => {
           if (!window.confirm(`${label}?`)) return;
           const result = await sendJson<{ outcome?: string }>('DELETE', url);
@@ -170,7 +170,7 @@ export function DeleteButton({ url, label, after }: { url: string; label: string
         }}
       >
         {label}
-      </button>
+      </Button>
       {message ? <span role="alert" className="text-xs text-fault-700">{message}</span> : null}
     </span>
   );

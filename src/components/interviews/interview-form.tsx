@@ -4,7 +4,8 @@ import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
 import { useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
 import useSWR from 'swr';
-import { Notice, SubmitButton } from '@/components/auth/form-parts';
+import { SubmitButton } from '@/components/auth/form-parts';
+import { Banner } from '@/components/ui/banner';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
 import { sendJson } from '@/lib/forms/zod-formik';
 import { BuildCreateSchema, BuildUpdateSchema } from '@/lib/schemas/build';
@@ -104,7 +105,7 @@ export function InterviewForm(props: Props) {
           <DrivetrainSection />
           <WishesSection />
           <BaselineSection cards={cards} />
-          {problem ? <Notice tone="fault">{problem}</Notice> : null}
+          {problem ? <Banner tone="fault">{problem}</Banner> : null}
           <div className="flex flex-wrap items-center gap-3">
             <SubmitButton busy={formik.isSubmitting}>{mode === 'edit' ? 'Save and open the shortlist' : 'Save and rank cams'}</SubmitButton>
             <span className="text-xs text-ink-muted">Saving takes you to the cam shortlist for this build.</span>
@@ -290,12 +291,12 @@ function WishesSection() {
       )}
       <div className="flex flex-col gap-2 sm:col-span-2 lg:col-span-4">
         {u.emissionsRequired === 'yes' ? (
-          <Notice tone="caution">
+          <Banner tone="caution">
             Emissions: many jurisdictions forbid an aftermarket cam on a road vehicle unless the part is certified for it; follow local codes. The shortlist marks cams that are not certified.
-          </Notice>
+          </Banner>
         ) : null}
         {u.idle === 'aggressive' && values.profile.vehicle.powerBrakes === 'vacuum' ? (
-          <Notice tone="caution">Brakes: a choppy idle means less idle vacuum and less brake assist from a vacuum booster; a qualified technician should check it after the swap.</Notice>
+          <Banner tone="caution">Brakes: a choppy idle means less idle vacuum and less brake assist from a vacuum booster; a qualified technician should check it after the swap.</Banner>
         ) : null}
       </div>
     </Section>

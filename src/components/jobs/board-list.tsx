@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import type { BoardJob } from '@/lib/db/queries/job-board';
 import { dayLabel, DueTag, JobStateTag } from './job-state-tag';
 

@@ -3,7 +3,8 @@
 import { useState } from 'react';
 import useSWR from 'swr';
 import { PowerChart, type ChartCurve } from '@/components/advisor/power-chart';
-import { buttonClass, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { Button } from '@/components/ui/button';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
 import { DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_DIGITS, AIR_UNIT_TEXT, baroIn, tempIn, type AirUnits } from '@/lib/dyno/units';
@@ -96,7 +97,7 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
                   {run.correction ? `${STANDARD_NAMES[run.correction.standard]} × ${run.correction.factor.toFixed(4)}` : '—'}
                 </td>
                 <td className={`${tdClass} spec text-right`}>{fixed(run.corrected?.peakHp, 1, 'hp')} · {fixed(run.corrected?.peakTorqueLbFt, 1, 'lb·ft')}</td>
-                <td className={`${tdClass} print:hidden`}><button type="button" className={buttonClass.danger} onClick={() => remove(run)}>Delete</button></td>
+                <td className={`${tdClass} print:hidden`}><Button type="button" variant="danger" onClick={() => remove(run)}>Delete</Button></td>
               </tr>
             ))}
           </tbody>

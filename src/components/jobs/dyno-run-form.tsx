@@ -2,7 +2,7 @@
 
 import { ErrorMessage, Field, Form, Formik, type FormikHelpers } from 'formik';
 import { useMemo } from 'react';
-import { buttonClass } from '@/components/catalogue/ui';
+import { Button } from '@/components/ui/button';
 import { AIR_NEEDED_BY, CORRECTION_TEXT, STANDARD_LABELS } from '@/lib/dyno/correction';
 import { DYNO_TYPES, DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_UNIT_TEXT, type AirUnits } from '@/lib/dyno/units';
@@ -151,7 +151,7 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
             <ErrorMessage name="notes">{(m) => <FieldProblem id="dyno-notes-error" error={m} />}</ErrorMessage>
           </div>
           <div className="flex items-center gap-3">
-            <button type="submit" className={buttonClass.primary} disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Record run'}</button>
+            <Button type="submit" variant="primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Record run'}</Button>
             {status ? (
               <p role="status" className={`text-sm ${status.tone === 'ok' ? 'text-ok-700' : 'text-fault-700'}`}>
                 <span className="font-semibold">{status.tone === 'ok' ? 'Done:' : 'Problem:'}</span> {status.text}

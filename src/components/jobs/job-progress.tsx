@@ -2,7 +2,8 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { Banner, buttonClass } from '@/components/catalogue/ui';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
 import type { BoardJob } from '@/lib/db/queries/job-board';
 import { STATE_WORDS, type JobState } from '@/lib/jobs/states';
 import { JOB_LIMITS } from '@/lib/schemas/job';
@@ -79,16 +80,16 @@ export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
           </select>
           {fieldError('technicianId')}
         </div>
-        <button type="submit" className={buttonClass.primary} disabled={busy || job.state === 'collected'}>
+        <Button type="submit" variant="primary" disabled={busy || job.state === 'collected'}>
           {job.state === 'not-booked' ? 'Book the job' : 'Save booking'}
-        </button>
+        </Button>
       </form>
       {job.state !== 'not-booked' && job.nextStates.length ? (
         <div className="mt-3 flex flex-wrap gap-2 print:hidden" role="group" aria-label="Move the job">
           {job.nextStates.map((to, i) => (
-            <button key={to} type="button" className={i === 0 ? buttonClass.primary : buttonClass.quiet} disabled={busy} onClick={() => void save({ state: to }, `Moved to: ${STATE_WORDS[to]}.`)}>
+            <Button key={to} type="button" variant={i === 0 ? 'primary' : 'quiet'} disabled={busy} onClick={() => void save({ state: to }, `Moved to: ${STATE_WORDS[to]}.`)}>
               {moveLabel(to)}
-            </button>
+            </Button>
           ))}
         </div>
       ) : null}

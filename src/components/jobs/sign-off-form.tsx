@@ -2,7 +2,8 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { Banner, buttonClass } from '@/components/catalogue/ui';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
 import type { SignOffWarning } from '@/lib/jobs/sign-off-limits';
 import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
 import { JOB_LIMITS } from '@/lib/schemas/job';
@@ -91,7 +92,7 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
         {err('notes')}
       </div>
       <div>
-        <button type="submit" className={buttonClass.primary} disabled={busy}>{busy ? 'Saving…' : 'Record the sign-off'}</button>
+        <Button type="submit" variant="primary" disabled={busy}>{busy ? 'Saving…' : 'Record the sign-off'}</Button>
         <span className="ml-2 text-xs text-ink-muted">Ctrl+Enter records from any field.</span>
       </div>
       <div aria-live="polite">

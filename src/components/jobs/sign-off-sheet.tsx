@@ -1,4 +1,5 @@
-import { StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import type { SignOffView } from '@/lib/db/queries/job-board';
 import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
 import { READINGS } from './sign-off-fields';

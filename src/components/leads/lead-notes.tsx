@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { buttonClass } from '@/components/catalogue/ui';
+import { Button } from '@/components/ui/button';
 import type { LeadNoteView } from '@/lib/db/queries/lead-notes';
 import { LEAD_NOTE_LIMITS } from '@/lib/schemas/lead-note';
 
@@ -68,7 +68,7 @@ export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteVi
             }
           }}
         />
-        <button type="submit" className={buttonClass.quiet} disabled={saving || !body.trim()}>Add note</button>
+        <Button type="submit" variant="quiet" disabled={saving || !body.trim()}>Add note</Button>
       </form>
       {message ? <p role="status" className="text-xs text-ink-soft">{message}</p> : null}
     </section>

@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { buttonClass } from '@/components/catalogue/ui';
+import { Button } from '@/components/ui/button';
 import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
 import { LEAD_STATUS_WORDS } from './lead-status';
 
@@ -36,7 +36,7 @@ export function LeadStatusForm({ id, status, version }: { id: number; status: Le
       <select id={`lead-status-${id}`} value={value} onChange={(e) => setValue(e.target.value as LeadStatus)} className="rounded border border-steel-300 bg-paper-raised px-2 py-1">
         {LEAD_STATUSES.map((s) => <option key={s} value={s}>{LEAD_STATUS_WORDS[s]}</option>)}
       </select>
-      <button type="submit" disabled={saving || value === status} className={buttonClass.quiet}>{saving ? 'Saving…' : 'Save'}</button>
+      <Button type="submit" disabled={saving || value === status} variant="quiet">{saving ? 'Saving…' : 'Save'}</Button>
       {message ? <span role="status">{message}</span> : null}
     </form>
   );

@@ -1,4 +1,4 @@
-import { StateTag } from '@/components/catalogue/ui';
+import { StateTag } from '@/components/ui/state-tag';
 import type { LeadStatus } from '@/lib/schemas/lead';
 
 // Lead states, always as a word (the colour only repeats it).

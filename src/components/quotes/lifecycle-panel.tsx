@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { sendJson } from '@/components/catalogue/api';
-import { buttonClass } from '@/components/catalogue/ui';
+import { Button, ButtonAnchor } from '@/components/ui/button';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { canRevise, isOpen, staffMoves, stateWord, type QuoteStatus } from '@/lib/quotes/lifecycle';
@@ -58,26 +58,26 @@ export function LifecyclePanel({ quote, url, run, busy, canWrite }: { quote: Quo
       <div className="mt-2 flex flex-wrap gap-2">
         {moves.map((to) =>
           confirming === to ? null : (
-            <button key={to} type="button" className={to === 'accepted' || to === 'closed' ? buttonClass.primary : buttonClass.quiet} disabled={busy}
+            <Button key={to} type="button" variant={to === 'accepted' || to === 'closed' ? 'primary' : 'quiet'} disabled={busy}
               onClick={() => (NEEDS_CONFIRM.includes(to) ? setConfirming(to) : void run('Not changed', 'POST', `${url}/transition`, { to, version: quote.version }, `Now: ${stateWord(to).toLowerCase()}.`))}>
               {MOVE_LABEL[to] ?? stateWord(to)}
-            </button>
+            </Button>
           ),
         )}
         {canWrite && canRevise(quote.status) ? (
-          <button type="button" className={buttonClass.quiet} disabled={busy} onClick={() => void revise()}>Revise (new draft, new number)</button>
+          <Button type="button" variant="quiet" disabled={busy} onClick={() => void revise()}>Revise (new draft, new number)</Button>
         ) : null}
-        <a className={buttonClass.quiet} href={`${url}/pdf`}>Download PDF</a>
+        <ButtonAnchor variant="quiet" href={`${url}/pdf`}>Download PDF</ButtonAnchor>
       </div>
       {confirming ? (
         <div role="alertdialog" aria-labelledby="move-confirm" className="mt-2 rounded border border-caution-700 bg-caution-100 p-2">
           <p id="move-confirm">{MOVE_LABEL[confirming]}: the quote becomes “{stateWord(confirming).toLowerCase()}”. Sure?</p>
           <div className="mt-2 flex gap-2">
-            <button type="button" className={buttonClass.danger} disabled={busy}
+            <Button type="button" variant="danger" disabled={busy}
               onClick={() => void run('Not changed', 'POST', `${url}/transition`, { to: confirming, version: quote.version }, `Now: ${stateWord(confirming).toLowerCase()}.`).then(() => setConfirming(null))}>
               Yes, {(MOVE_LABEL[confirming] ?? '').toLowerCase()}
-            </button>
-            <button type="button" className={buttonClass.quiet} onClick={() => setConfirming(null)}>No, go back</button>
+            </Button>
+            <Button type="button" variant="quiet" onClick={() => setConfirming(null)}>No, go back</Button>
           </div>
         </div>
       ) : null}
@@ -92,7 +92,7 @@ export function LifecyclePanel({ quote, url, run, busy, canWrite }: { quote: Quo
             Valid until
             <input type="date" value={validUntil} onChange={(e) => setValidUntil(e.target.value)} className="spec mt-1 block rounded border border-steel-300 px-1 py-0.5" />
           </label>
-          <button type="submit" className={buttonClass.quiet} disabled={busy}>Save date</button>
+          <Button type="submit" variant="quiet" disabled={busy}>Save date</Button>
         </form>
       ) : null}
     </section>

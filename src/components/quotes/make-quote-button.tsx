@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { sendJson } from '@/components/catalogue/api';
-import { buttonClass } from '@/components/catalogue/ui';
+import { Button } from '@/components/ui/button';
 
 /** On the shortlist: turns the build and this cam into a draft quote and opens it. */
 export function MakeQuoteButton({ buildId, camId }: { buildId: number; camId: number | string }) {
@@ -12,9 +12,8 @@ export function MakeQuoteButton({ buildId, camId }: { buildId: number; camId: nu
   const [error, setError] = useState<string | null>(null);
   return (
     <div className="mt-3">
-      <button
-        type="button"
-        className={buttonClass.primary}
+      <Button
+        type="button" variant="primary"
         disabled={busy}
         onClick={async () => {
           setBusy(true);
@@ -26,7 +25,7 @@ export function MakeQuoteButton({ buildId, camId }: { buildId: number; camId: nu
         }}
       >
         {busy ? 'Making the quote…' : 'Make a quote'}
-      </button>
+      </Button>
       {error ? <p role="alert" className="mt-1 text-sm text-fault-700">Not made: {error}</p> : null}
     </div>
   );

@@ -1,4 +1,4 @@
-import { formatCents } from '@/components/catalogue/format';
+import { formatMoney } from '@/lib/format';
 import type { PaymentRecord } from '@/lib/db/queries/quotes';
 import { counts, METHOD_WORDS, PURPOSE_WORDS } from '@/lib/quotes/balance';
 import { PaymentStatusTag } from './status';
@@ -13,8 +13,8 @@ export function PaymentList({ payments, receiptHref }: { payments: PaymentRecord
         <li key={p.id} className="flex flex-wrap items-center gap-2">
           <PaymentStatusTag status={p.status} />
           <span>{PURPOSE_WORDS[p.purpose]}</span>
-          <span className="spec">{formatCents(p.amountCents)}</span>
-          {p.refundedCents ? <span className="spec">(refunded {formatCents(p.refundedCents)})</span> : null}
+          <span className="spec">{formatMoney(p.amountCents)}</span>
+          {p.refundedCents ? <span className="spec">(refunded {formatMoney(p.refundedCents)})</span> : null}
           {p.duplicateOfPaymentId ? <span className="text-ink-muted">paid twice, given back at once</span> : null}
           <span className="text-ink-muted">{METHOD_WORDS[p.method]}{p.recordedBy ? `, taken by ${p.recordedBy.name}` : ''}{p.paidAt ? `, ${p.paidAt.slice(0, 16).replace('T', ' ')} UTC` : ''}</span>
           {counts(p) ? <a className="underline" href={receiptHref(p.id)}>Receipt (PDF)</a> : null}

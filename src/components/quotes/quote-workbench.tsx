@@ -4,14 +4,16 @@ import Link from 'next/link';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { getJson, sendJson } from '@/components/catalogue/api';
-import { formatCents } from '@/components/catalogue/format';
-import { Banner, buttonClass, PageHeader, TableScroll, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { centsFromText, formatMoney, percentFromBp } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import type { StaffRole } from '@/lib/auth/guard';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { BalancePanel } from './balance-panel';
 import { LifecyclePanel } from './lifecycle-panel';
-import { dollarsToCents } from './money-input';
 import { QuoteBasis } from './quote-basis';
 import type { QuoteRun } from './quote-run';
 import { RefundForm } from './refund-form';
@@ -22,7 +24,6 @@ import { QuoteStatusTag } from './status';
 type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null };
 type Notice = { tone: 'ok' | 'fault' | 'caution'; title: string; detail?: string } | null;
 
-export { dollarsToCents };
 
 const toEdit = (q: QuoteRecord): EditLine[] =>
   q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: (l.unitPriceCents / 100).toFixed(2), discountCents: l.discountCents ?? 0, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
@@ -62,7 +63,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
     if (!editing) return;
     const lines: Array<{ kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null }> = [];
     for (const [i, l] of editing.entries()) {
-      const cents = dollarsToCents(l.price);
+      const cents = centsFromText(l.price);
       const quantity = Number(l.quantity);
       if (cents === null) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the price must be dollars and cents, e.g. 129.50` });
       if (!Number.isFinite(quantity) || quantity <= 0) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
@@ -84,11 +85,11 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         actions={
           canWrite ? (
             <>
-              {isDraft && !editing ? <button type="button" className={buttonClass.quiet} onClick={() => setEditing(toEdit(quote))}>Edit lines</button> : null}
+              {isDraft && !editing ? <Button type="button" variant="quiet" onClick={() => setEditing(toEdit(quote))}>Edit lines</Button> : null}
               {(isDraft || quote.status === 'sent') && !editing ? (
-                <button type="button" className={buttonClass.primary} disabled={busy} onClick={() => run('Not sent', () => sendJson('POST', `${url}/send`), `Sent to ${quote.customer.email}. The customer’s link is in the e-mail.`)}>
+                <Button type="button" variant="primary" disabled={busy} onClick={() => run('Not sent', () => sendJson('POST', `${url}/send`), `Sent to ${quote.customer.email}. The customer’s link is in the e-mail.`)}>
                   {quote.status === 'sent' ? 'Send again (new link)' : 'Send to customer'}
-                </button>
+                </Button>
               ) : null}
             </>
           ) : null
@@ -117,7 +118,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           <tbody>
             {editing
               ? editing.map((l, i) => {
-                  const cents = dollarsToCents(l.price);
+                  const cents = centsFromText(l.price);
                   const q = Number(l.quantity);
                   const total = cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6 ? Math.max(0, lineTotalCents(q, cents) - l.discountCents) : null;
                   // A catalogue line's kind (and so its tax) follows the catalogue item.
@@ -132,7 +133,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                       <td className={tdClass}><input aria-label={`Line ${i + 1} description`} value={l.description} onChange={(e) => set(i, { description: e.target.value })} className="w-full rounded border border-steel-300 px-1 py-0.5" /></td>
                       <td className={tdClass}><input aria-label={`Line ${i + 1} quantity`} inputMode="decimal" value={l.quantity} onChange={(e) => set(i, { quantity: e.target.value })} className="spec w-20 rounded border border-steel-300 px-1 py-0.5 text-right" /></td>
                       <td className={tdClass}><input aria-label={`Line ${i + 1} unit price in dollars`} inputMode="decimal" value={l.price} onChange={(e) => set(i, { price: e.target.value })} className="spec w-24 rounded border border-steel-300 px-1 py-0.5 text-right" /></td>
-                      <td className={`${tdClass} spec text-right`}>{total === null ? 'check' : formatCents(total)}</td>
+                      <td className={`${tdClass} spec text-right`}>{total === null ? 'check' : formatMoney(total)}</td>
                       <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
                       {quote.costCents !== undefined ? <td className={tdClass} /> : null}
                       <td className={tdClass}><button type="button" className="text-fault-700 underline" onClick={() => setEditing((rows) => rows!.filter((_, j) => j !== i))}>Remove</button></td>
@@ -144,13 +145,13 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                     <td className={tdClass}>{l.kind}</td>
                     <td className={tdClass}>{l.description}</td>
                     <td className={`${tdClass} spec text-right`}>{l.quantity}{l.kind === 'labor' ? ' h' : ''}</td>
-                    <td className={`${tdClass} spec text-right`}>{formatCents(l.unitPriceCents)}</td>
+                    <td className={`${tdClass} spec text-right`}>{formatMoney(l.unitPriceCents)}</td>
                     <td className={`${tdClass} spec text-right`}>
-                      {formatCents(l.totalCents)}
-                      {l.discountCents ? <span className="block text-xs text-ink-muted">after {formatCents(l.discountCents)} off</span> : null}
+                      {formatMoney(l.totalCents)}
+                      {l.discountCents ? <span className="block text-xs text-ink-muted">after {formatMoney(l.discountCents)} off</span> : null}
                     </td>
                     <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
-                    {quote.costCents !== undefined ? <td className={`${tdClass} spec text-right`}>{formatCents(l.unitCostCents ?? null)}</td> : null}
+                    {quote.costCents !== undefined ? <td className={`${tdClass} spec text-right`}>{formatMoney(l.unitCostCents ?? null)}</td> : null}
                   </tr>
                 ))}
           </tbody>
@@ -158,9 +159,9 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
       </TableScroll>
       {editing ? (
         <div className="flex flex-wrap gap-2">
-          <button type="button" className={buttonClass.quiet} onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', discountCents: 0, camId: null, partId: null, laborOperationId: null }])}>Add a line</button>
-          <button type="button" className={buttonClass.primary} disabled={busy} onClick={saveLines}>Save lines</button>
-          <button type="button" className={buttonClass.quiet} onClick={() => setEditing(null)}>Cancel</button>
+          <Button type="button" variant="quiet" onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', discountCents: 0, camId: null, partId: null, laborOperationId: null }])}>Add a line</Button>
+          <Button type="button" variant="primary" disabled={busy} onClick={saveLines}>Save lines</Button>
+          <Button type="button" variant="quiet" onClick={() => setEditing(null)}>Cancel</Button>
         </div>
       ) : null}
 
@@ -168,14 +169,14 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         <section aria-labelledby="totals" className="rounded border border-steel-300 bg-paper-raised p-3">
           <h2 id="totals" className="text-sm font-semibold">Totals</h2>
           <dl className="spec mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-sm">
-            <dt className="font-sans">Subtotal</dt><dd className="text-right">{formatCents(quote.subtotalCents)}</dd>
-            <dt className="font-sans">Tax ({(quote.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on goods)</dt><dd className="text-right">{formatCents(quote.taxCents)}</dd>
-            <dt className="font-sans font-semibold">Total</dt><dd className="text-right font-semibold">{formatCents(quote.totalCents)}</dd>
-            <dt className="font-sans">Deposit</dt><dd className="text-right">{formatCents(quote.depositCents)}</dd>
+            <dt className="font-sans">Subtotal</dt><dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
+            <dt className="font-sans">Tax ({percentFromBp(quote.taxRateBp)} on goods)</dt><dd className="text-right">{formatMoney(quote.taxCents)}</dd>
+            <dt className="font-sans font-semibold">Total</dt><dd className="text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
+            <dt className="font-sans">Deposit</dt><dd className="text-right">{formatMoney(quote.depositCents)}</dd>
             {quote.costCents !== undefined ? (
               <>
-                <dt className="font-sans">Goods cost</dt><dd className="text-right">{formatCents(quote.costCents)}</dd>
-                <dt className="font-sans">Goods margin</dt><dd className="text-right">{formatCents(quote.marginCents)}</dd>
+                <dt className="font-sans">Goods cost</dt><dd className="text-right">{formatMoney(quote.costCents)}</dd>
+                <dt className="font-sans">Goods margin</dt><dd className="text-right">{formatMoney(quote.marginCents)}</dd>
               </>
             ) : null}
           </dl>
@@ -183,7 +184,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         <section aria-labelledby="payment" className="rounded border border-steel-300 bg-paper-raised p-3">
           <h2 id="payment" className="text-sm font-semibold">Payments</h2>
           <p className="mt-1 text-sm">
-            Paid {formatCents(quote.paidCents)} · refunded {formatCents(quote.refundedCents)} · sent {quote.sentAt ? quote.sentAt.slice(0, 16).replace('T', ' ') : 'not yet'}
+            Paid {formatMoney(quote.paidCents)} · refunded {formatMoney(quote.refundedCents)} · sent {quote.sentAt ? quote.sentAt.slice(0, 16).replace('T', ' ') : 'not yet'}
           </p>
           <PaymentList payments={quote.payments} receiptHref={(id) => `${url}/payments/${id}/receipt`} />
           {quote.status === 'closed' && quote.balanceDueCents === 0 ? <p className="mt-2 text-sm"><a className="underline" href={`${url}/invoice`}>Final invoice (PDF)</a></p> : null}

@@ -1,9 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { formatCents } from '@/components/catalogue/format';
-import { buttonClass } from '@/components/catalogue/ui';
-import { dollarsToCents } from './money-input';
+import { centsFromText, formatMoney } from '@/lib/format';
+import { Button } from '@/components/ui/button';
 import type { QuoteRun } from './quote-run';
 
 // A refund is money leaving the shop: the manager types an amount, then confirms it on a second step
@@ -21,7 +20,7 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
     return (
       <div role="alertdialog" aria-labelledby="refund-confirm" className="mt-3 rounded border-2 border-fault-700 bg-fault-100 p-3 text-sm">
         <p id="refund-confirm" className="font-semibold">
-          Refund {formatCents(review)} to the customer’s card{full ? ' — the whole deposit that is left' : ''}? This cannot be undone.
+          Refund {formatMoney(review)} to the customer’s card{full ? ' — the whole deposit that is left' : ''}? This cannot be undone.
         </p>
         {full ? (
           <fieldset className="mt-2">
@@ -40,12 +39,11 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
         )}
         <p className="mt-1">The customer is e-mailed when the whole deposit has been refunded.</p>
         <div className="mt-3 flex flex-wrap gap-2">
-          <button
-            type="button"
-            className={buttonClass.danger}
+          <Button
+            type="button" variant="danger"
             disabled={busy}
             onClick={() =>
-              void run('Not refunded', 'POST', `${url}/refund`, { amountCents: review, ...(reason ? { reason } : {}), ...(full ? { afterFullRefund: after } : {}) }, `Refund of ${formatCents(review)} sent to the payment service.`).then((ok) => {
+              void run('Not refunded', 'POST', `${url}/refund`, { amountCents: review, ...(reason ? { reason } : {}), ...(full ? { afterFullRefund: after } : {}) }, `Refund of ${formatMoney(review)} sent to the payment service.`).then((ok) => {
                 if (ok) {
                   setAmount('');
                   setReason('');
@@ -55,10 +53,10 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
             }
           >
             Confirm refund
-          </button>
-          <button type="button" className={buttonClass.quiet} onClick={() => setReview(null)}>
+          </Button>
+          <Button type="button" variant="quiet" onClick={() => setReview(null)}>
             Go back
-          </button>
+          </Button>
         </div>
       </div>
     );
@@ -68,24 +66,24 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
       className="mt-3 flex flex-wrap items-end gap-2"
       onSubmit={(e) => {
         e.preventDefault();
-        const cents = dollarsToCents(amount);
+        const cents = centsFromText(amount);
         if (cents === null || cents <= 0) return setProblem('The amount must be dollars and cents above 0.');
-        if (cents > leftCents) return setProblem(`At most ${formatCents(leftCents)} is left to refund.`);
+        if (cents > leftCents) return setProblem(`At most ${formatMoney(leftCents)} is left to refund.`);
         setProblem(null);
         setReview(cents);
       }}
     >
       <label className="text-sm">
-        Refund amount ($, at most {formatCents(leftCents)})
+        Refund amount ($, at most {formatMoney(leftCents)})
         <input value={amount} onChange={(e) => setAmount(e.target.value)} inputMode="decimal" className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5" />
       </label>
       <label className="text-sm">
         Reason (optional)
         <input value={reason} onChange={(e) => setReason(e.target.value)} maxLength={255} className="mt-1 block w-48 rounded border border-steel-300 px-1 py-0.5" />
       </label>
-      <button type="submit" className={buttonClass.danger} disabled={busy}>
+      <Button type="submit" variant="danger" disabled={busy}>
         Review refund…
-      </button>
+      </Button>
       {problem ? <p className="w-full text-sm text-fault-700" role="alert">{problem}</p> : null}
     </form>
   );

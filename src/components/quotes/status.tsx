@@ -1,4 +1,4 @@
-import { StateTag } from '@/components/catalogue/ui';
+import { StateTag } from '@/components/ui/state-tag';
 import { stateWord } from '@/lib/quotes/lifecycle';
 
 // Quote and payment states, always as a word (the colour only repeats it).

@@ -2,16 +2,17 @@
 
 import useSWR from 'swr';
 import { ApiError, getJson } from '@/components/catalogue/api';
-import { formatCents } from '@/components/catalogue/format';
-import { Banner, buttonClass, TableScroll, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { count, formatMoney, percentFromBp } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { Button, ButtonAnchor } from '@/components/ui/button';
+import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import { quoteStatusWord } from '@/components/quotes/status';
 import type { ReportSummary } from '@/lib/db/queries/reports';
 import type { Margin } from '@/lib/reports/arithmetic';
 import { StatusChart } from './status-chart';
 
 // The manager's numbers: one calm table, every figure with its unit or currency beside it.
-const pct = (bp: number | null) => (bp === null ? '—' : `${(bp / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} %`);
-const count = (n: number, unit: string) => `${n.toLocaleString('en-US')} ${unit}`;
+const pct = (bp: number | null) => percentFromBp(bp, 2);
 const quotes = (n: number) => count(n, n === 1 ? 'quote' : 'quotes');
 
 function Row({ label, figure, value, note }: { label: string; figure: string; value?: string; note?: string }) {
@@ -34,7 +35,7 @@ function Section({ title }: { title: string }) {
 }
 
 function MarginRow({ label, m }: { label: string; m: Margin }) {
-  return <Row label={label} figure={pct(m.marginBp)} value={formatCents(m.marginCents)} note={`sold ${formatCents(m.revenueCents)}, cost ${formatCents(m.costCents)}`} />;
+  return <Row label={label} figure={pct(m.marginBp)} value={formatMoney(m.marginCents)} note={`sold ${formatMoney(m.revenueCents)}, cost ${formatMoney(m.costCents)}`} />;
 }
 
 export function ReportPanel({ from, to }: { from?: string; to?: string }) {
@@ -56,9 +57,9 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
           <span className="text-ink-soft">To (last day)</span>
           <input type="date" name="to" defaultValue={data?.range.to ?? to ?? ''} className="spec rounded border border-steel-300 bg-paper-raised px-2 py-1" />
         </label>
-        <button type="submit" className={buttonClass.primary}>Show</button>
-        <a href="/reports" className={buttonClass.quiet}>Last 30 days</a>
-        {data && data.created.count > 0 ? <a href={csvUrl} className={buttonClass.quiet} download>Download quotes (CSV)</a> : null}
+        <Button type="submit" variant="primary">Show</Button>
+        <ButtonAnchor href="/reports" variant="quiet">Last 30 days</ButtonAnchor>
+        {data && data.created.count > 0 ? <ButtonAnchor href={csvUrl} variant="quiet" download>Download quotes (CSV)</ButtonAnchor> : null}
       </form>
 
       {error ? (
@@ -94,17 +95,17 @@ export function ReportPanel({ from, to }: { from?: string; to?: string }) {
                   </thead>
                   <tbody>
                     <Section title="Quotes created in the range" />
-                    <Row label="All quotes" figure={quotes(data.created.count)} value={formatCents(data.created.valueCents)} note="total incl. tax" />
+                    <Row label="All quotes" figure={quotes(data.created.count)} value={formatMoney(data.created.valueCents)} note="total incl. tax" />
                     {data.byStatus.map((s) => (
-                      <Row key={s.status} label={quoteStatusWord(s.status)} figure={quotes(s.count)} value={formatCents(s.valueCents)} note="state now" />
+                      <Row key={s.status} label={quoteStatusWord(s.status)} figure={quotes(s.count)} value={formatMoney(s.valueCents)} note="state now" />
                     ))}
-                    <Row label="Average quote" figure="" value={formatCents(data.averageQuoteCents)} note="total ÷ quotes" />
+                    <Row label="Average quote" figure="" value={formatMoney(data.averageQuoteCents)} note="total ÷ quotes" />
                     <Row label="Sent → deposit paid" figure={pct(data.conversion.rateBp)} value={`${data.conversion.depositPaidCount} of ${quotes(data.conversion.sentCount)}`} note="of the quotes ever sent; a job closed later still counts" />
                     <Section title="Deposits paid in the range" />
-                    <Row label="Deposits taken" figure={count(data.deposits.count, data.deposits.count === 1 ? 'payment' : 'payments')} value={formatCents(data.deposits.takenCents)} />
-                    <Row label="Refunded" figure="" value={formatCents(data.deposits.refundedCents)} note="of those deposits, so far" />
-                    <Row label="Net deposits" figure="" value={formatCents(data.deposits.netCents)} note="taken − refunded" />
-                    <Row label="Balances taken" figure={count(data.balances.count, data.balances.count === 1 ? 'payment' : 'payments')} value={formatCents(data.balances.takenCents)} note="online and at the counter" />
+                    <Row label="Deposits taken" figure={count(data.deposits.count, data.deposits.count === 1 ? 'payment' : 'payments')} value={formatMoney(data.deposits.takenCents)} />
+                    <Row label="Refunded" figure="" value={formatMoney(data.deposits.refundedCents)} note="of those deposits, so far" />
+                    <Row label="Net deposits" figure="" value={formatMoney(data.deposits.netCents)} note="taken − refunded" />
+                    <Row label="Balances taken" figure={count(data.balances.count, data.balances.count === 1 ? 'payment' : 'payments')} value={formatMoney(data.balances.takenCents)} note="online and at the counter" />
                     <Section title="Margin on deposit-paid and closed quotes" />
                     <MarginRow label="Cams" m={data.margin.cams} />
                     <MarginRow label="Parts" m={data.margin.parts} />

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { ReportPanel } from '@/components/reports/report-panel';
 import { requireRoleForPage } from '@/lib/auth/guard';
 

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ResetPasswordForm } from '@/components/auth/reset-password-form';
-import { Notice } from '@/components/auth/form-parts';
+import { Banner } from '@/components/ui/banner';
 
 export const metadata: Metadata = { title: 'Choose a password', referrer: 'no-referrer' };
 
@@ -18,9 +18,9 @@ export default async function ResetPasswordPage({ searchParams }: { searchParams
       {token ? (
         <ResetPasswordForm token={token} />
       ) : (
-        <Notice tone="fault">
+        <Banner tone="fault">
           This page needs the link from the e-mail. <Link href="/forgot-password" className="underline">Ask for a new link</Link>.
-        </Notice>
+        </Banner>
       )}
     </section>
   );

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Notice } from '@/components/auth/form-parts';
+import { Banner } from '@/components/ui/banner';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { ROLE_NAMES, linksFor } from '@/lib/auth/staff-nav';
 import { countStaleLeads } from '@/lib/db/queries/leads';
@@ -23,12 +23,12 @@ export default async function DashboardPage({ searchParams }: { searchParams: Pr
         <h1 className="text-2xl font-semibold">Hello, {user.name}</h1>
         <p className="text-sm text-ink-soft">Signed in as <span className="font-semibold">{ROLE_NAMES[user.role]}</span> ({user.email}).</p>
       </header>
-      {denied ? <Notice tone="caution">The page <span className="spec">{denied}</span> is not open to the {ROLE_NAMES[user.role].toLowerCase()} role. Ask a manager if you need it.</Notice> : null}
+      {denied ? <Banner tone="caution">The page <span className="spec">{denied}</span> is not open to the {ROLE_NAMES[user.role].toLowerCase()} role. Ask a manager if you need it.</Banner> : null}
       {staleLeads > 0 ? (
-        <Notice tone="caution">
+        <Banner tone="caution">
           {staleLeads} new lead{staleLeads === 1 ? ' has' : 's have'} waited {limitDays} day{limitDays === 1 ? '' : 's'} or more without contact.{' '}
           <Link href="/leads?status=new" className="font-semibold underline">Follow them up on Leads</Link>.
-        </Notice>
+        </Banner>
       ) : null}
       <nav aria-label="Your pages">
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">

@@ -1,6 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { ButtonLink, PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listBuilds } from '@/lib/db/queries/builds';
 import { BuildListQuerySchema } from '@/lib/schemas/build';
@@ -25,7 +28,7 @@ export default async function InterviewsPage({ searchParams }: { searchParams: P
       <PageHeader
         title="Interviews"
         lead="Recent builds from the counter, newest first. Open one’s shortlist, or change what the customer told you."
-        actions={writes ? <ButtonLink href="/interviews/new" tone="primary">New interview</ButtonLink> : null}
+        actions={writes ? <ButtonLink href="/interviews/new" variant="primary">New interview</ButtonLink> : null}
       />
       <form method="get" action="/interviews" className="flex max-w-xl flex-wrap items-end gap-2" role="search">
         <label className="flex flex-1 flex-col gap-1 text-sm font-semibold">

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { BoardList } from '@/components/jobs/board-list';
 import { BoardWeek } from '@/components/jobs/board-week';
 import { dayLabel } from '@/components/jobs/job-state-tag';

@@ -1,6 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue/ui';
+import { Banner } from '@/components/ui/banner';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
 import { LeadStatusTag, LEAD_STATUS_WORDS } from '@/components/leads/lead-status';
 import { LeadNotes } from '@/components/leads/lead-notes';
 import { LeadStatusForm } from '@/components/leads/lead-status-form';
@@ -85,7 +88,7 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
               <LeadNotes leadId={lead.id} notes={notes.get(lead.id) ?? []} />
               <footer className="mt-3 flex flex-wrap items-center justify-between gap-3">
                 <LeadStatusForm id={lead.id} status={lead.status} version={lead.version} />
-                <ButtonLink href={`/interviews/new?lead=${lead.id}`} tone="primary">Start an interview</ButtonLink>
+                <ButtonLink href={`/interviews/new?lead=${lead.id}`} variant="primary">Start an interview</ButtonLink>
               </footer>
             </article>
           </li>

@@ -1,7 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { formatCents } from '@/components/catalogue/format';
-import { buttonClass, PageHeader, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { formatMoney } from '@/lib/format';
+import { Button, ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import { PaymentStatusTag, QuoteStatusTag, quoteStatusWord } from '@/components/quotes/status';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { QUOTE_STATUSES, type QuoteStatus } from '@/lib/db/models/quote';
@@ -45,7 +47,7 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
           <span className="font-semibold">Find a quote</span>
           <input type="search" name="q" defaultValue={q ?? ''} maxLength={100} placeholder="Number, customer or vehicle" className="w-72 rounded px-2 py-1 ring-1 ring-steel-300" />
         </label>
-        <button type="submit" className={buttonClass.quiet}>Search</button>
+        <Button type="submit" variant="quiet">Search</Button>
         {q ? <Link className="text-gauge-700 underline" href={hrefOf({ status })}>Clear the search</Link> : null}
       </form>
       <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
@@ -69,8 +71,8 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
                 <td className={tdClass}>{q.customerName}</td>
                 <td className={tdClass}>{q.vehicleLabel ?? '—'}</td>
                 <td className={tdClass}><QuoteStatusTag status={q.status} /></td>
-                <td className={`${tdClass} spec text-right`}>{formatCents(q.totalCents)}</td>
-                <td className={`${tdClass} spec text-right`}>{formatCents(q.depositCents)}</td>
+                <td className={`${tdClass} spec text-right`}>{formatMoney(q.totalCents)}</td>
+                <td className={`${tdClass} spec text-right`}>{formatMoney(q.depositCents)}</td>
                 <td className={tdClass}><PaymentStatusTag status={q.paymentStatus} /></td>
                 <td className={`${tdClass} spec text-xs`}>{q.updatedAt.slice(0, 16).replace('T', ' ')}</td>
               </tr>
@@ -85,8 +87,8 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
         <span className="tabular-nums">
           {first}–{first === 0 ? 0 : first + quotes.length - 1} of {total} {total === 1 ? 'quote' : 'quotes'} · page {page} of {pages}
         </span>
-        {page > 1 ? <Link className={buttonClass.quiet} href={hrefOf({ status, q, page: page - 1 })}>← Newer</Link> : null}
-        {page < pages ? <Link className={buttonClass.quiet} href={hrefOf({ status, q, page: page + 1 })}>Older →</Link> : null}
+        {page > 1 ? <ButtonLink variant="quiet" href={hrefOf({ status, q, page: page - 1 })}>← Newer</ButtonLink> : null}
+        {page < pages ? <ButtonLink variant="quiet" href={hrefOf({ status, q, page: page + 1 })}>Older →</ButtonLink> : null}
       </nav>
     </div>
   );

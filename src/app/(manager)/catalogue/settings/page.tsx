@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
-import { percentFromBp, formatCents } from '@/components/catalogue/format';
+import { formatMoney, percentFromBp } from '@/lib/format';
 import { SettingsForm } from '@/components/catalogue/record-forms';
-import { Banner, PageHeader } from '@/components/catalogue/ui';
+import { Banner } from '@/components/ui/banner';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { getShopSettingsRecord } from '@/lib/db/queries/settings';
 
@@ -16,7 +17,7 @@ export default async function SettingsPage() {
       {settings ? (
         <>
           <p className="text-sm tabular-nums text-ink-soft">
-            Now: labour {formatCents(settings.laborRateCents)}/h · tax {percentFromBp(settings.taxRateBp)} · deposit {percentFromBp(settings.depositPercentBp)} of the total, at least {formatCents(settings.depositMinCents)} and at most {formatCents(settings.depositMaxCents)}.
+            Now: labour {formatMoney(settings.laborRateCents, { currency: settings.currency })}/h · tax {percentFromBp(settings.taxRateBp)} · deposit {percentFromBp(settings.depositPercentBp)} of the total, at least {formatMoney(settings.depositMinCents, { currency: settings.currency })} and at most {formatMoney(settings.depositMaxCents, { currency: settings.currency })}.
           </p>
           <SettingsForm settings={settings} />
         </>

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { formatCents } from '@/components/catalogue/format';
+import { formatMoney, longDate, percentFromBp } from '@/lib/format';
 import { getQuoteByToken } from '@/lib/db/queries/quotes';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { CUSTOMER_CAUTIONS as CAUTIONS, REFUND_NOTE } from '@/lib/quotes/cautions';
@@ -35,14 +35,6 @@ const STATUS_WORDS: Record<string, { title: string; text: string }> = {
   replaced: { title: 'Replaced by a newer quote', text: 'This quote was revised; the newer one is the one that counts.' },
 };
 
-const longDate = (isoDate: string) =>
-  new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-US', {
-    year: 'numeric',
-    month: 'long',
-    day: 'numeric',
-    timeZone: 'UTC',
-  });
-
 export default async function CustomerQuotePage({
   params,
   searchParams,
@@ -60,7 +52,9 @@ export default async function CustomerQuotePage({
   const lapsed = open && isPastValidUntil(quote.validUntil);
   const canPay = open && !lapsed && quote.depositCents > 0;
   // A refund is told as it is: a paid quote refunded in full is no longer "booked".
-  const refunded = quote.refundedCents > 0 ? formatCents(quote.refundedCents) : null;
+  // Amounts in the shop's own currency (shop settings), the one the deposit is charged in.
+  const money = (cents: number) => formatMoney(cents, { currency: shop.currency });
+  const refunded = quote.refundedCents > 0 ? money(quote.refundedCents) : null;
   const state =
     refunded && quote.status === 'cancelled'
       ? {
@@ -80,7 +74,7 @@ export default async function CustomerQuotePage({
           : quote.status === 'deposit-paid' && quote.balanceRequestedAt && quote.balanceDueCents > 0
             ? {
                 title: 'Job done — balance to pay',
-                text: `The work is done. ${formatCents(quote.balanceDueCents)} is left to pay: below, or when you collect the car.`,
+                text: `The work is done. ${money(quote.balanceDueCents)} is left to pay: below, or when you collect the car.`,
               }
           : lapsed
             ? {
@@ -153,28 +147,28 @@ export default async function CustomerQuotePage({
                   {isTaxable(line.kind) ? '' : ' · no sales tax'}
                 </span>
               </span>
-              <span className="tabular-nums font-semibold">{formatCents(line.totalCents)}</span>
+              <span className="tabular-nums font-semibold">{money(line.totalCents)}</span>
             </li>
           ))}
         </ul>
         <dl className="mt-4 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 tabular-nums">
           <dt>Before tax</dt>
-          <dd className="text-right">{formatCents(quote.subtotalCents)}</dd>
+          <dd className="text-right">{money(quote.subtotalCents)}</dd>
           <dt>
-            Sales tax ({(quote.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on parts)
+            Sales tax ({percentFromBp(quote.taxRateBp)} on parts)
           </dt>
-          <dd className="text-right">{formatCents(quote.taxCents)}</dd>
+          <dd className="text-right">{money(quote.taxCents)}</dd>
           <dt className="text-xl font-bold">Total</dt>
-          <dd className="text-right text-xl font-bold">{formatCents(quote.totalCents)}</dd>
+          <dd className="text-right text-xl font-bold">{money(quote.totalCents)}</dd>
         </dl>
       </section>
 
       <section aria-labelledby="deposit" className="mt-8 rounded-lg border-2 border-ember-500 bg-paper-raised p-5">
         <h2 id="deposit" className="text-2xl font-semibold">
-          Deposit to book the job: <span className="tabular-nums">{formatCents(quote.depositCents)}</span>
+          Deposit to book the job: <span className="tabular-nums">{money(quote.depositCents)}</span>
         </h2>
         <p className="mt-1 text-base">
-          The rest, {formatCents(Math.max(0, quote.totalCents - quote.depositCents))}, is paid when the job is done.
+          The rest, {money(Math.max(0, quote.totalCents - quote.depositCents))}, is paid when the job is done.
         </p>
         <h3 className="mt-4 text-xl font-semibold">Our deposit policy</h3>
         <p className="mt-1 whitespace-pre-line">{shop.depositPolicyText}</p>
@@ -195,7 +189,7 @@ export default async function CustomerQuotePage({
         ) : null}
       </section>
 
-      {quote.payments.length ? <CustomerPayments quote={quote} token={token} /> : null}
+      {quote.payments.length ? <CustomerPayments quote={quote} token={token} currency={shop.currency} /> : null}
 
       {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} /> : null}
 

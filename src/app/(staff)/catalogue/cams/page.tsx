@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
 import { Suspense } from 'react';
 import { CamList } from '@/components/catalogue/cam-list';
-import { ButtonLink, PageHeader } from '@/components/catalogue/ui';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';
 
@@ -23,7 +24,7 @@ export default async function CamsPage() {
               Export CSV
             </a>
             {manager ? <ButtonLink href="/catalogue/cams/import">Import CSV</ButtonLink> : null}
-            {manager ? <ButtonLink href="/catalogue/cams/new" tone="primary">Add a cam</ButtonLink> : null}
+            {manager ? <ButtonLink href="/catalogue/cams/new" variant="primary">Add a cam</ButtonLink> : null}
           </>
         }
       />

@@ -1,7 +1,11 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { formatCents } from '@/components/catalogue/format';
-import { Banner, ButtonLink, PageHeader, StateTag, TableScroll, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { formatMoney } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listLabor } from '@/lib/db/queries/labor';
 import { getShopSettingsRecord } from '@/lib/db/queries/settings';
@@ -19,9 +23,9 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
     <div className="flex flex-col gap-4">
       <PageHeader
         title="Labour operations"
-        lead={`Priced at the shop's labour rate, ${formatCents(rate)} per hour.`}
+        lead={`Priced at the shop's labour rate, ${formatMoney(rate)} per hour.`}
         back={{ href: '/catalogue', label: 'Catalogue' }}
-        actions={manager ? <ButtonLink href="/catalogue/labor/new" tone="primary">Add an operation</ButtonLink> : null}
+        actions={manager ? <ButtonLink href="/catalogue/labor/new" variant="primary">Add an operation</ButtonLink> : null}
       />
       {raw.saved ? <Banner tone="ok" title="Labour operation saved" /> : null}
       {raw.deleted ? <Banner tone="ok" title="Labour operation deleted" /> : null}
@@ -45,7 +49,7 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
                 <td className={`${tdClass} spec`}>{op.code}</td>
                 <td className={tdClass}>{op.name}</td>
                 <td className={`${tdClass} spec text-right`}>{op.hours.toFixed(2)} h</td>
-                <td className={`${tdClass} spec text-right`}>{formatCents(Math.round(op.hours * rate))}</td>
+                <td className={`${tdClass} spec text-right`}>{formatMoney(Math.round(op.hours * rate))}</td>
                 <td className={tdClass}>{op.engines}</td>
                 <td className={tdClass}>{op.active ? <StateTag tone="ok">Active</StateTag> : <StateTag tone="caution">Inactive</StateTag>}</td>
                 {manager ? (

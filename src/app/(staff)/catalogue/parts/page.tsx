@@ -1,7 +1,11 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { formatCents } from '@/components/catalogue/format';
-import { Banner, ButtonLink, PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { formatMoney } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listParts } from '@/lib/db/queries/parts';
 import { PART_CATEGORY_LIST, PartListQuerySchema } from '@/lib/schemas/part';
@@ -23,7 +27,7 @@ export default async function PartsPage({ searchParams }: { searchParams: Promis
   };
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Parts" lead="What a cam swap can need besides the cam." back={{ href: '/catalogue', label: 'Catalogue' }} actions={manager ? <ButtonLink href="/catalogue/parts/new" tone="primary">Add a part</ButtonLink> : null} />
+      <PageHeader title="Parts" lead="What a cam swap can need besides the cam." back={{ href: '/catalogue', label: 'Catalogue' }} actions={manager ? <ButtonLink href="/catalogue/parts/new" variant="primary">Add a part</ButtonLink> : null} />
       {raw.saved ? <Banner tone="ok" title="Part saved" /> : null}
       {raw.deleted ? <Banner tone="ok" title="Part deleted" /> : null}
       {raw.deactivated ? <Banner tone="info" title="Part switched off">Quotes refer to it, so it was kept and made inactive instead of deleted.</Banner> : null}
@@ -70,8 +74,8 @@ export default async function PartsPage({ searchParams }: { searchParams: Promis
                 </td>
                 <td className={tdClass}>{p.category}</td>
                 <td className={tdClass}>{p.supplierName ?? '—'}</td>
-                <td className={`${tdClass} spec text-right`}>{formatCents(p.priceCents)}</td>
-                {costs ? <td className={`${tdClass} spec text-right`}>{formatCents(p.costCents)}</td> : null}
+                <td className={`${tdClass} spec text-right`}>{formatMoney(p.priceCents)}</td>
+                {costs ? <td className={`${tdClass} spec text-right`}>{formatMoney(p.costCents)}</td> : null}
                 <td className={`${tdClass} spec text-right`}>{p.stockOnHand}</td>
                 <td className={tdClass}>{p.active ? <StateTag tone="ok">Active</StateTag> : <StateTag tone="caution">Inactive</StateTag>}</td>
                 {manager ? (

@@ -1,6 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue/ui';
+import { Banner } from '@/components/ui/banner';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listRules } from '@/lib/db/queries/rules';
 import { unmappedKinds } from '@/lib/catalogue/need-rules';
@@ -25,7 +28,7 @@ export default async function RulesPage({ searchParams }: { searchParams: Promis
         title="What a cam needs"
         lead="What each need the advisor names costs in this shop, by vehicle class. The advisor decides when a cam needs springs, a converter or the rest; these rules add the parts and labour, and the shortlist and the quote price the job from them."
         back={{ href: '/catalogue', label: 'Catalogue' }}
-        actions={manager ? <ButtonLink href="/catalogue/rules/new" tone="primary">Add a rule</ButtonLink> : null}
+        actions={manager ? <ButtonLink href="/catalogue/rules/new" variant="primary">Add a rule</ButtonLink> : null}
       />
       {raw.saved ? <Banner tone="ok" title="Rule saved" /> : null}
       {raw.deleted ? <Banner tone="ok" title="Rule deleted" /> : null}

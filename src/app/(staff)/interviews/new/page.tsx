@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { InterviewForm } from '@/components/interviews/interview-form';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listBaselineCards } from '@/lib/db/queries/builds';

@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { PageHeader, StateTag, tableClass, tdClass, thClass } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
+import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import { DynoPanel } from '@/components/jobs/dyno-panel';
 import { JobProgress } from '@/components/jobs/job-progress';
 import { PrintButton } from '@/components/jobs/print-button';

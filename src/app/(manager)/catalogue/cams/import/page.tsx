@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { ImportPanel } from '@/components/catalogue/import-panel';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { CAM_CSV_COLUMNS } from '@/lib/catalogue/cam-csv';
 

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { CamForm } from '@/components/catalogue/cam-form';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';
 

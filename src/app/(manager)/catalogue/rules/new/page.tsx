@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { RuleForm } from '@/components/catalogue/rule-form';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { allLabor } from '@/lib/db/queries/labor';
 import { allParts } from '@/lib/db/queries/parts';

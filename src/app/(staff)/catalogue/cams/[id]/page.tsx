@@ -1,8 +1,11 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { Attachments } from '@/components/catalogue/attachments';
-import { deg, formatCents, inches } from '@/components/catalogue/format';
-import { Banner, ButtonLink, PageHeader, StateTag } from '@/components/catalogue/ui';
+import { deg, formatMoney, inches } from '@/lib/format';
+import { Banner } from '@/components/ui/banner';
+import { ButtonLink } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { StateTag } from '@/components/ui/state-tag';
 import { ValveEventDiagram } from '@/components/catalogue/valve-diagram';
 import { valveEvents } from '@/lib/advisor/valve-events';
 import { requireRoleForPage } from '@/lib/auth/guard';
@@ -38,7 +41,7 @@ export default async function CamPage({ params, searchParams }: { params: Promis
         title={`${cam.sku} · ${cam.name}`}
         lead={cam.supplierName ?? 'Reference card (no supplier)'}
         back={{ href: '/catalogue/cams', label: 'Cams' }}
-        actions={manager ? <ButtonLink href={`/catalogue/cams/${cam.id}/edit`} tone="primary">Edit</ButtonLink> : null}
+        actions={manager ? <ButtonLink href={`/catalogue/cams/${cam.id}/edit`} variant="primary">Edit</ButtonLink> : null}
       />
       {query.saved ? <Banner tone="ok" title="Saved">The cam is saved (version {cam.version}).</Banner> : null}
       <div className="flex flex-wrap gap-2">
@@ -57,8 +60,8 @@ export default async function CamPage({ params, searchParams }: { params: Promis
             <Spec label="Lobe separation angle" value={deg(cam.lsa)} />
             <Spec label="Installed intake centerline" value={`${deg(cam.intakeCenterline)} ATDC`} />
             <Spec label="Spring max lift" value={inches(cam.springMaxLiftIn)} />
-            <Spec label="Price" value={formatCents(cam.priceCents)} />
-            {user.role !== 'tech' ? <Spec label="Cost · margin" value={`${formatCents(cam.costCents)} · ${margin === null ? '—' : `${margin} %`}`} /> : null}
+            <Spec label="Price" value={formatMoney(cam.priceCents)} />
+            {user.role !== 'tech' ? <Spec label="Cost · margin" value={`${formatMoney(cam.costCents)} · ${margin === null ? '—' : `${margin} %`}`} /> : null}
             <Spec label="Stock on hand" value={`${cam.stockOnHand} units`} />
             <Spec label="Version" value={cam.version} note={`last saved ${cam.updatedAt.slice(0, 16).replace('T', ' ')} UTC`} />
           </dl>

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { InterviewForm } from '@/components/interviews/interview-form';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { getBuild, listBaselineCards } from '@/lib/db/queries/builds';

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { CamForm } from '@/components/catalogue/cam-form';
 import { DeleteButton } from '@/components/catalogue/rule-form';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { getCam, listSuppliers } from '@/lib/db/queries/cams';
 

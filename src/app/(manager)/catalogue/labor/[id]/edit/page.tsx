@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { Attachments } from '@/components/catalogue/attachments';
 import { LaborForm } from '@/components/catalogue/record-forms';
 import { DeleteButton } from '@/components/catalogue/rule-form';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { getLabor } from '@/lib/db/queries/labor';
 

@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { Attachments } from '@/components/catalogue/attachments';
 import { PartForm } from '@/components/catalogue/record-forms';
 import { DeleteButton } from '@/components/catalogue/rule-form';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';
 import { getPart } from '@/lib/db/queries/parts';

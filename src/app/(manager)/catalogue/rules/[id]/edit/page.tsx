@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { DeleteButton, RuleForm } from '@/components/catalogue/rule-form';
-import { PageHeader } from '@/components/catalogue/ui';
+import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { allLabor } from '@/lib/db/queries/labor';
 import { allParts } from '@/lib/db/queries/parts';
