@@ -12,6 +12,12 @@ const stamp = { created_at: now, updated_at: now };
 const validUntil = new Date(now.getTime() + 60 * 86_400_000).toISOString().slice(0, 10);
 const sha256 = (text) => crypto.createHash('sha256').update(text).digest('hex');
 
+const users = [
+  { id: 1, email: 'manager@lobewise.test', name: 'Rhea Castellan', role: 'manager' },
+  { id: 2, email: 'counter@lobewise.test', name: 'Joel Pembry', role: 'counter' },
+  { id: 3, email: 'tech@lobewise.test', name: 'Aurelio Banks', role: 'tech' },
+];
+
 const suppliers = [
   { id: 1, name: 'Ridgeback Grind Co.', contact_email: 'orders@ridgeback-grind.example' },
   { id: 2, name: 'Lantern Valley Cams', contact_email: 'sales@lantern-valley.example' },
@@ -66,6 +72,11 @@ const laborRows = [
   ['TUNE-LAB', 'Dyno tune session', 3.0, 'all'],
 ];
 
+// Row ids follow each list's order (the first row is id 1); these find a row's id by its code.
+const camId = (sku) => camRows.findIndex((r) => r[0] === sku) + 1;
+const partId = (sku) => partRows.findIndex((r) => r[0] === sku) + 1;
+const laborId = (code) => laborRows.findIndex((r) => r[0] === code) + 1;
+
 function buildProfile({ boreIn, strokeIn, rodLengthIn, compressionRatio, headMaterial, intakeFlowCfm, intakeManifold, cylinderDeactivation, headers, primaryIn, system, transmission, stallRpm, axleRatio, topGearRatio, tireDiameterIn, weightLb, powerBrakes, vehicleClass, primary, idle, fuelOctane, emissionsRequired, cruiseMph, budgetCents, baselineCam }) {
   return {
     engine: { cylinders: 8, boreIn, strokeIn, rodLengthIn, compressionRatio, headMaterial, intakeFlowCfm, intakeManifold, cylinderDeactivation },
@@ -87,6 +98,45 @@ function camCard(row, id) {
   return card;
 }
 
+// Each rule prices one kind of need the advisor names (it alone decides when a cam needs it), for one
+// vehicle class or for every class without a rule of its own.
+const needRules = [
+  { id: 1, kind: 'install', vehicle_class: null, label: 'Cam install: trucks, SUVs and vans get the truck cam swap and the gasket set' },
+  { id: 2, kind: 'install', vehicle_class: 'car', label: 'Cam install: cars get the car cam swap (tighter engine bay) and the gasket set' },
+  { id: 3, kind: 'springs', vehicle_class: null, label: 'Past the installed springs’ limit: the ovate spring kit, installed and checked' },
+  { id: 4, kind: 'pushrods', vehicle_class: null, label: 'High lift or other rockers: hardened pushrods' },
+  { id: 5, kind: 'lifters', vehicle_class: null, label: 'High lift on a stock valvetrain: non-deactivating lifters and trays' },
+  { id: 6, kind: 'deactivation-delete', vehicle_class: null, label: 'Active deactivation and a non-compatible cam: the delete kit' },
+  { id: 7, kind: 'converter', vehicle_class: null, label: 'Pulls well above the stall: a 2,800 converter, installed' },
+  { id: 8, kind: 'tune', vehicle_class: null, label: 'Every cam swap gets a dyno tune' },
+];
+
+const customers = [
+  { id: 1, name: 'Dana Whitlock', email: 'dana.whitlock@example.com', phone: '555-0171', notes: 'Tows a horse trailer most weekends.' },
+  { id: 2, name: 'Marisol Okafor', email: 'marisol.okafor@example.com', phone: '555-0122', notes: null },
+  { id: 3, name: 'Teddy Vranes', email: 'teddy.vranes@example.com', phone: '555-0193', notes: 'Weekend drag strip, street driven.' },
+];
+
+const baselineCard = (sku) => camCard(camRows[camId(sku) - 1], camId(sku));
+const builds = [
+  { id: 1, customer_id: 1, vehicle_label: '2011 full-size pickup, 5.3 L, crew cab', baseline_cam_id: camId('FB-53'),
+    profile: buildProfile({ boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'active', headers: 'manifold', primaryIn: 1.625, system: 'full-with-cats', transmission: 'automatic', stallRpm: 2000, axleRatio: 3.73, topGearRatio: 0.67, tireDiameterIn: 31, weightLb: 5600, powerBrakes: 'vacuum', vehicleClass: 'truck', primary: 'towing', idle: 'smooth', fuelOctane: 87, emissionsRequired: false, cruiseMph: 65, budgetCents: 350000, baselineCam: baselineCard('FB-53') }) },
+  { id: 2, customer_id: 2, vehicle_label: '2006 regular-cab pickup, 6.0 L', baseline_cam_id: camId('FB-60'),
+    profile: buildProfile({ boreIn: 4.0, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.4, headMaterial: 'iron', intakeFlowCfm: 250, intakeManifold: 'truck', cylinderDeactivation: 'none', headers: 'long-tube', primaryIn: 1.75, system: 'full', transmission: 'automatic', stallRpm: 3000, axleRatio: 4.1, topGearRatio: 0.7, tireDiameterIn: 28, weightLb: 4300, powerBrakes: 'vacuum', vehicleClass: 'truck', primary: 'street', idle: 'noticeable', fuelOctane: 93, emissionsRequired: false, cruiseMph: 65, budgetCents: 450000, baselineCam: baselineCard('FB-60') }) },
+  { id: 3, customer_id: 3, vehicle_label: '2001 coupe, 5.7 L, manual', baseline_cam_id: camId('FB-57'),
+    profile: buildProfile({ boreIn: 3.898, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 10.2, headMaterial: 'aluminum', intakeFlowCfm: 265, intakeManifold: 'car', cylinderDeactivation: 'none', headers: 'long-tube', primaryIn: 1.875, system: 'full', transmission: 'manual', stallRpm: 0, axleRatio: 3.73, topGearRatio: 0.62, tireDiameterIn: 26, weightLb: 3500, powerBrakes: 'vacuum', vehicleClass: 'car', primary: 'strip', idle: 'aggressive', fuelOctane: 93, emissionsRequired: false, cruiseMph: 70, budgetCents: 300000, baselineCam: baselineCard('FB-57') }) },
+];
+
+// The demo quotes' customer links (tokens) are the README's; only their hashes are stored.
+const quotes = [
+  { id: 1, number: 'Q-2026-0101', customer_id: 1, build_id: 1, cam: 'RB-198', status: 'sent', token: 'demo-quote-whitlock-link-2026',
+    parts: ['GS-TC', 'SPR-600', 'TUNE-DYNO'], labor: ['CAM-TRUCK', 'SPR-INST', 'TUNE-LAB'] },
+  { id: 2, number: 'Q-2026-0102', customer_id: 2, build_id: 2, cam: 'F9-219', status: 'deposit-paid', token: 'demo-quote-okafor-link-2026',
+    parts: ['SPR-600', 'PR-7400', 'TS-DR', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-TRUCK', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
+  { id: 3, number: 'Q-2026-0103', customer_id: 3, build_id: 3, cam: 'LV-224', status: 'draft', token: null,
+    parts: ['SPR-660', 'PR-7400', 'HW-TRUN', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-CAR', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
+];
+
 module.exports = {
   async up(q) {
     const passwordHash = await argon2.hash(DEMO_PASSWORD, { type: argon2.argon2id, memoryCost: 19456, timeCost: 2, parallelism: 1 });
@@ -98,11 +148,7 @@ module.exports = {
       currency: 'usd', version: 1, ...stamp,
     }]);
 
-    await q.bulkInsert('users', [
-      { id: 1, email: 'manager@lobewise.test', name: 'Rhea Castellan', role: 'manager' },
-      { id: 2, email: 'counter@lobewise.test', name: 'Joel Pembry', role: 'counter' },
-      { id: 3, email: 'tech@lobewise.test', name: 'Aurelio Banks', role: 'tech' },
-    ].map((u) => ({ ...u, password_hash: passwordHash, active: true, version: 1, ...stamp })));
+    await q.bulkInsert('users', users.map((u) => ({ ...u, password_hash: passwordHash, active: true, version: 1, ...stamp })));
 
     await q.bulkInsert('suppliers', suppliers.map((s) => ({ ...s, ...stamp })));
 
@@ -121,20 +167,7 @@ module.exports = {
 
     await q.bulkInsert('labor_operations', laborRows.map((r, i) => ({ id: i + 1, code: r[0], name: r[1], hours: r[2], engines: r[3], active: true, version: 1, ...stamp })));
 
-    const partId = (sku) => partRows.findIndex((r) => r[0] === sku) + 1;
-    const laborId = (code) => laborRows.findIndex((r) => r[0] === code) + 1;
-    // Each rule prices one kind of need the advisor names (it alone decides when a cam needs it), for one
-    // vehicle class or for every class without a rule of its own.
-    await q.bulkInsert('need_rules', [
-      { id: 1, kind: 'install', vehicle_class: null, label: 'Cam install: trucks, SUVs and vans get the truck cam swap and the gasket set' },
-      { id: 2, kind: 'install', vehicle_class: 'car', label: 'Cam install: cars get the car cam swap (tighter engine bay) and the gasket set' },
-      { id: 3, kind: 'springs', vehicle_class: null, label: 'Past the installed springs’ limit: the ovate spring kit, installed and checked' },
-      { id: 4, kind: 'pushrods', vehicle_class: null, label: 'High lift or other rockers: hardened pushrods' },
-      { id: 5, kind: 'lifters', vehicle_class: null, label: 'High lift on a stock valvetrain: non-deactivating lifters and trays' },
-      { id: 6, kind: 'deactivation-delete', vehicle_class: null, label: 'Active deactivation and a non-compatible cam: the delete kit' },
-      { id: 7, kind: 'converter', vehicle_class: null, label: 'Pulls well above the stall: a 2,800 converter, installed' },
-      { id: 8, kind: 'tune', vehicle_class: null, label: 'Every cam swap gets a dyno tune' },
-    ].map((r) => ({ ...r, threshold: null, active: true, version: 1, ...stamp })));
+    await q.bulkInsert('need_rules', needRules.map((r) => ({ ...r, threshold: null, active: true, version: 1, ...stamp })));
     await q.bulkInsert('need_rule_items', [
       { rule_id: 1, part_id: null, labor_operation_id: laborId('CAM-TRUCK'), quantity: 1 },
       { rule_id: 1, part_id: partId('GS-TC'), labor_operation_id: null, quantity: 1 },
@@ -149,36 +182,14 @@ module.exports = {
       { rule_id: 8, part_id: partId('TUNE-DYNO'), labor_operation_id: laborId('TUNE-LAB'), quantity: 1 },
     ].map((r) => ({ ...r, ...stamp })));
 
-    await q.bulkInsert('customers', [
-      { id: 1, name: 'Dana Whitlock', email: 'dana.whitlock@example.com', phone: '555-0171', notes: 'Tows a horse trailer most weekends.' },
-      { id: 2, name: 'Marisol Okafor', email: 'marisol.okafor@example.com', phone: '555-0122', notes: null },
-      { id: 3, name: 'Teddy Vranes', email: 'teddy.vranes@example.com', phone: '555-0193', notes: 'Weekend drag strip, street driven.' },
-    ].map((c) => ({ ...c, version: 1, ...stamp })));
+    await q.bulkInsert('customers', customers.map((c) => ({ ...c, version: 1, ...stamp })));
 
-    const camId = (sku) => camRows.findIndex((r) => r[0] === sku) + 1;
-    const baselineCard = (sku) => camCard(camRows[camId(sku) - 1], camId(sku));
-    const builds = [
-      { id: 1, customer_id: 1, vehicle_label: '2011 full-size pickup, 5.3 L, crew cab', baseline_cam_id: camId('FB-53'),
-        profile: buildProfile({ boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'active', headers: 'manifold', primaryIn: 1.625, system: 'full-with-cats', transmission: 'automatic', stallRpm: 2000, axleRatio: 3.73, topGearRatio: 0.67, tireDiameterIn: 31, weightLb: 5600, powerBrakes: 'vacuum', vehicleClass: 'truck', primary: 'towing', idle: 'smooth', fuelOctane: 87, emissionsRequired: false, cruiseMph: 65, budgetCents: 350000, baselineCam: baselineCard('FB-53') }) },
-      { id: 2, customer_id: 2, vehicle_label: '2006 regular-cab pickup, 6.0 L', baseline_cam_id: camId('FB-60'),
-        profile: buildProfile({ boreIn: 4.0, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.4, headMaterial: 'iron', intakeFlowCfm: 250, intakeManifold: 'truck', cylinderDeactivation: 'none', headers: 'long-tube', primaryIn: 1.75, system: 'full', transmission: 'automatic', stallRpm: 3000, axleRatio: 4.1, topGearRatio: 0.7, tireDiameterIn: 28, weightLb: 4300, powerBrakes: 'vacuum', vehicleClass: 'truck', primary: 'street', idle: 'noticeable', fuelOctane: 93, emissionsRequired: false, cruiseMph: 65, budgetCents: 450000, baselineCam: baselineCard('FB-60') }) },
-      { id: 3, customer_id: 3, vehicle_label: '2001 coupe, 5.7 L, manual', baseline_cam_id: camId('FB-57'),
-        profile: buildProfile({ boreIn: 3.898, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 10.2, headMaterial: 'aluminum', intakeFlowCfm: 265, intakeManifold: 'car', cylinderDeactivation: 'none', headers: 'long-tube', primaryIn: 1.875, system: 'full', transmission: 'manual', stallRpm: 0, axleRatio: 3.73, topGearRatio: 0.62, tireDiameterIn: 26, weightLb: 3500, powerBrakes: 'vacuum', vehicleClass: 'car', primary: 'strip', idle: 'aggressive', fuelOctane: 93, emissionsRequired: false, cruiseMph: 70, budgetCents: 300000, baselineCam: baselineCard('FB-57') }) },
-    ];
     await q.bulkInsert('builds', builds.map((b) => ({ ...b, profile: JSON.stringify(b.profile), profile_schema_version: 2, version: 1, ...stamp })));
 
     const priceOf = (sku) => partRows[partId(sku) - 1][4] * 100;
     const hoursOf = (code) => laborRows[laborId(code) - 1][2];
     const camPrice = (sku) => camRows[camId(sku) - 1][11] * 100;
     const laborRate = 13500;
-    const quotes = [
-      { id: 1, number: 'Q-2026-0101', customer_id: 1, build_id: 1, cam: 'RB-198', status: 'sent', token: 'demo-quote-whitlock-link-2026',
-        parts: ['GS-TC', 'SPR-600', 'TUNE-DYNO'], labor: ['CAM-TRUCK', 'SPR-INST', 'TUNE-LAB'] },
-      { id: 2, number: 'Q-2026-0102', customer_id: 2, build_id: 2, cam: 'F9-219', status: 'deposit-paid', token: 'demo-quote-okafor-link-2026',
-        parts: ['SPR-600', 'PR-7400', 'TS-DR', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-TRUCK', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
-      { id: 3, number: 'Q-2026-0103', customer_id: 3, build_id: 3, cam: 'LV-224', status: 'draft', token: null,
-        parts: ['SPR-660', 'PR-7400', 'HW-TRUN', 'TUNE-DYNO', 'GS-TC'], labor: ['CAM-CAR', 'SPR-INST', 'PTV-CHK', 'TUNE-LAB'] },
-    ];
     const quoteRows = [];
     const lineRows = [];
     for (const quote of quotes) {
@@ -215,4 +226,7 @@ module.exports = {
       await q.bulkDelete(table, {});
     }
   },
+  // Not used by sequelize-cli: the seeded rows, so tests name them (tests/support/demo.ts) instead of
+  // repeating their ids.
+  demo: { users, suppliers, camRows, partRows, laborRows, needRules, customers, builds, quotes, camId, partId, laborId },
 };

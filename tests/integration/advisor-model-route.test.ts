@@ -4,15 +4,11 @@ import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profi
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import type { ModelDetail } from '@/lib/advisor/model-detail';
 
 const { appUrl } = readRuntime();
 
-type Detail = {
-  camName: string;
-  simulated: { rpm: number; volumetricEfficiencyPct: number; imepPsi: number; pumpingPsi: number; frictionPsi: number; bmepPsi: number; torqueLbFt: number }[];
-  lift: { crankDeg: number; intakeIn: number; exhaustIn: number }[];
-  headFlow: { liftIn: number; intakeCfm: number; exhaustCfm: number }[];
-};
+type Detail = ModelDetail;
 
 describe('POST /api/advisor/model (how the numbers were reached)', () => {
   let cookie: string;

@@ -5,22 +5,11 @@ import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profi
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import type { ShopRanking } from '@/lib/advisor-service';
 
 const { appUrl } = readRuntime();
 
-type RankingBody = {
-  rankings: {
-    camId: number; rank: number; score: number; crossoverRpm: number | null;
-    curve: { rpm: number; torqueLbFt: number; hp: number }[];
-    neededItems: { type: string; part: { sku: string } | null; laborOperation: { code: string } | null; priceCents: number }[];
-    neededItemsCents: number;
-    camPriceCents: number;
-    jobPriceCents: number;
-    cautions: { kind: string; text: string }[];
-    reasons: { subscore: string; text: string }[];
-  }[];
-  baseline: { curve: unknown[] };
-};
+type RankingBody = ShopRanking;
 
 describe('POST /api/advisor/rank', () => {
   let cookie: string;
@@ -65,7 +54,8 @@ describe('POST /api/advisor/rank', () => {
   it('ranks every sellable cam for the demo towing truck, with the shop rules’ parts and prices', async () => {
     const response = await rank({ build: towingTruck }).expect(200);
     const body = response.body as RankingBody;
-    expect(body.rankings.map((r) => r.camId).sort((a, b) => a - b)).toEqual([...sellableCamIds].sort((a, b) => a - b));
+    // The advisor's cam ids may be strings (the command line's skus); the shop's are numbers.
+    expect(body.rankings.map((r) => Number(r.camId)).sort((a, b) => a - b)).toEqual([...sellableCamIds].sort((a, b) => a - b));
     expect(body.rankings.map((r) => r.rank)).toEqual(body.rankings.map((_, i) => i + 1));
     for (let i = 1; i < body.rankings.length; i++) expect(body.rankings[i - 1].score).toBeGreaterThanOrEqual(body.rankings[i].score);
     for (const ranking of body.rankings) {
@@ -77,7 +67,8 @@ describe('POST /api/advisor/rank', () => {
       expect(ranking.neededItemsCents).toBe(ranking.neededItems.reduce((sum, item) => sum + item.priceCents, 0));
       // The one job price: the cam plus every needed item, and the cost reason quotes that number.
       expect(ranking.jobPriceCents).toBe(ranking.camPriceCents + ranking.neededItemsCents);
-      const dollars = `$${Math.floor(ranking.jobPriceCents / 100).toLocaleString('en-US')}.${String(ranking.jobPriceCents % 100).padStart(2, '0')}`;
+      const jobPriceCents = ranking.jobPriceCents!; // every demo cam has a price
+      const dollars = `$${Math.floor(jobPriceCents / 100).toLocaleString('en-US')}.${String(jobPriceCents % 100).padStart(2, '0')}`;
       expect(ranking.reasons.find((r) => r.subscore === 'cost')?.text).toContain(`about ${dollars} before tax`);
     }
     // The truck still has active cylinder deactivation: a cam not made for it brings the delete kit.
@@ -85,7 +76,7 @@ describe('POST /api/advisor/rank', () => {
     const compatible = new Map(cams.map((c) => [c.id, c.deactivationCompatible]));
     for (const ranking of body.rankings) {
       const hasDeleteKit = ranking.neededItems.some((item) => item.part?.sku === 'DD-KIT-53');
-      expect(hasDeleteKit).toBe(!compatible.get(ranking.camId));
+      expect(hasDeleteKit).toBe(!compatible.get(Number(ranking.camId)));
     }
   });
 

@@ -4,10 +4,12 @@ import { DEMO_EMAILS, signIn, signInWith } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { clearSignInAttempts, createThrowawayUser, removeThrowawayUsers } from '../support/staff';
+import { DEMO } from '../support/demo';
+import type { StaffListRow } from '@/lib/db/queries/users';
 
 const { appUrl, mailUrl } = readRuntime();
 type Mail = { id: string; to: string[]; subject: string; html: string; text: string };
-type Row = { id: number; email: string; role: string; active: boolean; version: number; hasPassword: boolean };
+type Row = StaffListRow;
 const usedEmails: string[] = [];
 let manager: string;
 
@@ -110,7 +112,7 @@ describe('changing staff accounts', () => {
     await request(appUrl).patch('/api/users/999999').set('Cookie', manager).send({ version: 1, role: 'tech' }).expect(404);
     const badId = await request(appUrl).patch('/api/users/abc').set('Cookie', manager).send({ version: 1, role: 'tech' }).expect(422);
     expect(badId.body.errors[0].field).toBe('id');
-    const badBody = await request(appUrl).patch('/api/users/2').set('Cookie', manager).send({ version: 'one', role: 'boss' }).expect(422);
+    const badBody = await request(appUrl).patch(`/api/users/${DEMO.users.counter}`).set('Cookie', manager).send({ version: 'one', role: 'boss' }).expect(422);
     expect((badBody.body.errors as { field: string }[]).map((e) => e.field).sort()).toEqual(['role', 'version']);
   });
 });

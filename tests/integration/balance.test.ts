@@ -7,6 +7,8 @@ import { makePaidJob } from '../support/job-fixtures';
 import { waitForMailsTo, type Mail } from '../support/mail';
 import { pdfText } from '../support/pdf-text';
 import { readRuntime } from '../support/runtime';
+import { FIXTURE_CAM_ID } from '../support/quote-fixtures';
+import type { QuoteRecord } from '@/lib/db/queries/quotes';
 
 // The balance (issue 12, item 7) over HTTP against the real build, MariaDB and both fakes: the balance
 // due once the deposit is paid, money taken at the counter, the pay-the-balance e-mail and its checkout
@@ -15,8 +17,7 @@ const { appUrl, paymentsUrl, env } = readRuntime();
 const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
-type Payment = { id: number; status: string; purpose: string; method: string; amountCents: number; refundedCents: number; duplicateOfPaymentId: number | null; recordedBy: { name: string } | null; providerSessionId: string | null };
-type Quote = { id: number; number: string; status: string; version: number; totalCents: number; depositCents: number; balanceDueCents: number; depositPaidCents: number; balancePaidCents: number; closedAt: string | null; balanceRequestedAt: string | null; payments: Payment[] };
+type Quote = QuoteRecord;
 type MailWithFiles = Mail & { attachments?: { filename: string; size: number }[] };
 
 let sequelize: Sequelize;
@@ -154,7 +155,7 @@ describe('money taken at the counter', () => {
     expect(close.status).toBe(409);
     expect(close.body.message).toMatch(/still has a balance/);
     expect(close.body.state.status).toBe('deposit-paid');
-    const draft = await counter.post('/api/quotes').send({ buildId: job.buildId, camId: 13 });
+    const draft = await counter.post('/api/quotes').send({ buildId: job.buildId, camId: FIXTURE_CAM_ID });
     const early = await pay(draft.body, 100);
     expect(early.status).toBe(409);
     expect(early.body.message).toMatch(/once the deposit is paid/);
@@ -270,10 +271,10 @@ describe('receipts and the final invoice', () => {
     expect((await request(appUrl).get(`/api/q/${job.token}/invoice`)).status).toBe(409);
 
     // The catalogue's price of the cam moves after the quote was sent; the invoice keeps the quoted price.
-    const [cam] = await sequelize.query<{ price_cents: number }>('SELECT price_cents FROM cams WHERE id = 13', { type: QueryTypes.SELECT });
+    const [cam] = await sequelize.query<{ price_cents: number }>('SELECT price_cents FROM cams WHERE id = :id', { replacements: { id: FIXTURE_CAM_ID }, type: QueryTypes.SELECT });
     const camLine = (await counter.get(`/api/quotes/${job.id}`)).body.lines.find((l: { kind: string }) => l.kind === 'cam') as { description: string; totalCents: number };
     quote = (await pay(quote, quote.balanceDueCents, 'card-present')).body;
-    await sequelize.query('UPDATE cams SET price_cents = price_cents + 77700 WHERE id = 13');
+    await sequelize.query('UPDATE cams SET price_cents = price_cents + 77700 WHERE id = :id', { replacements: { id: FIXTURE_CAM_ID } });
     try {
       const invoice = await counter.get(`/api/quotes/${job.id}/invoice`).buffer(true);
       expect(invoice.status).toBe(200);
@@ -293,7 +294,7 @@ describe('receipts and the final invoice', () => {
       expect((await request(appUrl).get(`/api/q/${job.token}/receipts/${balance.id}`)).status).toBe(200);
       expect((await request(appUrl).get(`/api/q/${job.token}/receipts/1`)).status).toBe(404);
     } finally {
-      await sequelize.query('UPDATE cams SET price_cents = :price WHERE id = 13', { replacements: { price: cam.price_cents } });
+      await sequelize.query('UPDATE cams SET price_cents = :price WHERE id = :id', { replacements: { price: cam.price_cents, id: FIXTURE_CAM_ID } });
     }
   });
 });

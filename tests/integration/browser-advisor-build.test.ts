@@ -3,6 +3,7 @@ import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // /advisor?build=… must never show another customer's build: a missing, mistyped or absent build
 // number says so and waits for a pick; a real one is preselected and ranked.
@@ -67,8 +68,8 @@ describe('which build the shortlist shows', () => {
   });
 
   it('preselects and ranks a build that exists', async () => {
-    const page = await open('?build=2');
-    await expect(page.getByLabel('Build').inputValue()).resolves.toBe('2');
+    const page = await open(`?build=${DEMO.builds.okaforStreetTruck}`);
+    await expect(page.getByLabel('Build').inputValue()).resolves.toBe(String(DEMO.builds.okaforStreetTruck));
     await page.locator('table tbody tr').first().waitFor();
     await expect(notFound(page).count()).resolves.toBe(0);
     await expectNoSeriousA11yViolations(page);

@@ -6,6 +6,7 @@ import { signedInAgent } from '../support/auth';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // The customer's side in a real browser on a phone-sized screen: open the e-mailed link, read the
 // deposit and the policy, accept, pay on the payments fake's page, come back to a paid quote.
@@ -21,7 +22,7 @@ describe('the customer quote page on a phone', () => {
     browser = await launchBrowser();
     fs.mkdirSync(SHOTS, { recursive: true });
     const counter = await signedInAgent('counter');
-    const made = await counter.post('/api/quotes').send({ buildId: 3, camId: 15, extraLines: [{ kind: 'labor', laborOperationId: 2 }] });
+    const made = await counter.post('/api/quotes').send({ buildId: DEMO.builds.vranesStripCoupe, camId: DEMO.cams.stripStreet224, extraLines: [{ kind: 'labor', laborOperationId: DEMO.labor.camSwapCar }] });
     expect(made.status).toBe(201);
     quoteId = made.body.id;
     expect((await counter.post(`/api/quotes/${quoteId}/send`)).status).toBe(200);

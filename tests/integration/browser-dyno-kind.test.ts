@@ -7,13 +7,14 @@ import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { removeDynoRuns } from '../support/dyno-runs';
+import { DEMO } from '../support/demo';
 
 // Engine dyno or chassis dyno, chosen on the job page as the technician records each pull: the table says
 // which, and the chart compares a chassis before pull only with chassis after pulls (an engine-dyno pull
 // reads at the flywheel, without the driveline's loss). Demo job Q-2026-0102 (quote 2, build 2); runs made
 // here are deleted afterwards.
 const { appUrl } = readRuntime();
-const BUILD_ID = 2;
+const BUILD_ID = DEMO.builds.okaforStreetTruck;
 const WHEELS_BEFORE = '3000,300\n4000,330\n5000,310\n5500,290';
 const FLYWHEEL_AFTER = '3000,370\n4000,405\n5000,400\n6000,380';
 const WHEELS_AFTER = '3000,295\n4000,335\n5000,330\n6000,310';

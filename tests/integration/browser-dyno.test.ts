@@ -9,12 +9,13 @@ import { DEMO_EMAILS, DEMO_PASSWORD } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { removeDynoRuns } from '../support/dyno-runs';
+import { DEMO } from '../support/demo';
 
 // The technician records the before and the after pull on the demo job Q-2026-0102 (quote 2, build 2)
 // through the page, typing like a person, in shop units (°F, inHg). Runs made here are deleted afterwards.
 const { appUrl } = readRuntime();
 const SHOTS = path.resolve(__dirname, '../../var/test/screenshots');
-const JOB = { quoteId: 2, buildId: 2 };
+const JOB = { quoteId: DEMO.quotes.okaforDepositPaid, buildId: DEMO.builds.okaforStreetTruck };
 
 // rpm, torque lb·ft. Power by the definition of horsepower, hp = lb·ft × rpm / 5252 (worked by hand):
 // before peaks at 5000 rpm: 350 × 5000 / 5252 = 333.2 hp (5500 rpm gives 333.0); torque peak 380 lb·ft at 4000.

@@ -3,6 +3,7 @@ import { seriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn, type TestRole } from '../support/auth';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // Layout measured from the browser's own boxes (getBoundingClientRect, Range.getClientRects), not by
 // comparing screenshots by eye: at 1280 px the staff header stays on one row for every role, lift values
@@ -11,8 +12,8 @@ const { appUrl } = readRuntime();
 
 const PAGES: Record<TestRole | 'public', string[]> = {
   public: ['/', '/ask', '/sign-in', '/forgot-password'],
-  counter: ['/dashboard', '/interviews', '/interviews/new', '/advisor?build=1', '/leads', '/quotes', '/quotes/1', '/catalogue', '/catalogue/cams', '/catalogue/cams/6', '/catalogue/parts', '/catalogue/labor', '/catalogue/rules', '/account'],
-  tech: ['/jobs', '/jobs/2'],
+  counter: ['/dashboard', '/interviews', '/interviews/new', `/advisor?build=${DEMO.builds.whitlockTowingTruck}`, '/leads', '/quotes', `/quotes/${DEMO.quotes.whitlockSent}`, '/catalogue', '/catalogue/cams', `/catalogue/cams/${DEMO.cams.easyDaily194}`, '/catalogue/parts', '/catalogue/labor', '/catalogue/rules', '/account'],
+  tech: ['/jobs', `/jobs/${DEMO.quotes.okaforDepositPaid}`],
   manager: ['/reports', '/staff', '/catalogue/settings', '/catalogue/cams/new', '/catalogue/cams/import'],
 };
 

@@ -5,6 +5,7 @@ import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser } from '../support/browser';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // From the shortlist to a draft quote in a real browser: "Make a quote" under a cam posts the build
 // and the cam and opens the new draft, whose lines and totals are on the staff quote page. The job
@@ -26,7 +27,7 @@ describe('Make a quote from the shortlist', () => {
     await context.addCookies([{ name, value, url: appUrl }]);
     const page = await context.newPage();
     // The demo 5.3 L pickup (seeded build 1), preselected as the interview's "see the shortlist" link does.
-    await page.goto(`${appUrl}/advisor?build=1`);
+    await page.goto(`${appUrl}/advisor?build=${DEMO.builds.whitlockTowingTruck}`);
     const firstCam = page.locator('table tbody tr').first().getByRole('button');
     await firstCam.waitFor();
     const camText = (await firstCam.textContent()) ?? '';

@@ -2,13 +2,14 @@ import http from 'node:http';
 import request from 'supertest';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // Upload limits (issue 13 item 6): a chunked multipart body is refused with 413 once it passes the
 // limit, not after it has all been read; a record keeps at most 10 spec sheets (409 naming the field).
 const { appUrl } = readRuntime();
 const app = () => request(appUrl);
 const pdf = Buffer.concat([Buffer.from('%PDF-1.4\n% limit test\n'), Buffer.alloc(512, 0x20), Buffer.from('\n%%EOF\n')]);
-const CAM = '/api/cams/9/attachments';
+const CAM = `/api/cams/${DEMO.cams.hauler208}/attachments`;
 let manager: string;
 const made: string[] = [];
 

@@ -4,6 +4,7 @@ import { AuditEntry, Cam, Customer, Quote } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // Cams over HTTP against the real build and the real MariaDB. Every cam made here has a SKU starting
 // with the run's prefix and is removed at the end, so the demo data stays as seeded.
@@ -17,7 +18,7 @@ function camBody(overrides: Record<string, unknown> = {}) {
   return {
     sku: `${PREFIX}-214`,
     name: 'Test Grind Street 214',
-    supplierId: 1,
+    supplierId: DEMO.suppliers.ridgeback,
     intakeDuration050: 214,
     exhaustDuration050: 220,
     intakeAdvertised: 266,
@@ -178,7 +179,7 @@ describe('cams: the list', () => {
     expect(list.status).toBe(200);
     expect(list.body.items.length).toBeGreaterThan(0);
     for (const cam of list.body.items) expect(cam).not.toHaveProperty('costCents');
-    const one = await app().get('/api/cams/7').set('Cookie', tech);
+    const one = await app().get(`/api/cams/${DEMO.cams.towBoss198}`).set('Cookie', tech);
     expect(one.body).not.toHaveProperty('costCents');
     const exported = await app().get('/api/cams/export').set('Cookie', tech);
     expect(exported.text.split('\r\n')[0]).not.toContain('cost');
@@ -188,11 +189,11 @@ describe('cams: the list', () => {
 describe('cams: only managers change anything', () => {
   it.each(['counter', 'tech'] as const)('refuses %s with 403 on create, change and delete, leaving the cam as it was', async (role) => {
     const cookie = role === 'counter' ? counter : tech;
-    const before = await Cam.findByPk(7);
+    const before = await Cam.findByPk(DEMO.cams.towBoss198);
     expect((await app().post('/api/cams').set('Cookie', cookie).send(camBody({ sku: `${PREFIX}-NO` }))).status).toBe(403);
-    expect((await app().patch('/api/cams/7').set('Cookie', cookie).send({ version: before!.version, priceCents: 1 })).status).toBe(403);
-    expect((await app().delete('/api/cams/7').set('Cookie', cookie)).status).toBe(403);
-    const after = await Cam.findByPk(7);
+    expect((await app().patch(`/api/cams/${DEMO.cams.towBoss198}`).set('Cookie', cookie).send({ version: before!.version, priceCents: 1 })).status).toBe(403);
+    expect((await app().delete(`/api/cams/${DEMO.cams.towBoss198}`).set('Cookie', cookie)).status).toBe(403);
+    const after = await Cam.findByPk(DEMO.cams.towBoss198);
     expect(after?.priceCents).toBe(before?.priceCents);
     expect(after?.version).toBe(before?.version);
     expect(await Cam.count({ where: { sku: `${PREFIX}-NO` } })).toBe(0);

@@ -4,6 +4,7 @@ import { AuditEntry, LaborOperation, Part } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 const PREFIX = `TP${Date.now().toString(36).toUpperCase()}`;
 const app = () => request(readRuntime().appUrl);
@@ -24,7 +25,7 @@ afterAll(async () => {
 
 describe('parts', () => {
   const part = (overrides: Record<string, unknown> = {}) => ({
-    sku: `${PREFIX}-SPR`, name: 'Test beehive spring kit', category: 'springs', supplierId: 3, priceCents: 31900, costCents: 19000, stockOnHand: 4, spec: { maxLiftIn: 0.6 }, ...overrides,
+    sku: `${PREFIX}-SPR`, name: 'Test beehive spring kit', category: 'springs', supplierId: DEMO.suppliers.foundryNine, priceCents: 31900, costCents: 19000, stockOnHand: 4, spec: { maxLiftIn: 0.6 }, ...overrides,
   });
 
   it('creates, lists, changes with the version and answers 409 to a stale change', async () => {
@@ -55,24 +56,24 @@ describe('parts', () => {
     expect(list.status).toBe(200);
     for (const p of list.body.items) expect(p).not.toHaveProperty('costCents');
     expect((await app().post('/api/parts').set('Cookie', tech).send(part({ sku: `${PREFIX}-T` }))).status).toBe(403);
-    expect((await app().patch('/api/parts/1').set('Cookie', counter).send({ version: 1, priceCents: 1 })).status).toBe(403);
+    expect((await app().patch(`/api/parts/${DEMO.parts.springs570}`).set('Cookie', counter).send({ version: 1, priceCents: 1 })).status).toBe(403);
   });
 
   it('refuses to delete a part a need rule uses, and deletes an unused one', async () => {
-    const used = await app().delete('/api/parts/2').set('Cookie', manager); // SPR-600, in the seeded springs rule
+    const used = await app().delete(`/api/parts/${DEMO.parts.ovateSprings600}`).set('Cookie', manager); // in the seeded springs rule
     expect(used.status).toBe(409);
     expect(used.body.message).toMatch(/need rule/);
-    expect(await Part.findByPk(2)).not.toBeNull();
+    expect(await Part.findByPk(DEMO.parts.ovateSprings600)).not.toBeNull();
     const spare = await app().post('/api/parts').set('Cookie', manager).send(part({ sku: `${PREFIX}-DEL` }));
     const gone = await app().delete(`/api/parts/${spare.body.id}`).set('Cookie', manager);
     expect(gone.body.outcome).toBe('deleted');
   });
 
   it('makes a part on a quote line inactive instead of deleting it', async () => {
-    const response = await app().delete('/api/parts/13').set('Cookie', manager); // TS-DR, on a seeded quote, in no rule
+    const response = await app().delete(`/api/parts/${DEMO.parts.doubleRollerTiming}`).set('Cookie', manager); // on a seeded quote, in no rule
     expect(response.status).toBe(200);
     expect(response.body.outcome).toBe('deactivated');
-    const restored = await app().patch('/api/parts/13').set('Cookie', manager).send({ version: response.body.part.version, active: true });
+    const restored = await app().patch(`/api/parts/${DEMO.parts.doubleRollerTiming}`).set('Cookie', manager).send({ version: response.body.part.version, active: true });
     expect(restored.body.active).toBe(true);
   });
 });
@@ -97,6 +98,6 @@ describe('labour operations', () => {
   it('lets staff read and only managers write', async () => {
     expect((await app().get('/api/labor').set('Cookie', tech)).body.total).toBeGreaterThanOrEqual(7);
     expect((await app().post('/api/labor').set('Cookie', counter).send({ code: `${PREFIX}-X`, name: 'x', hours: 1 })).status).toBe(403);
-    expect((await app().delete('/api/labor/1').set('Cookie', tech)).status).toBe(403);
+    expect((await app().delete(`/api/labor/${DEMO.labor.camSwapTruck}`).set('Cookie', tech)).status).toBe(403);
   });
 });

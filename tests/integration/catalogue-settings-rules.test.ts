@@ -3,6 +3,7 @@ import { AuditEntry, NeedRule, ShopSettings } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { DEMO, MISSING_ID } from '../support/demo';
 
 const app = () => request(readRuntime().appUrl);
 let manager: string;
@@ -70,15 +71,15 @@ describe('need rules', () => {
   });
 
   it('creates, changes (items and version) and deletes a rule, auditing each step', async () => {
-    const created = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'springs', vehicleClass: 'van', label: 'Test: vans get the dual springs', items: [{ partId: 3, laborOperationId: 4 }] });
+    const created = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'springs', vehicleClass: 'van', label: 'Test: vans get the dual springs', items: [{ partId: DEMO.parts.dualSprings660, laborOperationId: DEMO.labor.springInstall }] });
     expect(created.status).toBe(201);
     madeRules.push(created.body.id);
-    expect(created.body).toMatchObject({ kind: 'springs', vehicleClass: 'van', version: 1, items: [{ partId: 3, laborOperationId: 4, quantity: 1 }] });
+    expect(created.body).toMatchObject({ kind: 'springs', vehicleClass: 'van', version: 1, items: [{ partId: DEMO.parts.dualSprings660, laborOperationId: DEMO.labor.springInstall, quantity: 1 }] });
 
-    const changed = await app().patch(`/api/rules/${created.body.id}`).set('Cookie', manager).send({ version: 1, items: [{ partId: 3, laborOperationId: null, quantity: 1 }, { partId: 6, quantity: 1 }] });
+    const changed = await app().patch(`/api/rules/${created.body.id}`).set('Cookie', manager).send({ version: 1, items: [{ partId: DEMO.parts.dualSprings660, laborOperationId: null, quantity: 1 }, { partId: DEMO.parts.pushrodChecker, quantity: 1 }] });
     expect(changed.status).toBe(200);
     expect(changed.body.version).toBe(2);
-    expect(changed.body.items.map((i: { partId: number }) => i.partId)).toEqual([3, 6]);
+    expect(changed.body.items.map((i: { partId: number }) => i.partId)).toEqual([DEMO.parts.dualSprings660, DEMO.parts.pushrodChecker]);
 
     const stale = await app().patch(`/api/rules/${created.body.id}`).set('Cookie', manager).send({ version: 1, label: 'late' });
     expect(stale.status).toBe(409);
@@ -92,24 +93,24 @@ describe('need rules', () => {
   });
 
   it('checks the kind, the vehicle class and the items against the catalogue; a threshold is refused', async () => {
-    const oldKind = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', label: 'x', items: [{ partId: 1 }] });
+    const oldKind = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'lift-over', label: 'x', items: [{ partId: DEMO.parts.springs570 }] });
     expect(oldKind.status).toBe(422);
     expect(oldKind.body.errors).toEqual([expect.objectContaining({ field: 'kind', message: expect.stringContaining('springs') })]);
-    const threshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'springs', threshold: 0.57, label: 'x', items: [{ partId: 1 }] });
+    const threshold = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'springs', threshold: 0.57, label: 'x', items: [{ partId: DEMO.parts.springs570 }] });
     expect(threshold.body.errors).toEqual([expect.objectContaining({ field: 'threshold', message: expect.stringContaining('the advisor decides') })]);
-    const badClass = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'install', vehicleClass: 'boat', label: 'x', items: [{ partId: 1 }] });
+    const badClass = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'install', vehicleClass: 'boat', label: 'x', items: [{ partId: DEMO.parts.springs570 }] });
     expect(badClass.body.errors).toEqual([expect.objectContaining({ field: 'vehicleClass' })]);
-    const badItems = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'tune', label: 'x', items: [{ partId: 99999 }, {}] });
+    const badItems = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'tune', label: 'x', items: [{ partId: MISSING_ID }, {}] });
     expect(badItems.status).toBe(422);
     expect(badItems.body.errors.map((e: { field: string }) => e.field)).toEqual(['items.1.partId']);
-    const unknownPart = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'tune', label: 'x', items: [{ partId: 99999 }] });
-    expect(unknownPart.body.errors).toEqual([{ field: 'items.0.partId', message: 'there is no part with id 99999' }]);
+    const unknownPart = await app().post('/api/rules').set('Cookie', manager).send({ kind: 'tune', label: 'x', items: [{ partId: MISSING_ID }] });
+    expect(unknownPart.body.errors).toEqual([{ field: 'items.0.partId', message: `there is no part with id ${MISSING_ID}` }]);
   });
 
   it('refuses counter and tech changes', async () => {
-    expect((await app().post('/api/rules').set('Cookie', counter).send({ kind: 'tune', label: 'x', items: [{ partId: 1 }] })).status).toBe(403);
-    expect((await app().patch('/api/rules/1').set('Cookie', tech).send({ version: 1, active: false })).status).toBe(403);
-    expect((await app().delete('/api/rules/1').set('Cookie', counter)).status).toBe(403);
+    expect((await app().post('/api/rules').set('Cookie', counter).send({ kind: 'tune', label: 'x', items: [{ partId: DEMO.parts.springs570 }] })).status).toBe(403);
+    expect((await app().patch(`/api/rules/${DEMO.needRules.install}`).set('Cookie', tech).send({ version: 1, active: false })).status).toBe(403);
+    expect((await app().delete(`/api/rules/${DEMO.needRules.install}`).set('Cookie', counter)).status).toBe(403);
     expect((await NeedRule.findByPk(1))?.active).toBe(true);
   });
 });

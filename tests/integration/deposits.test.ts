@@ -6,14 +6,14 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { dayFromToday, makeSentQuote } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
+import type { QuoteRecord } from '@/lib/db/queries/quotes';
 
 // Exactly-once deposits (issue 12, item 3), over HTTP against the real build, MariaDB and the payments
 // fake. Every test makes its own customer, build and sent quote, so none depends on another or on the date.
 const { appUrl, paymentsUrl, env } = readRuntime();
 const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
 
-type Payment = { id: number; status: string; amountCents: number; refundedCents: number; providerSessionId: string | null; duplicateOfPaymentId: number | null };
-type Quote = { id: number; status: string; depositCents: number; paidCents: number; refundedCents: number; payments: Payment[] };
+type Quote = QuoteRecord;
 
 let sequelize: Sequelize;
 let counter: Awaited<ReturnType<typeof signedInAgent>>;

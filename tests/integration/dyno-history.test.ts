@@ -6,13 +6,16 @@ import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profi
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
+import type { ShopRankingEntry } from '@/lib/advisor-service';
 
 // Issue 11, item 5: a ranking reads the measured history of similar engines only (dyno_gains, kept in
 // the dyno run's own transaction), and the advisor gets the measured gain rpm by rpm, not just at the peak.
 const { appUrl } = readRuntime();
 const MARK = 'Historyrow';
+const BUILD_ID = DEMO.builds.whitlockTowingTruck; // the demo 5.3 L towing truck
 
-type RankedCam = { camId: number; history: { matches: number } | null; curve: { rpm: number; torqueLbFt: number }[] };
+type RankedCam = ShopRankingEntry;
 
 const hoursAgo = (hours: number) => new Date(Date.now() - hours * 3_600_000).toISOString();
 const grid = (from: number, to: number) => Array.from({ length: (to - from) / 250 + 1 }, (_, i) => from + i * 250);
@@ -84,7 +87,7 @@ beforeAll(async () => {
   [tech, counter] = await Promise.all([signIn('tech'), signIn('counter')]);
   profile = BuildProfileSchema.parse((await Build.findByPk(1))!.profile);
   camId = (await Cam.findOne({ where: { isFactoryBaseline: false, active: true, sku: { [Op.ne]: 'F9-219' } }, order: [['sku', 'ASC']] }))!.id;
-  expect(await DynoRun.count({ where: { buildId: 1 } })).toBe(0);
+  expect(await DynoRun.count({ where: { buildId: BUILD_ID } })).toBe(0);
 });
 
 afterAll(async () => {
@@ -118,11 +121,11 @@ describe('the measured history a ranking reads', () => {
     expect(without.history).toBeNull();
 
     for (const [phase, curve, when] of [['before', BEFORE, 3], ['after', AFTER, 2]] as const) {
-      const res = await request(appUrl).post('/api/dyno-runs').set('Cookie', tech).send({ buildId: 1, phase, ...AIR, curve, runAt: hoursAgo(when), ...(phase === 'after' ? { camId } : {}) }).expect(201);
+      const res = await request(appUrl).post('/api/dyno-runs').set('Cookie', tech).send({ buildId: BUILD_ID, phase, ...AIR, curve, runAt: hoursAgo(when), ...(phase === 'after' ? { camId } : {}) }).expect(201);
       created.push(res.body.id);
     }
     // Filed in the same transaction as the run: the row is there as soon as the answer is.
-    const row = (await DynoGain.findOne({ where: { buildId: 1, camId } }))!;
+    const row = (await DynoGain.findOne({ where: { buildId: BUILD_ID, camId } }))!;
     expect(row.gainPctByRpm!.find((p) => p.rpm === lowRpm)!.gainPct).toBeCloseTo(20, 6); // 396 / 330 − 1, same air both days
     expect(row.gainPctByRpm!.find((p) => p.rpm === 5000)!.gainPct).toBeCloseTo(0, 6);
 
@@ -138,16 +141,16 @@ describe('the measured history a ranking reads', () => {
   });
 
   it('follows the build: a new engine refiles its history, a deleted run takes it away', async () => {
-    const build = (await request(appUrl).get('/api/builds/1').set('Cookie', counter).expect(200)).body as { version: number; profile: BuildProfile };
+    const build = (await request(appUrl).get(`/api/builds/${BUILD_ID}`).set('Cookie', counter).expect(200)).body as { version: number; profile: BuildProfile };
     const edit = (engine: BuildProfile['engine'], version: number) =>
-      request(appUrl).patch('/api/builds/1').set('Cookie', counter).send({ version, profile: { ...build.profile, engine } });
+      request(appUrl).patch(`/api/builds/${BUILD_ID}`).set('Cookie', counter).send({ version, profile: { ...build.profile, engine } });
     const bored = await edit({ ...build.profile.engine, boreIn: build.profile.engine.boreIn + 0.03 }, build.version);
     expect(bored.status).toBe(200);
-    const refiled = (await DynoGain.findOne({ where: { buildId: 1, camId } }))!;
+    const refiled = (await DynoGain.findOne({ where: { buildId: BUILD_ID, camId } }))!;
     expect(refiled.displacementCi).toBeCloseTo(Math.PI / 4 * (profile.engine.boreIn + 0.03) ** 2 * profile.engine.strokeIn * profile.engine.cylinders, 6);
     expect((await edit(build.profile.engine, bored.body.version)).status).toBe(200);
 
     await request(appUrl).delete(`/api/dyno-runs/${created.pop()}`).set('Cookie', tech).expect(200);
-    expect(await DynoGain.count({ where: { buildId: 1 } })).toBe(0);
+    expect(await DynoGain.count({ where: { buildId: BUILD_ID } })).toBe(0);
   });
 });

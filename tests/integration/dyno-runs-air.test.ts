@@ -5,6 +5,7 @@ import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { removeDynoRuns } from '../support/dyno-runs';
+import { DEMO } from '../support/demo';
 
 // POST /api/dyno-runs asks for the air readings the chosen correction's formula uses, and no others:
 // SAE J1349 and J607 use temperature, pressure and humidity; DIN 70020 temperature and total pressure;
@@ -26,7 +27,7 @@ describe('dyno run air readings by correction standard', () => {
     }
     await disconnectTestDatabase();
   });
-  const post = (body: object) => request(appUrl).post('/api/dyno-runs').set('Cookie', tech).send({ buildId: 3, phase: 'before', curve: CURVE, ...body });
+  const post = (body: object) => request(appUrl).post('/api/dyno-runs').set('Cookie', tech).send({ buildId: DEMO.builds.vranesStripCoupe, phase: 'before', curve: CURVE, ...body });
 
   it('records an uncorrected run without any air readings (factor 1, observed = corrected)', async () => {
     const res = await post({ correctionStandard: 'none' }).expect(201);
@@ -56,6 +57,6 @@ describe('dyno run air readings by correction standard', () => {
     // Left out, the standard is SAE J1349 as before, so an old caller sending no air still hears why.
     const bare = await post({}).expect(422);
     expect(bare.body.errors.map((e: { field: string }) => e.field)).toEqual(['airTempC', 'baroKpa', 'humidityPct']);
-    expect(await DynoRun.count({ where: { buildId: 3, id: { [Op.notIn]: created } } })).toBe(0);
+    expect(await DynoRun.count({ where: { buildId: DEMO.builds.vranesStripCoupe, id: { [Op.notIn]: created } } })).toBe(0);
   });
 });

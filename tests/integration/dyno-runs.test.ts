@@ -6,20 +6,17 @@ import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { removeDynoRuns } from '../support/dyno-runs';
+import { DEMO, MISSING_ID } from '../support/demo';
+import type { ShopRankingEntry } from '@/lib/advisor-service';
+import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
 
-// Dyno runs for the seeded job: build 2, quote 2 (deposit paid), cam F9-219 going in. A technician
+// Dyno runs for the seeded job: the Okafor truck and its deposit-paid quote, cam F9-219 going in. A technician
 // records a before and an after pull; the advisor then shows the measured result for a similar build.
 const { appUrl } = readRuntime();
+const JOB = { buildId: DEMO.builds.okaforStreetTruck, quoteId: DEMO.quotes.okaforDepositPaid };
 
-type RunBody = {
-  id: number; buildId: number; quoteId: number | null; camId: number | null; phase: string;
-  correction: { standard: string; factor: number; pressureKpa: number; source: string };
-  observed: { peakHp: number; peakHpRpm: number; peakTorqueLbFt: number; peakTorqueRpm: number };
-  corrected: { peakHp: number; peakTorqueLbFt: number };
-  curve: { rpm: number; torqueLbFt: number; hp: number }[];
-  correctedCurve: { rpm: number; torqueLbFt: number; hp: number }[];
-};
-type History = { matches: number; modelGainPctPeakHp: number; measuredGainPctPeakHp: number; adjustedGainPctPeakHp: number } | null;
+type RunBody = DynoRunView;
+type History = ShopRankingEntry['history'];
 
 // Relative to now so the before run always sorts first, whatever the day the suite runs.
 const hoursAgo = (hours: number) => new Date(Date.now() - hours * 3_600_000).toISOString();
@@ -43,7 +40,7 @@ describe('dyno runs', () => {
     connectTestDatabase();
     [tech, counter] = await Promise.all([signIn('tech'), signIn('counter')]);
     f9Id = (await Cam.findOne({ where: { sku: 'F9-219' } }))!.id;
-    expect(await DynoRun.count({ where: { buildId: 2 } })).toBe(0);
+    expect(await DynoRun.count({ where: { buildId: JOB.buildId } })).toBe(0);
   });
   afterAll(async () => {
     if (created.length) {
@@ -71,57 +68,57 @@ describe('dyno runs', () => {
 
   it('refuses signed-out callers (401) and counter staff writing (403); counter may read', async () => {
     await request(appUrl).get('/api/dyno-runs?buildId=2').expect(401);
-    await post(null, { buildId: 2 }).expect(401);
-    await post(counter, { buildId: 2, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(403);
+    await post(null, { buildId: JOB.buildId }).expect(401);
+    await post(counter, { buildId: JOB.buildId, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(403);
     await request(appUrl).delete('/api/dyno-runs/1').set('Cookie', counter).expect(403);
     const list = await request(appUrl).get('/api/dyno-runs?buildId=2').set('Cookie', counter).expect(200);
     expect(list.body.runs).toEqual([]);
   });
 
   it('answers 422 naming each field and why', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'sideways', dynoType: 'rollers', baroKpa: 200, humidityPct: 40, curve: points([[3000, 300], [2900, 310], [4000, 320]]) }).expect(422);
+    const res = await post(tech, { buildId: JOB.buildId, phase: 'sideways', dynoType: 'rollers', baroKpa: 200, humidityPct: 40, curve: points([[3000, 300], [2900, 310], [4000, 320]]) }).expect(422);
     const fields = (res.body.errors as { field: string; message: string }[]).map((e) => e.field).sort();
     expect(fields).toEqual(['airTempC', 'baroKpa', 'curve.1.rpm', 'dynoType', 'phase']);
     expect(res.body.errors.find((e: { field: string }) => e.field === 'dynoType').message).toBe('dynoType must be one of: chassis, engine');
     expect(res.body.errors.find((e: { field: string }) => e.field === 'baroKpa').message).toBe('barometric pressure must be at most 110 kPa');
-    const noBuild = await post(tech, { buildId: 999999, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
+    const noBuild = await post(tech, { buildId: MISSING_ID, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
     expect(noBuild.body.errors).toEqual([{ field: 'buildId', message: 'no build with id 999999' }]);
-    const otherQuote = await post(tech, { buildId: 2, quoteId: 1, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
+    const otherQuote = await post(tech, { buildId: JOB.buildId, quoteId: DEMO.quotes.whitlockSent, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
     expect(otherQuote.body.errors[0].field).toBe('quoteId');
     // Definition of horsepower: 450 hp at 4,000 rpm is 450 · 5252 / 4000 = 590.9 lb·ft there, above a 400 lb·ft peak.
-    const impossible = await post(tech, { buildId: 2, phase: 'before', ...BEFORE_AIR, peak: { hp: 450, hpRpm: 4000, torqueLbFt: 400, torqueRpm: 3500 } }).expect(422);
+    const impossible = await post(tech, { buildId: JOB.buildId, phase: 'before', ...BEFORE_AIR, peak: { hp: 450, hpRpm: 4000, torqueLbFt: 400, torqueRpm: 3500 } }).expect(422);
     expect(impossible.body.errors[0]).toMatchObject({ field: 'peak.hp' });
     await request(appUrl).post('/api/dyno-runs').set('Cookie', tech).set('Content-Type', 'application/json').send('{not json').expect(400);
-    expect(await DynoRun.count({ where: { buildId: 2 } })).toBe(0);
+    expect(await DynoRun.count({ where: { buildId: JOB.buildId } })).toBe(0);
   });
 
   it('a technician records the before pull: hp from the horsepower definition, peaks derived, SAE J1349 correction', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'before', ...BEFORE_AIR, curve: BEFORE, notes: 'Baseline, stock cam', runAt: hoursAgo(2) }).expect(201);
+    const res = await post(tech, { buildId: JOB.buildId, phase: 'before', ...BEFORE_AIR, curve: BEFORE, notes: 'Baseline, stock cam', runAt: hoursAgo(2) }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
     // Left out, the kind of dyno is a chassis dyno: every run before the flag existed was one.
-    expect(run).toMatchObject({ buildId: 2, quoteId: 2, phase: 'before', dynoType: 'chassis' });
+    expect(run).toMatchObject({ buildId: JOB.buildId, quoteId: JOB.quoteId, phase: 'before', dynoType: 'chassis' });
     // Definition of horsepower: hp = lb·ft · rpm / 5252 on every point; 345 · 5000 / 5252 = 328.446 hp is the peak.
-    for (const p of run.curve) expect(p.hp).toBeCloseTo((p.torqueLbFt * p.rpm) / 5252, 9);
+    for (const p of run.curve!) expect(p.hp).toBeCloseTo((p.torqueLbFt * p.rpm) / 5252, 9);
     expect(run.observed.peakHp).toBeCloseTo(328.446, 3);
     expect(run.observed).toMatchObject({ peakHpRpm: 5000, peakTorqueLbFt: 380, peakTorqueRpm: 4000 });
     // SAE J1349, hand-worked above: cf = 1.048555; corrected peak = 328.446 · 1.048555 = 344.39 → 344.4 hp, 380 · 1.048555 = 398.45 → 398.5 lb·ft.
-    expect(run.correction.standard).toBe('sae-j1349');
-    expect(run.correction.factor).toBeCloseTo(1.048555, 5);
-    expect(run.correction.pressureKpa).toBeCloseTo(95.8817, 3);
+    expect(run.correction!.standard).toBe('sae-j1349');
+    expect(run.correction!.factor).toBeCloseTo(1.048555, 5);
+    expect(run.correction!.pressureKpa).toBeCloseTo(95.8817, 3);
     expect(run.corrected).toEqual({ peakHp: 344.4, peakTorqueLbFt: 398.5 });
-    for (const p of run.correctedCurve) expect(p.hp).toBeCloseTo((p.torqueLbFt * p.rpm) / 5252, 9);
+    for (const p of run.correctedCurve!) expect(p.hp).toBeCloseTo((p.torqueLbFt * p.rpm) / 5252, 9);
   });
 
   it('the after pull on F9-219 (the quote’s cam, filled in from the job) corrects down on a cooler, denser day', async () => {
-    const res = await post(tech, { buildId: 2, phase: 'after', dynoType: 'chassis', ...AFTER_AIR, curve: AFTER, runAt: hoursAgo(1) }).expect(201);
+    const res = await post(tech, { buildId: JOB.buildId, phase: 'after', dynoType: 'chassis', ...AFTER_AIR, curve: AFTER, runAt: hoursAgo(1) }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
-    expect(run).toMatchObject({ camId: f9Id, quoteId: 2, phase: 'after' });
+    expect(run).toMatchObject({ camId: f9Id, quoteId: JOB.quoteId, phase: 'after' });
     // 345 · 6000 / 5252 = 394.136 hp observed; SAE J1349 cf = 0.986524 (hand-worked above) → 388.8 hp corrected.
     expect(run.observed).toMatchObject({ peakHpRpm: 6000, peakTorqueLbFt: 395, peakTorqueRpm: 4500 });
     expect(run.observed.peakHp).toBeCloseTo(394.136, 3);
-    expect(run.correction.factor).toBeCloseTo(0.986524, 5);
+    expect(run.correction!.factor).toBeCloseTo(0.986524, 5);
     expect(run.corrected).toEqual({ peakHp: 388.8, peakTorqueLbFt: 389.7 });
     const one = await request(appUrl).get(`/api/dyno-runs/${run.id}`).set('Cookie', counter).expect(200);
     expect(one.body.corrected).toEqual(run.corrected);
@@ -149,7 +146,7 @@ describe('dyno runs', () => {
     // At the flywheel the same cam reads far more than at the wheels: 430 · 6000 / 5252 = 491.2 hp observed.
     // Paired with the chassis before pull it would claim about +40 %; the measured gain must stay +12.90 %.
     const flywheel = points([[3000, 420], [4000, 450], [5000, 445], [6000, 430]]);
-    const res = await post(tech, { buildId: 2, phase: 'after', dynoType: 'engine', ...AFTER_AIR, curve: flywheel, runAt: hoursAgo(0.5) }).expect(201);
+    const res = await post(tech, { buildId: JOB.buildId, phase: 'after', dynoType: 'engine', ...AFTER_AIR, curve: flywheel, runAt: hoursAgo(0.5) }).expect(201);
     created.push(res.body.id);
     expect(res.body).toMatchObject({ dynoType: 'engine', phase: 'after', camId: f9Id });
     expect((await DynoRun.findByPk(res.body.id))!.dynoType).toBe('engine');
@@ -158,7 +155,7 @@ describe('dyno runs', () => {
     // An engine-dyno before pull completes the engine pair: 410 · 5000 / 5252 = 390.3 hp observed, so the
     // flywheel gain (491.2 / 390.3 − 1 = +25.9 %, both on the after run's air) now counts as its own job beside the wheel one.
     const stand = points([[3000, 400], [4000, 415], [5000, 410], [5500, 380]]);
-    const before = await post(tech, { buildId: 2, phase: 'before', dynoType: 'engine', ...AFTER_AIR, curve: stand, runAt: hoursAgo(0.75) }).expect(201);
+    const before = await post(tech, { buildId: JOB.buildId, phase: 'before', dynoType: 'engine', ...AFTER_AIR, curve: stand, runAt: hoursAgo(0.75) }).expect(201);
     created.push(before.body.id);
     const both = (await rankF9(counter)).history!;
     expect(both.measuredGainPctPeakHp).toBeGreaterThan(h.measuredGainPctPeakHp);
@@ -166,7 +163,7 @@ describe('dyno runs', () => {
   });
 
   it('the job page shows the technician the build sheet and keeps counter staff out', async () => {
-    const page = await request(appUrl).get('/jobs/2').set('Cookie', tech).redirects(0).expect(200);
+    const page = await request(appUrl).get(`/jobs/${JOB.quoteId}`).set('Cookie', tech).redirects(0).expect(200);
     expect(page.text).toContain('Build sheet');
     expect(page.text).toContain('F9-219');
     // No prices for the workshop: neither money amounts nor the cam's own price in any format.
@@ -176,7 +173,7 @@ describe('dyno runs', () => {
     expect(page.text).not.toContain(camPrice.toLocaleString('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 }));
     const list = await request(appUrl).get('/jobs').set('Cookie', tech).redirects(0).expect(200);
     expect(list.text).toContain('Q-2026-0102');
-    const denied = await request(appUrl).get('/jobs/2').set('Cookie', counter).redirects(0);
+    const denied = await request(appUrl).get(`/jobs/${JOB.quoteId}`).set('Cookie', counter).redirects(0);
     expect(denied.status).toBeGreaterThanOrEqual(300);
     expect(denied.status).toBeLessThan(400);
   });
@@ -187,7 +184,7 @@ describe('dyno runs', () => {
       await request(appUrl).delete(`/api/dyno-runs/${id}`).set('Cookie', tech).expect(200);
       await request(appUrl).get(`/api/dyno-runs/${id}`).set('Cookie', tech).expect(404);
     }
-    expect(await DynoRun.count({ where: { buildId: 2 } })).toBe(0);
+    expect(await DynoRun.count({ where: { buildId: JOB.buildId } })).toBe(0);
     expect(await AuditEntry.count({ where: { action: 'dyno-run.deleted', entityId: { [Op.in]: created.map(String) } } })).toBe(created.length);
     expect((await rankF9(counter)).history).toBeNull();
   });

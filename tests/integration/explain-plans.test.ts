@@ -14,6 +14,7 @@ import { QuoteListQuerySchema } from '@/lib/schemas/quote-list';
 import { addDays, daysInRange, utcDay } from '@/lib/schemas/report';
 import { BULK, insertBulkRows, removeBulkRows } from '../support/bulk-rows';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { DEMO } from '../support/demo';
 
 // Every list and report query, exactly as the app sends it (captured from Sequelize's log while the
 // real query function runs), goes through EXPLAIN against thousands of invented rows. A plan that reads
@@ -113,7 +114,7 @@ describe('EXPLAIN of the lists', () => {
 
 describe('EXPLAIN of the advisor’s measured history', () => {
   it('reads dyno_gains by similar displacement (and cam), in index order, never the whole table', async () => {
-    const [demo] = await sequelize.query<{ profile: unknown }>('SELECT profile FROM builds WHERE id = 1', { type: QueryTypes.SELECT });
+    const [demo] = await sequelize.query<{ profile: unknown }>('SELECT profile FROM builds WHERE id = :id', { replacements: { id: DEMO.builds.whitlockTowingTruck }, type: QueryTypes.SELECT });
     const profile = BuildProfileSchema.parse(typeof demo.profile === 'string' ? JSON.parse(demo.profile) : demo.profile);
     const [cam] = await sequelize.query<{ camId: number }>('SELECT cam_id AS camId FROM dyno_gains ORDER BY id LIMIT 1', { type: QueryTypes.SELECT });
     await expectIndexedPlans(() => loadDynoHistory(profile));

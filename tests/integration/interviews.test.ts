@@ -5,6 +5,7 @@ import { BuildProfileSchema, type BuildProfileInput } from '@/lib/schemas/build-
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { DEMO, MISSING_ID } from '../support/demo';
 
 // The counter interview's API: customers and builds over HTTP against the real build and MariaDB.
 // Every customer this file creates carries MARK in its name and is deleted afterwards (builds go with
@@ -88,7 +89,7 @@ describe('customers and builds API (counter interview)', () => {
 
   it('adds a build for an existing customer, listed newest first and found by the customer’s phone', async () => {
     const customer = await post('/api/customers', counter, { name: `${MARK} Returning`, phone: '555-0444' }).expect(201);
-    const build = await post('/api/builds', counter, { customerId: customer.body.id, vehicleLabel: '2009 regular-cab, 4.8 L', profile: truckProfile(), baselineCamId: 1 }).expect(201);
+    const build = await post('/api/builds', counter, { customerId: customer.body.id, vehicleLabel: '2009 regular-cab, 4.8 L', profile: truckProfile(), baselineCamId: DEMO.cams.factory48 }).expect(201);
     expect(build.body.baselineCamId).toBe(1);
     const list = await request(appUrl).get('/api/builds?q=555-0444').set('Cookie', tech).expect(200);
     expect(list.body.items.map((b: { id: number }) => b.id)).toEqual([build.body.id]);
@@ -109,13 +110,13 @@ describe('customers and builds API (counter interview)', () => {
   it('answers 422 for other bad input: no customer, unknown customer, unknown baseline cam, bad e-mail, unknown field, not JSON', async () => {
     const fields = async (body: unknown) => (await post('/api/builds', counter, body).expect(422)).body.errors.map((e: { field: string }) => e.field);
     expect(await fields({ vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customerId']);
-    expect(await fields({ customerId: 99999999, vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customerId']);
-    expect(await fields({ customerId: 1, vehicleLabel: 'x', profile: truckProfile(), baselineCamId: 99999999 })).toEqual(['baselineCamId']);
+    expect(await fields({ customerId: MISSING_ID, vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customerId']);
+    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: truckProfile(), baselineCamId: MISSING_ID })).toEqual(['baselineCamId']);
     expect(await fields({ customer: { name: `${MARK} Bad mail`, email: 'not-an-address' }, vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customer.email']);
     const automaticNoStall = truckProfile();
     delete automaticNoStall.drivetrain.stallRpm;
-    expect(await fields({ customerId: 1, vehicleLabel: 'x', profile: automaticNoStall })).toEqual(['profile.drivetrain.stallRpm']);
-    expect(await fields({ customerId: 1, vehicleLabel: 'x', profile: { ...truckProfile(), turbo: true } })).toEqual(['profile.turbo']);
+    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: automaticNoStall })).toEqual(['profile.drivetrain.stallRpm']);
+    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: { ...truckProfile(), turbo: true } })).toEqual(['profile.turbo']);
     const notJson = await request(appUrl).post('/api/builds').set('Cookie', counter).set('Content-Type', 'application/json').send('{nope');
     expect(notJson.status).toBe(400);
     expect((await post('/api/customers', counter, { name: '' }).expect(422)).body.errors[0].field).toBe('name');
@@ -152,12 +153,12 @@ describe('customers and builds API (counter interview)', () => {
     const body = { customer: { name: `${MARK} Refused` }, vehicleLabel: 'x', profile: truckProfile() };
     await post('/api/builds', tech, body).expect(403);
     await post('/api/customers', tech, { name: `${MARK} Refused` }).expect(403);
-    await patch('/api/builds/1', tech, { version: 1, vehicleLabel: 'x' }).expect(403);
-    await patch('/api/customers/1', tech, { version: 1, name: 'x' }).expect(403);
+    await patch(`/api/builds/${DEMO.builds.whitlockTowingTruck}`, tech, { version: 1, vehicleLabel: 'x' }).expect(403);
+    await patch(`/api/customers/${DEMO.customers.whitlock}`, tech, { version: 1, name: 'x' }).expect(403);
     await request(appUrl).post('/api/builds').send(body).expect(401);
     await request(appUrl).get('/api/builds').expect(401);
-    await request(appUrl).get('/api/customers/1').expect(401);
-    await request(appUrl).get('/api/builds/1').set('Cookie', tech).expect(200);
+    await request(appUrl).get(`/api/customers/${DEMO.customers.whitlock}`).expect(401);
+    await request(appUrl).get(`/api/builds/${DEMO.builds.whitlockTowingTruck}`).set('Cookie', tech).expect(200);
     expect(await Customer.count({ where: { name: `${MARK} Refused` } })).toBe(0);
   });
 

@@ -1,17 +1,19 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { DEMO } from '../support/demo';
+import type { ShopRankingEntry } from '@/lib/advisor-service';
+import type { QuoteLineRecord } from '@/lib/db/queries/quotes';
 
 // Issue 12, item 1, over HTTP against the real build and MariaDB: the shortlist for the demo 5.3 L
 // pickup (seeded build 1: installed springs good to 0.500", a truck) says what the job costs before
 // tax; a quote drafted from it carries that very number, with the truck cam swap and the springs.
-const BUILD_ID = 1;
-const RB_198 = 7; // Ridgeback Tow Boss 198: $369.00, lift 0.525", deactivation-compatible
+const BUILD_ID = DEMO.builds.whitlockTowingTruck;
+const RB_198 = DEMO.cams.towBoss198; // Ridgeback Tow Boss 198: $369.00, lift 0.525", deactivation-compatible
 const LABOR_RATE = 13_500; // the demo shop's $135.00 an hour
 
-type Item = { type: 'part' | 'labor'; part: { sku: string } | null; laborOperation: { code: string; hours: number } | null; priceCents: number };
-type Ranking = { camId: number; rank: number; camName: string; jobPriceCents: number; camPriceCents: number; needs: { kind: string }[]; neededItems: Item[]; reasons: { subscore: string; text: string }[] };
-type Line = { kind: string; partId: number | null; laborOperationId: number | null; quantity: number; unitPriceCents: number; totalCents: number; description: string };
+type Ranking = ShopRankingEntry;
+type Line = QuoteLineRecord;
 
 let sequelize: Sequelize;
 let counter: Awaited<ReturnType<typeof signedInAgent>>;
@@ -59,7 +61,7 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
       expect(itemCodes(r)).toContain('CAM-TRUCK');
       expect(itemCodes(r)).not.toContain('CAM-CAR');
       // The cost reason's "about $X" is the same number, to the cent.
-      expect(r.reasons.find((x) => x.subscore === 'cost')?.text).toContain(`about ${money(r.jobPriceCents)} before tax`);
+      expect(r.reasons.find((x) => x.subscore === 'cost')?.text).toContain(`about ${money(r.jobPriceCents!)} before tax`);
     }
   });
 
@@ -90,9 +92,9 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
       expect(res.body.subtotalCents).toBe(shortlisted.jobPriceCents);
       expect(lines.reduce((s, l) => s + l.totalCents, 0)).toBe(shortlisted.jobPriceCents);
       // Cam-install labour by vehicle class: the truck swap, 8 h at the shop rate.
-      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === 1)).toMatchObject({ quantity: 8, unitPriceCents: LABOR_RATE, totalCents: 108_000 });
+      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.camSwapTruck)).toMatchObject({ quantity: 8, unitPriceCents: LABOR_RATE, totalCents: 108_000 });
       expect(lines.find((l) => l.kind === 'part' && l.description.startsWith('SPR-600'))).toBeDefined();
-      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === 4)).toMatchObject({ quantity: 2, totalCents: 27_000 });
+      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({ quantity: 2, totalCents: 27_000 });
       // Tax on the goods only (cam and parts), 8.25 %, half up; the tune and labour untaxed.
       const goods = lines.filter((l) => ['cam', 'part'].includes(l.kind)).reduce((s, l) => s + l.totalCents, 0);
       expect(res.body.taxCents).toBe(Math.floor((goods * 825 + 5_000) / 10_000));

@@ -5,6 +5,7 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { clearRateLimits } from '../support/rate-limits';
 import { readRuntime } from '../support/runtime';
+import type { ShortlistEntry } from '@/lib/leads/shortlist';
 
 // The at-home questionnaire end to end over HTTP against the real build, the real MariaDB and the mail
 // fake: answers → a stored lead with the top-3 shortlist, the shop's e-mail, the private result page,
@@ -37,7 +38,7 @@ afterAll(async () => {
   await disconnectTestDatabase();
 });
 
-type Entry = { rank: number; camId: number; camName: string; jobPriceCents: number; reasons: string[]; alsoNeeds: string[]; cautions: string[]; emissionsCertified: boolean };
+type Entry = ShortlistEntry;
 
 describe('POST /api/leads with a full answer set', () => {
   let body: { id: number; token: string; resultUrl: string; shortlist: { entries: Entry[]; notice: string } };
@@ -54,7 +55,7 @@ describe('POST /api/leads with a full answer set', () => {
     for (const entry of body.shortlist.entries) {
       expect(entry.camName).toEqual(expect.any(String));
       expect(entry.reasons.length).toBeGreaterThan(0);
-      expect(Number.isInteger(entry.jobPriceCents) && entry.jobPriceCents > 0).toBe(true);
+      expect(Number.isInteger(entry.jobPriceCents) && entry.jobPriceCents! > 0).toBe(true);
     }
     expect(new Set(body.shortlist.entries.map((e) => e.camId)).size).toBe(3);
     // Plain words for the customer: no exact prices, no counter jargon like inHg or dynamic compression.

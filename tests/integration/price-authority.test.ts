@@ -2,14 +2,16 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { makeDraftQuote } from '../support/quote-fixtures';
+import { DEMO } from '../support/demo';
+import type { QuoteLineRecord, QuoteRecord } from '@/lib/db/queries/quotes';
 
 // Price authority (issue 12, item 8), over HTTP against the real build and MariaDB. Counter staff sell
 // catalogue items at the catalogue price, give discounts up to the manager's limit (shop settings,
 // 5 % unless changed), and cannot move a line to an untaxed kind; a manager may, and is audited.
 // Every test makes its own customer, build and draft.
 
-type Line = { kind: string; camId: number | null; partId: number | null; laborOperationId: number | null; description: string; quantity: number; unitPriceCents: number; discountCents: number; totalCents: number };
-type Quote = { id: number; version: number; lines: Line[]; subtotalCents: number; taxCents: number; totalCents: number; taxRateBp: number };
+type Line = QuoteLineRecord;
+type Quote = QuoteRecord;
 
 let sequelize: Sequelize;
 let counter: Awaited<ReturnType<typeof signedInAgent>>;
@@ -65,7 +67,7 @@ describe('counter staff and prices', () => {
   });
 
   it('gets 403 naming extraLines when a new quote’s extra line is priced off the catalogue', async () => {
-    const res = await counter.post('/api/quotes').send({ buildId: 1, camId: 13, extraLines: [{ kind: 'labor', laborOperationId: 1, unitPriceCents: 100 }] });
+    const res = await counter.post('/api/quotes').send({ buildId: DEMO.builds.whitlockTowingTruck, camId: DEMO.cams.bigTruck219, extraLines: [{ kind: 'labor', laborOperationId: DEMO.labor.camSwapTruck, unitPriceCents: 100 }] });
     expect(res.status).toBe(403);
     expect(res.body.errors).toEqual([expect.objectContaining({ field: 'extraLines.0.unitPriceCents' })]);
   });

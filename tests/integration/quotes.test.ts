@@ -5,20 +5,24 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import crypto from 'node:crypto';
+import { DEMO, MISSING_ID } from '../support/demo';
+import type { QuoteLineRecord, QuoteRecord } from '@/lib/db/queries/quotes';
 
 // Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: a draft from
 // seeded build 1 (the towing truck, 5.3 L with active deactivation, 2,000 rpm stall) and a seeded cam,
 // sent by e-mail, opened from the link, paid through the payments fake, replayed, tampered, refunded.
 const { appUrl, mailUrl, paymentsUrl, env } = readRuntime();
-const CAM_ID = 13; // F9-219 Foundry Nine Big Truck 219: $439.00, lift 0.595", not deactivation-compatible
-const CAM_SWAP_TRUCK = 1; // labour operation CAM-TRUCK, 8.0 h (the seeded install rule for every vehicle but cars)
-const PTV_CHECK = 5; // labour operation PTV-CHK, 1.0 h
+const BUILD_ID = DEMO.builds.whitlockTowingTruck;
+const CAM_ID = DEMO.cams.bigTruck219; // $439.00, lift 0.595", not deactivation-compatible
+const CAM_SWAP_TRUCK = DEMO.labor.camSwapTruck; // 8.0 h (the seeded install rule for every vehicle but cars)
+const PTV_CHECK = DEMO.labor.ptvCheck; // 1.0 h
 const LABOR_RATE = 13_500; // the demo shop's $135.00 an hour
 const sha256 = (s: string) => crypto.createHash('sha256').update(s).digest('hex');
 const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
 
-type Line = { kind: string; partId: number | null; laborOperationId: number | null; camId: number | null; quantity: number; unitPriceCents: number; totalCents: number; unitCostCents?: number | null; description: string };
-type Quote = { id: number; number: string; status: string; version: number; lines: Line[]; subtotalCents: number; taxCents: number; taxRateBp: number; totalCents: number; depositCents: number; paidCents: number; refundedCents: number; payments: { status: string; amountCents: number; refundedCents: number }[]; costCents?: number; marginCents?: number };
+// The answers' shapes are the app's own (GET /api/quotes/[id] answers a QuoteRecord).
+type Quote = QuoteRecord;
+type Line = QuoteLineRecord;
 
 let sequelize: Sequelize;
 let manager: Awaited<ReturnType<typeof signedInAgent>>;
@@ -51,13 +55,13 @@ describe('a quote from build 1, sent, paid and refunded', () => {
   let completedEvent: unknown;
 
   it('makes a draft whose lines follow the need rules, priced in exact cents', async () => {
-    const build = (await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = 1', { type: QueryTypes.SELECT }))[0];
+    const build = (await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = ?', { replacements: [BUILD_ID], type: QueryTypes.SELECT }))[0];
     const profile = typeof build.profile === 'string' ? JSON.parse(build.profile) : build.profile;
     const ranked = await counter.post('/api/advisor/rank').send({ build: profile, camIds: [CAM_ID], includeCurves: false });
     expect(ranked.status).toBe(200);
     const needed = ranked.body.rankings[0].neededItems as { type: string; partId: number | null; laborOperationId: number | null; priceCents: number; part?: { sku: string } | null; laborOperation?: { code: string } | null }[];
 
-    const res = await counter.post('/api/quotes').send({ buildId: 1, camId: CAM_ID, extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }] });
+    const res = await counter.post('/api/quotes').send({ buildId: BUILD_ID, camId: CAM_ID, extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }] });
     expect(res.status).toBe(201);
     quote = res.body;
     expect(quote.status).toBe('draft');
@@ -75,9 +79,9 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     expect(skus).toEqual(expect.arrayContaining(['CAM-TRUCK', 'GS-TC', 'SPR-600', 'SPR-INST', 'PR-7400', 'DD-KIT-53', 'DD-ADD', 'TUNE-DYNO', 'TUNE-LAB']));
     expect(skus).not.toContain('CAM-CAR');
     expect(quote.lines.find((l) => l.laborOperationId === CAM_SWAP_TRUCK)).toMatchObject({ kind: 'labor', quantity: 8, totalCents: 108_000 });
-    expect(quote.lines.find((l) => l.laborOperationId === 4)).toMatchObject({ kind: 'labor', quantity: 2, unitPriceCents: LABOR_RATE, totalCents: 27_000 });
-    expect(quote.lines.find((l) => l.laborOperationId === 3)).toMatchObject({ quantity: 1.5, totalCents: 20_250 });
-    expect(quote.lines.find((l) => l.partId === 27)).toMatchObject({ kind: 'tune', totalCents: 49_500 });
+    expect(quote.lines.find((l) => l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({ kind: 'labor', quantity: 2, unitPriceCents: LABOR_RATE, totalCents: 27_000 });
+    expect(quote.lines.find((l) => l.laborOperationId === DEMO.labor.deactivationDelete)).toMatchObject({ quantity: 1.5, totalCents: 20_250 });
+    expect(quote.lines.find((l) => l.partId === DEMO.parts.dynoTune)).toMatchObject({ kind: 'tune', totalCents: 49_500 });
     // The staff's extra line last: 1 h × $135.00; before it the draft is exactly the shortlist's job price.
     expect(quote.lines.at(-1)).toMatchObject({ kind: 'labor', laborOperationId: PTV_CHECK, quantity: 1, totalCents: 13_500 });
     expect(quote.subtotalCents - 13_500).toBe(ranked.body.rankings[0].jobPriceCents);
@@ -92,7 +96,7 @@ describe('a quote from build 1, sent, paid and refunded', () => {
   });
 
   it('numbers quotes uniquely, counting up', async () => {
-    const other = await manager.post('/api/quotes').send({ buildId: 2, camId: 11 });
+    const other = await manager.post('/api/quotes').send({ buildId: DEMO.builds.okaforStreetTruck, camId: DEMO.cams.truckTorque212 });
     expect(other.status).toBe(201);
     const seq = (n: string) => Number(n.split('-')[2]);
     expect(other.body.number).not.toBe(quote.number);
@@ -109,12 +113,12 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     expect(techView.body.marginCents).toBeUndefined();
     expect(techView.body.lines.every((l: Line) => !('unitCostCents' in l))).toBe(true);
     expect((await tech.patch(`/api/quotes/${quote.id}`).send({ version: quote.version })).status).toBe(403);
-    expect((await tech.post('/api/quotes').send({ buildId: 1, camId: CAM_ID })).status).toBe(403);
+    expect((await tech.post('/api/quotes').send({ buildId: BUILD_ID, camId: CAM_ID })).status).toBe(403);
     expect((await request(appUrl).get('/api/quotes')).status).toBe(401);
   });
 
   it('rejects bad input by field, and bad references by name', async () => {
-    const bad = await counter.post('/api/quotes').send({ buildId: 1, camId: 999_999 });
+    const bad = await counter.post('/api/quotes').send({ buildId: BUILD_ID, camId: MISSING_ID });
     expect(bad.status).toBe(422);
     expect(bad.body.errors).toEqual([expect.objectContaining({ field: 'camId' })]);
     const line = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: [{ kind: 'other', description: 'Shop supplies', quantity: 1.005, unitPriceCents: 100 }] });
@@ -231,7 +235,7 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     const forged = JSON.parse(JSON.stringify(completedEvent));
     forged.id = 'evt_forged';
     forged.data.object.id = 'cs_forged_session';
-    forged.data.object.metadata = { quoteId: '1' };
+    forged.data.object.metadata = { quoteId: String(DEMO.quotes.whitlockSent) };
     const original = JSON.stringify(forged);
     const header = signed(original);
     const tampered = original.replace('"cs_forged_session"', '"cs_forged_sessioN"');
@@ -241,7 +245,7 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     expect(unsigned.status).toBe(400);
     const wrongSecret = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', stripe.webhooks.generateTestHeaderString({ payload: original, secret: 'whsec_someone_else' })).set('content-type', 'application/json').send(original);
     expect(wrongSecret.status).toBe(400);
-    const seeded = (await manager.get('/api/quotes/1')).body as Quote;
+    const seeded = (await manager.get(`/api/quotes/${DEMO.quotes.whitlockSent}`)).body as Quote;
     expect(seeded.status).toBe('sent');
     expect(seeded.payments).toEqual([]);
     const rows = await sequelize.query('SELECT id FROM payments WHERE provider_session_id LIKE ?', { replacements: ['cs_forged%'], type: QueryTypes.SELECT });
@@ -290,7 +294,7 @@ describe('staff pages', () => {
   });
 
   it('opens one quote with its lines and totals', async () => {
-    const page = await counter.get('/quotes/3');
+    const page = await counter.get(`/quotes/${DEMO.quotes.vranesDraft}`);
     expect(page.status).toBe(200);
     expect(page.text).toContain('Q-2026-0103');
     expect(page.text).toContain('Lantern Valley Strip Street 224');

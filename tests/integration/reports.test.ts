@@ -3,6 +3,8 @@ import request from 'supertest';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
+import type { ReportSummary } from '@/lib/db/queries/reports';
 
 // The manager's numbers over HTTP against the real build and MariaDB. Every expected figure is worked
 // out here from the database rows with plain SQL reads and JavaScript sums, never from the report code.
@@ -14,18 +16,8 @@ const FROM = utcDay(Date.now() - 29 * DAY);
 const STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'closed', 'declined', 'expired', 'cancelled', 'replaced'];
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
-type Margin = { revenueCents: number; costCents: number; marginCents: number; marginBp: number | null };
-type Summary = {
-  range: { from: string; to: string; days: number };
-  created: { count: number; valueCents: number };
-  byStatus: { status: string; count: number; valueCents: number }[];
-  conversion: { sentCount: number; depositPaidCount: number; rateBp: number | null };
-  averageQuoteCents: number | null;
-  deposits: { count: number; takenCents: number; refundedCents: number; netCents: number };
-  balances: { count: number; takenCents: number; refundedCents: number; netCents: number };
-  margin: { cams: Margin; parts: Margin; total: Margin };
-  topCams: { camId: number; sku: string; name: string; quotes: number; deposits: number }[];
-};
+type Summary = ReportSummary;
+type Margin = ReportSummary['margin']['total'];
 
 let sequelize: Sequelize;
 let manager: Agent;
@@ -168,7 +160,7 @@ describe('a quote made in the test moves the numbers', () => {
 
   it('counts a new draft: one more draft, its value, one more quote for its cam', async () => {
     const before = await summary();
-    const made = await manager.post('/api/quotes').send({ buildId: 1, camId: 13 });
+    const made = await manager.post('/api/quotes').send({ buildId: DEMO.builds.whitlockTowingTruck, camId: DEMO.cams.bigTruck219 });
     expect(made.status).toBe(201);
     quoteId = made.body.id;
     const [row] = await rows<{ total_cents: number }>('SELECT total_cents FROM quotes WHERE id = :quoteId', { quoteId });
@@ -199,7 +191,7 @@ describe('a quote made in the test moves the numbers', () => {
     expect(after.conversion.sentCount).toBe(before.conversion.sentCount + 1);
     expect(after.conversion.depositPaidCount).toBe(before.conversion.depositPaidCount + 1);
     expect(after.margin.cams.revenueCents).toBeGreaterThan(before.margin.cams.revenueCents);
-    expect(after.topCams.find((c) => c.camId === 13)!.deposits).toBe((before.topCams.find((c) => c.camId === 13)?.deposits ?? 0) + 1);
+    expect(after.topCams.find((c) => c.camId === DEMO.cams.bigTruck219)!.deposits).toBe((before.topCams.find((c) => c.camId === DEMO.cams.bigTruck219)?.deposits ?? 0) + 1);
     expect(after).toEqual(await expectedFromRows());
   });
 

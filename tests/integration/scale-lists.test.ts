@@ -2,13 +2,14 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { BULK_MARK, insertBulkRows, removeBulkRows } from '../support/bulk-rows';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import type { QuoteSummary } from '@/lib/db/queries/quote-list';
 
 // Lists and the CSV over HTTP with thousands of invented rows: every quote is reachable a page at a
 // time, the search finds a quote by number, customer and vehicle, and the export has every row of a
 // range well past one chunk (it used to stop at 10,000 without saying so).
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
-type QuotePage = { items: { id: number; number: string; customerName: string; vehicleLabel: string | null; updatedAt: string }[]; total: number; page: number; pageSize: number };
+type QuotePage = { items: QuoteSummary[]; total: number; page: number; pageSize: number };
 
 let sequelize: Sequelize;
 let counter: Agent;

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { signIn } from '../support/auth';
 import { readRuntime } from '../support/runtime';
+import { DEMO } from '../support/demo';
 
 // Issue 13, item 8: an attachment download keeps its own strict policy (a sandbox for an uploaded
 // file shown inline); JSON API answers are never cached; pages may post forms only to this site and
@@ -31,11 +32,11 @@ function directive(policy: string | undefined, name: string): string | undefined
 describe('attachment downloads', () => {
   it('keep their own sandboxed policy and private, no-store caching', async () => {
     const upload = await request(appUrl)
-      .post('/api/cams/8/attachments')
+      .post(`/api/cams/${DEMO.cams.lowRise204}/attachments`)
       .set('Cookie', manager)
       .attach('file', png, { filename: 'headers.png', contentType: 'image/png' });
     expect(upload.status).toBe(201);
-    const url = `/api/cams/8/attachments/${upload.body.id}`;
+    const url = `/api/cams/${DEMO.cams.lowRise204}/attachments/${upload.body.id}`;
     made.push(url);
     const served = await request(appUrl).get(url).set('Cookie', manager).buffer(true);
     expect(served.status).toBe(200);
@@ -52,8 +53,8 @@ describe('JSON API answers', () => {
     ['GET /api/users as a manager', () => request(appUrl).get('/api/users').set('Cookie', manager)],
     ['GET /api/cams as a manager', () => request(appUrl).get('/api/cams').set('Cookie', manager)],
     [
-      'GET /api/cams/8/attachments (a list, not a download)',
-      () => request(appUrl).get('/api/cams/8/attachments').set('Cookie', manager),
+      'GET /api/cams/<id>/attachments (a list, not a download)',
+      () => request(appUrl).get(`/api/cams/${DEMO.cams.lowRise204}/attachments`).set('Cookie', manager),
     ],
     [
       'POST /api/auth/forgot-password with bad input (422)',

@@ -1,6 +1,7 @@
 import crypto from 'node:crypto';
 import request from 'supertest';
 import { readRuntime } from './runtime';
+import { DEMO } from './demo';
 
 // Quotes a test owns from start to finish: its own customer (a unique invented e-mail), build and quote,
 // made through the API as counter staff would, optionally sent so the private link is known.
@@ -22,7 +23,7 @@ export function truckProfile() {
   };
 }
 
-export const FIXTURE_CAM_ID = 13; // a seeded truck cam the demo's rules price for this build
+export const FIXTURE_CAM_ID = DEMO.cams.bigTruck219; // a seeded truck cam the demo's rules price for this build
 
 export async function makeDraftQuote(staff: Agent, label: string, options: { validUntil?: string; extraLines?: unknown[]; customerName?: string } = {}): Promise<FixtureQuote> {
   const customerEmail = `${label.toLowerCase().replace(/[^a-z0-9]+/g, '-')}-${crypto.randomBytes(4).toString('hex')}@example.com`;
