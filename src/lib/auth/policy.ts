@@ -14,6 +14,7 @@ export const POLICY = {
   'customers.read': ['manager', 'counter', 'tech'],
   'customers.write': ['manager', 'counter'],
   'dyno.read': ['manager', 'counter', 'tech'],
+  'dyno.record': ['manager', 'tech'],
   'jobs.read': ['manager', 'tech'],
   'jobs.record': ['manager', 'tech'],
   'leads.follow-up': ['manager', 'counter'],

@@ -1,5 +1,6 @@
 import { recordAudit } from '@/lib/audit';
 import { findUserByEmail, setPasswordHash } from '@/lib/db/queries/users';
+import { HttpError } from '@/lib/http/errors';
 import { reserveSignInAttempt } from '@/lib/throttle/sign-in-limits';
 import type { SessionUser } from './guard';
 import { burnVerifyTime, hashPassword, needsNewHash, verifyPassword } from './password';
@@ -41,4 +42,15 @@ export async function checkSignIn(email: string, password: string, ip: string, k
   const sessionUser: SessionUser = { id: user.id, email: user.email, name: user.name, role: user.role };
   await recordAudit({ user: sessionUser, action: 'auth.signed-in', entityType: 'user', entityId: user.id, ip });
   return { kind: 'signed-in', user: sessionUser };
+}
+
+/** The 429 for a throttled sign-in, with Retry-After; it reads the same whether or not the account exists. */
+export function signInThrottled(retryAfterSeconds: number): HttpError {
+  const minutes = Math.ceil(retryAfterSeconds / 60);
+  return new HttpError(
+    429,
+    `Too many sign-in attempts. Try again in about ${minutes} minute${minutes === 1 ? '' : 's'}, sign in from a browser you used before, or reset your password.`,
+    { retryAfterSeconds },
+    { 'Retry-After': String(retryAfterSeconds) },
+  );
 }

@@ -1,11 +1,11 @@
 import { NextResponse } from 'next/server';
 import type { z } from 'zod';
 import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
-import { formatZodIssues as fieldErrorsOf } from '@/lib/schemas/errors';
 import type { WriteOutcome } from '@/lib/catalogue/versioned-write';
 
-// Small pieces every catalogue route handler shares: ids from the path, query strings through zod,
-// PATCH merging with the version check, and outcomes to status codes.
+// Write outcomes to status codes and the paged list shape, for every route handler. idFrom, parseQuery
+// and parseBody are the older answer-returning forms, kept until the quotes, reports and users handlers
+// move to the route kit (lib/http/route.ts), which throws instead.
 
 export type IdParams = { params: Promise<{ id: string }> };
 
@@ -31,31 +31,6 @@ export async function parseBody<S extends z.ZodType>(request: Request, schema: S
   return { ok: true, value: parsed.data };
 }
 
-/**
- * A PATCH body: `version` (and any control fields) plus the fields to change. The changes are laid over
- * the stored values and the whole record is validated again, so cross-field rules still hold.
- */
-export async function parsePatch<C extends z.ZodObject, S extends z.ZodType>(
-  request: Request,
-  control: C,
-  schema: S,
-  current: Record<string, unknown>,
-): Promise<{ ok: true; control: z.output<C>; values: z.output<S> } | { ok: false; response: NextResponse }> {
-  const body = await readJson(request);
-  if (!body.ok) return body;
-  if (typeof body.value !== 'object' || body.value === null || Array.isArray(body.value)) {
-    return { ok: false, response: validationFailed([{ field: '(body)', message: 'the body must be a JSON object' }]) };
-  }
-  const raw = body.value as Record<string, unknown>;
-  const controlKeys = Object.keys(control.shape);
-  const controlParsed = control.safeParse(Object.fromEntries(controlKeys.filter((k) => k in raw).map((k) => [k, raw[k]])));
-  const changes = Object.fromEntries(Object.entries(raw).filter(([k]) => !controlKeys.includes(k)));
-  const valuesParsed = schema.safeParse({ ...current, ...changes });
-  const errors = [...(controlParsed.success ? [] : fieldErrorsOf(controlParsed.error)), ...(valuesParsed.success ? [] : fieldErrorsOf(valuesParsed.error))];
-  if (errors.length || !controlParsed.success || !valuesParsed.success) return { ok: false, response: validationFailed(errors) };
-  return { ok: true, control: controlParsed.data, values: valuesParsed.data };
-}
-
 /** Turns a write outcome into the answer: 200/201 with the record, 404, 409 with the current record, 422. */
 export function outcomeResponse<R>(outcome: WriteOutcome<R>, options: { status?: number; label: string; present?: (r: R) => unknown }): NextResponse {
   const present = options.present ?? ((r: R) => r);
@@ -73,10 +48,6 @@ export function outcomeResponse<R>(outcome: WriteOutcome<R>, options: { status?:
       return errorResponse(outcome.status, outcome.message);
   }
 }
-
-// Cost hiding lives in lib/auth/costs.ts (the `costs.read` permission). Forwarded here only for the
-// route handlers that still import it from the kit; new code imports '@/lib/auth/costs'.
-export { canSeeCosts, withoutCosts } from '@/lib/auth/costs';
 
 export function paged<T>(items: T[], total: number, page: number, pageSize: number) {
   return { items, total, page, pageSize };

@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import { createPart, listParts } from '@/lib/db/queries/parts';
-import { outcomeResponse, paged, withoutCosts } from '@/lib/http/kit';
+import { withoutCosts } from '@/lib/auth/costs';
+import { outcomeResponse, paged } from '@/lib/http/kit';
 import { route } from '@/lib/http/route';
 import { PartListQuerySchema, PartSchema } from '@/lib/schemas/part';
 

@@ -1,10 +1,4 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
+import { route } from '@/lib/http/route';
 
-export const dynamic = 'force-dynamic';
-
-export async function GET(request: Request) {
-  const user = await requireRole(request);
-  if (user instanceof Response) return user;
-  return NextResponse.json({ user });
-}
+export const GET = route({ permission: 'account.self' }, ({ user }) => NextResponse.json({ user }));

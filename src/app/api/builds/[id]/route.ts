@@ -1,35 +1,26 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parsePatch, type IdParams } from '@/lib/http/kit';
 import { buildFormValues, getBuild, updateBuild } from '@/lib/db/queries/builds';
-import { errorResponse } from '@/lib/http/responses';
+import { notFound } from '@/lib/http/errors';
+import { outcomeResponse } from '@/lib/http/kit';
+import { readPatch } from '@/lib/http/parse';
+import { route } from '@/lib/http/route';
 import { BuildPatchControlSchema, BuildUpdateSchema } from '@/lib/schemas/build';
 
-export const dynamic = 'force-dynamic';
-
-/** One build with its full profile: any staff member. */
-export async function GET(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager', 'counter', 'tech');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'build');
-  if (id instanceof Response) return id;
-  const build = await getBuild(id);
-  if (!build) return errorResponse(404, `No build with id ${id}.`);
+/** One build with its full profile. */
+export const GET = route({ permission: 'builds.read', ids: { id: 'build' } }, async ({ ids }) => {
+  const build = await getBuild(ids.id);
+  if (!build) throw notFound('build', ids.id);
   return NextResponse.json(build);
-}
+});
 
 /**
  * Changes a build: `version` (the one the form loaded) plus any of customerId, vehicleLabel,
- * baselineCamId, profile (replaced whole). A stale version answers 409 with the current build.
+ * baselineCamId, profile (replaced whole). A stale version answers 409 with the current build; a
+ * missing build is 404 whatever the body says (the body is read after the lookup).
  */
-export async function PATCH(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager', 'counter');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'build');
-  if (id instanceof Response) return id;
-  const current = await getBuild(id);
-  if (!current) return errorResponse(404, `No build with id ${id}.`);
-  const patch = await parsePatch(request, BuildPatchControlSchema, BuildUpdateSchema, buildFormValues(current));
-  if (!patch.ok) return patch.response;
-  return outcomeResponse(await updateBuild(id, patch.control.version, patch.values, user), { label: 'build' });
-}
+export const PATCH = route({ permission: 'builds.write', ids: { id: 'build' } }, async ({ request, user, ids }) => {
+  const current = await getBuild(ids.id);
+  if (!current) throw notFound('build', ids.id);
+  const patch = await readPatch(request, BuildPatchControlSchema, BuildUpdateSchema, buildFormValues(current));
+  return outcomeResponse(await updateBuild(ids.id, patch.control.version, patch.values, user), { label: 'build' });
+});

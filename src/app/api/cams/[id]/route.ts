@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import { notFound } from '@/lib/http/errors';
-import { outcomeResponse, withoutCosts } from '@/lib/http/kit';
+import { withoutCosts } from '@/lib/auth/costs';
+import { outcomeResponse } from '@/lib/http/kit';
 import { readPatch } from '@/lib/http/parse';
 import { route } from '@/lib/http/route';
 import { camFormValues, getCam, removeCam, updateCam } from '@/lib/db/queries/cams';
@@ -17,8 +18,12 @@ export const PATCH = route({ permission: 'catalogue.write', ids: { id: 'cam' } }
   const current = await getCam(ids.id);
   if (!current) throw notFound('cam', ids.id);
   const patch = await readPatch(request, CamPatchControlSchema, CatalogueCamSchema, camFormValues(current));
-  return outcomeResponse(await updateCam(ids.id, patch.control.version, patch.values, patch.control.archived, user), { label: 'cam' });
+  return outcomeResponse(await updateCam(ids.id, patch.control.version, patch.values, patch.control.archived, user), {
+    label: 'cam',
+  });
 });
 
 /** Archives a cam that quotes (or builds, interviews, dyno runs) refer to; deletes one nothing refers to. */
-export const DELETE = route({ permission: 'catalogue.write', ids: { id: 'cam' } }, async ({ user, ids }) => outcomeResponse(await removeCam(ids.id, user), { label: 'cam' }));
+export const DELETE = route({ permission: 'catalogue.write', ids: { id: 'cam' } }, async ({ user, ids }) =>
+  outcomeResponse(await removeCam(ids.id, user), { label: 'cam' }),
+);

@@ -1,6 +1,6 @@
 import { camsToCsv } from '@/lib/catalogue/cam-csv';
 import { allCams } from '@/lib/db/queries/cams';
-import { canSeeCosts } from '@/lib/http/kit';
+import { canSeeCosts } from '@/lib/auth/costs';
 import { route } from '@/lib/http/route';
 
 /** The whole cam catalogue as CSV, in the import's columns (costs left out for technicians). */

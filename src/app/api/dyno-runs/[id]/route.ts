@@ -1,27 +1,17 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
 import { clientIp } from '@/lib/auth/request-info';
-import { idFrom, outcomeResponse, type IdParams } from '@/lib/http/kit';
 import { deleteDynoRun, getDynoRun } from '@/lib/db/queries/dyno-runs';
-import { errorResponse } from '@/lib/http/responses';
+import { notFound } from '@/lib/http/errors';
+import { outcomeResponse } from '@/lib/http/kit';
+import { route } from '@/lib/http/route';
 
-export const dynamic = 'force-dynamic';
-
-export async function GET(request: Request, context: IdParams) {
-  const user = await requireRole(request);
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'dyno run');
-  if (id instanceof Response) return id;
-  const run = await getDynoRun(id);
-  if (!run) return errorResponse(404, `No dyno run with id ${id}.`);
+export const GET = route({ permission: 'dyno.read', ids: { id: 'dyno run' } }, async ({ ids }) => {
+  const run = await getDynoRun(ids.id);
+  if (!run) throw notFound('dyno run', ids.id);
   return NextResponse.json(run);
-}
+});
 
 /** A mistaken run (wrong build, a typo) is deleted outright; the audit log keeps what it said. */
-export async function DELETE(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'tech', 'manager');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'dyno run');
-  if (id instanceof Response) return id;
-  return outcomeResponse(await deleteDynoRun(id, user, clientIp(request.headers)), { label: 'dyno run' });
-}
+export const DELETE = route({ permission: 'dyno.record', ids: { id: 'dyno run' } }, async ({ request, user, ids }) =>
+  outcomeResponse(await deleteDynoRun(ids.id, user, clientIp(request.headers)), { label: 'dyno run' }),
+);

@@ -1,17 +1,10 @@
-import { requireRole } from '@/lib/auth/guard';
-import { idFrom, outcomeResponse, parseBody, type IdParams } from '@/lib/http/kit';
 import { updateLeadStatus } from '@/lib/db/queries/leads';
+import { outcomeResponse } from '@/lib/http/kit';
+import { route } from '@/lib/http/route';
 import { LeadPatchSchema } from '@/lib/schemas/lead';
 
-export const dynamic = 'force-dynamic';
-
-/** { version, status }: managers and counter staff; a stale version answers 409 with the current lead. */
-export async function PATCH(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager', 'counter');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'lead');
-  if (id instanceof Response) return id;
-  const body = await parseBody(request, LeadPatchSchema);
-  if (!body.ok) return body.response;
-  return outcomeResponse(await updateLeadStatus(id, body.value, user), { label: 'lead' });
-}
+/** { version, status }: a stale version answers 409 with the current lead. */
+export const PATCH = route(
+  { permission: 'leads.follow-up', ids: { id: 'lead' }, body: LeadPatchSchema },
+  async ({ user, ids, body }) => outcomeResponse(await updateLeadStatus(ids.id, body, user), { label: 'lead' }),
+);

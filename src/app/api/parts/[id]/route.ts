@@ -1,7 +1,8 @@
 import { NextResponse } from 'next/server';
 import { getPart, partFormValues, removePart, updatePart } from '@/lib/db/queries/parts';
 import { notFound } from '@/lib/http/errors';
-import { outcomeResponse, withoutCosts } from '@/lib/http/kit';
+import { withoutCosts } from '@/lib/auth/costs';
+import { outcomeResponse } from '@/lib/http/kit';
 import { readPatch } from '@/lib/http/parse';
 import { route } from '@/lib/http/route';
 import { PartPatchControlSchema, PartSchema } from '@/lib/schemas/part';
