@@ -3,13 +3,9 @@
 import useSWR from 'swr';
 import type { ModelDetail } from '@/lib/advisor';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
+import { postForJson } from '@/lib/api-client';
 
-async function fetchDetail([url, build, camId]: [string, BuildProfile, number | 'baseline']): Promise<ModelDetail> {
-  const response = await fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ build, camId }) });
-  const body = await response.json().catch(() => null);
-  if (!response.ok) throw new Error(body?.errors?.[0]?.message ?? body?.message ?? `The advisor answered ${response.status}.`);
-  return body as ModelDetail;
-}
+const fetchDetail = ([url, build, camId]: [string, BuildProfile, number | 'baseline']) => postForJson<ModelDetail>(url, { build, camId });
 
 const cell = 'px-2 py-1 text-right';
 

@@ -7,6 +7,7 @@ import type { BuildProfile } from '@/lib/schemas/build-profile';
 import { formatMoney, hpText, pctText, rpmRangeText, rpmText, torqueText } from '@/lib/format';
 import { PowerChart } from './power-chart';
 import { RankingDetail } from './ranking-detail';
+import { postForJson } from '@/lib/api-client';
 
 type BuildOption = { id: number; label: string; profile: BuildProfile };
 
@@ -14,13 +15,7 @@ async function rank([url, build, camIds]: [string, BuildProfile, string?]): Prom
   // camIds (comma-separated, so the SWR key stays a plain value): just these cams, curves and all.
   const ids = camIds ? camIds.split(',').map(Number) : undefined;
   const body = ids ? { build, camIds: ids, curveLimit: ids.length } : { build };
-  const response = await fetch(url, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) });
-  const answer = await response.json().catch(() => null);
-  if (!response.ok) {
-    const fields = answer?.errors?.map((e: { field: string; message: string }) => `${e.field}: ${e.message}`).join('; ');
-    throw new Error(fields || answer?.message || `The advisor answered ${response.status}.`);
-  }
-  return answer as ShopRanking;
+  return postForJson<ShopRanking>(url, body);
 }
 
 export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds: BuildOption[]; notice: string; initialBuildId?: number }) {

@@ -4,7 +4,8 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import { z } from 'zod';
 import { PASSWORD_MAX, PASSWORD_MIN, changePasswordSchema } from '@/lib/schemas/auth';
-import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { formErrors, sendJson } from '@/lib/api-client';
+import { zodValidate } from '@/lib/forms/zod-formik';
 import { SubmitButton, TextField } from './form-parts';
 import { Banner } from '@/components/ui/banner';
 
@@ -25,14 +26,14 @@ export function ChangePasswordForm() {
       initialValues={{ currentPassword: '', newPassword: '', repeat: '' }}
       validate={zodValidate<Values>(formSchema)}
       onSubmit={async (values, helpers) => {
-        const answer = await sendJson('/api/account/password', 'POST', { currentPassword: values.currentPassword, newPassword: values.newPassword });
+        const answer = await sendJson('POST', '/api/account/password', { currentPassword: values.currentPassword, newPassword: values.newPassword });
         if (answer.status === 200) {
           const others = Number(answer.body.otherSessionsEnded ?? 0);
           setResult({ tone: 'ok', text: `Your password is changed.${others ? ` ${others} other session${others === 1 ? '' : 's'} signed out.` : ''}` });
           helpers.resetForm();
           return;
         }
-        if (answer.status === 422) helpers.setErrors(fieldErrors<Values>(answer));
+        if (answer.status === 422) helpers.setErrors(formErrors<Values>(answer));
         setResult({ tone: 'fault', text: answer.body.message ?? 'That did not work. Try again.' });
       }}
     >

@@ -3,7 +3,8 @@
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import { EMAIL_MAX, forgotPasswordSchema } from '@/lib/schemas/auth';
-import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { formErrors, sendJson } from '@/lib/api-client';
+import { zodValidate } from '@/lib/forms/zod-formik';
 import { SubmitButton, TextField } from './form-parts';
 import { Banner } from '@/components/ui/banner';
 
@@ -16,9 +17,9 @@ export function ForgotPasswordForm() {
       initialValues={{ email: '' }}
       validate={zodValidate<Values>(forgotPasswordSchema)}
       onSubmit={async (values, helpers) => {
-        const result = await sendJson('/api/auth/forgot-password', 'POST', values);
+        const result = await sendJson('POST', '/api/auth/forgot-password', values);
         if (result.status === 202) return setAnswer({ tone: 'ok', text: result.body.message ?? 'Check your inbox.' });
-        if (result.status === 422) helpers.setErrors(fieldErrors<Values>(result));
+        if (result.status === 422) helpers.setErrors(formErrors<Values>(result));
         setAnswer({ tone: 'fault', text: result.body.message ?? 'That did not work. Try again.' });
       }}
     >

@@ -4,7 +4,8 @@ import { Form, Formik } from 'formik';
 import Link from 'next/link';
 import { useState } from 'react';
 import { PASSWORD_MAX, PASSWORD_MIN, newPasswordField } from '@/lib/schemas/auth';
-import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { formErrors, sendJson } from '@/lib/api-client';
+import { zodValidate } from '@/lib/forms/zod-formik';
 import { z } from 'zod';
 import { SubmitButton, TextField } from './form-parts';
 import { Banner } from '@/components/ui/banner';
@@ -30,9 +31,9 @@ export function ResetPasswordForm({ token }: { token: string }) {
       initialValues={{ password: '', repeat: '' }}
       validate={zodValidate<Values>(formSchema)}
       onSubmit={async (values, helpers) => {
-        const answer = await sendJson('/api/auth/reset-password', 'POST', { token, password: values.password });
+        const answer = await sendJson('POST', '/api/auth/reset-password', { token, password: values.password });
         if (answer.status === 200) return setResult({ tone: 'ok', text: answer.body.message ?? 'Your password is set.' });
-        if (answer.status === 422) helpers.setErrors(fieldErrors<Values>(answer));
+        if (answer.status === 422) helpers.setErrors(formErrors<Values>(answer));
         setResult({ tone: 'fault', text: answer.body.message ?? 'That did not work. Try again.' });
       }}
     >

@@ -5,7 +5,8 @@ import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { EMAIL_MAX, PASSWORD_MAX, signInSchema } from '@/lib/schemas/auth';
-import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { formErrors, sendJson } from '@/lib/api-client';
+import { zodValidate } from '@/lib/forms/zod-formik';
 import { SubmitButton, TextField } from './form-parts';
 import { Banner } from '@/components/ui/banner';
 
@@ -20,13 +21,13 @@ export function SignInForm({ next }: { next: string }) {
       validate={zodValidate<Values>(signInSchema)}
       onSubmit={async (values, helpers) => {
         setProblem(null);
-        const answer = await sendJson('/api/auth/sign-in', 'POST', values);
+        const answer = await sendJson('POST', '/api/auth/sign-in', values);
         if (answer.status === 200) {
           router.push(next);
           router.refresh();
           return;
         }
-        if (answer.status === 422) helpers.setErrors(fieldErrors<Values>(answer));
+        if (answer.status === 422) helpers.setErrors(formErrors<Values>(answer));
         setProblem(answer.body.message ?? 'Signing in did not work. Try again.');
         helpers.setFieldValue('password', '', false);
       }}

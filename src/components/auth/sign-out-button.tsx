@@ -2,6 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { sendJson } from '@/lib/api-client';
 
 export function SignOutButton() {
   const router = useRouter();
@@ -12,7 +13,7 @@ export function SignOutButton() {
       disabled={busy}
       onClick={async () => {
         setBusy(true);
-        await fetch('/api/auth/sign-out', { method: 'POST', credentials: 'same-origin' }).catch(() => undefined);
+        await sendJson('POST', '/api/auth/sign-out'); // signed out or not, the sign-in page is next
         router.push('/sign-in');
         router.refresh();
       }}

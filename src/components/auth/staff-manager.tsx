@@ -5,7 +5,8 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { EMAIL_MAX } from '@/lib/schemas/auth';
 import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES, inviteUserSchema } from '@/lib/schemas/user';
-import { fieldErrors, sendJson, zodValidate } from '@/lib/forms/zod-formik';
+import { formErrors, getJson, sendJson } from '@/lib/api-client';
+import { zodValidate } from '@/lib/forms/zod-formik';
 import { SubmitButton, TextField } from './form-parts';
 import { Banner } from '@/components/ui/banner';
 import { dateTime } from '@/lib/format';
@@ -14,11 +15,7 @@ type Role = (typeof STAFF_ROLE_VALUES)[number];
 type StaffRow = { id: number; email: string; name: string; role: Role; active: boolean; version: number; hasPassword: boolean; lastSignInAt: string | null };
 type Message = { tone: 'ok' | 'fault' | 'caution'; text: string };
 
-async function fetchStaff(url: string): Promise<StaffRow[]> {
-  const response = await fetch(url, { credentials: 'same-origin' });
-  if (!response.ok) throw new Error(response.status === 401 ? 'You are signed out. Sign in again.' : `The staff list did not load (${response.status}).`);
-  return ((await response.json()) as { users: StaffRow[] }).users;
-}
+const fetchStaff = (url: string) => getJson<{ users: StaffRow[] }>(url).then((body) => body.users);
 
 function stateOf(row: StaffRow): { word: string; style: string } {
   if (!row.active) return { word: 'Switched off', style: 'bg-steel-100 text-ink-muted' };
@@ -35,7 +32,7 @@ export function StaffManager({ selfId }: { selfId: number }) {
   async function change(row: StaffRow, patch: { role?: Role; active?: boolean }, done: string) {
     setBusyId(row.id);
     setMessage(null);
-    const answer = await sendJson(`/api/users/${row.id}`, 'PATCH', { version: row.version, ...patch });
+    const answer = await sendJson('PATCH', `/api/users/${row.id}`, { version: row.version, ...patch });
     setBusyId(null);
     if (answer.status === 200) setMessage({ tone: 'ok', text: done });
     else if (answer.status === 409) setMessage({ tone: 'caution', text: `${answer.body.message ?? 'Someone else changed this account.'} The table now shows the current details.` });
@@ -130,13 +127,13 @@ function InviteForm({ onInvited }: { onInvited: (text: string) => Promise<void> 
       validate={zodValidate<InviteValues>(inviteUserSchema)}
       onSubmit={async (values, helpers) => {
         setProblem(null);
-        const answer = await sendJson('/api/users', 'POST', values);
+        const answer = await sendJson('POST', '/api/users', values);
         if (answer.status === 201) {
           helpers.resetForm();
           await onInvited(`Invitation sent to ${values.email}.`);
           return;
         }
-        if (answer.status === 422) helpers.setErrors(fieldErrors<InviteValues>(answer));
+        if (answer.status === 422) helpers.setErrors(formErrors<InviteValues>(answer));
         setProblem(answer.body.message ?? `That did not work (${answer.status}).`);
       }}
     >

@@ -2,7 +2,7 @@
 
 import { useRef, useState } from 'react';
 import useSWR from 'swr';
-import { getJson, sendJson } from './api';
+import { getJson, sendJson } from '@/lib/api-client';
 import { bytes } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';
 import { buttonClass } from '@/components/ui/button';
@@ -21,19 +21,14 @@ export function Attachments({ baseUrl, canEdit }: { baseUrl: string; canEdit: bo
     setMessage(null);
     const form = new FormData();
     form.set('file', file);
-    try {
-      const response = await fetch(`${baseUrl}/attachments`, { method: 'POST', body: form });
-      const body = await response.json().catch(() => ({}));
-      if (response.ok) {
-        setMessage({ tone: 'ok', text: `${body.fileName} added.` });
-        await mutate();
-      } else setMessage({ tone: 'fault', text: body.message ?? `The server answered ${response.status}.` });
-    } catch {
-      setMessage({ tone: 'fault', text: 'The server could not be reached; nothing was uploaded.' });
-    } finally {
-      setBusy(false);
-      if (input.current) input.current.value = '';
-    }
+    const { ok, status, body } = await sendJson<{ fileName?: string }>('POST', `${baseUrl}/attachments`, form);
+    if (ok) {
+      setMessage({ tone: 'ok', text: `${body.fileName} added.` });
+      await mutate();
+    } else if (status === 0) setMessage({ tone: 'fault', text: 'The server could not be reached; nothing was uploaded.' });
+    else setMessage({ tone: 'fault', text: body.message ?? `The server answered ${status}.` });
+    setBusy(false);
+    if (input.current) input.current.value = '';
   }
 
   return (

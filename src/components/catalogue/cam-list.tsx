@@ -5,7 +5,7 @@ import { useRouter, useSearchParams } from 'next/navigation';
 import { useEffect, useState } from 'react';
 import useSWR from 'swr';
 import type { CamRecord } from '@/lib/db/queries/cams';
-import { getJson, type ApiError } from './api';
+import { getJson, type ApiError } from '@/lib/api-client';
 import { deg, formatMoney, inches } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';

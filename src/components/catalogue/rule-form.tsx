@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { VEHICLE_CLASSES, type VehicleClass } from '@/lib/schemas/build-profile';
 import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, NeedRuleSchema, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
-import { sendJson } from './api';
+import { sendJson, useVersionedSave } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 
@@ -23,9 +23,8 @@ const toPayload = (v: Values) => ({
 
 export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; parts: { id: number; sku: string; name: string }[]; labor: { id: number; code: string; name: string }[] }) {
   const router = useRouter();
-  const [version, setVersion] = useState(rule?.version);
+  const { conflict, save, settle } = useVersionedSave<RuleRecord>(rule);
   const [problem, setProblem] = useState<string | null>(null);
-  const [conflict, setConflict] = useState<RuleRecord | null>(null);
   const initial: Values = {
     kind: rule?.kind ?? 'install',
     vehicleClass: rule?.vehicleClass ?? 'any',
@@ -46,12 +45,11 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
       }}
       onSubmit={async (values) => {
         setProblem(null);
-        const result = rule ? await sendJson<RuleRecord>('PATCH', `/api/rules/${rule.id}`, { ...toPayload(values), version }) : await sendJson<RuleRecord>('POST', '/api/rules', toPayload(values));
-        if (result.status === 200 || result.status === 201) {
+        const result = rule ? await save('PATCH', `/api/rules/${rule.id}`, toPayload(values)) : await save('POST', '/api/rules', toPayload(values));
+        if (result.ok) {
           router.push('/catalogue/rules?saved=1');
           router.refresh();
-        } else if (result.status === 409) setConflict(result.body.current as RuleRecord);
-        else setProblem(result.body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ?? result.body.message ?? `The server answered ${result.status}.`);
+        } else if (result.status !== 409) setProblem(result.body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ?? result.body.message ?? `The server answered ${result.status}.`);
       }}
     >
       {({ values, errors, submitCount, isSubmitting, handleChange, setValues }) => {
@@ -64,10 +62,10 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                   Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}, {RULE_VEHICLE_CLASS_TEXT[conflict.vehicleClass ?? 'any']}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
                 </p>
                 <div className="mt-2 flex gap-2">
-                  <Button type="button" variant="quiet" onClick={() => { setVersion(conflict.version); setValues({ ...values, kind: conflict.kind, vehicleClass: conflict.vehicleClass ?? 'any', label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); setConflict(null); }}>
+                  <Button type="button" variant="quiet" onClick={() => { settle(); setValues({ ...values, kind: conflict.kind, vehicleClass: conflict.vehicleClass ?? 'any', label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); }}>
                     Load their version
                   </Button>
-                  <Button type="button" variant="quiet" onClick={() => { setVersion(conflict.version); setConflict(null); }}>
+                  <Button type="button" variant="quiet" onClick={() => settle()}>
                     Keep mine (then save again)
                   </Button>
                 </div>

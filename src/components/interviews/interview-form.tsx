@@ -7,7 +7,7 @@ import useSWR from 'swr';
 import { SubmitButton } from '@/components/auth/form-parts';
 import { Banner } from '@/components/ui/banner';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
-import { sendJson } from '@/lib/forms/zod-formik';
+import { getJson, useVersionedSave } from '@/lib/api-client';
 import { BuildCreateSchema, BuildUpdateSchema } from '@/lib/schemas/build';
 import {
   BUILD_LIMITS as B, DEACTIVATION_STATES, EXHAUST_SYSTEMS, HEAD_MATERIALS, HEADER_TYPES, IDLE_WISHES, INTAKE_MANIFOLDS, POWER_BRAKES, PRIMARY_USES, TRANSMISSIONS,
@@ -44,6 +44,7 @@ export function InterviewForm(props: Props) {
   const router = useRouter();
   const { cards, mode } = props;
   const [problem, setProblem] = useState<React.ReactNode>(null);
+  const { save } = useVersionedSave(props.mode === 'edit' ? props.build : null);
   const initial = useMemo(() => (props.mode === 'edit' ? valuesFromBuild(props.build, cards) : (props.prefill ?? blankInterview(cards))), [props, cards]);
   const validate = useMemo(() => validateWith(mode === 'edit' ? BuildUpdateSchema : BuildCreateSchema, mode), [mode]);
 
@@ -51,8 +52,8 @@ export function InterviewForm(props: Props) {
     setProblem(null);
     const payload = payloadFromValues(values, mode);
     const answer = props.mode === 'edit'
-      ? await sendJson(`/api/builds/${props.build.id}`, 'PATCH', { ...payload, version: props.build.version })
-      : await sendJson('/api/builds', 'POST', 'leadId' in props && props.leadId ? { ...payload, leadId: props.leadId } : payload);
+      ? await save('PATCH', `/api/builds/${props.build.id}`, payload)
+      : await save('POST', '/api/builds', 'leadId' in props && props.leadId ? { ...payload, leadId: props.leadId } : payload);
     if (answer.status === 200 || answer.status === 201) {
       router.push(`/advisor?build=${String(answer.body.id)}`);
       return;
@@ -131,7 +132,7 @@ function CustomerSection({ mode }: { mode: 'create' | 'edit' }) {
   const { values, setFieldValue, errors, submitCount } = useFormikContext<InterviewValues>();
   const [search, setSearch] = useState('');
   const q = search.trim();
-  const { data } = useSWR<{ items: CustomerHit[] }>(mode === 'create' && values.customerMode === 'existing' && q.length >= 2 ? `/api/customers?pageSize=8&q=${encodeURIComponent(q)}` : null, (url: string) => fetch(url).then((r) => r.json()));
+  const { data } = useSWR<{ items: CustomerHit[] }>(mode === 'create' && values.customerMode === 'existing' && q.length >= 2 ? `/api/customers?pageSize=8&q=${encodeURIComponent(q)}` : null, getJson);
   const hits = data?.items ?? [];
   const pick = (hit: CustomerHit) => {
     void setFieldValue('customerId', String(hit.id));

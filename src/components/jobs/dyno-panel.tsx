@@ -9,15 +9,12 @@ import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
 import { DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_DIGITS, AIR_UNIT_TEXT, baroIn, tempIn, type AirUnits } from '@/lib/dyno/units';
 import { DynoRunForm } from './dyno-run-form';
+import { getJson, sendJson } from '@/lib/api-client';
 
 // The job's dyno runs: measured figures, observed and corrected, a chart of before against after
 // (corrected curves; the before pull is drawn the neutral baseline way), and the form to add one.
 
-async function fetchRuns(url: string): Promise<DynoRunView[]> {
-  const response = await fetch(url, { credentials: 'same-origin' });
-  if (!response.ok) throw new Error(response.status === 401 ? 'You are signed out. Sign in again.' : `The dyno runs did not load (${response.status}).`);
-  return ((await response.json()) as { runs: DynoRunView[] }).runs;
-}
+const fetchRuns = (url: string) => getJson<{ runs: DynoRunView[] }>(url).then((body) => body.runs);
 
 const STANDARD_NAMES: Record<string, string> = { 'sae-j1349': 'SAE J1349', 'sae-j607': 'SAE J607', 'din-70020': 'DIN 70020', none: 'none' };
 const fixed = (n: number | null | undefined, digits: number, unit: string) => (n === null || n === undefined ? '—' : `${n.toFixed(digits)} ${unit}`);
@@ -52,8 +49,8 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
 
   async function remove(run: DynoRunView) {
     if (!window.confirm(`Delete the ${run.phase} run of ${when(run.runAt)}? The audit log keeps what it said.`)) return;
-    const response = await fetch(`/api/dyno-runs/${run.id}`, { method: 'DELETE', credentials: 'same-origin' });
-    setMessage(response.ok ? 'Run deleted.' : `The run was not deleted (${response.status}).`);
+    const answer = await sendJson('DELETE', `/api/dyno-runs/${run.id}`);
+    setMessage(answer.ok ? 'Run deleted.' : `The run was not deleted (${answer.status}).`);
     await mutate();
   }
 

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { AIR_NEEDED_BY, CORRECTION_TEXT, STANDARD_LABELS } from '@/lib/dyno/correction';
 import { DYNO_TYPES, DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_UNIT_TEXT, type AirUnits } from '@/lib/dyno/units';
-import { sendJson } from '@/lib/forms/zod-formik';
+import { sendJson } from '@/lib/api-client';
 import { DYNO_LIMITS as L } from '@/lib/schemas/dyno-run';
 import { AIR_FIELDS, airFieldText, airSchema } from './dyno-air-schema';
 import { CurveInput } from './dyno-curve-input';
@@ -27,7 +27,7 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
 
   async function submit(values: Values, helpers: FormikHelpers<Values>) {
     const { payload, csv } = payloadOf(values, ids, units);
-    const answer = await sendJson('/api/dyno-runs', 'POST', payload);
+    const answer = await sendJson('POST', '/api/dyno-runs', payload);
     if (answer.status === 201) {
       // The next pull is usually the same day and the same cell: keep the air and the choices.
       const keep = { phase: values.phase, dynoType: values.dynoType, correctionStandard: values.correctionStandard, airTemp: values.airTemp, baro: values.baro, humidityPct: values.humidityPct, entry: values.entry };

@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import type { LeadNoteView } from '@/lib/db/queries/lead-notes';
 import { LEAD_NOTE_LIMITS } from '@/lib/schemas/lead-note';
+import { sendJson } from '@/lib/api-client';
 
 // The lead's note log: who spoke to the customer, when, what was said; and a box to add the next entry.
 export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteView[] }) {
@@ -16,19 +17,14 @@ export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteVi
   async function add() {
     setSaving(true);
     setMessage(null);
-    try {
-      const response = await fetch(`/api/leads/${leadId}/notes`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ body }) });
-      const data = (await response.json().catch(() => ({}))) as { message?: string; errors?: { message: string }[] };
-      if (response.ok) {
-        setBody('');
-        setMessage('Note added.');
-        router.refresh();
-      } else setMessage(data.errors?.[0]?.message ?? data.message ?? `Not saved (${response.status}).`);
-    } catch {
-      setMessage('Not saved: the server could not be reached.');
-    } finally {
-      setSaving(false);
-    }
+    const answer = await sendJson('POST', `/api/leads/${leadId}/notes`, { body });
+    setSaving(false);
+    if (answer.ok) {
+      setBody('');
+      setMessage('Note added.');
+      router.refresh();
+    } else if (answer.status === 0) setMessage('Not saved: the server could not be reached.');
+    else setMessage(answer.body.errors?.[0]?.message ?? answer.body.message ?? `Not saved (${answer.status}).`);
   }
 
   return (

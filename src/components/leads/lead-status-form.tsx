@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
 import { LEAD_STATUS_WORDS } from './lead-status';
+import { sendJson } from '@/lib/api-client';
 
 // Moves a lead along with the version it was read at; a stale version (409) says so and reloads.
 export function LeadStatusForm({ id, status, version }: { id: number; status: LeadStatus; version: number }) {
@@ -17,17 +18,12 @@ export function LeadStatusForm({ id, status, version }: { id: number; status: Le
     event.preventDefault();
     setSaving(true);
     setMessage(null);
-    try {
-      const response = await fetch(`/api/leads/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version, status: value }) });
-      const body = (await response.json().catch(() => ({}))) as { message?: string };
-      if (response.ok) setMessage('Saved.');
-      else setMessage(body.message ?? `Not saved (${response.status}).`);
-      router.refresh();
-    } catch {
-      setMessage('Not saved: the server could not be reached.');
-    } finally {
-      setSaving(false);
-    }
+    const answer = await sendJson('PATCH', `/api/leads/${id}`, { version, status: value });
+    setSaving(false);
+    if (answer.ok) setMessage('Saved.');
+    else if (answer.status === 0) return setMessage('Not saved: the server could not be reached.');
+    else setMessage(answer.body.message ?? `Not saved (${answer.status}).`);
+    router.refresh();
   }
 
   return (

@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { CHOICE_QUESTIONS, QUESTION_COUNT } from '@/lib/leads/questions';
 import { LEAD_LIMITS } from '@/lib/leads/limits';
+import { sendJson } from '@/lib/api-client';
 
 // The at-home questionnaire: one question per screen, big targets, plain words. Answers live in
 // sessionStorage so a reload (or a phone that drops the tab) keeps them until they are sent. The server
@@ -106,35 +107,29 @@ export function Questionnaire() {
     if (Object.keys(local).length) return;
     setSending(true);
     setProblem(null);
-    try {
-      const payload = {
-        ...Object.fromEntries(CHOICE_QUESTIONS.map((q) => [q.key, answers[q.key]])),
-        name: answers.name,
-        email: answers.email?.trim() || undefined,
-        phone: answers.phone?.trim() || undefined,
-        consent: true,
-        website: trap,
-      };
-      const response = await fetch('/api/leads', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(payload) });
-      const body = (await response.json().catch(() => ({}))) as { resultUrl?: string; message?: string; errors?: { field: string; message: string }[] };
-      if (response.status === 201 && body.resultUrl) {
-        window.sessionStorage.removeItem(STORAGE_KEY);
-        router.push(body.resultUrl);
-        return;
-      }
-      if (response.status === 422 && body.errors) {
-        const fieldErrors = Object.fromEntries(body.errors.map((e) => [e.field, e.message]));
-        setErrors(fieldErrors);
-        const wrongStep = CHOICE_QUESTIONS.findIndex((q) => fieldErrors[q.key]);
-        if (wrongStep >= 0) go(wrongStep);
-        setProblem('Something in your answers needs another look.');
-      } else {
-        setProblem(body.message ?? 'That did not go through. Please try again in a moment, or call the shop.');
-      }
-    } catch {
+    const payload = {
+      ...Object.fromEntries(CHOICE_QUESTIONS.map((q) => [q.key, answers[q.key]])),
+      name: answers.name,
+      email: answers.email?.trim() || undefined,
+      phone: answers.phone?.trim() || undefined,
+      consent: true,
+      website: trap,
+    };
+    const { status, body } = await sendJson<{ resultUrl?: string }>('POST', '/api/leads', payload);
+    setSending(false);
+    if (status === 201 && body.resultUrl) {
+      window.sessionStorage.removeItem(STORAGE_KEY);
+      router.push(body.resultUrl);
+    } else if (status === 422 && body.errors) {
+      const fieldErrors = Object.fromEntries(body.errors.map((e) => [e.field, e.message]));
+      setErrors(fieldErrors);
+      const wrongStep = CHOICE_QUESTIONS.findIndex((q) => fieldErrors[q.key]);
+      if (wrongStep >= 0) go(wrongStep);
+      setProblem('Something in your answers needs another look.');
+    } else if (status === 0) {
       setProblem('We could not reach the shop’s website. Check your connection and try again.');
-    } finally {
-      setSending(false);
+    } else {
+      setProblem(body.message ?? 'That did not go through. Please try again in a moment, or call the shop.');
     }
   }
 

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { sendJson } from '@/components/catalogue/api';
+import { sendJson } from '@/lib/api-client';
 import { Button, ButtonAnchor } from '@/components/ui/button';
 import type { QuoteRecord } from '@/lib/db/queries/quotes';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';

@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { sendJson } from '@/components/catalogue/api';
+import { sendJson } from '@/lib/api-client';
 import { Button } from '@/components/ui/button';
 
 /** On the shortlist: turns the build and this cam into a draft quote and opens it. */

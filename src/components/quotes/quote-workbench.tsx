@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useState } from 'react';
 import useSWR from 'swr';
-import { getJson, sendJson } from '@/components/catalogue/api';
+import { getJson, sendJson } from '@/lib/api-client';
 import { centsFromText, formatMoney, percentFromBp } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';

@@ -1,7 +1,7 @@
 'use client';
 
 import useSWR from 'swr';
-import { ApiError, getJson } from '@/components/catalogue/api';
+import { ApiError, getJson } from '@/lib/api-client';
 import { count, formatMoney, percentFromBp } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';
 import { Button, ButtonAnchor } from '@/components/ui/button';

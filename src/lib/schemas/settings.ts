@@ -6,6 +6,7 @@ import { VersionSchema, wholeCents } from './catalogue-cam';
 // The shop's prices and policy: labour rate (cents per hour), tax rate (basis points, 1 % = 100 bp)
 // and the deposit (a percent of the quote total, kept between a minimum and a maximum).
 export const SETTINGS_LIMITS = {
+  nameMaxLength: 120,
   laborRateCents: { min: 0, max: 100_000 },
   taxRateBp: { min: 0, max: 3_000 },
   depositPercentBp: { min: 0, max: 10_000 },
@@ -23,7 +24,7 @@ const setting = (label: string, max: number, options: { required?: boolean; mult
 export const ShopSettingsSchema = z
   .strictObject(
     {
-      name: setting('shop name', 120, { required: true }),
+      name: setting('shop name', S.nameMaxLength, { required: true }),
       address: setting('address', 255, { multiline: true }),
       phone: setting('phone', 40),
       email: z.union([z.literal(''), text('email').pipe(z.email({ error: 'email must be an e-mail address' }).max(254))], { error: 'email must be an e-mail address' }),

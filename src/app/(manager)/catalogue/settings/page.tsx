@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { formatMoney, percentFromBp } from '@/lib/format';
-import { SettingsForm } from '@/components/catalogue/record-forms';
+import { SettingsForm } from '@/components/catalogue/part-labor-settings-forms';
 import { Banner } from '@/components/ui/banner';
 import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';

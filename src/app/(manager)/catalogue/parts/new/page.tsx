@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { PartForm } from '@/components/catalogue/record-forms';
+import { PartForm } from '@/components/catalogue/part-labor-settings-forms';
 import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { Attachments } from '@/components/catalogue/attachments';
-import { PartForm } from '@/components/catalogue/record-forms';
+import { PartForm } from '@/components/catalogue/part-labor-settings-forms';
 import { DeleteButton } from '@/components/catalogue/rule-form';
 import { PageHeader } from '@/components/ui/page-header';
 import { requireRoleForPage } from '@/lib/auth/guard';

@@ -1,16 +1,18 @@
 'use client';
 
-import { Form, Formik, useField, type FormikErrors, type FormikHelpers } from 'formik';
+import { Form, Formik, useField, type FormikHelpers } from 'formik';
 import { useState } from 'react';
-import type { z } from 'zod';
-import { sendJson } from './api';
+import * as yup from 'yup';
+import { useVersionedSave } from '@/lib/api-client';
 import { centsFromText, formatMoney } from '@/lib/format';
+import { moneyWithin, numberWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 
-// One formik form for every catalogue record. Fields are described once (FieldDef); the browser checks
-// them with the same zod schema the server uses, the server's 422 lands on the same fields, and a 409
-// shows what the other person changed before anything is saved again.
+// One formik form for every catalogue record. Fields are described once (FieldDef), each with the limit the
+// zod schema exports (range, maxLength); the browser checks those with yup as someone types, the server
+// checks everything with zod and its 422 lands on the same fields, and a 409 shows what the other person
+// changed before anything is saved again.
 
 export type FieldDef = {
   name: string;
@@ -20,8 +22,11 @@ export type FieldDef = {
   hint?: string;
   options?: { value: string; label: string }[];
   step?: string;
-  /** Shown but never sent (e.g. a computed figure). */
   wide?: boolean;
+  /** Limits from the entity's schema (src/lib/schemas): checked in the browser, and again by the server. */
+  range?: Range;
+  maxLength?: number;
+  required?: boolean;
 };
 
 export type FormValues = Record<string, string | boolean>;
@@ -58,17 +63,19 @@ export function payloadFromValues(fields: FieldDef[], values: FormValues): Recor
   return out;
 }
 
-export function zodValidator(fields: FieldDef[], schema: z.ZodType) {
-  return (values: FormValues): FormikErrors<FormValues> => {
-    const parsed = schema.safeParse(payloadFromValues(fields, values));
-    if (parsed.success) return {};
-    const errors: FormikErrors<FormValues> = {};
-    for (const issue of parsed.error.issues) {
-      const key = String(issue.path[0] ?? '');
-      if (key && !errors[key]) errors[key] = issue.message;
-    }
-    return errors;
-  };
+/** "Tax rate" → "tax rate" for a message, but "SKU" stays "SKU". */
+const inMessage = (label: string) => (/^[A-Z][a-z]/.test(label) ? label[0].toLowerCase() + label.slice(1) : label);
+
+/** formik's validation for these fields, built with yup from the limits each FieldDef carries. */
+export function yupValidator(fields: FieldDef[]) {
+  const shape: Record<string, yup.AnySchema> = {};
+  for (const f of fields) {
+    const label = inMessage(f.label);
+    if (f.kind === 'text' || f.kind === 'textarea') shape[f.name] = textUpTo(label, f.maxLength, { required: f.required });
+    else if (f.kind === 'number' || f.kind === 'integer') shape[f.name] = numberWithin(label, f.unit ?? '', f.range, { integer: f.kind === 'integer', required: f.required });
+    else if (f.kind === 'money') shape[f.name] = moneyWithin(label, f.range, centsFromText, { required: f.required });
+  }
+  return validateWithYup<FormValues>(yup.object(shape));
 }
 
 function Field({ def }: { def: FieldDef }) {
@@ -135,11 +142,8 @@ function show(def: FieldDef | undefined, value: unknown): string {
   return `${String(value)}${def?.unit ? ` ${def.unit}` : ''}`;
 }
 
-type Conflict = { current: Record<string, unknown>; mine: FormValues };
-
 export function RecordForm({
   fields,
-  schema,
   record,
   createUrl,
   updateUrl,
@@ -148,7 +152,6 @@ export function RecordForm({
   extraPayload,
 }: {
   fields: FieldDef[];
-  schema: z.ZodType;
   record: (Record<string, unknown> & { version?: number }) | null;
   createUrl?: string;
   updateUrl?: string;
@@ -156,23 +159,22 @@ export function RecordForm({
   onSaved: (saved: Record<string, unknown>) => void;
   extraPayload?: Record<string, unknown>;
 }) {
-  const [base, setBase] = useState(record);
-  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const { base, conflict, save, settle } = useVersionedSave<Record<string, unknown> & { version?: number }>(record);
+  // What was typed when their save came back, to show beside theirs.
+  const [mine, setMine] = useState<FormValues | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const byName = new Map(fields.map((f) => [f.name, f]));
 
   async function submit(values: FormValues, helpers: FormikHelpers<FormValues>) {
     setProblem(null);
     const payload = { ...payloadFromValues(fields, values), ...extraPayload };
-    const result = base && updateUrl ? await sendJson<Record<string, unknown>>('PATCH', updateUrl, { ...payload, version: base.version }) : await sendJson<Record<string, unknown>>('POST', createUrl!, payload);
-    if (result.status === 200 || result.status === 201) {
-      setConflict(null);
-      setBase(result.body as typeof base);
+    const result = base && updateUrl ? await save('PATCH', updateUrl, payload) : await save('POST', createUrl!, payload);
+    if (result.ok) {
       onSaved(result.body);
       return;
     }
     if (result.status === 409 && result.body.current) {
-      setConflict({ current: result.body.current as Record<string, unknown>, mine: values });
+      setMine(values);
       return;
     }
     if (result.status === 422 && result.body.errors) {
@@ -190,11 +192,11 @@ export function RecordForm({
   }
 
   return (
-    <Formik initialValues={valuesFromRecord(fields, record)} validate={zodValidator(fields, schema)} onSubmit={submit} enableReinitialize={false}>
+    <Formik initialValues={valuesFromRecord(fields, record)} validate={yupValidator(fields)} onSubmit={submit} enableReinitialize={false}>
       {({ isSubmitting, setValues }) => {
         const differences = conflict
           ? fields
-              .map((f) => ({ def: f, theirs: conflict.current[f.name], before: base?.[f.name], mine: payloadFromValues([f], conflict.mine)[f.name] }))
+              .map((f) => ({ def: f, theirs: conflict[f.name], before: base?.[f.name], mine: payloadFromValues([f], mine ?? {})[f.name] }))
               .filter((d) => JSON.stringify(d.theirs ?? null) !== JSON.stringify(d.before ?? null))
           : [];
         return (
@@ -229,19 +231,15 @@ export function RecordForm({
                   <Button
                     type="button" variant="quiet"
                     onClick={() => {
-                      setBase(conflict.current as typeof base);
-                      setValues(valuesFromRecord(fields, conflict.current));
-                      setConflict(null);
+                      const theirs = settle();
+                      if (theirs) setValues(valuesFromRecord(fields, theirs));
                     }}
                   >
                     Load their version
                   </Button>
                   <Button
                     type="button" variant="quiet"
-                    onClick={() => {
-                      setBase(conflict.current as typeof base);
-                      setConflict(null);
-                    }}
+                    onClick={() => settle()}
                   >
                     Keep my values (then save again)
                   </Button>

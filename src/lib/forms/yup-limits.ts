@@ -1,0 +1,70 @@
+import * as yup from 'yup';
+
+// formik's checks in the browser, built with yup (formik's own pairing) from the limits the zod schemas
+// export (CATALOGUE_CAM_LIMITS, LABOR_LIMITS, SETTINGS_LIMITS, …), so each limit is written once. They say
+// at once what is out of range as someone types; the route handler still validates the body with zod and its
+// 422 lands on the same fields. Messages follow the zod schemas' wording: "<label> must be at most 99.99 h".
+
+export type Range = { readonly min: number; readonly max: number };
+
+/** A blank box is "not given" (undefined), not zero or NaN. */
+const blankIsMissing = (value: unknown, original: unknown) =>
+  typeof original === 'string' && original.trim() === '' ? undefined : value;
+
+/** A number typed as text: a range in `unit`, optionally whole, optionally required. */
+export function numberWithin(
+  label: string,
+  unit: string,
+  range?: Range,
+  options: { integer?: boolean; required?: boolean } = {},
+) {
+  let schema = yup.number().transform(blankIsMissing).typeError(`${label} must be a number (${unit})`);
+  if (range)
+    schema = schema
+      .min(range.min, `${label} must be at least ${range.min} ${unit}`)
+      .max(range.max, `${label} must be at most ${range.max} ${unit}`);
+  if (options.integer) schema = schema.integer(`${label} must be a whole number`);
+  return options.required ? schema.required(`${label} is required (${unit})`) : schema.optional();
+}
+
+/** Dollars and cents typed as text ("129.50"), checked against a range kept in cents. */
+export function moneyWithin(
+  label: string,
+  range: Range | undefined,
+  toCents: (text: string) => number | null,
+  options: { required?: boolean } = {},
+) {
+  let schema = yup
+    .string()
+    .test('money', `${label} must be dollars and cents, e.g. 129.50`, (v) => !v?.trim() || toCents(v) !== null);
+  if (range) {
+    const dollars = (cents: number) => (cents / 100).toFixed(2);
+    schema = schema.test('range', `${label} must be between $${dollars(range.min)} and $${dollars(range.max)}`, (v) => {
+      const cents = v?.trim() ? toCents(v) : null;
+      return cents === null || (cents >= range.min && cents <= range.max);
+    });
+  }
+  return options.required ? schema.test('required', `${label} is required`, (v) => Boolean(v?.trim())) : schema;
+}
+
+/** Text with a length limit; required means not blank. */
+export function textUpTo(label: string, maxLength?: number, options: { required?: boolean } = {}) {
+  let schema = yup.string();
+  if (maxLength !== undefined) schema = schema.max(maxLength, `${label} must be at most ${maxLength} characters`);
+  return options.required ? schema.test('required', `${label} must not be empty`, (v) => Boolean(v?.trim())) : schema;
+}
+
+/** formik's `validate` from a yup object: every failing field keeps its first message, keyed by its path. */
+export function validateWithYup<T extends object>(schema: yup.ObjectSchema<yup.AnyObject>) {
+  return (values: T): Record<string, string> => {
+    try {
+      schema.validateSync(values, { abortEarly: false });
+      return {};
+    } catch (error) {
+      if (!(error instanceof yup.ValidationError)) throw error;
+      const errors: Record<string, string> = {};
+      for (const issue of error.inner.length ? error.inner : [error]) errors[issue.path ?? ''] ??= issue.message;
+      return errors;
+    }
+  };
+}

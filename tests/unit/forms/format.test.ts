@@ -1,0 +1,25 @@
+import { centsFromText, formatMoney, longDate, percentFromBp, rpmRangeText } from '@/lib/format';
+
+describe('lib/format', () => {
+  it('formats integer cents in the shop currency, whole or with cents, and a dash for nothing', () => {
+    expect(formatMoney(123450)).toBe('$1,234.50');
+    expect(formatMoney(123450, { whole: true })).toBe('$1,235');
+    expect(formatMoney(99, { currency: 'cad' })).toBe('CA$0.99');
+    expect(formatMoney(null)).toBe('—');
+  });
+
+  it('reads typed dollars into exact cents and refuses what is not money', () => {
+    expect(centsFromText('129.5')).toBe(12950);
+    expect(centsFromText('$1,212.05')).toBe(121205);
+    expect(centsFromText('12.345')).toBeNull();
+    expect(centsFromText('ten')).toBeNull();
+  });
+
+  it('keeps a calendar day on its day whatever the time zone, and rates as percents', () => {
+    expect(longDate('2026-03-01')).toBe('March 1, 2026');
+    expect(longDate('2026-03-01T23:59:00.000Z')).toBe('March 1, 2026');
+    expect(percentFromBp(825)).toBe('8.25 %');
+    expect(percentFromBp(1500, 2)).toBe('15.00 %');
+    expect(rpmRangeText([2300, 2700])).toBe('2,300–2,700 rpm');
+  });
+});
