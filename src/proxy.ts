@@ -88,8 +88,8 @@ export async function proxy(request: NextRequest) {
 
 export const config = {
   matcher: [
-    // Pages (API routes, build output and static files need no page policy)...
-    '/((?!api/|_next/|favicon\\.ico|.*\\.(?:png|jpg|svg|ico|woff2|txt)$).*)',
+    // Pages (API routes, build output and static files, public/ included, need no page policy)...
+    '/((?!api/|_next/|favicon\\.ico|.*\\.(?:png|jpg|svg|ico|woff2|txt|webmanifest)$).*)',
     // ...and any path holding a percent-escape, so a malformed one answers 404 wherever it points.
     '/:path(.*%.*)',
   ],

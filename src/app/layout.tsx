@@ -10,6 +10,16 @@ export const dynamic = 'force-dynamic';
 export const metadata: Metadata = {
   title: { default: 'Lobewise', template: '%s · Lobewise' },
   description: 'Cam-swap advice, quotes and dyno records for performance shops.',
+  // public/: the installable-app manifest and the home-screen icon. Naming any icon here replaces the link
+  // Next writes for app/icon.svg, so the tab icons are listed too: the SVG, and favicon.ico for browsers without SVG icons.
+  manifest: '/site.webmanifest',
+  icons: {
+    icon: [
+      { url: '/favicon.ico', sizes: '32x32' },
+      { url: '/icon.svg', type: 'image/svg+xml' },
+    ],
+    apple: '/apple-touch-icon.png',
+  },
 };
 
 export const viewport: Viewport = { width: 'device-width', initialScale: 1 };
