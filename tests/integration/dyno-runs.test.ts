@@ -67,11 +67,11 @@ describe('dyno runs', () => {
   });
 
   it('refuses signed-out callers (401) and counter staff writing (403); counter may read', async () => {
-    await request(appUrl).get('/api/dyno-runs?buildId=2').expect(401);
+    await request(appUrl).get(`/api/dyno-runs?buildId=${JOB.buildId}`).expect(401);
     await post(null, { buildId: JOB.buildId }).expect(401);
     await post(counter, { buildId: JOB.buildId, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(403);
     await request(appUrl).delete('/api/dyno-runs/1').set('Cookie', counter).expect(403);
-    const list = await request(appUrl).get('/api/dyno-runs?buildId=2').set('Cookie', counter).expect(200);
+    const list = await request(appUrl).get(`/api/dyno-runs?buildId=${JOB.buildId}`).set('Cookie', counter).expect(200);
     expect(list.body.runs).toEqual([]);
   });
 
@@ -122,7 +122,7 @@ describe('dyno runs', () => {
     expect(run.corrected).toEqual({ peakHp: 388.8, peakTorqueLbFt: 389.7 });
     const one = await request(appUrl).get(`/api/dyno-runs/${run.id}`).set('Cookie', counter).expect(200);
     expect(one.body.corrected).toEqual(run.corrected);
-    const list = await request(appUrl).get('/api/dyno-runs?buildId=2').set('Cookie', counter).expect(200);
+    const list = await request(appUrl).get(`/api/dyno-runs?buildId=${JOB.buildId}`).set('Cookie', counter).expect(200);
     expect((list.body.runs as RunBody[]).map((r) => r.phase)).toEqual(['before', 'after']);
   });
 
