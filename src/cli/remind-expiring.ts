@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { closeSequelize } from '../lib/db/connection';
-import { remindExpiringQuotes } from '../lib/db/queries/expiry-reminders';
+import { remindExpiringQuotes } from '../lib/quotes/expiry-reminders';
 
 // npm run quotes:remind-expiring [-- --days N]: e-mails each customer whose sent quote runs out within
 // N days (default 3, UTC days) one reminder with a fresh private link. Safe to run as often as you like

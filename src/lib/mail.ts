@@ -7,6 +7,17 @@ import { requireEnv } from './env';
 export type MailAttachment = { filename: string; content: Buffer; contentType?: string };
 export type OutgoingMail = { to: string | string[]; subject: string; html: string; text: string; replyTo?: string; fromName?: string; attachments?: MailAttachment[] };
 
+/**
+ * The mail service refused the message or did not answer. Callers that must not go on without the
+ * e-mail (sending a quote, an invitation) test `instanceof MailError`; nobody matches error text.
+ */
+export class MailError extends Error {
+  constructor(message: string, options?: { cause?: unknown }) {
+    super(message, options);
+    this.name = 'MailError';
+  }
+}
+
 let client: Resend | undefined;
 
 function resend(): Resend {
@@ -38,15 +49,22 @@ export function fromHeader(name?: string): string {
 export async function sendMail(mail: OutgoingMail): Promise<{ id: string }> {
   const { to, subject, replyTo, html, text } = mail;
   const reply = replyTo === undefined ? '' : headerValue(replyTo);
-  const { data, error } = await resend().emails.send({
-    from: fromHeader(mail.fromName),
-    to: Array.isArray(to) ? to.map(headerValue) : headerValue(to),
-    subject: headerValue(subject),
-    ...(reply ? { replyTo: reply } : {}),
-    html,
-    text,
-    ...(mail.attachments?.length ? { attachments: mail.attachments.map((a) => ({ filename: headerValue(a.filename), content: a.content, contentType: a.contentType ?? 'application/pdf' })) } : {}),
-  });
-  if (error || !data) throw new Error(`Mail was not accepted: ${error?.message ?? 'no answer from the mail service'}`);
+  let answer: Awaited<ReturnType<Resend['emails']['send']>>;
+  try {
+    answer = await resend().emails.send({
+      from: fromHeader(mail.fromName),
+      to: Array.isArray(to) ? to.map(headerValue) : headerValue(to),
+      subject: headerValue(subject),
+      ...(reply ? { replyTo: reply } : {}),
+      html,
+      text,
+      ...(mail.attachments?.length ? { attachments: mail.attachments.map((a) => ({ filename: headerValue(a.filename), content: a.content, contentType: a.contentType ?? 'application/pdf' })) } : {}),
+    });
+  } catch (cause) {
+    // The SDK throws (instead of answering an error) when the service cannot be reached at all.
+    throw new MailError(`Mail was not sent: ${cause instanceof Error ? cause.message : 'the mail service could not be reached'}`, { cause });
+  }
+  const { data, error } = answer;
+  if (error || !data) throw new MailError(`Mail was not accepted: ${error?.message ?? 'no answer from the mail service'}`);
   return { id: data.id };
 }

@@ -8,7 +8,7 @@ import { waitForMailsTo, type Mail } from '../support/mail';
 import { pdfText } from '../support/pdf-text';
 import { readRuntime } from '../support/runtime';
 import { FIXTURE_CAM_ID } from '../support/quote-fixtures';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from '@/lib/quotes/types';
 
 // The balance (issue 12, item 7) over HTTP against the real build, MariaDB and both fakes: the balance
 // due once the deposit is paid, money taken at the counter, the pay-the-balance e-mail and its checkout

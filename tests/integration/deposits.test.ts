@@ -6,7 +6,7 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { dayFromToday, makeSentQuote } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from '@/lib/quotes/types';
 
 // Exactly-once deposits (issue 12, item 3), over HTTP against the real build, MariaDB and the payments
 // fake. Every test makes its own customer, build and sent quote, so none depends on another or on the date.

@@ -1,4 +1,4 @@
-import { execFileSync } from 'node:child_process';
+import { execFile, execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import request from 'supertest';
@@ -23,9 +23,13 @@ beforeAll(async () => {
 });
 afterAll(() => disconnectTestDatabase());
 
-function remind(days?: number): { reminded: string[]; withoutEmail: string[]; failed: string[]; through: string } {
+// Run without blocking: a synchronous run held the test's event loop past the mail fake's keep-alive
+// timeout, and the next read of the inbox went out on a socket the fake had already closed.
+async function remind(days?: number): Promise<{ reminded: string[]; withoutEmail: string[]; failed: string[]; through: string }> {
   const args = ['tsx', 'src/cli/remind-expiring.ts', ...(days === undefined ? [] : ['--days', String(days)])];
-  const out = execFileSync('npx', args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', timeout: 60_000 });
+  const out = await new Promise<string>((resolve, reject) =>
+    execFile('npx', args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', timeout: 60_000 }, (error, stdout) => (error ? reject(error) : resolve(stdout))),
+  );
   return JSON.parse(out.trim().split('\n').at(-1)!);
 }
 const reminders = async (email: string) => (await mailsTo(email)).filter((m) => m.subject.includes('is good until'));
@@ -38,7 +42,7 @@ describe('the expiry reminder command', () => {
     await counter.post(`/api/quotes/${declined.id}/transition`).send({ to: 'declined', version: declined.version }).expect(200);
     const before = (await counter.get(`/api/quotes/${soon.id}`)).body as { version: number; updatedAt: string };
 
-    const first = remind();
+    const first = await remind();
     expect(first.reminded).toContain(soon.number);
     expect(first.reminded).not.toContain(later.number);
     expect(first.reminded).not.toContain(declined.number);
@@ -55,7 +59,7 @@ describe('the expiry reminder command', () => {
     expect(((await counter.get(`/api/quotes/${soon.id}`)).body as { version: number }).version).toBe(before.version);
 
     // Run again: nobody is reminded twice.
-    const second = remind();
+    const second = await remind();
     expect(second.reminded).not.toContain(soon.number);
     expect(await reminders(soon.customerEmail)).toHaveLength(1);
     expect(await reminders(later.customerEmail)).toHaveLength(0);
@@ -64,7 +68,7 @@ describe('the expiry reminder command', () => {
     expect(Number(audit[0].n)).toBe(1);
 
     // A wider window reaches the later quote, once.
-    expect(remind(14).reminded).toContain(later.number);
+    expect((await remind(14)).reminded).toContain(later.number);
     expect(await reminders(later.customerEmail)).toHaveLength(1);
   }, 180_000);
 

@@ -3,7 +3,7 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { DEMO } from '../support/demo';
 import type { ShopRankingEntry } from '@/lib/advisor-service';
-import type { QuoteLineRecord } from '@/lib/db/queries/quotes';
+import type { QuoteLineRecord } from '@/lib/quotes/types';
 
 // Issue 12, item 1, over HTTP against the real build and MariaDB: the shortlist for the demo 5.3 L
 // pickup (seeded build 1: installed springs good to 0.500", a truck) says what the job costs before

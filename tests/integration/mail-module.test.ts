@@ -1,4 +1,4 @@
-import { sendMail } from '@/lib/mail';
+import { MailError, sendMail } from '@/lib/mail';
 import { adoptRuntimeEnv } from '../support/runtime';
 
 describe('the app mail module', () => {
@@ -12,5 +12,19 @@ describe('the app mail module', () => {
     expect(found).toBeDefined();
     expect(found!.subject).toBe(subject);
     expect(found!.to).toEqual(['mail.module.test@example.com']);
+  });
+
+  it('throws a MailError, which callers test with instanceof, when the mail service refuses the message', async () => {
+    const { mailUrl } = adoptRuntimeEnv();
+    const subject = `Refused on purpose ${Date.now()}`;
+    // The fake, like the real service, refuses a message with neither an HTML nor a text part (422).
+    const refused = await sendMail({ to: 'mail.module.refused@example.com', subject, html: '', text: '' }).then(
+      () => null,
+      (error: unknown) => error,
+    );
+    expect(refused).toBeInstanceOf(MailError);
+    expect((refused as MailError).message).toMatch(/^Mail was not accepted: /);
+    const messages = (await (await fetch(`${mailUrl}/messages`)).json()) as { subject: string }[];
+    expect(messages.some((m) => m.subject === subject)).toBe(false);
   });
 });

@@ -3,7 +3,7 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { makeDraftQuote } from '../support/quote-fixtures';
 import { DEMO } from '../support/demo';
-import type { QuoteLineRecord, QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 
 // Price authority (issue 12, item 8), over HTTP against the real build and MariaDB. Counter staff sell
 // catalogue items at the catalogue price, give discounts up to the manager's limit (shop settings,

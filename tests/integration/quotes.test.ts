@@ -6,7 +6,7 @@ import { connectTestDatabase, disconnectTestDatabase } from '../support/database
 import { readRuntime } from '../support/runtime';
 import crypto from 'node:crypto';
 import { DEMO, MISSING_ID } from '../support/demo';
-import type { QuoteLineRecord, QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 
 // Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: a draft from
 // seeded build 1 (the towing truck, 5.3 L with active deactivation, 2,000 rpm stall) and a seeded cam,

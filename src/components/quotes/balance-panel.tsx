@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import { centsFromText, formatMoney } from '@/lib/format';
 import { Button } from '@/components/ui/button';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from '@/lib/quotes/types';
 import type { QuoteRun } from './quote-run';
 
 // The balance once the deposit is paid: what the job came to, what was paid and refunded, what is left,

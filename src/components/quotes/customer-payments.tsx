@@ -1,5 +1,5 @@
 import { formatMoney, longDate } from '@/lib/format';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from '@/lib/quotes/types';
 import { METHOD_WORDS, PURPOSE_WORDS } from '@/lib/quotes/balance';
 
 // The customer's own account of a paid quote: each payment with its receipt, what was refunded, what is

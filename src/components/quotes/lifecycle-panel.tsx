@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { sendJson } from '@/lib/api-client';
 import { Button, ButtonAnchor } from '@/components/ui/button';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from '@/lib/quotes/types';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { canRevise, isOpen, staffMoves, stateWord, type QuoteStatus } from '@/lib/quotes/lifecycle';
 import type { QuoteRun } from './quote-run';

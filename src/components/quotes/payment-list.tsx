@@ -1,5 +1,5 @@
 import { formatMoney } from '@/lib/format';
-import type { PaymentRecord } from '@/lib/db/queries/quotes';
+import type { PaymentRecord } from '@/lib/quotes/types';
 import { counts, METHOD_WORDS, PURPOSE_WORDS } from '@/lib/quotes/balance';
 import { PaymentStatusTag } from './status';
 

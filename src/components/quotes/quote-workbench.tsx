@@ -10,7 +10,7 @@ import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import type { StaffRole } from '@/lib/auth/guard';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from '@/lib/quotes/types';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { BalancePanel } from './balance-panel';
 import { LifecyclePanel } from './lifecycle-panel';

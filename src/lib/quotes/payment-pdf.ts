@@ -1,5 +1,5 @@
 import { palette } from '@/lib/palette';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from './types';
 import { counts, invoiceNumber, METHOD_WORDS, PURPOSE_WORDS, receiptNumber } from './balance';
 import { longDate, money, openPdf } from './pdf';
 import { isTaxable } from './pricing';

@@ -3,7 +3,7 @@ import path from 'node:path';
 import PDFDocument from 'pdfkit';
 import { palette } from '@/lib/palette';
 import { CUSTOMER_CAUTIONS, REFUND_NOTE } from './cautions';
-import type { QuoteRecord } from '@/lib/db/queries/quotes';
+import type { QuoteRecord } from './types';
 import { isTaxable, type QuoteLineKind } from './pricing';
 
 // The printable quote as a PDF (pdfkit). Fonts are the app's own Inter files (TrueType copies of the

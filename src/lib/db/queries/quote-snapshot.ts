@@ -1,12 +1,13 @@
 import { rankForShop } from '@/lib/advisor-service';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
+import type { QuoteSnapshot } from '@/lib/quotes/types';
 import { Build } from '../models';
 
 // What a sent quote was based on, frozen at its first send: the build profile as it stood and the
 // advisor's result for the quoted cam (without the curve points). A later edit of the build, the
 // catalogue or the advisor changes neither what the customer was shown nor what staff read back.
 
-export type QuoteSnapshot = { profile: unknown; advice: Record<string, unknown> | null };
+export type { QuoteSnapshot };
 
 /** Worked out before the send transaction (ranking takes a while; no row is locked meanwhile). */
 export async function takeSnapshot(buildId: number | null, camId: number | null): Promise<QuoteSnapshot | null> {

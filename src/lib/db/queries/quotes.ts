@@ -1,114 +1,22 @@
-import crypto from 'node:crypto';
 import { col, fn, Op, type Transaction } from 'sequelize';
-import { rankForShop } from '@/lib/advisor-service';
 import { canSeeCosts } from '@/lib/auth/costs';
 import type { SessionUser } from '@/lib/auth/guard';
-import { recordAudit } from '@/lib/audit';
-import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
-import { appBaseUrl } from '@/lib/env';
-import type { FieldError } from '@/lib/http/responses';
-import { sendMail } from '@/lib/mail';
-import { payments } from '@/lib/payments';
-import type { AuthorityVerdict } from '@/lib/quotes/authority';
-import { jobLines } from '@/lib/quotes/job-price';
-import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence, quoteTotals, type QuoteLineKind } from '@/lib/quotes/pricing';
-import { stateWord, validUntilFrom } from '@/lib/quotes/lifecycle';
-import { BuildProfileSchema } from '@/lib/schemas/build-profile';
-import type { QuoteLineInput } from '@/lib/schemas/quote';
-import { balanceDueCents, counts, moneyIn, type PaymentMethod, type PaymentPurpose } from '@/lib/quotes/balance';
+import { hashToken } from '@/lib/auth/tokens';
+import { balanceDueCents, counts, moneyIn } from '@/lib/quotes/balance';
+import { stateWord } from '@/lib/quotes/lifecycle';
+import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence } from '@/lib/quotes/pricing';
+import type { DocumentShop, PaymentRecord, PublicQuote, QuoteLineRecord, QuoteRecord, QuoteSnapshot } from '@/lib/quotes/types';
 import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings, User } from '../models';
+import type { LineDraft } from './quote-lines';
 import { quoteIdByLinkHash } from './quote-links';
-import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from './quote-lines';
-import { sendRefundNotice, settleFullRefund, type AfterFullRefund } from './refund-effects';
-import { LifecycleRefused, moveQuote } from './quote-lifecycle';
-import { mailShop, quoteSentMail } from './quote-notices';
-import { readJson, takeSnapshot, type QuoteSnapshot } from './quote-snapshot';
-import type { QuoteStatus } from '../models/quote';
+import { readJson } from './quote-snapshot';
 
-// Quotes: made from a build and a chosen cam, priced by src/lib/quotes/pricing.ts, sent by private
-// link, paid by deposit through the payments SDK. Every write runs in one transaction.
-
-export type QuoteLineRecord = {
-  id: number;
-  kind: QuoteLineKind;
-  camId: number | null;
-  partId: number | null;
-  laborOperationId: number | null;
-  description: string;
-  quantity: number;
-  unitPriceCents: number;
-  /** Taken off this line before tax; totalCents is after it. */
-  discountCents: number;
-  totalCents: number;
-  sortOrder: number;
-  /** What the shop pays for one unit (catalogue cost of the cam or part); null for labour and free lines. */
-  unitCostCents?: number | null;
-};
-
-export type PaymentRecord = {
-  id: number;
-  status: Payment['status'];
-  amountCents: number;
-  refundedCents: number;
-  currency: string;
-  providerSessionId: string | null;
-  providerPaymentId: string | null;
-  paidAt: string | null;
-  /** A second paid checkout for an already paid quote: refunded automatically, never counted. */
-  duplicateOfPaymentId: number | null;
-  /** 'deposit' books the job, 'balance' is the rest; 'online' or taken at the counter (cash, card). */
-  purpose: PaymentPurpose;
-  method: PaymentMethod;
-  /** Who took a counter payment. */
-  recordedBy: { id: number; name: string } | null;
-  createdAt: string;
-};
-
-export type QuoteRecord = {
-  id: number;
-  number: string;
-  status: QuoteStatus;
-  /** The state in words (src/lib/quotes/lifecycle.ts), as every screen says it. */
-  stateWord: string;
-  revision: number;
-  /** The quote this revision replaces, and the newer revision that replaced this one. */
-  revisionOf: { id: number; number: string } | null;
-  replacedBy: { id: number; number: string; status: QuoteStatus; sentAt: string | null } | null;
-  /** Frozen at the first send; null for a draft. */
-  snapshot: QuoteSnapshot | null;
-  closedAt: string | null;
-  customer: { id: number; name: string; email: string | null };
-  build: { id: number; vehicleLabel: string } | null;
-  camId: number | null;
-  lines: QuoteLineRecord[];
-  subtotalCents: number;
-  taxRateBp: number;
-  taxCents: number;
-  totalCents: number;
-  depositCents: number;
-  /** Every payment taken (deposits and balance), before refunds; refunded duplicates never count. */
-  paidCents: number;
-  refundedCents: number;
-  depositPaidCents: number;
-  balancePaidCents: number;
-  /** total − (paid − refunded), never below zero (src/lib/quotes/balance.ts). */
-  balanceDueCents: number;
-  /** When staff last e-mailed the pay-the-balance link. */
-  balanceRequestedAt: string | null;
-  validUntil: string | null;
-  sentAt: string | null;
-  acceptedAt: string | null;
-  payments: PaymentRecord[];
-  /** Goods cost and margin; left out for technicians (see presentQuote). */
-  costCents?: number;
-  marginCents?: number;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-};
+// Quotes in the database: reading one into a QuoteRecord (src/lib/quotes/types.ts), the rows the quote
+// services in src/lib/quotes/ lock and write, and the customer's private link. SQL and mapping only:
+// drafting, sending, checkout, payment events and refunds live in src/lib/quotes/.
 
 type PaymentRow = Payment & { recordedBy?: User | null };
-type QuoteRow = Quote & { customer?: Customer; build?: Build | null; lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[]; payments?: PaymentRow[] };
+export type QuoteRow = Quote & { customer?: Customer; build?: Build | null; lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[]; payments?: PaymentRow[] };
 
 const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null);
 
@@ -212,7 +120,7 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
   };
 }
 
-/** Technicians read quotes without costs or margins. */
+/** Roles without 'costs.read' (technicians) read quotes without costs or margins. */
 export function presentQuote(record: QuoteRecord, user: SessionUser): QuoteRecord {
   if (canSeeCosts(user)) return record;
   const { costCents: _c, marginCents: _m, ...rest } = record;
@@ -227,39 +135,55 @@ export async function getQuote(id: number, transaction?: Transaction): Promise<Q
   return row ? toQuoteRecord(row, transaction) : null;
 }
 
-// ---- Building lines (checked against the catalogue and the user's price authority in ./quote-lines) ----
 
-export type QuoteWriteOutcome = WriteOutcome<QuoteRecord> | { ok: false; reason: 'forbidden'; errors: FieldError[] };
+// ---- Rows the quote services lock and write (always inside their transaction) ----
 
-/** Counter staff asking for what only a manager may give: 403 naming the fields, nothing written. */
-async function withPriceAuthority(write: () => Promise<WriteOutcome<QuoteRecord>>): Promise<QuoteWriteOutcome> {
-  try {
-    return await write();
-  } catch (error) {
-    if (error instanceof PriceAuthorityRefused) return { ok: false, reason: 'forbidden', errors: error.errors };
-    throw error;
-  }
+/** The quote row, locked for the rest of the transaction: every money path locks it before its payments. */
+export function lockQuote(id: number, t: Transaction): Promise<Quote | null> {
+  return Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
 }
 
-/** What a manager allowed beyond the counter's authority, one audit row each. */
-async function auditAuthority(verdict: AuthorityVerdict, limitBp: number, user: SessionUser, quoteId: number, t: Transaction) {
-  if (verdict.overrides.length) {
-    await recordAudit({ user, action: 'quote.price-override', entityType: 'quote', entityId: quoteId, after: { overrides: verdict.overrides } }, t);
-  }
-  if (verdict.discountOverLimit) {
-    await recordAudit({ user, action: 'quote.discount-over-limit', entityType: 'quote', entityId: quoteId, after: { discountBp: verdict.discountBp, counterLimitBp: limitBp } }, t);
-  }
+/** The quote row with its customer, lines and payments, locked (sending reads the e-mail and the lines). */
+export async function lockQuoteWithParts(id: number, t: Transaction): Promise<QuoteRow | null> {
+  return (await Quote.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE })) as QuoteRow | null;
 }
 
-async function shopSettings(t: Transaction): Promise<ShopSettings> {
-  const settings = await ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t });
-  if (!settings) throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
-  return settings;
+/** Saves what the caller set on a locked quote row; `touch` moves its version even when nothing else changed. */
+export async function saveQuote(quote: Quote, t: Transaction, options: { touch?: boolean } = {}): Promise<void> {
+  if (options.touch) quote.changed('updatedAt', true);
+  await quote.save({ transaction: t });
 }
 
-const policyOf = (s: ShopSettings) => ({ percentBp: s.depositPercentBp, minCents: s.depositMinCents, maxCents: s.depositMaxCents });
+/** The one row of shop settings (labour rate, tax, deposit policy, the shop's details); null before a manager saves them. */
+export function shopSettingsRow(t?: Transaction): Promise<ShopSettings | null> {
+  db();
+  return ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t });
+}
 
-async function writeLines(quoteId: number, lines: LineDraft[], t: Transaction) {
+/** The build and cam a draft is made from (either may be missing). */
+export async function draftSources(buildId: number, camId: number): Promise<{ build: Build | null; cam: Cam | null }> {
+  db();
+  const [build, cam] = await Promise.all([Build.findByPk(buildId), Cam.findByPk(camId)]);
+  return { build, cam };
+}
+
+/** What sending needs to know before its transaction: the build and cam to freeze, and whether they already are. */
+export async function snapshotSource(id: number): Promise<{ buildId: number | null; camId: number | null; frozen: boolean } | null> {
+  db();
+  const row = await Quote.findByPk(id, { attributes: ['id', 'buildId', 'camId', 'snapshotProfile'] });
+  return row ? { buildId: row.buildId ?? null, camId: row.camId ?? null, frozen: readJson(row.snapshotProfile) !== null } : null;
+}
+
+/** True once a quote's build profile and advice are frozen (its first send). */
+export const isFrozen = (quote: Quote) => readJson(quote.snapshotProfile) !== null;
+
+/** Freezes the build profile and the advice on a locked quote row (saved by the caller's move). */
+export function freezeSnapshot(quote: Quote, snapshot: QuoteSnapshot): void {
+  quote.set({ snapshotProfile: snapshot.profile as Record<string, unknown>, snapshotAdvice: snapshot.advice });
+}
+
+/** Replaces a quote's lines as a whole, in the order given. */
+export async function writeLines(quoteId: number, lines: LineDraft[], t: Transaction): Promise<void> {
   await QuoteLine.destroy({ where: { quoteId }, transaction: t });
   await QuoteLine.bulkCreate(
     lines.map((l, i) => ({ ...l, quoteId, quantity: l.quantity.toFixed(2), totalCents: lineNetCents(l), sortOrder: i })),
@@ -281,155 +205,42 @@ async function nextNumber(t: Transaction): Promise<string> {
   return formatQuoteNumber(year, nextQuoteSequence(last?.number ?? null, year));
 }
 
-export type CreateQuoteInput = { buildId: number; camId: number; extraLines?: QuoteLineInput[] };
-
-/** A draft from a saved build and a chosen cam: the cam, what the need rules add, the staff's extra lines. */
-export async function createQuoteFromBuild(input: CreateQuoteInput, user: SessionUser): Promise<QuoteWriteOutcome> {
-  db();
-  const build = await Build.findByPk(input.buildId);
-  const cam = await Cam.findByPk(input.camId);
-  const errors: FieldError[] = [];
-  if (!build) errors.push({ field: 'buildId', message: `there is no build with id ${input.buildId}` });
-  if (!cam) errors.push({ field: 'camId', message: `there is no cam with id ${input.camId}` });
-  else if (cam.isFactoryBaseline) errors.push({ field: 'camId', message: 'a factory baseline card is a reference, not a cam the shop sells' });
-  if (errors.length || !build || !cam) return { ok: false, reason: 'invalid', errors };
-  const profile = BuildProfileSchema.safeParse(build.profile);
-  if (!profile.success) return { ok: false, reason: 'invalid', errors: [{ field: 'buildId', message: 'the saved build is incomplete; finish the interview first' }] };
-  const ranked = await rankForShop(profile.data, { camIds: [cam.id], includeCurves: false });
-  const ranking = ranked.ok ? ranked.result.rankings.find((r) => String(r.camId) === String(cam.id)) : undefined;
-  if (!ranking) return { ok: false, reason: 'invalid', errors: [{ field: 'camId', message: 'the advisor could not rank this cam for this build' }] };
-
-  for (let attempt = 0; ; attempt++) {
-    const outcome = await withPriceAuthority(() => runWrite(async (t) => {
-      const settings = await shopSettings(t);
-      // The very lines the shortlist priced (jobLines), so the draft's pre-tax total is its job price.
-      const lines: LineDraft[] = jobLines({ id: cam.id, description: `${cam.sku} ${cam.name}`, priceCents: cam.priceCents }, ranking.neededItems, settings.laborRateCents);
-      const extra = await resolveLines(input.extraLines ?? [], { field: 'extraLines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user }, t);
-      lines.push(...extra.lines);
-      const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));
-      const quote = await Quote.create(
-        {
-          number: await nextNumber(t), customerId: build.customerId, buildId: build.id, camId: cam.id, createdByUserId: user.id, status: 'draft',
-          publicTokenHash: null, subtotalCents: totals.subtotalCents, taxRateBp: totals.taxRateBp, taxCents: totals.taxCents, totalCents: totals.totalCents,
-          depositCents: totals.depositCents, validUntil: null, sentAt: null, acceptedAt: null,
-        },
-        { transaction: t },
-      );
-      await writeLines(quote.id, lines, t);
-      const record = (await getQuote(quote.id, t))!;
-      await recordAudit({ user, action: 'quote.created', entityType: 'quote', entityId: quote.id, before: null, after: { number: record.number, totalCents: record.totalCents } }, t);
-      await auditAuthority(extra.verdict, settings.maxCounterDiscountBp, user, quote.id, t);
-      return { record };
-    }, { uniqueFields: { number: 'number' } }));
-    // Two creators racing for the same number: the loser tries again with the next one.
-    const numberClash = !outcome.ok && outcome.reason === 'invalid' && outcome.errors.some((e) => e.field === 'number');
-    if (!numberClash || attempt >= 3) return outcome;
-  }
-}
-
-export type QuotePatch = { version: number; lines?: QuoteLineInput[]; validUntil?: string | null };
-
-/** Lines (replaced as a whole) and the validity date, while the quote is a draft; totals follow. */
-export async function updateQuote(id: number, patch: QuotePatch, user: SessionUser): Promise<QuoteWriteOutcome> {
-  db();
-  return withPriceAuthority(() => runWrite(
-    async (t) => {
-      const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
-      if (!quote) throw notFound();
-      if (quote.version !== patch.version) throw conflict(await getQuote(id, t));
-      // Lines change only on a draft (a sent quote is revised instead); the valid-until day may be moved
-      // while the customer can still act on the quote.
-      if (patch.lines && quote.status !== 'draft') throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft's lines can be changed. Revise it for new lines.`);
-      if (!['draft', 'sent', 'accepted'].includes(quote.status)) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be changed.`);
-      if (patch.validUntil !== undefined && quote.status !== 'draft' && (patch.validUntil === null || patch.validUntil < new Date().toISOString().slice(0, 10))) {
-        throw invalid([{ field: 'validUntil', message: 'a sent quote needs a valid-until day of today or later' }]);
-      }
-      const before = await getQuote(id, t);
-      const settings = await shopSettings(t);
-      if (patch.lines) {
-        // A price already on the quote (a manager's, or last month's catalogue price) may stay as it is.
-        const kept = new Map<string, number>();
-        for (const l of before?.lines ?? []) {
-          const key = catalogueKey(l);
-          if (key) kept.set(key, l.unitPriceCents);
-        }
-        const { lines, verdict } = await resolveLines(patch.lines, { field: 'lines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user, kept }, t);
-        await writeLines(id, lines, t);
-        await auditAuthority(verdict, settings.maxCounterDiscountBp, user, id, t);
-        const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
-        quote.set({ subtotalCents: totals.subtotalCents, taxCents: totals.taxCents, totalCents: totals.totalCents, depositCents: totals.depositCents });
-        quote.changed('updatedAt', true);
-      }
-      if (patch.validUntil !== undefined) quote.set({ validUntil: patch.validUntil });
-      if (!quote.changed()) return { record: before!, changed: false };
-      await quote.save({ transaction: t });
-      const after = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.updated', entityType: 'quote', entityId: id, before: { totalCents: before?.totalCents, validUntil: before?.validUntil }, after: { totalCents: after.totalCents, validUntil: after.validUntil } }, t);
-      return { record: after };
-    },
-    { reload: () => getQuote(id) },
-  ));
-}
-
-// ---- Sending and the customer's link ----
-
-export const sha256 = (text: string) => crypto.createHash('sha256').update(text).digest('hex');
-
-/** 32 random bytes, base64url: 43 characters, 256 bits — not guessable, safe in a URL. */
-export function newQuoteToken(): string {
-  return crypto.randomBytes(32).toString('base64url');
-}
-
-/**
- * Sends (or sends again) the quote: a fresh private token whose sha256 alone is stored, an e-mail with
- * the link, status → sent (through the lifecycle). The mail goes out inside the transaction, so a refused
- * mail changes nothing; sending again replaces the token, and the old link stops working. The first send
- * sets a missing valid-until day and freezes the build profile and the advisor's result for the cam.
- */
-export async function sendQuote(id: number, user: SessionUser): Promise<WriteOutcome<QuoteRecord> | { ok: false; reason: 'mail-failed'; message: string }> {
-  db();
-  const peek = await Quote.findByPk(id, { attributes: ['id', 'buildId', 'camId', 'snapshotProfile'] });
-  const snapshot = peek && readJson(peek.snapshotProfile) === null ? await takeSnapshot(peek.buildId, peek.camId) : null;
-  try {
-    return await runWrite(async (t) => {
-      const quote = (await Quote.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE })) as QuoteRow | null;
-      if (!quote) throw notFound();
-      const email = quote.customer?.email;
-      if (quote.status === 'draft' || quote.status === 'sent') {
-        if (!email) throw invalid([{ field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' }]);
-        if (!(quote.lines ?? []).length) throw invalid([{ field: 'lines', message: 'the quote has no lines' }]);
-      }
-      const token = newQuoteToken();
-      const now = new Date();
-      quote.set({ publicTokenHash: sha256(token), sentAt: now, validUntil: quote.validUntil ?? validUntilFrom(now) });
-      if (snapshot && readJson(quote.snapshotProfile) === null) quote.set({ snapshotProfile: snapshot.profile as Record<string, unknown>, snapshotAdvice: snapshot.advice });
-      try {
-        await moveQuote(quote, 'sent', 'send', { user }, t, { to: email });
-      } catch (error) {
-        if (error instanceof LifecycleRefused) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft or a sent quote can be sent.`);
-        throw error;
-      }
-      const settings = await shopSettings(t);
-      const record = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.sent', entityType: 'quote', entityId: id, before: null, after: { to: email, revision: record.revision } }, t);
-      await sendMail(await quoteSentMail(record, mailShop(settings), `${appBaseUrl()}/q/${token}`, record.revisionOf?.number ?? null));
-      return { record };
-    });
-  } catch (error) {
-    if (error instanceof Error && /Mail was not accepted|fetch failed|ECONNREFUSED/.test(error.message)) {
-      return { ok: false, reason: 'mail-failed', message: 'The e-mail could not be sent, so the quote was not marked as sent. Try again in a moment.' };
-    }
-    throw error;
-  }
-}
-
-export type PublicQuote = {
-  quote: QuoteRecord;
-  shop: { name: string; phone: string; email: string; address: string; depositPolicyText: string; currency: string };
+export type DraftRow = {
+  customerId: number;
+  buildId: number;
+  camId: number;
+  createdByUserId: number;
+  totals: { subtotalCents: number; taxRateBp: number; taxCents: number; totalCents: number; depositCents: number };
 };
 
+/** A new draft with the year's next number and its lines; returns its id. */
+export async function insertDraft(draft: DraftRow, lines: LineDraft[], t: Transaction): Promise<number> {
+  const { totals } = draft;
+  const quote = await Quote.create(
+    {
+      number: await nextNumber(t), customerId: draft.customerId, buildId: draft.buildId, camId: draft.camId, createdByUserId: draft.createdByUserId, status: 'draft',
+      publicTokenHash: null, subtotalCents: totals.subtotalCents, taxRateBp: totals.taxRateBp, taxCents: totals.taxCents, totalCents: totals.totalCents,
+      depositCents: totals.depositCents, validUntil: null, sentAt: null, acceptedAt: null,
+    },
+    { transaction: t },
+  );
+  await writeLines(quote.id, lines, t);
+  return quote.id;
+}
+
+/** The quote and customer a notice after the commit is about, with the payments that were not duplicates. */
+export async function quoteForNotice(quoteId: number): Promise<{ quote: Quote | null; customer: Customer | undefined; payments: Payment[] }> {
+  db();
+  const quote = (await Quote.findByPk(quoteId, { include: [{ model: Customer, as: 'customer', attributes: ['name', 'email'] }, { model: Payment, as: 'payments' }] })) as
+    | (Quote & { customer?: Customer; payments?: Payment[] })
+    | null;
+  return { quote, customer: quote?.customer, payments: (quote?.payments ?? []).filter((p) => !p.duplicateOfPaymentId) };
+}
+
+// ---- The customer's link and the shop on documents ----
+
 /** The shop's details printed on documents; null until a manager has saved the settings. */
-export async function shopForDocuments(): Promise<PublicQuote['shop'] | null> {
+export async function shopForDocuments(): Promise<DocumentShop | null> {
   db();
   const s = await ShopSettings.findOne({ order: [['id', 'ASC']] });
   return s ? { name: s.name, phone: s.phone, email: s.email, address: s.address, depositPolicyText: s.depositPolicyText, currency: s.currency } : null;
@@ -440,7 +251,7 @@ export async function getQuoteByToken(token: string): Promise<PublicQuote | null
   if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
   db();
   // The link e-mailed with the quote, or one e-mailed later (the balance request, the expiry reminder).
-  const hash = sha256(token);
+  const hash = hashToken(token);
   const row = await Quote.findOne({ where: { publicTokenHash: hash }, attributes: ['id'] });
   const quoteId = row?.id ?? (await quoteIdByLinkHash(hash));
   if (!quoteId) return null;
@@ -460,56 +271,4 @@ function customerPayment(p: PaymentRecord): PaymentRecord {
   return { ...p, providerSessionId: null, providerPaymentId: null, recordedBy: null };
 }
 
-function refundState(amountCents: number, refundedCents: number): Payment['status'] {
-  return refundedCents >= amountCents ? 'refunded' : 'partially-refunded';
-}
-
-export type RefundOutcome = { ok: true; record: QuoteRecord } | { ok: false; status: 404 | 409 | 422 | 502; message: string; errors?: FieldError[] };
-
-/**
- * A manager refunds part or all of the paid deposit through the payments SDK; never more than is left.
- * A full refund cancels the job (or reopens the quote, as the manager chooses) and e-mails the customer.
- */
-export async function refundQuote(id: number, amountCents: number, reason: string | undefined, user: SessionUser, afterFullRefund: AfterFullRefund = 'cancel'): Promise<RefundOutcome> {
-  db();
-  let settled = false;
-  const result = await db().transaction(async (t): Promise<RefundOutcome | null> => {
-    // The quote row first, then its payments: the order every deposit path locks in (see deposits.ts).
-    const quote = await Quote.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
-    if (!quote) return { ok: false, status: 404, message: `No quote with id ${id}.` };
-    const payment = await Payment.findOne({
-      // The deposit: balance payments are settled at the counter or by the provider's dashboard for now.
-      where: { quoteId: id, purpose: 'deposit', status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null },
-      order: [['id', 'DESC']],
-      transaction: t,
-      lock: t.LOCK.UPDATE,
-    });
-    if (!payment || !payment.providerPaymentId) return { ok: false, status: 409, message: `Quote ${quote.number} has no paid deposit to refund.` };
-    const left = payment.amountCents - payment.refundedCents;
-    if (amountCents > left) {
-      return { ok: false, status: 422, message: 'Some fields need attention.', errors: [{ field: 'amountCents', message: `at most ${left} cents can be refunded (paid ${payment.amountCents}, already refunded ${payment.refundedCents})` }] };
-    }
-    try {
-      await payments().refunds.create(
-        { payment_intent: payment.providerPaymentId, amount: amountCents, metadata: { quoteId: String(id), byUser: String(user.id), ...(reason ? { note: reason.slice(0, 200) } : {}) } },
-        { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
-      );
-    } catch (error) {
-      const message = error instanceof Error ? error.message : 'no answer';
-      return { ok: false, status: 502, message: `The payment service refused the refund: ${message}. Nothing was changed.` };
-    }
-    // The webhook may have landed first; both sides take the larger running total, so it is counted once.
-    await payment.reload({ transaction: t, lock: t.LOCK.UPDATE });
-    const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, payment.amountCents - left + amountCents));
-    payment.set({ refundedCents: refunded, status: refundState(payment.amountCents, refunded) });
-    await payment.save({ transaction: t });
-    await recordAudit({ user, action: 'payment.refund-requested', entityType: 'quote', entityId: id, after: { paymentId: payment.id, amountCents, reason: reason ?? null } }, t);
-    settled = payment.status === 'refunded' && (await settleFullRefund(quote, afterFullRefund, { user }, t));
-    return null;
-  });
-  if (result) return result;
-  if (settled) await sendRefundNotice(id);
-  return { ok: true, record: (await getQuote(id))! };
-}
-
-export type { QuoteStatus };
+export type { QuoteStatus } from '@/lib/quotes/types';

@@ -1,5 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import { recordAudit } from '@/lib/audit';
+import type { AfterFullRefund } from '@/lib/quotes/types';
 import { Payment, Quote } from '../models';
 import { moveQuote, type AuditActor } from './quote-lifecycle';
 
@@ -7,8 +8,7 @@ import { moveQuote, type AuditActor } from './quote-lifecycle';
 // is cancelled (the default) or the quote reopened for a new payment, as the manager chooses. The move
 // itself is the lifecycle's (src/lib/quotes/lifecycle.ts, via 'refund').
 
-export type AfterFullRefund = 'cancel' | 'reopen';
-export { sendRefundNotice } from './quote-notices';
+export type { AfterFullRefund };
 
 /**
  * Called with the quote row locked, after a payment's refunded amount changed. When no deposit is held

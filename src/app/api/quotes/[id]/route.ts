@@ -1,30 +1,17 @@
 import { NextResponse } from 'next/server';
-import { requireRole } from '@/lib/auth/guard';
-import { idFrom, parseBody, type IdParams } from '@/lib/http/kit';
-import { getQuote, presentQuote, updateQuote } from '@/lib/db/queries/quotes';
-import { errorResponse } from '@/lib/http/responses';
+import { route } from '@/lib/http/route';
+import { getQuote, presentQuote } from '@/lib/db/queries/quotes';
+import { updateQuote } from '@/lib/quotes/drafting';
+import { noQuoteWithId } from '@/lib/quotes/refusals';
 import { QuotePatchSchema } from '@/lib/schemas/quote';
-import { quoteOutcomeResponse } from '../outcome';
 
-export const dynamic = 'force-dynamic';
-
-export async function GET(request: Request, context: IdParams) {
-  const user = await requireRole(request);
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'quote');
-  if (id instanceof Response) return id;
-  const quote = await getQuote(id);
-  if (!quote) return errorResponse(404, `No quote with id ${id}.`);
+export const GET = route({ permission: 'quotes.read', ids: { id: 'quote' } }, async ({ user, ids }) => {
+  const quote = await getQuote(ids.id);
+  if (!quote) throw noQuoteWithId(ids.id);
   return NextResponse.json(presentQuote(quote, user));
-}
+});
 
 /** { version, lines?, validUntil? } while the quote is a draft; a stale version answers 409. */
-export async function PATCH(request: Request, context: IdParams) {
-  const user = await requireRole(request, 'manager', 'counter');
-  if (user instanceof Response) return user;
-  const id = await idFrom(context, 'quote');
-  if (id instanceof Response) return id;
-  const body = await parseBody(request, QuotePatchSchema);
-  if (!body.ok) return body.response;
-  return quoteOutcomeResponse(await updateQuote(id, body.value, user), { present: (r) => presentQuote(r, user) });
-}
+export const PATCH = route({ permission: 'quotes.write', ids: { id: 'quote' }, body: QuotePatchSchema }, async ({ user, ids, body }) =>
+  NextResponse.json(presentQuote(await updateQuote(ids.id, body, user), user)),
+);

@@ -1,9 +1,6 @@
-import { startCheckout } from '@/lib/db/queries/deposits';
+import { route } from '@/lib/http/route';
+import { startCheckout } from '@/lib/quotes/checkout';
 import { checkoutResponse } from '../../checkout-response';
-
-export const dynamic = 'force-dynamic';
-
-type TokenParams = { params: Promise<{ token: string }> };
 
 /**
  * The customer's "Accept and pay the deposit" (no account: the private token is the key). A plain form
@@ -11,7 +8,6 @@ type TokenParams = { params: Promise<{ token: string }> };
  * link: 404. A quote that cannot be paid: 409 with its state; a form post is sent back to the page,
  * which says why.
  */
-export async function POST(request: Request, context: TokenParams) {
-  const { token } = await context.params;
-  return checkoutResponse(request, await startCheckout(token));
-}
+// allowCrossSite: the customer's page sends no referrer (its address holds the private token), so its
+// own form posts arrive with `Origin: null`; the token is the key, and a checkout only leads to paying.
+export const POST = route({ permission: 'public', allowCrossSite: true }, ({ request, params }) => checkoutResponse(request, () => startCheckout(params.token)));

@@ -2,25 +2,20 @@ import { createElement } from 'react';
 import { BalanceDueEmail, balanceDueSubject } from '@/emails/balance-due';
 import { BalanceReceiptEmail, balanceReceiptSubject } from '@/emails/balance-receipt';
 import { DepositReceiptEmail, depositReceiptSubject } from '@/emails/deposit-receipt';
-import type { MailShop } from '@/emails/layout';
 import { renderMail } from '@/emails/render';
 import { sendMail, type MailAttachment, type OutgoingMail } from '@/lib/mail';
-import { invoiceNumber, receiptNumber } from '@/lib/quotes/balance';
-import { invoicePdf, receiptPdf } from '@/lib/quotes/payment-pdf';
-import { ShopSettings } from '../models';
-import { mailShop } from './quote-notices';
-import { getQuote, shopForDocuments, type QuoteRecord } from './quotes';
+import { invoiceNumber, receiptNumber } from './balance';
+import { invoicePdf, receiptPdf } from './payment-pdf';
+import { getQuote, shopForDocuments, shopSettingsRow } from '@/lib/db/queries/quotes';
+import { envelope, mailShop } from './quote-notices';
+import type { QuoteRecord } from './types';
 
 // The customer's e-mails about money after the deposit: the pay-the-balance request and the receipt of
 // every payment, with the receipt PDF attached and, once the job is paid in full, the final invoice.
 // Receipts go after the commit: a refused e-mail is logged and never undoes a payment.
 
-function envelope(shop: MailShop, to: string): Pick<OutgoingMail, 'to' | 'fromName' | 'replyTo'> {
-  return { to, fromName: shop.name, ...(shop.email ? { replyTo: shop.email } : {}) };
-}
-
 /** The balance request, sent by the caller inside its transaction (a refused e-mail changes nothing). */
-export async function balanceDueMail(record: QuoteRecord, settings: ShopSettings | null, link: string): Promise<OutgoingMail> {
+export async function balanceDueMail(record: QuoteRecord, settings: Parameters<typeof mailShop>[0], link: string): Promise<OutgoingMail> {
   const shop = mailShop(settings);
   const props = {
     shop, customerName: record.customer.name, number: record.number, vehicleLabel: record.build?.vehicleLabel ?? null, totalCents: record.totalCents,
@@ -44,7 +39,7 @@ export async function sendPaymentReceipt(quoteId: number, paymentId: number): Pr
     const record = await getQuote(quoteId);
     const payment = record?.payments.find((p) => p.id === paymentId);
     if (!record?.customer.email || !payment) return;
-    const shop = mailShop(await ShopSettings.findOne({ order: [['id', 'ASC']] }));
+    const shop = mailShop(await shopSettingsRow());
     const paidAt = (payment.paidAt ?? new Date().toISOString());
     const rendered =
       payment.purpose === 'deposit'

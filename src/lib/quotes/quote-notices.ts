@@ -3,19 +3,20 @@ import type { MailShop } from '@/emails/layout';
 import { QuoteSentEmail, quoteSentSubject } from '@/emails/quote-sent';
 import { RefundNoticeEmail, refundNoticeSubject } from '@/emails/refund-notice';
 import { renderMail } from '@/emails/render';
+import { quoteForNotice, shopSettingsRow } from '@/lib/db/queries/quotes';
 import { sendMail, type OutgoingMail } from '@/lib/mail';
-import { Customer, Payment, Quote, ShopSettings } from '../models';
-import type { QuoteRecord } from './quotes';
+import type { QuoteRecord } from './types';
 
 // The customer's e-mails about a quote, built from the templates in src/emails: from the shop's name,
-// replies to the shop's address. Receipts and refund notices go after the commit: a refused e-mail is
-// logged and never undoes a payment or a refund.
+// replies to the shop's address. Refund notices go after the commit: a refused e-mail is logged and
+// never undoes a refund.
 
-export function mailShop(settings: Pick<ShopSettings, 'name' | 'email' | 'phone' | 'address'> | null): MailShop {
+export function mailShop(settings: { name: string; email: string; phone: string; address: string } | null): MailShop {
   return { name: settings?.name || 'Your shop', email: settings?.email || null, phone: settings?.phone || null, address: settings?.address || null };
 }
 
-function envelope(shop: MailShop, to: string): Pick<OutgoingMail, 'to' | 'fromName' | 'replyTo'> {
+/** To the customer, from the shop's name, replies to the shop. */
+export function envelope(shop: MailShop, to: string): Pick<OutgoingMail, 'to' | 'fromName' | 'replyTo'> {
   return { to, fromName: shop.name, ...(shop.email ? { replyTo: shop.email } : {}) };
 }
 
@@ -28,19 +29,12 @@ export async function quoteSentMail(record: QuoteRecord, shop: MailShop, link: s
   return { ...envelope(shop, record.customer.email ?? ''), ...(await renderMail(quoteSentSubject(props), createElement(QuoteSentEmail, props))) };
 }
 
-async function quoteWithCustomer(quoteId: number) {
-  const quote = (await Quote.findByPk(quoteId, { include: [{ model: Customer, as: 'customer', attributes: ['name', 'email'] }, { model: Payment, as: 'payments' }] })) as
-    | (Quote & { customer?: Customer; payments?: Payment[] })
-    | null;
-  const settings = await ShopSettings.findOne({ order: [['id', 'ASC']] });
-  return { quote, customer: quote?.customer, payments: (quote?.payments ?? []).filter((p) => !p.duplicateOfPaymentId), shop: mailShop(settings) };
-}
-
 /** The refund notice after the deposit was refunded in full. It carries no link: only the token's hash is kept. */
 export async function sendRefundNotice(quoteId: number): Promise<void> {
   try {
-    const { quote, customer, payments, shop } = await quoteWithCustomer(quoteId);
+    const [{ quote, customer, payments }, settings] = await Promise.all([quoteForNotice(quoteId), shopSettingsRow()]);
     if (!quote || !customer?.email) return;
+    const shop = mailShop(settings);
     const props = { shop, customerName: customer.name, number: quote.number, refundedCents: payments.reduce((s, p) => s + p.refundedCents, 0), reopened: quote.status === 'sent' };
     await sendMail({ ...envelope(shop, customer.email), ...(await renderMail(refundNoticeSubject(props), createElement(RefundNoticeEmail, props))) });
   } catch (error) {

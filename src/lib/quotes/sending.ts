@@ -1,0 +1,58 @@
+import { recordAudit } from '@/lib/audit';
+import type { SessionUser } from '@/lib/auth/guard';
+import { hashToken, randomToken } from '@/lib/auth/tokens';
+import { invalid, notFound, refused, runWrite } from '@/lib/catalogue/versioned-write';
+import { LifecycleRefused, moveQuote } from '@/lib/db/queries/quote-lifecycle';
+import { takeSnapshot } from '@/lib/db/queries/quote-snapshot';
+import { freezeSnapshot, getQuote, isFrozen, lockQuoteWithParts, presentQuote, shopSettingsRow, snapshotSource } from '@/lib/db/queries/quotes';
+import { appBaseUrl } from '@/lib/env';
+import { MailError, sendMail } from '@/lib/mail';
+import { stateWord, validUntilFrom } from './lifecycle';
+import { mailShop, quoteSentMail } from './quote-notices';
+import { mailNotSent, recordOrThrow } from './refusals';
+import type { QuoteRecord } from './types';
+
+// Sending a quote: a fresh private link e-mailed to the customer, the quote moved to "sent".
+
+/**
+ * Sends (or sends again) the quote: a fresh private token whose hash alone is stored, an e-mail with
+ * the link, status → sent (through the lifecycle). The mail goes out inside the transaction, so a refused
+ * mail changes nothing (502); sending again replaces the token, and the old link stops working. The first
+ * send sets a missing valid-until day and freezes the build profile and the advisor's result for the cam.
+ */
+export async function sendQuote(id: number, user: SessionUser): Promise<QuoteRecord> {
+  // Ranking takes a while: worked out before the transaction, with no row locked meanwhile.
+  const source = await snapshotSource(id);
+  const snapshot = source && !source.frozen ? await takeSnapshot(source.buildId, source.camId) : null;
+  try {
+    const outcome = await runWrite(async (t) => {
+      const quote = await lockQuoteWithParts(id, t);
+      if (!quote) throw notFound();
+      const email = quote.customer?.email;
+      if (quote.status === 'draft' || quote.status === 'sent') {
+        if (!email) throw invalid([{ field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' }]);
+        if (!(quote.lines ?? []).length) throw invalid([{ field: 'lines', message: 'the quote has no lines' }]);
+      }
+      const token = randomToken();
+      const now = new Date();
+      quote.set({ publicTokenHash: hashToken(token), sentAt: now, validUntil: quote.validUntil ?? validUntilFrom(now) });
+      if (snapshot && !isFrozen(quote)) freezeSnapshot(quote, snapshot);
+      try {
+        await moveQuote(quote, 'sent', 'send', { user }, t, { to: email });
+      } catch (error) {
+        if (error instanceof LifecycleRefused) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft or a sent quote can be sent.`);
+        throw error;
+      }
+      const settings = await shopSettingsRow(t);
+      if (!settings) throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
+      const record = (await getQuote(id, t))!;
+      await recordAudit({ user, action: 'quote.sent', entityType: 'quote', entityId: id, before: null, after: { to: email, revision: record.revision } }, t);
+      await sendMail(await quoteSentMail(record, mailShop(settings), `${appBaseUrl()}/q/${token}`, record.revisionOf?.number ?? null));
+      return { record };
+    });
+    return recordOrThrow(outcome, (r) => presentQuote(r, user));
+  } catch (error) {
+    if (error instanceof MailError) throw mailNotSent('The e-mail could not be sent, so the quote was not marked as sent. Try again in a moment.');
+    throw error;
+  }
+}
