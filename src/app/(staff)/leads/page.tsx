@@ -9,11 +9,8 @@ import { LeadNotes } from '@/components/leads/lead-notes';
 import { LeadStatusForm } from '@/components/leads/lead-status-form';
 import { ShortlistCards } from '@/components/leads/shortlist-view';
 import { requireRoleForPage } from '@/lib/auth/guard';
-import { listLeadNotes } from '@/lib/db/queries/lead-notes';
-import { countStaleLeads, listLeads } from '@/lib/db/queries/leads';
-import { getShopSettings } from '@/lib/db/queries/settings';
+import { leadListPage } from '@/lib/leads/lead-list';
 import { answersInWords } from '@/lib/leads/questions';
-import { staleCutoff, staleDays } from '@/lib/leads/stale';
 import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
 
 export const metadata: Metadata = { title: 'Leads' };
@@ -25,13 +22,8 @@ export default async function LeadsPage({ searchParams }: { searchParams: Promis
   const raw = await searchParams;
   const status = (LEAD_STATUSES as readonly string[]).includes(raw.status ?? '') ? (raw.status as LeadStatus) : undefined;
   const page = Math.max(1, Math.trunc(Number(raw.page)) || 1);
-  const { items, total } = await listLeads({ status, page, pageSize: PAGE_SIZE });
-  const notes = await listLeadNotes(items.map((l) => l.id));
-  // The server's clock decides "now"; the shop's setting decides how long a new lead may wait.
-  const now = new Date();
-  const limitDays = (await getShopSettings())?.leadStaleDays ?? 2;
-  const staleTotal = await countStaleLeads(staleCutoff(now, limitDays));
-  const waited = (lead: (typeof items)[number]) => staleDays(lead, (notes.get(lead.id) ?? []).map((n) => n.createdAt), now, limitDays);
+  const { items, total, notes, staleTotal, staleAfterDays: limitDays } = await leadListPage({ status, page, pageSize: PAGE_SIZE });
+  const waited = (lead: (typeof items)[number]) => lead.staleDays;
   const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
   const href = (p: number) => `?${new URLSearchParams({ ...(status ? { status } : {}), ...(p > 1 ? { page: String(p) } : {}) }).toString()}`;
   return (
