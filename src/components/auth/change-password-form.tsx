@@ -6,8 +6,9 @@ import { z } from 'zod';
 import { PASSWORD_MAX, PASSWORD_MIN, changePasswordSchema } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
 import { zodValidate } from '@/lib/forms/zod-formik';
-import { SubmitButton, TextField } from './form-parts';
+import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
+import { SubmitButton } from '@/components/ui/button';
 
 type Values = { currentPassword: string; newPassword: string; repeat: string };
 
@@ -40,9 +41,9 @@ export function ChangePasswordForm() {
       {({ isSubmitting }) => (
         <Form className="flex max-w-md flex-col gap-4" noValidate>
           {result ? <Banner tone={result.tone}>{result.text}</Banner> : null}
-          <TextField name="currentPassword" label="Current password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
-          <TextField name="newPassword" label="New password" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more.`} />
-          <TextField name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
+          <TextField namedErrors name="currentPassword" label="Current password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
+          <TextField namedErrors name="newPassword" label="New password" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more.`} />
+          <TextField namedErrors name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
           <div><SubmitButton busy={isSubmitting}>Change password</SubmitButton></div>
         </Form>
       )}

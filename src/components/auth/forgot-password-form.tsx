@@ -5,8 +5,9 @@ import { useState } from 'react';
 import { EMAIL_MAX, forgotPasswordSchema } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
 import { zodValidate } from '@/lib/forms/zod-formik';
-import { SubmitButton, TextField } from './form-parts';
+import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
+import { SubmitButton } from '@/components/ui/button';
 
 type Values = { email: string };
 
@@ -26,7 +27,7 @@ export function ForgotPasswordForm() {
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {answer ? <Banner tone={answer.tone}>{answer.text}</Banner> : null}
-          <TextField name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
+          <TextField namedErrors name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
           <div><SubmitButton busy={isSubmitting}>Send the link</SubmitButton></div>
         </Form>
       )}

@@ -7,8 +7,9 @@ import { PASSWORD_MAX, PASSWORD_MIN, newPasswordField } from '@/lib/schemas/auth
 import { formErrors, sendJson } from '@/lib/api-client';
 import { zodValidate } from '@/lib/forms/zod-formik';
 import { z } from 'zod';
-import { SubmitButton, TextField } from './form-parts';
+import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
+import { SubmitButton } from '@/components/ui/button';
 
 type Values = { password: string; repeat: string };
 
@@ -40,8 +41,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {result ? <Banner tone={result.tone}>{result.text}</Banner> : null}
-          <TextField name="password" label="New password" type="password" autoComplete="new-password" autoFocus maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more; a short sentence works well.`} />
-          <TextField name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
+          <TextField namedErrors name="password" label="New password" type="password" autoComplete="new-password" autoFocus maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more; a short sentence works well.`} />
+          <TextField namedErrors name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
           <div><SubmitButton busy={isSubmitting}>Save the password</SubmitButton></div>
         </Form>
       )}

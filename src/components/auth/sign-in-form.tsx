@@ -7,8 +7,9 @@ import { useState } from 'react';
 import { EMAIL_MAX, PASSWORD_MAX, signInSchema } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
 import { zodValidate } from '@/lib/forms/zod-formik';
-import { SubmitButton, TextField } from './form-parts';
+import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
+import { SubmitButton } from '@/components/ui/button';
 
 type Values = { email: string; password: string };
 
@@ -35,8 +36,8 @@ export function SignInForm({ next }: { next: string }) {
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {problem ? <Banner tone="fault">{problem}</Banner> : null}
-          <TextField name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
-          <TextField name="password" label="Password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
+          <TextField namedErrors name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
+          <TextField namedErrors name="password" label="Password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
           <div className="flex items-center justify-between gap-4">
             <SubmitButton busy={isSubmitting}>Sign in</SubmitButton>
             <Link href="/forgot-password" className="text-sm text-gauge-700 underline">Forgot your password?</Link>

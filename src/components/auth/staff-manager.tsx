@@ -7,8 +7,9 @@ import { EMAIL_MAX } from '@/lib/schemas/auth';
 import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES, inviteUserSchema } from '@/lib/schemas/user';
 import { formErrors, getJson, sendJson } from '@/lib/api-client';
 import { zodValidate } from '@/lib/forms/zod-formik';
-import { SubmitButton, TextField } from './form-parts';
+import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
+import { SubmitButton } from '@/components/ui/button';
 import { dateTime } from '@/lib/format';
 
 type Role = (typeof STAFF_ROLE_VALUES)[number];
@@ -140,8 +141,8 @@ function InviteForm({ onInvited }: { onInvited: (text: string) => Promise<void> 
       {({ isSubmitting, values, setFieldValue }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {problem ? <Banner tone="fault">{problem}</Banner> : null}
-          <TextField name="name" label="Name" autoComplete="off" maxLength={NAME_MAX} />
-          <TextField name="email" label="E-mail" type="email" autoComplete="off" maxLength={EMAIL_MAX} />
+          <TextField namedErrors name="name" label="Name" autoComplete="off" maxLength={NAME_MAX} />
+          <TextField namedErrors name="email" label="E-mail" type="email" autoComplete="off" maxLength={EMAIL_MAX} />
           <div className="flex flex-col gap-1">
             <label htmlFor="invite-role" className="text-sm font-semibold">Role</label>
             <select id="invite-role" value={values.role} onChange={(e) => setFieldValue('role', e.target.value)} className="rounded border border-steel-300 bg-paper-raised px-3 py-2">

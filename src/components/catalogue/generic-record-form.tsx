@@ -1,6 +1,6 @@
 'use client';
 
-import { Form, Formik, useField, type FormikHelpers } from 'formik';
+import { Form, Formik, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { useVersionedSave } from '@/lib/api-client';
@@ -8,6 +8,7 @@ import { centsFromText, formatMoney } from '@/lib/format';
 import { moneyWithin, numberWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { CheckboxField, NumberField, SelectField, TextAreaField, TextField } from '@/components/ui/formik-fields';
 
 // One formik form for every catalogue record. Fields are described once (FieldDef), each with the limit the
 // zod schema exports (range, maxLength); the browser checks those with yup as someone types, the server
@@ -78,61 +79,14 @@ export function yupValidator(fields: FieldDef[]) {
   return validateWithYup<FormValues>(yup.object(shape));
 }
 
+/** One FieldDef drawn with the shared field set; numbers and money read right-aligned in figures. */
 function Field({ def }: { def: FieldDef }) {
-  const [field, meta, helpers] = useField<string | boolean>(def.name);
-  const id = `f-${def.name}`;
-  const error = meta.touched && meta.error ? meta.error : null;
-  const describedBy = error ? `${id}-error` : def.hint ? `${id}-hint` : undefined;
-  const inputClass = `w-full rounded border bg-paper-raised px-2 py-1.5 text-ink ${error ? 'border-fault-700' : 'border-steel-300'}`;
-  if (def.kind === 'bool') {
-    return (
-      <div className="flex items-start gap-2 pt-5">
-        <input id={id} type="checkbox" checked={Boolean(field.value)} onChange={(e) => helpers.setValue(e.target.checked)} onBlur={field.onBlur} name={def.name} className="mt-1 h-4 w-4" />
-        <label htmlFor={id} className="text-sm">
-          <span className="font-semibold">{def.label}</span>
-          {def.hint ? <span className="block text-xs text-ink-muted">{def.hint}</span> : null}
-        </label>
-      </div>
-    );
-  }
-  return (
-    <div className={`flex flex-col gap-1 ${def.wide || def.kind === 'textarea' ? 'sm:col-span-2 lg:col-span-3' : ''}`}>
-      <label htmlFor={id} className="text-sm font-semibold">
-        {def.label}
-        {def.unit ? <span className="font-normal text-ink-muted"> ({def.unit})</span> : null}
-      </label>
-      {def.kind === 'textarea' ? (
-        <textarea id={id} rows={3} aria-invalid={error ? true : undefined} aria-describedby={describedBy} className={inputClass} {...field} value={String(field.value)} />
-      ) : def.kind === 'select' ? (
-        <select id={id} aria-invalid={error ? true : undefined} aria-describedby={describedBy} className={inputClass} {...field} value={String(field.value)}>
-          {def.options?.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
-        </select>
-      ) : (
-        <input
-          id={id}
-          inputMode={def.kind === 'text' ? undefined : 'decimal'}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy}
-          className={`${inputClass} ${def.kind === 'text' ? '' : 'spec text-right'}`}
-          {...field}
-          value={String(field.value)}
-        />
-      )}
-      {error ? (
-        <p id={`${id}-error`} className="text-xs text-fault-700">
-          Problem: {error}
-        </p>
-      ) : def.hint ? (
-        <p id={`${id}-hint`} className="text-xs text-ink-muted">
-          {def.hint}
-        </p>
-      ) : null}
-    </div>
-  );
+  const wide = def.wide || def.kind === 'textarea' ? 'sm:col-span-2 lg:col-span-3' : '';
+  if (def.kind === 'bool') return <CheckboxField name={def.name} label={def.label} hint={def.hint} className="pt-5" />;
+  if (def.kind === 'textarea') return <TextAreaField name={def.name} label={def.label} hint={def.hint} className={wide} maxLength={def.maxLength} />;
+  if (def.kind === 'select') return <SelectField name={def.name} label={def.label} hint={def.hint} className={wide} options={(def.options ?? []).map((o) => [o.value, o.label] as const)} />;
+  if (def.kind === 'text') return <TextField name={def.name} label={def.label} hint={def.hint} className={wide} maxLength={def.maxLength} />;
+  return <NumberField name={def.name} label={def.label} unit={def.unit ?? ''} hint={def.hint ?? ''} decimals={def.kind !== 'integer'} className={wide} />;
 }
 
 function show(def: FieldDef | undefined, value: unknown): string {

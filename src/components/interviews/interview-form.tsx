@@ -4,7 +4,7 @@ import { Form, Formik, useFormikContext, type FormikHelpers } from 'formik';
 import { useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
 import useSWR from 'swr';
-import { SubmitButton } from '@/components/auth/form-parts';
+import { SubmitButton } from '@/components/ui/button';
 import { Banner } from '@/components/ui/banner';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
 import { getJson, useVersionedSave } from '@/lib/api-client';
@@ -15,7 +15,8 @@ import {
 } from '@/lib/schemas/build-profile';
 import { CAM_LIMITS as C } from '@/lib/schemas/cam-card';
 import { CUSTOMER_LIMITS } from '@/lib/schemas/customer';
-import { Choice, NumberField, Section, TextInput } from './fields';
+import { NumberField, SelectField, TextField } from '@/components/ui/formik-fields';
+import { Section } from './section';
 import {
   applyCard, applyPreset, blankInterview, ENGINE_PRESETS, valuesFromBuild, type BaselineCard, type InterviewValues,
 } from '@/lib/builds/interview-values';
@@ -98,9 +99,9 @@ export function InterviewForm(props: Props) {
           <VehicleSection />
           <EngineSection cards={cards} />
           <Section step={4} title="Heads and intake">
-            <Choice name="profile.engine.headMaterial" label="Cylinder head material" options={opts(HEAD_MATERIALS)} hint="Iron heads want a little less compression." />
+            <SelectField name="profile.engine.headMaterial" label="Cylinder head material" options={opts(HEAD_MATERIALS)} hint="Iron heads want a little less compression." />
             <NumberField name="profile.engine.intakeFlowCfm" label="Intake port flow at 28 inH₂O" unit="cfm" range={B.intakeFlowCfm} decimals={false} />
-            <Choice name="profile.engine.intakeManifold" label="Intake manifold" options={opts(INTAKE_MANIFOLDS)} />
+            <SelectField name="profile.engine.intakeManifold" label="Intake manifold" options={opts(INTAKE_MANIFOLDS)} />
           </Section>
           <ExhaustSection />
           <DrivetrainSection />
@@ -164,10 +165,10 @@ function CustomerSection({ mode }: { mode: 'create' | 'edit' }) {
       </div>
       {values.customerMode === 'new' ? (
         <>
-          <TextInput name="customer.name" label="Name" autoFocus maxLength={CUSTOMER_LIMITS.nameMaxLength} autoComplete="off" />
-          <TextInput name="customer.phone" label="Phone" type="tel" maxLength={CUSTOMER_LIMITS.phoneMaxLength} />
-          <TextInput name="customer.email" label="E-mail" type="email" maxLength={CUSTOMER_LIMITS.emailMaxLength} hint="Optional; the quote goes here." />
-          <TextInput name="customer.notes" label="Notes" maxLength={CUSTOMER_LIMITS.notesMaxLength} hint="Optional." />
+          <TextField name="customer.name" label="Name" autoFocus maxLength={CUSTOMER_LIMITS.nameMaxLength} autoComplete="off" />
+          <TextField name="customer.phone" label="Phone" type="tel" maxLength={CUSTOMER_LIMITS.phoneMaxLength} />
+          <TextField name="customer.email" label="E-mail" type="email" maxLength={CUSTOMER_LIMITS.emailMaxLength} hint="Optional; the quote goes here." />
+          <TextField name="customer.notes" label="Notes" maxLength={CUSTOMER_LIMITS.notesMaxLength} hint="Optional." />
         </>
       ) : (
         <div className="flex flex-col gap-1 sm:col-span-2">
@@ -205,11 +206,11 @@ function CustomerSection({ mode }: { mode: 'create' | 'edit' }) {
 function VehicleSection() {
   return (
     <Section step={2} title="Vehicle and use" lead="What it is, what it weighs, and what the customer does with it.">
-      <TextInput name="vehicleLabel" label="Vehicle" hint="Year, body, engine, e.g. “2012 crew-cab pickup, 5.3 L”." wide />
-      <Choice name="profile.vehicle.class" label="Kind of vehicle" options={VEHICLE_CLASSES.map((v) => [v, VEHICLE_WORDS[v]] as const)} hint="The shop prices the cam install by it." />
+      <TextField name="vehicleLabel" label="Vehicle" hint="Year, body, engine, e.g. “2012 crew-cab pickup, 5.3 L”." className="sm:col-span-2" />
+      <SelectField name="profile.vehicle.class" label="Kind of vehicle" options={VEHICLE_CLASSES.map((v) => [v, VEHICLE_WORDS[v]] as const)} hint="The shop prices the cam install by it." />
       <NumberField name="profile.vehicle.weightLb" label="Weight as driven" unit="lb" range={B.weightLb} decimals={false} />
-      <Choice name="profile.vehicle.powerBrakes" label="Power brakes" options={opts(POWER_BRAKES)} hint="A vacuum booster wants about 15 inHg at idle." />
-      <Choice name="profile.use.primary" label="Mostly used for" options={opts(PRIMARY_USES)} />
+      <SelectField name="profile.vehicle.powerBrakes" label="Power brakes" options={opts(POWER_BRAKES)} hint="A vacuum booster wants about 15 inHg at idle." />
+      <SelectField name="profile.use.primary" label="Mostly used for" options={opts(PRIMARY_USES)} />
       <NumberField name="profile.use.cruiseMph" label="Usual cruise speed" unit="mph" range={B.cruiseMph} decimals={false} />
     </Section>
   );
@@ -240,7 +241,7 @@ function EngineSection({ cards }: { cards: BaselineCard[] }) {
       <NumberField name="profile.engine.strokeIn" label="Stroke" unit="in" range={B.strokeIn} />
       <NumberField name="profile.engine.rodLengthIn" label="Rod length" unit="in" range={B.rodLengthIn} hint={`${B.rodLengthIn.min}–${B.rodLengthIn.max} in, at least ${B.rodStrokeRatio.min} × stroke`} />
       <NumberField name="profile.engine.compressionRatio" label="Static compression ratio" unit=":1" range={B.compressionRatio} />
-      <Choice name="profile.engine.cylinderDeactivation" label="Cylinder deactivation" options={opts(DEACTIVATION_STATES)} />
+      <SelectField name="profile.engine.cylinderDeactivation" label="Cylinder deactivation" options={opts(DEACTIVATION_STATES)} />
       <p className="spec self-end text-sm text-ink-soft sm:col-span-2" aria-live="polite">
         {ci ? `Displacement ${ci.toFixed(0)} in³ (${litresFromCubicInches(ci).toFixed(1)} L)` : 'Displacement: enter bore, stroke and cylinders'}
       </p>
@@ -253,9 +254,9 @@ function ExhaustSection() {
   const headers = values.profile.exhaust.headers !== 'manifold';
   return (
     <Section step={5} title="Exhaust">
-      <Choice name="profile.exhaust.headers" label="Headers" options={opts(HEADER_TYPES)} />
+      <SelectField name="profile.exhaust.headers" label="Headers" options={opts(HEADER_TYPES)} />
       {headers ? <NumberField name="profile.exhaust.primaryIn" label="Primary tube diameter" unit="in" range={B.primaryIn} hint={`Optional; blank means ${B.primaryIn.default} in`} /> : null}
-      <Choice name="profile.exhaust.system" label="Exhaust system" options={opts(EXHAUST_SYSTEMS)} />
+      <SelectField name="profile.exhaust.system" label="Exhaust system" options={opts(EXHAUST_SYSTEMS)} />
     </Section>
   );
 }
@@ -265,7 +266,7 @@ function DrivetrainSection() {
   const manual = values.profile.drivetrain.transmission === 'manual';
   return (
     <Section step={6} title="Drivetrain">
-      <Choice name="profile.drivetrain.transmission" label="Transmission" options={opts(TRANSMISSIONS)} />
+      <SelectField name="profile.drivetrain.transmission" label="Transmission" options={opts(TRANSMISSIONS)} />
       {manual
         ? <NumberField name="profile.drivetrain.launchRpm" label="Launch rpm" unit="rpm" range={B.launchRpm} hint="Optional; blank uses a default for the use." decimals={false} />
         : <NumberField name="profile.drivetrain.stallRpm" label="Converter stall speed" unit="rpm" range={{ min: B.stallRpm.automaticMin, max: B.stallRpm.max }} decimals={false} />}
@@ -281,10 +282,10 @@ function WishesSection() {
   const u = values.profile.use;
   return (
     <Section step={7} title="Wishes" lead="How it should idle, what it burns, whether it has to pass emissions, and what the customer wants to spend.">
-      <Choice name="profile.use.idle" label="Idle" options={opts(IDLE_WISHES)} />
+      <SelectField name="profile.use.idle" label="Idle" options={opts(IDLE_WISHES)} />
       <NumberField name="profile.use.fuelOctane" label="Pump fuel octane, (R+M)/2" unit="AKI" range={B.fuelOctane} decimals={false} />
-      <Choice name="profile.use.emissionsRequired" label="Must it stay road-legal for emissions?" options={[['yes', 'Yes, road-legal emissions needed'], ['no', 'No (off-road or exempt)']]} />
-      <Choice name="profile.use.budgetKnown" label="Budget" options={[['figure', 'The customer named a figure'], ['unsure', 'Not sure yet']]} />
+      <SelectField name="profile.use.emissionsRequired" label="Must it stay road-legal for emissions?" options={[['yes', 'Yes, road-legal emissions needed'], ['no', 'No (off-road or exempt)']]} />
+      <SelectField name="profile.use.budgetKnown" label="Budget" options={[['figure', 'The customer named a figure'], ['unsure', 'Not sure yet']]} />
       {u.budgetKnown === 'figure' ? (
         <NumberField name="profile.use.budgetCents" label="Budget for the whole job" unit="$" hint="Dollars, parts and labour together." />
       ) : (
@@ -310,14 +311,14 @@ function BaselineSection({ cards }: { cards: BaselineCard[] }) {
   return (
     <Section step={8} title="The cam in the engine now" lead="Pick the stock card from the catalogue, or type the card of the cam that is in it.">
       <div className="sm:col-span-2">
-        <Choice
+        <SelectField
           name="baselineCamId"
           label="Cam in the engine now"
           options={[...cards.map((c) => [String(c.id), `${c.sku} ${c.name}`] as const), ['', 'Typed from a card']]}
           onPick={choose}
         />
       </div>
-      <TextInput name="profile.baselineCam.name" label="Cam name on the card" maxLength={C.nameMaxLength} wide />
+      <TextField name="profile.baselineCam.name" label="Cam name on the card" maxLength={C.nameMaxLength} className="sm:col-span-2" />
       <NumberField name="profile.baselineCam.intakeDuration050" label='Intake duration at 0.050"' unit="deg" range={C.duration050Deg} />
       <NumberField name="profile.baselineCam.exhaustDuration050" label='Exhaust duration at 0.050"' unit="deg" range={C.duration050Deg} />
       <NumberField name="profile.baselineCam.intakeLiftIn" label="Intake lift at the valve" unit="in" range={C.liftIn} />

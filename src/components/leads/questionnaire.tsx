@@ -5,6 +5,7 @@ import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { CHOICE_QUESTIONS, QUESTION_COUNT } from '@/lib/leads/questions';
 import { LEAD_LIMITS } from '@/lib/leads/limits';
 import { sendJson } from '@/lib/api-client';
+import { CheckboxControl, TextControl } from '@/components/ui/field';
 
 // The at-home questionnaire: one question per screen, big targets, plain words. Answers live in
 // sessionStorage so a reload (or a phone that drops the tab) keeps them until they are sent. The server
@@ -36,8 +37,6 @@ const primaryButton =
   'min-h-14 rounded-lg bg-ember-500 px-6 py-3 text-xl font-semibold text-paper-raised hover:bg-ember-600 focus-visible:outline focus-visible:outline-4 focus-visible:outline-offset-2 focus-visible:outline-gauge-500 disabled:opacity-60';
 const quietButton =
   'min-h-14 rounded-lg border-2 border-steel-500 bg-paper-raised px-6 py-3 text-xl font-semibold text-ink hover:bg-paper-sunk focus-visible:outline focus-visible:outline-4 focus-visible:outline-offset-2 focus-visible:outline-gauge-500';
-const inputClass =
-  'mt-2 block min-h-14 w-full rounded-lg border-2 border-steel-500 bg-paper-raised px-4 py-3 text-xl text-ink focus-visible:outline focus-visible:outline-4 focus-visible:outline-gauge-500 aria-[invalid=true]:border-fault-700';
 
 export function Questionnaire() {
   const router = useRouter();
@@ -189,29 +188,23 @@ export function Questionnaire() {
             How can the shop reach you?
           </h1>
           <p className="mt-3 text-ink-soft">An e-mail address or a phone number is enough. We use it only to talk to you about this job.</p>
-          <Field id="name" label="Your name" value={answers.name ?? ''} error={errors.name} onChange={(v) => set('name', v)} autoComplete="name" maxLength={LEAD_LIMITS.nameMaxLength} />
-          <Field id="email" label="E-mail" type="email" inputMode="email" value={answers.email ?? ''} error={errors.email} onChange={(v) => set('email', v)} autoComplete="email" maxLength={LEAD_LIMITS.emailMaxLength} />
-          <Field id="phone" label="Phone" type="tel" inputMode="tel" value={answers.phone ?? ''} error={errors.phone} onChange={(v) => set('phone', v)} autoComplete="tel" maxLength={LEAD_LIMITS.phoneMaxLength} />
+          <TextControl look="large" id="ask-name" name="name" label="Your name" value={answers.name ?? ''} error={errors.name} onChange={(e) => set('name', e.target.value)} autoComplete="name" maxLength={LEAD_LIMITS.nameMaxLength} />
+          <TextControl look="large" id="ask-email" name="email" label="E-mail" type="email" inputMode="email" value={answers.email ?? ''} error={errors.email} onChange={(e) => set('email', e.target.value)} autoComplete="email" maxLength={LEAD_LIMITS.emailMaxLength} />
+          <TextControl look="large" id="ask-phone" name="phone" label="Phone" type="tel" inputMode="tel" value={answers.phone ?? ''} error={errors.phone} onChange={(e) => set('phone', e.target.value)} autoComplete="tel" maxLength={LEAD_LIMITS.phoneMaxLength} />
           {/* Not shown, not focusable, not filled by autofill; a robot reading the markup fills it. */}
           <div hidden>
             <label htmlFor="website">Leave this empty</label>
             <input id="website" name="website" type="text" tabIndex={-1} autoComplete="off" defaultValue="" />
           </div>
-          <label className="mt-6 flex min-h-14 cursor-pointer items-start gap-4 rounded-lg border-2 border-steel-300 bg-paper-raised px-4 py-3">
-            <input
-              type="checkbox"
-              name="consent"
-              checked={answers.consent === 'yes'}
-              onChange={(e) => set('consent', e.target.checked ? 'yes' : '')}
-              aria-invalid={errors.consent ? true : undefined}
-              aria-describedby={errors.consent ? 'consent-error' : undefined}
-              className="mt-1 h-6 w-6 shrink-0 accent-ember-600"
-            />
-            <span className="text-xl">Yes, the shop may contact me about my answers.</span>
-          </label>
-          {errors.consent ? (
-            <p id="consent-error" role="alert" className="mt-2 font-semibold text-fault-700">{errors.consent}</p>
-          ) : null}
+          <CheckboxControl
+            id="ask-consent"
+            name="consent"
+            look="large"
+            label="Yes, the shop may contact me about my answers."
+            error={errors.consent}
+            checked={answers.consent === 'yes'}
+            onChange={(e) => set('consent', e.target.checked ? 'yes' : '')}
+          />
           {problem ? (
             <p role="alert" className="mt-4 rounded-lg border-2 border-fault-700 bg-fault-100 p-4 font-semibold">{problem}</p>
           ) : null}
@@ -233,26 +226,6 @@ function Nav({ step, onBack, nextLabel, disabled }: { step: number; onBack: () =
       <button type="submit" disabled={disabled} className={`${primaryButton} flex-[2]`}>
         {nextLabel}
       </button>
-    </div>
-  );
-}
-
-function Field({ id, label, value, error, onChange, ...rest }: { id: string; label: string; value: string; error?: string; onChange: (v: string) => void } & Omit<React.InputHTMLAttributes<HTMLInputElement>, 'onChange' | 'value' | 'id'>) {
-  return (
-    <div className="mt-5">
-      <label htmlFor={`ask-${id}`} className="block text-xl font-semibold">{label}</label>
-      <input
-        id={`ask-${id}`}
-        name={id}
-        value={value}
-        onChange={(e) => onChange(e.target.value)}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        className={inputClass}
-        type={rest.type ?? 'text'}
-        {...rest}
-      />
-      {error ? <p id={`${id}-error`} role="alert" className="mt-2 font-semibold text-fault-700">{error}</p> : null}
     </div>
   );
 }

@@ -41,3 +41,12 @@ export function ButtonAnchor({
 }: React.AnchorHTMLAttributes<HTMLAnchorElement> & { variant?: ButtonVariant }) {
   return <a {...props} className={buttonClass(variant, className)} />;
 }
+
+/** A form's one submit button, saying "Working…" while the answer is awaited. */
+export function SubmitButton({ busy, children }: { busy: boolean; children: React.ReactNode }) {
+  return (
+    <Button type="submit" variant="primary" size="md" disabled={busy}>
+      {busy ? 'Working…' : children}
+    </Button>
+  );
+}
