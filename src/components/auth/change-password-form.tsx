@@ -2,30 +2,21 @@
 
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
-import { z } from 'zod';
-import { PASSWORD_MAX, PASSWORD_MIN, changePasswordSchema } from '@/lib/schemas/auth';
+import { PASSWORD_MAX, PASSWORD_MIN } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
-import { zodValidate } from '@/lib/forms/zod-formik';
+import { changePasswordChecks } from '@/lib/forms/account-checks';
 import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
 import { SubmitButton } from '@/components/ui/button';
 
 type Values = { currentPassword: string; newPassword: string; repeat: string };
 
-const formSchema = z
-  .object({ currentPassword: z.string(), newPassword: z.string(), repeat: z.string() })
-  .superRefine((v, ctx) => {
-    const base = changePasswordSchema.safeParse({ currentPassword: v.currentPassword, newPassword: v.newPassword });
-    if (!base.success) for (const issue of base.error.issues) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
-    if (v.repeat !== v.newPassword) ctx.addIssue({ code: 'custom', path: ['repeat'], message: 'does not match the new password' });
-  });
-
 export function ChangePasswordForm() {
   const [result, setResult] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
   return (
     <Formik<Values>
       initialValues={{ currentPassword: '', newPassword: '', repeat: '' }}
-      validate={zodValidate<Values>(formSchema)}
+      validate={changePasswordChecks}
       onSubmit={async (values, helpers) => {
         const answer = await sendJson('POST', '/api/account/password', { currentPassword: values.currentPassword, newPassword: values.newPassword });
         if (answer.status === 200) {

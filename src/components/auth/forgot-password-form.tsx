@@ -2,9 +2,9 @@
 
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
-import { EMAIL_MAX, forgotPasswordSchema } from '@/lib/schemas/auth';
+import { EMAIL_MAX } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
-import { zodValidate } from '@/lib/forms/zod-formik';
+import { forgotPasswordChecks } from '@/lib/forms/account-checks';
 import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
 import { SubmitButton } from '@/components/ui/button';
@@ -16,7 +16,7 @@ export function ForgotPasswordForm() {
   return (
     <Formik<Values>
       initialValues={{ email: '' }}
-      validate={zodValidate<Values>(forgotPasswordSchema)}
+      validate={forgotPasswordChecks}
       onSubmit={async (values, helpers) => {
         const result = await sendJson('POST', '/api/auth/forgot-password', values);
         if (result.status === 202) return setAnswer({ tone: 'ok', text: result.body.message ?? 'Check your inbox.' });

@@ -3,19 +3,14 @@
 import { Form, Formik } from 'formik';
 import Link from 'next/link';
 import { useState } from 'react';
-import { PASSWORD_MAX, PASSWORD_MIN, newPasswordField } from '@/lib/schemas/auth';
+import { PASSWORD_MAX, PASSWORD_MIN } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
-import { zodValidate } from '@/lib/forms/zod-formik';
-import { z } from 'zod';
+import { resetPasswordChecks } from '@/lib/forms/account-checks';
 import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
 import { SubmitButton } from '@/components/ui/button';
 
 type Values = { password: string; repeat: string };
-
-const formSchema = z
-  .object({ password: newPasswordField, repeat: z.string() })
-  .refine((v) => v.password === v.repeat, { path: ['repeat'], message: 'does not match the new password' });
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const [result, setResult] = useState<{ tone: 'ok' | 'fault'; text: string } | null>(null);
@@ -30,7 +25,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <Formik<Values>
       initialValues={{ password: '', repeat: '' }}
-      validate={zodValidate<Values>(formSchema)}
+      validate={resetPasswordChecks}
       onSubmit={async (values, helpers) => {
         const answer = await sendJson('POST', '/api/auth/reset-password', { token, password: values.password });
         if (answer.status === 200) return setResult({ tone: 'ok', text: answer.body.message ?? 'Your password is set.' });

@@ -4,9 +4,9 @@ import { Form, Formik } from 'formik';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { EMAIL_MAX, PASSWORD_MAX, signInSchema } from '@/lib/schemas/auth';
+import { EMAIL_MAX, PASSWORD_MAX } from '@/lib/schemas/auth';
 import { formErrors, sendJson } from '@/lib/api-client';
-import { zodValidate } from '@/lib/forms/zod-formik';
+import { signInChecks } from '@/lib/forms/account-checks';
 import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
 import { SubmitButton } from '@/components/ui/button';
@@ -19,7 +19,7 @@ export function SignInForm({ next }: { next: string }) {
   return (
     <Formik<Values>
       initialValues={{ email: '', password: '' }}
-      validate={zodValidate<Values>(signInSchema)}
+      validate={signInChecks}
       onSubmit={async (values, helpers) => {
         setProblem(null);
         const answer = await sendJson('POST', '/api/auth/sign-in', values);

@@ -4,9 +4,9 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { EMAIL_MAX } from '@/lib/schemas/auth';
-import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES, inviteUserSchema } from '@/lib/schemas/user';
+import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES } from '@/lib/schemas/user';
 import { formErrors, getJson, sendJson } from '@/lib/api-client';
-import { zodValidate } from '@/lib/forms/zod-formik';
+import { inviteChecks } from '@/lib/forms/account-checks';
 import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
 import { SubmitButton } from '@/components/ui/button';
@@ -125,7 +125,7 @@ function InviteForm({ onInvited }: { onInvited: (text: string) => Promise<void> 
   return (
     <Formik<InviteValues>
       initialValues={{ email: '', name: '', role: 'counter' }}
-      validate={zodValidate<InviteValues>(inviteUserSchema)}
+      validate={inviteChecks}
       onSubmit={async (values, helpers) => {
         setProblem(null);
         const answer = await sendJson('POST', '/api/users', values);
