@@ -28,6 +28,8 @@ export type FieldDef = {
   range?: Range;
   maxLength?: number;
   required?: boolean;
+  /** The name the schema's messages give the field, when the label says it differently ("deposit percent"). */
+  term?: string;
 };
 
 export type FormValues = Record<string, string | boolean>;
@@ -71,7 +73,7 @@ const inMessage = (label: string) => (/^[A-Z][a-z]/.test(label) ? label[0].toLow
 export function yupValidator(fields: FieldDef[]) {
   const shape: Record<string, yup.AnySchema> = {};
   for (const f of fields) {
-    const label = inMessage(f.label);
+    const label = f.term ?? inMessage(f.label);
     if (f.kind === 'text' || f.kind === 'textarea') shape[f.name] = textUpTo(label, f.maxLength, { required: f.required });
     else if (f.kind === 'number' || f.kind === 'integer') shape[f.name] = numberWithin(label, f.unit ?? '', f.range, { integer: f.kind === 'integer', required: f.required });
     else if (f.kind === 'money') shape[f.name] = moneyWithin(label, f.range, centsFromText, { required: f.required });

@@ -75,11 +75,11 @@ export function SettingsForm({ settings }: { settings: Rec }) {
     { name: 'email', label: 'E-mail', kind: 'text' },
     { name: 'laborRateCents', label: 'Labour rate', kind: 'money', unit: '$ per hour', range: S.laborRateCents, required: true },
     { name: 'taxRateBp', label: 'Tax rate', kind: 'integer', unit: 'basis points', hint: `100 bp = 1 %; ${S.taxRateBp.min}–${S.taxRateBp.max}`, range: S.taxRateBp, required: true },
-    { name: 'depositPercentBp', label: 'Deposit', kind: 'integer', unit: 'basis points of the total', hint: '2000 bp = 20 %', range: S.depositPercentBp, required: true },
+    { name: 'depositPercentBp', label: 'Deposit', kind: 'integer', unit: 'basis points of the total', hint: '2000 bp = 20 %', range: S.depositPercentBp, required: true, term: 'deposit percent' },
     { name: 'depositMinCents', label: 'Deposit minimum', kind: 'money', unit: '$', range: S.depositCents, required: true },
     { name: 'depositMaxCents', label: 'Deposit maximum', kind: 'money', unit: '$', range: S.depositCents, required: true },
-    { name: 'depositPolicyText', label: 'Deposit policy (shown to the customer before paying)', kind: 'textarea', required: true, maxLength: S.policyMaxLength },
-    { name: 'leadStaleDays', label: 'Flag a new lead nobody has contacted after', kind: 'integer', unit: 'days', hint: `${S.leadStaleDays.min}–${S.leadStaleDays.max}; a note, or moving it past New, counts as contact`, range: S.leadStaleDays },
+    { name: 'depositPolicyText', label: 'Deposit policy (shown to the customer before paying)', kind: 'textarea', required: true, maxLength: S.policyMaxLength, term: 'deposit policy' },
+    { name: 'leadStaleDays', label: 'Flag a new lead nobody has contacted after', kind: 'integer', unit: 'days', hint: `${S.leadStaleDays.min}–${S.leadStaleDays.max}; a note, or moving it past New, counts as contact`, range: S.leadStaleDays, term: 'days before a lead is flagged' },
   ];
   return (
     <div className="flex flex-col gap-3">
