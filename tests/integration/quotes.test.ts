@@ -1,19 +1,19 @@
+import crypto from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import Stripe from 'stripe';
 import request from 'supertest';
+import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
-import { readRuntime } from '../support/runtime';
-import crypto from 'node:crypto';
 import { DEMO, MISSING_ID } from '../support/demo';
-import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
+import { completeCheckout, FIXTURE_CAM_ID, makeDepositPaidQuote, makeDraftQuote, makeSentQuote, startCheckout, waitForQuote } from '../support/quote-fixtures';
+import { readRuntime } from '../support/runtime';
 
-// Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: a draft from
-// seeded build 1 (the towing truck, 5.3 L with active deactivation, 2,000 rpm stall) and a seeded cam,
+// Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: drafted, priced,
 // sent by e-mail, opened from the link, paid through the payments fake, replayed, tampered, refunded.
+// Every test makes the quote it needs (tests/support/quote-fixtures.ts: its own customer, build and quote,
+// sent or paid as asked), so each runs alone (`-t '<its name>'`) and in any order; demo rows are only read.
 const { appUrl, mailUrl, paymentsUrl, env } = readRuntime();
-const BUILD_ID = DEMO.builds.whitlockTowingTruck;
-const CAM_ID = DEMO.cams.bigTruck219; // $439.00, lift 0.595", not deactivation-compatible
 const CAM_SWAP_TRUCK = DEMO.labor.camSwapTruck; // 8.0 h (the seeded install rule for every vehicle but cars)
 const PTV_CHECK = DEMO.labor.ptvCheck; // 1.0 h
 const LABOR_RATE = 13_500; // the demo shop's $135.00 an hour
@@ -23,11 +23,12 @@ const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Numb
 // The answers' shapes are the app's own (GET /api/quotes/[id] answers a QuoteRecord).
 type Quote = QuoteRecord;
 type Line = QuoteLineRecord;
+type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 
 let sequelize: Sequelize;
-let manager: Awaited<ReturnType<typeof signedInAgent>>;
-let counter: Awaited<ReturnType<typeof signedInAgent>>;
-let tech: Awaited<ReturnType<typeof signedInAgent>>;
+let manager: Agent;
+let counter: Agent;
+let tech: Agent;
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
@@ -35,40 +36,30 @@ beforeAll(async () => {
 });
 afterAll(() => disconnectTestDatabase());
 
-async function pollQuote(id: number, until: (q: Quote) => boolean, timeoutMs = 15_000): Promise<Quote> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const q = (await manager.get(`/api/quotes/${id}`)).body as Quote;
-    if (until(q) || Date.now() > deadline) return q;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
+const readQuote = async (id: number) => (await manager.get(`/api/quotes/${id}`)).body as Quote;
 
 function signed(payload: string) {
   return stripe.webhooks.generateTestHeaderString({ payload, secret: env.STRIPE_WEBHOOK_SECRET });
 }
 
-describe('a quote from build 1, sent, paid and refunded', () => {
-  let quote: Quote;
-  let token: string;
-  let sessionId: string;
-  let completedEvent: unknown;
-
+describe('a draft', () => {
   it('makes a draft whose lines follow the need rules, priced in exact cents', async () => {
-    const build = (await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = ?', { replacements: [BUILD_ID], type: QueryTypes.SELECT }))[0];
-    const profile = typeof build.profile === 'string' ? JSON.parse(build.profile) : build.profile;
-    const ranked = await counter.post('/api/advisor/rank').send({ build: profile, camIds: [CAM_ID], includeCurves: false });
+    // The demo's towing truck (5.3 L, active deactivation, installed springs good to 0.500", 2,000 rpm stall),
+    // copied into a build this test owns, and the demo's F9-219 ($439.00, lift 0.595", not deactivation-compatible).
+    const [seeded] = await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = ?', { replacements: [DEMO.builds.whitlockTowingTruck], type: QueryTypes.SELECT });
+    const profile = typeof seeded.profile === 'string' ? JSON.parse(seeded.profile) : seeded.profile;
+    expect(FIXTURE_CAM_ID).toBe(DEMO.cams.bigTruck219);
+    const ranked = await counter.post('/api/advisor/rank').send({ build: profile, camIds: [FIXTURE_CAM_ID], includeCurves: false });
     expect(ranked.status).toBe(200);
-    const needed = ranked.body.rankings[0].neededItems as { type: string; partId: number | null; laborOperationId: number | null; priceCents: number; part?: { sku: string } | null; laborOperation?: { code: string } | null }[];
+    const needed = ranked.body.rankings[0].neededItems as { partId: number | null; laborOperationId: number | null; priceCents: number; part?: { sku: string } | null; laborOperation?: { code: string } | null }[];
 
-    const res = await counter.post('/api/quotes').send({ buildId: BUILD_ID, camId: CAM_ID, extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }] });
-    expect(res.status).toBe(201);
-    quote = res.body;
+    const draft = await makeDraftQuote(counter, 'Need rules', { profile, extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }] });
+    const quote = await readQuote(draft.id);
     expect(quote.status).toBe('draft');
     expect(quote.number).toMatch(/^Q-\d{4}-\d{4}$/);
 
     // The cam first, at its catalogue price.
-    expect(quote.lines[0]).toMatchObject({ kind: 'cam', camId: CAM_ID, quantity: 1, unitPriceCents: 43_900, totalCents: 43_900 });
+    expect(quote.lines[0]).toMatchObject({ kind: 'cam', camId: FIXTURE_CAM_ID, quantity: 1, unitPriceCents: 43_900, totalCents: 43_900 });
     // Then exactly what the rules add, in the rules' order and at the advisor's prices.
     const ruleLines = quote.lines.slice(1, 1 + needed.length);
     expect(ruleLines.map((l) => [l.partId, l.laborOperationId, l.totalCents])).toEqual(needed.map((n) => [n.partId, n.laborOperationId, n.priceCents]));
@@ -96,40 +87,44 @@ describe('a quote from build 1, sent, paid and refunded', () => {
   });
 
   it('numbers quotes uniquely, counting up', async () => {
-    const other = await manager.post('/api/quotes').send({ buildId: DEMO.builds.okaforStreetTruck, camId: DEMO.cams.truckTorque212 });
-    expect(other.status).toBe(201);
+    const first = await makeDraftQuote(counter, 'Numbering first');
+    const second = await makeDraftQuote(manager, 'Numbering second');
     const seq = (n: string) => Number(n.split('-')[2]);
-    expect(other.body.number).not.toBe(quote.number);
-    expect(seq(other.body.number)).toBe(seq(quote.number) + 1);
+    expect(second.number).not.toBe(first.number);
+    expect(seq(second.number)).toBe(seq(first.number) + 1);
   });
 
   it('shows costs and margins to counter staff, never to technicians', async () => {
-    const seen = (await counter.get(`/api/quotes/${quote.id}`)).body as Quote;
+    const draft = await makeDraftQuote(counter, 'Costs');
+    const seen = (await counter.get(`/api/quotes/${draft.id}`)).body as Quote;
     expect(seen.costCents).toBeGreaterThan(0);
-    expect(seen.lines[0].unitCostCents).toBe(27_218); // the seeded cost of a $439 cam: round(439 × 62)
-    const techView = await tech.get(`/api/quotes/${quote.id}`);
+    expect(seen.lines[0].unitCostCents).toBe(27_218); // the seeded cost of the $439 cam: round(439 × 62)
+    const techView = await tech.get(`/api/quotes/${draft.id}`);
     expect(techView.status).toBe(200);
     expect(techView.body.costCents).toBeUndefined();
     expect(techView.body.marginCents).toBeUndefined();
     expect(techView.body.lines.every((l: Line) => !('unitCostCents' in l))).toBe(true);
-    expect((await tech.patch(`/api/quotes/${quote.id}`).send({ version: quote.version })).status).toBe(403);
-    expect((await tech.post('/api/quotes').send({ buildId: BUILD_ID, camId: CAM_ID })).status).toBe(403);
+    expect((await tech.patch(`/api/quotes/${draft.id}`).send({ version: draft.version })).status).toBe(403);
+    expect((await tech.post('/api/quotes').send({ buildId: draft.buildId, camId: FIXTURE_CAM_ID })).status).toBe(403);
     expect((await request(appUrl).get('/api/quotes')).status).toBe(401);
   });
 
   it('rejects bad input by field, and bad references by name', async () => {
-    const bad = await counter.post('/api/quotes').send({ buildId: BUILD_ID, camId: MISSING_ID });
+    const draft = await makeDraftQuote(counter, 'Bad input');
+    const bad = await counter.post('/api/quotes').send({ buildId: draft.buildId, camId: MISSING_ID });
     expect(bad.status).toBe(422);
     expect(bad.body.errors).toEqual([expect.objectContaining({ field: 'camId' })]);
-    const line = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: [{ kind: 'other', description: 'Shop supplies', quantity: 1.005, unitPriceCents: 100 }] });
+    const line = await counter.patch(`/api/quotes/${draft.id}`).send({ version: draft.version, lines: [{ kind: 'other', description: 'Shop supplies', quantity: 1.005, unitPriceCents: 100 }] });
     expect(line.status).toBe(422);
     expect(line.body.errors).toEqual([expect.objectContaining({ field: 'lines.0.quantity' })]);
-    const noPrice = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: [{ kind: 'other', description: 'Shop supplies' }] });
+    const noPrice = await counter.patch(`/api/quotes/${draft.id}`).send({ version: draft.version, lines: [{ kind: 'other', description: 'Shop supplies' }] });
     expect(noPrice.status).toBe(422);
     expect(noPrice.body.errors).toEqual([expect.objectContaining({ field: 'lines.0.unitPriceCents' })]);
+    expect((await readQuote(draft.id)).version).toBe(draft.version);
   });
 
   it('edits lines while a draft, and a stale version gets 409 without overwriting', async () => {
+    const quote = await readQuote((await makeDraftQuote(counter, 'Edit lines')).id);
     const lines = [...quote.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId })),
       { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 }];
     const saved = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
@@ -142,33 +137,35 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     const stale = await manager.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: lines.slice(0, 1) });
     expect(stale.status).toBe(409);
     expect(stale.body.current.lines).toHaveLength(lines.length);
-    quote = saved.body;
   });
+});
 
+describe('sending and the customer’s link', () => {
   it('sends the link by e-mail; only the hash of the token is stored', async () => {
-    const sent = await counter.post(`/api/quotes/${quote.id}/send`);
+    const draft = await makeDraftQuote(counter, 'Send by mail');
+    const sent = await counter.post(`/api/quotes/${draft.id}/send`);
     expect(sent.status).toBe(200);
     expect(sent.body.status).toBe('sent');
-    const messages = (await request(mailUrl).get('/messages').query({ to: 'dana.whitlock@example.com' })).body as { to: string[]; subject: string; text: string; html: string }[];
-    const mail = messages.find((m) => m.subject.includes(quote.number));
-    expect(mail?.to).toEqual(['dana.whitlock@example.com']);
+    const messages = (await request(mailUrl).get('/messages').query({ to: draft.customerEmail })).body as { to: string[]; subject: string; text: string; html: string }[];
+    const mail = messages.find((m) => m.subject.includes(draft.number));
+    expect(mail?.to).toEqual([draft.customerEmail]);
     const match = new RegExp(`${appUrl.replace(/[.:/]/g, '\\$&')}/q/([A-Za-z0-9_-]+)`).exec(mail!.text);
     expect(match).not.toBeNull();
-    token = match![1];
+    const token = match![1];
     expect(token.length).toBeGreaterThanOrEqual(43);
-    const row = (await sequelize.query<{ public_token_hash: string }>('SELECT public_token_hash FROM quotes WHERE id = ?', { replacements: [quote.id], type: QueryTypes.SELECT }))[0];
+    const row = (await sequelize.query<{ public_token_hash: string }>('SELECT public_token_hash FROM quotes WHERE id = ?', { replacements: [draft.id], type: QueryTypes.SELECT }))[0];
     expect(row.public_token_hash).toBe(sha256(token));
-    expect((await counter.patch(`/api/quotes/${quote.id}`).send({ version: sent.body.version, lines: [] })).status).toBe(422);
+    expect((await counter.patch(`/api/quotes/${draft.id}`).send({ version: sent.body.version, lines: [] })).status).toBe(422);
     // A sent quote's lines are locked (it is revised instead); its valid-until day may move (quote-lifecycle.test.ts).
-    const locked = await counter.patch(`/api/quotes/${quote.id}`).send({ version: sent.body.version, lines: [{ kind: 'other', description: 'Shop towel', quantity: 1, unitPriceCents: 100 }] });
+    const locked = await counter.patch(`/api/quotes/${draft.id}`).send({ version: sent.body.version, lines: [{ kind: 'other', description: 'Shop towel', quantity: 1, unitPriceCents: 100 }] });
     expect(locked.status).toBe(409);
-    quote = sent.body;
   });
 
   it('opens the customer page from the link: the deposit, the policy and the cautions, before payment', async () => {
-    const page = await request(appUrl).get(`/q/${token}`);
+    const sent = await makeSentQuote(counter, 'Customer page');
+    const page = await request(appUrl).get(`/q/${sent.token}`);
     expect(page.status).toBe(200);
-    const deposit = (quote.depositCents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
+    const deposit = (sent.depositCents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
     expect(page.text).toContain(deposit);
     expect(page.text).toContain('Your deposit holds the parts and a bay for your job.');
     expect(page.text).toContain('Accept and pay the deposit');
@@ -180,62 +177,69 @@ describe('a quote from build 1, sent, paid and refunded', () => {
   });
 
   it('answers a plain 404 to a wrong token, with no one’s data', async () => {
+    const sent = await makeSentQuote(counter, 'Wrong token', { customerName: 'Fixture Quillon Marsh' });
+    expect((await request(appUrl).get(`/q/${sent.token}`)).text).toContain('Quillon Marsh'); // the right link does show it
+    const { token } = sent;
     for (const wrong of [`${token.slice(0, -1)}${token.endsWith('A') ? 'B' : 'A'}`, 'short', 'demo-quote-nobody-at-all-000']) {
       const page = await request(appUrl).get(`/q/${wrong}`);
       expect(page.status).toBe(404);
-      expect(page.text).not.toContain('Whitlock');
+      expect(page.text).not.toContain('Quillon Marsh');
       expect((await request(appUrl).post(`/api/q/${wrong}/checkout`)).status).toBe(404);
     }
   });
+});
 
+describe('the deposit', () => {
   it('checks out through the SDK for exactly the deposit', async () => {
-    const res = await request(appUrl).post(`/api/q/${token}/checkout`);
+    const sent = await makeSentQuote(counter, 'Checkout');
+    const res = await request(appUrl).post(`/api/q/${sent.token}/checkout`);
     expect(res.status).toBe(303);
     const url = new URL(res.headers.location);
     expect(url.pathname).toMatch(/^\/pay\/cs_/);
-    sessionId = url.pathname.split('/').pop()!;
-    const session = await stripe.checkout.sessions.retrieve(sessionId);
-    expect(session.amount_total).toBe(quote.depositCents);
-    expect(session.metadata?.quoteId).toBe(String(quote.id));
-    expect(session.success_url).toBe(`${appUrl}/q/${token}?paid=1`);
-    expect(session.cancel_url).toBe(`${appUrl}/q/${token}?cancelled=1`);
-    const after = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
+    const session = await stripe.checkout.sessions.retrieve(url.pathname.split('/').pop()!);
+    expect(session.amount_total).toBe(sent.depositCents);
+    expect(session.metadata?.quoteId).toBe(String(sent.id));
+    expect(session.success_url).toBe(`${appUrl}/q/${sent.token}?paid=1`);
+    expect(session.cancel_url).toBe(`${appUrl}/q/${sent.token}?cancelled=1`);
+    const after = await readQuote(sent.id);
     // Starting a checkout is not accepting: the quote stays sent until the deposit is paid.
     expect(after.status).toBe('sent');
-    expect(after.payments).toEqual([expect.objectContaining({ status: 'pending', amountCents: quote.depositCents })]);
+    expect(after.payments).toEqual([expect.objectContaining({ status: 'pending', amountCents: sent.depositCents })]);
   });
 
   it('marks the quote deposit-paid when the payment completes (signed webhook)', async () => {
-    const done = await request(paymentsUrl).post(`/_test/sessions/${sessionId}/complete`);
-    expect(done.status).toBe(200);
-    completedEvent = done.body.event;
-    const paid = await pollQuote(quote.id, (q) => q.status === 'deposit-paid');
+    const sent = await makeSentQuote(counter, 'Webhook paid');
+    await completeCheckout(await startCheckout(sent.token));
+    const paid = await waitForQuote(manager, sent.id, (q) => q.status !== 'sent');
     expect(paid.status).toBe('deposit-paid');
-    expect(paid.payments).toEqual([expect.objectContaining({ status: 'paid', amountCents: quote.depositCents })]);
-    expect(paid.paidCents).toBe(quote.depositCents);
-    const page = await request(appUrl).get(`/q/${token}`);
+    expect(paid.payments).toEqual([expect.objectContaining({ status: 'paid', amountCents: sent.depositCents })]);
+    expect(paid.paidCents).toBe(sent.depositCents);
+    const page = await request(appUrl).get(`/q/${sent.token}`);
     expect(page.text).toContain('Deposit paid');
     expect(page.text).not.toContain('Accept and pay the deposit');
   });
 
   it('applies the same event twice only once', async () => {
-    const body = JSON.stringify(completedEvent);
+    const paid = await makeDepositPaidQuote(counter, 'Replayed event');
+    const body = JSON.stringify(paid.event);
     const again = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', signed(body)).set('content-type', 'application/json').send(body);
     expect(again.status).toBe(200);
     expect(again.body.result).toBe('already');
-    const q = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
+    const q = await readQuote(paid.id);
     expect(q.payments.filter((p) => p.status === 'paid')).toHaveLength(1);
-    expect(q.paidCents).toBe(quote.depositCents);
-    const audits = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?", { replacements: [String(quote.id)], type: QueryTypes.SELECT });
+    expect(q.paidCents).toBe(paid.depositCents);
+    const audits = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?", { replacements: [String(paid.id)], type: QueryTypes.SELECT });
     expect(Number(audits[0].n)).toBe(1);
   });
 
   it('refuses a tampered or unsigned webhook with 400 and changes nothing', async () => {
-    // A forged "paid" for seeded quote 1 (sent, unpaid): signed, then altered after signing.
-    const forged = JSON.parse(JSON.stringify(completedEvent));
+    // A real event to copy, and a sent, unpaid quote to forge a "paid" for: signed, then altered after signing.
+    const template = (await makeDepositPaidQuote(counter, 'Event template')).event;
+    const target = await makeSentQuote(counter, 'Forgery target');
+    const forged = JSON.parse(JSON.stringify(template));
     forged.id = 'evt_forged';
     forged.data.object.id = 'cs_forged_session';
-    forged.data.object.metadata = { quoteId: String(DEMO.quotes.whitlockSent) };
+    forged.data.object.metadata = { quoteId: String(target.id) };
     const original = JSON.stringify(forged);
     const header = signed(original);
     const tampered = original.replace('"cs_forged_session"', '"cs_forged_sessioN"');
@@ -245,44 +249,47 @@ describe('a quote from build 1, sent, paid and refunded', () => {
     expect(unsigned.status).toBe(400);
     const wrongSecret = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', stripe.webhooks.generateTestHeaderString({ payload: original, secret: 'whsec_someone_else' })).set('content-type', 'application/json').send(original);
     expect(wrongSecret.status).toBe(400);
-    const seeded = (await manager.get(`/api/quotes/${DEMO.quotes.whitlockSent}`)).body as Quote;
-    expect(seeded.status).toBe('sent');
-    expect(seeded.payments).toEqual([]);
+    const untouched = await readQuote(target.id);
+    expect(untouched.status).toBe('sent');
+    expect(untouched.payments).toEqual([]);
     const rows = await sequelize.query('SELECT id FROM payments WHERE provider_session_id LIKE ?', { replacements: ['cs_forged%'], type: QueryTypes.SELECT });
     expect(rows).toEqual([]);
   });
 
   it('refunds: managers only, never more than was paid, counted once with the webhook', async () => {
-    expect((await counter.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: 100 })).status).toBe(403);
-    const tooMuch = await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: quote.depositCents + 1 });
+    const paid = await makeDepositPaidQuote(counter, 'Refunds');
+    expect((await counter.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: 100 })).status).toBe(403);
+    const tooMuch = await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: paid.depositCents + 1 });
     expect(tooMuch.status).toBe(422);
     expect(tooMuch.body.errors).toEqual([expect.objectContaining({ field: 'amountCents' })]);
-    const part = await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: 5_000, reason: 'customer dropped the converter' });
+    const part = await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: 5_000, reason: 'customer dropped the converter' });
     expect(part.status).toBe(200);
     expect(part.body.refundedCents).toBe(5_000);
     expect(part.body.payments[0].status).toBe('partially-refunded');
-    // Let the fake's charge.refunded reach the app, then check it did not count the refund again.
+    // Let the fake's charge.refunded for this payment reach the app, then check it did not count the refund again.
+    const intent = paid.quote.payments[0].providerPaymentId;
+    expect(intent).toMatch(/^pi_/);
     const deadline = Date.now() + 10_000;
     for (;;) {
       const events = (await request(paymentsUrl).get('/_test/events')).body.data as { event: { type: string; data: { object: { payment_intent?: string } } }; delivery: { status: string } }[];
-      const refundedEvent = events.find((e) => e.event.type === 'charge.refunded');
+      const refundedEvent = events.find((e) => e.event.type === 'charge.refunded' && e.event.data.object.payment_intent === intent);
       if ((refundedEvent && refundedEvent.delivery.status !== 'pending') || Date.now() > deadline) {
         expect(refundedEvent?.delivery.status).toBe('delivered');
         break;
       }
       await new Promise((r) => setTimeout(r, 200));
     }
-    const after = (await manager.get(`/api/quotes/${quote.id}`)).body as Quote;
+    const after = await readQuote(paid.id);
     expect(after.refundedCents).toBe(5_000);
-    const rest = quote.depositCents - 5_000;
-    expect((await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: rest + 1 })).status).toBe(422);
+    const rest = paid.depositCents - 5_000;
+    expect((await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: rest + 1 })).status).toBe(422);
   });
 });
 
 describe('staff pages', () => {
   it('lists quotes with their state in words', async () => {
-    // Found by search and by state, not on the first page: earlier tests add quotes that push the demo
-    // ones off page one (the list pages by last change), so the test must not depend on their order.
+    // Found by search and by state, not on the first page: other tests' quotes push the demo ones off
+    // page one (the list pages by last change), so the test must not depend on their order.
     const paid = await manager.get('/quotes?q=Q-2026-0102');
     expect(paid.status).toBe(200);
     expect(paid.text).toContain('Q-2026-0102');

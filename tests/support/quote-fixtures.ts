@@ -1,5 +1,7 @@
 import crypto from 'node:crypto';
+import type Stripe from 'stripe';
 import request from 'supertest';
+import type { QuoteRecord } from '@/lib/quotes/types';
 import { readRuntime } from './runtime';
 import { DEMO } from './demo';
 
@@ -25,9 +27,10 @@ export function truckProfile() {
 
 export const FIXTURE_CAM_ID = DEMO.cams.bigTruck219; // a seeded truck cam the demo's rules price for this build
 
-export async function makeDraftQuote(staff: Agent, label: string, options: { validUntil?: string; extraLines?: unknown[]; customerName?: string } = {}): Promise<FixtureQuote> {
+/** A draft on a build of its own: `profile` (default truckProfile()) and the fixture cam, priced by the shop's rules. */
+export async function makeDraftQuote(staff: Agent, label: string, options: { validUntil?: string; extraLines?: unknown[]; customerName?: string; profile?: object } = {}): Promise<FixtureQuote> {
   const customerEmail = `${label.toLowerCase().replace(/[^a-z0-9]+/g, '-')}-${crypto.randomBytes(4).toString('hex')}@example.com`;
-  const build = await staff.post('/api/builds').send({ customer: { name: options.customerName ?? `Fixture ${label}`, email: customerEmail }, vehicleLabel: `Fixture truck (${label})`, profile: truckProfile() });
+  const build = await staff.post('/api/builds').send({ customer: { name: options.customerName ?? `Fixture ${label}`, email: customerEmail }, vehicleLabel: `Fixture truck (${label})`, profile: options.profile ?? truckProfile() });
   if (build.status !== 201) throw new Error(`build fixture answered ${build.status}: ${JSON.stringify(build.body)}`);
   const made = await staff.post('/api/quotes').send({ buildId: build.body.id, camId: FIXTURE_CAM_ID, ...(options.extraLines ? { extraLines: options.extraLines } : {}) });
   if (made.status !== 201) throw new Error(`quote fixture answered ${made.status}: ${JSON.stringify(made.body)}`);
@@ -55,13 +58,41 @@ export async function makeSentQuote(staff: Agent, label: string, options: { vali
 
 /** Pays a sent quote's deposit through the payments fake and waits until the webhook has recorded it. */
 export async function payDeposit(staff: Agent, quote: FixtureQuote & { token: string }): Promise<void> {
-  const { appUrl, paymentsUrl } = readRuntime();
-  const started = await request(appUrl).post(`/api/q/${quote.token}/checkout`).set('Accept', 'application/json');
+  await completeCheckout(await startCheckout(quote.token));
+  await waitForQuote(staff, quote.id, (q) => q.status === 'deposit-paid');
+}
+
+/** Starts the deposit checkout from the customer's private link, as the pay button does; the session's id. */
+export async function startCheckout(token: string): Promise<string> {
+  const { appUrl } = readRuntime();
+  const started = await request(appUrl).post(`/api/q/${token}/checkout`).set('Accept', 'application/json');
   if (started.status !== 200) throw new Error(`checkout fixture answered ${started.status}: ${JSON.stringify(started.body)}`);
-  await request(paymentsUrl).post(`/_test/sessions/${new URL(started.body.url).pathname.split('/').pop()}/complete`).expect(200);
-  const deadline = Date.now() + 15_000;
-  while ((await staff.get(`/api/quotes/${quote.id}`)).body.status !== 'deposit-paid') {
-    if (Date.now() > deadline) throw new Error(`quote ${quote.number} was not marked paid`);
+  return new URL(started.body.url).pathname.split('/').pop()!;
+}
+
+/** The customer pays on the payments fake's page; returns the signed event it sent to the app's webhook. */
+export async function completeCheckout(sessionId: string): Promise<Stripe.Event> {
+  const done = await request(readRuntime().paymentsUrl).post(`/_test/sessions/${sessionId}/complete`);
+  if (done.status !== 200) throw new Error(`payment fixture answered ${done.status}: ${JSON.stringify(done.body)}`);
+  return done.body.event as Stripe.Event;
+}
+
+/** Reads the quote until `until` holds; throws after `timeoutMs` (webhooks arrive after the payment). */
+export async function waitForQuote(staff: Agent, id: number, until: (quote: QuoteRecord) => boolean, timeoutMs = 15_000): Promise<QuoteRecord> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const quote = (await staff.get(`/api/quotes/${id}`)).body as QuoteRecord;
+    if (until(quote)) return quote;
+    if (Date.now() > deadline) throw new Error(`quote ${quote.number ?? id} never reached the expected state (now ${quote.status})`);
     await new Promise((r) => setTimeout(r, 150));
   }
+}
+
+/** A sent quote whose deposit the customer has paid, with the checkout session and the webhook event that recorded it. */
+export async function makeDepositPaidQuote(staff: Agent, label: string, options: { customerName?: string } = {}) {
+  const sent = await makeSentQuote(staff, label, options);
+  const sessionId = await startCheckout(sent.token);
+  const event = await completeCheckout(sessionId);
+  const quote = await waitForQuote(staff, sent.id, (q) => q.status === 'deposit-paid');
+  return { ...sent, quote, sessionId, event };
 }
