@@ -10,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import type { StaffRole } from '@/lib/auth/guard';
+import { roleCan } from '@/lib/auth/policy';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { BalancePanel } from './balance-panel';
@@ -39,7 +40,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
   const [editing, setEditing] = useState<EditLine[] | null>(null);
   const [busy, setBusy] = useState(false);
   const [notice, setNotice] = useState<Notice>(null);
-  const canWrite = role === 'manager' || role === 'counter';
+  const canWrite = roleCan(role, 'quotes.write');
   const isDraft = quote.status === 'draft';
 
   async function run(label: string, call: () => Promise<{ status: number; body: QuoteRecord & { message?: string; errors?: { field: string; message: string }[]; current?: unknown } }>, okTitle: string) {
@@ -188,7 +189,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           </p>
           <PaymentList payments={quote.payments} receiptHref={(id) => `${url}/payments/${id}/receipt`} />
           {quote.status === 'closed' && quote.balanceDueCents === 0 ? <p className="mt-2 text-sm"><a className="underline" href={`${url}/invoice`}>Final invoice (PDF)</a></p> : null}
-          {role === 'manager' && paid ? <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} /> : null}
+          {roleCan(role, 'quotes.refund') && paid ? <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} /> : null}
         </section>
       </div>
       {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} compact /> : null}

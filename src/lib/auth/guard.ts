@@ -10,7 +10,7 @@ import { currentSession } from './session';
 
 // The session checks. Route handlers get theirs from the route kit (lib/http/route.ts); server
 // components call requireAccessForPage(permission). There are no server actions: every change goes
-// through a route handler. requireRole / requireRoleForPage are the older, role-list forms.
+// through a route handler. requireRole is the older, role-list form a few handlers still use.
 
 export type { SessionUser, StaffRole } from './roles';
 export { ALL_STAFF } from './roles';
@@ -36,20 +36,6 @@ export async function requireRole(request: Request, ...roles: StaffRole[]): Prom
   const user = await currentUser();
   if (!user) return errorResponse(401, 'Sign in to continue.');
   if (!roleAllows(user, roles)) return errorResponse(403, `Your role (${user.role}) does not allow this.`);
-  return user;
-}
-
-/**
- * For server components and server actions. Signed out: redirects to /sign-in?next=<this page>.
- * Wrong role: redirects to the staff home, which says the page is not open to that role.
- */
-export async function requireRoleForPage(...roles: StaffRole[]): Promise<SessionUser> {
-  const user = await currentUser();
-  const path = (await headers()).get(PATH_HEADER);
-  if (!user) redirect(signInUrl(path));
-  if (!roleAllows(user, roles)) {
-    redirect(`/dashboard?denied=${encodeURIComponent(safeNextPath(path, '/'))}`);
-  }
   return user;
 }
 

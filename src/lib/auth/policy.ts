@@ -25,6 +25,8 @@ export const POLICY = {
   'quotes.refund': ['manager'],
   'reports.read': ['manager'],
   'settings.manage': ['manager'],
+  // Signed in as staff at all: the staff layout and the staff home. Each page narrows it with its own row.
+  'staff-area.open': ['manager', 'counter', 'tech'],
   'staff.manage': ['manager'],
 } as const satisfies Record<string, readonly StaffRole[]>;
 

@@ -1,12 +1,12 @@
 import type { Metadata } from 'next';
 import { ChangePasswordForm } from '@/components/auth/change-password-form';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { ROLE_NAMES } from '@/lib/auth/staff-nav';
 
 export const metadata: Metadata = { title: 'Your account' };
 
 export default async function AccountPage() {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('account.self');
   return (
     <div className="flex flex-col gap-6">
       <header>

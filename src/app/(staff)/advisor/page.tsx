@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { z } from 'zod';
 import { ShortlistWorkbench } from '@/components/advisor/shortlist-workbench';
 import { PREDICTION_NOTICE } from '@/lib/advisor';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getBuildSummary, listBuildSummaries } from '@/lib/db/queries/builds';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 
@@ -14,7 +14,7 @@ export const metadata: Metadata = { title: 'Cam shortlist' };
 const BuildParam = z.string().regex(/^\d{1,10}$/).transform(Number).pipe(z.number().int().positive().max(Number.MAX_SAFE_INTEGER));
 
 export default async function AdvisorPage({ searchParams }: { searchParams: Promise<{ build?: string | string[] }> }) {
-  await requireRoleForPage('manager', 'counter', 'tech');
+  await requireAccessForPage('advisor.use');
   const raw = (await searchParams).build;
   const given = Array.isArray(raw) ? raw[0] : raw;
   const parsed = given === undefined ? null : BuildParam.safeParse(given.trim());

@@ -1,23 +1,20 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 
 export const metadata: Metadata = { title: 'Catalogue' };
 
 export default async function CataloguePage() {
-  const user = await requireRoleForPage();
-  const manager = user.role === 'manager';
+  const user = await requireAccessForPage('catalogue.read');
+  const manager = can(user, 'catalogue.write');
   const links = [
     { href: '/catalogue/cams', label: 'Cams', text: 'Every grind the shop sells, with its card, valve events and spec sheets.' },
     { href: '/catalogue/parts', label: 'Parts', text: 'Springs, pushrods, lifters, delete kits, timing sets, gaskets, converters and tunes.' },
     { href: '/catalogue/labor', label: 'Labour', text: 'Operations, their hours and the engines they apply to.' },
     { href: '/catalogue/rules', label: 'What a cam needs', text: 'The rules that add parts and labour to a cam swap.' },
-    ...(manager
-      ? [
-          { href: '/catalogue/cams/import', label: 'Import a spreadsheet', text: 'Bring in a supplier’s cam cards from CSV, with a preview first.' },
-          { href: '/catalogue/settings', label: 'Prices and deposit', text: 'Labour rate, tax rate and the deposit policy.' },
-        ]
-      : []),
+    ...(manager ? [{ href: '/catalogue/cams/import', label: 'Import a spreadsheet', text: 'Bring in a supplier’s cam cards from CSV, with a preview first.' }] : []),
+    ...(can(user, 'settings.manage') ? [{ href: '/catalogue/settings', label: 'Prices and deposit', text: 'Labour rate, tax rate and the deposit policy.' }] : []),
   ];
   return (
     <div className="flex flex-col gap-6">

@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { Banner } from '@/components/ui/banner';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 import { ROLE_NAMES, linksFor } from '@/lib/auth/staff-nav';
 import { countStaleLeads } from '@/lib/db/queries/leads';
 import { getShopSettings } from '@/lib/db/queries/settings';
@@ -10,12 +11,12 @@ import { staleCutoff } from '@/lib/leads/stale';
 export const metadata: Metadata = { title: 'Staff home' };
 
 export default async function DashboardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('staff-area.open');
   const params = await searchParams;
   const denied = typeof params.denied === 'string' ? params.denied : null;
   const links = linksFor(user.role).filter((link) => link.href !== '/dashboard');
-  // Leads that have gone cold, for the people who follow leads up (technicians never see leads).
-  const limitDays = user.role === 'tech' ? null : ((await getShopSettings())?.leadStaleDays ?? 2);
+  // Leads that have gone cold, for the people who follow leads up.
+  const limitDays = !can(user, 'leads.follow-up') ? null : ((await getShopSettings())?.leadStaleDays ?? 2);
   const staleLeads = limitDays === null ? 0 : await countStaleLeads(staleCutoff(new Date(), limitDays));
   return (
     <div className="flex flex-col gap-6">

@@ -4,7 +4,8 @@ import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { StateTag } from '@/components/ui/state-tag';
 import { tableClass, tdClass, thClass } from '@/components/ui/table';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 import { listBuilds } from '@/lib/db/queries/builds';
 import { BuildListQuerySchema } from '@/lib/schemas/build';
 
@@ -13,13 +14,13 @@ export const metadata: Metadata = { title: 'Interviews' };
 const USE_WORDS: Record<string, string> = { daily: 'Daily', towing: 'Towing', street: 'Street', strip: 'Strip' };
 
 export default async function InterviewsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const user = await requireRoleForPage('manager', 'counter', 'tech');
+  const user = await requireAccessForPage('builds.read');
   const raw = await searchParams;
   const one = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
   const parsed = BuildListQuerySchema.safeParse({ q: one(raw.q), page: one(raw.page), pageSize: '25' });
   const query = parsed.success ? parsed.data : BuildListQuerySchema.parse({});
   const { items, total } = await listBuilds(query);
-  const writes = user.role !== 'tech';
+  const writes = can(user, 'builds.write');
   const pages = Math.max(1, Math.ceil(total / query.pageSize));
   const pageHref = (page: number) => `/interviews?${new URLSearchParams({ ...(query.q ? { q: query.q } : {}), page: String(page) })}`;
 

@@ -4,7 +4,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { BoardList } from '@/components/jobs/board-list';
 import { BoardWeek } from '@/components/jobs/board-week';
 import { dayLabel } from '@/components/jobs/job-state-tag';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { listBoard, shopToday } from '@/lib/db/queries/job-board';
 import { addDays, mondayOf, weekDays } from '@/lib/jobs/week';
 import { BoardPageQuerySchema } from '@/lib/schemas/job';
@@ -16,7 +16,7 @@ const tab = (active: boolean) =>
   `rounded px-2.5 py-1 text-sm font-semibold ${active ? 'bg-ink text-paper-raised' : 'bg-paper-raised text-ink ring-1 ring-steel-300 hover:ring-gauge-500'}`;
 
 export default async function JobsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  await requireRoleForPage('tech', 'manager');
+  await requireAccessForPage('jobs.read');
   const q = BoardPageQuerySchema.parse(await searchParams);
   const today = shopToday();
   const monday = mondayOf(q.week ?? today);

@@ -8,7 +8,7 @@ import { LeadStatusTag, LEAD_STATUS_WORDS } from '@/components/leads/lead-status
 import { LeadNotes } from '@/components/leads/lead-notes';
 import { LeadStatusForm } from '@/components/leads/lead-status-form';
 import { ShortlistCards } from '@/components/leads/shortlist-view';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { leadListPage } from '@/lib/leads/lead-list';
 import { answersInWords } from '@/lib/leads/questions';
 import { LEAD_STATUSES, type LeadStatus } from '@/lib/schemas/lead';
@@ -18,7 +18,7 @@ export const metadata: Metadata = { title: 'Leads' };
 const PAGE_SIZE = 20;
 
 export default async function LeadsPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  await requireRoleForPage('manager', 'counter');
+  await requireAccessForPage('leads.follow-up');
   const raw = await searchParams;
   const status = (LEAD_STATUSES as readonly string[]).includes(raw.status ?? '') ? (raw.status as LeadStatus) : undefined;
   const page = Math.max(1, Math.trunc(Number(raw.page)) || 1);

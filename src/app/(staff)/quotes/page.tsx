@@ -5,7 +5,7 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { tableClass, tdClass, thClass } from '@/components/ui/table';
 import { PaymentStatusTag, QuoteStatusTag, quoteStatusWord } from '@/components/quotes/status';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { QUOTE_STATUSES, type QuoteStatus } from '@/lib/db/models/quote';
 import { listQuotes } from '@/lib/db/queries/quote-list';
 import { QuoteListQuerySchema } from '@/lib/schemas/quote-list';
@@ -22,7 +22,7 @@ function hrefOf(v: { status?: QuoteStatus; q?: string; page?: number }): string 
 }
 
 export default async function QuotesPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  await requireRoleForPage('manager', 'counter', 'tech');
+  await requireAccessForPage('quotes.read');
   const raw = await searchParams;
   const parsed = QuoteListQuerySchema.safeParse({ status: raw.status, q: raw.q, page: raw.page });
   // A hand-edited address with a bad value shows the first page of everything rather than an error page.

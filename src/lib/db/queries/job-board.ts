@@ -1,4 +1,5 @@
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
+import { rolesWith } from '@/lib/auth/policy';
 import { readingsOf, signOffWarnings, type SignOffReadings, type SignOffWarning } from '@/lib/jobs/sign-off-limits';
 import { nextStates, type BoardState, type JobState } from '@/lib/jobs/states';
 import type { JobListQuery } from '@/lib/schemas/job';
@@ -153,9 +154,9 @@ export async function listBoard(query: JobListQuery): Promise<{ items: BoardJob[
   return { items: quotes.map((q) => viewOf(q, today, (q.job && signOffs.get(q.job.id)) ?? null)), total: count, page: query.page, pageSize: query.pageSize, today };
 }
 
-/** Who a job can be given to: active technicians and managers. */
+/** Who a job can be given to: active staff who may record job work (jobs.record: technicians and managers). */
 export async function listAssignableStaff(transaction?: Transaction): Promise<{ id: number; name: string; role: string }[]> {
   db();
-  const users = await User.findAll({ where: { active: true, role: { [Op.in]: ['tech', 'manager'] } }, attributes: ['id', 'name', 'role'], order: [['name', 'ASC'], ['id', 'ASC']], transaction });
+  const users = await User.findAll({ where: { active: true, role: { [Op.in]: [...rolesWith('jobs.record')] } }, attributes: ['id', 'name', 'role'], order: [['name', 'ASC'], ['id', 'ASC']], transaction });
   return users.map((u) => ({ id: u.id, name: u.name, role: u.role }));
 }

@@ -3,15 +3,16 @@ import { Suspense } from 'react';
 import { CamList } from '@/components/catalogue/cam-list';
 import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 import { listSuppliers } from '@/lib/db/queries/cams';
 
 export const metadata: Metadata = { title: 'Cams' };
 
 export default async function CamsPage() {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('catalogue.read');
   const suppliers = await listSuppliers();
-  const manager = user.role === 'manager';
+  const manager = can(user, 'catalogue.write');
   return (
     <div className="flex flex-col gap-4">
       <PageHeader

@@ -6,7 +6,8 @@ import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { StateTag } from '@/components/ui/state-tag';
 import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 import { listLabor } from '@/lib/db/queries/labor';
 import { getShopSettingsRecord } from '@/lib/db/queries/settings';
 import { LaborListQuerySchema } from '@/lib/schemas/labor';
@@ -14,10 +15,10 @@ import { LaborListQuerySchema } from '@/lib/schemas/labor';
 export const metadata: Metadata = { title: 'Labour' };
 
 export default async function LaborPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('catalogue.read');
   const raw = await searchParams;
   const [{ items, total }, settings] = await Promise.all([listLabor(LaborListQuerySchema.parse({ pageSize: '200' })), getShopSettingsRecord()]);
-  const manager = user.role === 'manager';
+  const manager = can(user, 'catalogue.write');
   const rate = settings?.laborRateCents ?? 0;
   return (
     <div className="flex flex-col gap-4">

@@ -6,20 +6,22 @@ import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { StateTag } from '@/components/ui/state-tag';
 import { tableClass, tdClass, thClass } from '@/components/ui/table';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { canSeeCosts } from '@/lib/auth/costs';
+import { can } from '@/lib/auth/policy';
 import { listParts } from '@/lib/db/queries/parts';
 import { PART_CATEGORY_LIST, PartListQuerySchema } from '@/lib/schemas/part';
 
 export const metadata: Metadata = { title: 'Parts' };
 
 export default async function PartsPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('catalogue.read');
   const raw = await searchParams;
   const parsed = PartListQuerySchema.safeParse({ category: raw.category || undefined, q: raw.q || undefined, pageSize: '200', sort: raw.sort || undefined, dir: raw.dir || undefined });
   const query = parsed.success ? parsed.data : PartListQuerySchema.parse({ pageSize: '200' });
   const { items, total } = await listParts(query);
-  const manager = user.role === 'manager';
-  const costs = user.role !== 'tech';
+  const manager = can(user, 'catalogue.write');
+  const costs = canSeeCosts(user);
   const link = (changes: Record<string, string | undefined>) => {
     const next = new URLSearchParams(Object.entries({ ...raw, ...changes }).filter(([, v]) => v) as [string, string][]);
     next.delete('saved');

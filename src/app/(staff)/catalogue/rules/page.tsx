@@ -4,7 +4,8 @@ import { Banner } from '@/components/ui/banner';
 import { ButtonLink } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
 import { StateTag } from '@/components/ui/state-tag';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/policy';
 import { listRules } from '@/lib/db/queries/rules';
 import { unmappedKinds } from '@/lib/catalogue/need-rules';
 import { VEHICLE_CLASSES } from '@/lib/schemas/build-profile';
@@ -13,10 +14,10 @@ import { NEED_RULE_KIND_TEXT, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need
 export const metadata: Metadata = { title: 'What a cam needs' };
 
 export default async function RulesPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('catalogue.read');
   const raw = await searchParams;
   const rules = await listRules();
-  const manager = user.role === 'manager';
+  const manager = can(user, 'catalogue.write');
   const active = rules.filter((r) => r.active);
   // Installing and tuning are part of every job: say plainly which vehicle classes would be quoted without them.
   const gaps = VEHICLE_CLASSES.flatMap((vc) =>

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { PageHeader } from '@/components/ui/page-header';
 import { InterviewForm } from '@/components/interviews/interview-form';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { listBaselineCards } from '@/lib/db/queries/builds';
 import { getLead } from '@/lib/db/queries/leads';
 import { interviewValuesFromLead } from '@/lib/leads/prefill';
@@ -9,7 +9,7 @@ import { interviewValuesFromLead } from '@/lib/leads/prefill';
 export const metadata: Metadata = { title: 'New interview' };
 
 export default async function NewInterviewPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
-  await requireRoleForPage('manager', 'counter');
+  await requireAccessForPage('builds.write');
   const cards = await listBaselineCards();
   // ?lead=<id>: open with the questionnaire's answers (leads page, "Start an interview").
   const leadId = Number((await searchParams).lead);

@@ -10,7 +10,7 @@ import { SignOffForm } from '@/components/jobs/sign-off-form';
 import { SignOffSheet } from '@/components/jobs/sign-off-sheet';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
 import { valveEvents } from '@/lib/advisor/valve-events';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getBoardJob, listAssignableStaff } from '@/lib/db/queries/job-board';
 import { getJobSheet } from '@/lib/db/queries/jobs';
 import { words } from '@/lib/jobs/build-words';
@@ -33,7 +33,7 @@ const inch = (n: number, digits = 3) => `${n.toFixed(digits)} in`;
 const KIND_WORDS: Record<string, string> = { cam: 'Cam', part: 'Part', tune: 'Tune', labor: 'Labour', other: 'Other' };
 
 export default async function JobPage({ params }: { params: Promise<{ id: string }> }) {
-  await requireRoleForPage('tech', 'manager');
+  await requireAccessForPage('jobs.read');
   const { id } = await params;
   if (!/^\d{1,10}$/.test(id)) notFound();
   const job = await getJobSheet(Number(id));

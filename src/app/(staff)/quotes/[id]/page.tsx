@@ -1,13 +1,13 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { QuoteWorkbench } from '@/components/quotes/quote-workbench';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getQuote, presentQuote } from '@/lib/db/queries/quotes';
 
 export const metadata: Metadata = { title: 'Quote' };
 
 export default async function QuotePage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requireRoleForPage('manager', 'counter', 'tech');
+  const user = await requireAccessForPage('quotes.read');
   const { id } = await params;
   if (!/^\d{1,10}$/.test(id)) notFound();
   const quote = await getQuote(Number(id));

@@ -8,7 +8,9 @@ import { PageHeader } from '@/components/ui/page-header';
 import { StateTag } from '@/components/ui/state-tag';
 import { ValveEventDiagram } from '@/components/catalogue/valve-diagram';
 import { valveEvents } from '@/lib/advisor/valve-events';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
+import { canSeeCosts } from '@/lib/auth/costs';
+import { can } from '@/lib/auth/policy';
 import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import { getCam } from '@/lib/db/queries/cams';
 
@@ -25,13 +27,13 @@ function Spec({ label, value, note }: { label: string; value: React.ReactNode; n
 }
 
 export default async function CamPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
-  const user = await requireRoleForPage();
+  const user = await requireAccessForPage('catalogue.read');
   const { id } = await params;
   const query = await searchParams;
   if (!/^\d{1,10}$/.test(id)) notFound();
   const cam = await getCam(Number(id));
   if (!cam) notFound();
-  const manager = user.role === 'manager';
+  const manager = can(user, 'catalogue.write');
   const card = camCardOf(cam);
   const events = valveEvents(card);
   const margin = cam.priceCents > 0 ? Math.round(((cam.priceCents - cam.costCents) / cam.priceCents) * 100) : null;
@@ -61,7 +63,7 @@ export default async function CamPage({ params, searchParams }: { params: Promis
             <Spec label="Installed intake centerline" value={`${deg(cam.intakeCenterline)} ATDC`} />
             <Spec label="Spring max lift" value={inches(cam.springMaxLiftIn)} />
             <Spec label="Price" value={formatMoney(cam.priceCents)} />
-            {user.role !== 'tech' ? <Spec label="Cost · margin" value={`${formatMoney(cam.costCents)} · ${margin === null ? '—' : `${margin} %`}`} /> : null}
+            {canSeeCosts(user) ? <Spec label="Cost · margin" value={`${formatMoney(cam.costCents)} · ${margin === null ? '—' : `${margin} %`}`} /> : null}
             <Spec label="Stock on hand" value={`${cam.stockOnHand} units`} />
             <Spec label="Version" value={cam.version} note={`last saved ${cam.updatedAt.slice(0, 16).replace('T', ' ')} UTC`} />
           </dl>

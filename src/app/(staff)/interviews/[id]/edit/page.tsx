@@ -2,13 +2,13 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { PageHeader } from '@/components/ui/page-header';
 import { InterviewForm } from '@/components/interviews/interview-form';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getBuild, listBaselineCards } from '@/lib/db/queries/builds';
 
 export const metadata: Metadata = { title: 'Edit build' };
 
 export default async function EditBuildPage({ params }: { params: Promise<{ id: string }> }) {
-  await requireRoleForPage('manager', 'counter');
+  await requireAccessForPage('builds.write');
   const { id } = await params;
   if (!/^\d{1,10}$/.test(id)) notFound();
   const [build, cards] = await Promise.all([getBuild(Number(id)), listBaselineCards()]);

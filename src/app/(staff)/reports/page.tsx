@@ -1,14 +1,14 @@
 import type { Metadata } from 'next';
 import { PageHeader } from '@/components/ui/page-header';
 import { ReportPanel } from '@/components/reports/report-panel';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 
 export const metadata: Metadata = { title: 'Numbers' };
 
 const one = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v) || undefined;
 
 export default async function ReportsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('reports.read');
   const raw = await searchParams;
   const from = one(raw.from);
   const to = one(raw.to);

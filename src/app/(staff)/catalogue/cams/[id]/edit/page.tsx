@@ -3,13 +3,13 @@ import { notFound } from 'next/navigation';
 import { CamForm } from '@/components/catalogue/cam-form';
 import { DeleteButton } from '@/components/catalogue/rule-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getCam, listSuppliers } from '@/lib/db/queries/cams';
 
 export const metadata: Metadata = { title: 'Edit cam' };
 
 export default async function EditCamPage({ params }: { params: Promise<{ id: string }> }) {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   const { id } = await params;
   const cam = /^\d{1,10}$/.test(id) ? await getCam(Number(id)) : null;
   if (!cam) notFound();

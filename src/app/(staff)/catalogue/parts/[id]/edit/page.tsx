@@ -4,14 +4,14 @@ import { Attachments } from '@/components/catalogue/attachments';
 import { PartForm } from '@/components/catalogue/part-labor-settings-forms';
 import { DeleteButton } from '@/components/catalogue/rule-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';
 import { getPart } from '@/lib/db/queries/parts';
 
 export const metadata: Metadata = { title: 'Edit part' };
 
 export default async function EditPartPage({ params }: { params: Promise<{ id: string }> }) {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   const { id } = await params;
   const part = /^\d{1,10}$/.test(id) ? await getPart(Number(id)) : null;
   if (!part) notFound();

@@ -1,13 +1,13 @@
 import type { Metadata } from 'next';
 import { CamForm } from '@/components/catalogue/cam-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';
 
 export const metadata: Metadata = { title: 'Add a cam' };
 
 export default async function NewCamPage() {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   return (
     <div className="flex flex-col gap-4">
       <PageHeader title="Add a cam" lead="Copy the figures from the supplier's cam card; units are shown beside each field." back={{ href: '/catalogue/cams', label: 'Cams' }} />

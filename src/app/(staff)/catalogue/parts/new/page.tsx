@@ -1,13 +1,13 @@
 import type { Metadata } from 'next';
 import { PartForm } from '@/components/catalogue/part-labor-settings-forms';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { listSuppliers } from '@/lib/db/queries/cams';
 
 export const metadata: Metadata = { title: 'Add a part' };
 
 export default async function NewPartPage() {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   return (
     <div className="flex flex-col gap-4">
       <PageHeader title="Add a part" back={{ href: '/catalogue/parts', label: 'Parts' }} />

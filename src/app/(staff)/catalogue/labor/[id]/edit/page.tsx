@@ -4,13 +4,13 @@ import { Attachments } from '@/components/catalogue/attachments';
 import { LaborForm } from '@/components/catalogue/part-labor-settings-forms';
 import { DeleteButton } from '@/components/catalogue/rule-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getLabor } from '@/lib/db/queries/labor';
 
 export const metadata: Metadata = { title: 'Edit labour operation' };
 
 export default async function EditLaborPage({ params }: { params: Promise<{ id: string }> }) {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   const { id } = await params;
   const labor = /^\d{1,10}$/.test(id) ? await getLabor(Number(id)) : null;
   if (!labor) notFound();

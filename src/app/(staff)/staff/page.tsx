@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
 import { StaffManager } from '@/components/auth/staff-manager';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 
 export const metadata: Metadata = { title: 'Staff' };
 
 export default async function StaffPage() {
-  const manager = await requireRoleForPage('manager');
+  const manager = await requireAccessForPage('staff.manage');
   return (
     <div className="flex flex-col gap-6">
       <header>

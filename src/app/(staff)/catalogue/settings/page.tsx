@@ -3,13 +3,13 @@ import { formatMoney, percentFromBp } from '@/lib/format';
 import { SettingsForm } from '@/components/catalogue/part-labor-settings-forms';
 import { Banner } from '@/components/ui/banner';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { getShopSettingsRecord } from '@/lib/db/queries/settings';
 
 export const metadata: Metadata = { title: 'Prices and deposit' };
 
 export default async function SettingsPage() {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('settings.manage');
   const settings = await getShopSettingsRecord();
   return (
     <div className="flex flex-col gap-4">

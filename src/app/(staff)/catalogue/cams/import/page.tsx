@@ -1,13 +1,13 @@
 import type { Metadata } from 'next';
 import { ImportPanel } from '@/components/catalogue/import-panel';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { CAM_CSV_COLUMNS } from '@/lib/catalogue/cam-csv';
 
 export const metadata: Metadata = { title: 'Import cams' };
 
 export default async function ImportCamsPage() {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   return (
     <div className="flex flex-col gap-6">
       <PageHeader

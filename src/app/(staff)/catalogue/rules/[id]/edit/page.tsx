@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { DeleteButton, RuleForm } from '@/components/catalogue/rule-form';
 import { PageHeader } from '@/components/ui/page-header';
-import { requireRoleForPage } from '@/lib/auth/guard';
+import { requireAccessForPage } from '@/lib/auth/guard';
 import { allLabor } from '@/lib/db/queries/labor';
 import { allParts } from '@/lib/db/queries/parts';
 import { getRule } from '@/lib/db/queries/rules';
@@ -10,7 +10,7 @@ import { getRule } from '@/lib/db/queries/rules';
 export const metadata: Metadata = { title: 'Edit rule' };
 
 export default async function EditRulePage({ params }: { params: Promise<{ id: string }> }) {
-  await requireRoleForPage('manager');
+  await requireAccessForPage('catalogue.write');
   const { id } = await params;
   const rule = /^\d{1,10}$/.test(id) ? await getRule(Number(id)) : null;
   if (!rule) notFound();
