@@ -2,6 +2,7 @@ import { unsealData } from 'iron-session';
 import { NextResponse, type NextRequest } from 'next/server';
 import { SESSION_COOKIE, SESSION_TTL_SECONDS, sessionSecret } from '@/lib/auth/config';
 import { PATH_HEADER, signInUrl } from '@/lib/auth/guard-paths';
+import { STAFF_PREFIXES } from '@/lib/auth/staff-nav';
 import { pageContentSecurityPolicy } from '@/lib/http/page-policy';
 
 // Runs before every page, and before any path with a percent-escape. Jobs: refuse a path that is
@@ -9,21 +10,8 @@ import { pageContentSecurityPolicy } from '@/lib/http/page-policy';
 // 500), put the page's CSP on (built at request time: it names the payments host), tell the page its
 // own path (so a guard deep in a server component can send people back after signing in), and send
 // visitors without a readable session cookie away from staff pages early. The real check (session
-// row, active user, role) is requireRoleForPage / requireRole; this is the fast first gate only.
-const STAFF_PREFIXES = [
-  '/dashboard',
-  '/account',
-  '/staff',
-  '/advisor',
-  '/catalogue',
-  '/interviews',
-  '/quotes',
-  '/leads',
-  '/jobs',
-  '/dyno',
-  '/reports',
-  '/settings',
-];
+// row, active user, permission) is requireAccessForPage / the route kit; this is the fast first gate only.
+// The staff prefixes come from the staff navigation (lib/auth/staff-nav.ts, no server-only imports).
 
 function isStaffPath(pathname: string): boolean {
   return STAFF_PREFIXES.some((prefix) => pathname === prefix || pathname.startsWith(`${prefix}/`));
