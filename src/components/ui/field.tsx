@@ -44,6 +44,11 @@ export function describedBy(
   return [unit ? unitId(id) : null, error || hint ? messageId(id) : null].filter(Boolean).join(' ') || undefined;
 }
 
+/** A control's invalid flag and description, the same on every kind of control. */
+function stateOf(id: string, message: { error?: string | null; hint?: React.ReactNode; unit?: string }) {
+  return { 'aria-invalid': message.error ? true : undefined, 'aria-describedby': describedBy(id, message) };
+}
+
 /** The problem (in words, starting "Problem:" on staff screens; read out at once on customer pages) or else the hint. */
 function Message({
   id,
@@ -106,8 +111,7 @@ export function TextControl({ id, label, hint, error, look = 'staff', className,
         id={id}
         type="text"
         {...input}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, { error, hint })}
+        {...stateOf(id, { error, hint })}
         className={LOOKS[look].control(Boolean(error))}
       />
     </Shell>
@@ -135,8 +139,7 @@ export function NumberControl({
           inputMode={decimals ? 'decimal' : 'numeric'}
           autoComplete="off"
           {...input}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy(id, { error, hint, unit })}
+          {...stateOf(id, { error, hint, unit })}
           className={`${LOOKS[look].control(Boolean(error))} spec`}
         />
         {unit ? (
@@ -163,13 +166,7 @@ export function SelectControl({
 }: Common & Omit<React.SelectHTMLAttributes<HTMLSelectElement>, 'id' | 'className'> & { options: Options }) {
   return (
     <Shell id={id} label={label} hint={hint} error={error} look={look} className={className}>
-      <select
-        id={id}
-        {...select}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, { error, hint })}
-        className={LOOKS[look].control(Boolean(error))}
-      >
+      <select id={id} {...select} {...stateOf(id, { error, hint })} className={LOOKS[look].control(Boolean(error))}>
         {options.map(([value, text]) => (
           <option key={value} value={value}>
             {text}
@@ -195,8 +192,7 @@ export function TextAreaControl({
         id={id}
         rows={3}
         {...area}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy(id, { error, hint })}
+        {...stateOf(id, { error, hint })}
         className={LOOKS[look].control(Boolean(error))}
       />
     </Shell>
@@ -228,8 +224,7 @@ export function CheckboxControl({
           id={id}
           type="checkbox"
           {...input}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy(id, { error, hint })}
+          {...stateOf(id, { error, hint })}
           className={large ? 'mt-1 h-6 w-6 shrink-0 accent-ember-600' : 'mt-1 h-4 w-4'}
         />
         <span className={large ? 'text-xl' : 'text-sm font-semibold'}>{label}</span>
