@@ -12,9 +12,20 @@ export async function seriousA11yViolations(page: Page, options: { exclude?: str
   await page.waitForFunction(() => document.title.trim().length > 0, undefined, { timeout: 10_000 });
   // Legacy mode runs axe inside the page itself: the default opens a second page in the page's context to
   // combine frame results, which fails for pages made with browser.newPage() (and our pages have no frames).
-  let builder = new AxeBuilder({ page }).setLegacyMode(true);
-  for (const selector of options.exclude ?? []) builder = builder.exclude(selector);
-  const results = await builder.analyze();
+  const analyze = () => {
+    let builder = new AxeBuilder({ page }).setLegacyMode(true);
+    for (const selector of options.exclude ?? []) builder = builder.exclude(selector);
+    return builder.analyze();
+  };
+  let results = await analyze();
+  // A router.refresh() re-streams the page's head: axe can run in the moment the old <title> is gone and
+  // the new one not yet in. Judge the page once the refresh has settled; a title that is really missing
+  // still fails the second run.
+  if (results.violations.some((v) => v.id === 'document-title')) {
+    await page.waitForLoadState('networkidle');
+    await page.waitForFunction(() => document.title.trim().length > 0, undefined, { timeout: 10_000 });
+    results = await analyze();
+  }
   return results.violations
     .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
     .map((violation) => {
