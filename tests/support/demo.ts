@@ -3,17 +3,18 @@
 // retyped; tests/integration/demo-ids.test.ts checks every one against the database by its code or name,
 // so a reseed that moves a row fails there, by name, instead of somewhere far away.
 
-type SeedCamRow = [string, ...unknown[]];
+// A catalogue row as the seeder lists it: its code first.
+type SeedRow = [string, ...unknown[]];
 type DemoSeed = {
   users: { id: number; email: string }[];
   suppliers: { id: number; name: string }[];
   needRules: { id: number; kind: string; vehicle_class: string | null }[];
   customers: { id: number; email: string }[];
   builds: { id: number; customer_id: number; vehicle_label: string }[];
-  quotes: { id: number; number: string; token: string | null }[];
-  camRows: SeedCamRow[];
-  partRows: SeedCamRow[];
-  laborRows: SeedCamRow[];
+  quotes: { id: number; number: string }[];
+  camRows: SeedRow[];
+  partRows: SeedRow[];
+  laborRows: SeedRow[];
   camId: (sku: string) => number;
   partId: (sku: string) => number;
   laborId: (code: string) => number;
@@ -130,12 +131,6 @@ export const DEMO = {
   customers: idsOf(DEMO_KEYS.customers, customerId, 'customers'),
   builds: idsOf(DEMO_KEYS.builds, (email) => seed.builds.find((b) => b.customer_id === customerId(email))?.id, 'builds'),
   quotes: idsOf(DEMO_KEYS.quotes, (number) => seed.quotes.find((q) => q.number === number)?.id, 'quotes'),
-};
-
-/** The two demo quotes' customer links (README): /q/<token>. */
-export const DEMO_LINKS = {
-  whitlockSent: seed.quotes.find((q) => q.number === DEMO_KEYS.quotes.whitlockSent)!.token!,
-  okaforDepositPaid: seed.quotes.find((q) => q.number === DEMO_KEYS.quotes.okaforDepositPaid)!.token!,
 };
 
 /** An id no seeded or test-made row will reach: for "not found" answers. */
