@@ -18,9 +18,9 @@ describe('database settings', () => {
   });
 
   it('falls back to DB_* variables and then to the local defaults', () => {
-    delete process.env.DATABASE_URL;
-    delete process.env.DB_HOST;
-    delete process.env.DB_PORT;
+    // Empty, not deleted: config.cjs fills unset variables from a .env file, and a clone with its own
+    // .env (another DB_PORT) must not change what this test sees. Empty means "not given" there too.
+    for (const name of ['DATABASE_URL', 'DB_HOST', 'DB_PORT', 'DB_USER']) process.env[name] = '';
     process.env.DB_NAME = 'lobewise_test';
     const settings = load().connectionSettings();
     expect(settings).toMatchObject({ host: '127.0.0.1', port: 3407, database: 'lobewise_test', username: 'lobewise' });
