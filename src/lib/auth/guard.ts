@@ -1,16 +1,13 @@
 import { headers } from 'next/headers';
 import { redirect } from 'next/navigation';
-import { NextResponse } from 'next/server';
-import { errorResponse } from '@/lib/http/responses';
 import { PATH_HEADER, safeNextPath, signInUrl } from './guard-paths';
-import { isCrossSite } from './request-info';
 import { roleCan, type Permission } from './policy';
 import type { SessionUser, StaffRole } from './roles';
 import { currentSession } from './session';
 
 // The session checks. Route handlers get theirs from the route kit (lib/http/route.ts); server
 // components call requireAccessForPage(permission). There are no server actions: every change goes
-// through a route handler. requireRole is the older, role-list form a few handlers still use.
+// through a route handler.
 
 export type { SessionUser, StaffRole } from './roles';
 export { ALL_STAFF } from './roles';
@@ -24,19 +21,6 @@ export async function currentUser(): Promise<SessionUser | null> {
 
 export function roleAllows(user: SessionUser, roles: readonly StaffRole[]): boolean {
   return roles.length === 0 || roles.includes(user.role);
-}
-
-/**
- * For route handlers. Returns the user, or a JSON answer to return as is: 403 for a cross-site
- * state-changing request, 401 when signed out (or the account was deactivated), 403 for a role
- * that may not do this.
- */
-export async function requireRole(request: Request, ...roles: StaffRole[]): Promise<SessionUser | NextResponse> {
-  if (isCrossSite(request)) return errorResponse(403, 'This request came from another site and was refused.');
-  const user = await currentUser();
-  if (!user) return errorResponse(401, 'Sign in to continue.');
-  if (!roleAllows(user, roles)) return errorResponse(403, `Your role (${user.role}) does not allow this.`);
-  return user;
 }
 
 /**

@@ -1,35 +1,9 @@
 import { NextResponse } from 'next/server';
-import type { z } from 'zod';
-import { errorResponse, readJson, validationFailed } from '@/lib/http/responses';
+import { errorResponse, validationFailed } from '@/lib/http/responses';
 import type { WriteOutcome } from '@/lib/catalogue/versioned-write';
 
-// Write outcomes to status codes and the paged list shape, for every route handler. idFrom, parseQuery
-// and parseBody are the older answer-returning forms, kept until the quotes, reports and users handlers
-// move to the route kit (lib/http/route.ts), which throws instead.
-
-export type IdParams = { params: Promise<{ id: string }> };
-
-export async function idFrom(context: IdParams, label = 'record'): Promise<number | NextResponse> {
-  const { id } = await context.params;
-  const n = Number(id);
-  if (!/^\d{1,10}$/.test(id) || !Number.isSafeInteger(n) || n < 1) return errorResponse(404, `No ${label} with id ${id}.`);
-  return n;
-}
-
-export function parseQuery<S extends z.ZodType>(request: Request, schema: S): { ok: true; value: z.output<S> } | { ok: false; response: NextResponse } {
-  const params = Object.fromEntries(new URL(request.url).searchParams.entries());
-  const parsed = schema.safeParse(params);
-  if (!parsed.success) return { ok: false, response: validationFailed(parsed.error) };
-  return { ok: true, value: parsed.data };
-}
-
-export async function parseBody<S extends z.ZodType>(request: Request, schema: S): Promise<{ ok: true; value: z.output<S> } | { ok: false; response: NextResponse }> {
-  const body = await readJson(request);
-  if (!body.ok) return body;
-  const parsed = schema.safeParse(body.value);
-  if (!parsed.success) return { ok: false, response: validationFailed(parsed.error) };
-  return { ok: true, value: parsed.data };
-}
+// Write outcomes to status codes and the paged list shape, for every route handler (the route kit,
+// lib/http/route.ts, reads ids, queries and bodies).
 
 /** Turns a write outcome into the answer: 200/201 with the record, 404, 409 with the current record, 422. */
 export function outcomeResponse<R>(outcome: WriteOutcome<R>, options: { status?: number; label: string; present?: (r: R) => unknown }): NextResponse {

@@ -37,16 +37,6 @@ export async function readJsonBody(request: Request, limitBytes = JSON_BODY_LIMI
   }
 }
 
-/** The same, answering `{ ok: false, response }` instead of throwing, for handlers not yet on the route kit. */
-export async function readJson(request: Request, limitBytes = JSON_BODY_LIMIT_BYTES): Promise<{ ok: true; value: unknown } | { ok: false; response: NextResponse }> {
-  try {
-    return { ok: true, value: await readJsonBody(request, limitBytes) };
-  } catch (error) {
-    if (error instanceof HttpError) return { ok: false, response: errorResponse(error.status, error.message, error.extra, error.headers) };
-    throw error;
-  }
-}
-
 /** A 422 to throw: the fields and what is wrong with each. */
 export function invalidFields(errors: ZodError | FieldError[]): HttpError {
   return new HttpError(422, 'Some fields need attention.', { errors: Array.isArray(errors) ? errors : formatZodIssues(errors) });

@@ -1,21 +1,14 @@
-import { requireRole } from '@/lib/auth/guard';
-import { parseQuery } from '@/lib/http/kit';
 import { quoteExportChunks } from '@/lib/db/queries/quote-export';
+import { route } from '@/lib/http/route';
 import { quoteCsvHeader, quoteCsvRows } from '@/lib/reports/quotes-csv';
 import { ReportRangeSchema } from '@/lib/schemas/report';
-
-export const dynamic = 'force-dynamic';
 
 /**
  * Quotes created in ?from..to as CSV (formula-like cells neutralised), every one of them: streamed a
  * chunk at a time, so a year of a busy shop neither waits for nor holds the whole file. Managers only.
  */
-export async function GET(request: Request) {
-  const user = await requireRole(request, 'manager');
-  if (user instanceof Response) return user;
-  const range = parseQuery(request, ReportRangeSchema);
-  if (!range.ok) return range.response;
-  const chunks = quoteExportChunks(range.value);
+export const GET = route({ permission: 'reports.read', query: ReportRangeSchema }, async ({ query: range }) => {
+  const chunks = quoteExportChunks(range);
   // The first chunk is read before answering: a database that is away fails the request, not the download.
   const first = await chunks.next();
   const encoder = new TextEncoder();
@@ -42,8 +35,8 @@ export async function GET(request: Request) {
   return new Response(body, {
     headers: {
       'Content-Type': 'text/csv; charset=utf-8',
-      'Content-Disposition': `attachment; filename="lobewise-quotes-${range.value.from}-to-${range.value.to}.csv"`,
+      'Content-Disposition': `attachment; filename="lobewise-quotes-${range.from}-to-${range.to}.csv"`,
       'Cache-Control': 'no-store',
     },
   });
-}
+});
