@@ -5,6 +5,7 @@ import useSWR from 'swr';
 import type { ShopRanking } from '@/lib/advisor-service';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
 import { formatMoney, hpText, pctText, rpmRangeText, rpmText, torqueText } from '@/lib/format';
+import { ChosenCams } from './chosen-cams';
 import { PowerChart } from './power-chart';
 import { RankingDetail } from './ranking-detail';
 import { postForJson } from '@/lib/api-client';
@@ -91,6 +92,14 @@ export function ShortlistWorkbench({ builds, notice, initialBuildId }: { builds:
               {certifiedOnly ? `${shown.length} of ${data.rankings.length} cams shown; ${data.rankings.length - shown.length} not certified left out.` : `All ${data.rankings.length} cams shown.`}
             </span>
           </div>
+          <ChosenCams
+            cams={shown.filter((r) => chartIds.includes(String(r.camId))).map((r) => ({ ...r, curve: curveOf(r) }))}
+            baseline={data.baseline}
+            displacementL={data.engine.displacementL}
+            stallRpm={build.profile.drivetrain.stallRpm ?? 0}
+            drivenBand={{ fromRpm: data.engine.cruiseRpm, toRpm: Math.max(data.engine.cruiseRpm + 200, data.engine.pullAwayRpm) }}
+            notice={notice}
+          />
           <div className="overflow-x-auto rounded-lg border border-steel-300 bg-paper-raised">
             <table className="w-full text-sm">
               <caption className="sr-only">Cams ranked for this build</caption>

@@ -18,6 +18,6 @@ export { NEED_KIND_LIST, NEED_LIFT_THRESHOLDS } from './needs';
 export type { SubscoreName } from './weights';
 export type { CurvePoint, PredictedSummary } from './curve';
 export type {
-  BaselineResult, CamRanking, Caution, CautionKind, EngineFacts, HistoryAdjustment, HistoryEntry, Need, NeedKind,
+  BaselineResult, CamRanking, CamSpecs, Caution, CautionKind, EngineFacts, HistoryAdjustment, HistoryEntry, Need, NeedKind,
   RankingResult, RankOptions, Reason, Subscores,
 } from './types';

@@ -21,7 +21,7 @@ import {
 } from './scoring';
 import { revLimitRpm } from './rpm-grid';
 import { SCREENING, type RuledOut } from './screening';
-import type { BaselineResult, CamRanking, EngineFacts, RankingResult, RankOptions, Reason } from './types';
+import type { BaselineResult, CamRanking, CamSpecs, EngineFacts, RankingResult, RankOptions, Reason } from './types';
 import { overlap050Deg, seatOverlapDeg, valveEvents } from './valve-events';
 import { SCORING_WEIGHTS } from './weights';
 
@@ -141,6 +141,7 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
   return {
     camId: cam.id,
     camName: cam.name,
+    specs: camSpecs(cam),
     rank: 0, // set once sorted
     score: roundTo(totalScore(raw, emissions.gated), 1),
     subscores,
@@ -157,6 +158,15 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
     cautions: camCautions(emissions, idle, fit, converter, build.vehicle.powerBrakes === 'vacuum'),
     needs,
     history,
+  };
+}
+
+function camSpecs(cam: CamCard): CamSpecs {
+  const { intakeDuration050, exhaustDuration050, intakeLiftIn, exhaustLiftIn, lsa, intakeCenterline, rockerRatio, intakeAdvertised, exhaustAdvertised } = cam;
+  return {
+    intakeDuration050, exhaustDuration050, intakeLiftIn, exhaustLiftIn, lsa, intakeCenterline, rockerRatio,
+    ...(intakeAdvertised === undefined ? {} : { intakeAdvertised }),
+    ...(exhaustAdvertised === undefined ? {} : { exhaustAdvertised }),
   };
 }
 

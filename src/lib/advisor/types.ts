@@ -61,9 +61,14 @@ export type RankOptions = {
   includeCurves?: boolean;
 };
 
+/** The cam card's own figures (never its price), so a side-by-side comparison reads them from the ranking. */
+export type CamSpecs = Pick<CamCard, 'intakeDuration050' | 'exhaustDuration050' | 'intakeLiftIn' | 'exhaustLiftIn' | 'lsa' | 'intakeCenterline' | 'rockerRatio'> &
+  Partial<Pick<CamCard, 'intakeAdvertised' | 'exhaustAdvertised'>>;
+
 export type CamRanking = {
   camId: CamCard['id'];
   camName: string;
+  specs: CamSpecs;
   rank: number;
   score: number;
   subscores: Subscores;

@@ -28,3 +28,12 @@ export function camCardOf(cam: CamCardSource): CamCard {
     ...(cam.priceCents === undefined ? {} : { priceCents: cam.priceCents }),
   };
 }
+
+/**
+ * The grind's own name from a catalogue cam's card name (`${sku} ${name}` above; a SKU has no spaces): what
+ * the customer view shows, without the shop's shelf code.
+ */
+export function grindNameOf(cardName: string): string {
+  const space = cardName.indexOf(' ');
+  return space > 0 ? cardName.slice(space + 1) : cardName;
+}

@@ -58,7 +58,7 @@ function plainReasons(r: ShopRankingEntry, answers: Pick<LeadAnswers, 'idle' | '
   return out;
 }
 
-function plainNeed(kind: NeedKind, suggestedStallRpm?: number): string {
+export function plainNeed(kind: NeedKind, suggestedStallRpm?: number): string {
   switch (kind) {
     case 'install':
       return 'Fitting the cam: the front of the engine comes apart, so this is most of the work.';
@@ -77,7 +77,7 @@ function plainNeed(kind: NeedKind, suggestedStallRpm?: number): string {
   }
 }
 
-const PLAIN_CAUTION: Record<CautionKind, string> = {
+export const PLAIN_CAUTION: Record<CautionKind, string> = {
   emissions: 'Not certified for emissions-tested road use: where your vehicle is tested, this cam may not be allowed. Your local rules decide.',
   brakes: 'It lowers engine vacuum at idle, which power brakes rely on. A qualified technician checks brake assist; extra brake assist may be needed.',
   valvetrain: 'Valve springs, piston-to-valve clearance and pushrod length must be checked on your engine by a qualified technician.',
