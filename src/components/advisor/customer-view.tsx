@@ -29,6 +29,8 @@ export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBa
   useEffect(() => {
     const element = dialog.current;
     if (element && !element.open) element.showModal();
+    // The way back takes the focus (showModal would give it to the first control; say it, not rely on order).
+    element?.querySelector<HTMLButtonElement>('[data-close-view]')?.focus();
     return () => element?.close();
   }, []);
   const told = cams.map(customerCam);
@@ -54,8 +56,8 @@ export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBa
             </p>
           </div>
           <div className="flex flex-wrap gap-2 print:hidden">
+            <Button size="md" variant="primary" className="min-h-12" onClick={onClose} data-close-view>Back to the shop view</Button>
             <Button size="md" className="min-h-12" onClick={() => window.print()}>Print</Button>
-            <Button size="md" variant="primary" className="min-h-12" onClick={onClose} autoFocus>Back to the shop view</Button>
           </div>
         </div>
 
