@@ -132,6 +132,7 @@ describe('the shortlist turned to the customer', () => {
     expect(await cells(comparison, 'lsa')).toEqual(cams.map((c) => degree(c.lsa)));
     expect(await cells(comparison, 'icl')).toEqual(cams.map((c) => degree(c.intake_centerline)));
     for (const key of ['ivo', 'ivc', 'evo', 'evc']) for (const cell of await cells(comparison, key)) expect(cell).toMatch(/^\d+(\.\d)?° (before|after) [TB]DC$/);
+    for (const cell of await cells(comparison, 'overlap')) expect(cell).toMatch(/^(None at 0\.050" \(−\d+(\.\d)?°\)|\d+(\.\d)?°)$/);
     for (const cell of await cells(comparison, 'dcr')) expect(cell).toMatch(/^\d\.\d:1$/);
     for (const cell of await cells(comparison, 'vacuum')) expect(cell).toMatch(/^About \d+ inHg: (enough|less than)/);
     for (const cell of await cells(comparison, 'needs')) expect(cell).toContain('Fitting');

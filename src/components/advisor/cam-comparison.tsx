@@ -4,7 +4,8 @@ import { customerCamName } from '@/lib/shortlist/customer-words';
 
 // The chosen cams side by side, one column each. The staff page shows it in its own dense type; the
 // customer view passes `forCustomer` (large type, grind names without the shop's SKU). Every cell is text
-// made by lib/shortlist/comparison.ts from the ranking.
+// made by lib/shortlist/comparison.ts from the ranking. The row labels stay put while a phone scrolls the
+// cams sideways.
 export function CamComparison({ cams, forCustomer = false, caption }: { cams: readonly ComparedCam[]; forCustomer?: boolean; caption: string }) {
   const large = forCustomer;
   const groups = comparisonGroups(cams);
@@ -15,7 +16,7 @@ export function CamComparison({ cams, forCustomer = false, caption }: { cams: re
         <caption className="sr-only">{caption}</caption>
         <thead>
           <tr className="bg-paper-sunk">
-            <td className={cell} />
+            <td className={`${cell} sticky left-0 bg-paper-sunk`} />
             {cams.map((cam) => (
               <th key={String(cam.camId)} scope="col" className={`${cell} min-w-40 text-left font-semibold`}>
                 {forCustomer ? customerCamName(cam) : cam.camName}
@@ -32,7 +33,7 @@ export function CamComparison({ cams, forCustomer = false, caption }: { cams: re
             </tr>
             {group.rows.map((row) => (
               <tr key={row.key} data-row={row.key} className="border-t border-steel-100 align-top">
-                <th scope="row" className={`${cell} text-left font-normal text-ink-soft`}>{row.label}</th>
+                <th scope="row" className={`${cell} sticky left-0 max-w-44 bg-paper-raised text-left font-normal text-ink-soft`}>{row.label}</th>
                 {row.values.map((value, i) => (
                   <td key={i} className={`${cell} ${row.key === 'price' ? 'font-semibold' : ''}`}>{value}</td>
                 ))}

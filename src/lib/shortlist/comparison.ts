@@ -22,6 +22,11 @@ function eventText(value: number, before: string, after: string): string {
   return value < 0 ? `${deg(-value)} ${after}` : `${deg(value)} ${before}`;
 }
 
+/** Overlap at 0.050" is often below zero on street cams: say what that means instead of showing a bare minus. */
+function overlapText(overlapDeg: number): string {
+  return overlapDeg < 0 ? `None at 0.050" (${deg(overlapDeg).replace('-', '−')})` : deg(overlapDeg);
+}
+
 const IDLE_WORDS: Record<IdleCharacter, string> = {
   smooth: 'Smooth, close to how it idles now',
   noticeable: 'A light lope you can hear',
@@ -80,7 +85,7 @@ export function comparisonGroups(cams: readonly ComparedCam[]): ComparisonGroup[
         row('ivc', 'Intake closes (IVC)', (c) => eventText(c.valveEvents.ivc, 'after BDC', 'before BDC')),
         row('evo', 'Exhaust opens (EVO)', (c) => eventText(c.valveEvents.evo, 'before BDC', 'after BDC')),
         row('evc', 'Exhaust closes (EVC)', (c) => eventText(c.valveEvents.evc, 'after TDC', 'before TDC')),
-        row('overlap', 'Overlap: both valves open', (c) => deg(c.valveEvents.overlap)),
+        row('overlap', 'Overlap: both valves open', (c) => overlapText(c.valveEvents.overlap)),
       ],
     },
     {

@@ -31,6 +31,8 @@ describe('cam comparison (the ranking’s own figures, in words and units)', () 
     expect(truck.valveEvents.ivo).toBeCloseTo(-3, 5);
     expect(rows.ivo[0]).toBe('3° after TDC');
     expect(rows.ivc[0]).toBe(`${truck.valveEvents.ivc}° after BDC`);
+    expect(truck.valveEvents.overlap).toBeLessThan(0);
+    expect(rows.overlap[0]).toBe(`None at 0.050" (−${-truck.valveEvents.overlap}°)`);
     expect(rows.dcr).toEqual([`${truck.dynamicCompression.toFixed(1)}:1`, `${big.dynamicCompression.toFixed(1)}:1`]);
     expect(rows.vacuum[0]).toContain(`About ${Math.round(truck.idleVacuumInHg)} inHg`);
     expect(rows.price).toEqual(['$3,012.50', 'Price at the counter']);
