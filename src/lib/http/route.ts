@@ -28,7 +28,11 @@ export type RouteSpec<P extends Permission | 'public', I extends IdLabels, B ext
   query?: Q;
   /** Largest JSON body accepted, in bytes (default: the kit's JSON limit). */
   bodyLimitBytes?: number;
-  /** Only for server-to-server callers (the payments webhook): skip the cross-site check. */
+  /**
+   * Skip the cross-site check: the payments webhook (server to server) and the customer's checkout posts,
+   * whose page sends no referrer (its address holds the private token), so its own form arrives with
+   * `Origin: null`. Both act only on a secret the caller must already hold (the signature, the token).
+   */
   allowCrossSite?: boolean;
 };
 
