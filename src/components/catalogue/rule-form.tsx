@@ -4,7 +4,8 @@ import { FieldArray, Form, Formik } from 'formik';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { VEHICLE_CLASSES, type VehicleClass } from '@/lib/schemas/build-profile';
-import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, NeedRuleSchema, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
+import { ruleChecks } from '@/lib/forms/rule-checks';
+import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
 import { sendJson, useVersionedSave } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -36,13 +37,8 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
   return (
     <Formik<Values>
       initialValues={initial}
-      validate={(values) => {
-        const parsed = NeedRuleSchema.safeParse(toPayload(values));
-        if (parsed.success) return {};
-        const errors: Record<string, string> = {};
-        for (const issue of parsed.error.issues) errors[issue.path.join('.') || 'label'] ??= issue.message;
-        return errors;
-      }}
+      // yup from the schema's limits, over the JSON the route will get (lib/forms/rule-checks.ts); the route re-checks with zod.
+      validate={(values) => ruleChecks(toPayload(values))}
       onSubmit={async (values) => {
         setProblem(null);
         const result = rule ? await save('PATCH', `/api/rules/${rule.id}`, toPayload(values)) : await save('POST', '/api/rules', toPayload(values));

@@ -8,7 +8,6 @@ import { SubmitButton } from '@/components/ui/button';
 import { Banner } from '@/components/ui/banner';
 import { displacementCi, litresFromCubicInches } from '@/lib/advisor/geometry';
 import { getJson, useVersionedSave } from '@/lib/api-client';
-import { BuildCreateSchema, BuildUpdateSchema } from '@/lib/schemas/build';
 import {
   BUILD_LIMITS as B, DEACTIVATION_STATES, EXHAUST_SYSTEMS, HEAD_MATERIALS, HEADER_TYPES, IDLE_WISHES, INTAKE_MANIFOLDS, POWER_BRAKES, PRIMARY_USES, TRANSMISSIONS,
   VEHICLE_CLASSES,
@@ -20,11 +19,11 @@ import { Section } from './section';
 import {
   applyCard, applyPreset, blankInterview, ENGINE_PRESETS, valuesFromBuild, type BaselineCard, type InterviewValues,
 } from '@/lib/builds/interview-values';
-import { nestErrors, payloadFromValues, validateWith } from './interview-values';
+import { interviewChecks, nestErrors, payloadFromValues } from './interview-values';
 
 // The counter interview: one form, sections in the order the conversation goes. Enter moves to the
-// next field (Ctrl+Enter saves from anywhere); Tab order follows the page. Checked in the browser with
-// the same zod schemas the server uses, so the limits and messages are written once.
+// next field (Ctrl+Enter saves from anywhere); Tab order follows the page. Checked in the browser with yup
+// built from the limits the zod schemas export (lib/forms/build-checks.ts), in the server's words.
 
 const WORDS: Record<string, string> = {
   iron: 'Iron', aluminum: 'Aluminium', truck: 'Truck (long runners)', car: 'Car (lower, shorter runners)', 'single-plane': 'Single-plane (race style)',
@@ -47,7 +46,7 @@ export function InterviewForm(props: Props) {
   const [problem, setProblem] = useState<React.ReactNode>(null);
   const { save } = useVersionedSave(props.mode === 'edit' ? props.build : null);
   const initial = useMemo(() => (props.mode === 'edit' ? valuesFromBuild(props.build, cards) : (props.prefill ?? blankInterview(cards))), [props, cards]);
-  const validate = useMemo(() => validateWith(mode === 'edit' ? BuildUpdateSchema : BuildCreateSchema, mode), [mode]);
+  const validate = useMemo(() => interviewChecks(mode), [mode]);
 
   async function onSubmit(values: InterviewValues, helpers: FormikHelpers<InterviewValues>) {
     setProblem(null);

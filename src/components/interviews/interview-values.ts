@@ -1,11 +1,11 @@
 import type { FormikErrors } from 'formik';
 import { setIn } from 'formik';
-import type { z } from 'zod';
 import type { InterviewValues } from '@/lib/builds/interview-values';
+import { buildPayloadChecks } from '@/lib/forms/build-checks';
 import { BUILD_LIMITS } from '@/lib/schemas/build-profile';
 
 // The interview form's side of its values: form → the JSON POST/PATCH /api/builds takes, and the server's
-// 422 (or the schema run in the browser) → formik's nested errors. The values themselves and a stored
+// 422 (or the yup checks run in the browser) → formik's nested errors. The values themselves and a stored
 // build → form live in lib/builds/interview-values.ts (the questionnaire's server code reads them too).
 
 /** Blank → undefined (the schema then says "is required" where it is); anything else → a number (NaN says "must be a number"). */
@@ -94,19 +94,18 @@ export function nestErrors(list: { field: string; message: string }[]): FormikEr
   return errors;
 }
 
-export function validateWith(schema: z.ZodType, mode: 'create' | 'edit') {
+/** formik's validate: the payload through the yup checks (lib/forms/build-checks.ts), in formik's nested shape. */
+export function interviewChecks(mode: 'create' | 'edit') {
+  const check = buildPayloadChecks[mode];
   return (values: InterviewValues): FormikErrors<InterviewValues> => {
-    const result = schema.safeParse(payloadFromValues(values, mode));
     // The schema takes a missing budget as "none given"; the form asks for a figure unless "not sure" was picked.
     const budgetMissing = values.profile.use.budgetKnown === 'figure' && num(values.profile.use.budgetCents) === undefined;
     const list: { field: string; message: string }[] = budgetMissing ? [{ field: 'profile.use.budgetCents', message: 'budget is required' }] : [];
-    if (result.success) return nestErrors(list);
     const seen = new Set<string>(list.map((l) => l.field));
-    for (const issue of result.error.issues) {
-      const field = issue.path.map(String).join('.') || '(body)';
+    for (const [field, message] of Object.entries(check(payloadFromValues(values, mode)))) {
       if (seen.has(field)) continue;
       seen.add(field);
-      list.push({ field, message: issue.message });
+      list.push({ field: field || '(body)', message });
     }
     return nestErrors(list);
   };

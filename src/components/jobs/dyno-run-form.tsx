@@ -13,8 +13,8 @@ import { CurveInput } from './dyno-curve-input';
 import { FieldProblem, NumberBox } from './dyno-fields';
 import { convertAir, initialValues, payloadOf, schemaErrors, toFormErrors, type Values } from './dyno-run-values';
 
-// Recording one dyno pull. The air is typed in the shop's units and sent in °C and kPa; the rest is
-// checked with the route's own zod schema, so the limits and messages are the ones the server uses.
+// Recording one dyno pull. The air is typed in the shop's units and sent in °C and kPa; the rest is checked
+// with yup built from the schema's limits, in the server's words (lib/forms/dyno-checks.ts); the route uses zod.
 
 const ENTRY_CHOICES = [['curve', 'The pull: rpm, torque'], ['peak', 'Peak figures only']] as const;
 const selectClass = 'rounded border border-steel-300 bg-paper-raised px-2 py-1';

@@ -3,7 +3,7 @@ import type { CorrectionStandard } from '@/lib/dyno/correction';
 import type { DynoType } from '@/lib/dyno/dyno-type';
 import { parseCurveCsv } from '@/lib/dyno/curve-csv';
 import { baroIn, baroToKpa, roundTo, tempIn, tempToCelsius, type AirUnits } from '@/lib/dyno/units';
-import { DynoRunSchema } from '@/lib/schemas/dyno-run';
+import { dynoRunChecks } from '@/lib/forms/dyno-checks';
 
 // The dyno form's values and the step from them to the API's payload. Number inputs hand formik a
 // number, or '' when the box is empty, so every numeric field is `number | ''` and is never trimmed.
@@ -71,12 +71,11 @@ export function toFormErrors(list: { field: string; message: string }[], csvLine
   return out as FormikErrors<Values>;
 }
 
-/** The zod checks the server will make, bar the air readings (yup checks those in the units on screen). */
+/** The server's checks, in yup from the schema's limits (lib/forms/dyno-checks.ts), bar the air readings (dyno-air-schema.ts). */
 export function schemaErrors(values: Values, ids: { buildId: number; quoteId: number }, units: AirUnits): FormikErrors<Values> {
   const { payload, csv } = payloadOf(values, ids, units);
-  const result = DynoRunSchema.safeParse(payload);
-  const issues = result.success ? [] : result.error.issues.map((i) => ({ field: i.path.map(String).join('.'), message: i.message }));
-  const errors = toFormErrors(issues.filter((i) => !(i.field.split('.')[0] in SI_TO_FORM)), csv.lines);
+  const issues = Object.entries(dynoRunChecks(payload)).map(([field, message]) => ({ field, message }));
+  const errors = toFormErrors(issues, csv.lines);
   if (csv.errors.length) errors.curveCsv = csv.errors.slice(0, 3).join('; ') + (csv.errors.length > 3 ? ` (and ${csv.errors.length - 3} more lines)` : '');
   return errors;
 }

@@ -6,12 +6,13 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import type { SignOffWarning } from '@/lib/jobs/sign-off-limits';
 import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
+import { signOffChecks } from '@/lib/forms/sign-off-checks';
 import { JOB_LIMITS } from '@/lib/schemas/job';
 import { sendJob } from './job-api';
 import { READINGS, type ReadingKey } from './sign-off-fields';
 
-// The technician's checks before first start. Numbers are typed as text and sent as numbers; what the
-// server refuses comes back beside the field. Readings outside the usual limits are saved with a warning.
+// The technician's checks before first start. Numbers are typed as text and sent as numbers; what yup (from
+// the schema's limits) or the server refuses shows beside the field. Readings outside the usual limits are saved with a warning.
 const input = 'spec w-28 rounded border border-steel-300 bg-paper-raised px-2 py-1 text-right text-sm focus:border-gauge-500 focus:outline-none';
 const asNumber = (v: string) => (v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : v.trim() === '' ? undefined : v);
 
@@ -35,6 +36,12 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
       tuneFile,
       ...(notes.trim() ? { notes } : {}),
     };
+    // yup from the schema's limits, in the route's words (lib/forms/sign-off-checks.ts); the route re-checks with zod.
+    const fields = signOffChecks(body);
+    if (Object.keys(fields).length > 0) {
+      setBusy(false);
+      return setProblem({ message: 'Some fields need attention.', fields });
+    }
     const result = await sendJob(`/api/jobs/${jobId}/sign-off`, 'POST', body);
     setBusy(false);
     if (!result.ok) return setProblem(result);

@@ -54,7 +54,10 @@ export function textUpTo(label: string, maxLength?: number, options: { required?
   return options.required ? schema.test('required', `${label} must not be empty`, (v) => Boolean(v?.trim())) : schema;
 }
 
-/** formik's `validate` from a yup object: every failing field keeps its first message, keyed by its path. */
+/**
+ * formik's `validate` from a yup object: every failing field keeps its first message, keyed by its path written
+ * the way zod and our 422s write it (`items.0.quantity`, not yup's `items[0].quantity`).
+ */
 export function validateWithYup<T extends object>(schema: yup.ObjectSchema<yup.AnyObject>) {
   return (values: T): Record<string, string> => {
     try {
@@ -63,8 +66,43 @@ export function validateWithYup<T extends object>(schema: yup.ObjectSchema<yup.A
     } catch (error) {
       if (!(error instanceof yup.ValidationError)) throw error;
       const errors: Record<string, string> = {};
-      for (const issue of error.inner.length ? error.inner : [error]) errors[issue.path ?? ''] ??= issue.message;
+      for (const issue of error.inner.length ? error.inner : [error]) errors[dottedPath(issue.path)] ??= issue.message;
       return errors;
     }
   };
 }
+
+const dottedPath = (path: string | undefined) => (path ?? '').replace(/\[(\d+)\]/g, '.$1').replace(/^\./, '');
+
+/** One of a fixed list (a select's options); the wording of the schemas' presence() messages. */
+export function oneOfList(label: string, values: readonly string[]) {
+  return yup
+    .string()
+    .defined(`${label} is required`)
+    .oneOf([...values], `${label} must be one of: ${values.join(', ')}`);
+}
+
+/**
+ * A cross-field rule on an object, reported on one of its fields (as a zod refine with `path` does). `check`
+ * sees the object as typed and answers true when it holds; a value that fails its own check is left to that.
+ */
+export function fieldRule<T extends yup.AnyObject>(
+  name: string,
+  field: string,
+  message: string | ((value: T) => string),
+  check: (value: T) => boolean,
+) {
+  return {
+    name,
+    test(value: T | undefined, context: yup.TestContext) {
+      if (!value || check(value)) return true;
+      return context.createError({
+        path: context.path ? `${context.path}.${field}` : field,
+        message: typeof message === 'function' ? message(value) : message,
+      });
+    },
+  };
+}
+
+/** A finite number (what the payload carries once a box was read); NaN and blanks are the field's own problem. */
+export const isFiniteNumber = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);

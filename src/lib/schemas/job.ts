@@ -67,15 +67,27 @@ const reading = (label: string, unit: string, min: number, max: number) =>
     .min(min, { error: `${label} must be at least ${min} ${unit}` })
     .max(max, { error: `${label} must be at most ${max} ${unit}` });
 
+/** What a sign-off reading may be at all (a typo otherwise), with its unit; the form's yup checks read these too. */
+export const SIGN_OFF_READING_LIMITS = {
+  ptvIntakeIn: { unit: 'in', min: 0, max: 0.5 },
+  ptvExhaustIn: { unit: 'in', min: 0, max: 0.5 },
+  springInstalledHeightIn: { unit: 'in', min: 1, max: 2.5 },
+  springSeatPressureLb: { unit: 'lb', min: 20, max: 500 },
+  coilBindMarginIn: { unit: 'in', min: 0, max: 0.5 },
+  pushrodLengthIn: { unit: 'in', min: 4, max: 11 },
+  lifterPreloadIn: { unit: 'in', min: 0, max: 0.25 },
+} as const;
+const R = SIGN_OFF_READING_LIMITS;
+
 export const SignOffSchema = z.strictObject(
   {
-    ptvIntakeIn: reading('ptvIntakeIn', 'in', 0, 0.5),
-    ptvExhaustIn: reading('ptvExhaustIn', 'in', 0, 0.5),
-    springInstalledHeightIn: reading('springInstalledHeightIn', 'in', 1, 2.5),
-    springSeatPressureLb: reading('springSeatPressureLb', 'lb', 20, 500),
-    coilBindMarginIn: reading('coilBindMarginIn', 'in', 0, 0.5),
-    pushrodLengthIn: reading('pushrodLengthIn', 'in', 4, 11),
-    lifterPreloadIn: reading('lifterPreloadIn', 'in', 0, 0.25),
+    ptvIntakeIn: reading('ptvIntakeIn', R.ptvIntakeIn.unit, R.ptvIntakeIn.min, R.ptvIntakeIn.max),
+    ptvExhaustIn: reading('ptvExhaustIn', R.ptvExhaustIn.unit, R.ptvExhaustIn.min, R.ptvExhaustIn.max),
+    springInstalledHeightIn: reading('springInstalledHeightIn', R.springInstalledHeightIn.unit, R.springInstalledHeightIn.min, R.springInstalledHeightIn.max),
+    springSeatPressureLb: reading('springSeatPressureLb', R.springSeatPressureLb.unit, R.springSeatPressureLb.min, R.springSeatPressureLb.max),
+    coilBindMarginIn: reading('coilBindMarginIn', R.coilBindMarginIn.unit, R.coilBindMarginIn.min, R.coilBindMarginIn.max),
+    pushrodLengthIn: reading('pushrodLengthIn', R.pushrodLengthIn.unit, R.pushrodLengthIn.min, R.pushrodLengthIn.max),
+    lifterPreloadIn: reading('lifterPreloadIn', R.lifterPreloadIn.unit, R.lifterPreloadIn.min, R.lifterPreloadIn.max),
     // Required by the route when the build has active cylinder deactivation; otherwise not asked.
     deactivationDeleteDone: z.boolean({ error: 'deactivationDeleteDone must be true or false' }).optional(),
     tuneFile: text('tuneFile', { error: presence('tuneFile', 'text') })
