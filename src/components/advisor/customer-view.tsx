@@ -82,25 +82,9 @@ export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBa
                 <span className="block text-base text-ink-muted">Whole job, before tax</span>
                 <span className="text-3xl font-semibold tabular-nums" data-customer-price>{cam.jobPrice}</span>
               </p>
-              <ul className="flex list-disc flex-col gap-1 pl-5">
-                {cam.does.map((line) => <li key={line}>{line}</li>)}
-              </ul>
-              {cam.includes.length ? (
-                <div>
-                  <h4 className="font-semibold">The job includes</h4>
-                  <ul className="flex list-disc flex-col gap-1 pl-5">
-                    {cam.includes.map((line) => <li key={line}>{line}</li>)}
-                  </ul>
-                </div>
-              ) : null}
-              {cam.knowFirst.length ? (
-                <div className="rounded border border-caution-700/40 bg-caution-100 p-3 text-caution-700">
-                  <h4 className="font-semibold">Good to know</h4>
-                  <ul className="flex list-disc flex-col gap-1 pl-5">
-                    {cam.knowFirst.map((line) => <li key={line}>{line}</li>)}
-                  </ul>
-                </div>
-              ) : null}
+              <Lines lines={cam.does} />
+              {cam.includes.length ? <Lines title="The job includes" lines={cam.includes} /> : null}
+              {cam.knowFirst.length ? <Lines title="Good to know" lines={cam.knowFirst} className="rounded border border-caution-700/40 bg-caution-100 p-3 text-caution-700" /> : null}
             </li>
           ))}
         </ul>
@@ -119,5 +103,16 @@ export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBa
       </div>
     </dialog>,
     document.body,
+  );
+}
+
+function Lines({ title, lines, className = '' }: { title?: string; lines: readonly string[]; className?: string }) {
+  return (
+    <div className={className}>
+      {title ? <h4 className="font-semibold">{title}</h4> : null}
+      <ul className="flex list-disc flex-col gap-1 pl-5">
+        {lines.map((line) => <li key={line}>{line}</li>)}
+      </ul>
+    </div>
   );
 }
