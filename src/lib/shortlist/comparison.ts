@@ -56,7 +56,9 @@ export function needLabel(kind: NeedKind, suggestedStallRpm?: number): string {
 /** Idle vacuum in words, with what it means for vacuum power brakes (about 15 inHg, common practice). */
 export function vacuumWords(inHg: number): string {
   const enough = inHg >= IDLE_VACUUM.brakeBoosterMinInHg;
-  return `About ${formatNumber(inHg, 0, 'inHg')}: ${enough ? 'enough for vacuum power brakes' : `less than the ${IDLE_VACUUM.brakeBoosterMinInHg} inHg or so vacuum power brakes want`}`;
+  // Whole inHg, unless rounding would put a figure just short of the line on it ("about 15: less than 15").
+  const digits = !enough && Math.round(inHg) >= IDLE_VACUUM.brakeBoosterMinInHg ? 1 : 0;
+  return `About ${formatNumber(inHg, digits, 'inHg')}: ${enough ? 'enough for vacuum power brakes' : `less than the ${IDLE_VACUUM.brakeBoosterMinInHg} inHg or so vacuum power brakes want`}`;
 }
 
 /** The whole job before tax as every screen shows it; a cam without a price is priced at the counter. */

@@ -43,6 +43,7 @@ describe('cam comparison (the ranking’s own figures, in words and units)', () 
   it('says whether idle vacuum is enough for vacuum power brakes (about 15 inHg, common practice)', () => {
     expect(vacuumWords(16.2)).toBe('About 16 inHg: enough for vacuum power brakes');
     expect(vacuumWords(12.4)).toBe('About 12 inHg: less than the 15 inHg or so vacuum power brakes want');
+    expect(vacuumWords(14.6)).toBe('About 14.6 inHg: less than the 15 inHg or so vacuum power brakes want');
   });
 });
 
