@@ -4,7 +4,11 @@ import type { Config } from 'jest';
 // production build over HTTP against the real MariaDB (see tests/integration/global-setup.ts).
 const shared = {
   testEnvironment: 'node',
-  moduleNameMapper: { '^@/(.*)$': '<rootDir>/src/$1' },
+  moduleNameMapper: {
+    '^@/(.*)$': '<rootDir>/src/$1',
+    // The marker throws outside Next's server bundle; tests import database, mail and payments code directly.
+    '^server-only$': '<rootDir>/node_modules/server-only/empty.js',
+  },
   transform: {
     '^.+\\.tsx?$': ['ts-jest', { tsconfig: { jsx: 'react-jsx', module: 'commonjs', moduleResolution: 'node', esModuleInterop: true, isolatedModules: true } }],
   },

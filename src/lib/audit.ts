@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { AuditEntry, db } from './db/models';
+import { AuditEntry } from './db/models';
 
 // One audit row per thing that happened. Actions are dotted, past tense, e.g. "auth.signed-in",
 // "user.role-changed", "cam.updated". before/after hold the changed fields only where it helps.
@@ -16,7 +16,6 @@ export type AuditInput = {
 };
 
 export async function recordAudit(entry: AuditInput, transaction?: Transaction): Promise<void> {
-  db();
   await AuditEntry.create(
     {
       userId: entry.user?.id ?? null,

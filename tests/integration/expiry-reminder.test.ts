@@ -26,7 +26,7 @@ afterAll(() => disconnectTestDatabase());
 // Run without blocking: a synchronous run held the test's event loop past the mail fake's keep-alive
 // timeout, and the next read of the inbox went out on a socket the fake had already closed.
 async function remind(days?: number): Promise<{ reminded: string[]; withoutEmail: string[]; failed: string[]; through: string }> {
-  const args = ['tsx', 'src/cli/remind-expiring.ts', ...(days === undefined ? [] : ['--days', String(days)])];
+  const args = ['tsx', '--tsconfig', 'tsconfig.cli.json', 'src/cli/remind-expiring.ts', ...(days === undefined ? [] : ['--days', String(days)])];
   const out = await new Promise<string>((resolve, reject) =>
     execFile('npx', args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', timeout: 60_000 }, (error, stdout) => (error ? reject(error) : resolve(stdout))),
   );
@@ -76,7 +76,7 @@ describe('the expiry reminder command', () => {
     let status = 0;
     let stderr = '';
     try {
-      execFileSync('npx', ['tsx', 'src/cli/remind-expiring.ts', '--days', 'soon'], { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', stdio: 'pipe', timeout: 60_000 });
+      execFileSync('npx', ['tsx', '--tsconfig', 'tsconfig.cli.json', 'src/cli/remind-expiring.ts', '--days', 'soon'], { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', stdio: 'pipe', timeout: 60_000 });
     } catch (error) {
       status = (error as { status: number }).status;
       stderr = String((error as { stderr: string }).stderr);

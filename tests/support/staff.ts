@@ -1,7 +1,7 @@
 import crypto from 'node:crypto';
 import { Op } from 'sequelize';
 import { hashPassword } from '@/lib/auth/password';
-import { SignInAttempt, authDb } from '@/lib/db/models/auth';
+import { SignInAttempt } from '@/lib/db/models';
 import { User } from '@/lib/db/models';
 import { DEMO_EMAILS } from './auth';
 import { connectTestDatabase } from './database';
@@ -38,7 +38,6 @@ export function testAddress(): string {
  */
 export async function clearSignInAttempts(emails: string[], ips: string[] = []): Promise<void> {
   await clearRateLimits('signin-');
-  authDb();
   await SignInAttempt.destroy({ where: { [Op.or]: [{ email: { [Op.in]: emails.length ? emails : [''] } }, { ip: { [Op.in]: ips.length ? ips : [''] } }] } });
 }
 

@@ -3,7 +3,7 @@ import { camsBySku, commitCamImport, suppliersByName, type CamImportRow, type Ca
 import { formatZodIssues } from '@/lib/schemas/errors';
 import { CatalogueCamSchema, type CatalogueCam } from '@/lib/schemas/catalogue-cam';
 import { centsToDollars, convertCell, parseCsv, toCsv, type CsvCell, type CsvColumn } from './csv';
-import type { WriteOutcome } from './versioned-write';
+import type { WriteOutcome } from '@/lib/db/write';
 
 // The cam spreadsheet: its columns (documented in docs/catalogue.md and in the template), the export,
 // and the import's preview and commit. One row is one cam, matched to the catalogue by SKU.

@@ -1,3 +1,4 @@
+import 'server-only';
 // Transactions that MariaDB rolled back over row locks (InnoDB deadlock detection) are safe to run again:
 // nothing they wrote was kept. Every write path that can meet a concurrent twin retries through here.
 

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { errorResponse, validationFailed } from '@/lib/http/responses';
-import type { WriteOutcome } from '@/lib/catalogue/versioned-write';
+import type { WriteOutcome } from '@/lib/db/write';
 
 // Write outcomes to status codes and the paged list shape, for every route handler (the route kit,
 // lib/http/route.ts, reads ids, queries and bodies).

@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { rankForShop } from '@/lib/advisor-service';
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
-import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { draftSources, getQuote, insertDraft, lockQuote, presentQuote, saveQuote, shopSettingsRow, writeLines } from '@/lib/db/queries/quotes';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from '@/lib/db/queries/quote-lines';
 import type { FieldError } from '@/lib/http/responses';

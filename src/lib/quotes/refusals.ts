@@ -1,4 +1,4 @@
-import type { WriteOutcome } from '@/lib/catalogue/versioned-write';
+import type { WriteOutcome } from '@/lib/db/write';
 import { HttpError } from '@/lib/http/errors';
 import { invalidFields, type FieldError } from '@/lib/http/responses';
 

@@ -1,7 +1,7 @@
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken, randomToken } from '@/lib/auth/tokens';
-import { invalid, notFound, refused, runWrite } from '@/lib/catalogue/versioned-write';
+import { invalid, notFound, refused, runWrite } from '@/lib/db/write';
 import { LifecycleRefused, moveQuote } from '@/lib/db/queries/quote-lifecycle';
 import { takeSnapshot } from '@/lib/db/queries/quote-snapshot';
 import { freezeSnapshot, getQuote, isFrozen, lockQuoteWithParts, presentQuote, shopSettingsRow, snapshotSource } from '@/lib/db/queries/quotes';

@@ -1,17 +1,13 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { db } from '@/lib/db/models';
+import { CatalogueAttachment, db, type AttachmentContentType, type AttachmentEntityType } from '@/lib/db/models';
 import { blobStore } from './index';
 
-// Spec-sheet attachments for catalogue records: the metadata table (migration 20261202000300) and the
+// Spec-sheet attachments for catalogue records: the metadata row (model CatalogueAttachment) and the
 // bytes in the blob store. The content type comes from the file's first bytes, never from its name.
 
-export const ATTACHMENT_ENTITY_TYPES = ['cam', 'part', 'labor'] as const;
-export type AttachmentEntityType = (typeof ATTACHMENT_ENTITY_TYPES)[number];
-export const ATTACHMENT_CONTENT_TYPES = ['application/pdf', 'image/png', 'image/jpeg'] as const;
-export type AttachmentContentType = (typeof ATTACHMENT_CONTENT_TYPES)[number];
+export { ATTACHMENT_CONTENT_TYPES, ATTACHMENT_ENTITY_TYPES, type AttachmentContentType, type AttachmentEntityType } from '@/lib/db/models';
 export const ATTACHMENT_MAX_BYTES = 5 * 1024 * 1024;
 // Spec sheets per cam, part or labour operation: enough for every sheet a supplier sends, not a file store.
 export const ATTACHMENT_MAX_PER_RECORD = 10;
@@ -20,48 +16,7 @@ export const ATTACHMENT_MAX_PER_RECORD = 10;
 export class AttachmentLimitReached extends Error {}
 
 export async function countAttachments(entityType: AttachmentEntityType, entityId: number): Promise<number> {
-  return model().count({ where: { entityType, entityId } });
-}
-
-export class CatalogueAttachment extends Model<InferAttributes<CatalogueAttachment>, InferCreationAttributes<CatalogueAttachment>> {
-  declare id: CreationOptional<number>;
-  declare entityType: AttachmentEntityType;
-  declare entityId: number;
-  declare storageKey: string;
-  declare fileName: string;
-  declare contentType: AttachmentContentType;
-  declare byteSize: number;
-  declare sha256: string;
-  declare uploadedByUserId: number | null;
-  declare createdAt: CreationOptional<Date>;
-
-  static initModel(sequelize: Sequelize) {
-    CatalogueAttachment.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        entityType: { type: DataTypes.ENUM(...ATTACHMENT_ENTITY_TYPES), allowNull: false },
-        entityId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        storageKey: { type: DataTypes.STRING(200), allowNull: false, unique: true },
-        fileName: { type: DataTypes.STRING(160), allowNull: false },
-        contentType: { type: DataTypes.ENUM(...ATTACHMENT_CONTENT_TYPES), allowNull: false },
-        byteSize: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        sha256: { type: DataTypes.CHAR(64), allowNull: false },
-        uploadedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-        createdAt: DataTypes.DATE,
-      },
-      { sequelize, modelName: 'CatalogueAttachment', tableName: 'catalogue_attachments', underscored: true, updatedAt: false },
-    );
-  }
-}
-
-let bound: Sequelize | undefined;
-function model() {
-  const sequelize = db();
-  if (bound !== sequelize) {
-    CatalogueAttachment.initModel(sequelize);
-    bound = sequelize;
-  }
-  return CatalogueAttachment;
+  return CatalogueAttachment.count({ where: { entityType, entityId } });
 }
 
 /** PDF, PNG or JPEG by magic bytes; null for anything else. */
@@ -104,12 +59,12 @@ const toRecord = (a: CatalogueAttachment): AttachmentRecord => ({
 });
 
 export async function listAttachments(entityType: AttachmentEntityType, entityId: number): Promise<AttachmentRecord[]> {
-  const rows = await model().findAll({ where: { entityType, entityId }, order: [['id', 'ASC']] });
+  const rows = await CatalogueAttachment.findAll({ where: { entityType, entityId }, order: [['id', 'ASC']] });
   return rows.map(toRecord);
 }
 
 export async function getAttachment(entityType: AttachmentEntityType, entityId: number, id: number): Promise<(AttachmentRecord & { storageKey: string }) | null> {
-  const row = await model().findOne({ where: { id, entityType, entityId } });
+  const row = await CatalogueAttachment.findOne({ where: { id, entityType, entityId } });
   return row ? { ...toRecord(row), storageKey: row.storageKey } : null;
 }
 
@@ -124,15 +79,14 @@ export async function addAttachment(
   input: { fileName: string; contentType: AttachmentContentType; bytes: Buffer },
   user: SessionUser,
 ): Promise<AttachmentRecord> {
-  const Attachment = model();
   const storageKey = `${entityType}/${entityId}/${randomUUID()}`;
   await blobStore().put(storageKey, input.bytes);
   try {
     return await db().transaction(async (t) => {
       // Locking the record's attachment rows (and the index gap after them) makes two uploads at once queue for the cap.
-      const existing = await Attachment.findAll({ attributes: ['id'], where: { entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
+      const existing = await CatalogueAttachment.findAll({ attributes: ['id'], where: { entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
       if (existing.length >= ATTACHMENT_MAX_PER_RECORD) throw new AttachmentLimitReached();
-      const row = await Attachment.create(
+      const row = await CatalogueAttachment.create(
         {
           entityType,
           entityId,
@@ -156,9 +110,8 @@ export async function addAttachment(
 }
 
 export async function removeAttachment(entityType: AttachmentEntityType, entityId: number, id: number, user: SessionUser): Promise<(AttachmentRecord & { storageKey: string }) | null> {
-  const Attachment = model();
   const removed = await db().transaction(async (t) => {
-    const row = await Attachment.findOne({ where: { id, entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
+    const row = await CatalogueAttachment.findOne({ where: { id, entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
     if (!row) return null;
     const record = { ...toRecord(row), storageKey: row.storageKey };
     await row.destroy({ transaction: t });

@@ -1,10 +1,9 @@
+import 'server-only';
 import {
   DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
 } from 'sequelize';
-import { db } from './index';
 
-// Models for the sign-in tables (migration 20261202000200-auth). They bind themselves to the shared
-// connection through authDb(), so the shared model index does not have to know about them.
+// Models for the sign-in tables (migration 20261202000200-auth); bound with the others in ./index.ts.
 
 export class StaffSession extends Model<InferAttributes<StaffSession>, InferCreationAttributes<StaffSession>> {
   declare id: CreationOptional<number>;
@@ -82,18 +81,4 @@ export class SignInAttempt extends Model<InferAttributes<SignInAttempt>, InferCr
       { sequelize, modelName: 'SignInAttempt', tableName: 'sign_in_attempts', underscored: true, updatedAt: false },
     );
   }
-}
-
-let bound: Sequelize | undefined;
-
-/** The shared connection with the core models and the sign-in models bound to it. */
-export function authDb(): Sequelize {
-  const sequelize = db();
-  if (bound !== sequelize) {
-    StaffSession.initModel(sequelize);
-    PasswordToken.initModel(sequelize);
-    SignInAttempt.initModel(sequelize);
-    bound = sequelize;
-  }
-  return sequelize;
 }

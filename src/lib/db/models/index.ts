@@ -1,7 +1,10 @@
+import 'server-only';
 import type { Sequelize } from 'sequelize';
 import { getSequelize } from '../connection';
 import { AuditEntry } from './audit-entry';
+import { PasswordToken, SignInAttempt, StaffSession, TOKEN_PURPOSES, type TokenPurpose } from './auth';
 import { Cam } from './cam';
+import { ATTACHMENT_CONTENT_TYPES, ATTACHMENT_ENTITY_TYPES, CatalogueAttachment, type AttachmentContentType, type AttachmentEntityType } from './catalogue-attachment';
 import { Build, Customer, Interview } from './customer';
 import { DynoGain } from './dyno-gain';
 import { DynoRun } from './dyno-run';
@@ -17,9 +20,20 @@ import { ShopSettings } from './shop-settings';
 import { Supplier } from './supplier';
 import { User } from './user';
 
-export { AuditEntry, Build, Cam, Customer, DynoGain, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule, NeedRuleItem, Part, Payment, Quote, QuoteLine, QuoteLink, ShopSettings, Supplier, User };
+export {
+  AuditEntry, Build, Cam, CatalogueAttachment, Customer, DynoGain, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule,
+  NeedRuleItem, Part, PasswordToken, Payment, Quote, QuoteLine, QuoteLink, ShopSettings, SignInAttempt, StaffSession, Supplier, User,
+};
+export { ATTACHMENT_CONTENT_TYPES, ATTACHMENT_ENTITY_TYPES, TOKEN_PURPOSES, type AttachmentContentType, type AttachmentEntityType, type TokenPurpose };
 
-let initialised: Sequelize | undefined;
+// Every model the app uses, bound together. A model missing here fails its first query with
+// "Model not initialized", so a new model file is added to this list in the same commit.
+const MODELS = [
+  User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, QuoteLink, Payment,
+  Lead, LeadNote, DynoRun, DynoGain, Job, JobSignOff, AuditEntry, CatalogueAttachment, StaffSession, PasswordToken, SignInAttempt,
+];
+
+let boundTo: Sequelize | undefined;
 
 function associate() {
   Cam.belongsTo(Supplier, { foreignKey: 'supplierId', as: 'supplier' });
@@ -60,15 +74,22 @@ function associate() {
   JobSignOff.belongsTo(User, { foreignKey: 'signedByUserId', as: 'signedBy' });
 }
 
-/** Binds every model to the shared connection once per process and returns it. */
+/**
+ * The process's connection, with every model bound to it. Importing this module binds them (see the call
+ * below), so query code uses `Cam.findAll()` directly; calling db() again only binds anew after
+ * closeSequelize() made a fresh connection (the CLI tools and tests that reconnect).
+ */
 export function db(): Sequelize {
   const sequelize = getSequelize();
-  if (initialised !== sequelize) {
-    for (const model of [User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, QuoteLink, Payment, Lead, LeadNote, DynoRun, DynoGain, Job, JobSignOff, AuditEntry]) {
-      model.initModel(sequelize);
-    }
+  if (boundTo !== sequelize) {
+    for (const model of MODELS) model.initModel(sequelize);
     associate();
-    initialised = sequelize;
+    boundTo = sequelize;
   }
   return sequelize;
 }
+
+// Bound on import, not on first use: each route Next bundles, each CLI tool and each test file reaches the
+// models only through this module, so whichever imports it first, the models are ready before any query.
+// Creating the connection object opens no socket; the pool connects on the first query.
+db();

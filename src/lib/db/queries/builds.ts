@@ -1,7 +1,8 @@
+import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { BUILD_RECORD_LIMITS, type BuildCreate, type BuildListQuery, type BuildUpdate } from '@/lib/schemas/build';
 import { Build, Cam, Customer, db } from '../models';
 import { refreshDynoGains } from './dyno-gains';
@@ -13,7 +14,6 @@ export type BuildSummary = { id: number; vehicleLabel: string; customerName: str
 
 /** Saved builds, newest first, with whose they are: the advisor page starts from one of these. */
 export async function listBuildSummaries(limit = 50): Promise<BuildSummary[]> {
-  db();
   const builds = await Build.findAll({
     include: [{ model: Customer, as: 'customer', attributes: ['name'] }],
     order: [['updatedAt', 'DESC'], ['id', 'DESC']],
@@ -24,7 +24,6 @@ export async function listBuildSummaries(limit = 50): Promise<BuildSummary[]> {
 
 /** One build as a summary (the advisor page asks for it when a link names a build beyond the newest). */
 export async function getBuildSummary(id: number): Promise<BuildSummary | null> {
-  db();
   const build = await Build.findByPk(id, { include: [{ model: Customer, as: 'customer', attributes: ['name'] }] });
   return build ? toSummary(build) : null;
 }
@@ -121,7 +120,6 @@ export async function listBuilds(query: BuildListQuery): Promise<{ items: BuildL
 }
 
 export async function getBuild(id: number, transaction?: Transaction): Promise<BuildRecord | null> {
-  db();
   const build = await Build.findByPk(id, { include: withCustomer(), transaction });
   return build ? toBuildRecord(build) : null;
 }
@@ -142,7 +140,6 @@ async function checkBaselineCam(camId: number | null, t: Transaction) {
 
 /** A new build, with a new customer when one is given inline; all in one transaction. */
 export async function createBuild(values: BuildCreate, user: SessionUser): Promise<WriteOutcome<BuildRecord>> {
-  db();
   return runWrite(async (t) => {
     let customerId: number;
     if (values.customer) customerId = (await insertCustomer(values.customer, user, t)).id;
@@ -164,7 +161,6 @@ export async function createBuild(values: BuildCreate, user: SessionUser): Promi
 
 /** Applies validated values when the client's version is still current; otherwise 409 with the current record. */
 export async function updateBuild(id: number, expectedVersion: number, values: BuildUpdate, user: SessionUser): Promise<WriteOutcome<BuildRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const build = await Build.findByPk(id, { include: withCustomer(), transaction: t, lock: t.LOCK.UPDATE });
@@ -197,7 +193,6 @@ export type BaselineCardOption = {
 
 /** The catalogue's factory-baseline cards (not archived), for "the cam in the engine now". */
 export async function listBaselineCards(): Promise<BaselineCardOption[]> {
-  db();
   const cams = await Cam.findAll({ where: { isFactoryBaseline: true, archivedAt: null }, order: [['baselineForLiters', 'ASC'], ['sku', 'ASC']] });
   const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
   return cams.map((c) => ({

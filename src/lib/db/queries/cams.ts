@@ -1,9 +1,10 @@
+import 'server-only';
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { changedFields, conflict, countReferences, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { changedFields, conflict, countReferences, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { CATALOGUE_CAM_FIELDS, type CamListQuery, type CatalogueCam } from '@/lib/schemas/catalogue-cam';
-import { Cam, db, Supplier } from '../models';
+import { Cam, Supplier } from '../models';
 
 // The shop's cams: list, read, create, change, archive, import and export. Route handlers and pages
 // call these; nothing else builds queries on the cams table.
@@ -120,7 +121,6 @@ function camOrder(query: Pick<CamListQuery, 'sort' | 'dir'>): Order {
 }
 
 export async function listCams(query: CamListQuery): Promise<{ items: CamRecord[]; total: number }> {
-  db();
   const and: WhereOptions<Cam>[] = [];
   if (query.q) and.push({ [Op.or]: [{ sku: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }] });
   if (query.supplier !== undefined) and.push({ supplierId: query.supplier });
@@ -147,13 +147,11 @@ export async function listCams(query: CamListQuery): Promise<{ items: CamRecord[
 }
 
 export async function getCam(id: number, transaction?: Transaction): Promise<CamRecord | null> {
-  db();
   const cam = await Cam.findByPk(id, { include: withSupplier(), transaction });
   return cam ? toCamRecord(cam) : null;
 }
 
 export async function listSuppliers(): Promise<SupplierOption[]> {
-  db();
   const rows = await Supplier.findAll({ attributes: ['id', 'name'], order: [['name', 'ASC']] });
   return rows.map((s) => ({ id: s.id, name: s.name }));
 }
@@ -166,7 +164,6 @@ async function checkSupplier(supplierId: number | null, transaction: Transaction
 const uniqueFields = { sku: 'sku' };
 
 export async function createCam(values: CatalogueCam, user: SessionUser): Promise<WriteOutcome<CamRecord>> {
-  db();
   return runWrite(
     async (t) => {
       await checkSupplier(values.supplierId, t);
@@ -187,7 +184,6 @@ export async function updateCam(
   archived: boolean | undefined,
   user: SessionUser,
 ): Promise<WriteOutcome<CamRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const cam = await Cam.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
@@ -226,7 +222,6 @@ async function camReferenceCount(id: number, transaction: Transaction): Promise<
  * (kept, hidden from the advisor and the default list); a cam nothing refers to is deleted.
  */
 export async function removeCam(id: number, user: SessionUser): Promise<WriteOutcome<{ outcome: 'archived' | 'deleted'; cam: CamRecord }>> {
-  db();
   return runWrite<{ outcome: 'archived' | 'deleted'; cam: CamRecord }>(async (t) => {
     const cam = await Cam.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
     if (!cam) throw notFound();
@@ -247,7 +242,6 @@ export async function removeCam(id: number, user: SessionUser): Promise<WriteOut
 }
 
 export async function camsBySku(skus: string[]): Promise<Map<string, CamRecord>> {
-  db();
   const out = new Map<string, CamRecord>();
   for (let i = 0; i < skus.length; i += 1000) {
     const rows = await Cam.findAll({ where: { sku: { [Op.in]: skus.slice(i, i + 1000) } }, include: withSupplier() });
@@ -269,7 +263,6 @@ export type CamImportRow = { values: Omit<CatalogueCam, 'supplierId'>; supplierN
  * preview are refused as a conflict, so an import never overwrites a manager's concurrent edit.
  */
 export async function commitCamImport(rows: CamImportRow[], user: SessionUser): Promise<WriteOutcome<{ created: number; updated: number; unchanged: number; suppliersAdded: string[] }>> {
-  db();
   return runWrite(
     async (t) => {
       const suppliers = new Map((await Supplier.findAll({ transaction: t })).map((s) => [s.name.trim().toLowerCase(), s.id]));
@@ -319,7 +312,6 @@ export async function commitCamImport(rows: CamImportRow[], user: SessionUser): 
 
 /** Every cam for the CSV export, archived ones too (the file says which). */
 export async function allCams(): Promise<CamRecord[]> {
-  db();
   const rows = await Cam.findAll({ include: withSupplier(), order: [['sku', 'ASC']] });
   return rows.map(toCamRecord);
 }

@@ -1,7 +1,8 @@
+import 'server-only';
 import { literal, Op, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import type { CustomerListQuery, CustomerValues } from '@/lib/schemas/customer';
 import { Build, Customer, db } from '../models';
 import { textSearch, type TextSearch } from './text-search';
@@ -57,7 +58,6 @@ export function customerMatchSql(search: Exclude<TextSearch, { kind: 'nothing' }
 
 /** Customers with a word of name, e-mail or phone starting with each word of q (short words: the name's start), by name. */
 export async function listCustomers(query: CustomerListQuery): Promise<{ items: CustomerRecord[]; total: number }> {
-  db();
   const search = query.q ? textSearch(query.q) : null;
   if (search?.kind === 'nothing') return { items: [], total: 0 };
   const { rows, count } = await Customer.findAndCountAll({
@@ -70,13 +70,11 @@ export async function listCustomers(query: CustomerListQuery): Promise<{ items: 
 }
 
 export async function getCustomer(id: number, transaction?: Transaction): Promise<CustomerRecord | null> {
-  db();
   const c = await Customer.findByPk(id, { transaction });
   return c ? toCustomerRecord(c) : null;
 }
 
 export async function getCustomerDetail(id: number): Promise<CustomerDetail | null> {
-  db();
   const c = await Customer.findByPk(id);
   if (!c) return null;
   const builds = await Build.findAll({ where: { customerId: id }, attributes: ['id', 'vehicleLabel', 'updatedAt'], order: [['updatedAt', 'DESC'], ['id', 'DESC']] });
@@ -92,13 +90,11 @@ export async function insertCustomer(values: CustomerValues, user: SessionUser, 
 }
 
 export async function createCustomer(values: CustomerValues, user: SessionUser): Promise<WriteOutcome<CustomerRecord>> {
-  db();
   return runWrite(async (t) => ({ record: await insertCustomer(values, user, t) }));
 }
 
 /** Applies validated values when the client's version is still current; otherwise 409 with the current record. */
 export async function updateCustomer(id: number, expectedVersion: number, values: CustomerValues, user: SessionUser): Promise<WriteOutcome<CustomerRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const c = await Customer.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { historyFromRuns, type RunForHistory } from '@/lib/dyno/history';
 import { correctedFigure } from '@/lib/dyno/figures';
@@ -15,7 +16,6 @@ import { runCorrection } from './dyno-runs';
  * which sees every committed run whatever the transaction's snapshot.
  */
 export async function refreshDynoGains(buildIds: readonly number[], t: Transaction): Promise<void> {
-  db();
   if (buildIds.length === 0) return;
   const ids = [...new Set(buildIds)];
   const [builds, runs] = await Promise.all([

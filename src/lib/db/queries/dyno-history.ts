@@ -1,9 +1,10 @@
+import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import { displacementCi } from '@/lib/advisor/geometry';
 import type { HistoryEntry } from '@/lib/advisor/types';
 import { similarityWindow } from '@/lib/dyno/history';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
-import { db, DynoGain } from '../models';
+import { DynoGain } from '../models';
 
 /**
  * The most records a ranking reads on each side of the engine's displacement (so twice this in all).
@@ -35,7 +36,6 @@ function entryOf(row: InferredGain): HistoryEntry {
  * for, only that cam's jobs are read.
  */
 export async function loadDynoHistory(build: BuildProfile, camIds?: readonly number[]): Promise<HistoryEntry[]> {
-  db();
   const e = build.engine;
   const here = displacementCi(e.boreIn, e.strokeIn, e.cylinders);
   const window = similarityWindow(here, e.intakeFlowCfm);

@@ -1,12 +1,13 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { invalid, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { AIR_NEEDED_BY, correctionFor, type Correction, type CorrectionStandard } from '@/lib/dyno/correction';
 import type { DynoType } from '@/lib/dyno/dyno-type';
 import { correctedFigure, peaksOf, pullWithPower, round1, type PullPoint } from '@/lib/dyno/figures';
 import type { DynoRunValues } from '@/lib/schemas/dyno-run';
-import { Build, Cam, db, DynoRun, Quote, User } from '../models';
+import { Build, Cam, DynoRun, Quote, User } from '../models';
 import { refreshDynoGains } from './dyno-gains';
 
 // Dyno runs: written by technicians and managers, read by all staff. Observed figures are stored as
@@ -74,18 +75,15 @@ export function viewOf(run: RunWithRefs): DynoRunView {
 }
 
 export async function buildExists(buildId: number): Promise<boolean> {
-  db();
   return (await Build.count({ where: { id: buildId } })) > 0;
 }
 
 export async function listDynoRuns(buildId: number): Promise<DynoRunView[]> {
-  db();
   const runs = await DynoRun.findAll({ where: { buildId }, include: includes(), order: [['runAt', 'ASC'], ['id', 'ASC']] });
   return runs.map((r) => viewOf(r as RunWithRefs));
 }
 
 export async function getDynoRun(id: number, transaction?: Transaction): Promise<DynoRunView | null> {
-  db();
   const run = await DynoRun.findByPk(id, { include: includes(), transaction });
   return run ? viewOf(run as RunWithRefs) : null;
 }

@@ -1,5 +1,6 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
-import { db, Quote } from '../models';
+import { Quote } from '../models';
 
 // The rows the expiry reminder (src/lib/quotes/expiry-reminders.ts) reads and stamps. SQL only.
 
@@ -11,7 +12,6 @@ export const dueForReminder = (q: ReminderFields, today: string, through: string
 
 /** The candidates, soonest valid-until first (tie-break on id); each is locked and checked again before mailing. */
 export function reminderCandidates(today: string, through: string): Promise<Pick<Quote, 'id' | 'number'>[]> {
-  db();
   return Quote.findAll({
     where: { status: { [Op.in]: ['sent', 'accepted'] }, expiryRemindedAt: null, validUntil: { [Op.between]: [today, through] } },
     attributes: ['id', 'number'],

@@ -1,3 +1,4 @@
+import 'server-only';
 import { db } from '../models';
 
 const PING_TIMEOUT_MS = 2000;

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { rolesWith } from '@/lib/auth/policy';
 import { readingsOf, signOffWarnings, type SignOffReadings, type SignOffWarning } from '@/lib/jobs/sign-off-limits';
@@ -109,7 +110,6 @@ async function latestSignOffs(jobIds: number[], transaction?: Transaction): Prom
 
 /** One job by its quote id; null when the quote is not a deposit-paid job. */
 export async function getBoardJob(quoteId: number, transaction?: Transaction): Promise<BoardJob | null> {
-  db();
   const q = (await Quote.findOne({ where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATES] } }, include: includes(), transaction })) as QuoteRow | null;
   if (!q) return null;
   const signOffs = q.job ? await latestSignOffs([q.job.id], transaction) : new Map();
@@ -156,7 +156,6 @@ export async function listBoard(query: JobListQuery): Promise<{ items: BoardJob[
 
 /** Who a job can be given to: active staff who may record job work (jobs.record: technicians and managers). */
 export async function listAssignableStaff(transaction?: Transaction): Promise<{ id: number; name: string; role: string }[]> {
-  db();
   const users = await User.findAll({ where: { active: true, role: { [Op.in]: [...rolesWith('jobs.record')] } }, attributes: ['id', 'name', 'role'], order: [['name', 'ASC'], ['id', 'ASC']], transaction });
   return users.map((u) => ({ id: u.id, name: u.name, role: u.role }));
 }

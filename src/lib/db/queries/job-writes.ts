@@ -1,7 +1,8 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { readingsOf, signOffWarnings } from '@/lib/jobs/sign-off-limits';
 import { canMove, illegalMoveMessage, SIGN_OFF_STATES, STATE_WORDS, type BoardState, type JobState } from '@/lib/jobs/states';
 import type { JobPatch, SignOffInput } from '@/lib/schemas/job';

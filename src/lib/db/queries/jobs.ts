@@ -1,7 +1,8 @@
+import 'server-only';
 import { Op } from 'sequelize';
 import type { CamCard } from '@/lib/schemas/cam-card';
 import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profile';
-import { Build, Cam, Customer, db, Quote, QuoteLine } from '../models';
+import { Build, Cam, Customer, Quote, QuoteLine } from '../models';
 import { camCardOf } from '@/lib/catalogue/cam-card-of';
 import { JOB_QUOTE_STATUSES } from './dyno-runs';
 
@@ -38,7 +39,6 @@ const refs = () => [
 ];
 
 export async function listJobs(): Promise<JobSummary[]> {
-  db();
   const quotes = await Quote.findAll({
     where: { status: { [Op.in]: [...JOB_QUOTE_STATUSES] } },
     include: refs(),
@@ -49,7 +49,6 @@ export async function listJobs(): Promise<JobSummary[]> {
 }
 
 export async function getJobSheet(quoteId: number): Promise<JobSheet | null> {
-  db();
   const quote = (await Quote.findOne({
     // A closed quote (balance paid) keeps its sheet: the board shows the job until the car is collected.
     where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATUSES, 'closed'] } },

@@ -1,9 +1,10 @@
+import 'server-only';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, countReferences, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, countReferences, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { LABOR_FIELDS, type LaborListQuery, type LaborValues } from '@/lib/schemas/labor';
-import { db, LaborOperation } from '../models';
+import { LaborOperation } from '../models';
 
 export type LaborRecord = {
   id: number;
@@ -43,7 +44,6 @@ export function laborFormValues(record: LaborRecord): Record<keyof LaborValues, 
 }
 
 export async function listLabor(query: LaborListQuery): Promise<{ items: LaborRecord[]; total: number }> {
-  db();
   const and: WhereOptions<LaborOperation>[] = [];
   if (query.q) and.push({ [Op.or]: [{ code: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }, { engines: { [Op.like]: likeTerm(query.q) } }] });
   if (query.active !== undefined) and.push({ active: query.active });
@@ -57,12 +57,10 @@ export async function listLabor(query: LaborListQuery): Promise<{ items: LaborRe
 }
 
 export async function allLabor(): Promise<LaborRecord[]> {
-  db();
   return (await LaborOperation.findAll({ order: [['code', 'ASC']] })).map(toLaborRecord);
 }
 
 export async function getLabor(id: number, transaction?: Transaction): Promise<LaborRecord | null> {
-  db();
   const op = await LaborOperation.findByPk(id, { transaction });
   return op ? toLaborRecord(op) : null;
 }
@@ -70,7 +68,6 @@ export async function getLabor(id: number, transaction?: Transaction): Promise<L
 const columns = (values: LaborValues) => ({ ...values, hours: values.hours.toFixed(2) });
 
 export async function createLabor(values: LaborValues, user: SessionUser): Promise<WriteOutcome<LaborRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const op = await LaborOperation.create(columns(values), { transaction: t });
@@ -83,7 +80,6 @@ export async function createLabor(values: LaborValues, user: SessionUser): Promi
 }
 
 export async function updateLabor(id: number, expectedVersion: number, values: LaborValues, user: SessionUser): Promise<WriteOutcome<LaborRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const op = await LaborOperation.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
@@ -105,7 +101,6 @@ export async function updateLabor(id: number, expectedVersion: number, values: L
 
 /** DELETE: refused while a need rule uses it; made inactive when a quote line uses it; else deleted. */
 export async function removeLabor(id: number, user: SessionUser): Promise<WriteOutcome<{ outcome: 'deactivated' | 'deleted'; labor: LaborRecord }>> {
-  db();
   return runWrite<{ outcome: 'deactivated' | 'deleted'; labor: LaborRecord }>(async (t) => {
     const op = await LaborOperation.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!op) throw notFound();

@@ -1,7 +1,8 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { invalid } from '@/lib/catalogue/versioned-write';
+import { invalid } from '@/lib/db/write';
 import { Lead } from '../models';
 
 // An interview started from a lead: the lead is linked to the interview's customer and, if nobody had

@@ -1,9 +1,10 @@
+import 'server-only';
 import { Op } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import type { LeadNoteInput } from '@/lib/schemas/lead-note';
-import { db, Lead, LeadNote, User } from '../models';
+import { Lead, LeadNote, User } from '../models';
 
 // The note log per lead: who, when, what was said. Oldest first, as a conversation reads.
 export type LeadNoteView = { id: number; leadId: number; body: string; author: string | null; createdAt: string };
@@ -12,7 +13,6 @@ type NoteRow = LeadNote & { user?: User | null };
 const viewOf = (n: NoteRow): LeadNoteView => ({ id: n.id, leadId: n.leadId, body: n.body, author: n.user?.name ?? null, createdAt: new Date(n.createdAt).toISOString() });
 
 export async function listLeadNotes(leadIds: number[]): Promise<Map<number, LeadNoteView[]>> {
-  db();
   const out = new Map<number, LeadNoteView[]>();
   if (!leadIds.length) return out;
   const rows = (await LeadNote.findAll({ where: { leadId: { [Op.in]: leadIds } }, include: [{ model: User, as: 'user', attributes: ['id', 'name'] }], order: [['id', 'ASC']] })) as NoteRow[];

@@ -1,8 +1,9 @@
+import 'server-only';
 import { literal, Op, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken } from '@/lib/auth/tokens';
 import { recordAudit } from '@/lib/audit';
-import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import type { Shortlist } from '@/lib/leads/shortlist';
 import type { LeadAnswers, LeadStatus } from '@/lib/schemas/lead';
 import { Cam, db, Lead } from '../models';
@@ -41,7 +42,6 @@ function toRecord(lead: Lead): LeadRecord {
 
 /** Leads from this e-mail or phone since `since`: the flood guard on POST /api/leads. */
 export async function countRecentLeads(contact: { email?: string; phone?: string }, since: Date): Promise<number> {
-  db();
   const who: WhereOptions[] = [];
   if (contact.email) who.push({ email: contact.email });
   if (contact.phone) who.push({ phone: contact.phone });
@@ -51,7 +51,6 @@ export async function countRecentLeads(contact: { email?: string; phone?: string
 
 /** Which of these cams are certified for road use where emissions are tested. */
 export async function emissionsCertifiedIds(camIds: (string | number)[]): Promise<Set<string>> {
-  db();
   const ids = camIds.map(Number).filter(Number.isSafeInteger);
   if (!ids.length) return new Set();
   const cams = await Cam.findAll({ where: { id: { [Op.in]: ids }, emissionsCertified: true }, attributes: ['id'] });
@@ -74,7 +73,6 @@ export async function createLead(answers: LeadAnswers, shortlist: Shortlist, tok
 /** The customer's own result by private link; null for anything that is not a live link. */
 export async function getLeadByToken(token: string): Promise<{ lead: LeadRecord; shop: { name: string; phone: string; email: string } | null } | null> {
   if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
-  db();
   const row = await Lead.findOne({ where: { publicTokenHash: hashToken(token) } });
   if (!row) return null;
   const settings = await getShopSettings();
@@ -82,13 +80,11 @@ export async function getLeadByToken(token: string): Promise<{ lead: LeadRecord;
 }
 
 export async function getLead(id: number): Promise<LeadRecord | null> {
-  db();
   const row = await Lead.findByPk(id);
   return row ? toRecord(row) : null;
 }
 
 export async function listLeads({ status, page, pageSize }: { status?: LeadStatus; page: number; pageSize: number }): Promise<{ items: LeadRecord[]; total: number }> {
-  db();
   const { rows, count } = await Lead.findAndCountAll({
     where: status ? { status } : {},
     order: [['createdAt', 'DESC'], ['id', 'DESC']],
@@ -103,7 +99,6 @@ export async function listLeads({ status, page, pageSize }: { status?: LeadStatu
  * The same rule as staleDays() in src/lib/leads/stale.ts, counted over every page of the list.
  */
 export async function countStaleLeads(cutoff: Date): Promise<number> {
-  db();
   return Lead.count({
     where: {
       status: 'new',

@@ -1,9 +1,10 @@
+import 'server-only';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, countReferences, invalid, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, countReferences, invalid, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { PART_FIELDS, type PartListQuery, type PartValues } from '@/lib/schemas/part';
-import { db, Part, Supplier } from '../models';
+import { Part, Supplier } from '../models';
 
 export type PartRecord = {
   id: number;
@@ -60,7 +61,6 @@ export function partFormValues(record: PartRecord): Record<keyof PartValues, unk
 const withSupplier = () => [{ model: Supplier, as: 'supplier', attributes: ['id', 'name'] }];
 
 export async function listParts(query: PartListQuery): Promise<{ items: PartRecord[]; total: number }> {
-  db();
   const and: WhereOptions<Part>[] = [];
   if (query.q) and.push({ [Op.or]: [{ sku: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }] });
   if (query.category) and.push({ category: query.category });
@@ -81,12 +81,10 @@ export async function listParts(query: PartListQuery): Promise<{ items: PartReco
 
 /** Every part, for pickers (rule items) and the CSV export. */
 export async function allParts(): Promise<PartRecord[]> {
-  db();
   return (await Part.findAll({ include: withSupplier(), order: [['category', 'ASC'], ['sku', 'ASC']] })).map(toPartRecord);
 }
 
 export async function getPart(id: number, transaction?: Transaction): Promise<PartRecord | null> {
-  db();
   const part = await Part.findByPk(id, { include: withSupplier(), transaction });
   return part ? toPartRecord(part) : null;
 }
@@ -102,7 +100,6 @@ async function checkSupplier(supplierId: number | null, transaction: Transaction
 }
 
 export async function createPart(values: PartValues, user: SessionUser): Promise<WriteOutcome<PartRecord>> {
-  db();
   return runWrite(
     async (t) => {
       await checkSupplier(values.supplierId, t);
@@ -116,7 +113,6 @@ export async function createPart(values: PartValues, user: SessionUser): Promise
 }
 
 export async function updatePart(id: number, expectedVersion: number, values: PartValues, user: SessionUser): Promise<WriteOutcome<PartRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const part = await Part.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
@@ -142,7 +138,6 @@ export async function updatePart(id: number, expectedVersion: number, values: Pa
  * an item); a part on any quote line is made inactive (kept for the quote's history); otherwise deleted.
  */
 export async function removePart(id: number, user: SessionUser): Promise<WriteOutcome<{ outcome: 'deactivated' | 'deleted'; part: PartRecord }>> {
-  db();
   return runWrite<{ outcome: 'deactivated' | 'deleted'; part: PartRecord }>(async (t) => {
     const part = await Part.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
     if (!part) throw notFound();

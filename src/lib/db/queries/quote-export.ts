@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { addDays, type ReportRange } from '@/lib/schemas/report';
 import { db } from '../models';

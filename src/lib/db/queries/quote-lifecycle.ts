@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import { recordAudit } from '@/lib/audit';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';

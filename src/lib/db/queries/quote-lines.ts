@@ -1,6 +1,7 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
-import { invalid } from '@/lib/catalogue/versioned-write';
+import { invalid } from '@/lib/db/write';
 import type { FieldError } from '@/lib/http/responses';
 import { checkPriceAuthority, type AuthorityVerdict } from '@/lib/quotes/authority';
 import type { JobLine } from '@/lib/quotes/job-price';

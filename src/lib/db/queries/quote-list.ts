@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes } from 'sequelize';
 import type { QuoteListQuery } from '@/lib/schemas/quote-list';
 import { Build, Customer, db, Payment, Quote } from '../models';
@@ -75,7 +76,6 @@ async function pageIds(query: QuoteListQuery): Promise<{ ids: number[]; total: n
 }
 
 export async function listQuotes(query: QuoteListQuery): Promise<{ items: QuoteSummary[]; total: number }> {
-  db();
   const { ids, total } = await pageIds(query);
   if (!ids.length) return { items: [], total };
   const rows = (await Quote.findAll({

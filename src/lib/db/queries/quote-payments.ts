@@ -1,6 +1,7 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import type { PaymentMethod, PaymentPurpose } from '@/lib/quotes/balance';
-import { db, Payment } from '../models';
+import { Payment } from '../models';
 
 // A quote's payments in the database: the rows checkouts, payment events, counter payments and refunds
 // lock and write. Callers lock the quote row first (lockQuote in ./quotes) and its payments second, so
@@ -36,13 +37,11 @@ export function lockPayment(id: number, t: Transaction): Promise<Payment | null>
  * there takes a gap lock, and concurrent inserts into that gap deadlock.
  */
 export function paymentForSession(sessionId: string): Promise<Pick<Payment, 'id' | 'quoteId'> | null> {
-  db();
   return Payment.findOne({ where: { providerSessionId: sessionId }, attributes: ['id', 'quoteId'] });
 }
 
 /** The payment row the provider's payment (intent) id belongs to, unlocked. */
 export function paymentForProviderPayment(intent: string): Promise<Pick<Payment, 'id' | 'quoteId'> | null> {
-  db();
   return Payment.findOne({ where: { providerPaymentId: intent }, attributes: ['id', 'quoteId'] });
 }
 

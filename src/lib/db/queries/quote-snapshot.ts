@@ -1,3 +1,4 @@
+import 'server-only';
 import { rankForShop } from '@/lib/advisor-service';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteSnapshot } from '@/lib/quotes/types';

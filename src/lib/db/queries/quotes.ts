@@ -1,3 +1,4 @@
+import 'server-only';
 import { col, fn, Op, type Transaction } from 'sequelize';
 import { canSeeCosts } from '@/lib/auth/costs';
 import type { SessionUser } from '@/lib/auth/guard';
@@ -6,7 +7,7 @@ import { balanceDueCents, counts, moneyIn } from '@/lib/quotes/balance';
 import { stateWord } from '@/lib/quotes/lifecycle';
 import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence } from '@/lib/quotes/pricing';
 import type { DocumentShop, PaymentRecord, PublicQuote, QuoteLineRecord, QuoteRecord, QuoteSnapshot } from '@/lib/quotes/types';
-import { Build, Cam, Customer, db, Part, Payment, Quote, QuoteLine, ShopSettings, User } from '../models';
+import { Build, Cam, Customer, Part, Payment, Quote, QuoteLine, ShopSettings, User } from '../models';
 import type { LineDraft } from './quote-lines';
 import { quoteIdByLinkHash } from './quote-links';
 import { readJson } from './quote-snapshot';
@@ -130,7 +131,6 @@ export function presentQuote(record: QuoteRecord, user: SessionUser): QuoteRecor
 }
 
 export async function getQuote(id: number, transaction?: Transaction): Promise<QuoteRecord | null> {
-  db();
   const row = (await Quote.findByPk(id, { include: include(), transaction })) as QuoteRow | null;
   return row ? toQuoteRecord(row, transaction) : null;
 }
@@ -156,20 +156,17 @@ export async function saveQuote(quote: Quote, t: Transaction, options: { touch?:
 
 /** The one row of shop settings (labour rate, tax, deposit policy, the shop's details); null before a manager saves them. */
 export function shopSettingsRow(t?: Transaction): Promise<ShopSettings | null> {
-  db();
   return ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t });
 }
 
 /** The build and cam a draft is made from (either may be missing). */
 export async function draftSources(buildId: number, camId: number): Promise<{ build: Build | null; cam: Cam | null }> {
-  db();
   const [build, cam] = await Promise.all([Build.findByPk(buildId), Cam.findByPk(camId)]);
   return { build, cam };
 }
 
 /** What sending needs to know before its transaction: the build and cam to freeze, and whether they already are. */
 export async function snapshotSource(id: number): Promise<{ buildId: number | null; camId: number | null; frozen: boolean } | null> {
-  db();
   const row = await Quote.findByPk(id, { attributes: ['id', 'buildId', 'camId', 'snapshotProfile'] });
   return row ? { buildId: row.buildId ?? null, camId: row.camId ?? null, frozen: readJson(row.snapshotProfile) !== null } : null;
 }
@@ -230,7 +227,6 @@ export async function insertDraft(draft: DraftRow, lines: LineDraft[], t: Transa
 
 /** The quote and customer a notice after the commit is about, with the payments that were not duplicates. */
 export async function quoteForNotice(quoteId: number): Promise<{ quote: Quote | null; customer: Customer | undefined; payments: Payment[] }> {
-  db();
   const quote = (await Quote.findByPk(quoteId, { include: [{ model: Customer, as: 'customer', attributes: ['name', 'email'] }, { model: Payment, as: 'payments' }] })) as
     | (Quote & { customer?: Customer; payments?: Payment[] })
     | null;
@@ -241,7 +237,6 @@ export async function quoteForNotice(quoteId: number): Promise<{ quote: Quote | 
 
 /** The shop's details printed on documents; null until a manager has saved the settings. */
 export async function shopForDocuments(): Promise<DocumentShop | null> {
-  db();
   const s = await ShopSettings.findOne({ order: [['id', 'ASC']] });
   return s ? { name: s.name, phone: s.phone, email: s.email, address: s.address, depositPolicyText: s.depositPolicyText, currency: s.currency } : null;
 }
@@ -249,7 +244,6 @@ export async function shopForDocuments(): Promise<DocumentShop | null> {
 /** The quote a private link opens, or null for any token that is not a live link (never a hint why). */
 export async function getQuoteByToken(token: string): Promise<PublicQuote | null> {
   if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
-  db();
   // The link e-mailed with the quote, or one e-mailed later (the balance request, the expiry reminder).
   const hash = hashToken(token);
   const row = await Quote.findOne({ where: { publicTokenHash: hash }, attributes: ['id'] });

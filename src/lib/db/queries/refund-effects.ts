@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { recordAudit } from '@/lib/audit';
 import type { AfterFullRefund } from '@/lib/quotes/types';

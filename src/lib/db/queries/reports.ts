@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { averageCents, marginOfSums as marginOf, netDepositsCents, rateBp, type Margin } from '@/lib/reports/arithmetic';
 import { addDays, type ReportRange } from '@/lib/schemas/report';

@@ -1,11 +1,12 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import type { NeedRuleInput } from '@/lib/catalogue/need-rules';
-import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import type { FieldError } from '@/lib/http/responses';
 import type { NeedRuleValues } from '@/lib/schemas/need-rule';
-import { db, LaborOperation, NeedRule, NeedRuleItem, Part } from '../models';
+import { LaborOperation, NeedRule, NeedRuleItem, Part } from '../models';
 
 // The manager's need rules with their items. loadNeedRules() is what the advisor and the quote
 // builder call before evaluateNeedRules() from '@/lib/catalogue/need-rules'.
@@ -49,7 +50,6 @@ export function toRuleRecord(rule: RuleRow): NeedRuleRecord {
 }
 
 export async function listRules(): Promise<NeedRuleRecord[]> {
-  db();
   const rows = await NeedRule.findAll({ include: include(), order: [['id', 'ASC']] });
   return rows.map(toRuleRecord);
 }
@@ -71,7 +71,6 @@ export function ruleFormValues(rule: NeedRuleRecord): Omit<Record<keyof NeedRule
 }
 
 export async function getRule(id: number, transaction?: Transaction): Promise<NeedRuleRecord | null> {
-  db();
   const rule = await NeedRule.findByPk(id, { include: include(), transaction });
   return rule ? toRuleRecord(rule) : null;
 }
@@ -96,7 +95,6 @@ async function writeItems(ruleId: number, values: NeedRuleValues, t: Transaction
 }
 
 export async function createRule(values: NeedRuleValues, user: SessionUser): Promise<WriteOutcome<NeedRuleRecord>> {
-  db();
   return runWrite(async (t) => {
     await checkItems(values, t);
     const rule = await NeedRule.create({ kind: values.kind, vehicleClass: values.vehicleClass, label: values.label, active: values.active }, { transaction: t });
@@ -110,7 +108,6 @@ export async function createRule(values: NeedRuleValues, user: SessionUser): Pro
 const itemsKey = (r: Pick<NeedRuleRecord, 'items'>) => JSON.stringify(r.items.map((i) => [i.partId, i.laborOperationId, i.quantity]));
 
 export async function updateRule(id: number, expectedVersion: number, values: NeedRuleValues, user: SessionUser): Promise<WriteOutcome<NeedRuleRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const rule = await NeedRule.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE });
@@ -136,7 +133,6 @@ export async function updateRule(id: number, expectedVersion: number, values: Ne
 }
 
 export async function removeRule(id: number, user: SessionUser): Promise<WriteOutcome<NeedRuleRecord>> {
-  db();
   return runWrite(async (t) => {
     const rule = await NeedRule.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE });
     if (!rule) throw notFound();

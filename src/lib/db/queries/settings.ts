@@ -1,11 +1,11 @@
+import 'server-only';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/catalogue/versioned-write';
+import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { SHOP_SETTINGS_FIELDS, type ShopSettingsValues } from '@/lib/schemas/settings';
-import { db, ShopSettings } from '../models';
+import { ShopSettings } from '../models';
 
 export async function getShopSettings(): Promise<ShopSettings | null> {
-  db();
   return ShopSettings.findOne({ order: [['id', 'ASC']] });
 }
 
@@ -78,7 +78,6 @@ export async function updateShopSettings(
   values: ShopSettingsValues,
   user: SessionUser,
 ): Promise<WriteOutcome<ShopSettingsRecord>> {
-  db();
   return runWrite(
     async (t) => {
       const settings = await ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t, lock: t.LOCK.UPDATE });

@@ -1,5 +1,6 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
-import { StaffSession, authDb } from '../models/auth';
+import { StaffSession } from '../models';
 import { User } from '../models';
 import type { StaffRole } from '../models/user';
 
@@ -8,7 +9,6 @@ export type ActiveSession = { sessionId: number; user: { id: number; email: stri
 const TOUCH_EVERY_MS = 5 * 60 * 1000;
 
 export async function createStaffSession(input: { tokenHash: string; userId: number; ip: string | null; userAgent: string | null; expiresAt: Date }, transaction?: Transaction): Promise<number> {
-  authDb();
   const row = await StaffSession.create({ ...input, revokedAt: null }, { transaction });
   return row.id;
 }
@@ -18,7 +18,6 @@ export async function createStaffSession(input: { tokenHash: string; userId: num
  * The user row is read fresh every time, so a role change or a deactivation counts at once.
  */
 export async function findActiveSession(tokenHash: string): Promise<ActiveSession | null> {
-  authDb();
   const session = await StaffSession.findOne({ where: { tokenHash, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } });
   if (!session) return null;
   const user = await User.findByPk(session.userId, { attributes: ['id', 'email', 'name', 'role', 'active'] });
@@ -30,14 +29,12 @@ export async function findActiveSession(tokenHash: string): Promise<ActiveSessio
 }
 
 export async function revokeSession(tokenHash: string): Promise<number> {
-  authDb();
   const [count] = await StaffSession.update({ revokedAt: new Date() }, { where: { tokenHash, revokedAt: null } });
   return count;
 }
 
 /** Ends every session of a user, optionally keeping one (the one changing its own password). */
 export async function revokeUserSessions(userId: number, options: { exceptSessionId?: number; transaction?: Transaction } = {}): Promise<number> {
-  authDb();
   const where: Record<string | symbol, unknown> = { userId, revokedAt: null };
   if (options.exceptSessionId) where.id = { [Op.ne]: options.exceptSessionId };
   const [count] = await StaffSession.update({ revokedAt: new Date() }, { where, transaction: options.transaction });

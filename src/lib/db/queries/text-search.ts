@@ -1,3 +1,4 @@
+import 'server-only';
 // How a staff search box becomes an indexed condition. A LIKE '%q%' cannot use an index, so searches
 // go to the FULLTEXT indexes (database/migrations/20261204000100-list-and-report-indexes.js), word
 // prefixes only; words shorter than InnoDB's smallest indexed token fall back to a prefix LIKE on

@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { User, db } from '../models';
 import type { StaffRole } from '../models/user';
@@ -16,12 +17,10 @@ export type StaffListRow = {
 };
 
 export async function findUserByEmail(email: string, transaction?: Transaction): Promise<User | null> {
-  db();
   return User.findOne({ where: { email }, transaction });
 }
 
 export async function findUserById(id: number, transaction?: Transaction, lock = false): Promise<User | null> {
-  db();
   return User.findByPk(id, { transaction, lock: lock && transaction ? transaction.LOCK.UPDATE : undefined });
 }
 
@@ -68,7 +67,6 @@ export function toStaffRow(user: User): Omit<StaffListRow, 'lastSignInAt'> {
  * both counting two managers and both succeeding; a locking read also sees the latest committed rows.
  */
 export async function lockActiveManagerIds(transaction: Transaction): Promise<number[]> {
-  db();
   const rows = await User.findAll({
     attributes: ['id'],
     where: { role: 'manager', active: true },
@@ -81,11 +79,9 @@ export async function lockActiveManagerIds(transaction: Transaction): Promise<nu
 
 /** Writes a new password hash without touching the row's version (it is not an edit of the account). */
 export async function setPasswordHash(userId: number, passwordHash: string, transaction?: Transaction): Promise<void> {
-  db();
   await User.update({ passwordHash }, { where: { id: userId }, transaction });
 }
 
 export async function createStaffUser(input: { email: string; name: string; role: StaffRole }, transaction?: Transaction): Promise<User> {
-  db();
   return User.create({ ...input, passwordHash: null, active: true }, { transaction });
 }

@@ -1,8 +1,9 @@
+import 'server-only';
 import { ForeignKeyConstraintError, OptimisticLockError, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { FieldError } from '@/lib/http/responses';
 import { db } from '@/lib/db/models';
 
-// The catalogue's write discipline, shared by the query modules in src/lib/db/queries/{cams,parts,…}:
+// The write discipline shared by the query modules in src/lib/db/queries/ (catalogue, leads, builds, jobs, …):
 // every write runs in one transaction, a refusal (not found, stale version, invalid) rolls it back,
 // and the outcome is a value the route handler turns into 404 / 409 / 422 — never a 500.
 
