@@ -1,6 +1,11 @@
 import nextVitals from 'eslint-config-next/core-web-vitals';
 import nextTs from 'eslint-config-next/typescript';
 
+const LIB_NOT_UP = {
+  group: ['@/components/*', '@/app/*', '**/components/*', '**/app/*'],
+  message: 'lib must not import components or app: move the shared piece into lib.',
+};
+
 const config = [
   ...nextVitals,
   ...nextTs,
@@ -13,20 +18,59 @@ const config = [
   {
     files: ['src/lib/**/*.ts', 'src/lib/**/*.tsx'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [{ group: ['@/components/*', '@/app/*', '**/components/*', '**/app/*'], message: 'lib must not import components or app: move the shared piece into lib.' }] }],
+      'no-restricted-imports': ['error', { patterns: [LIB_NOT_UP] }],
     },
   },
-  // The query layer is SQL and mapping only: e-mail and payments are called from the services above it
-  // (src/lib/quotes/, src/lib/auth/). Repeats the lib rule: a later block replaces the rule, not adds to it.
+  // The query layer is SQL and mapping only and hands data up: the services above it (src/lib/quotes/,
+  // src/lib/auth/, src/lib/ranking/) call it, send e-mail and take payments, never the reverse. One block for
+  // all three: a later block's no-restricted-imports replaces an earlier one for the same file, so the lib
+  // rule is repeated here too.
   {
-    files: ['src/lib/db/queries/**/*.ts'],
+    files: ['src/lib/db/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', {
-        patterns: [
-          { group: ['@/components/*', '@/app/*', '**/components/*', '**/app/*'], message: 'lib must not import components or app: move the shared piece into lib.' },
-          { group: ['@/lib/mail', '@/lib/mail.*', '@/lib/payments', '@/lib/payments.*', '**/lib/mail', '**/lib/payments', '../../mail', '../../payments'], message: 'db/queries holds SQL and mapping only: call mail and payments from src/lib/quotes/ (or another service module).' },
-        ],
-      }],
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            LIB_NOT_UP,
+            {
+              group: ['@/lib/mail', '@/lib/mail.*', '@/lib/payments', '@/lib/payments.*', '**/lib/mail', '**/lib/payments', '../../mail', '../../payments'],
+              message: 'db/queries holds SQL and mapping only: call mail and payments from src/lib/quotes/ (or another service module).',
+            },
+            {
+              group: ['@/lib/ranking', '@/lib/ranking/*', '**/ranking/*', '**/ranking'],
+              message: 'db/queries must not call the ranking service: let the caller rank and pass the result in (src/lib/ranking calls the queries).',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  // Components (client ones above all) never reach the query layer or a server-only service, not even
+  // for a type: response shapes live in src/lib/<area>/types.ts.
+  {
+    files: ['src/components/**/*.ts', 'src/components/**/*.tsx'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: [
+                '@/lib/db',
+                '@/lib/db/*',
+                '**/lib/db/*',
+                '@/lib/ranking/*',
+                '!@/lib/ranking/types',
+                '@/lib/mail',
+                '@/lib/payments',
+              ],
+              message:
+                'components import response types from src/lib/<area>/types.ts, never db, the ranking service, mail or payments.',
+            },
+          ],
+        },
+      ],
     },
   },
   // The advisor is a pure module: no database, React, Next or outside services.

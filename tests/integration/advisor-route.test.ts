@@ -5,7 +5,7 @@ import { BuildProfileSchema, type BuildProfile } from '@/lib/schemas/build-profi
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
-import type { ShopRanking } from '@/lib/advisor-service';
+import type { ShopRanking } from '@/lib/ranking/types';
 
 const { appUrl } = readRuntime();
 

@@ -7,7 +7,7 @@ import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { DEMO } from '../support/demo';
-import type { ShopRankingEntry } from '@/lib/advisor-service';
+import type { ShopRankingEntry } from '@/lib/ranking/types';
 
 // Issue 11, item 5: a ranking reads the measured history of similar engines only (dyno_gains, kept in
 // the dyno run's own transaction), and the advisor gets the measured gain rpm by rpm, not just at the peak.

@@ -7,8 +7,8 @@ import { connectTestDatabase, disconnectTestDatabase } from '../support/database
 import { readRuntime } from '../support/runtime';
 import { removeDynoRuns } from '../support/dyno-runs';
 import { DEMO, MISSING_ID } from '../support/demo';
-import type { ShopRankingEntry } from '@/lib/advisor-service';
-import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
+import type { ShopRankingEntry } from '@/lib/ranking/types';
+import type { DynoRunView } from '@/lib/dyno/types';
 
 // Dyno runs for the seeded job: the Okafor truck and its deposit-paid quote, cam F9-219 going in. A technician
 // records a before and an after pull; the advisor then shows the measured result for a similar build.

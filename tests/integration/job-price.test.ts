@@ -2,7 +2,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { DEMO } from '../support/demo';
-import type { ShopRankingEntry } from '@/lib/advisor-service';
+import type { ShopRankingEntry } from '@/lib/ranking/types';
 import type { QuoteLineRecord } from '@/lib/quotes/types';
 
 // Issue 12, item 1, over HTTP against the real build and MariaDB: the shortlist for the demo 5.3 L

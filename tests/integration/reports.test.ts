@@ -4,7 +4,7 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { DEMO } from '../support/demo';
-import type { ReportSummary } from '@/lib/db/queries/reports';
+import type { ReportSummary } from '@/lib/reports/types';
 
 // The manager's numbers over HTTP against the real build and MariaDB. Every expected figure is worked
 // out here from the database rows with plain SQL reads and JavaScript sums, never from the report code.

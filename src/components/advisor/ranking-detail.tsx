@@ -1,6 +1,6 @@
 'use client';
 
-import type { ShopRankingEntry } from '@/lib/advisor-service';
+import type { ShopRankingEntry } from '@/lib/ranking/types';
 import { SCORING_WEIGHTS, type SubscoreName } from '@/lib/advisor/weights';
 import { MakeQuoteButton } from '@/components/quotes/make-quote-button';
 import type { BuildProfile } from '@/lib/schemas/build-profile';

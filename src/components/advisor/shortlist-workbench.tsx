@@ -2,7 +2,7 @@
 
 import { useMemo, useState } from 'react';
 import useSWR from 'swr';
-import type { ShopRanking } from '@/lib/advisor-service';
+import type { ShopRanking } from '@/lib/ranking/types';
 import type { BuildProfile } from '@/lib/schemas/build-profile';
 import { formatMoney, hpText, pctText, rpmRangeText, rpmText, torqueText } from '@/lib/format';
 import { ChosenCams } from './chosen-cams';

@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useRouter, useSearchParams } from 'next/navigation';
 import { useEffect, useState } from 'react';
 import useSWR from 'swr';
-import type { CamRecord } from '@/lib/db/queries/cams';
+import type { CamRecord } from '@/lib/catalogue/types';
 import { getJson, type ApiError } from '@/lib/api-client';
 import { deg, formatMoney, inches } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { tableClass, tdClass, thClass } from '@/components/ui/table';
-import type { BoardJob } from '@/lib/db/queries/job-board';
+import type { BoardJob } from '@/lib/jobs/types';
 import { dayLabel, DueTag, JobStateTag } from './job-state-tag';
 
 // The board as a list: overdue and today's jobs first (the query's order). Dense; on a phone the

@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import type { BoardJob } from '@/lib/db/queries/job-board';
+import type { BoardJob } from '@/lib/jobs/types';
 import { dayLabel, DueTag, JobStateTag } from './job-state-tag';
 
 // Seven days from Monday, one column each (stacked on a phone), each job a small card.

@@ -5,7 +5,7 @@ import useSWR from 'swr';
 import { PowerChart, type ChartCurve } from '@/components/advisor/power-chart';
 import { Button } from '@/components/ui/button';
 import { tableClass, tdClass, thClass } from '@/components/ui/table';
-import type { DynoRunView } from '@/lib/db/queries/dyno-runs';
+import type { DynoRunView } from '@/lib/dyno/types';
 import { DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_DIGITS, AIR_UNIT_TEXT, baroIn, tempIn, type AirUnits } from '@/lib/dyno/units';
 import { DynoRunForm } from './dyno-run-form';

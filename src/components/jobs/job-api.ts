@@ -1,5 +1,5 @@
 // The job page's calls to /api/jobs: one place that turns an answer into fields, a message, or the job.
-import type { BoardJob } from '@/lib/db/queries/job-board';
+import type { BoardJob } from '@/lib/jobs/types';
 import { sendJson } from '@/lib/api-client';
 
 export type ApiResult = { ok: true; job: BoardJob } | { ok: false; message: string; fields: Record<string, string> };

@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import type { BoardJob } from '@/lib/db/queries/job-board';
+import type { BoardJob } from '@/lib/jobs/types';
 import { STATE_WORDS, type JobState } from '@/lib/jobs/states';
 import { JOB_LIMITS } from '@/lib/schemas/job';
 import { sendJob } from './job-api';

@@ -1,6 +1,6 @@
 import { StateTag } from '@/components/ui/state-tag';
 import { tableClass, tdClass, thClass } from '@/components/ui/table';
-import type { SignOffView } from '@/lib/db/queries/job-board';
+import type { SignOffView } from '@/lib/jobs/types';
 import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
 import { READINGS } from './sign-off-fields';
 

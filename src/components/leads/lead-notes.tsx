@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
-import type { LeadNoteView } from '@/lib/db/queries/lead-notes';
+import type { LeadNoteView } from '@/lib/leads/types';
 import { LEAD_NOTE_LIMITS } from '@/lib/schemas/lead-note';
 import { sendJson } from '@/lib/api-client';
 

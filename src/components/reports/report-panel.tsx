@@ -7,7 +7,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button, ButtonAnchor } from '@/components/ui/button';
 import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import { quoteStatusWord } from '@/components/quotes/status';
-import type { ReportSummary } from '@/lib/db/queries/reports';
+import type { ReportSummary } from '@/lib/reports/types';
 import type { Margin } from '@/lib/reports/arithmetic';
 import { StatusChart } from './status-chart';
 

@@ -1,4 +1,4 @@
-import type { CamRecord } from '@/lib/db/queries/cams';
+import type { CamRecord } from '@/lib/catalogue/types';
 import { vehicleClassOf } from '@/lib/schemas/build-profile';
 
 // The interview form's values (every input is text, as typed) and the two conversions around them:

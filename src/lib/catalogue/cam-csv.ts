@@ -1,5 +1,6 @@
 import type { SessionUser } from '@/lib/auth/guard';
-import { camsBySku, commitCamImport, suppliersByName, type CamImportRow, type CamRecord } from '@/lib/db/queries/cams';
+import { camsBySku, commitCamImport, suppliersByName, type CamImportRow } from '@/lib/db/queries/cams';
+import type { CamRecord } from './types';
 import { formatZodIssues } from '@/lib/schemas/errors';
 import { CatalogueCamSchema, type CatalogueCam } from '@/lib/schemas/catalogue-cam';
 import { centsToDollars, convertCell, parseCsv, toCsv, type CsvCell, type CsvColumn } from './csv';

@@ -1,8 +1,9 @@
-import { listLeadNotes, type LeadNoteView } from '@/lib/db/queries/lead-notes';
-import { countStaleLeads, listLeads, type LeadRecord } from '@/lib/db/queries/leads';
+import { listLeadNotes } from '@/lib/db/queries/lead-notes';
+import { countStaleLeads, listLeads } from '@/lib/db/queries/leads';
 import { getShopSettings } from '@/lib/db/queries/settings';
 import type { LeadStatus } from '@/lib/schemas/lead';
 import { staleCutoff, staleDays } from './stale';
+import type { LeadNoteView, LeadRecord } from './types';
 
 // One page of the leads list with the follow-up facts the leads page and GET /api/leads both show: how
 // long each new lead has waited without contact (when past the shop's limit) and how many are waiting

@@ -1,6 +1,6 @@
 import { valuesFromBuild, type InterviewValues } from '@/lib/builds/interview-values';
-import type { BaselineCardOption } from '@/lib/db/queries/builds';
-import type { LeadRecord } from '@/lib/db/queries/leads';
+import type { BaselineCardOption } from '@/lib/builds/types';
+import type { LeadRecord } from './types';
 import { LeadAnswersSchema } from '@/lib/schemas/lead';
 import { buildProfileFromAnswers, engineLiters } from './profile';
 

@@ -1,6 +1,6 @@
 import { ENGINE_PRESETS } from '@/lib/builds/interview-values';
 import { camCardOf } from '@/lib/catalogue/cam-card-of';
-import type { BaselineCardOption } from '@/lib/db/queries/builds';
+import type { BaselineCardOption } from '@/lib/builds/types';
 import { BuildProfileSchema, type BuildProfile, type BuildProfileInput } from '@/lib/schemas/build-profile';
 import type { LeadAnswers } from '@/lib/schemas/lead';
 

@@ -1,6 +1,6 @@
 import type { CautionKind, NeedKind } from '@/lib/advisor';
 import { idleCharacter, type IdleCharacter } from '@/lib/advisor/idle';
-import type { ShopRanking, ShopRankingEntry } from '@/lib/advisor-service';
+import type { ShopRanking, ShopRankingEntry } from '@/lib/ranking/types';
 import type { LeadAnswers } from '@/lib/schemas/lead';
 
 // What the customer saw: the top three of the shop's ranking, retold in plain words for someone who

@@ -1,4 +1,4 @@
-import { rankForShop } from '@/lib/advisor-service';
+import { rankForShop } from '@/lib/ranking/rank-for-shop';
 import { randomToken } from '@/lib/auth/tokens';
 import { listBaselineCards } from '@/lib/db/queries/builds';
 import { createLead, emissionsCertifiedIds } from '@/lib/db/queries/leads';

@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { rankForShop } from '@/lib/advisor-service';
+import { rankForShop } from '@/lib/ranking/rank-for-shop';
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';

@@ -3,13 +3,13 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken, randomToken } from '@/lib/auth/tokens';
 import { invalid, notFound, refused, runWrite } from '@/lib/db/write';
 import { LifecycleRefused, moveQuote } from '@/lib/db/queries/quote-lifecycle';
-import { takeSnapshot } from '@/lib/db/queries/quote-snapshot';
 import { freezeSnapshot, getQuote, isFrozen, lockQuoteWithParts, presentQuote, shopSettingsRow, snapshotSource } from '@/lib/db/queries/quotes';
 import { appBaseUrl } from '@/lib/env';
 import { MailError, sendMail } from '@/lib/mail';
 import { stateWord, validUntilFrom } from './lifecycle';
 import { mailShop, quoteSentMail } from './quote-notices';
 import { mailNotSent, recordOrThrow } from './refusals';
+import { takeSnapshot } from './snapshot';
 import type { QuoteRecord } from './types';
 
 // Sending a quote: a fresh private link e-mailed to the customer, the quote moved to "sent".

@@ -1,4 +1,4 @@
-import type { BaselineCardOption } from '@/lib/db/queries/builds';
+import type { BaselineCardOption } from '@/lib/builds/types';
 import { buildProfileFromAnswers } from '@/lib/leads/profile';
 import { answersInWords, CHOICE_QUESTIONS } from '@/lib/leads/questions';
 import { fromPrice } from '@/lib/leads/shortlist';

@@ -1,4 +1,4 @@
-import type { ShopRanking } from '@/lib/advisor-service';
+import type { ShopRanking } from '@/lib/ranking/types';
 import { shortlistForCustomer, shortlistFrom } from '@/lib/leads/shortlist';
 import type { LeadAnswers } from '@/lib/schemas/lead';
 

@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 // Spec-sheet attachments' metadata (migration 20261202000300); the bytes live in the blob store
 // (src/lib/storage/), and src/lib/storage/attachments.ts reads and writes both.
@@ -9,7 +16,10 @@ export type AttachmentEntityType = (typeof ATTACHMENT_ENTITY_TYPES)[number];
 export const ATTACHMENT_CONTENT_TYPES = ['application/pdf', 'image/png', 'image/jpeg'] as const;
 export type AttachmentContentType = (typeof ATTACHMENT_CONTENT_TYPES)[number];
 
-export class CatalogueAttachment extends Model<InferAttributes<CatalogueAttachment>, InferCreationAttributes<CatalogueAttachment>> {
+export class CatalogueAttachment extends Model<
+  InferAttributes<CatalogueAttachment>,
+  InferCreationAttributes<CatalogueAttachment>
+> {
   declare id: CreationOptional<number>;
   declare entityType: AttachmentEntityType;
   declare entityId: number;
@@ -35,7 +45,13 @@ export class CatalogueAttachment extends Model<InferAttributes<CatalogueAttachme
         uploadedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'CatalogueAttachment', tableName: 'catalogue_attachments', underscored: true, updatedAt: false },
+      {
+        sequelize,
+        modelName: 'CatalogueAttachment',
+        tableName: 'catalogue_attachments',
+        underscored: true,
+        updatedAt: false,
+      },
     );
   }
 }

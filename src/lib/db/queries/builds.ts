@@ -4,6 +4,7 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { conflict, invalid, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { BUILD_RECORD_LIMITS, type BuildCreate, type BuildListQuery, type BuildUpdate } from '@/lib/schemas/build';
+import type { BaselineCardOption } from '@/lib/builds/types';
 import { Build, Cam, Customer, db } from '../models';
 import { refreshDynoGains } from './dyno-gains';
 import { linkLeadToCustomer } from './lead-links';
@@ -184,12 +185,6 @@ export async function updateBuild(id: number, expectedVersion: number, values: B
     { reload: () => getBuild(id) },
   );
 }
-
-export type BaselineCardOption = {
-  id: number; sku: string; name: string; baselineForLiters: number | null;
-  intakeDuration050: number; exhaustDuration050: number; intakeAdvertised: number | null; exhaustAdvertised: number | null;
-  intakeLiftIn: number; exhaustLiftIn: number; lsa: number; intakeCenterline: number; rockerRatio: number; springMaxLiftIn: number | null;
-};
 
 /** The catalogue's factory-baseline cards (not archived), for "the cam in the engine now". */
 export async function listBaselineCards(): Promise<BaselineCardOption[]> {

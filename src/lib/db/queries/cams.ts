@@ -4,43 +4,11 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { changedFields, conflict, countReferences, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { CATALOGUE_CAM_FIELDS, type CamListQuery, type CatalogueCam } from '@/lib/schemas/catalogue-cam';
+import type { CamRecord, SupplierOption } from '@/lib/catalogue/types';
 import { Cam, Supplier } from '../models';
 
 // The shop's cams: list, read, create, change, archive, import and export. Route handlers and pages
 // call these; nothing else builds queries on the cams table.
-
-export type CamRecord = {
-  id: number;
-  sku: string;
-  name: string;
-  supplierId: number | null;
-  supplierName: string | null;
-  intakeDuration050: number;
-  exhaustDuration050: number;
-  intakeAdvertised: number | null;
-  exhaustAdvertised: number | null;
-  intakeLiftIn: number;
-  exhaustLiftIn: number;
-  lsa: number;
-  intakeCenterline: number;
-  rockerRatio: number;
-  springMaxLiftIn: number | null;
-  deactivationCompatible: boolean;
-  emissionsCertified: boolean;
-  isFactoryBaseline: boolean;
-  baselineForLiters: number | null;
-  priceCents: number;
-  costCents: number;
-  stockOnHand: number;
-  active: boolean;
-  archivedAt: string | null;
-  notes: string | null;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-};
-
-export type SupplierOption = { id: number; name: string };
 
 type CamWithSupplier = Cam & { supplier?: Supplier | null };
 

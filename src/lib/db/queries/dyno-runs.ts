@@ -4,9 +4,9 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { invalid, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import { AIR_NEEDED_BY, correctionFor, type Correction, type CorrectionStandard } from '@/lib/dyno/correction';
-import type { DynoType } from '@/lib/dyno/dyno-type';
-import { correctedFigure, peaksOf, pullWithPower, round1, type PullPoint } from '@/lib/dyno/figures';
+import { correctedFigure, peaksOf, pullWithPower, round1 } from '@/lib/dyno/figures';
 import type { DynoRunValues } from '@/lib/schemas/dyno-run';
+import type { DynoRunView } from '@/lib/dyno/types';
 import { Build, Cam, DynoRun, Quote, User } from '../models';
 import { refreshDynoGains } from './dyno-gains';
 
@@ -15,25 +15,6 @@ import { refreshDynoGains } from './dyno-gains';
 // follow the formula in src/lib/dyno/correction.ts.
 
 export const JOB_QUOTE_STATUSES = ['deposit-paid', 'accepted'] as const;
-
-export type DynoRunView = {
-  id: number;
-  buildId: number;
-  quoteId: number | null;
-  camId: number | null;
-  camName: string | null;
-  phase: 'before' | 'after';
-  dynoType: DynoType;
-  runAt: string;
-  recordedBy: string | null;
-  air: { airTempC: number | null; baroKpa: number | null; humidityPct: number | null };
-  correction: Correction | null;
-  observed: { peakHp: number | null; peakHpRpm: number | null; peakTorqueLbFt: number | null; peakTorqueRpm: number | null };
-  corrected: { peakHp: number | null; peakTorqueLbFt: number | null } | null;
-  curve: PullPoint[] | null;
-  correctedCurve: PullPoint[] | null;
-  notes: string | null;
-};
 
 type RunWithRefs = DynoRun & { cam?: Cam | null; recordedBy?: User | null };
 

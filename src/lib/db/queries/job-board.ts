@@ -1,42 +1,16 @@
 import 'server-only';
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import { rolesWith } from '@/lib/auth/policy';
-import { readingsOf, signOffWarnings, type SignOffReadings, type SignOffWarning } from '@/lib/jobs/sign-off-limits';
-import { nextStates, type BoardState, type JobState } from '@/lib/jobs/states';
+import { readingsOf, signOffWarnings } from '@/lib/jobs/sign-off-limits';
+import { nextStates, type BoardState } from '@/lib/jobs/states';
 import type { JobListQuery } from '@/lib/schemas/job';
+import type { BoardJob, SignOffView } from '@/lib/jobs/types';
 import { Build, Cam, Customer, db, Job, JobSignOff, Quote, User } from '../models';
 
 // The job board: every deposit-paid quote is a job. Its booking (date, bay, technician, state) lives in
 // `jobs`; a paid quote with no row there is "not booked yet". A quote closed at the counter (balance paid)
 // stays a job until the car is collected, so closing never hides a car that is still in the bay. Never carries prices: the workshop needs
 // the work, not the money. Jobs are addressed by their quote's id, the same id the job sheet uses.
-
-export type SignOffView = SignOffReadings & {
-  tuneFile: string;
-  notes: string | null;
-  signedBy: string | null;
-  signedAt: string;
-  warnings: SignOffWarning[];
-};
-
-export type BoardJob = {
-  id: number;
-  number: string;
-  customerName: string;
-  vehicleLabel: string;
-  camName: string | null;
-  state: BoardState;
-  nextStates: readonly JobState[];
-  bookedFor: string | null;
-  bay: number | null;
-  technician: { id: number; name: string } | null;
-  /** 0 until the job is first booked. */
-  version: number;
-  stateChangedAt: string | null;
-  due: 'overdue' | 'today' | null;
-  deactivationActive: boolean;
-  signOff: SignOffView | null;
-};
 
 /** Quote statuses that are jobs: paid, or paid and closed (see src/lib/quotes/lifecycle.ts). */
 export const JOB_QUOTE_STATES = ['deposit-paid', 'closed'] as const;

@@ -7,7 +7,8 @@ import { readingsOf, signOffWarnings } from '@/lib/jobs/sign-off-limits';
 import { canMove, illegalMoveMessage, SIGN_OFF_STATES, STATE_WORDS, type BoardState, type JobState } from '@/lib/jobs/states';
 import type { JobPatch, SignOffInput } from '@/lib/schemas/job';
 import { Build, Job, JobSignOff, Quote } from '../models';
-import { deactivationActiveOf, getBoardJob, JOB_QUOTE_STATES, listAssignableStaff, type BoardJob } from './job-board';
+import type { BoardJob } from '@/lib/jobs/types';
+import { deactivationActiveOf, getBoardJob, JOB_QUOTE_STATES, listAssignableStaff } from './job-board';
 
 // Writes to the board. Each locks the quote row first (then the job row), so two people booking the same
 // freshly paid job queue instead of racing to create two bookings, and every write carries its audit row.

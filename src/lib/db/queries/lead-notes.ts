@@ -4,10 +4,10 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import type { LeadNoteInput } from '@/lib/schemas/lead-note';
+import type { LeadNoteView } from '@/lib/leads/types';
 import { Lead, LeadNote, User } from '../models';
 
 // The note log per lead: who, when, what was said. Oldest first, as a conversation reads.
-export type LeadNoteView = { id: number; leadId: number; body: string; author: string | null; createdAt: string };
 
 type NoteRow = LeadNote & { user?: User | null };
 const viewOf = (n: NoteRow): LeadNoteView => ({ id: n.id, leadId: n.leadId, body: n.body, author: n.user?.name ?? null, createdAt: new Date(n.createdAt).toISOString() });

@@ -6,24 +6,12 @@ import { recordAudit } from '@/lib/audit';
 import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
 import type { Shortlist } from '@/lib/leads/shortlist';
 import type { LeadAnswers, LeadStatus } from '@/lib/schemas/lead';
+import type { LeadRecord } from '@/lib/leads/types';
 import { Cam, db, Lead } from '../models';
 import { getShopSettings } from './settings';
 
 // Leads from the at-home questionnaire: stored answers, the shortlist the customer saw, a status the
 // shop moves along, and only the SHA-256 of the customer's private result link.
-
-export type LeadRecord = {
-  id: number;
-  name: string;
-  email: string | null;
-  phone: string | null;
-  answers: Partial<LeadAnswers>;
-  shortlist: Shortlist | null;
-  status: LeadStatus;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-};
 
 function toRecord(lead: Lead): LeadRecord {
   return {

@@ -1,9 +1,10 @@
 import 'server-only';
 import { QueryTypes } from 'sequelize';
-import { averageCents, marginOfSums as marginOf, netDepositsCents, rateBp, type Margin } from '@/lib/reports/arithmetic';
+import { averageCents, marginOfSums as marginOf, netDepositsCents, rateBp } from '@/lib/reports/arithmetic';
 import { addDays, type ReportRange } from '@/lib/schemas/report';
+import type { ReportSummary, StatusFigure, TopCam } from '@/lib/reports/types';
 import { db } from '../models';
-import { QUOTE_STATUSES, type QuoteStatus } from '../models/quote';
+import { QUOTE_STATUSES } from '../models/quote';
 
 // The manager's numbers for a date range (both days included, UTC). What each number counts:
 // - quotes by status, their values, the average and the conversion: quotes *created* in the range,
@@ -16,20 +17,6 @@ import { QUOTE_STATUSES, type QuoteStatus } from '../models/quote';
 //   current cost (quote lines keep no cost of their own);
 // - most-quoted cams: the quote's chosen cam, top 5 by number of quotes, with how many converted.
 // Every amount is integer cents; formatting is the page's job.
-
-export type StatusFigure = { status: QuoteStatus; count: number; valueCents: number };
-export type TopCam = { camId: number; sku: string; name: string; quotes: number; deposits: number };
-export type ReportSummary = {
-  range: ReportRange;
-  created: { count: number; valueCents: number };
-  byStatus: StatusFigure[];
-  conversion: { sentCount: number; depositPaidCount: number; rateBp: number | null };
-  averageQuoteCents: number | null;
-  deposits: { count: number; takenCents: number; refundedCents: number; netCents: number };
-  balances: { count: number; takenCents: number; refundedCents: number; netCents: number };
-  margin: { cams: Margin; parts: Margin; total: Margin };
-  topCams: TopCam[];
-};
 
 const PAID_PAYMENT_STATES = ['paid', 'partially-refunded', 'refunded'];
 /** A quote whose deposit was paid: booked, or done and closed (fixed words, so written into the SQL). */

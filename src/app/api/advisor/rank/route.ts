@@ -1,5 +1,5 @@
 import { NextResponse } from 'next/server';
-import { rankForShop } from '@/lib/advisor-service';
+import { rankForShop } from '@/lib/ranking/rank-for-shop';
 import { invalidFields } from '@/lib/http/responses';
 import { route } from '@/lib/http/route';
 import { RankRequestSchema } from '@/lib/schemas/advisor-request';

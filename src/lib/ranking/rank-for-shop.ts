@@ -1,5 +1,6 @@
-import { rankCams, type Need as AdvisorNeed, type RankingResult } from '@/lib/advisor';
-import { evaluateNeedRules, type Need as CatalogueNeed, type NeedRuleInput } from '@/lib/catalogue/need-rules';
+import 'server-only';
+import { rankCams, type Need as AdvisorNeed } from '@/lib/advisor';
+import { evaluateNeedRules, type NeedRuleInput } from '@/lib/catalogue/need-rules';
 import { camCardsForRanking } from '@/lib/db/queries/advisor-cams';
 import { loadDynoHistory } from '@/lib/db/queries/dyno-history';
 import { loadNeedRules } from '@/lib/db/queries/rules';
@@ -8,28 +9,15 @@ import { jobItemLine, jobLines, jobPriceCents } from '@/lib/quotes/job-price';
 import { lineNetCents } from '@/lib/quotes/pricing';
 import { vehicleClassOf, type BuildProfile, type VehicleClass } from '@/lib/schemas/build-profile';
 import type { CamCard } from '@/lib/schemas/cam-card';
+import type { PricedItem, ShopRanking } from './types';
 
-// Joins the pure advisor to the shop's data: its catalogue, its need rules and its labour rate.
+// Joins the pure advisor to the shop's data: its catalogue, its need rules, its labour rate and its dyno
+// history. It calls the query layer (src/lib/db/queries), never the other way round: a query module that
+// needs a ranking is handed one by its caller (ESLint refuses db/queries → ranking).
+//
 // The advisor says what a cam needs in kinds ("springs", "install"); the manager's rules say which
 // parts and labour those are for this vehicle class; jobLines()/jobPriceCents() price the whole job
 // once, and that one number is what the cost reason, the shortlist, the customer and the quote show.
-
-export type PricedItem = CatalogueNeed & { priceCents: number };
-export type ShopRankingEntry = RankingResult['rankings'][number] & {
-  camPriceCents: number;
-  neededItems: PricedItem[];
-  neededItemsCents: number;
-  /** The whole job before tax (cam, needed parts and labour, tune), cents; null when the cam has no price. */
-  jobPriceCents: number | null;
-  /** Units on the shop's shelf (the catalogue's stock on hand), and whether the cam is emissions-certified. */
-  stockOnHand: number; emissionsCertified: boolean;
-};
-export type ShopRanking = Omit<RankingResult, 'rankings'> & {
-  rankings: ShopRankingEntry[];
-  vehicleClass: VehicleClass;
-  /** How many of the rankings, from the top, carry their curve; the rest have an empty one (ask for them by camIds). */
-  curvesIncluded: number;
-};
 
 /** Curves are the bulk of an answer (2,000 cams: ~18 MB); by default only the top of the list carries them. */
 export const DEFAULT_CURVE_LIMIT = 20;
@@ -37,7 +25,12 @@ export const DEFAULT_CURVE_LIMIT = 20;
 type Priced = { items: PricedItem[]; jobPriceCents: number | null };
 
 /** The rules' parts and labour for a cam's needs, each priced as its quote line will be. */
-export function pricedItems(rules: readonly NeedRuleInput[], needs: readonly AdvisorNeed[], vehicleClass: VehicleClass, laborRateCents: number): PricedItem[] {
+export function pricedItems(
+  rules: readonly NeedRuleInput[],
+  needs: readonly AdvisorNeed[],
+  vehicleClass: VehicleClass,
+  laborRateCents: number,
+): PricedItem[] {
   return evaluateNeedRules(rules, { needs, vehicleClass }).map((need) => {
     const line = jobItemLine(need, laborRateCents);
     return { ...need, priceCents: line ? lineNetCents(line) : 0 };
@@ -46,10 +39,19 @@ export function pricedItems(rules: readonly NeedRuleInput[], needs: readonly Adv
 
 export async function rankForShop(
   build: BuildProfile,
-  { camIds, includeCurves = true, curveLimit = DEFAULT_CURVE_LIMIT }: { camIds?: number[]; includeCurves?: boolean; curveLimit?: number } = {},
+  {
+    camIds,
+    includeCurves = true,
+    curveLimit = DEFAULT_CURVE_LIMIT,
+  }: { camIds?: number[]; includeCurves?: boolean; curveLimit?: number } = {},
 ): Promise<{ ok: true; result: ShopRanking } | { ok: false; missingIds: number[] }> {
   // The shop's measured before/after results on similar engines nudge the predicted gains of the cams they were measured on.
-  const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([camCardsForRanking(camIds), loadNeedRules(), getShopSettings(), loadDynoHistory(build, camIds)]);
+  const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([
+    camCardsForRanking(camIds),
+    loadNeedRules(),
+    getShopSettings(),
+    loadDynoHistory(build, camIds),
+  ]);
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;
   const vehicleClass = vehicleClassOf(build);
@@ -57,7 +59,10 @@ export async function rankForShop(
   // Called by the advisor once per cam with the needs it found; the job it prices is kept for the entry.
   const priceJob = (cam: CamCard, needs: readonly AdvisorNeed[]): number | null => {
     const items = pricedItems(rules, needs, vehicleClass, laborRateCents);
-    const job = cam.priceCents === undefined ? null : jobPriceCents(jobLines({ id: 0, description: cam.name, priceCents: cam.priceCents }, items, laborRateCents));
+    const job =
+      cam.priceCents === undefined
+        ? null
+        : jobPriceCents(jobLines({ id: 0, description: cam.name, priceCents: cam.priceCents }, items, laborRateCents));
     priced.set(String(cam.id), { items, jobPriceCents: job });
     return job;
   };
