@@ -138,6 +138,12 @@ describe('the measured history a ranking reads', () => {
     const modelGain = (at(without, lowRpm) / baseAt - 1) * 100;
     const blended = (at(withHistory, lowRpm) / baseAt - 1) * 100;
     expect(blended).toBeCloseTo((2 * modelGain + 20) / 3, 1);
+
+    // The job page draws the prediction over this build's own pulls: asked to leave the build out, the
+    // ranking has no history and gives the model's own curve again.
+    const leftOut = (await rank({ build: profile, camIds: [camId], excludeBuildId: BUILD_ID })).body.rankings[0] as RankedCam;
+    expect(leftOut.history).toBeNull();
+    expect(at(leftOut, lowRpm)).toBeCloseTo(at(without, lowRpm), 6);
   });
 
   it('follows the build: a new engine refiles its history, a deleted run takes it away', async () => {

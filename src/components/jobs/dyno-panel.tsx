@@ -9,7 +9,9 @@ import type { DynoRunView } from '@/lib/dyno/types';
 import { DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_DIGITS, AIR_UNIT_TEXT, baroIn, tempIn, type AirUnits } from '@/lib/dyno/units';
 import { DynoRunForm } from './dyno-run-form';
+import { usePredictedCurve } from './use-predicted-curve';
 import { getJson, sendJson } from '@/lib/api-client';
+import type { BuildProfile } from '@/lib/schemas/build-profile';
 
 // The job's dyno runs: measured figures, observed and corrected, a chart of before against after
 // (corrected curves; the before pull is drawn the neutral baseline way), and the form to add one.
@@ -33,7 +35,7 @@ function curveOf(run: DynoRunView): ChartCurve | null {
   return { label: `${run.phase === 'before' ? 'Before' : 'After'} · ${DYNO_TYPE_WORDS[run.dynoType].short.toLowerCase()} dyno · ${run.camName ?? 'cam not named'} · ${when(run.runAt)} (measured, ${run.correction ? STANDARD_NAMES[run.correction.standard] : "uncorrected"})`, points: run.correctedCurve };
 }
 
-export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: number }) {
+export function DynoPanel({ buildId, quoteId, profile }: { buildId: number; quoteId: number; profile: BuildProfile | null }) {
   const { data, error, isLoading, mutate } = useSWR(`/api/dyno-runs?buildId=${buildId}`, fetchRuns);
   const [message, setMessage] = useState<string | null>(null);
   // Shop units by default; a shop that reads °C and kPa switches in the form (not yet a shop setting).
@@ -46,6 +48,9 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
   const afterRuns = runs.filter((r) => r.phase === 'after' && r.correctedCurve);
   const afters = afterRuns.filter((r) => r.dynoType === chartType).map(curveOf).filter((c): c is ChartCurve => c !== null);
   const leftOut = afterRuns.length - afters.length;
+  const fittedCamId = afterRuns.filter((r) => r.dynoType === chartType).at(-1)?.camId ?? null;
+  const prediction = usePredictedCurve(profile, buildId, fittedCamId, chartType === 'engine');
+  const predicted = prediction.data ?? null;
 
   async function remove(run: DynoRunView) {
     if (!window.confirm(`Delete the ${run.phase} run of ${when(run.runAt)}? The audit log keeps what it said.`)) return;
@@ -104,12 +109,14 @@ export function DynoPanel({ buildId, quoteId }: { buildId: number; quoteId: numb
         <figure className="rounded border border-steel-100 bg-paper-raised p-3">
           <PowerChart
             baseline={baseline ?? { label: 'Before (no pull recorded as a curve)', points: [] }}
-            candidates={afters}
+            candidates={predicted ? [...afters, predicted] : afters}
             markers={[]}
-            description={`Measured, corrected torque and power on the ${chartType} dyno: the before pull (solid grey) and ${afters.length} after pull(s), rpm across`}
+            description={`Measured, corrected torque and power on the ${chartType} dyno: the before pull (solid grey) and ${afters.length} after pull(s)${predicted ? ', with the advisor’s predicted curve for the fitted cam and its band' : ''}, rpm across`}
           />
           <figcaption className="mt-2 text-xs text-ink-muted">
             Measured on this shop’s dyno and corrected to standard air. Torque on the left axis, power on the right; power = lb·ft × rpm ÷ 5252. Runs recorded as peak figures only are in the table, not the chart.
+            {predicted ? ' The advisor’s prediction for this build and cam is drawn with its shaded band (flywheel figures at standard air, so only over engine-dyno pulls); this build’s own pulls are not part of it.' : null}
+            {chartType === 'engine' && prediction.error ? ` ${(prediction.error as Error).message}` : null}
             {leftOut ? ` ${leftOut} after pull${leftOut === 1 ? '' : 's'} on the ${chartType === 'chassis' ? 'engine' : 'chassis'} dyno ${leftOut === 1 ? 'is' : 'are'} left out: a ${chartType} run is compared only with ${chartType} runs.` : ''}
           </figcaption>
         </figure>

@@ -43,14 +43,15 @@ export async function rankForShop(
     camIds,
     includeCurves = true,
     curveLimit = DEFAULT_CURVE_LIMIT,
-  }: { camIds?: number[]; includeCurves?: boolean; curveLimit?: number } = {},
+    excludeBuildId,
+  }: { camIds?: number[]; includeCurves?: boolean; curveLimit?: number; excludeBuildId?: number } = {},
 ): Promise<{ ok: true; result: ShopRanking } | { ok: false; missingIds: number[] }> {
   // The shop's measured before/after results on similar engines nudge the predicted gains of the cams they were measured on.
   const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([
     camCardsForRanking(camIds),
     loadNeedRules(),
     getShopSettings(),
-    loadDynoHistory(build, camIds),
+    loadDynoHistory(build, camIds, { excludeBuildId }),
   ]);
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;

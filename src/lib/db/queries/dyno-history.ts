@@ -14,7 +14,18 @@ import { DynoGain } from '../models';
  */
 export const HISTORY_ROWS_PER_SIDE = 200;
 
-type InferredGain = Pick<DynoGain, 'id' | 'camId' | 'displacementCi' | 'intakeFlowCfm' | 'headers' | 'exhaustSystem' | 'intakeManifold' | 'gainPctPeakHp' | 'gainPctByRpm'>;
+type InferredGain = Pick<
+  DynoGain,
+  | 'id'
+  | 'camId'
+  | 'displacementCi'
+  | 'intakeFlowCfm'
+  | 'headers'
+  | 'exhaustSystem'
+  | 'intakeManifold'
+  | 'gainPctPeakHp'
+  | 'gainPctByRpm'
+>;
 
 function entryOf(row: InferredGain): HistoryEntry {
   return {
@@ -33,20 +44,40 @@ function entryOf(row: InferredGain): HistoryEntry {
  * The shop's measured results that can count for this engine, as the advisor's options.history: the
  * jobs within the similarity window (src/lib/dyno/history.ts), nearest displacement first on each side,
  * at most HISTORY_ROWS_PER_SIDE per side, read off the dyno_gains indexes. With exactly one cam asked
- * for, only that cam's jobs are read.
+ * for, only that cam's jobs are read. `excludeBuildId` leaves one build's own results out (the job page
+ * draws the prediction over that build's pulls, so it must not have learnt from them).
  */
-export async function loadDynoHistory(build: BuildProfile, camIds?: readonly number[]): Promise<HistoryEntry[]> {
+export async function loadDynoHistory(
+  build: BuildProfile,
+  camIds?: readonly number[],
+  { excludeBuildId }: { excludeBuildId?: number } = {},
+): Promise<HistoryEntry[]> {
   const e = build.engine;
   const here = displacementCi(e.boreIn, e.strokeIn, e.cylinders);
   const window = similarityWindow(here, e.intakeFlowCfm);
   const oneCam = camIds?.length === 1 ? { camId: camIds[0] } : {};
   const flow = { intakeFlowCfm: { [Op.between]: window.intakeFlowCfm } };
+  const notThisBuild = excludeBuildId === undefined ? {} : { buildId: { [Op.ne]: excludeBuildId } };
   const side = (where: WhereOptions<DynoGain>, direction: 'ASC' | 'DESC') =>
     DynoGain.findAll({
-      attributes: ['id', 'camId', 'displacementCi', 'intakeFlowCfm', 'headers', 'exhaustSystem', 'intakeManifold', 'gainPctPeakHp', 'gainPctByRpm'],
-      where: { ...oneCam, ...where, ...flow },
+      attributes: [
+        'id',
+        'camId',
+        'displacementCi',
+        'intakeFlowCfm',
+        'headers',
+        'exhaustSystem',
+        'intakeManifold',
+        'gainPctPeakHp',
+        'gainPctByRpm',
+      ],
+      where: { ...oneCam, ...where, ...flow, ...notThisBuild },
       // The index order: no sort, and the LIMIT stops the range read early.
-      order: [['displacementCi', direction], ['intakeFlowCfm', direction], ['id', direction]],
+      order: [
+        ['displacementCi', direction],
+        ['intakeFlowCfm', direction],
+        ['id', direction],
+      ],
       limit: HISTORY_ROWS_PER_SIDE,
     });
   const [above, below] = await Promise.all([

@@ -154,7 +154,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
         </section>
       ) : null}
 
-      {job.buildId !== null ? <DynoPanel buildId={job.buildId} quoteId={job.quoteId} /> : null}
+      {job.buildId !== null ? <DynoPanel buildId={job.buildId} quoteId={job.quoteId} profile={p} /> : null}
     </div>
   );
 }

@@ -7,8 +7,8 @@ import { RankRequestSchema } from '@/lib/schemas/advisor-request';
 /** Ranks the shop's cams for one build. */
 export const POST = route(
   { permission: 'advisor.use', body: RankRequestSchema },
-  async ({ body: { build, camIds, includeCurves, curveLimit } }) => {
-    const outcome = await rankForShop(build, { camIds, includeCurves, curveLimit });
+  async ({ body: { build, camIds, includeCurves, curveLimit, excludeBuildId } }) => {
+    const outcome = await rankForShop(build, { camIds, includeCurves, curveLimit, excludeBuildId });
     if (!outcome.ok)
       throw invalidFields([
         { field: 'camIds', message: `no cam in the catalogue has id ${outcome.missingIds.join(', ')}` },
