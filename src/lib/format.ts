@@ -27,6 +27,9 @@ export function centsFromText(text: string): number | null {
   return Number(m[1]) * 100 + Number((m[2] ?? '').padEnd(2, '0'));
 }
 
+/** 123450 → "1234.50": cents as a money box shows them for editing (centsFromText reads them back). */
+export const centsToText = (cents: number) => (cents / 100).toFixed(2);
+
 /** "1,234.5 h"; inches and degrees sit against the figure ("0.550"", "110°"); "—" when there is no value. */
 export function formatNumber(value: number | null | undefined, digits = 0, unit = ''): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';

@@ -4,7 +4,7 @@ import { Form, Formik, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { useVersionedSave } from '@/lib/api-client';
-import { centsFromText, formatMoney } from '@/lib/format';
+import { centsFromText, centsToText, formatMoney } from '@/lib/format';
 import { moneyWithin, numberWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -40,7 +40,7 @@ export function valuesFromRecord(fields: FieldDef[], record: Record<string, unkn
     const v = record?.[f.name];
     if (f.kind === 'bool') out[f.name] = typeof v === 'boolean' ? v : false;
     else if (v === null || v === undefined) out[f.name] = '';
-    else if (f.kind === 'money') out[f.name] = (Number(v) / 100).toFixed(2);
+    else if (f.kind === 'money') out[f.name] = centsToText(Number(v));
     else out[f.name] = String(v);
   }
   return out;

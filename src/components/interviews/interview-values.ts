@@ -2,6 +2,7 @@ import type { FormikErrors } from 'formik';
 import { setIn } from 'formik';
 import type { InterviewValues } from '@/lib/builds/interview-values';
 import { buildPayloadChecks } from '@/lib/forms/build-checks';
+import { formatMoney } from '@/lib/format';
 import { BUILD_LIMITS } from '@/lib/schemas/build-profile';
 
 // The interview form's side of its values: form → the JSON POST/PATCH /api/builds takes, and the server's
@@ -76,11 +77,11 @@ export function payloadFromValues(values: InterviewValues, mode: 'create' | 'edi
   };
 }
 
-const budgetMax = BUILD_LIMITS.budgetCents.max / 100;
+const budgetMax = formatMoney(BUILD_LIMITS.budgetCents.max, { whole: true });
 
 /** The budget is typed in dollars; say its limit in dollars too. */
 function reword(field: string, message: string): string {
-  if (field === 'profile.use.budgetCents') return message.includes('required') ? 'budget is required ($), or choose “Not sure yet”' : `budget must be between $0 and $${budgetMax.toLocaleString('en-US')}`;
+  if (field === 'profile.use.budgetCents') return message.includes('required') ? 'budget is required ($), or choose “Not sure yet”' : `budget must be between $0 and ${budgetMax}`;
   return message;
 }
 

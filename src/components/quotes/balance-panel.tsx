@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { centsFromText, formatMoney } from '@/lib/format';
+import { centsFromText, centsToText, formatMoney } from '@/lib/format';
 import { Button } from '@/components/ui/button';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import type { QuoteRun } from './quote-run';
@@ -11,7 +11,7 @@ import type { QuoteRun } from './quote-run';
 // the counter. The server checks the amount against the balance again and refuses a stale version.
 export function BalancePanel({ quote, url, run, busy, canWrite }: { quote: QuoteRecord; url: string; run: QuoteRun; busy: boolean; canWrite: boolean }) {
   const due = quote.balanceDueCents;
-  const [amount, setAmount] = useState((due / 100).toFixed(2));
+  const [amount, setAmount] = useState(centsToText(due));
   const [method, setMethod] = useState<'cash' | 'card-present'>('card-present');
   const [problem, setProblem] = useState<string | null>(null);
   const open = quote.status === 'deposit-paid' && due > 0;

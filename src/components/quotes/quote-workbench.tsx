@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { getJson, sendJson } from '@/lib/api-client';
-import { centsFromText, formatMoney, percentFromBp } from '@/lib/format';
+import { centsFromText, centsToText, formatMoney, percentFromBp } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { PageHeader } from '@/components/ui/page-header';
@@ -27,7 +27,7 @@ type Notice = { tone: 'ok' | 'fault' | 'caution'; title: string; detail?: string
 
 
 const toEdit = (q: QuoteRecord): EditLine[] =>
-  q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: (l.unitPriceCents / 100).toFixed(2), discountCents: l.discountCents ?? 0, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
+  q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: centsToText(l.unitPriceCents), discountCents: l.discountCents ?? 0, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
 
 function errorText(body: { message?: string; errors?: { field: string; message: string }[] }) {
   return body.errors?.length ? body.errors.map((e) => `${e.field}: ${e.message}`).join('; ') : undefined;

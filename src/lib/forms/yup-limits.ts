@@ -1,4 +1,5 @@
 import * as yup from 'yup';
+import { centsToText } from '@/lib/format';
 
 // formik's checks in the browser, built with yup (formik's own pairing) from the limits the zod schemas
 // export (CATALOGUE_CAM_LIMITS, LABOR_LIMITS, SETTINGS_LIMITS, …), so each limit is written once. They say
@@ -38,8 +39,7 @@ export function moneyWithin(
     .string()
     .test('money', `${label} must be dollars and cents, e.g. 129.50`, (v) => !v?.trim() || toCents(v) !== null);
   if (range) {
-    const dollars = (cents: number) => (cents / 100).toFixed(2);
-    schema = schema.test('range', `${label} must be between $${dollars(range.min)} and $${dollars(range.max)}`, (v) => {
+    schema = schema.test('range', `${label} must be between $${centsToText(range.min)} and $${centsToText(range.max)}`, (v) => {
       const cents = v?.trim() ? toCents(v) : null;
       return cents === null || (cents >= range.min && cents <= range.max);
     });

@@ -1,6 +1,7 @@
 import type { CautionKind, NeedKind } from '@/lib/advisor';
 import { idleCharacter, type IdleCharacter } from '@/lib/advisor/idle';
 import type { ShopRanking, ShopRankingEntry } from '@/lib/ranking/types';
+import { formatMoney, formatNumber } from '@/lib/format';
 import type { LeadAnswers } from '@/lib/schemas/lead';
 
 // What the customer saw: the top three of the shop's ranking, retold in plain words for someone who
@@ -32,7 +33,7 @@ const IDLE_WORDS: Record<IdleCharacter, string> = { smooth: 'idle smoothly', not
 const WISH_WORDS: Record<LeadAnswers['idle'], string> = { smooth: 'a smooth idle', noticeable: 'a little lope', aggressive: 'a big lope' };
 const USE_WORDS: Record<LeadAnswers['use'], string> = { daily: 'everyday driving', towing: 'towing', street: 'fun on the street', strip: 'the track' };
 
-const roundTo100 = (rpm: number) => (Math.round(rpm / 100) * 100).toLocaleString('en-US');
+const roundTo100 = (rpm: number) => formatNumber(Math.round(rpm / 100) * 100);
 const wholePct = (n: number) => `${Math.round(Math.abs(n))} %`;
 
 function plainReasons(r: ShopRankingEntry, answers: Pick<LeadAnswers, 'idle' | 'use'>, certified: boolean, emissionsRequired: boolean): string[] {
@@ -111,12 +112,12 @@ export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineL
 
 /** The whole job's price as every screen shows it, to the cent: "$3,007.00". */
 export function jobPrice(cents: number): string {
-  return (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: 2, maximumFractionDigits: 2 });
+  return formatMoney(cents);
 }
 
 /** "from $1,250": rounded down to whole dollars, never a promise of an exact price. */
 export function fromPrice(cents: number): string {
-  return `from ${Math.floor(cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 })}`;
+  return `from ${formatMoney(Math.floor(cents / 100) * 100, { whole: true })}`;
 }
 
 /**

@@ -2,6 +2,7 @@
 // items at the catalogue price and may give a discount up to the share of the job the manager set in
 // the shop settings; a different price, a discount above that share, or an untaxed line that names no
 // catalogue item needs a manager. A manager may do each of these; the caller audits what was allowed.
+import { formatMoney, percentFromBp } from '@/lib/format';
 import type { FieldError } from '@/lib/http/responses';
 import { divideRoundHalfUp, lineTotalCents, type QuoteLineKind } from './pricing';
 
@@ -31,8 +32,6 @@ export function discountShareBp(lines: readonly Pick<LineForAuthority, 'quantity
   return divideRoundHalfUp(discount * 10_000, gross);
 }
 
-const percent = (bp: number) => `${(bp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} %`;
-const dollars = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
 
 export function checkPriceAuthority(lines: readonly LineForAuthority[], options: { role: PricingRole; maxCounterDiscountBp: number; field: string }): AuthorityVerdict {
   const manager = options.role === 'manager';
@@ -51,7 +50,7 @@ export function checkPriceAuthority(lines: readonly LineForAuthority[], options:
     const allowed = line.unitPriceCents === line.cataloguePriceCents || line.unitPriceCents === line.keptPriceCents;
     if (allowed) return;
     if (!manager) {
-      forbidden.push({ field: `${at}.unitPriceCents`, message: `counter staff sell at the catalogue price (${dollars(line.cataloguePriceCents)}); a different price needs a manager` });
+      forbidden.push({ field: `${at}.unitPriceCents`, message: `counter staff sell at the catalogue price (${formatMoney(line.cataloguePriceCents)}); a different price needs a manager` });
     } else overrides.push({ index, description: line.description, what: 'price', cataloguePriceCents: line.cataloguePriceCents, unitPriceCents: line.unitPriceCents });
   });
   const discountBp = discountShareBp(lines);
@@ -60,7 +59,7 @@ export function checkPriceAuthority(lines: readonly LineForAuthority[], options:
     const first = lines.findIndex((l) => l.discountCents > 0);
     forbidden.push({
       field: `${options.field}.${first}.discountCents`,
-      message: `the discounts come to ${percent(discountBp)} of the job; counter staff may give up to ${percent(options.maxCounterDiscountBp)}, more needs a manager`,
+      message: `the discounts come to ${percentFromBp(discountBp)} of the job; counter staff may give up to ${percentFromBp(options.maxCounterDiscountBp)}, more needs a manager`,
     });
   }
   return { forbidden, overrides, discountBp, discountOverLimit };

@@ -1,7 +1,8 @@
+import { formatMoney, longDate, percentFromBp } from '@/lib/format';
 import { palette } from '@/lib/palette';
 import type { QuoteRecord } from './types';
 import { counts, invoiceNumber, METHOD_WORDS, PURPOSE_WORDS, receiptNumber } from './balance';
-import { longDate, money, openPdf } from './pdf';
+import { openPdf } from './pdf';
 import { isTaxable } from './pricing';
 
 // A receipt for one payment and the final invoice of a job paid in full, as PDFs (pdfkit, the app's
@@ -19,7 +20,7 @@ function startDocument(title: string, shop: DocumentShop): Kit {
   const row = (label: string, cents: number, strong = false) => {
     const y = doc.y;
     doc.font(strong ? 'bold' : 'regular').fontSize(strong ? 12 : 10).text(label, left, y, { width: width - 120 });
-    doc.text(money(cents), amountX, y, { width: 110, align: 'right' });
+    doc.text(formatMoney(cents), amountX, y, { width: 110, align: 'right' });
     doc.x = left;
   };
   doc.moveDown().fillColor(palette.ink.DEFAULT);
@@ -69,18 +70,18 @@ export function invoicePdf(q: QuoteRecord, shop: DocumentShop): Promise<Buffer> 
   doc.moveDown(0.5);
   for (const line of q.lines) {
     const y = doc.y;
-    const detail = `${line.kind === 'labor' ? `${line.quantity} h at ${money(line.unitPriceCents)}` : `${line.quantity} × ${money(line.unitPriceCents)}`}${line.discountCents ? `, ${money(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
+    const detail = `${line.kind === 'labor' ? `${line.quantity} h at ${formatMoney(line.unitPriceCents)}` : `${line.quantity} × ${formatMoney(line.unitPriceCents)}`}${line.discountCents ? `, ${formatMoney(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
     doc.font('regular').fontSize(10).text(line.description, left, y, { width: width - 120 });
     doc.fontSize(8).fillColor(palette.ink.muted).text(detail, { width: width - 120 }).fillColor(palette.ink.DEFAULT);
     const after = doc.y;
-    doc.fontSize(10).text(money(line.totalCents), left + width - 110, y, { width: 110, align: 'right' });
+    doc.fontSize(10).text(formatMoney(line.totalCents), left + width - 110, y, { width: 110, align: 'right' });
     doc.y = Math.max(after, doc.y) + 4;
     doc.x = left;
   }
   doc.moveTo(left, doc.y).lineTo(left + width, doc.y).stroke(palette.steel[500]);
   doc.moveDown(0.5);
   row('Before tax', q.subtotalCents);
-  row(`Sales tax (${(q.taxRateBp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} % on parts and goods)`, q.taxCents);
+  row(`Sales tax (${percentFromBp(q.taxRateBp)} on parts and goods)`, q.taxCents);
   row('Total', q.totalCents, true);
   doc.moveDown().font('bold').fontSize(12).text('Payments', left);
   for (const p of takenPayments(q)) {

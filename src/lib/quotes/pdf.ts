@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import PDFDocument from 'pdfkit';
+import { formatMoney, longDate, percentFromBp } from '@/lib/format';
 import { palette } from '@/lib/palette';
 import { CUSTOMER_CAUTIONS, REFUND_NOTE } from './cautions';
 import type { QuoteRecord } from './types';
@@ -24,9 +25,6 @@ export type QuoteDocument = QuoteFigures & {
 };
 
 const FONT_DIR = path.join(process.cwd(), 'src', 'app', 'fonts');
-export const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
-export const longDate = (iso: string) => new Date(`${iso.slice(0, 10)}T12:00:00Z`).toLocaleDateString('en-US', { year: 'numeric', month: 'long', day: 'numeric', timeZone: 'UTC' });
-const percent = (bp: number) => `${(bp / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} %`;
 
 let fonts: { regular: Buffer; bold: Buffer } | undefined;
 function loadFonts() {
@@ -71,11 +69,11 @@ export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {})
   doc.moveDown(0.5);
   for (const line of q.lines) {
     const y = doc.y;
-    const detail = `${line.kind === 'labor' ? `${line.quantity} h of labour at ${money(line.unitPriceCents)}` : `${line.quantity} × ${money(line.unitPriceCents)}`}${line.discountCents ? `, ${money(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
+    const detail = `${line.kind === 'labor' ? `${line.quantity} h of labour at ${formatMoney(line.unitPriceCents)}` : `${line.quantity} × ${formatMoney(line.unitPriceCents)}`}${line.discountCents ? `, ${formatMoney(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
     doc.font('regular').fontSize(10).text(line.description, left, y, { width: width - 110 });
     doc.fontSize(8).fillColor(palette.ink.muted).text(detail, { width: width - 110 }).fillColor(palette.ink.DEFAULT);
     const after = doc.y;
-    doc.fontSize(10).text(money(line.totalCents), amountX, y, { width: 100, align: 'right' });
+    doc.fontSize(10).text(formatMoney(line.totalCents), amountX, y, { width: 100, align: 'right' });
     doc.y = Math.max(after, doc.y) + 4;
   }
   doc.moveTo(left, doc.y).lineTo(left + width, doc.y).stroke(palette.steel[500]);
@@ -83,11 +81,11 @@ export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {})
   const row = (label: string, cents: number, strong = false) => {
     const y = doc.y;
     doc.font(strong ? 'bold' : 'regular').fontSize(strong ? 12 : 10).text(label, left, y, { width: width - 110 });
-    doc.text(money(cents), amountX, y, { width: 100, align: 'right' });
+    doc.text(formatMoney(cents), amountX, y, { width: 100, align: 'right' });
     doc.x = left;
   };
   row('Before tax', q.subtotalCents);
-  row(`Sales tax (${percent(q.taxRateBp)} on parts and goods)`, q.taxCents);
+  row(`Sales tax (${percentFromBp(q.taxRateBp)} on parts and goods)`, q.taxCents);
   row('Total', q.totalCents, true);
   row('Deposit to book the job', q.depositCents, true);
   row('Balance when the job is done', Math.max(0, q.totalCents - q.depositCents));

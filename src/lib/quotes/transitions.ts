@@ -6,6 +6,7 @@ import { db, type Quote } from '@/lib/db/models';
 import { lockPayments } from '@/lib/db/queries/quote-payments';
 import { insertRevision, LifecycleRefused, lifecycleState, moveQuote } from '@/lib/db/queries/quote-lifecycle';
 import { getQuote, lockQuote, presentQuote } from '@/lib/db/queries/quotes';
+import { centsToText } from '@/lib/format';
 import { HttpError } from '@/lib/http/errors';
 import { balanceDueCents } from './balance';
 import { isPastValidUntil } from './deposit-rules';
@@ -50,7 +51,7 @@ export function transitionQuote(id: number, input: { to: QuoteStatus; version: n
       // A job closes when it is paid for: by hand only when nothing is left to pay.
       const due = balanceDueCents(quote.totalCents, await lockPayments(quote.id, t));
       if (due > 0) {
-        throw await refusal(quote, `Quote ${quote.number} still has a balance of ${(due / 100).toFixed(2)} dollars to pay. Record the payment taken at the counter or e-mail the customer the pay-the-balance link; the job closes when it is paid in full.`, user, t);
+        throw await refusal(quote, `Quote ${quote.number} still has a balance of ${centsToText(due)} dollars to pay. Record the payment taken at the counter or e-mail the customer the pay-the-balance link; the job closes when it is paid in full.`, user, t);
       }
     }
     await moveQuote(quote, input.to, 'staff', { user }, t, input.reason ? { reason: input.reason } : undefined);

@@ -1,4 +1,5 @@
-import { centsFromText, formatMoney, longDate, percentFromBp, rpmRangeText } from '@/lib/format';
+import { centsFromText, centsToText, formatMoney, longDate, percentFromBp, rpmRangeText } from '@/lib/format';
+import { fromPrice, jobPrice } from '@/lib/leads/shortlist';
 
 describe('lib/format', () => {
   it('formats integer cents in the shop currency, whole or with cents, and a dash for nothing', () => {
@@ -13,6 +14,17 @@ describe('lib/format', () => {
     expect(centsFromText('$1,212.05')).toBe(121205);
     expect(centsFromText('12.345')).toBeNull();
     expect(centsFromText('ten')).toBeNull();
+  });
+
+  it('writes cents back into a money box as centsFromText reads them', () => {
+    expect(centsToText(121205)).toBe('1212.05');
+    expect(centsToText(5)).toBe('0.05');
+    expect(centsFromText(centsToText(987654))).toBe(987654);
+  });
+
+  it('prices the customer shortlist through the one formatter: to the cent, or "from" whole dollars rounded down', () => {
+    expect(jobPrice(300700)).toBe('$3,007.00');
+    expect(fromPrice(125099)).toBe('from $1,250');
   });
 
   it('keeps a calendar day on its day whatever the time zone, and rates as percents', () => {

@@ -1,4 +1,5 @@
 import { getQuote, getQuoteByToken, shopForDocuments } from '@/lib/db/queries/quotes';
+import { centsToText } from '@/lib/format';
 import { HttpError } from '@/lib/http/errors';
 import { counts, invoiceNumber, receiptNumber } from '@/lib/quotes/balance';
 import { invoicePdf, receiptPdf } from '@/lib/quotes/payment-pdf';
@@ -37,7 +38,7 @@ export function receiptResponse(quote: QuoteRecord, paymentId: number, shop: Doc
 
 export function invoiceResponse(quote: QuoteRecord, shop: DocumentShop): Promise<Response> {
   if (quote.status !== 'closed' || quote.balanceDueCents > 0) {
-    throw new HttpError(409, `Quote ${quote.number} is not paid in full yet (${(quote.balanceDueCents / 100).toFixed(2)} dollars left); the final invoice is made once it is.`, { state: { status: quote.status, balanceDueCents: quote.balanceDueCents } });
+    throw new HttpError(409, `Quote ${quote.number} is not paid in full yet (${centsToText(quote.balanceDueCents)} dollars left); the final invoice is made once it is.`, { state: { status: quote.status, balanceDueCents: quote.balanceDueCents } });
   }
   const number = invoiceNumber(quote.number);
   return madePdf(() => invoicePdf(quote, shop), `invoice ${number}`, `invoice-${number}.pdf`);
