@@ -105,13 +105,22 @@ export function errorsText(answer: { body: ApiBody }): string {
 export function useVersionedSave<T extends { version?: number }>(record: T | null) {
   const [base, setBase] = useState<T | null>(record);
   const [conflict, setConflict] = useState<T | null>(null);
+  // A page that reads the record again (router.refresh, an SWR reload) hands in a newer version: that becomes
+  // the base, so the next save does not answer 409 over a change this page already shows. Compared by version,
+  // not identity, so a record built afresh on every render is no change.
+  const [seenVersion, setSeenVersion] = useState(record?.version);
+  if (record?.version !== seenVersion) {
+    setSeenVersion(record?.version);
+    if (record && (record.version ?? 0) > (base?.version ?? 0)) setBase(record);
+  }
 
   const save = useCallback(
     async (method: Method, url: string, payload: Record<string, unknown>): Promise<ApiAnswer<T>> => {
       const answer = await sendJson<T>(
         method,
         url,
-        base && method !== 'POST' ? { ...payload, version: base.version } : payload,
+        // A version in the payload wins: a one-click "keep mine" sends again on the version settle() just handed back.
+        base && method !== 'POST' ? { version: base.version, ...payload } : payload,
       );
       if (answer.ok) {
         setBase(answer.body);

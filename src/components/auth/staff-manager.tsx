@@ -5,10 +5,11 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { EMAIL_MAX } from '@/lib/schemas/auth';
 import { NAME_MAX, ROLE_LABELS, STAFF_ROLE_VALUES } from '@/lib/schemas/user';
-import { formErrors, getJson, sendJson } from '@/lib/api-client';
+import { formErrors, getJson, sendJson, useVersionedSave } from '@/lib/api-client';
 import { inviteChecks } from '@/lib/forms/account-checks';
 import { TextField } from '@/components/ui/formik-fields';
 import { Banner } from '@/components/ui/banner';
+import { ConflictBanner } from '@/components/ui/conflict-banner';
 import { SubmitButton } from '@/components/ui/button';
 import { dateTime } from '@/lib/format';
 
@@ -28,18 +29,6 @@ function stateOf(row: StaffRow): { word: string; style: string } {
 export function StaffManager({ selfId }: { selfId: number }) {
   const { data, error, isLoading, mutate } = useSWR('/api/users', fetchStaff);
   const [message, setMessage] = useState<Message | null>(null);
-  const [busyId, setBusyId] = useState<number | null>(null);
-
-  async function change(row: StaffRow, patch: { role?: Role; active?: boolean }, done: string) {
-    setBusyId(row.id);
-    setMessage(null);
-    const answer = await sendJson('PATCH', `/api/users/${row.id}`, { version: row.version, ...patch });
-    setBusyId(null);
-    if (answer.status === 200) setMessage({ tone: 'ok', text: done });
-    else if (answer.status === 409) setMessage({ tone: 'caution', text: `${answer.body.message ?? 'Someone else changed this account.'} The table now shows the current details.` });
-    else setMessage({ tone: 'fault', text: answer.body.errors?.map((e) => e.message).join('; ') || answer.body.message || `That did not work (${answer.status}).` });
-    await mutate();
-  }
 
   return (
     <div className="flex flex-col gap-8">
@@ -64,45 +53,9 @@ export function StaffManager({ selfId }: { selfId: number }) {
                 </tr>
               </thead>
               <tbody>
-                {data.map((row) => {
-                  const state = stateOf(row);
-                  const self = row.id === selfId;
-                  return (
-                    <tr key={row.id} className="border-b border-steel-100 align-middle">
-                      <td className="py-1.5 pr-3">{row.name}{self ? <span className="ml-1 text-ink-muted">(you)</span> : null}</td>
-                      <td className="spec py-1.5 pr-3">{row.email}</td>
-                      <td className="py-1.5 pr-3">
-                        <label className="sr-only" htmlFor={`role-${row.id}`}>Role of {row.name}</label>
-                        <select
-                          id={`role-${row.id}`}
-                          value={row.role}
-                          disabled={self || busyId === row.id}
-                          onChange={(event) => change(row, { role: event.target.value as Role }, `${row.name} is now ${ROLE_LABELS[event.target.value as Role].toLowerCase()}.`)}
-                          className="rounded border border-steel-300 bg-paper-raised px-2 py-1"
-                        >
-                          {STAFF_ROLE_VALUES.map((role) => <option key={role} value={role}>{ROLE_LABELS[role]}</option>)}
-                        </select>
-                      </td>
-                      <td className="py-1.5 pr-3"><span className={`rounded px-2 py-0.5 text-xs font-semibold ${state.style}`}>{state.word}</span></td>
-                      <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateTime(row.lastSignInAt) : 'never'}</td>
-                      <td className="py-1.5 text-right">
-                        {self ? null : (
-                          <button
-                            type="button"
-                            disabled={busyId === row.id}
-                            onClick={() => {
-                              if (row.active && !window.confirm(`Switch off ${row.name}'s account? They are signed out at once.`)) return;
-                              void change(row, { active: !row.active }, row.active ? `${row.name}'s account is switched off and signed out.` : `${row.name}'s account is switched on again.`);
-                            }}
-                            className={`rounded px-3 py-1 text-xs font-semibold ring-1 ${row.active ? 'text-fault-700 ring-fault-700/50 hover:bg-fault-100' : 'text-ok-700 ring-ok-700/50 hover:bg-ok-100'}`}
-                          >
-                            {row.active ? 'Switch off' : 'Switch on'}
-                          </button>
-                        )}
-                      </td>
-                    </tr>
-                  );
-                })}
+                {data.map((row) => (
+                  <StaffRowView key={row.id} row={row} self={row.id === selfId} onMessage={setMessage} reload={() => mutate()} />
+                ))}
               </tbody>
             </table>
           </div>
@@ -115,6 +68,97 @@ export function StaffManager({ selfId }: { selfId: number }) {
         <InviteForm onInvited={async (text) => { setMessage({ tone: 'ok', text }); await mutate(); }} />
       </section>
     </div>
+  );
+}
+
+/**
+ * One account's row. Each change sends the version the list last read (useVersionedSave); someone else's newer
+ * save answers 409: the list reloads to show theirs, and a row beneath offers to keep the change made here
+ * (sent again on top of theirs) or take theirs as it stands.
+ */
+function StaffRowView({ row, self, onMessage, reload }: { row: StaffRow; self: boolean; onMessage: (message: Message | null) => void; reload: () => Promise<unknown> }) {
+  const { conflict, save, settle } = useVersionedSave<StaffRow>(row);
+  const [busy, setBusy] = useState(false);
+  const [mine, setMine] = useState<{ patch: { role?: Role; active?: boolean }; done: string } | null>(null);
+  const state = stateOf(row);
+
+  /** `onVersion`: send on this version (theirs, after "keep mine") rather than the one this row last read. */
+  async function change(patch: { role?: Role; active?: boolean }, done: string, onVersion?: number) {
+    setBusy(true);
+    onMessage(null);
+    const answer = await save('PATCH', `/api/users/${row.id}`, onVersion === undefined ? patch : { ...patch, version: onVersion });
+    setBusy(false);
+    if (answer.status === 200) {
+      onMessage({ tone: 'ok', text: done });
+      setMine(null);
+    } else if (answer.status === 409) {
+      onMessage({ tone: 'caution', text: `${answer.body.message ?? 'Someone else changed this account.'} The table now shows the current details.` });
+      setMine({ patch, done });
+    } else onMessage({ tone: 'fault', text: answer.body.errors?.map((e) => e.message).join('; ') || answer.body.message || `That did not work (${answer.status}).` });
+    await reload();
+  }
+
+  const wanted = mine ? (mine.patch.role ? `make them ${ROLE_LABELS[mine.patch.role].toLowerCase()}` : mine.patch.active ? 'switch the account on' : 'switch the account off') : '';
+  return (
+    <>
+      <tr className="border-b border-steel-100 align-middle">
+        <td className="py-1.5 pr-3">{row.name}{self ? <span className="ml-1 text-ink-muted">(you)</span> : null}</td>
+        <td className="spec py-1.5 pr-3">{row.email}</td>
+        <td className="py-1.5 pr-3">
+          <label className="sr-only" htmlFor={`role-${row.id}`}>Role of {row.name}</label>
+          <select
+            id={`role-${row.id}`}
+            value={row.role}
+            disabled={self || busy || Boolean(conflict)}
+            onChange={(event) => change({ role: event.target.value as Role }, `${row.name} is now ${ROLE_LABELS[event.target.value as Role].toLowerCase()}.`)}
+            className="rounded border border-steel-300 bg-paper-raised px-2 py-1"
+          >
+            {STAFF_ROLE_VALUES.map((role) => <option key={role} value={role}>{ROLE_LABELS[role]}</option>)}
+          </select>
+        </td>
+        <td className="py-1.5 pr-3"><span className={`rounded px-2 py-0.5 text-xs font-semibold ${state.style}`}>{state.word}</span></td>
+        <td className="spec py-1.5 pr-3 text-ink-soft">{row.lastSignInAt ? dateTime(row.lastSignInAt) : 'never'}</td>
+        <td className="py-1.5 text-right">
+          {self ? null : (
+            <button
+              type="button"
+              disabled={busy || Boolean(conflict)}
+              onClick={() => {
+                if (row.active && !window.confirm(`Switch off ${row.name}'s account? They are signed out at once.`)) return;
+                void change({ active: !row.active }, row.active ? `${row.name}'s account is switched off and signed out.` : `${row.name}'s account is switched on again.`);
+              }}
+              className={`rounded px-3 py-1 text-xs font-semibold ring-1 ${row.active ? 'text-fault-700 ring-fault-700/50 hover:bg-fault-100' : 'text-ok-700 ring-ok-700/50 hover:bg-ok-100'}`}
+            >
+              {row.active ? 'Switch off' : 'Switch on'}
+            </button>
+          )}
+        </td>
+      </tr>
+      {conflict && mine ? (
+        <tr>
+          <td colSpan={6} className="pb-2">
+            <ConflictBanner
+              title={`Someone else changed ${conflict.name}'s account first. Nothing was overwritten.`}
+              onTheirs={() => {
+                settle();
+                setMine(null);
+                onMessage(null);
+              }}
+              onMine={() => {
+                const theirs = settle();
+                const again = mine;
+                setMine(null);
+                void change(again.patch, again.done, theirs?.version);
+              }}
+              theirsLabel="Leave it as they saved it"
+              mineLabel={`Still ${wanted}`}
+            >
+              Theirs: {ROLE_LABELS[conflict.role]}, {stateOf(conflict).word.toLowerCase()}. You asked to {wanted}.
+            </ConflictBanner>
+          </td>
+        </tr>
+      ) : null}
+    </>
   );
 }
 

@@ -8,6 +8,7 @@ import { centsFromText, centsToText, formatMoney } from '@/lib/format';
 import { moneyWithin, numberWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { ConflictBanner } from '@/components/ui/conflict-banner';
 import { CheckboxField, NumberField, SelectField, TextAreaField, TextField } from '@/components/ui/formik-fields';
 
 // One formik form for every catalogue record. Fields are described once (FieldDef), each with the limit the
@@ -158,7 +159,15 @@ export function RecordForm({
         return (
           <Form noValidate className="flex flex-col gap-4">
             {conflict ? (
-              <Banner tone="caution" title="Someone else saved this record while you were editing it. Nothing has been overwritten.">
+              <ConflictBanner
+                title="Someone else saved this record while you were editing it. Nothing has been overwritten."
+                onTheirs={() => {
+                  const theirs = settle();
+                  if (theirs) setValues(valuesFromRecord(fields, theirs));
+                }}
+                onMine={() => settle()}
+                mineLabel="Keep my values (then save again)"
+              >
                 {differences.length ? (
                   <table className="mt-2 w-full text-sm tabular-nums">
                     <thead>
@@ -183,24 +192,7 @@ export function RecordForm({
                 ) : (
                   <p>Their save changed nothing you can see in this form.</p>
                 )}
-                <div className="mt-3 flex flex-wrap gap-2">
-                  <Button
-                    type="button" variant="quiet"
-                    onClick={() => {
-                      const theirs = settle();
-                      if (theirs) setValues(valuesFromRecord(fields, theirs));
-                    }}
-                  >
-                    Load their version
-                  </Button>
-                  <Button
-                    type="button" variant="quiet"
-                    onClick={() => settle()}
-                  >
-                    Keep my values (then save again)
-                  </Button>
-                </div>
-              </Banner>
+              </ConflictBanner>
             ) : null}
             {problem ? <Banner tone="fault" title="Not saved">{problem}</Banner> : null}
             <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">

@@ -9,6 +9,7 @@ import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, RULE_VEHICLE_CLASS_TEXT } 
 import { sendJson, useVersionedSave } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { ConflictBanner } from '@/components/ui/conflict-banner';
 
 type Item = { partId: string; laborOperationId: string; quantity: string };
 type Values = { kind: (typeof NEED_RULE_KIND_OPTIONS)[number]; vehicleClass: VehicleClass | 'any'; label: string; active: boolean; items: Item[] };
@@ -22,17 +23,20 @@ const toPayload = (v: Values) => ({
   items: v.items.map((i) => ({ partId: i.partId ? Number(i.partId) : null, laborOperationId: i.laborOperationId ? Number(i.laborOperationId) : null, quantity: i.quantity ? Number(i.quantity) : 1 })),
 });
 
+/** A stored rule as the form's values; a new rule starts with one empty item. */
+const valuesOf = (rule: RuleRecord | null): Values => ({
+  kind: rule?.kind ?? 'install',
+  vehicleClass: rule?.vehicleClass ?? 'any',
+  label: rule?.label ?? '',
+  active: rule?.active ?? true,
+  items: rule?.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) ?? [{ partId: '', laborOperationId: '', quantity: '1' }],
+});
+
 export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; parts: { id: number; sku: string; name: string }[]; labor: { id: number; code: string; name: string }[] }) {
   const router = useRouter();
   const { conflict, save, settle } = useVersionedSave<RuleRecord>(rule);
   const [problem, setProblem] = useState<string | null>(null);
-  const initial: Values = {
-    kind: rule?.kind ?? 'install',
-    vehicleClass: rule?.vehicleClass ?? 'any',
-    label: rule?.label ?? '',
-    active: rule?.active ?? true,
-    items: rule?.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) ?? [{ partId: '', laborOperationId: '', quantity: '1' }],
-  };
+  const initial = valuesOf(rule);
   const input = 'w-full rounded border border-steel-300 bg-paper-raised px-2 py-1.5 text-sm';
   return (
     <Formik<Values>
@@ -53,19 +57,18 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
         return (
           <Form noValidate className="flex flex-col gap-4">
             {conflict ? (
-              <Banner tone="caution" title="Someone else saved this rule while you were editing it. Nothing was overwritten.">
+              <ConflictBanner
+                title="Someone else saved this rule while you were editing it. Nothing was overwritten."
+                onTheirs={() => {
+                  settle();
+                  setValues(valuesOf(conflict));
+                }}
+                onMine={() => settle()}
+              >
                 <p>
                   Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}, {RULE_VEHICLE_CLASS_TEXT[conflict.vehicleClass ?? 'any']}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
                 </p>
-                <div className="mt-2 flex gap-2">
-                  <Button type="button" variant="quiet" onClick={() => { settle(); setValues({ ...values, kind: conflict.kind, vehicleClass: conflict.vehicleClass ?? 'any', label: conflict.label, active: conflict.active, items: conflict.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) }); }}>
-                    Load their version
-                  </Button>
-                  <Button type="button" variant="quiet" onClick={() => settle()}>
-                    Keep mine (then save again)
-                  </Button>
-                </div>
-              </Banner>
+              </ConflictBanner>
             ) : null}
             {problem ? <Banner tone="fault" title="Not saved">{problem}</Banner> : null}
             <fieldset className="flex flex-col gap-2">

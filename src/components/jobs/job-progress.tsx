@@ -4,14 +4,17 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { ConflictBanner } from '@/components/ui/conflict-banner';
+import { useVersionedSave } from '@/lib/api-client';
 import type { BoardJob } from '@/lib/jobs/types';
 import { STATE_WORDS, type JobState } from '@/lib/jobs/states';
 import { JOB_LIMITS } from '@/lib/schemas/job';
-import { sendJob } from './job-api';
+import { jobResult } from './job-api';
 import { JobStateTag } from './job-state-tag';
 
 // Booking (day, bay, technician) and the moves the workshop allows from here. Every save sends the
-// version this page last read; someone else's newer save answers 409 and nothing is overwritten.
+// version this page last read; someone else's newer save answers 409, nothing is overwritten, and their
+// booking is shown with the choice to load it or keep the one typed here (saved on top of theirs).
 type Staff = { id: number; name: string; role: string };
 const input = 'rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm focus:border-gauge-500 focus:outline-none';
 
@@ -23,17 +26,29 @@ export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
   const [busy, setBusy] = useState(false);
   const [problem, setProblem] = useState<{ message: string; fields: Record<string, string> } | null>(null);
   const [done, setDone] = useState<string | null>(null);
+  const versioned = useVersionedSave<BoardJob>(job);
+  // A 409 for a move the workshop does not allow carries the job as this page has it: only a newer one is a conflict.
+  const theirs = versioned.conflict && versioned.conflict.version !== versioned.base?.version ? versioned.conflict : null;
 
   async function save(body: Record<string, unknown>, success: string) {
     setBusy(true);
     setProblem(null);
     setDone(null);
-    const result = await sendJob(`/api/jobs/${job.id}`, 'PATCH', { version: job.version, ...body });
+    const result = jobResult(await versioned.save('PATCH', `/api/jobs/${job.id}`, body));
     setBusy(false);
     if (!result.ok) return setProblem(result);
     setDone(success);
     router.refresh(); // the page reads the job again (new version, sign-off form, printout)
   }
+
+  const loadTheirs = (newer: BoardJob) => {
+    versioned.settle();
+    setBookedFor(newer.bookedFor ?? '');
+    setBay(newer.bay === null ? '' : String(newer.bay));
+    setTechnicianId(newer.technician ? String(newer.technician.id) : '');
+    setProblem(null);
+    router.refresh();
+  };
 
   const booking = () => save({ bookedFor: bookedFor || undefined, bay: bay ? Number(bay) : null, technicianId: technicianId ? Number(technicianId) : null }, 'Booking saved.');
   const fieldError = (f: string) => (problem?.fields[f] ? <span className="text-xs text-fault-700">{problem.fields[f]}</span> : null);
@@ -80,14 +95,14 @@ export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
           </select>
           {fieldError('technicianId')}
         </div>
-        <Button type="submit" variant="primary" disabled={busy || job.state === 'collected'}>
+        <Button type="submit" variant="primary" disabled={busy || Boolean(theirs) || job.state === 'collected'}>
           {job.state === 'not-booked' ? 'Book the job' : 'Save booking'}
         </Button>
       </form>
       {job.state !== 'not-booked' && job.nextStates.length ? (
         <div className="mt-3 flex flex-wrap gap-2 print:hidden" role="group" aria-label="Move the job">
           {job.nextStates.map((to, i) => (
-            <Button key={to} type="button" variant={i === 0 ? 'primary' : 'quiet'} disabled={busy} onClick={() => void save({ state: to }, `Moved to: ${STATE_WORDS[to]}.`)}>
+            <Button key={to} type="button" variant={i === 0 ? 'primary' : 'quiet'} disabled={busy || Boolean(theirs)} onClick={() => void save({ state: to }, `Moved to: ${STATE_WORDS[to]}.`)}>
               {moveLabel(to)}
             </Button>
           ))}
@@ -98,6 +113,19 @@ export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
       ) : null}
       <div className="mt-2 print:hidden" aria-live="polite">
         {problem ? <Banner tone="fault" title="Not saved">{problem.message}</Banner> : null}
+        {theirs ? (
+          <ConflictBanner
+            title="Someone else saved this job while you were looking at it. Nothing was overwritten."
+            onTheirs={() => loadTheirs(theirs)}
+            onMine={() => {
+              versioned.settle();
+              setProblem(null);
+            }}
+            mineLabel="Keep my booking (then save again)"
+          >
+            Theirs: booked for <span className="spec">{theirs.bookedFor ?? '—'}</span> · bay <span className="spec">{theirs.bay ?? '—'}</span> · {theirs.technician?.name ?? 'no technician'} · {STATE_WORDS[theirs.state]}.
+          </ConflictBanner>
+        ) : null}
         {done ? <Banner tone="ok" title={done} /> : null}
       </div>
     </section>

@@ -3,10 +3,11 @@
 import Link from 'next/link';
 import { useState } from 'react';
 import useSWR from 'swr';
-import { getJson, sendJson } from '@/lib/api-client';
+import { getJson, sendJson, useVersionedSave } from '@/lib/api-client';
 import { centsFromText, centsToText, formatMoney, percentFromBp } from '@/lib/format';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { ConflictBanner } from '@/components/ui/conflict-banner';
 import { PageHeader } from '@/components/ui/page-header';
 import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import type { StaffRole } from '@/lib/auth/guard';
@@ -42,6 +43,8 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
   const [notice, setNotice] = useState<Notice>(null);
   const canWrite = roleCan(role, 'quotes.write');
   const isDraft = quote.status === 'draft';
+  // The lines are the quote's versioned edit: a newer save answers 409, shown beside the lines typed here.
+  const lineSave = useVersionedSave<QuoteRecord>(quote);
 
   async function run(label: string, call: () => Promise<{ status: number; body: QuoteRecord & { message?: string; errors?: { field: string; message: string }[]; current?: unknown } }>, okTitle: string) {
     setBusy(true);
@@ -70,7 +73,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
       if (!Number.isFinite(quantity) || quantity <= 0) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
       lines.push({ kind: l.kind, description: l.description, quantity, unitPriceCents: cents, discountCents: l.discountCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId });
     }
-    if (await run('Not saved', () => sendJson('PATCH', url, { version: quote.version, lines }), 'Lines saved; totals updated.')) setEditing(null);
+    if (await run('Not saved', () => lineSave.save('PATCH', url, { lines }), 'Lines saved; totals updated.')) setEditing(null);
   }
 
   const set = (i: number, change: Partial<EditLine>) => setEditing((rows) => rows!.map((r, j) => (j === i ? { ...r, ...change } : r)));
@@ -158,10 +161,24 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           </tbody>
         </table>
       </TableScroll>
+      {editing && lineSave.conflict ? (
+        <ConflictBanner
+          title="Someone else saved this quote while you were editing its lines. Nothing was overwritten."
+          onTheirs={() => {
+            const theirs = lineSave.settle();
+            if (theirs) setEditing(theirs.status === 'draft' ? toEdit(theirs) : null);
+          }}
+          onMine={() => lineSave.settle()}
+          theirsLabel="Load their lines"
+          mineLabel="Keep my lines (then save again)"
+        >
+          Theirs: {lineSave.conflict.lines.length} line(s), total {formatMoney(lineSave.conflict.totalCents)}, <QuoteStatusTag status={lineSave.conflict.status} />. The table above shows yours until you choose.
+        </ConflictBanner>
+      ) : null}
       {editing ? (
         <div className="flex flex-wrap gap-2">
           <Button type="button" variant="quiet" onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', discountCents: 0, camId: null, partId: null, laborOperationId: null }])}>Add a line</Button>
-          <Button type="button" variant="primary" disabled={busy} onClick={saveLines}>Save lines</Button>
+          <Button type="button" variant="primary" disabled={busy || Boolean(lineSave.conflict)} onClick={saveLines}>Save lines</Button>
           <Button type="button" variant="quiet" onClick={() => setEditing(null)}>Cancel</Button>
         </div>
       ) : null}
