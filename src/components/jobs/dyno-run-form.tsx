@@ -3,6 +3,7 @@
 import { ErrorMessage, Field, Form, Formik, type FormikHelpers } from 'formik';
 import { useMemo } from 'react';
 import { Button } from '@/components/ui/button';
+import { submitOnCtrlEnter } from '@/components/ui/keys';
 import { AIR_NEEDED_BY, CORRECTION_TEXT, STANDARD_LABELS } from '@/lib/dyno/correction';
 import { DYNO_TYPES, DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
 import { AIR_UNIT_TEXT, type AirUnits } from '@/lib/dyno/units';
@@ -49,12 +50,7 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
           className="flex flex-col gap-3"
           noValidate
           aria-labelledby="record-title"
-          onKeyDown={(event) => {
-            if (event.key === 'Enter' && (event.ctrlKey || event.metaKey)) {
-              event.preventDefault();
-              void submitForm();
-            }
-          }}
+          onKeyDown={submitOnCtrlEnter(submitForm)}
         >
           <h3 id="record-title" className="font-semibold">Record a dyno run</h3>
           <p className="text-xs text-ink-muted">Ctrl+Enter saves from any box.</p>

@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { SelectControl, TextControl, type Options } from '@/components/ui/field';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
 import { useVersionedSave } from '@/lib/api-client';
 import type { BoardJob } from '@/lib/jobs/types';
@@ -16,7 +17,7 @@ import { JobStateTag } from './job-state-tag';
 // version this page last read; someone else's newer save answers 409, nothing is overwritten, and their
 // booking is shown with the choice to load it or keep the one typed here (saved on top of theirs).
 type Staff = { id: number; name: string; role: string };
-const input = 'rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm focus:border-gauge-500 focus:outline-none';
+const BAY_OPTIONS: Options = [['', 'Not set'], ...Array.from({ length: JOB_LIMITS.bays }, (_, i) => [String(i + 1), `Bay ${i + 1}`] as const)];
 
 export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
   const router = useRouter();
@@ -51,7 +52,6 @@ export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
   };
 
   const booking = () => save({ bookedFor: bookedFor || undefined, bay: bay ? Number(bay) : null, technicianId: technicianId ? Number(technicianId) : null }, 'Booking saved.');
-  const fieldError = (f: string) => (problem?.fields[f] ? <span className="text-xs text-fault-700">{problem.fields[f]}</span> : null);
   const moveLabel = (to: JobState) => (job.nextStates.indexOf(to) === 0 ? `Move to: ${STATE_WORDS[to]}` : `Back to: ${STATE_WORDS[to]}`);
 
   return (
@@ -70,31 +70,17 @@ export function JobProgress({ job, staff }: { job: BoardJob; staff: Staff[] }) {
           void booking();
         }}
       >
-        <div className="flex flex-col text-xs font-semibold text-ink-muted">
-          <label htmlFor="job-bookedFor">Booked for</label>
-          <input id="job-bookedFor" type="date" className={`${input} spec`} value={bookedFor} onChange={(e) => setBookedFor(e.target.value)} disabled={job.state === 'collected'} />
-          {fieldError('bookedFor')}
-        </div>
-        <div className="flex flex-col text-xs font-semibold text-ink-muted">
-          <label htmlFor="job-bay">Bay</label>
-          <select id="job-bay" className={input} value={bay} onChange={(e) => setBay(e.target.value)} disabled={job.state === 'collected'}>
-            <option value="">Not set</option>
-            {Array.from({ length: JOB_LIMITS.bays }, (_, i) => (
-              <option key={i + 1} value={i + 1}>Bay {i + 1}</option>
-            ))}
-          </select>
-          {fieldError('bay')}
-        </div>
-        <div className="flex flex-col text-xs font-semibold text-ink-muted">
-          <label htmlFor="job-technician">Technician</label>
-          <select id="job-technician" className={input} value={technicianId} onChange={(e) => setTechnicianId(e.target.value)} disabled={job.state === 'collected'}>
-            <option value="">Nobody yet</option>
-            {staff.map((s) => (
-              <option key={s.id} value={s.id}>{s.name}{s.role === 'manager' ? ' (manager)' : ''}</option>
-            ))}
-          </select>
-          {fieldError('technicianId')}
-        </div>
+        <TextControl id="job-bookedFor" label="Booked for" type="date" className="spec" value={bookedFor} onChange={(e) => setBookedFor(e.target.value)} disabled={job.state === 'collected'} error={problem?.fields.bookedFor} />
+        <SelectControl id="job-bay" label="Bay" options={BAY_OPTIONS} value={bay} onChange={(e) => setBay(e.target.value)} disabled={job.state === 'collected'} error={problem?.fields.bay} />
+        <SelectControl
+          id="job-technician"
+          label="Technician"
+          options={[['', 'Nobody yet'], ...staff.map((s) => [String(s.id), `${s.name}${s.role === 'manager' ? ' (manager)' : ''}`] as const)]}
+          value={technicianId}
+          onChange={(e) => setTechnicianId(e.target.value)}
+          disabled={job.state === 'collected'}
+          error={problem?.fields.technicianId}
+        />
         <Button type="submit" variant="primary" disabled={busy || Boolean(theirs) || job.state === 'collected'}>
           {job.state === 'not-booked' ? 'Book the job' : 'Save booking'}
         </Button>

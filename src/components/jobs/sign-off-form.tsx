@@ -4,6 +4,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { NumberControl, TextAreaControl, TextControl } from '@/components/ui/field';
+import { submitOnCtrlEnter } from '@/components/ui/keys';
 import type { SignOffWarning } from '@/lib/jobs/sign-off-limits';
 import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
 import { signOffChecks } from '@/lib/forms/sign-off-checks';
@@ -13,7 +15,6 @@ import { READINGS, type ReadingKey } from './sign-off-fields';
 
 // The technician's checks before first start. Numbers are typed as text and sent as numbers; what yup (from
 // the schema's limits) or the server refuses shows beside the field. Readings outside the usual limits are saved with a warning.
-const input = 'spec w-28 rounded border border-steel-300 bg-paper-raised px-2 py-1 text-right text-sm focus:border-gauge-500 focus:outline-none';
 const asNumber = (v: string) => (v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : v.trim() === '' ? undefined : v);
 
 export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deactivationActive: boolean }) {
@@ -48,7 +49,6 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
     setSaved(result.job.signOff?.warnings ?? []);
     router.refresh();
   }
-  const err = (f: string) => (problem?.fields[f] ? <span className="text-xs text-fault-700">{problem.fields[f]}</span> : null);
 
   return (
     <form
@@ -58,26 +58,22 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
         e.preventDefault();
         void submit();
       }}
-      onKeyDown={(e) => {
-        if (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) {
-          e.preventDefault();
-          void submit();
-        }
-      }}
+      onKeyDown={submitOnCtrlEnter(submit)}
     >
       <h3 className="font-semibold">Record the sign-off</h3>
       <p className="text-xs text-ink-muted">{LIMITS_NOTE}</p>
       <div className="grid gap-x-6 gap-y-2 sm:grid-cols-2">
         {READINGS.map((r) => (
-          <div key={r.key} className="flex flex-col text-sm">
-            <label htmlFor={`sign-off-${r.key}`} className="font-semibold">{r.label} ({r.unit})</label>
-            <span className="flex items-center gap-1">
-              <input id={`sign-off-${r.key}`} className={input} inputMode="decimal" autoComplete="off" value={values[r.key]} onChange={(e) => setValues({ ...values, [r.key]: e.target.value })} aria-describedby={`${r.key}-usual`} />
-              <span className="text-xs text-ink-muted">{r.unit}</span>
-            </span>
-            <span id={`${r.key}-usual`} className="text-xs text-ink-muted">Usual: {r.usual}</span>
-            {err(r.key)}
-          </div>
+          <NumberControl
+            key={r.key}
+            id={`sign-off-${r.key}`}
+            label={`${r.label} (${r.unit})`}
+            unit={r.unit}
+            hint={`Usual: ${r.usual}`}
+            error={problem?.fields[r.key]}
+            value={values[r.key]}
+            onChange={(e) => setValues({ ...values, [r.key]: e.target.value })}
+          />
         ))}
       </div>
       {deactivationActive ? (
@@ -85,19 +81,11 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
           <legend className="font-semibold">Cylinder deactivation delete (this build has it working)</legend>
           <label className="mr-4 inline-flex items-center gap-1"><input type="radio" name="deactivation" checked={deleteDone === 'yes'} onChange={() => setDeleteDone('yes')} /> Delete done</label>
           <label className="inline-flex items-center gap-1"><input type="radio" name="deactivation" checked={deleteDone === 'no'} onChange={() => setDeleteDone('no')} /> Left in place</label>
-          {err('deactivationDeleteDone')}
+          {problem?.fields.deactivationDeleteDone ? <p className="text-xs text-fault-700">Problem: {problem.fields.deactivationDeleteDone}</p> : null}
         </fieldset>
       ) : null}
-      <div className="flex flex-col text-sm">
-        <label htmlFor="sign-off-tuneFile" className="font-semibold">Tune file and version</label>
-        <input id="sign-off-tuneFile" className="rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm" maxLength={JOB_LIMITS.tuneFileMaxLength} value={tuneFile} onChange={(e) => setTuneFile(e.target.value)} />
-        {err('tuneFile')}
-      </div>
-      <div className="flex flex-col text-sm">
-        <label htmlFor="sign-off-notes" className="font-semibold">Notes</label>
-        <textarea id="sign-off-notes" className="rounded border border-steel-300 bg-paper-raised px-2 py-1 text-sm" rows={2} maxLength={JOB_LIMITS.notesMaxLength} value={notes} onChange={(e) => setNotes(e.target.value)} />
-        {err('notes')}
-      </div>
+      <TextControl id="sign-off-tuneFile" label="Tune file and version" maxLength={JOB_LIMITS.tuneFileMaxLength} error={problem?.fields.tuneFile} value={tuneFile} onChange={(e) => setTuneFile(e.target.value)} />
+      <TextAreaControl id="sign-off-notes" label="Notes" rows={2} maxLength={JOB_LIMITS.notesMaxLength} error={problem?.fields.notes} value={notes} onChange={(e) => setNotes(e.target.value)} />
       <div>
         <Button type="submit" variant="primary" disabled={busy}>{busy ? 'Saving…' : 'Record the sign-off'}</Button>
         <span className="ml-2 text-xs text-ink-muted">Ctrl+Enter records from any field.</span>

@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { centsFromText, centsToText, formatMoney } from '@/lib/format';
+import { centsToText, formatMoney } from '@/lib/format';
+import { amountWithin } from '@/lib/forms/amount';
 import { Button } from '@/components/ui/button';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import type { QuoteRun } from './quote-run';
@@ -40,9 +41,9 @@ export function BalancePanel({ quote, url, run, busy, canWrite }: { quote: Quote
           <form className="flex flex-wrap items-end gap-2"
             onSubmit={(e) => {
               e.preventDefault();
-              const cents = centsFromText(amount);
-              if (cents === null || cents <= 0) return setProblem('The amount must be dollars and cents above 0.');
-              if (cents > due) return setProblem(`At most ${formatMoney(due)} is left to pay.`);
+              const checked = amountWithin(amount, due, 'pay');
+              if ('problem' in checked) return setProblem(checked.problem);
+              const { cents } = checked;
               setProblem(null);
               void run('Not recorded', 'POST', `${url}/payments`, { version: quote.version, amountCents: cents, method }, `Recorded ${formatMoney(cents)} taken at the counter; the receipt is e-mailed to the customer.`);
             }}>

@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { centsFromText, formatMoney } from '@/lib/format';
+import { formatMoney } from '@/lib/format';
+import { amountWithin } from '@/lib/forms/amount';
 import { Button } from '@/components/ui/button';
 import type { QuoteRun } from './quote-run';
 
@@ -66,11 +67,10 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
       className="mt-3 flex flex-wrap items-end gap-2"
       onSubmit={(e) => {
         e.preventDefault();
-        const cents = centsFromText(amount);
-        if (cents === null || cents <= 0) return setProblem('The amount must be dollars and cents above 0.');
-        if (cents > leftCents) return setProblem(`At most ${formatMoney(leftCents)} is left to refund.`);
+        const checked = amountWithin(amount, leftCents, 'refund');
+        if ('problem' in checked) return setProblem(checked.problem);
         setProblem(null);
-        setReview(cents);
+        setReview(checked.cents);
       }}
     >
       <label className="text-sm">

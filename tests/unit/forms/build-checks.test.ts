@@ -1,19 +1,12 @@
-import type { z } from 'zod';
 import { payloadFromValues } from '@/components/interviews/interview-values';
 import { blankInterview, type InterviewValues } from '@/lib/builds/interview-values';
 import { buildPayloadChecks } from '@/lib/forms/build-checks';
 import { BuildCreateSchema, BuildUpdateSchema } from '@/lib/schemas/build';
 import { BUILD_LIMITS } from '@/lib/schemas/build-profile';
+import { expectSameVerdict, zodErrors } from '../../support/zod-errors';
 
 // The interview's yup checks against the zod schemas the route uses: the same bad values, fed to both as the
 // payload the form sends, must flag the same fields with the same words.
-
-function zodErrors(schema: z.ZodType, payload: unknown): Record<string, string> {
-  const result = schema.safeParse(payload);
-  const out: Record<string, string> = {};
-  if (!result.success) for (const issue of result.error.issues) out[issue.path.map(String).join('.')] ??= issue.message;
-  return out;
-}
 
 function filled(): InterviewValues {
   const v = blankInterview([]);
@@ -113,10 +106,7 @@ describe('interview checks: yup in the browser, zod on the server', () => {
   it.each(cases)('%s: the same fields, in the same words', (_name, change, flagged) => {
     const values = filled();
     change(values);
-    const payload = payloadFromValues(values, 'create');
-    const server = zodErrors(BuildCreateSchema, payload);
-    expect(Object.keys(server).sort()).toEqual([...flagged].sort());
-    expect(buildPayloadChecks.create(payload)).toEqual(server);
+    expectSameVerdict(BuildCreateSchema, buildPayloadChecks.create, payloadFromValues(values, 'create'), flagged);
   });
 
   it('checks an edit (customer fixed) the way the PATCH schema does', () => {
@@ -124,9 +114,8 @@ describe('interview checks: yup in the browser, zod on the server', () => {
     values.customerMode = 'existing';
     values.customerId = '12';
     values.profile.engine.boreIn = '2';
-    const payload = payloadFromValues(values, 'edit');
-    const server = zodErrors(BuildUpdateSchema, payload);
-    expect(Object.keys(server)).toEqual(['profile.engine.boreIn']);
-    expect(buildPayloadChecks.edit(payload)).toEqual(server);
+    expectSameVerdict(BuildUpdateSchema, buildPayloadChecks.edit, payloadFromValues(values, 'edit'), [
+      'profile.engine.boreIn',
+    ]);
   });
 });

@@ -1,15 +1,9 @@
 import { dynoRunChecks } from '@/lib/forms/dyno-checks';
 import { DYNO_LIMITS, DynoRunSchema } from '@/lib/schemas/dyno-run';
+import { expectSameVerdict, zodErrors } from '../../support/zod-errors';
 
 // The dyno form's yup checks (all but the air, which dyno-air-schema.ts checks in the units on screen) against
 // the zod schema POST /api/dyno-runs uses: the same payloads, the same fields flagged in the same words.
-
-function zodErrors(payload: unknown): Record<string, string> {
-  const result = DynoRunSchema.safeParse(payload);
-  const out: Record<string, string> = {};
-  if (!result.success) for (const issue of result.error.issues) out[issue.path.map(String).join('.')] ??= issue.message;
-  return out;
-}
 
 const base = { buildId: 1, quoteId: 2, phase: 'before', dynoType: 'chassis', correctionStandard: 'none' };
 const pull = [
@@ -40,14 +34,12 @@ describe('dyno-run checks: yup in the browser, zod on the server', () => {
       { ...base, curve: pull },
       { ...base, peak },
     ]) {
-      expect(zodErrors(payload)).toEqual({});
+      expect(zodErrors(DynoRunSchema, payload)).toEqual({});
       expect(dynoRunChecks(payload)).toEqual({});
     }
   });
 
   it.each(cases)('%s: the same fields, in the same words', (_name, payload, flagged) => {
-    const server = zodErrors(payload);
-    expect(Object.keys(server).sort()).toEqual([...flagged].sort());
-    expect(dynoRunChecks(payload)).toEqual(server);
+    expectSameVerdict(DynoRunSchema, dynoRunChecks, payload, flagged);
   });
 });

@@ -1,4 +1,5 @@
 import { centsFromText, centsToText, formatMoney, longDate, percentFromBp, rpmRangeText } from '@/lib/format';
+import { amountWithin } from '@/lib/forms/amount';
 import { fromPrice, jobPrice } from '@/lib/leads/shortlist';
 
 describe('lib/format', () => {
@@ -33,5 +34,14 @@ describe('lib/format', () => {
     expect(percentFromBp(825)).toBe('8.25 %');
     expect(percentFromBp(1500, 2)).toBe('15.00 %');
     expect(rpmRangeText([2300, 2700])).toBe('2,300–2,700 rpm');
+  });
+});
+
+describe('an amount typed at the counter', () => {
+  it('reads it into cents within what is left, or says what is wrong', () => {
+    expect(amountWithin('120.50', 20000, 'pay')).toEqual({ cents: 12050 });
+    expect(amountWithin('0', 20000, 'pay')).toEqual({ problem: 'The amount must be dollars and cents above 0.' });
+    expect(amountWithin('12.345', 20000, 'refund')).toEqual({ problem: 'The amount must be dollars and cents above 0.' });
+    expect(amountWithin('200.01', 20000, 'refund')).toEqual({ problem: 'At most $200.00 is left to refund.' });
   });
 });

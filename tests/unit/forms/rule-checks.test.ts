@@ -1,15 +1,9 @@
 import { ruleChecks } from '@/lib/forms/rule-checks';
 import { NEED_RULE_LIMITS, NeedRuleSchema } from '@/lib/schemas/need-rule';
+import { expectSameVerdict, zodErrors } from '../../support/zod-errors';
 
 // The rule form's yup checks against the zod schema POST /api/rules uses: the same payloads, the same fields
 // flagged in the same words.
-
-function zodErrors(payload: unknown): Record<string, string> {
-  const result = NeedRuleSchema.safeParse(payload);
-  const out: Record<string, string> = {};
-  if (!result.success) for (const issue of result.error.issues) out[issue.path.map(String).join('.')] ??= issue.message;
-  return out;
-}
 
 type Item = { partId: number | null; laborOperationId: number | null; quantity: number };
 type Payload = { kind: string; vehicleClass: string | null; label: string; active: boolean; items: Item[] };
@@ -49,13 +43,11 @@ const cases: [string, Payload, string[]][] = [
 
 describe('rule checks: yup in the browser, zod on the server', () => {
   it('passes a sensible rule both ways', () => {
-    expect(zodErrors(good)).toEqual({});
+    expect(zodErrors(NeedRuleSchema, good)).toEqual({});
     expect(ruleChecks(good)).toEqual({});
   });
 
   it.each(cases)('%s: the same fields, in the same words', (_name, payload, flagged) => {
-    const server = zodErrors(payload);
-    expect(Object.keys(server).sort()).toEqual([...flagged].sort());
-    expect(ruleChecks(payload)).toEqual(server);
+    expectSameVerdict(NeedRuleSchema, ruleChecks, payload, flagged);
   });
 });

@@ -1,15 +1,9 @@
 import { signOffChecks } from '@/lib/forms/sign-off-checks';
 import { JOB_LIMITS, SignOffSchema } from '@/lib/schemas/job';
+import { expectSameVerdict, zodErrors } from '../../support/zod-errors';
 
 // The sign-off form's yup checks against the zod schema POST /api/jobs/[id]/sign-off uses: the same bodies,
 // the same fields flagged in the same words.
-
-function zodErrors(payload: unknown): Record<string, string> {
-  const result = SignOffSchema.safeParse(payload);
-  const out: Record<string, string> = {};
-  if (!result.success) for (const issue of result.error.issues) out[issue.path.map(String).join('.')] ??= issue.message;
-  return out;
-}
 
 const good = {
   ptvIntakeIn: 0.09,
@@ -36,13 +30,11 @@ const cases: [string, Record<string, unknown>, string[]][] = [
 
 describe('sign-off checks: yup in the browser, zod on the server', () => {
   it('passes a sensible sign-off both ways', () => {
-    expect(zodErrors(good)).toEqual({});
+    expect(zodErrors(SignOffSchema, good)).toEqual({});
     expect(signOffChecks(good)).toEqual({});
   });
 
   it.each(cases)('%s: the same fields, in the same words', (_name, payload, flagged) => {
-    const server = zodErrors(payload);
-    expect(Object.keys(server).sort()).toEqual([...flagged].sort());
-    expect(signOffChecks(payload)).toEqual(server);
+    expectSameVerdict(SignOffSchema, signOffChecks, payload, flagged);
   });
 });
