@@ -3,8 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import { Op } from 'sequelize';
 import { AuditEntry, Build, Cam, Customer, Lead } from '@/lib/db/models';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext, watchedPage } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { clearRateLimits } from '../support/rate-limits';
 import { readRuntime } from '../support/runtime';
@@ -85,12 +84,8 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
   }, 90_000);
 
   it('the interview from that lead keeps “Not sure yet” for the budget; the counter can change it to a figure', async () => {
-    const [name, value] = (await signIn('counter')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
-    const page = await context.newPage();
-    page.setDefaultTimeout(10_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const context = await staffContext(browser, 'counter');
+    const page = await watchedPage(context, pageErrors);
 
     await page.goto(`${appUrl}/leads`);
     const card = page.getByRole('article').filter({ has: page.getByRole('heading', { name: /Tamsin Okonkwo-Reed/ }) });

@@ -1,7 +1,7 @@
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { signedInAgent, signIn } from '../support/auth';
-import { launchBrowser } from '../support/browser';
+import { signedInAgent } from '../support/auth';
+import { launchBrowser, staffContext } from '../support/browser';
 import { waitForMailsTo } from '../support/mail';
 import { makePaidJob } from '../support/job-fixtures';
 import { readRuntime } from '../support/runtime';
@@ -19,9 +19,7 @@ describe('the balance in the browser', () => {
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    const [name, value] = (await signIn('counter')).split('=');
-    staff = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await staff.addCookies([{ name, value, url: appUrl }]);
+    staff = await staffContext(browser, 'counter');
     counter = await signedInAgent('counter');
   });
   afterAll(async () => {

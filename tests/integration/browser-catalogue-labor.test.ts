@@ -3,8 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import { AuditEntry, LaborOperation } from '@/lib/db/models';
 import { LABOR_LIMITS } from '@/lib/schemas/labor';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { signIn } from '../support/auth';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, staffContext, watchedPage } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 
@@ -22,12 +21,8 @@ describe('a labour operation through the catalogue form', () => {
   beforeAll(async () => {
     connectTestDatabase();
     browser = await launchBrowser();
-    const [name, value] = (await signIn('manager')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
-    page = await context.newPage();
-    page.setDefaultTimeout(10_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const context = await staffContext(browser, 'manager');
+    page = await watchedPage(context, pageErrors);
   }, 60_000);
 
   afterAll(async () => {

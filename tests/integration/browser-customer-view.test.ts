@@ -3,8 +3,7 @@ import path from 'node:path';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { signIn } from '../support/auth';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, staffContext } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { DEMO, DEMO_KEYS } from '../support/demo';
 import { pdfText } from '../support/pdf-text';
@@ -29,9 +28,7 @@ const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 
 const SHOP_CODES = [...Object.values(DEMO_KEYS.cams), ...Object.values(DEMO_KEYS.parts), ...Object.values(DEMO_KEYS.labor)];
 
 async function openShortlist(browser: Browser, width: number): Promise<Page> {
-  const [name, value] = (await signIn('counter')).split('=');
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  await context.addCookies([{ name, value, url: appUrl }]);
+  const context = await staffContext(browser, 'counter', { width, height: 900 });
   const page = await context.newPage();
   await page.goto(`${appUrl}/advisor?build=${DEMO.builds.whitlockTowingTruck}`);
   await ranked(page).locator('tbody tr').first().waitFor();

@@ -2,8 +2,7 @@ import type { Browser, Page } from 'playwright-core';
 import { Op } from 'sequelize';
 import { AuditEntry, DynoRun } from '@/lib/db/models';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext, watchedPage } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 import { removeDynoRuns } from '../support/dyno-runs';
@@ -55,12 +54,8 @@ describe('chassis and engine dyno runs on the job page', () => {
     connectTestDatabase();
     firstNewId = ((await DynoRun.max<number, DynoRun>('id')) ?? 0) + 1;
     browser = await launchBrowser();
-    const [name, value] = (await signIn('tech')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
-    page = await context.newPage();
-    page.setDefaultTimeout(10_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const context = await staffContext(browser, 'tech');
+    page = await watchedPage(context, pageErrors);
   }, 60_000);
   afterAll(async () => {
     await browser?.close();

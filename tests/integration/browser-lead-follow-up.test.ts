@@ -3,8 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import request from 'supertest';
 import { AuditEntry, Build, Customer, Lead } from '@/lib/db/models';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext, watchedPage } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { clearRateLimits } from '../support/rate-limits';
 import { readRuntime } from '../support/runtime';
@@ -31,12 +30,8 @@ describe('following a lead up in the browser', () => {
     if (sent.status !== 201) throw new Error(`lead fixture answered ${sent.status}: ${JSON.stringify(sent.body)}`);
     leadId = sent.body.id;
     browser = await launchBrowser();
-    const [name, value] = (await signIn('counter')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
-    page = await context.newPage();
-    page.setDefaultTimeout(10_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const context = await staffContext(browser, 'counter');
+    page = await watchedPage(context, pageErrors);
   }, 60_000);
   afterAll(async () => {
     await browser?.close();

@@ -2,8 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser } from 'playwright-core';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext } from '../support/browser';
 import { readRuntime } from '../support/runtime';
 import { DEMO } from '../support/demo';
 
@@ -22,9 +21,7 @@ describe('Make a quote from the shortlist', () => {
   afterAll(() => browser?.close());
 
   it('opens a new draft for the build and the cam, at the job price the shortlist showed', async () => {
-    const [name, value] = (await signIn('counter')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
+    const context = await staffContext(browser, 'counter');
     const page = await context.newPage();
     // The demo 5.3 L pickup (seeded build 1), preselected as the interview's "see the shortlist" link does.
     await page.goto(`${appUrl}/advisor?build=${DEMO.builds.whitlockTowingTruck}`);

@@ -1,7 +1,7 @@
 import type { Browser, BrowserContext } from 'playwright-core';
-import { signedInAgent, signIn } from '../support/auth';
+import { signedInAgent } from '../support/auth';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, staffContext } from '../support/browser';
 import { waitForMailsTo } from '../support/mail';
 import { makeSentQuote } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
@@ -17,9 +17,7 @@ describe('a quote from payment to refund in the browser', () => {
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    const [name, value] = (await signIn('manager')).split('=');
-    staff = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await staff.addCookies([{ name, value, url: appUrl }]);
+    staff = await staffContext(browser, 'manager');
   });
   afterAll(async () => {
     await staff?.close();

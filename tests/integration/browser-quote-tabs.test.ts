@@ -1,7 +1,6 @@
 import type { Browser, BrowserContext } from 'playwright-core';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext } from '../support/browser';
 import { readRuntime } from '../support/runtime';
 
 // The quote list's filter tabs say each state in words, the same words as the state column.
@@ -12,9 +11,7 @@ describe('quote filter tabs', () => {
   let context: BrowserContext;
   beforeAll(async () => {
     browser = await launchBrowser();
-    const [name, value] = (await signIn('counter')).split('=');
-    context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
+    context = await staffContext(browser, 'counter');
   });
   afterAll(async () => {
     await context?.close();

@@ -2,8 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser, BrowserContext } from 'playwright-core';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext } from '../support/browser';
 import { readRuntime } from '../support/runtime';
 
 // The manager's Numbers page in a real browser: the table and the state chart for the last 30 days,
@@ -17,9 +16,7 @@ describe('the Numbers page', () => {
   beforeAll(async () => {
     browser = await launchBrowser();
     fs.mkdirSync(SHOTS, { recursive: true });
-    const [name, value] = (await signIn('manager')).split('=');
-    context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
+    context = await staffContext(browser, 'manager');
   });
   afterAll(async () => {
     await context?.close();

@@ -1,8 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { Cam } from '@/lib/db/models';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext, watchedPage } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
 
@@ -31,12 +30,8 @@ describe('the shortlist: stock on hand and the certified-only filter', () => {
     emptied = { id: cam.id, stock: cam.stockOnHand, name: cam.name };
     await cam.update({ stockOnHand: 0 });
     browser = await launchBrowser();
-    const [name, value] = (await signIn('counter')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
-    page = await context.newPage();
-    page.setDefaultTimeout(15_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const context = await staffContext(browser, 'counter');
+    page = await watchedPage(context, pageErrors, 15_000);
   }, 60_000);
   afterAll(async () => {
     await browser?.close();

@@ -2,8 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Browser } from 'playwright-core';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
-import { signIn } from '../support/auth';
+import { launchBrowser, staffContext } from '../support/browser';
 import { readRuntime } from '../support/runtime';
 
 const { appUrl } = readRuntime();
@@ -18,9 +17,7 @@ describe('cam shortlist page in a real browser', () => {
   afterAll(() => browser?.close());
 
   it('ranks the demo build, draws the chart and opens a cam’s reasons from the keyboard', async () => {
-    const [name, value] = (await signIn('counter')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
+    const context = await staffContext(browser, 'counter');
     const page = await context.newPage();
     await page.goto(`${appUrl}/advisor`);
     await page.getByRole('heading', { name: 'Cam shortlist' }).waitFor();

@@ -4,7 +4,7 @@ import { QueryTypes } from 'sequelize';
 import request from 'supertest';
 import { AuditEntry, Lead, LeadNote, ShopSettings } from '@/lib/db/models';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { launchBrowser } from '../support/browser';
+import { launchBrowser, watchedPage } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { clearRateLimits } from '../support/rate-limits';
@@ -47,9 +47,7 @@ describe('stale leads are flagged', () => {
     return sent.body.id;
   }
   async function staffPage(context: BrowserContext): Promise<Page> {
-    const page = await context.newPage();
-    page.setDefaultTimeout(10_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const page = await watchedPage(context, pageErrors);
     return page;
   }
 

@@ -1,18 +1,21 @@
-// A factory-baseline cam as the interview form and the questionnaire offer it ("the cam in the engine now").
+import type { CamRecord } from '@/lib/catalogue/types';
 
-export type BaselineCardOption = {
-  id: number;
-  sku: string;
-  name: string;
-  baselineForLiters: number | null;
-  intakeDuration050: number;
-  exhaustDuration050: number;
-  intakeAdvertised: number | null;
-  exhaustAdvertised: number | null;
-  intakeLiftIn: number;
-  exhaustLiftIn: number;
-  lsa: number;
-  intakeCenterline: number;
-  rockerRatio: number;
-  springMaxLiftIn: number | null;
-};
+// A factory-baseline cam as the interview form and the questionnaire offer it ("the cam in the engine now"):
+// the catalogue's own record, cut down to the card's figures.
+export type BaselineCardOption = Pick<
+  CamRecord,
+  | 'id'
+  | 'sku'
+  | 'name'
+  | 'intakeDuration050'
+  | 'exhaustDuration050'
+  | 'intakeAdvertised'
+  | 'exhaustAdvertised'
+  | 'intakeLiftIn'
+  | 'exhaustLiftIn'
+  | 'lsa'
+  | 'intakeCenterline'
+  | 'rockerRatio'
+  | 'springMaxLiftIn'
+  | 'baselineForLiters'
+>;
