@@ -44,6 +44,14 @@ export const percentFromBp = (bp: number | null | undefined, digits?: number) =>
   bp === null || bp === undefined
     ? '—'
     : `${(bp / 100).toLocaleString(LOCALE, { minimumFractionDigits: digits ?? 0, maximumFractionDigits: digits ?? 2 })} %`;
+/** Basis points for a percent box: 825 → "8.25", 2000 → "20". */
+export const bpToPercentText = (bp: number) => String(bp / 100);
+/** A typed percent ("8.25", "8.25 %", "20%") in basis points; null when it is not a percent with at most two decimals. */
+export function bpFromPercentText(text: string): number | null {
+  const match = /^\s*(\d{1,5})(?:\.(\d{1,2}))?\s*%?\s*$/.exec(text);
+  if (!match) return null;
+  return Number(match[1]) * 100 + Number((match[2] ?? '').padEnd(2, '0'));
+}
 /** A signed change: "+4.2 %", "−1.0 %" (a real minus sign). */
 export const pctText = (pct: number) => `${pct >= 0 ? '+' : '−'}${Math.abs(pct).toFixed(1)} %`;
 export const count = (n: number, unit: string) => `${n.toLocaleString(LOCALE)} ${unit}`;

@@ -4,8 +4,8 @@ import { Form, Formik, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { useVersionedSave } from '@/lib/api-client';
-import { centsFromText, centsToText, formatMoney } from '@/lib/format';
-import { moneyWithin, numberWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
+import { bpFromPercentText, bpToPercentText, centsFromText, centsToText, formatMoney, percentFromBp } from '@/lib/format';
+import { moneyWithin, numberWithin, percentWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
@@ -19,7 +19,7 @@ import { CheckboxField, NumberField, SelectField, TextAreaField, TextField } fro
 export type FieldDef = {
   name: string;
   label: string;
-  kind: 'text' | 'textarea' | 'number' | 'integer' | 'money' | 'bool' | 'select';
+  kind: 'text' | 'textarea' | 'number' | 'integer' | 'money' | 'percent' | 'bool' | 'select';
   unit?: string;
   hint?: string;
   options?: { value: string; label: string }[];
@@ -42,6 +42,7 @@ export function valuesFromRecord(fields: FieldDef[], record: Record<string, unkn
     if (f.kind === 'bool') out[f.name] = typeof v === 'boolean' ? v : false;
     else if (v === null || v === undefined) out[f.name] = '';
     else if (f.kind === 'money') out[f.name] = centsToText(Number(v));
+    else if (f.kind === 'percent') out[f.name] = bpToPercentText(Number(v));
     else out[f.name] = String(v);
   }
   return out;
@@ -61,7 +62,8 @@ export function payloadFromValues(fields: FieldDef[], values: FormValues): Recor
     else if (f.kind === 'number' || f.kind === 'integer') out[f.name] = Number.isFinite(Number(text)) ? Number(text) : text;
     else if (f.kind === 'money') {
       out[f.name] = centsFromText(text) ?? text;
-    } else if (f.kind === 'select' && /^\d+$/.test(text) && f.name.endsWith('Id')) out[f.name] = Number(text);
+    } else if (f.kind === 'percent') out[f.name] = bpFromPercentText(text) ?? text;
+    else if (f.kind === 'select' && /^\d+$/.test(text) && f.name.endsWith('Id')) out[f.name] = Number(text);
     else out[f.name] = text;
   }
   return out;
@@ -78,6 +80,7 @@ export function yupValidator(fields: FieldDef[]) {
     if (f.kind === 'text' || f.kind === 'textarea') shape[f.name] = textUpTo(label, f.maxLength, { required: f.required });
     else if (f.kind === 'number' || f.kind === 'integer') shape[f.name] = numberWithin(label, f.unit ?? '', f.range, { integer: f.kind === 'integer', required: f.required });
     else if (f.kind === 'money') shape[f.name] = moneyWithin(label, f.range, centsFromText, { required: f.required });
+    else if (f.kind === 'percent') shape[f.name] = percentWithin(label, f.range, bpFromPercentText, { required: f.required });
   }
   return validateWithYup<FormValues>(yup.object(shape));
 }
@@ -95,6 +98,7 @@ function Field({ def }: { def: FieldDef }) {
 function show(def: FieldDef | undefined, value: unknown): string {
   if (value === null || value === undefined || value === '') return '(blank)';
   if (def?.kind === 'money') return formatMoney(Number(value));
+  if (def?.kind === 'percent') return percentFromBp(Number(value));
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return `${String(value)}${def?.unit ? ` ${def.unit}` : ''}`;
 }

@@ -47,6 +47,18 @@ export function moneyWithin(
   return options.required ? schema.test('required', `${label} is required`, (v) => Boolean(v?.trim())) : schema;
 }
 
+/** A percent typed as text ("8.25"), checked against a range kept in basis points. */
+export function percentWithin(label: string, range: Range | undefined, toBp: (text: string) => number | null, options: { required?: boolean } = {}) {
+  let schema = yup.string().test('percent', `${label} must be a percent with at most two decimals, e.g. 8.25`, (v) => !v?.trim() || toBp(v) !== null);
+  if (range) {
+    schema = schema.test('range', `${label} must be between ${range.min / 100} % and ${range.max / 100} %`, (v) => {
+      const bp = v?.trim() ? toBp(v) : null;
+      return bp === null || (bp >= range.min && bp <= range.max);
+    });
+  }
+  return options.required ? schema.test('required', `${label} is required`, (v) => Boolean(v?.trim())) : schema;
+}
+
 /** Text with a length limit; required means not blank. */
 export function textUpTo(label: string, maxLength?: number, options: { required?: boolean } = {}) {
   let schema = yup.string();
