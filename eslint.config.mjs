@@ -34,12 +34,23 @@ const config = [
           patterns: [
             LIB_NOT_UP,
             {
-              group: ['@/lib/mail', '@/lib/mail.*', '@/lib/payments', '@/lib/payments.*', '**/lib/mail', '**/lib/payments', '../../mail', '../../payments'],
-              message: 'db/queries holds SQL and mapping only: call mail and payments from src/lib/quotes/ (or another service module).',
+              group: [
+                '@/lib/mail',
+                '@/lib/mail.*',
+                '@/lib/payments',
+                '@/lib/payments.*',
+                '**/lib/mail',
+                '**/lib/payments',
+                '../../mail',
+                '../../payments',
+              ],
+              message:
+                'db/queries holds SQL and mapping only: call mail and payments from src/lib/quotes/ (or another service module).',
             },
             {
               group: ['@/lib/ranking', '@/lib/ranking/*', '**/ranking/*', '**/ranking'],
-              message: 'db/queries must not call the ranking service: let the caller rank and pass the result in (src/lib/ranking calls the queries).',
+              message:
+                'db/queries must not call the ranking service: let the caller rank and pass the result in (src/lib/ranking calls the queries).',
             },
           ],
         },
@@ -77,10 +88,18 @@ const config = [
   {
     files: ['src/lib/advisor/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', {
-        paths: ['react', 'next', 'sequelize'],
-        patterns: [{ group: ['@/components/*', '@/app/*', '@/lib/db/*', 'next/*', '@/lib/mail*', '@/lib/payments*'], message: 'the advisor stays pure (docs/advisor.md): no database, React, Next or services.' }],
-      }],
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: ['react', 'next', 'sequelize'],
+          patterns: [
+            {
+              group: ['@/components/*', '@/app/*', '@/lib/db/*', 'next/*', '@/lib/mail*', '@/lib/payments*'],
+              message: 'the advisor stays pure (docs/advisor.md): no database, React, Next or services.',
+            },
+          ],
+        },
+      ],
     },
   },
 ];

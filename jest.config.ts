@@ -10,7 +10,18 @@ const shared = {
     '^server-only$': '<rootDir>/node_modules/server-only/empty.js',
   },
   transform: {
-    '^.+\\.tsx?$': ['ts-jest', { tsconfig: { jsx: 'react-jsx', module: 'commonjs', moduleResolution: 'node', esModuleInterop: true, isolatedModules: true } }],
+    '^.+\\.tsx?$': [
+      'ts-jest',
+      {
+        tsconfig: {
+          jsx: 'react-jsx',
+          module: 'commonjs',
+          moduleResolution: 'node',
+          esModuleInterop: true,
+          isolatedModules: true,
+        },
+      },
+    ],
   },
 } satisfies Config['projects'] extends (infer P)[] | undefined ? Exclude<P, string> : never;
 

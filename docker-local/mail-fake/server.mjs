@@ -51,7 +51,10 @@ class ApiError extends Error {
 
 function sendJson(res, status, body) {
   const text = JSON.stringify(body);
-  res.writeHead(status, { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': Buffer.byteLength(text) });
+  res.writeHead(status, {
+    'Content-Type': 'application/json; charset=utf-8',
+    'Content-Length': Buffer.byteLength(text),
+  });
   res.end(text);
 }
 
@@ -87,8 +90,11 @@ function authorize(req) {
   const header = req.headers.authorization ?? '';
   const match = /^Bearer\s+(.+)$/i.exec(header);
   if (!match) {
-    throw new ApiError(401, 'missing_api_key',
-      'Missing API key in the authorization header. Include the following header in the request: Authorization: Bearer YOUR_API_KEY');
+    throw new ApiError(
+      401,
+      'missing_api_key',
+      'Missing API key in the authorization header. Include the following header in the request: Authorization: Bearer YOUR_API_KEY',
+    );
   }
   if (match[1].trim() !== API_KEY) throw new ApiError(403, 'invalid_api_key', 'API key is invalid');
 }
@@ -97,7 +103,8 @@ const listOf = (value) => (value == null ? [] : Array.isArray(value) ? value : [
 // Accepts both `a@b.c` and `Name <a@b.c>`; returns the bare address or null.
 function addressOf(value) {
   if (typeof value !== 'string') return null;
-  const match = /<([^<>\s]+@[^<>\s]+\.[^<>\s]+)>\s*$/.exec(value) ?? /^\s*([^<>\s]+@[^<>\s]+\.[^<>\s]+)\s*$/.exec(value);
+  const match =
+    /<([^<>\s]+@[^<>\s]+\.[^<>\s]+)>\s*$/.exec(value) ?? /^\s*([^<>\s]+@[^<>\s]+\.[^<>\s]+)\s*$/.exec(value);
   return match ? match[1].toLowerCase() : null;
 }
 
@@ -113,18 +120,26 @@ function validateEmail(body) {
   }
   if (!body.html && !body.text) throw new ApiError(422, 'missing_required_field', 'Missing `html` or `text` field.');
   if (!addressOf(body.from)) {
-    throw new ApiError(422, 'validation_error',
-      'Invalid `from` field. The email address needs to follow the `email@example.com` or `Name <email@example.com>` format.');
+    throw new ApiError(
+      422,
+      'validation_error',
+      'Invalid `from` field. The email address needs to follow the `email@example.com` or `Name <email@example.com>` format.',
+    );
   }
   for (const field of ['to', 'cc', 'bcc', 'reply_to']) {
     const list = listOf(body[field]);
     if (list.length > 50) throw new ApiError(422, 'validation_error', `Too many recipients in \`${field}\` (max 50).`);
     const bad = list.find((entry) => !addressOf(entry));
     if (bad !== undefined) {
-      throw new ApiError(422, 'validation_error', `Invalid \`${field}\` field. ${JSON.stringify(bad)} is not a valid email address.`);
+      throw new ApiError(
+        422,
+        'validation_error',
+        `Invalid \`${field}\` field. ${JSON.stringify(bad)} is not a valid email address.`,
+      );
     }
   }
-  if (typeof body.subject !== 'string') throw new ApiError(422, 'validation_error', 'Invalid `subject` field. Expected a string.');
+  if (typeof body.subject !== 'string')
+    throw new ApiError(422, 'validation_error', 'Invalid `subject` field. Expected a string.');
 }
 
 function toStored(body) {
@@ -141,7 +156,10 @@ function toStored(body) {
     headers: body.headers ?? {},
     tags: body.tags ?? [],
     // Contents are dropped: the inbox only needs to show that something was attached.
-    attachments: listOf(body.attachments).map((a) => ({ filename: a?.filename ?? null, size: a?.content?.length ?? 0 })),
+    attachments: listOf(body.attachments).map((a) => ({
+      filename: a?.filename ?? null,
+      size: a?.content?.length ?? 0,
+    })),
     scheduledAt: body.scheduled_at ?? null,
     createdAt: new Date().toISOString(),
   };
@@ -155,7 +173,11 @@ async function withIdempotency(req, rawBody, handler) {
   const previous = idempotent.get(key);
   if (previous) {
     if (previous.fingerprint !== fingerprint) {
-      throw new ApiError(409, 'invalid_idempotent_request', 'Same idempotency key used with a different request payload. Change your idempotency key or payload.');
+      throw new ApiError(
+        409,
+        'invalid_idempotent_request',
+        'Same idempotency key used with a different request payload. Change your idempotency key or payload.',
+      );
     }
     return previous.result;
   }
@@ -166,18 +188,39 @@ async function withIdempotency(req, rawBody, handler) {
 
 function apiView(m) {
   return {
-    object: 'email', id: m.id, from: m.from, to: m.to, cc: m.cc, bcc: m.bcc, reply_to: m.replyTo,
-    subject: m.subject, html: m.html, text: m.text, tags: m.tags,
-    created_at: m.createdAt, scheduled_at: m.scheduledAt, last_event: 'delivered',
+    object: 'email',
+    id: m.id,
+    from: m.from,
+    to: m.to,
+    cc: m.cc,
+    bcc: m.bcc,
+    reply_to: m.replyTo,
+    subject: m.subject,
+    html: m.html,
+    text: m.text,
+    tags: m.tags,
+    created_at: m.createdAt,
+    scheduled_at: m.scheduledAt,
+    last_event: 'delivered',
   };
 }
 
 function listView(m) {
-  return { id: m.id, from: m.from, to: m.to, cc: m.cc, subject: m.subject, html: m.html, text: m.text, attachments: m.attachments ?? [], createdAt: m.createdAt };
+  return {
+    id: m.id,
+    from: m.from,
+    to: m.to,
+    cc: m.cc,
+    subject: m.subject,
+    html: m.html,
+    text: m.text,
+    attachments: m.attachments ?? [],
+    createdAt: m.createdAt,
+  };
 }
 
 function newestFirst(to) {
-  const wanted = to ? addressOf(to) ?? to.toLowerCase() : null;
+  const wanted = to ? (addressOf(to) ?? to.toLowerCase()) : null;
   return messages
     .filter((m) => !wanted || [...m.to, ...m.cc, ...m.bcc].some((r) => addressOf(r) === wanted))
     .slice()
@@ -192,16 +235,21 @@ function inboxPage(selectedId, to) {
   const list = newestFirst(to);
   const selected = messages.find((m) => m.id === selectedId) ?? null;
   const query = to ? `&to=${encodeURIComponent(to)}` : '';
-  const items = list.map((m) => `
+  const items = list
+    .map(
+      (m) => `
       <li class="${m.id === selectedId ? 'on' : ''}"><a href="/?id=${encodeURIComponent(m.id)}${query}">
         <strong>${escapeHtml(m.subject)}</strong><br>
-        <small>${escapeHtml(m.to.join(', '))} · ${escapeHtml(m.createdAt)}</small></a></li>`).join('');
+        <small>${escapeHtml(m.to.join(', '))} · ${escapeHtml(m.createdAt)}</small></a></li>`,
+    )
+    .join('');
   let detail = '<p class="muted">Select a message.</p>';
   if (selected) {
     // sandbox="" (no allow-scripts, no allow-same-origin) keeps mail HTML from running code or reading this page.
-    const body = selected.html != null
-      ? `<iframe sandbox="" srcdoc="${escapeHtml(selected.html)}" title="message body"></iframe>`
-      : `<pre>${escapeHtml(selected.text)}</pre>`;
+    const body =
+      selected.html != null
+        ? `<iframe sandbox="" srcdoc="${escapeHtml(selected.html)}" title="message body"></iframe>`
+        : `<pre>${escapeHtml(selected.text)}</pre>`;
     detail = `
       <h2>${escapeHtml(selected.subject)}</h2>
       <dl><dt>From</dt><dd>${escapeHtml(selected.from)}</dd>
@@ -276,7 +324,8 @@ async function route(req, res) {
     const raw = await readBody(req);
     const body = parseJson(raw);
     if (!Array.isArray(body)) throw new ApiError(422, 'validation_error', 'Batch body must be a JSON array of emails.');
-    if (body.length > MAX_BATCH) throw new ApiError(422, 'validation_error', `A batch may hold at most ${MAX_BATCH} emails.`);
+    if (body.length > MAX_BATCH)
+      throw new ApiError(422, 'validation_error', `A batch may hold at most ${MAX_BATCH} emails.`);
     const permissive = req.headers['x-batch-validation'] === 'permissive';
     const result = await withIdempotency(req, raw, () => {
       const errors = [];
@@ -291,11 +340,14 @@ async function route(req, res) {
         }
       });
       // Strict mode is all-or-nothing, matching the hosted API's default.
-      if (errors.length && !permissive) throw new ApiError(422, 'validation_error', `emails[${errors[0].index}]: ${errors[0].message}`);
+      if (errors.length && !permissive)
+        throw new ApiError(422, 'validation_error', `emails[${errors[0].index}]: ${errors[0].message}`);
       const stored = valid.map(toStored);
       messages.push(...stored);
       if (stored.length) saveMessages();
-      return permissive ? { data: stored.map(({ id }) => ({ id })), errors } : { data: stored.map(({ id }) => ({ id })) };
+      return permissive
+        ? { data: stored.map(({ id }) => ({ id })), errors }
+        : { data: stored.map(({ id }) => ({ id })) };
     });
     return sendJson(res, 200, result);
   }
@@ -316,7 +368,9 @@ async function route(req, res) {
 const server = http.createServer((req, res) => {
   const started = Date.now();
   res.on('finish', () => {
-    console.log(`[mail-fake] ${new Date().toISOString()} ${req.method} ${req.url} ${res.statusCode} ${Date.now() - started}ms`);
+    console.log(
+      `[mail-fake] ${new Date().toISOString()} ${req.method} ${req.url} ${res.statusCode} ${Date.now() - started}ms`,
+    );
   });
   route(req, res).catch((err) => {
     if (res.headersSent) return res.destroy();

@@ -59,7 +59,8 @@ class ApiError extends Error {
   }
 }
 const missing = (kind, id) => new ApiError(404, `No such ${kind}: '${id}'`, { code: 'resource_missing', param: 'id' });
-const paramMissing = (param) => new ApiError(400, `Missing required param: ${param}.`, { code: 'parameter_missing', param });
+const paramMissing = (param) =>
+  new ApiError(400, `Missing required param: ${param}.`, { code: 'parameter_missing', param });
 const paramInvalid = (param, message) => new ApiError(400, message, { code: 'parameter_invalid', param });
 
 const now = () => Math.floor(Date.now() / 1000);
@@ -131,7 +132,10 @@ function authorize(req) {
   if (/^bearer$/i.test(scheme)) key = value;
   if (/^basic$/i.test(scheme)) key = Buffer.from(value, 'base64').toString('utf8').split(':')[0];
   if (!key) {
-    throw new ApiError(401, "You did not provide an API key. You need to provide your API key in the Authorization header, using Bearer auth (e.g. 'Authorization: Bearer YOUR_SECRET_KEY').");
+    throw new ApiError(
+      401,
+      "You did not provide an API key. You need to provide your API key in the Authorization header, using Bearer auth (e.g. 'Authorization: Bearer YOUR_SECRET_KEY').",
+    );
   }
   if (key !== API_KEY) throw new ApiError(401, `Invalid API Key provided: ${key.slice(0, 8)}****${key.slice(-4)}`);
   return key;
@@ -157,7 +161,8 @@ function httpUrl(value, param) {
 
 function metadata(value, param) {
   if (value === undefined || value === '') return {};
-  if (typeof value !== 'object' || Array.isArray(value)) throw paramInvalid(param, `Invalid object: ${param} must be a hash of strings.`);
+  if (typeof value !== 'object' || Array.isArray(value))
+    throw paramInvalid(param, `Invalid object: ${param} must be a hash of strings.`);
   const entries = Object.entries(value);
   if (entries.length > 50) throw paramInvalid(param, 'Metadata can have at most 50 keys.');
   for (const [k, v] of entries) {
@@ -188,9 +193,15 @@ function sign(body, timestamp) {
 
 function recordEvent(type, object, apiVersion) {
   const event = {
-    id: newId('evt'), object: 'event', api_version: apiVersion ?? API_VERSION, created: now(),
-    data: { object: structuredClone(object) }, livemode: false, pending_webhooks: WEBHOOK_URL ? 1 : 0,
-    request: { id: null, idempotency_key: null }, type,
+    id: newId('evt'),
+    object: 'event',
+    api_version: apiVersion ?? API_VERSION,
+    created: now(),
+    data: { object: structuredClone(object) },
+    livemode: false,
+    pending_webhooks: WEBHOOK_URL ? 1 : 0,
+    request: { id: null, idempotency_key: null },
+    type,
   };
   const entry = { event, delivery: { status: WEBHOOK_URL ? 'pending' : 'skipped', url: WEBHOOK_URL, attempts: [] } };
   state.events.push(entry);
@@ -205,7 +216,11 @@ async function attemptDelivery(entry) {
   try {
     const response = await fetch(WEBHOOK_URL, {
       method: 'POST',
-      headers: { 'Content-Type': 'application/json; charset=utf-8', 'Stripe-Signature': sign(body, now()), 'User-Agent': 'payments-fake-webhooks/1' },
+      headers: {
+        'Content-Type': 'application/json; charset=utf-8',
+        'Stripe-Signature': sign(body, now()),
+        'User-Agent': 'payments-fake-webhooks/1',
+      },
       body,
       signal: AbortSignal.timeout(5000),
     });
@@ -220,7 +235,9 @@ async function attemptDelivery(entry) {
     entry.delivery.status = 'delivered';
     entry.event.pending_webhooks = 0;
   }
-  console.log(`[payments-fake] webhook ${entry.event.type} ${entry.event.id} attempt ${entry.delivery.attempts.length} -> ${attempt.statusCode ?? attempt.error}`);
+  console.log(
+    `[payments-fake] webhook ${entry.event.type} ${entry.event.id} attempt ${entry.delivery.attempts.length} -> ${attempt.statusCode ?? attempt.error}`,
+  );
   save();
   return ok;
 }
@@ -232,10 +249,13 @@ function scheduleRetry(entry) {
     save();
     return;
   }
-  const timer = setTimeout(async () => {
-    retryTimers.delete(timer);
-    if (!(await attemptDelivery(entry))) scheduleRetry(entry);
-  }, WEBHOOK_RETRY_MS * 2 ** retriesDone);
+  const timer = setTimeout(
+    async () => {
+      retryTimers.delete(timer);
+      if (!(await attemptDelivery(entry))) scheduleRetry(entry);
+    },
+    WEBHOOK_RETRY_MS * 2 ** retriesDone,
+  );
   timer.unref();
   retryTimers.add(timer);
 }
@@ -267,7 +287,10 @@ function expireSession(record) {
 
 function lineItemList(record) {
   return {
-    object: 'list', data: record.lineItems, has_more: false, url: `/v1/checkout/sessions/${record.session.id}/line_items`,
+    object: 'list',
+    data: record.lineItems,
+    has_more: false,
+    url: `/v1/checkout/sessions/${record.session.id}/line_items`,
   };
 }
 
@@ -282,10 +305,24 @@ function expanded(record, expand = []) {
 }
 
 function createSession(params, req) {
-  rejectUnknown(params, ['mode', 'line_items', 'success_url', 'cancel_url', 'customer_email', 'metadata',
-    'client_reference_id', 'payment_intent_data', 'expires_at', 'locale', 'payment_method_types', 'submit_type', 'expand']);
+  rejectUnknown(params, [
+    'mode',
+    'line_items',
+    'success_url',
+    'cancel_url',
+    'customer_email',
+    'metadata',
+    'client_reference_id',
+    'payment_intent_data',
+    'expires_at',
+    'locale',
+    'payment_method_types',
+    'submit_type',
+    'expand',
+  ]);
   if (!params.mode) throw paramMissing('mode');
-  if (params.mode !== 'payment') throw paramInvalid('mode', `This local fake supports only mode=payment, not ${params.mode}.`);
+  if (params.mode !== 'payment')
+    throw paramInvalid('mode', `This local fake supports only mode=payment, not ${params.mode}.`);
   if (!Array.isArray(params.line_items) || params.line_items.length === 0) throw paramMissing('line_items');
 
   const lineItems = params.line_items.map((item, i) => {
@@ -295,16 +332,28 @@ function createSession(params, req) {
     rejectUnknown(item.price_data, ['currency', 'unit_amount', 'product_data'], `${p}[price_data]`);
     const { currency, unit_amount: unitAmount, product_data: product } = item.price_data;
     if (!currency) throw paramMissing(`${p}[price_data][currency]`);
-    if (!/^[a-z]{3}$/i.test(currency)) throw paramInvalid(`${p}[price_data][currency]`, `Invalid currency: ${currency}.`);
+    if (!/^[a-z]{3}$/i.test(currency))
+      throw paramInvalid(`${p}[price_data][currency]`, `Invalid currency: ${currency}.`);
     if (unitAmount === undefined) throw paramMissing(`${p}[price_data][unit_amount]`);
     if (!product?.name) throw paramMissing(`${p}[price_data][product_data][name]`);
     if (item.quantity === undefined) throw paramMissing(`${p}[quantity]`);
     const amount = integer(unitAmount, `${p}[price_data][unit_amount]`);
     const quantity = integer(item.quantity, `${p}[quantity]`, { min: 1 });
     return {
-      id: newId('li'), object: 'item', amount_subtotal: amount * quantity, amount_total: amount * quantity,
-      currency: currency.toLowerCase(), description: product.name, quantity,
-      price: { id: newId('price'), object: 'price', currency: currency.toLowerCase(), unit_amount: amount, product: newId('prod') },
+      id: newId('li'),
+      object: 'item',
+      amount_subtotal: amount * quantity,
+      amount_total: amount * quantity,
+      currency: currency.toLowerCase(),
+      description: product.name,
+      quantity,
+      price: {
+        id: newId('price'),
+        object: 'price',
+        currency: currency.toLowerCase(),
+        unit_amount: amount,
+        product: newId('prod'),
+      },
     };
   });
   const currency = lineItems[0].currency;
@@ -312,7 +361,10 @@ function createSession(params, req) {
     throw paramInvalid('line_items', 'All line items must use the same currency.');
   }
   if (params.customer_email !== undefined && !/^[^@\s]+@[^@\s]+\.[^@\s]+$/.test(params.customer_email)) {
-    throw new ApiError(400, `Invalid email address: ${params.customer_email}`, { code: 'email_invalid', param: 'customer_email' });
+    throw new ApiError(400, `Invalid email address: ${params.customer_email}`, {
+      code: 'email_invalid',
+      param: 'customer_email',
+    });
   }
   if (params.client_reference_id !== undefined && String(params.client_reference_id).length > 200) {
     throw paramInvalid('client_reference_id', 'client_reference_id can be at most 200 characters long.');
@@ -329,16 +381,31 @@ function createSession(params, req) {
   const id = newId('cs_test');
   const base = PUBLIC_URL ?? `http://${req.headers.host}`;
   const session = {
-    id, object: 'checkout.session', amount_subtotal: total, amount_total: total,
-    cancel_url: httpUrl(params.cancel_url, 'cancel_url'), client_reference_id: params.client_reference_id ?? null,
-    created, currency, customer_details: null, customer_email: params.customer_email ?? null,
-    expires_at: expiresAt, livemode: false, locale: params.locale ?? null,
-    metadata: metadata(params.metadata, 'metadata'), mode: 'payment', payment_intent: null,
-    payment_method_types: ['card'], payment_status: 'unpaid', status: 'open',
-    success_url: httpUrl(params.success_url, 'success_url'), url: `${base}/pay/${id}`,
+    id,
+    object: 'checkout.session',
+    amount_subtotal: total,
+    amount_total: total,
+    cancel_url: httpUrl(params.cancel_url, 'cancel_url'),
+    client_reference_id: params.client_reference_id ?? null,
+    created,
+    currency,
+    customer_details: null,
+    customer_email: params.customer_email ?? null,
+    expires_at: expiresAt,
+    livemode: false,
+    locale: params.locale ?? null,
+    metadata: metadata(params.metadata, 'metadata'),
+    mode: 'payment',
+    payment_intent: null,
+    payment_method_types: ['card'],
+    payment_status: 'unpaid',
+    status: 'open',
+    success_url: httpUrl(params.success_url, 'success_url'),
+    url: `${base}/pay/${id}`,
   };
   const record = {
-    session, lineItems,
+    session,
+    lineItems,
     intentData: { ...intentData, metadata: metadata(intentData.metadata, 'payment_intent_data[metadata]') },
     apiVersion: req.headers['stripe-version'] ?? API_VERSION,
   };
@@ -351,26 +418,49 @@ function createSession(params, req) {
 async function completeSession(record) {
   const { session } = record;
   if (session.status !== 'open') {
-    throw new ApiError(400, `This Checkout Session is not open (status: ${session.status}).`, { code: 'checkout_session_not_open' });
+    throw new ApiError(400, `This Checkout Session is not open (status: ${session.status}).`, {
+      code: 'checkout_session_not_open',
+    });
   }
   const created = now();
   const intentId = newId('pi');
   const chargeId = newId('ch');
   const common = {
-    amount: session.amount_total, currency: session.currency, created, livemode: false,
-    metadata: record.intentData.metadata, description: record.intentData.description ?? null,
+    amount: session.amount_total,
+    currency: session.currency,
+    created,
+    livemode: false,
+    metadata: record.intentData.metadata,
+    description: record.intentData.description ?? null,
     receipt_email: record.intentData.receipt_email ?? session.customer_email,
   };
   state.paymentIntents[intentId] = {
-    id: intentId, object: 'payment_intent', ...common, amount_capturable: 0, amount_received: session.amount_total,
-    latest_charge: chargeId, payment_method_types: ['card'], status: 'succeeded',
+    id: intentId,
+    object: 'payment_intent',
+    ...common,
+    amount_capturable: 0,
+    amount_received: session.amount_total,
+    latest_charge: chargeId,
+    payment_method_types: ['card'],
+    status: 'succeeded',
   };
   state.charges[chargeId] = {
-    id: chargeId, object: 'charge', ...common, amount_captured: session.amount_total, amount_refunded: 0,
-    captured: true, paid: true, refunded: false, payment_intent: intentId, status: 'succeeded',
+    id: chargeId,
+    object: 'charge',
+    ...common,
+    amount_captured: session.amount_total,
+    amount_refunded: 0,
+    captured: true,
+    paid: true,
+    refunded: false,
+    payment_intent: intentId,
+    status: 'succeeded',
   };
   Object.assign(session, {
-    status: 'complete', payment_status: 'paid', payment_intent: intentId, url: null,
+    status: 'complete',
+    payment_status: 'paid',
+    payment_intent: intentId,
+    url: null,
     customer_details: { email: session.customer_email ?? 'test-buyer@example.test', name: null },
   });
   save();
@@ -382,13 +472,22 @@ function createRefund(params, req) {
   let charge;
   if (params.payment_intent) {
     const intent = state.paymentIntents[params.payment_intent];
-    if (!intent) throw new ApiError(400, `No such payment_intent: '${params.payment_intent}'`, { code: 'resource_missing', param: 'payment_intent' });
+    if (!intent)
+      throw new ApiError(400, `No such payment_intent: '${params.payment_intent}'`, {
+        code: 'resource_missing',
+        param: 'payment_intent',
+      });
     charge = state.charges[intent.latest_charge];
   } else if (params.charge) {
     charge = state.charges[params.charge];
-    if (!charge) throw new ApiError(400, `No such charge: '${params.charge}'`, { code: 'resource_missing', param: 'charge' });
+    if (!charge)
+      throw new ApiError(400, `No such charge: '${params.charge}'`, { code: 'resource_missing', param: 'charge' });
   } else {
-    throw new ApiError(400, 'One of the following params should be provided for this request: payment_intent or charge.', { code: 'parameter_missing' });
+    throw new ApiError(
+      400,
+      'One of the following params should be provided for this request: payment_intent or charge.',
+      { code: 'parameter_missing' },
+    );
   }
   if (params.reason !== undefined && !['duplicate', 'fraudulent', 'requested_by_customer'].includes(params.reason)) {
     throw paramInvalid('reason', `Invalid reason: must be one of duplicate, fraudulent, or requested_by_customer`);
@@ -399,13 +498,22 @@ function createRefund(params, req) {
   }
   const amount = integer(params.amount, 'amount', { min: 1 }) ?? remaining;
   if (amount > remaining) {
-    throw new ApiError(400, `Refund amount (${amount}) is greater than unrefunded amount on charge (${remaining})`,
-      { code: 'amount_too_large', param: 'amount' });
+    throw new ApiError(400, `Refund amount (${amount}) is greater than unrefunded amount on charge (${remaining})`, {
+      code: 'amount_too_large',
+      param: 'amount',
+    });
   }
   const refund = {
-    id: newId('re'), object: 'refund', amount, charge: charge.id, created: now(), currency: charge.currency,
-    metadata: metadata(params.metadata, 'metadata'), payment_intent: charge.payment_intent,
-    reason: params.reason ?? null, status: 'succeeded',
+    id: newId('re'),
+    object: 'refund',
+    amount,
+    charge: charge.id,
+    created: now(),
+    currency: charge.currency,
+    metadata: metadata(params.metadata, 'metadata'),
+    payment_intent: charge.payment_intent,
+    reason: params.reason ?? null,
+    status: 'succeeded',
   };
   state.refunds[refund.id] = refund;
   charge.amount_refunded += amount;
@@ -433,7 +541,10 @@ async function apiRoute(method, pathname, params, query, req) {
   if ((m = /^\/v1\/checkout\/sessions\/([^/]+)\/expire$/.exec(pathname)) && method === 'POST') {
     const record = findSession(m[1]);
     if (record.session.status !== 'open') {
-      throw new ApiError(400, `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${record.session.status}".`);
+      throw new ApiError(
+        400,
+        `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${record.session.status}".`,
+      );
     }
     expireSession(record);
     return expanded(record, params.expand);
@@ -451,7 +562,10 @@ async function apiRoute(method, pathname, params, query, req) {
   if ((m = /^\/v1\/events\/([^/]+)$/.exec(pathname)) && method === 'GET') {
     return state.events.find((e) => e.event.id === m[1])?.event ?? Promise.reject(missing('event', m[1]));
   }
-  throw new ApiError(404, `Unrecognized request URL (${method}: ${pathname}). This local fake supports only the checkout, payment intent, charge, refund and event calls listed in its README.`);
+  throw new ApiError(
+    404,
+    `Unrecognized request URL (${method}: ${pathname}). This local fake supports only the checkout, payment intent, charge, refund and event calls listed in its README.`,
+  );
 }
 
 async function handleApi(req, res, url) {
@@ -467,9 +581,17 @@ async function handleApi(req, res, url) {
   const previous = slot && state.idempotency[slot];
   if (previous) {
     if (previous.fingerprint !== fingerprint) {
-      throw new ApiError(400, `Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than '${idemKey}' if you meant to execute a different request.`, { type: 'idempotency_error' });
+      throw new ApiError(
+        400,
+        `Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than '${idemKey}' if you meant to execute a different request.`,
+        { type: 'idempotency_error' },
+      );
     }
-    return sendJson(res, previous.status, previous.body, { ...headers, 'Idempotent-Replayed': 'true', 'Idempotency-Key': idemKey });
+    return sendJson(res, previous.status, previous.body, {
+      ...headers,
+      'Idempotent-Replayed': 'true',
+      'Idempotency-Key': idemKey,
+    });
   }
 
   let status = 200;
@@ -520,25 +642,39 @@ function page(title, content) {
 
 function checkoutPage(record) {
   const { session, lineItems } = record;
-  const rows = lineItems.map((li) => `<tr><td>${escapeHtml(li.description)} × ${li.quantity}</td><td>${escapeHtml(money(li.amount_total, li.currency))}</td></tr>`).join('');
+  const rows = lineItems
+    .map(
+      (li) =>
+        `<tr><td>${escapeHtml(li.description)} × ${li.quantity}</td><td>${escapeHtml(money(li.amount_total, li.currency))}</td></tr>`,
+    )
+    .join('');
   const id = encodeURIComponent(session.id);
-  const actions = session.status === 'open'
-    ? `<form method="post" action="/pay/${id}/complete"><button class="pay" type="submit">Pay (test card)</button></form>
+  const actions =
+    session.status === 'open'
+      ? `<form method="post" action="/pay/${id}/complete"><button class="pay" type="submit">Pay (test card)</button></form>
        <form method="post" action="/pay/${id}/cancel"><button type="submit">Cancel</button></form>`
-    : `<p><strong>This checkout is ${escapeHtml(session.status)}${session.payment_status === 'paid' ? ' and paid' : ''}.</strong></p>`;
-  return page('Test checkout', `
+      : `<p><strong>This checkout is ${escapeHtml(session.status)}${session.payment_status === 'paid' ? ' and paid' : ''}.</strong></p>`;
+  return page(
+    'Test checkout',
+    `
     <h1>Deposit</h1>
     <div class="total">${escapeHtml(money(session.amount_total, session.currency))}</div>
     ${session.customer_email ? `<p class="muted">Receipt to ${escapeHtml(session.customer_email)}</p>` : ''}
     <table>${rows}</table>
     ${actions}
-    <p class="muted">Session <code>${escapeHtml(session.id)}</code></p>`);
+    <p class="muted">Session <code>${escapeHtml(session.id)}</code></p>`,
+  );
 }
 
 async function hostedRoute(req, res, pathname) {
   const m = /^\/pay\/([^/]+)(\/complete|\/cancel)?$/.exec(pathname);
   const record = m && state.sessions[decodeURIComponent(m[1])];
-  if (!record) return sendHtml(res, 404, page('Not found', '<h1>Checkout not found</h1><p>This link is unknown to the local payments fake.</p>'));
+  if (!record)
+    return sendHtml(
+      res,
+      404,
+      page('Not found', '<h1>Checkout not found</h1><p>This link is unknown to the local payments fake.</p>'),
+    );
   const { session } = findSession(record.session.id);
   const action = m[2];
   if (!action && req.method === 'GET') return sendHtml(res, 200, checkoutPage(record));
@@ -581,7 +717,9 @@ async function route(req, res) {
 const server = http.createServer((req, res) => {
   const started = Date.now();
   res.on('finish', () => {
-    console.log(`[payments-fake] ${new Date().toISOString()} ${req.method} ${req.url} ${res.statusCode} ${Date.now() - started}ms`);
+    console.log(
+      `[payments-fake] ${new Date().toISOString()} ${req.method} ${req.url} ${res.statusCode} ${Date.now() - started}ms`,
+    );
   });
   route(req, res).catch((err) => {
     if (res.headersSent) return res.destroy();
@@ -593,7 +731,9 @@ const server = http.createServer((req, res) => {
 
 server.listen(PORT, HOST, () => {
   const { port } = server.address();
-  console.log(`[payments-fake] listening on http://${HOST}:${port} (data: ${STATE_FILE}, webhooks: ${WEBHOOK_URL ?? 'off'})`);
+  console.log(
+    `[payments-fake] listening on http://${HOST}:${port} (data: ${STATE_FILE}, webhooks: ${WEBHOOK_URL ?? 'off'})`,
+  );
   // Deliveries interrupted by a restart pick up where they left off.
   if (WEBHOOK_URL) state.events.filter((e) => e.delivery.status === 'pending').forEach(scheduleRetry);
 });

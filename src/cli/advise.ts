@@ -6,7 +6,8 @@ import { BuildProfileSchema } from '../lib/schemas/build-profile';
 import { CamCatalogueSchema } from '../lib/schemas/cam-card';
 import { formatZodIssues, type FieldIssue } from '../lib/schemas/errors';
 
-const USAGE = 'usage: npm run advise -- --build <build.json> --cams <cams.json> [--history <history.json>] [--no-curves]';
+const USAGE =
+  'usage: npm run advise -- --build <build.json> --cams <cams.json> [--history <history.json>] [--no-curves]';
 
 class InputError extends Error {
   constructor(readonly issues: FieldIssue[]) {
@@ -23,7 +24,8 @@ function parseArgs(argv: string[]): Args {
     if (a === '--no-curves') args.curves = false;
     else if (a === '--build' || a === '--cams' || a === '--history') {
       const v = argv[++i];
-      if (v === undefined || v.startsWith('--')) throw new InputError([{ field: a.slice(2), message: `${a} needs a file path` }]);
+      if (v === undefined || v.startsWith('--'))
+        throw new InputError([{ field: a.slice(2), message: `${a} needs a file path` }]);
       args[a.slice(2) as 'build' | 'cams' | 'history'] = v;
     } else throw new InputError([{ field: '(arguments)', message: `unknown argument ${JSON.stringify(a)}` }]);
   }
@@ -50,7 +52,8 @@ function readJsonFile(label: string, path: string): unknown {
 // History is optional and only lightly checked: the advisor ignores records it cannot use.
 function readHistory(path: string): HistoryEntry[] {
   const value = readJsonFile('history', path);
-  if (!Array.isArray(value)) throw new InputError([{ field: 'history', message: 'must be a JSON array of past results' }]);
+  if (!Array.isArray(value))
+    throw new InputError([{ field: 'history', message: 'must be a JSON array of past results' }]);
   return value.filter((h): h is HistoryEntry => typeof h === 'object' && h !== null && 'camId' in h);
 }
 

@@ -10,12 +10,38 @@ import { generatedCatalogue } from './generated-catalogue';
 const { demoCamCards } = require('../../database/demo-cams.cjs') as { demoCamCards: () => unknown[] };
 
 const build = BuildProfileSchema.parse({
-  engine: { cylinders: 8, boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'none' },
+  engine: {
+    cylinders: 8,
+    boreIn: 3.78,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 9.9,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 240,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'none',
+  },
   exhaust: { headers: 'long-tube', primaryIn: 1.75, system: 'full' },
   drivetrain: { transmission: 'automatic', stallRpm: 2200, axleRatio: 3.73, topGearRatio: 0.7, tireDiameterIn: 31 },
   vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-  use: { primary: 'daily', idle: 'smooth', fuelOctane: 91, emissionsRequired: false, cruiseMph: 70, budgetCents: 250000 },
-  baselineCam: { id: 'stock', name: 'Stock', intakeDuration050: 190, exhaustDuration050: 191, intakeLiftIn: 0.467, exhaustLiftIn: 0.479, lsa: 114.5, intakeCenterline: 114.5 },
+  use: {
+    primary: 'daily',
+    idle: 'smooth',
+    fuelOctane: 91,
+    emissionsRequired: false,
+    cruiseMph: 70,
+    budgetCents: 250000,
+  },
+  baselineCam: {
+    id: 'stock',
+    name: 'Stock',
+    intakeDuration050: 190,
+    exhaustDuration050: 191,
+    intakeLiftIn: 0.467,
+    exhaustLiftIn: 0.479,
+    lsa: 114.5,
+    intakeCenterline: 114.5,
+  },
 });
 
 function medianMs(cams: readonly CamCard[], runs: number): { medianMs: number; fullyModelled: number } {
@@ -34,9 +60,20 @@ function medianMs(cams: readonly CamCard[], runs: number): { medianMs: number; f
 
 const demo = CamCatalogueSchema.parse(demoCamCards());
 const generated = generatedCatalogue(1000);
-console.log(JSON.stringify({
-  build: '5.3 L truck, 240 cfm heads, long tubes, full exhaust, daily use',
-  demoCatalogue: { cams: demo.length, runs: 20, ...medianMs(demo, 20), targetMs: 300 },
-  generatedCatalogue: { cams: generated.length, runs: Number(process.env.BENCH_RUNS ?? 3), ...medianMs(generated, Number(process.env.BENCH_RUNS ?? 3)), targetMs: 1000 },
-  node: process.version,
-}, null, 2));
+console.log(
+  JSON.stringify(
+    {
+      build: '5.3 L truck, 240 cfm heads, long tubes, full exhaust, daily use',
+      demoCatalogue: { cams: demo.length, runs: 20, ...medianMs(demo, 20), targetMs: 300 },
+      generatedCatalogue: {
+        cams: generated.length,
+        runs: Number(process.env.BENCH_RUNS ?? 3),
+        ...medianMs(generated, Number(process.env.BENCH_RUNS ?? 3)),
+        targetMs: 1000,
+      },
+      node: process.version,
+    },
+    null,
+    2,
+  ),
+);

@@ -28,7 +28,13 @@ function freePort(): Promise<number> {
 async function waitForHealth(url: string): Promise<void> {
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
-    if ((await fetch(`${url}/api/health`).then((r) => r.status, () => 0)) === 200) return;
+    if (
+      (await fetch(`${url}/api/health`).then(
+        (r) => r.status,
+        () => 0,
+      )) === 200
+    )
+      return;
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error('the app did not answer /api/health within 60 s');
@@ -41,32 +47,65 @@ const TOKENS_FILE = 'var/bench/lighthouse-pages.json';
 
 async function postLead(url: string): Promise<string> {
   const answers = {
-    engine: '5.3', use: 'daily', idle: 'noticeable', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'headers', budget: '1500-3000',
-    name: 'Lighthouse bench (not a customer)', email: `lighthouse-bench-${Date.now()}@lobewise.test`, consent: true,
+    engine: '5.3',
+    use: 'daily',
+    idle: 'noticeable',
+    emissions: 'no',
+    transmission: 'automatic',
+    driveline: 'stock',
+    exhaust: 'headers',
+    budget: '1500-3000',
+    name: 'Lighthouse bench (not a customer)',
+    email: `lighthouse-bench-${Date.now()}@lobewise.test`,
+    consent: true,
   };
-  const response = await fetch(`${url}/api/leads`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(answers) });
+  const response = await fetch(`${url}/api/leads`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify(answers),
+  });
   const body = (await response.json()) as { resultUrl?: string; message?: string };
-  if (response.status !== 201 || !body.resultUrl) throw new Error(`POST /api/leads answered ${response.status}: ${body.message ?? ''}`);
+  if (response.status !== 201 || !body.resultUrl)
+    throw new Error(`POST /api/leads answered ${response.status}: ${body.message ?? ''}`);
   return body.resultUrl;
 }
 
 async function sendQuote(url: string, mailUrl: string): Promise<string> {
-  const signIn = await fetch(`${url}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'counter@lobewise.test', password: 'lobewise-demo' }) });
+  const signIn = await fetch(`${url}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'counter@lobewise.test', password: 'lobewise-demo' }),
+  });
   if (signIn.status !== 200) throw new Error(`demo sign-in answered ${signIn.status}: is the demo seeded?`);
-  const headers = { cookie: signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; '), 'content-type': 'application/json' };
-  const made = await fetch(`${url}/api/quotes`, { method: 'POST', headers, body: JSON.stringify({ buildId: 3, camId: 15 }) });
+  const headers = {
+    cookie: signIn.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .join('; '),
+    'content-type': 'application/json',
+  };
+  const made = await fetch(`${url}/api/quotes`, {
+    method: 'POST',
+    headers,
+    body: JSON.stringify({ buildId: 3, camId: 15 }),
+  });
   const quote = (await made.json()) as { id?: number; number?: string };
   if (made.status !== 201) throw new Error(`POST /api/quotes answered ${made.status}: ${JSON.stringify(quote)}`);
   const sent = await fetch(`${url}/api/quotes/${quote.id}/send`, { method: 'POST', headers });
   if (sent.status !== 200) throw new Error(`sending the bench quote answered ${sent.status}`);
   const messages = (await (await fetch(`${mailUrl}/messages`)).json()) as { subject: string; text: string }[];
-  const link = messages.filter((m) => m.subject.includes(quote.number!)).map((m) => /\/q\/([A-Za-z0-9_-]+)/.exec(m.text)?.[0]).find(Boolean);
+  const link = messages
+    .filter((m) => m.subject.includes(quote.number!))
+    .map((m) => /\/q\/([A-Za-z0-9_-]+)/.exec(m.text)?.[0])
+    .find(Boolean);
   if (!link) throw new Error(`no link to ${quote.number} reached the mail fake`);
   return link;
 }
 
 async function privatePages(url: string, mailUrl: string): Promise<{ result: string; quote: string }> {
-  const kept = fs.existsSync(TOKENS_FILE) ? (JSON.parse(fs.readFileSync(TOKENS_FILE, 'utf8')) as { result: string; quote: string }) : null;
+  const kept = fs.existsSync(TOKENS_FILE)
+    ? (JSON.parse(fs.readFileSync(TOKENS_FILE, 'utf8')) as { result: string; quote: string })
+    : null;
   const live = async (page?: string) => !!page && (await fetch(`${url}${page}`)).status === 200;
   const pages = {
     result: kept && (await live(kept.result)) ? kept.result : await postLead(url),
@@ -77,17 +116,31 @@ async function privatePages(url: string, mailUrl: string): Promise<{ result: str
   return pages;
 }
 
-type Audit = { numericValue?: number; details?: { items?: { resourceType?: string; transferSize?: number; resourceSize?: number }[] } };
-type Report = { categories: Record<string, { score: number | null }>; audits: Record<string, Audit>; environment?: { benchmarkIndex?: number } };
+type Audit = {
+  numericValue?: number;
+  details?: { items?: { resourceType?: string; transferSize?: number; resourceSize?: number }[] };
+};
+type Report = {
+  categories: Record<string, { score: number | null }>;
+  audits: Record<string, Audit>;
+  environment?: { benchmarkIndex?: number };
+};
 
 function lighthouse(target: string): Promise<Report> {
   const args = [
-    'node_modules/lighthouse/cli/index.js', target,
-    '--only-categories=performance,accessibility', '--output=json', '--output-path=stdout', '--quiet',
+    'node_modules/lighthouse/cli/index.js',
+    target,
+    '--only-categories=performance,accessibility',
+    '--output=json',
+    '--output-path=stdout',
+    '--quiet',
     '--chrome-flags=--headless=new --no-sandbox --disable-gpu --disable-background-networking --disable-component-update --no-first-run',
   ];
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, args, { env: { ...process.env, CHROME_PATH }, stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, args, {
+      env: { ...process.env, CHROME_PATH },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let out = '';
     let err = '';
     child.stdout.on('data', (d) => (out += d));
@@ -105,7 +158,9 @@ function lighthouse(target: string): Promise<Report> {
 }
 
 function figures(label: string, report: Report) {
-  const scripts = (report.audits['network-requests']?.details?.items ?? []).filter((item) => item.resourceType === 'Script');
+  const scripts = (report.audits['network-requests']?.details?.items ?? []).filter(
+    (item) => item.resourceType === 'Script',
+  );
   const kB = (bytes: number) => Math.round(bytes / 102.4) / 10;
   return {
     page: label,
@@ -129,13 +184,28 @@ async function main(): Promise<void> {
   const mailKey = 're_bench_lighthouse';
   const children: ChildProcess[] = [
     spawn(process.execPath, ['docker-local/mail-fake/server.mjs'], {
-      env: { ...process.env, MAIL_FAKE_PORT: String(mailPort), MAIL_FAKE_API_KEY: mailKey, MAIL_FAKE_DATA_DIR: 'var/bench/mail-fake' },
+      env: {
+        ...process.env,
+        MAIL_FAKE_PORT: String(mailPort),
+        MAIL_FAKE_API_KEY: mailKey,
+        MAIL_FAKE_DATA_DIR: 'var/bench/mail-fake',
+      },
       stdio: 'ignore',
     }),
-    spawn(process.execPath, ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)], {
-      env: { ...process.env, NODE_ENV: 'production', APP_BASE_URL: url, RESEND_BASE_URL: mailUrl, RESEND_API_KEY: mailKey },
-      stdio: 'ignore',
-    }),
+    spawn(
+      process.execPath,
+      ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)],
+      {
+        env: {
+          ...process.env,
+          NODE_ENV: 'production',
+          APP_BASE_URL: url,
+          RESEND_BASE_URL: mailUrl,
+          RESEND_API_KEY: mailKey,
+        },
+        stdio: 'ignore',
+      },
+    ),
   ];
   try {
     await waitForHealth(url);
@@ -150,10 +220,16 @@ async function main(): Promise<void> {
       const median = runs[Math.floor(runs.length / 2)];
       rows.push({ ...median, 'all runs': runs.map((r) => r.performance).join(' ') });
     }
-    console.log(`\nLighthouse mobile profile, median of ${RUNS} run(s) per page, ${new Date().toISOString()}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}, load ${os.loadavg()[0].toFixed(1)}`);
+    console.log(
+      `\nLighthouse mobile profile, median of ${RUNS} run(s) per page, ${new Date().toISOString()}, ${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}, load ${os.loadavg()[0].toFixed(1)}`,
+    );
     console.table(rows);
     const short = rows.filter((r) => r.performance < 95 || r.accessibility < 100).map((r) => r.page);
-    console.log(short.length ? `below target (performance ≥ 95, accessibility 100): ${short.join(', ')}` : 'every page meets performance ≥ 95 and accessibility 100');
+    console.log(
+      short.length
+        ? `below target (performance ≥ 95, accessibility 100): ${short.join(', ')}`
+        : 'every page meets performance ≥ 95 and accessibility 100',
+    );
   } finally {
     for (const child of children) child.kill('SIGTERM');
   }

@@ -25,7 +25,13 @@ function freePort(): Promise<number> {
 async function waitForHealth(url: string): Promise<void> {
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
-    if ((await fetch(`${url}/api/health`).then((r) => r.status, () => 0)) === 200) return;
+    if (
+      (await fetch(`${url}/api/health`).then(
+        (r) => r.status,
+        () => 0,
+      )) === 200
+    )
+      return;
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error('the app did not answer /api/health within 60 s');
@@ -35,21 +41,38 @@ type Figures = { name: string; rps: number; p50: number; p975: number; non2xx: n
 
 async function measure(name: string, options: autocannon.Options): Promise<Figures> {
   const result = await autocannon({ connections: CONNECTIONS, duration: SECONDS, ...options });
-  return { name, rps: result.requests.average, p50: result.latency.p50, p975: result.latency.p97_5, non2xx: result.non2xx + result.errors };
+  return {
+    name,
+    rps: result.requests.average,
+    p50: result.latency.p50,
+    p975: result.latency.p97_5,
+    non2xx: result.non2xx + result.errors,
+  };
 }
 
 async function main(): Promise<void> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const app = spawn(process.execPath, ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)], {
-    env: { ...process.env, NODE_ENV: 'production', APP_BASE_URL: url },
-    stdio: 'ignore',
-  });
+  const app = spawn(
+    process.execPath,
+    ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)],
+    {
+      env: { ...process.env, NODE_ENV: 'production', APP_BASE_URL: url },
+      stdio: 'ignore',
+    },
+  );
   try {
     await waitForHealth(url);
-    const signIn = await fetch(`${url}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'counter@lobewise.test', password: 'lobewise-demo' }) });
+    const signIn = await fetch(`${url}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: 'counter@lobewise.test', password: 'lobewise-demo' }),
+    });
     if (signIn.status !== 200) throw new Error(`demo sign-in answered ${signIn.status}: is the demo seeded?`);
-    const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+    const cookie = signIn.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .join('; ');
     const build = JSON.parse(fs.readFileSync('docs/examples/build-daily-truck.json', 'utf8'));
     const headers = { cookie, 'content-type': 'application/json' };
     const one = await fetch(`${url}/api/advisor/rank`, { method: 'POST', headers, body: JSON.stringify({ build }) });
@@ -59,11 +82,29 @@ async function main(): Promise<void> {
 
     const rows = [
       await measure('GET /api/health', { url: `${url}/api/health` }),
-      await measure('rank, one cam', { url: `${url}/api/advisor/rank`, method: 'POST', headers, body: JSON.stringify({ build, camIds: [camId] }) }),
-      await measure(`rank, whole catalogue (${ranked.rankings!.length} cams)`, { url: `${url}/api/advisor/rank`, method: 'POST', headers, body: JSON.stringify({ build }) }),
+      await measure('rank, one cam', {
+        url: `${url}/api/advisor/rank`,
+        method: 'POST',
+        headers,
+        body: JSON.stringify({ build, camIds: [camId] }),
+      }),
+      await measure(`rank, whole catalogue (${ranked.rankings!.length} cams)`, {
+        url: `${url}/api/advisor/rank`,
+        method: 'POST',
+        headers,
+        body: JSON.stringify({ build }),
+      }),
     ];
     console.log(`\n${CONNECTIONS} connections, ${SECONDS} s each, loopback, ${new Date().toISOString()}`);
-    console.table(rows.map((r) => ({ route: r.name, 'req/s': Math.round(r.rps), 'p50 ms': r.p50, 'p97.5 ms': r.p975, 'non-2xx/errors': r.non2xx })));
+    console.table(
+      rows.map((r) => ({
+        route: r.name,
+        'req/s': Math.round(r.rps),
+        'p50 ms': r.p50,
+        'p97.5 ms': r.p975,
+        'non-2xx/errors': r.non2xx,
+      })),
+    );
     const [health, oneCam, all] = rows;
     console.log(`one-cam rank p97.5 / health p97.5 = ${(oneCam.p975 / health.p975).toFixed(2)} (target ≤ 3)`);
     console.log(`whole-catalogue rank p97.5 / health p97.5 = ${(all.p975 / health.p975).toFixed(2)}`);

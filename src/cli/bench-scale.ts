@@ -35,21 +35,37 @@ async function waitFor(url: string, ms: number) {
   throw new Error(`${url} did not come up`);
 }
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
-const peakMb = (pid: number) => Number(/VmHWM:\s+(\d+)/.exec(fs.readFileSync(`/proc/${pid}/status`, 'utf8'))?.[1] ?? 0) / 1024;
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
+const peakMb = (pid: number) =>
+  Number(/VmHWM:\s+(\d+)/.exec(fs.readFileSync(`/proc/${pid}/status`, 'utf8'))?.[1] ?? 0) / 1024;
 
 type Probe = { label: string; path: string; method?: 'POST'; body?: () => unknown; runs?: number };
 
 async function main() {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)], {
-    env: { ...process.env, NODE_ENV: 'production', DB_NAME: 'lobewise_scale', APP_BASE_URL: base, SESSION_SECRET: process.env.SESSION_SECRET ?? 'bench-scale-secret-0123456789abcdefghijkl' },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const server = spawn(
+    process.execPath,
+    ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)],
+    {
+      env: {
+        ...process.env,
+        NODE_ENV: 'production',
+        DB_NAME: 'lobewise_scale',
+        APP_BASE_URL: base,
+        SESSION_SECRET: process.env.SESSION_SECRET ?? 'bench-scale-secret-0123456789abcdefghijkl',
+      },
+      stdio: ['ignore', 'ignore', 'inherit'],
+    },
+  );
   try {
     await waitFor(`${base}/api/health`, 60_000);
-    const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json', origin: base }, body: JSON.stringify({ email: 'manager@lobewise.test', password: 'lobewise-demo' }) });
+    const signIn = await fetch(`${base}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', origin: base },
+      body: JSON.stringify({ email: 'manager@lobewise.test', password: 'lobewise-demo' }),
+    });
     const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0];
     if (!signIn.ok || !cookie) throw new Error(`sign-in answered ${signIn.status}`);
     const headers = { cookie, origin: base, 'content-type': 'application/json' };
@@ -59,12 +75,30 @@ async function main() {
     // The one-cam probe ranks the catalogue's last cam (its history is read by cam); finding it costs a whole ranking.
     const wanted = (label: string) => !ONLY || ONLY.test(label);
     const first = wanted('POST /api/advisor/rank (one cam)')
-      ? ((await (await fetch(`${base}/api/advisor/rank`, { method: 'POST', headers, body: JSON.stringify({ build: build.profile, includeCurves: false }) })).json()) as { rankings: { camId: number }[] })
+      ? ((await (
+          await fetch(`${base}/api/advisor/rank`, {
+            method: 'POST',
+            headers,
+            body: JSON.stringify({ build: build.profile, includeCurves: false }),
+          })
+        ).json()) as { rankings: { camId: number }[] })
       : { rankings: [{ camId: 0 }] };
     const oneCam = first.rankings[first.rankings.length - 1].camId;
     const probes: Probe[] = [
-      { label: 'POST /api/advisor/rank', path: '/api/advisor/rank', method: 'POST', body: () => ({ build: build.profile }), runs: 10 },
-      { label: 'POST /api/advisor/rank (one cam)', path: '/api/advisor/rank', method: 'POST', body: () => ({ build: build.profile, camIds: [oneCam] }), runs: 10 },
+      {
+        label: 'POST /api/advisor/rank',
+        path: '/api/advisor/rank',
+        method: 'POST',
+        body: () => ({ build: build.profile }),
+        runs: 10,
+      },
+      {
+        label: 'POST /api/advisor/rank (one cam)',
+        path: '/api/advisor/rank',
+        method: 'POST',
+        body: () => ({ build: build.profile, camIds: [oneCam] }),
+        runs: 10,
+      },
       { label: 'GET /api/reports/summary (1 year)', path: `/api/reports/summary?from=${yearAgo}&to=${today}` },
       { label: 'GET /api/leads', path: '/api/leads' },
       { label: 'GET /api/quotes', path: '/api/quotes' },
@@ -72,7 +106,11 @@ async function main() {
       { label: 'GET /api/quotes?q=', path: '/api/quotes?q=Kavel' },
       { label: 'GET /api/customers?q=', path: '/api/customers?q=Kavel' },
       { label: 'GET /api/builds', path: '/api/builds' },
-      { label: 'GET /api/reports/quotes.csv (1 year)', path: `/api/reports/quotes.csv?from=${yearAgo}&to=${today}`, runs: 5 },
+      {
+        label: 'GET /api/reports/quotes.csv (1 year)',
+        path: `/api/reports/quotes.csv?from=${yearAgo}&to=${today}`,
+        runs: 5,
+      },
       { label: 'page /quotes', path: '/quotes' },
       { label: 'page /leads', path: '/leads' },
       { label: 'page /dashboard', path: '/dashboard' },
@@ -84,13 +122,19 @@ async function main() {
       let status = 0;
       for (let i = 0; i < (probe.runs ?? RUNS); i++) {
         const t0 = performance.now();
-        const res = await fetch(`${base}${probe.path}`, { method: probe.method ?? 'GET', headers, body: probe.body ? JSON.stringify(probe.body()) : undefined });
+        const res = await fetch(`${base}${probe.path}`, {
+          method: probe.method ?? 'GET',
+          headers,
+          body: probe.body ? JSON.stringify(probe.body()) : undefined,
+        });
         bytes = (await res.arrayBuffer()).byteLength;
         times.push(performance.now() - t0);
         status = res.status;
       }
       times.sort((a, b) => a - b);
-      console.log(`| ${probe.label} | ${percentile(times, 50).toFixed(0)} | ${percentile(times, 97.5).toFixed(0)} | ${bytes.toLocaleString('en-US')} | ${status} |`);
+      console.log(
+        `| ${probe.label} | ${percentile(times, 50).toFixed(0)} | ${percentile(times, 97.5).toFixed(0)} | ${bytes.toLocaleString('en-US')} | ${status} |`,
+      );
     }
     console.log(`\nserver peak memory (VmHWM): ${peakMb(server.pid!).toFixed(0)} MB`);
   } finally {

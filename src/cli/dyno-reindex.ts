@@ -6,7 +6,9 @@ import { refreshAllDynoGains } from '../lib/db/queries/dyno-gains';
 async function main() {
   const started = Date.now();
   const builds = await refreshAllDynoGains();
-  console.log(`dyno:reindex: ${builds} builds with dyno runs refiled in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+  console.log(
+    `dyno:reindex: ${builds} builds with dyno runs refiled in ${((Date.now() - started) / 1000).toFixed(1)} s`,
+  );
   await closeSequelize();
 }
 

@@ -24,4 +24,10 @@ for (const combustionEfficiency of grid(r.combustionEfficiency.min, r.combustion
 }
 const chosen = best!.fitted;
 const report = calibrationReport(chosen, PEAK_FACTS, CROSSING_FACTS);
-console.log(JSON.stringify({ fitted: chosen, baseline: CALIBRATION_STOCK_CAM.id, engine: CALIBRATION_ENGINE.engine, ...report }, null, 2));
+console.log(
+  JSON.stringify(
+    { fitted: chosen, baseline: CALIBRATION_STOCK_CAM.id, engine: CALIBRATION_ENGINE.engine, ...report },
+    null,
+    2,
+  ),
+);

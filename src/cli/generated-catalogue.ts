@@ -21,9 +21,17 @@ export function generatedCatalogue(n: number, seed = 20261202): CamCard[] {
     const lsa = 106 + Math.round(rnd() * 12);
     const lift = Math.round((0.45 + (dur - 190) * 0.005 + rnd() * 0.03) * 1000) / 1000;
     cams.push({
-      id: `GEN-${String(i).padStart(4, '0')}`, name: `Generated grind ${dur}`, intakeDuration050: dur, exhaustDuration050: dur + Math.round(rnd() * 10),
-      intakeLiftIn: lift, exhaustLiftIn: lift, lsa, intakeCenterline: lsa - Math.round(rnd() * 6),
-      emissionsCertified: rnd() < 0.1, deactivationCompatible: rnd() < 0.3, priceCents: 30000 + Math.round(rnd() * 25000),
+      id: `GEN-${String(i).padStart(4, '0')}`,
+      name: `Generated grind ${dur}`,
+      intakeDuration050: dur,
+      exhaustDuration050: dur + Math.round(rnd() * 10),
+      intakeLiftIn: lift,
+      exhaustLiftIn: lift,
+      lsa,
+      intakeCenterline: lsa - Math.round(rnd() * 6),
+      emissionsCertified: rnd() < 0.1,
+      deactivationCompatible: rnd() < 0.3,
+      priceCents: 30000 + Math.round(rnd() * 25000),
     });
   }
   return CamCatalogueSchema.parse(cams);

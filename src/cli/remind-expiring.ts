@@ -7,7 +7,13 @@ import { remindExpiringQuotes } from '../lib/quotes/expiry-reminders';
 // (a quote is reminded once); in production run it daily from cron or a systemd timer with the server's
 // environment. Prints what it did as JSON; exits 1 when an e-mail could not be sent (retried next run).
 
-const Args = z.object({ days: z.coerce.number({ error: 'days must be a whole number' }).int({ error: 'days must be a whole number' }).min(0, { error: 'days must be 0 to 30' }).max(30, { error: 'days must be 0 to 30' }) });
+const Args = z.object({
+  days: z.coerce
+    .number({ error: 'days must be a whole number' })
+    .int({ error: 'days must be a whole number' })
+    .min(0, { error: 'days must be 0 to 30' })
+    .max(30, { error: 'days must be 0 to 30' }),
+});
 
 async function main() {
   const at = process.argv.indexOf('--days');

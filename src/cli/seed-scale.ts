@@ -18,7 +18,9 @@ async function main() {
   }
   // Never the demo or the test database: this deletes nothing, but it adds a hundred thousand rows.
   if (process.env.DB_NAME !== SCALE_DATABASE) {
-    console.error(`seed:scale: DB_NAME must be ${SCALE_DATABASE} (got ${process.env.DB_NAME ?? 'nothing'}); run it through npm run seed:scale`);
+    console.error(
+      `seed:scale: DB_NAME must be ${SCALE_DATABASE} (got ${process.env.DB_NAME ?? 'nothing'}); run it through npm run seed:scale`,
+    );
     process.exit(2);
   }
   const size = SIZES[args.data.size];
@@ -32,7 +34,9 @@ async function main() {
   const runs = await writer.dynoRuns(size.dynoRuns, owners, camIds);
   await refreshAllDynoGains();
   await db.query('ANALYZE TABLE cams, customers, builds, quotes, quote_lines, payments, leads, dyno_runs, dyno_gains');
-  console.log(`seed:scale ${args.data.size}: ${camIds.length} cams, ${owners.length} customers and builds, ${made.quotes} quotes, ${made.lines} lines, ${made.payments} payments, ${size.leads} leads, ${runs} dyno runs in ${((Date.now() - started) / 1000).toFixed(0)} s`);
+  console.log(
+    `seed:scale ${args.data.size}: ${camIds.length} cams, ${owners.length} customers and builds, ${made.quotes} quotes, ${made.lines} lines, ${made.payments} payments, ${size.leads} leads, ${runs} dyno runs in ${((Date.now() - started) / 1000).toFixed(0)} s`,
+  );
   await closeSequelize();
 }
 

@@ -15,14 +15,17 @@ export type BalanceReceiptProps = {
 };
 
 export const balanceReceiptSubject = (p: Pick<BalanceReceiptProps, 'number' | 'shop' | 'balanceDueCents'>) =>
-  p.balanceDueCents === 0 ? `Paid in full: quote ${p.number} — ${p.shop.name}` : `Payment received for quote ${p.number} — ${p.shop.name}`;
+  p.balanceDueCents === 0
+    ? `Paid in full: quote ${p.number} — ${p.shop.name}`
+    : `Payment received for quote ${p.number} — ${p.shop.name}`;
 
 export function BalanceReceiptEmail(p: BalanceReceiptProps) {
   return (
     <MailLayout shop={p.shop} preview={`We received ${money(p.amountCents)}`}>
       <Text style={paragraph}>Hello {p.customerName},</Text>
       <Text style={paragraph}>
-        Thank you: we received {money(p.amountCents)} towards quote {p.number} on {longDate(p.paidAt)} ({METHOD_WORDS[p.method].toLowerCase()}).
+        Thank you: we received {money(p.amountCents)} towards quote {p.number} on {longDate(p.paidAt)} (
+        {METHOD_WORDS[p.method].toLowerCase()}).
       </Text>
       <Text style={paragraph}>
         {p.balanceDueCents === 0

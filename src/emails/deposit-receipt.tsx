@@ -11,7 +11,8 @@ export type DepositReceiptProps = {
   totalCents: number;
 };
 
-export const depositReceiptSubject = (p: Pick<DepositReceiptProps, 'number' | 'shop'>) => `Deposit received for quote ${p.number} — ${p.shop.name}`;
+export const depositReceiptSubject = (p: Pick<DepositReceiptProps, 'number' | 'shop'>) =>
+  `Deposit received for quote ${p.number} — ${p.shop.name}`;
 
 export function DepositReceiptEmail(p: DepositReceiptProps) {
   const balance = Math.max(0, p.totalCents - p.amountCents);
@@ -19,10 +20,12 @@ export function DepositReceiptEmail(p: DepositReceiptProps) {
     <MailLayout shop={p.shop} preview={`We received your deposit of ${money(p.amountCents)}`}>
       <Text style={paragraph}>Hello {p.customerName},</Text>
       <Text style={paragraph}>
-        Thank you: we received your deposit of {money(p.amountCents)} for quote {p.number} on {longDate(p.paidAt)}. Your job is booked.
+        Thank you: we received your deposit of {money(p.amountCents)} for quote {p.number} on {longDate(p.paidAt)}. Your
+        job is booked.
       </Text>
       <Text style={paragraph}>
-        What happens next: we will be in touch to agree a date for the work. The balance of {money(balance)} is paid when the job is done.
+        What happens next: we will be in touch to agree a date for the work. The balance of {money(balance)} is paid
+        when the job is done.
       </Text>
       <Text style={paragraph}>Keep this e-mail as your receipt. Questions? Just reply.</Text>
     </MailLayout>

@@ -6,8 +6,18 @@ import { palette } from '@/lib/palette';
 // React escapes every value, so names and descriptions typed by people never become markup.
 export type MailShop = { name: string; email: string | null; phone: string | null; address: string | null };
 
-const body = { backgroundColor: palette.paper.DEFAULT, fontFamily: 'Helvetica, Arial, sans-serif', color: palette.ink.DEFAULT };
-const card = { backgroundColor: palette.paper.raised, padding: '24px', maxWidth: '560px', margin: '0 auto', borderRadius: '6px' };
+const body = {
+  backgroundColor: palette.paper.DEFAULT,
+  fontFamily: 'Helvetica, Arial, sans-serif',
+  color: palette.ink.DEFAULT,
+};
+const card = {
+  backgroundColor: palette.paper.raised,
+  padding: '24px',
+  maxWidth: '560px',
+  margin: '0 auto',
+  borderRadius: '6px',
+};
 const small = { fontSize: '13px', color: palette.ink.muted, margin: '2px 0' };
 
 export function MailLayout({ shop, preview, children }: { shop: MailShop; preview: string; children: ReactNode }) {

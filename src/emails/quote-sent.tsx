@@ -17,7 +17,9 @@ export type QuoteSentProps = {
 };
 
 export function quoteSentSubject(p: Pick<QuoteSentProps, 'number' | 'shop' | 'replaces'>): string {
-  return p.replaces ? `Your revised quote ${p.number} from ${p.shop.name} (replaces ${p.replaces})` : `Your quote ${p.number} from ${p.shop.name}`;
+  return p.replaces
+    ? `Your revised quote ${p.number} from ${p.shop.name} (replaces ${p.replaces})`
+    : `Your quote ${p.number} from ${p.shop.name}`;
 }
 
 export function QuoteSentEmail(p: QuoteSentProps) {
@@ -27,19 +29,33 @@ export function QuoteSentEmail(p: QuoteSentProps) {
       <Text style={paragraph}>Hello {p.customerName},</Text>
       {p.replaces ? (
         <Text style={paragraph}>
-          We have revised your quote. Quote {p.number} replaces {p.replaces}; the link to the earlier one now only says it was replaced.
+          We have revised your quote. Quote {p.number} replaces {p.replaces}; the link to the earlier one now only says
+          it was replaced.
         </Text>
       ) : null}
       <Text style={paragraph}>
-        Here is your cam swap quote{vehicle}: {money(p.totalCents)} in total, with a deposit of {money(p.depositCents)} to book the job.
+        Here is your cam swap quote{vehicle}: {money(p.totalCents)} in total, with a deposit of {money(p.depositCents)}{' '}
+        to book the job.
         {p.validUntil ? ` It is valid until ${longDate(p.validUntil)}.` : ''}
       </Text>
-      <Button href={p.link} style={{ backgroundColor: palette.ember[600], color: palette.paper.raised, padding: '12px 18px', borderRadius: '6px', fontWeight: 700 }}>
+      <Button
+        href={p.link}
+        style={{
+          backgroundColor: palette.ember[600],
+          color: palette.paper.raised,
+          padding: '12px 18px',
+          borderRadius: '6px',
+          fontWeight: 700,
+        }}
+      >
         Open your quote
       </Button>
-      <Text style={paragraph}>This link is private to you; please do not share it. If the button does not work, copy this address: {p.link}</Text>
       <Text style={paragraph}>
-        The page shows every line, the shop’s deposit policy and the checks that go with a cam swap, before you pay anything.
+        This link is private to you; please do not share it. If the button does not work, copy this address: {p.link}
+      </Text>
+      <Text style={paragraph}>
+        The page shows every line, the shop’s deposit policy and the checks that go with a cam swap, before you pay
+        anything.
       </Text>
     </MailLayout>
   );

@@ -6,7 +6,15 @@ import { requireEnv } from './env';
 // local fake (docker-local/mail-fake) or the real service is a change of environment only.
 /** A file sent with a mail (a receipt or invoice PDF); the SDK sends its bytes as base64. */
 export type MailAttachment = { filename: string; content: Buffer; contentType?: string };
-export type OutgoingMail = { to: string | string[]; subject: string; html: string; text: string; replyTo?: string; fromName?: string; attachments?: MailAttachment[] };
+export type OutgoingMail = {
+  to: string | string[];
+  subject: string;
+  html: string;
+  text: string;
+  replyTo?: string;
+  fromName?: string;
+  attachments?: MailAttachment[];
+};
 
 /**
  * The mail service refused the message or did not answer. Callers that must not go on without the
@@ -31,7 +39,10 @@ function resend(): Resend {
  * addresses; this is the last guard, so no CR/LF from any caller can ever start a new header.
  */
 export function headerValue(value: string): string {
-  return value.replace(/[\r\n\u2028\u2029]+/g, ' ').replace(/[\u0000-\u001f\u007f]/g, '').trim();
+  return value
+    .replace(/[\r\n\u2028\u2029]+/g, ' ')
+    .replace(/[\u0000-\u001f\u007f]/g, '')
+    .trim();
 }
 
 /**
@@ -43,7 +54,10 @@ export function fromHeader(name?: string): string {
   const configured = headerValue(process.env.MAIL_FROM ?? 'Lobewise <no-reply@lobewise.test>');
   if (!name) return configured;
   const address = /<([^<>\s]+)>\s*$/.exec(configured)?.[1] ?? configured;
-  const display = headerValue(name).replace(/["\\<>]/g, '').slice(0, 100).trim();
+  const display = headerValue(name)
+    .replace(/["\\<>]/g, '')
+    .slice(0, 100)
+    .trim();
   return display ? `"${display}" <${address}>` : configured;
 }
 
@@ -59,13 +73,25 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: string }> {
       ...(reply ? { replyTo: reply } : {}),
       html,
       text,
-      ...(mail.attachments?.length ? { attachments: mail.attachments.map((a) => ({ filename: headerValue(a.filename), content: a.content, contentType: a.contentType ?? 'application/pdf' })) } : {}),
+      ...(mail.attachments?.length
+        ? {
+            attachments: mail.attachments.map((a) => ({
+              filename: headerValue(a.filename),
+              content: a.content,
+              contentType: a.contentType ?? 'application/pdf',
+            })),
+          }
+        : {}),
     });
   } catch (cause) {
     // The SDK throws (instead of answering an error) when the service cannot be reached at all.
-    throw new MailError(`Mail was not sent: ${cause instanceof Error ? cause.message : 'the mail service could not be reached'}`, { cause });
+    throw new MailError(
+      `Mail was not sent: ${cause instanceof Error ? cause.message : 'the mail service could not be reached'}`,
+      { cause },
+    );
   }
   const { data, error } = answer;
-  if (error || !data) throw new MailError(`Mail was not accepted: ${error?.message ?? 'no answer from the mail service'}`);
+  if (error || !data)
+    throw new MailError(`Mail was not accepted: ${error?.message ?? 'no answer from the mail service'}`);
   return { id: data.id };
 }

@@ -22,31 +22,48 @@ function routeFiles(dir: string): string[] {
 
 /** '/…/src/app/api/(group)/users/[id]/route.ts' → '/api/users/[id]' */
 function routePathOf(file: string): string {
-  const segments = path.relative(API_DIR, path.dirname(file)).split(path.sep).filter((s) => s && !/^\(.*\)$/.test(s));
+  const segments = path
+    .relative(API_DIR, path.dirname(file))
+    .split(path.sep)
+    .filter((s) => s && !/^\(.*\)$/.test(s));
   return ['/api', ...segments].join('/');
 }
 
 /** The HTTP methods a route module exports, read from its source. */
 function exportedMethods(source: string): string[] {
   const found = new Set<string>();
-  for (const match of source.matchAll(/export\s+(?:async\s+)?(?:function|const|let)\s+([A-Z]+)\b/g)) found.add(match[1]);
+  for (const match of source.matchAll(/export\s+(?:async\s+)?(?:function|const|let)\s+([A-Z]+)\b/g))
+    found.add(match[1]);
   for (const match of source.matchAll(/export\s*\{([^}]*)\}/g)) {
-    for (const part of match[1].split(',')) found.add(part.trim().split(/\s+as\s+/).pop()!.trim());
+    for (const part of match[1].split(','))
+      found.add(
+        part
+          .trim()
+          .split(/\s+as\s+/)
+          .pop()!
+          .trim(),
+      );
   }
   return [...found].filter((name) => (METHODS as readonly string[]).includes(name));
 }
 
-const discovered = routeFiles(API_DIR).flatMap((file) => exportedMethods(fs.readFileSync(file, 'utf8')).map((method) => ({ method, path: routePathOf(file), file })));
+const discovered = routeFiles(API_DIR).flatMap((file) =>
+  exportedMethods(fs.readFileSync(file, 'utf8')).map((method) => ({ method, path: routePathOf(file), file })),
+);
 const key = (row: { method: string; path: string }) => `${row.method} ${row.path}`;
 
 describe('the access matrix covers every route handler', () => {
   it('finds the route handlers (the walk itself works)', () => {
-    expect(discovered.map(key)).toEqual(expect.arrayContaining(['GET /api/health', 'POST /api/auth/sign-in', 'PATCH /api/users/[id]']));
+    expect(discovered.map(key)).toEqual(
+      expect.arrayContaining(['GET /api/health', 'POST /api/auth/sign-in', 'PATCH /api/users/[id]']),
+    );
   });
 
   it('has a row for every exported method of every route', () => {
     const inMatrix = new Set(accessMatrix.map(key));
-    const missing = discovered.filter((route) => !inMatrix.has(key(route))).map((route) => `${key(route)}  (${path.relative(process.cwd(), route.file)})`);
+    const missing = discovered
+      .filter((route) => !inMatrix.has(key(route)))
+      .map((route) => `${key(route)}  (${path.relative(process.cwd(), route.file)})`);
     expect(missing).toEqual([]);
   });
 
@@ -62,7 +79,9 @@ describe('each caller gets exactly its answer', () => {
   let cookies: Record<TestRole, string>;
 
   beforeAll(async () => {
-    cookies = Object.fromEntries(await Promise.all(ROLES.map(async (role) => [role, await signIn(role)] as const))) as Record<TestRole, string>;
+    cookies = Object.fromEntries(
+      await Promise.all(ROLES.map(async (role) => [role, await signIn(role)] as const)),
+    ) as Record<TestRole, string>;
   });
 
   async function call(row: AccessRow, cookie: string | null) {
@@ -82,7 +101,8 @@ describe('each caller gets exactly its answer', () => {
       const response = await call(row, cookie);
       got[caller] = response.status;
       // Refusals are JSON with a message people can read.
-      if ((response.status === 401 || response.status === 403) && typeof response.body?.message !== 'string') refusalsWithoutMessage.push(caller);
+      if ((response.status === 401 || response.status === 403) && typeof response.body?.message !== 'string')
+        refusalsWithoutMessage.push(caller);
     }
     expect(got).toEqual(expectedFor(row));
     expect(refusalsWithoutMessage).toEqual([]);

@@ -21,26 +21,38 @@ describe('POST /api/advisor/rank', () => {
     cookie = await signIn('counter');
     const build = await Build.findByPk(1);
     towingTruck = BuildProfileSchema.parse(build!.profile);
-    sellableCamIds = (await Cam.findAll({ where: { active: true, isFactoryBaseline: false, archivedAt: null } })).map((c) => c.id);
+    sellableCamIds = (await Cam.findAll({ where: { active: true, isFactoryBaseline: false, archivedAt: null } })).map(
+      (c) => c.id,
+    );
   });
   afterAll(() => disconnectTestDatabase());
 
-  const rank = (body: unknown) => request(appUrl).post('/api/advisor/rank').set('Cookie', cookie).send(body as object);
+  const rank = (body: unknown) =>
+    request(appUrl)
+      .post('/api/advisor/rank')
+      .set('Cookie', cookie)
+      .send(body as object);
 
   it('refuses a signed-out caller', async () => {
     await request(appUrl).post('/api/advisor/rank').send({ build: towingTruck }).expect(401);
   });
 
   it('carries curves for the top curveLimit cams only; a lower cam’s curve comes when asked for by camIds', async () => {
-    const body = (await rank({ build: towingTruck, curveLimit: 2 }).expect(200)).body as RankingBody & { curvesIncluded: number };
+    const body = (await rank({ build: towingTruck, curveLimit: 2 }).expect(200)).body as RankingBody & {
+      curvesIncluded: number;
+    };
     expect(body.curvesIncluded).toBe(2);
     expect(body.rankings.slice(0, 2).every((r) => r.curve.length > 10)).toBe(true);
     expect(body.rankings.slice(2).every((r) => r.curve.length === 0)).toBe(true);
     const last = body.rankings[body.rankings.length - 1];
-    const alone = (await rank({ build: towingTruck, camIds: [last.camId], curveLimit: 1 }).expect(200)).body as RankingBody;
+    const alone = (await rank({ build: towingTruck, camIds: [last.camId], curveLimit: 1 }).expect(200))
+      .body as RankingBody;
     expect(alone.rankings[0].curve.length).toBeGreaterThan(10);
     // Default: the top 20, which is every cam of the demo catalogue.
-    expect(((await rank({ build: towingTruck, includeCurves: false }).expect(200)).body as { curvesIncluded: number }).curvesIncluded).toBe(0);
+    expect(
+      ((await rank({ build: towingTruck, includeCurves: false }).expect(200)).body as { curvesIncluded: number })
+        .curvesIncluded,
+    ).toBe(0);
     const bad = await rank({ build: towingTruck, curveLimit: -1 }).expect(422);
     expect(bad.body.errors[0].field).toBe('curveLimit');
   });
@@ -55,9 +67,12 @@ describe('POST /api/advisor/rank', () => {
     const response = await rank({ build: towingTruck }).expect(200);
     const body = response.body as RankingBody;
     // The advisor's cam ids may be strings (the command line's skus); the shop's are numbers.
-    expect(body.rankings.map((r) => Number(r.camId)).sort((a, b) => a - b)).toEqual([...sellableCamIds].sort((a, b) => a - b));
+    expect(body.rankings.map((r) => Number(r.camId)).sort((a, b) => a - b)).toEqual(
+      [...sellableCamIds].sort((a, b) => a - b),
+    );
     expect(body.rankings.map((r) => r.rank)).toEqual(body.rankings.map((_, i) => i + 1));
-    for (let i = 1; i < body.rankings.length; i++) expect(body.rankings[i - 1].score).toBeGreaterThanOrEqual(body.rankings[i].score);
+    for (let i = 1; i < body.rankings.length; i++)
+      expect(body.rankings[i - 1].score).toBeGreaterThanOrEqual(body.rankings[i].score);
     for (const ranking of body.rankings) {
       // Definition of horsepower: hp = torque (lb·ft) · rpm / 5252.
       for (const point of ranking.curve) expect(point.hp).toBe((point.torqueLbFt * point.rpm) / 5252);
@@ -95,20 +110,43 @@ describe('POST /api/advisor/rank', () => {
   it('names the bad field of a build profile', async () => {
     const bad = { ...towingTruck, engine: { ...towingTruck.engine, boreIn: '3.78' } };
     const response = await rank({ build: bad }).expect(422);
-    expect(response.body.errors).toEqual(expect.arrayContaining([expect.objectContaining({ field: 'build.engine.boreIn' })]));
+    expect(response.body.errors).toEqual(
+      expect.arrayContaining([expect.objectContaining({ field: 'build.engine.boreIn' })]),
+    );
   });
 
   it('answers 400 to a body that is not JSON', async () => {
-    const response = await request(appUrl).post('/api/advisor/rank').set('Cookie', cookie).set('Content-Type', 'application/json').send('{"build":');
+    const response = await request(appUrl)
+      .post('/api/advisor/rank')
+      .set('Cookie', cookie)
+      .set('Content-Type', 'application/json')
+      .send('{"build":');
     expect(response.status).toBe(400);
   });
 
   it('answers random and hostile bodies with a 4xx naming fields, never a 500 (property-based)', async () => {
     const hostileValue = fc.oneof(
-      fc.constant(null), fc.constant(Number.NaN), fc.constant(-1e308), fc.constant('__proto__'), fc.string(), fc.integer(),
-      fc.double(), fc.boolean(), fc.array(fc.integer(), { maxLength: 3 }), fc.dictionary(fc.string(), fc.integer(), { maxKeys: 3 }),
+      fc.constant(null),
+      fc.constant(Number.NaN),
+      fc.constant(-1e308),
+      fc.constant('__proto__'),
+      fc.string(),
+      fc.integer(),
+      fc.double(),
+      fc.boolean(),
+      fc.array(fc.integer(), { maxLength: 3 }),
+      fc.dictionary(fc.string(), fc.integer(), { maxKeys: 3 }),
     );
-    const paths = ['engine.boreIn', 'engine.strokeIn', 'engine.headMaterial', 'drivetrain.stallRpm', 'use.primary', 'baselineCam.lsa', 'exhaust', 'vehicle'];
+    const paths = [
+      'engine.boreIn',
+      'engine.strokeIn',
+      'engine.headMaterial',
+      'drivetrain.stallRpm',
+      'use.primary',
+      'baselineCam.lsa',
+      'exhaust',
+      'vehicle',
+    ];
     await fc.assert(
       fc.asyncProperty(fc.constantFrom(...paths), hostileValue, async (path, value) => {
         const build = structuredClone(towingTruck) as unknown as Record<string, Record<string, unknown>>;

@@ -46,20 +46,32 @@ describe('forgot and reset password', () => {
     expect(mail.html).toContain(link.replace(/&/g, '&amp;'));
     expect(link.startsWith(appUrl)).toBe(true);
 
-    const page = await request(appUrl).get(new URL(link).pathname + new URL(link).search).expect(200);
+    const page = await request(appUrl)
+      .get(new URL(link).pathname + new URL(link).search)
+      .expect(200);
     expect(page.text).toContain('Choose a new password');
 
-    const response = await request(appUrl).post('/api/auth/reset-password').send({ token, password: 'a-brand-new-password' }).expect(200);
+    const response = await request(appUrl)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'a-brand-new-password' })
+      .expect(200);
     expect(response.body.email).toBe(person.email);
     await signInWith(person.email, 'a-brand-new-password');
-    await request(appUrl).post('/api/auth/sign-in').send({ email: person.email, password: person.password }).expect(401);
-    expect(await AuditEntry.findOne({ where: { action: 'auth.password-reset', entityId: String(person.id) } })).not.toBeNull();
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: person.email, password: person.password })
+      .expect(401);
+    expect(
+      await AuditEntry.findOne({ where: { action: 'auth.password-reset', entityId: String(person.id) } }),
+    ).not.toBeNull();
   });
 
   it('stores only a hash of the token', async () => {
     const person = await throwaway();
     const { token } = await requestReset(person);
-    const [rows] = await connectTestDatabase().query('SELECT token_hash FROM password_reset_tokens WHERE user_id = ?', { replacements: [person.id] });
+    const [rows] = await connectTestDatabase().query('SELECT token_hash FROM password_reset_tokens WHERE user_id = ?', {
+      replacements: [person.id],
+    });
     const hashes = (rows as { token_hash: string }[]).map((r) => r.token_hash);
     expect(hashes).toHaveLength(1);
     expect(hashes[0]).toMatch(/^[0-9a-f]{64}$/);
@@ -70,7 +82,10 @@ describe('forgot and reset password', () => {
     const person = await throwaway();
     const { token } = await requestReset(person);
     await request(appUrl).post('/api/auth/reset-password').send({ token, password: 'first-new-password' }).expect(200);
-    const again = await request(appUrl).post('/api/auth/reset-password').send({ token, password: 'second-new-password' }).expect(400);
+    const again = await request(appUrl)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'second-new-password' })
+      .expect(400);
     expect(again.body.errors).toEqual([{ field: 'token', message: expect.stringMatching(/already used/) }]);
     await signInWith(person.email, 'first-new-password');
   });
@@ -78,17 +93,29 @@ describe('forgot and reset password', () => {
   it('refuses an expired link', async () => {
     const person = await throwaway();
     const { token } = await requestReset(person);
-    await connectTestDatabase().query('UPDATE password_reset_tokens SET expires_at = NOW() - INTERVAL 1 MINUTE WHERE user_id = ?', { replacements: [person.id] });
-    const response = await request(appUrl).post('/api/auth/reset-password').send({ token, password: 'too-late-password' }).expect(400);
+    await connectTestDatabase().query(
+      'UPDATE password_reset_tokens SET expires_at = NOW() - INTERVAL 1 MINUTE WHERE user_id = ?',
+      { replacements: [person.id] },
+    );
+    const response = await request(appUrl)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'too-late-password' })
+      .expect(400);
     expect(response.body.errors[0]).toEqual({ field: 'token', message: expect.stringMatching(/expired/) });
     await signInWith(person.email, person.password);
   });
 
   it('refuses a made-up token and names the fields of bad input', async () => {
     const madeUp = 'A'.repeat(43);
-    const response = await request(appUrl).post('/api/auth/reset-password').send({ token: madeUp, password: 'long-enough-password' }).expect(400);
+    const response = await request(appUrl)
+      .post('/api/auth/reset-password')
+      .send({ token: madeUp, password: 'long-enough-password' })
+      .expect(400);
     expect(response.body.errors[0].field).toBe('token');
-    const bad = await request(appUrl).post('/api/auth/reset-password').send({ token: 'short', password: 'short' }).expect(422);
+    const bad = await request(appUrl)
+      .post('/api/auth/reset-password')
+      .send({ token: 'short', password: 'short' })
+      .expect(422);
     expect((bad.body.errors as { field: string }[]).map((e) => e.field).sort()).toEqual(['password', 'token']);
   });
 
@@ -96,7 +123,10 @@ describe('forgot and reset password', () => {
     const person = await throwaway();
     const cookie = await signInWith(person.email, person.password);
     const { token } = await requestReset(person);
-    await request(appUrl).post('/api/auth/reset-password').send({ token, password: 'after-reset-password' }).expect(200);
+    await request(appUrl)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'after-reset-password' })
+      .expect(200);
     await request(appUrl).get('/api/auth/me').set('Cookie', cookie).expect(401);
   });
 
@@ -118,12 +148,24 @@ describe('changing one’s own password on the account page', () => {
     const here = await signInWith(person.email, person.password);
     const elsewhere = await signInWith(person.email, person.password);
 
-    const wrong = await request(appUrl).post('/api/account/password').set('Cookie', here).send({ currentPassword: 'not-it', newPassword: 'a-changed-password' }).expect(422);
+    const wrong = await request(appUrl)
+      .post('/api/account/password')
+      .set('Cookie', here)
+      .send({ currentPassword: 'not-it', newPassword: 'a-changed-password' })
+      .expect(422);
     expect(wrong.body.errors).toEqual([{ field: 'currentPassword', message: 'is not your current password' }]);
-    const short = await request(appUrl).post('/api/account/password').set('Cookie', here).send({ currentPassword: person.password, newPassword: 'short' }).expect(422);
+    const short = await request(appUrl)
+      .post('/api/account/password')
+      .set('Cookie', here)
+      .send({ currentPassword: person.password, newPassword: 'short' })
+      .expect(422);
     expect(short.body.errors[0]).toEqual({ field: 'newPassword', message: 'at least 12 characters' });
 
-    const ok = await request(appUrl).post('/api/account/password').set('Cookie', here).send({ currentPassword: person.password, newPassword: 'a-changed-password' }).expect(200);
+    const ok = await request(appUrl)
+      .post('/api/account/password')
+      .set('Cookie', here)
+      .send({ currentPassword: person.password, newPassword: 'a-changed-password' })
+      .expect(200);
     expect(ok.body.otherSessionsEnded).toBe(1);
     await request(appUrl).get('/api/auth/me').set('Cookie', here).expect(200);
     await request(appUrl).get('/api/auth/me').set('Cookie', elsewhere).expect(401);
@@ -133,7 +175,15 @@ describe('changing one’s own password on the account page', () => {
   });
 
   it('is for signed-in staff only', async () => {
-    await request(appUrl).post('/api/account/password').send({ currentPassword: 'x', newPassword: 'a-changed-password' }).expect(401);
-    await request(appUrl).post('/api/account/password').set('Cookie', await signIn('counter')).set('Origin', 'http://elsewhere.example').send({}).expect(403);
+    await request(appUrl)
+      .post('/api/account/password')
+      .send({ currentPassword: 'x', newPassword: 'a-changed-password' })
+      .expect(401);
+    await request(appUrl)
+      .post('/api/account/password')
+      .set('Cookie', await signIn('counter'))
+      .set('Origin', 'http://elsewhere.example')
+      .send({})
+      .expect(403);
   });
 });

@@ -41,26 +41,44 @@ afterAll(async () => {
 
 describe('POST /api/auth/sign-in', () => {
   it.each(['manager', 'counter', 'tech'] as const)('signs in the demo %s and answers with the role', async (role) => {
-    const response = await request(appUrl).post('/api/auth/sign-in').send({ email: DEMO_EMAILS[role], password: DEMO_PASSWORD }).expect(200);
+    const response = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO_EMAILS[role], password: DEMO_PASSWORD })
+      .expect(200);
     expect(response.body.user).toMatchObject({ email: DEMO_EMAILS[role], role });
-    const me = await request(appUrl).get('/api/auth/me').set('Cookie', sessionCookieFrom(response.headers['set-cookie'])).expect(200);
+    const me = await request(appUrl)
+      .get('/api/auth/me')
+      .set('Cookie', sessionCookieFrom(response.headers['set-cookie']))
+      .expect(200);
     expect(me.body.user).toMatchObject({ email: DEMO_EMAILS[role], role });
   });
 
   it('treats the e-mail without regard to case or surrounding spaces', async () => {
-    await request(appUrl).post('/api/auth/sign-in').send({ email: '  Counter@Lobewise.TEST ', password: DEMO_PASSWORD }).expect(200);
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: '  Counter@Lobewise.TEST ', password: DEMO_PASSWORD })
+      .expect(200);
   });
 
   it('sets an HttpOnly, SameSite=Lax session cookie for the whole site, Secure only over https', async () => {
-    const plain = await request(appUrl).post('/api/auth/sign-in').send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD }).expect(200);
+    const plain = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD })
+      .expect(200);
     const cookie = ([] as string[]).concat(plain.headers['set-cookie']).find((c) => c.startsWith('lobewise_session='))!;
     expect(cookie).toMatch(/;\s*HttpOnly/i);
     expect(cookie).toMatch(/;\s*SameSite=Lax/i);
     expect(cookie).toMatch(/;\s*Path=\//i);
     expect(cookie).not.toMatch(/;\s*Secure/i);
 
-    const overHttps = await request(appUrl).post('/api/auth/sign-in').set('X-Forwarded-Proto', 'https').send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD }).expect(200);
-    const secureCookie = ([] as string[]).concat(overHttps.headers['set-cookie']).find((c) => c.startsWith('lobewise_session='))!;
+    const overHttps = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('X-Forwarded-Proto', 'https')
+      .send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD })
+      .expect(200);
+    const secureCookie = ([] as string[])
+      .concat(overHttps.headers['set-cookie'])
+      .find((c) => c.startsWith('lobewise_session='))!;
     expect(secureCookie).toMatch(/;\s*Secure/i);
   });
 
@@ -78,18 +96,36 @@ describe('POST /api/auth/sign-in', () => {
   });
 
   it('names the field and the reason for bad input, and refuses a body that is not JSON', async () => {
-    const response = await request(appUrl).post('/api/auth/sign-in').send({ email: 'not-an-address', password: '' }).expect(422);
+    const response = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: 'not-an-address', password: '' })
+      .expect(422);
     const fields = (response.body.errors as { field: string; message: string }[]).map((e) => e.field).sort();
     expect(fields).toEqual(['email', 'password']);
-    const extra = await request(appUrl).post('/api/auth/sign-in').send({ email: DEMO_EMAILS.tech, password: 'x', admin: true }).expect(422);
+    const extra = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO_EMAILS.tech, password: 'x', admin: true })
+      .expect(422);
     expect(extra.body.errors).toEqual(expect.arrayContaining([expect.objectContaining({ field: 'admin' })]));
-    await request(appUrl).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email":').expect(400);
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send('{"email":')
+      .expect(400);
   });
 
   it('refuses a sign-in posted from another site', async () => {
-    const response = await request(appUrl).post('/api/auth/sign-in').set('Origin', 'http://elsewhere.example').send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD }).expect(403);
+    const response = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('Origin', 'http://elsewhere.example')
+      .send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD })
+      .expect(403);
     expect(response.headers['set-cookie']).toBeUndefined();
-    await request(appUrl).post('/api/auth/sign-in').set('Origin', appUrl).send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD }).expect(200);
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('Origin', appUrl)
+      .send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD })
+      .expect(200);
   });
 
   it('audits a successful sign-in', async () => {
@@ -106,7 +142,10 @@ describe('the session cookie', () => {
     const [name, value] = cookie.split('=');
     const flipped = value.slice(0, 30) + (value[30] === 'a' ? 'b' : 'a') + value.slice(31);
     await request(appUrl).get('/api/auth/me').set('Cookie', `${name}=${flipped}`).expect(401);
-    await request(appUrl).get('/api/auth/me').set('Cookie', `${name}=${value.slice(0, -4)}`).expect(401);
+    await request(appUrl)
+      .get('/api/auth/me')
+      .set('Cookie', `${name}=${value.slice(0, -4)}`)
+      .expect(401);
     await request(appUrl).get('/api/auth/me').set('Cookie', `${name}=hello`).expect(401);
     await request(appUrl).get('/api/users').set('Cookie', `${name}=Fe26.2**x*y*z`).expect(401);
     await request(appUrl).get('/api/auth/me').set('Cookie', cookie).expect(200);
@@ -116,7 +155,9 @@ describe('the session cookie', () => {
     const first = await signIn('tech');
     const second = await signIn('tech');
     const out = await request(appUrl).post('/api/auth/sign-out').set('Cookie', first).expect(200);
-    expect(([] as string[]).concat(out.headers['set-cookie'] ?? []).some((c) => /^lobewise_session=;|Max-Age=0/i.test(c))).toBe(true);
+    expect(
+      ([] as string[]).concat(out.headers['set-cookie'] ?? []).some((c) => /^lobewise_session=;|Max-Age=0/i.test(c)),
+    ).toBe(true);
     await request(appUrl).get('/api/auth/me').set('Cookie', first).expect(401);
     await request(appUrl).get('/api/auth/me').set('Cookie', second).expect(200);
     expect(await latestAudit('auth.signed-out', { actor: DEMO_EMAILS.tech })).not.toBeNull();
@@ -124,8 +165,16 @@ describe('the session cookie', () => {
 
   it('refuses a cross-site sign-out', async () => {
     const cookie = await signIn('tech');
-    await request(appUrl).post('/api/auth/sign-out').set('Cookie', cookie).set('Origin', 'https://elsewhere.example').expect(403);
-    await request(appUrl).post('/api/auth/sign-out').set('Cookie', cookie).set('Sec-Fetch-Site', 'cross-site').expect(403);
+    await request(appUrl)
+      .post('/api/auth/sign-out')
+      .set('Cookie', cookie)
+      .set('Origin', 'https://elsewhere.example')
+      .expect(403);
+    await request(appUrl)
+      .post('/api/auth/sign-out')
+      .set('Cookie', cookie)
+      .set('Sec-Fetch-Site', 'cross-site')
+      .expect(403);
     await request(appUrl).get('/api/auth/me').set('Cookie', cookie).expect(200);
   });
 });
@@ -139,7 +188,11 @@ describe('accounts that change while signed in', () => {
 
     const manager = await signIn('manager');
     const row = await User.findByPk(person.id);
-    await request(appUrl).patch(`/api/users/${person.id}`).set('Cookie', manager).send({ version: row!.version, active: false }).expect(200);
+    await request(appUrl)
+      .patch(`/api/users/${person.id}`)
+      .set('Cookie', manager)
+      .send({ version: row!.version, active: false })
+      .expect(200);
 
     await request(appUrl).get('/api/auth/me').set('Cookie', cookie).expect(401);
     const again = await attempt(person.email, person.password).expect(401);
@@ -154,13 +207,21 @@ describe('accounts that change while signed in', () => {
 
     const manager = await signIn('manager');
     const row = await User.findByPk(person.id);
-    await request(appUrl).patch(`/api/users/${person.id}`).set('Cookie', manager).send({ version: row!.version, role: 'manager' }).expect(200);
+    await request(appUrl)
+      .patch(`/api/users/${person.id}`)
+      .set('Cookie', manager)
+      .send({ version: row!.version, role: 'manager' })
+      .expect(200);
     await request(appUrl).get('/api/users').set('Cookie', cookie).expect(200);
     const me = await request(appUrl).get('/api/auth/me').set('Cookie', cookie).expect(200);
     expect(me.body.user.role).toBe('manager');
     // leave the shop with only the demo manager as a manager
     const now = await User.findByPk(person.id);
-    await request(appUrl).patch(`/api/users/${person.id}`).set('Cookie', manager).send({ version: now!.version, active: false }).expect(200);
+    await request(appUrl)
+      .patch(`/api/users/${person.id}`)
+      .set('Cookie', manager)
+      .send({ version: now!.version, active: false })
+      .expect(200);
   });
 
   it('rehashes a password stored with weaker argon2 settings at the next sign-in', async () => {
@@ -172,7 +233,12 @@ describe('accounts that change while signed in', () => {
     const after = await User.findByPk(person.id);
     expect(after!.passwordHash).not.toBe(weak);
     expect(after!.passwordHash).toMatch(/^\$argon2id\$v=19\$/);
-    const params = Object.fromEntries(after!.passwordHash!.split('$')[3].split(',').map((kv) => kv.split('=')));
+    const params = Object.fromEntries(
+      after!
+        .passwordHash!.split('$')[3]
+        .split(',')
+        .map((kv) => kv.split('=')),
+    );
     expect(params).toEqual({ m: '19456', t: '2', p: '1' });
     expect(await argon2.verify(after!.passwordHash!, password)).toBe(true);
     await signInWith(person.email, password);
@@ -182,7 +248,10 @@ describe('accounts that change while signed in', () => {
 describe('sign-in throttling (rate-limiter-flexible counters in MariaDB)', () => {
   const accountKey = (email: string) => crypto.createHash('sha256').update(email.toLowerCase()).digest('hex');
   const deviceCookieFrom = (setCookie: string[] | string | undefined) =>
-    ([] as string[]).concat(setCookie ?? []).find((c) => c.startsWith('lobewise_device_'))!.split(';')[0];
+    ([] as string[])
+      .concat(setCookie ?? [])
+      .find((c) => c.startsWith('lobewise_device_'))!
+      .split(';')[0];
 
   afterEach(async () => {
     await clearRateLimits('signin-');
@@ -201,26 +270,41 @@ describe('sign-in throttling (rate-limiter-flexible counters in MariaDB)', () =>
     expect(blocked.body.message).toMatch(/too many/i);
     expect(blocked.headers['set-cookie']).toBeUndefined();
     // another account from the same address is not affected by this account's pause
-    await request(appUrl).post('/api/auth/sign-in').send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD }).expect(200);
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO_EMAILS.tech, password: DEMO_PASSWORD })
+      .expect(200);
   });
 
   it('lets the owner in from a browser that signed in before, and e-mails the owner when the pause starts', async () => {
     const person = await createThrowawayUser('tech');
     const first = await attempt(person.email, person.password).expect(200);
     const device = deviceCookieFrom(first.headers['set-cookie']);
-    expect(([] as string[]).concat(first.headers['set-cookie']).find((c) => c.startsWith('lobewise_device_'))).toMatch(/HttpOnly/i);
+    expect(([] as string[]).concat(first.headers['set-cookie']).find((c) => c.startsWith('lobewise_device_'))).toMatch(
+      /HttpOnly/i,
+    );
     for (let i = 0; i < 10; i += 1) await attempt(person.email, `guess-${i}`).expect(401);
     await attempt(person.email, person.password).expect(429);
     const notice = await waitForMailsTo(person.email);
     expect(notice[0].subject).toMatch(/paused/i);
     expect(notice[0].text).toMatch(/15 minutes/);
     // the owner's own browser: the right password still works, the pause stays for everyone else
-    await request(appUrl).post('/api/auth/sign-in').set('Cookie', device).send({ email: person.email, password: person.password }).expect(200);
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('Cookie', device)
+      .send({ email: person.email, password: person.password })
+      .expect(200);
     await attempt(person.email, person.password).expect(429);
     // a device cookie for another account counts for nothing here
     const other = await createThrowawayUser('tech');
-    const otherDevice = deviceCookieFrom((await attempt(other.email, other.password).expect(200)).headers['set-cookie']);
-    await request(appUrl).post('/api/auth/sign-in').set('Cookie', otherDevice.replace(/^lobewise_device_[^=]+/, device.split('=')[0])).send({ email: person.email, password: person.password }).expect(429);
+    const otherDevice = deviceCookieFrom(
+      (await attempt(other.email, other.password).expect(200)).headers['set-cookie'],
+    );
+    await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('Cookie', otherDevice.replace(/^lobewise_device_[^=]+/, device.split('=')[0]))
+      .send({ email: person.email, password: person.password })
+      .expect(429);
   });
 
   it('lifts the pause once the owner sets a new password from an e-mailed link', async () => {
@@ -228,7 +312,9 @@ describe('sign-in throttling (rate-limiter-flexible counters in MariaDB)', () =>
     for (let i = 0; i < 10; i += 1) await attempt(person.email, `guess-${i}`).expect(401);
     await attempt(person.email, person.password).expect(429);
     await request(appUrl).post('/api/auth/forgot-password').send({ email: person.email }).expect(202);
-    const link = (await waitForMailsTo(person.email, 2)).map((m) => /\/reset-password\?token=([A-Za-z0-9_-]{43})/.exec(m.text)).find(Boolean)!;
+    const link = (await waitForMailsTo(person.email, 2))
+      .map((m) => /\/reset-password\?token=([A-Za-z0-9_-]{43})/.exec(m.text))
+      .find(Boolean)!;
     const fresh = `a-fresh-password-${crypto.randomBytes(4).toString('hex')}`;
     await request(appUrl).post('/api/auth/reset-password').send({ token: link[1], password: fresh }).expect(200);
     await attempt(person.email, fresh).expect(200);
@@ -236,7 +322,8 @@ describe('sign-in throttling (rate-limiter-flexible counters in MariaDB)', () =>
 
   it('does not lock a colleague out because ten colleagues at the same shop address mistyped', async () => {
     // One shop, one public address: no forwarded header, every attempt from the same socket address.
-    const fromTheShop = (email: string, password: string) => request(appUrl).post('/api/auth/sign-in').send({ email, password });
+    const fromTheShop = (email: string, password: string) =>
+      request(appUrl).post('/api/auth/sign-in').send({ email, password });
     for (let i = 0; i < 10; i += 1) {
       const colleague = await createThrowawayUser('counter');
       usedEmails.push(colleague.email);
@@ -274,11 +361,18 @@ describe('sign-in throttling (rate-limiter-flexible counters in MariaDB)', () =>
         .post('/api/auth/sign-in')
         .set('X-Forwarded-For', testAddress())
         .set('X-Lobewise-Client-Address', testAddress())
-        .send({ email: `nobody-${i}-${crypto.randomBytes(3).toString('hex')}@lobewise.test`, password: 'whatever-it-is' })
+        .send({
+          email: `nobody-${i}-${crypto.randomBytes(3).toString('hex')}@lobewise.test`,
+          password: 'whatever-it-is',
+        })
         .expect(401);
     }
     const person = await createThrowawayUser('counter');
-    const blocked = await request(appUrl).post('/api/auth/sign-in').set('X-Forwarded-For', testAddress()).send({ email: person.email, password: person.password }).expect(429);
+    const blocked = await request(appUrl)
+      .post('/api/auth/sign-in')
+      .set('X-Forwarded-For', testAddress())
+      .send({ email: person.email, password: person.password })
+      .expect(429);
     expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
     // the audit names the socket's address, not what the caller wrote
     const audit = await latestAudit('auth.sign-in-failed');

@@ -14,7 +14,11 @@ import type { QuoteRecord } from '@/lib/quotes/types';
 // due once the deposit is paid, money taken at the counter, the pay-the-balance e-mail and its checkout
 // (exactly once, like the deposit), and the quote closing when nothing is left to pay.
 const { appUrl, paymentsUrl, env } = readRuntime();
-const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
+const stripe = new Stripe(env.STRIPE_SECRET_KEY, {
+  host: '127.0.0.1',
+  port: Number(env.STRIPE_API_PORT),
+  protocol: 'http',
+});
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 type Quote = QuoteRecord;
@@ -27,13 +31,18 @@ let tech: Agent;
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
-  [counter, manager, tech] = await Promise.all([signedInAgent('counter'), signedInAgent('manager'), signedInAgent('tech')]);
+  [counter, manager, tech] = await Promise.all([
+    signedInAgent('counter'),
+    signedInAgent('manager'),
+    signedInAgent('tech'),
+  ]);
 });
 afterAll(() => disconnectTestDatabase());
 
 const readQuote = async (id: number) => (await counter.get(`/api/quotes/${id}`)).body as Quote;
 const sessionIdOf = (url: string) => new URL(url).pathname.split('/').pop()!;
-const pay = (quote: Pick<Quote, 'id' | 'version'>, amountCents: number, method = 'cash', agent = counter) => agent.post(`/api/quotes/${quote.id}/payments`).send({ version: quote.version, amountCents, method });
+const pay = (quote: Pick<Quote, 'id' | 'version'>, amountCents: number, method = 'cash', agent = counter) =>
+  agent.post(`/api/quotes/${quote.id}/payments`).send({ version: quote.version, amountCents, method });
 
 async function pollQuote(id: number, until: (q: Quote) => boolean, timeoutMs = 15_000): Promise<Quote> {
   const deadline = Date.now() + timeoutMs;
@@ -45,10 +54,13 @@ async function pollQuote(id: number, until: (q: Quote) => boolean, timeoutMs = 1
 }
 
 async function audits(quoteId: number, action: string) {
-  return sequelize.query<{ actor: string; after: unknown }>('SELECT actor, `after` FROM audit_log WHERE action = :action AND entity_type = :type AND entity_id = :id ORDER BY id', {
-    replacements: { action, type: 'quote', id: String(quoteId) },
-    type: QueryTypes.SELECT,
-  });
+  return sequelize.query<{ actor: string; after: unknown }>(
+    'SELECT actor, `after` FROM audit_log WHERE action = :action AND entity_type = :type AND entity_id = :id ORDER BY id',
+    {
+      replacements: { action, type: 'quote', id: String(quoteId) },
+      type: QueryTypes.SELECT,
+    },
+  );
 }
 const parsed = (v: unknown) => (typeof v === 'string' ? JSON.parse(v) : v) as Record<string, unknown>;
 
@@ -86,18 +98,34 @@ describe('money taken at the counter', () => {
     const before = await readQuote(job.id);
     const first = await pay(before, 10_000, 'card-present');
     expect(first.status).toBe(201);
-    expect(first.body).toMatchObject({ status: 'deposit-paid', balancePaidCents: 10_000, balanceDueCents: before.balanceDueCents - 10_000 });
+    expect(first.body).toMatchObject({
+      status: 'deposit-paid',
+      balancePaidCents: 10_000,
+      balanceDueCents: before.balanceDueCents - 10_000,
+    });
     const payment = (first.body as Quote).payments.find((p) => p.purpose === 'balance')!;
-    expect(payment).toMatchObject({ status: 'paid', method: 'card-present', amountCents: 10_000, providerSessionId: null });
+    expect(payment).toMatchObject({
+      status: 'paid',
+      method: 'card-present',
+      amountCents: 10_000,
+      providerSessionId: null,
+    });
     expect(payment.recordedBy?.name).toEqual(expect.any(String));
-    const [row] = await sequelize.query<{ recorded_by_user_id: number; paid_at: Date; provider: string }>('SELECT recorded_by_user_id, paid_at, provider FROM payments WHERE id = ?', { replacements: [payment.id], type: QueryTypes.SELECT });
+    const [row] = await sequelize.query<{ recorded_by_user_id: number; paid_at: Date; provider: string }>(
+      'SELECT recorded_by_user_id, paid_at, provider FROM payments WHERE id = ?',
+      { replacements: [payment.id], type: QueryTypes.SELECT },
+    );
     expect(row.recorded_by_user_id).toEqual(expect.any(Number));
     expect(row.paid_at).not.toBeNull();
     expect(row.provider).toBe('counter');
     const audit = await audits(job.id, 'payment.counter-recorded');
     expect(audit).toHaveLength(1);
     expect(audit[0].actor).toBe('counter@lobewise.test');
-    expect(parsed(audit[0].after)).toMatchObject({ paymentId: payment.id, amountCents: 10_000, method: 'card-present' });
+    expect(parsed(audit[0].after)).toMatchObject({
+      paymentId: payment.id,
+      amountCents: 10_000,
+      method: 'card-present',
+    });
 
     // The same form sent again (a double click) carries the old version: refused, nothing recorded.
     const again = await pay(before, 10_000, 'card-present');
@@ -123,7 +151,9 @@ describe('money taken at the counter', () => {
 
     const [mail] = await mailWith(job.customerEmail, /^Paid in full: quote/);
     expect(mail.text).toContain('paid in full');
-    expect(mail.attachments?.map((a) => a.filename).sort()).toEqual([`invoice-${job.number}-I.pdf`, `receipt-${job.number}-P${(paid.body as Quote).payments.at(-1)!.id}.pdf`].sort());
+    expect(mail.attachments?.map((a) => a.filename).sort()).toEqual(
+      [`invoice-${job.number}-I.pdf`, `receipt-${job.number}-P${(paid.body as Quote).payments.at(-1)!.id}.pdf`].sort(),
+    );
     expect(mail.attachments!.every((a) => a.size > 1_000)).toBe(true);
 
     const more = await pay(paid.body as Quote, 100, 'cash');
@@ -137,10 +167,14 @@ describe('money taken at the counter', () => {
     const over = await pay(quote, quote.balanceDueCents + 1);
     expect(over.status).toBe(422);
     expect(over.body.errors).toEqual([expect.objectContaining({ field: 'amountCents' })]);
-    const method = await counter.post(`/api/quotes/${job.id}/payments`).send({ version: quote.version, amountCents: 100, method: 'online' });
+    const method = await counter
+      .post(`/api/quotes/${job.id}/payments`)
+      .send({ version: quote.version, amountCents: 100, method: 'online' });
     expect(method.status).toBe(422);
     expect(method.body.errors).toEqual([expect.objectContaining({ field: 'method' })]);
-    const fraction = await counter.post(`/api/quotes/${job.id}/payments`).send({ version: quote.version, amountCents: 10.5, method: 'cash' });
+    const fraction = await counter
+      .post(`/api/quotes/${job.id}/payments`)
+      .send({ version: quote.version, amountCents: 10.5, method: 'cash' });
     expect(fraction.body.errors).toEqual([expect.objectContaining({ field: 'amountCents' })]);
     const noVersion = await counter.post(`/api/quotes/${job.id}/payments`).send({ amountCents: 100, method: 'cash' });
     expect(noVersion.body.errors).toEqual([expect.objectContaining({ field: 'version' })]);
@@ -193,16 +227,27 @@ describe('the pay-the-balance link', () => {
     expect(session.amount_total).toBe(quote.balanceDueCents);
     expect(session.metadata).toMatchObject({ quoteId: String(job.id), purpose: 'balance' });
 
-    const done = await request(paymentsUrl).post(`/_test/sessions/${sessionIdOf(first.body.url)}/complete`).expect(200);
+    const done = await request(paymentsUrl)
+      .post(`/_test/sessions/${sessionIdOf(first.body.url)}/complete`)
+      .expect(200);
     const closed = await pollQuote(job.id, (q) => q.status === 'closed');
     expect(closed).toMatchObject({ status: 'closed', balanceDueCents: 0, balancePaidCents: quote.balanceDueCents });
-    expect(closed.payments.filter((p) => p.purpose === 'balance')).toEqual([expect.objectContaining({ status: 'paid', method: 'online' })]);
+    expect(closed.payments.filter((p) => p.purpose === 'balance')).toEqual([
+      expect.objectContaining({ status: 'paid', method: 'online' }),
+    ]);
     const [receipt] = await mailWith(job.customerEmail, /^Paid in full/);
     expect(receipt.attachments?.map((a) => a.filename)).toContain(`invoice-${job.number}-I.pdf`);
 
     // The same event delivered again changes nothing; a checkout now is refused.
     const replay = JSON.stringify(done.body.event);
-    const again = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', stripe.webhooks.generateTestHeaderString({ payload: replay, secret: env.STRIPE_WEBHOOK_SECRET })).set('content-type', 'application/json').send(replay);
+    const again = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set(
+        'Stripe-Signature',
+        stripe.webhooks.generateTestHeaderString({ payload: replay, secret: env.STRIPE_WEBHOOK_SECRET }),
+      )
+      .set('content-type', 'application/json')
+      .send(replay);
     expect(again.body.result).toBe('already');
     expect((await mailWith(job.customerEmail, /^Paid in full/)).length).toBe(1);
     const after = await request(appUrl).post(`/api/q/${link[2]}/balance-checkout`).set('Accept', 'application/json');
@@ -214,20 +259,34 @@ describe('the pay-the-balance link', () => {
     const job = await makePaidJob(counter, 'Balance raced');
     const quote = await readQuote(job.id);
     await counter.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version }).expect(200);
-    const started = await request(appUrl).post(`/api/q/${job.token}/balance-checkout`).set('Accept', 'application/json');
+    const started = await request(appUrl)
+      .post(`/api/q/${job.token}/balance-checkout`)
+      .set('Accept', 'application/json');
     expect(started.status).toBe(200);
     // A counter payment that raced past the open checkout (the route itself expires open checkouts first).
     await sequelize.query(
       "INSERT INTO payments (quote_id, provider, amount_cents, refunded_cents, currency, status, paid_at, purpose, method, created_at, updated_at) VALUES (?, 'counter', ?, 0, 'usd', 'paid', NOW(), 'balance', 'cash', NOW(), NOW())",
       { replacements: [job.id, quote.balanceDueCents] },
     );
-    await request(paymentsUrl).post(`/_test/sessions/${sessionIdOf(started.body.url)}/complete`).expect(200);
-    const after = await pollQuote(job.id, (q) => q.payments.some((p) => p.providerSessionId === sessionIdOf(started.body.url) && p.status === 'refunded'));
+    await request(paymentsUrl)
+      .post(`/_test/sessions/${sessionIdOf(started.body.url)}/complete`)
+      .expect(200);
+    const after = await pollQuote(job.id, (q) =>
+      q.payments.some((p) => p.providerSessionId === sessionIdOf(started.body.url) && p.status === 'refunded'),
+    );
     const online = after.payments.find((p) => p.providerSessionId === sessionIdOf(started.body.url))!;
-    expect(online).toMatchObject({ status: 'refunded', refundedCents: quote.balanceDueCents, duplicateOfPaymentId: expect.any(Number) });
+    expect(online).toMatchObject({
+      status: 'refunded',
+      refundedCents: quote.balanceDueCents,
+      duplicateOfPaymentId: expect.any(Number),
+    });
     expect(after.balancePaidCents).toBe(quote.balanceDueCents);
-    const session = await stripe.checkout.sessions.retrieve(sessionIdOf(started.body.url), { expand: ['payment_intent'] });
-    const charge = await stripe.charges.retrieve((session.payment_intent as Stripe.PaymentIntent).latest_charge as string);
+    const session = await stripe.checkout.sessions.retrieve(sessionIdOf(started.body.url), {
+      expand: ['payment_intent'],
+    });
+    const charge = await stripe.charges.retrieve(
+      (session.payment_intent as Stripe.PaymentIntent).latest_charge as string,
+    );
     expect(charge.amount_refunded).toBe(quote.balanceDueCents);
     expect((await audits(job.id, 'payment.balance-refunded')).length).toBe(1);
   });
@@ -235,22 +294,33 @@ describe('the pay-the-balance link', () => {
   it('a counter payment expires the open online checkout, so the customer cannot pay twice', async () => {
     const job = await makePaidJob(counter, 'Balance expired by counter');
     let quote = await readQuote(job.id);
-    quote = (await counter.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version }).expect(200)).body;
-    const started = await request(appUrl).post(`/api/q/${job.token}/balance-checkout`).set('Accept', 'application/json');
+    quote = (await counter.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version }).expect(200))
+      .body;
+    const started = await request(appUrl)
+      .post(`/api/q/${job.token}/balance-checkout`)
+      .set('Accept', 'application/json');
     expect((await pay(quote, 5_000)).status).toBe(201);
     expect((await stripe.checkout.sessions.retrieve(sessionIdOf(started.body.url))).status).toBe('expired');
     // The next checkout asks for what is left now.
     const next = await request(appUrl).post(`/api/q/${job.token}/balance-checkout`).set('Accept', 'application/json');
     expect(next.body.reused).toBe(false);
-    expect((await stripe.checkout.sessions.retrieve(sessionIdOf(next.body.url))).amount_total).toBe(quote.balanceDueCents - 5_000);
+    expect((await stripe.checkout.sessions.retrieve(sessionIdOf(next.body.url))).amount_total).toBe(
+      quote.balanceDueCents - 5_000,
+    );
   });
 
   it('answers 422 naming a missing version, 409 for a stale one, 403 for technicians', async () => {
     const job = await makePaidJob(counter, 'Balance request refusals');
     const quote = await readQuote(job.id);
-    expect((await counter.post(`/api/quotes/${job.id}/balance-request`).send({})).body.errors).toEqual([expect.objectContaining({ field: 'version' })]);
-    expect((await counter.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version - 1 })).status).toBe(409);
-    expect((await tech.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version })).status).toBe(403);
+    expect((await counter.post(`/api/quotes/${job.id}/balance-request`).send({})).body.errors).toEqual([
+      expect.objectContaining({ field: 'version' }),
+    ]);
+    expect(
+      (await counter.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version - 1 })).status,
+    ).toBe(409);
+    expect((await tech.post(`/api/quotes/${job.id}/balance-request`).send({ version: quote.version })).status).toBe(
+      403,
+    );
   });
 });
 
@@ -271,10 +341,17 @@ describe('receipts and the final invoice', () => {
     expect((await request(appUrl).get(`/api/q/${job.token}/invoice`)).status).toBe(409);
 
     // The catalogue's price of the cam moves after the quote was sent; the invoice keeps the quoted price.
-    const [cam] = await sequelize.query<{ price_cents: number }>('SELECT price_cents FROM cams WHERE id = :id', { replacements: { id: FIXTURE_CAM_ID }, type: QueryTypes.SELECT });
-    const camLine = (await counter.get(`/api/quotes/${job.id}`)).body.lines.find((l: { kind: string }) => l.kind === 'cam') as { description: string; totalCents: number };
+    const [cam] = await sequelize.query<{ price_cents: number }>('SELECT price_cents FROM cams WHERE id = :id', {
+      replacements: { id: FIXTURE_CAM_ID },
+      type: QueryTypes.SELECT,
+    });
+    const camLine = (await counter.get(`/api/quotes/${job.id}`)).body.lines.find(
+      (l: { kind: string }) => l.kind === 'cam',
+    ) as { description: string; totalCents: number };
     quote = (await pay(quote, quote.balanceDueCents, 'card-present')).body;
-    await sequelize.query('UPDATE cams SET price_cents = price_cents + 77700 WHERE id = :id', { replacements: { id: FIXTURE_CAM_ID } });
+    await sequelize.query('UPDATE cams SET price_cents = price_cents + 77700 WHERE id = :id', {
+      replacements: { id: FIXTURE_CAM_ID },
+    });
     try {
       const invoice = await counter.get(`/api/quotes/${job.id}/invoice`).buffer(true);
       expect(invoice.status).toBe(200);
@@ -283,7 +360,9 @@ describe('receipts and the final invoice', () => {
       expect(text).toContain('Paid in full');
       expect(text).toContain(camLine.description);
       expect(text).toContain(`$${(camLine.totalCents / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })}`);
-      expect(text).not.toContain(`$${((Number(cam.price_cents) + 77_700) / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })}`);
+      expect(text).not.toContain(
+        `$${((Number(cam.price_cents) + 77_700) / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })}`,
+      );
       expect(text).toContain('Card at the counter');
       expect(text).toContain(`$${(job.totalCents / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })}`);
       // The customer's own link has the same documents, and nothing of another quote.
@@ -294,7 +373,9 @@ describe('receipts and the final invoice', () => {
       expect((await request(appUrl).get(`/api/q/${job.token}/receipts/${balance.id}`)).status).toBe(200);
       expect((await request(appUrl).get(`/api/q/${job.token}/receipts/1`)).status).toBe(404);
     } finally {
-      await sequelize.query('UPDATE cams SET price_cents = :price WHERE id = :id', { replacements: { price: cam.price_cents, id: FIXTURE_CAM_ID } });
+      await sequelize.query('UPDATE cams SET price_cents = :price WHERE id = :id', {
+        replacements: { price: cam.price_cents, id: FIXTURE_CAM_ID },
+      });
     }
   });
 });

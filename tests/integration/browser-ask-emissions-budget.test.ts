@@ -35,7 +35,9 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     }
     if (customerId) {
       const builds = await Build.findAll({ where: { customerId } });
-      await AuditEntry.destroy({ where: { entityType: 'build', entityId: { [Op.in]: builds.map((b) => String(b.id)) } } });
+      await AuditEntry.destroy({
+        where: { entityType: 'build', entityId: { [Op.in]: builds.map((b) => String(b.id)) } },
+      });
       await Build.destroy({ where: { customerId } });
       await AuditEntry.destroy({ where: { entityType: 'customer', entityId: String(customerId) } });
       await Customer.destroy({ where: { id: customerId } });
@@ -46,17 +48,33 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
   afterEach(() => expect(pageErrors).toEqual([]));
 
   it('a customer who must pass emissions sees only certified cams', async () => {
-    const certifiedStock = await Cam.count({ where: { emissionsCertified: true, active: true, archivedAt: null, isFactoryBaseline: false } });
+    const certifiedStock = await Cam.count({
+      where: { emissionsCertified: true, active: true, archivedAt: null, isFactoryBaseline: false },
+    });
     // The shop stocks fewer certified cams than a full shortlist, so an unfiltered top three holds an uncertified one.
     expect(certifiedStock).toBeLessThan(3);
-    expect(await Cam.count({ where: { emissionsCertified: false, active: true, archivedAt: null, isFactoryBaseline: false } })).toBeGreaterThan(0);
+    expect(
+      await Cam.count({
+        where: { emissionsCertified: false, active: true, archivedAt: null, isFactoryBaseline: false },
+      }),
+    ).toBeGreaterThan(0);
 
     const page: Page = await browser.newPage({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
     page.on('pageerror', (error) => pageErrors.push(error.message));
     await page.goto(`${appUrl}/ask`);
     await page.evaluate(() => window.sessionStorage.clear());
     await page.reload();
-    const answers: RegExp[] = [/^5\.3 litre/, /^Pickup truck/, /^Everyday driving/, /^A little lope you can hear/, /^Yes$/, /^Automatic/, /^No, both as they came/, /^Stock/, /^Not sure yet/];
+    const answers: RegExp[] = [
+      /^5\.3 litre/,
+      /^Pickup truck/,
+      /^Everyday driving/,
+      /^A little lope you can hear/,
+      /^Yes$/,
+      /^Automatic/,
+      /^No, both as they came/,
+      /^Stock/,
+      /^Not sure yet/,
+    ];
     for (const answer of answers) {
       await page.locator('label').filter({ hasText: answer }).first().tap();
       await page.getByRole('button', { name: 'Next' }).tap();
@@ -64,21 +82,30 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     await page.getByLabel('Your name').fill('Tamsin Okonkwo-Reed');
     await page.getByLabel('E-mail').fill(EMAIL);
     await page.getByRole('checkbox').check();
-    await Promise.all([page.waitForURL(/\/ask\/result\/[A-Za-z0-9_-]{43}$/), page.getByRole('button', { name: 'See my shortlist' }).tap()]);
+    await Promise.all([
+      page.waitForURL(/\/ask\/result\/[A-Za-z0-9_-]{43}$/),
+      page.getByRole('button', { name: 'See my shortlist' }).tap(),
+    ]);
 
     const choices = page.getByRole('heading', { level: 3, name: /^Choice \d: / });
     await choices.first().waitFor();
-    await expect(choices.allTextContents()).resolves.toEqual(Array.from({ length: certifiedStock }, (_, i) => expect.stringMatching(new RegExp(`^Choice ${i + 1}: `))));
+    await expect(choices.allTextContents()).resolves.toEqual(
+      Array.from({ length: certifiedStock }, (_, i) => expect.stringMatching(new RegExp(`^Choice ${i + 1}: `))),
+    );
     const main = (await page.locator('main').textContent()) ?? '';
     expect(main).toContain('only cams certified for emissions-tested road use are listed');
     expect(main).not.toContain('not certified for emissions-tested road use');
-    expect(main.match(/certified for emissions-tested road use where its paperwork covers your vehicle/g)).toHaveLength(certifiedStock);
+    expect(main.match(/certified for emissions-tested road use where its paperwork covers your vehicle/g)).toHaveLength(
+      certifiedStock,
+    );
     await expectNoSeriousA11yViolations(page);
 
     const lead = await Lead.findOne({ where: { email: EMAIL } });
     leadId = lead!.id;
     const stored = lead!.shortlist as { entries: { camId: number; emissionsCertified: boolean }[] };
-    const certifiedIds = (await Cam.findAll({ where: { emissionsCertified: true }, attributes: ['id'] })).map((c) => c.id);
+    const certifiedIds = (await Cam.findAll({ where: { emissionsCertified: true }, attributes: ['id'] })).map(
+      (c) => c.id,
+    );
     expect(stored.entries.map((e) => certifiedIds.includes(Number(e.camId)))).toEqual(stored.entries.map(() => true));
     await page.close();
   }, 90_000);
@@ -104,7 +131,10 @@ describe('emissions and an unknown budget, from the questionnaire to the intervi
     // The advisor was asked with no budget and says so, instead of judging the cams against a guess.
     await page.locator('table tbody tr').first().waitFor();
     await page.locator('table tbody button').first().click();
-    await page.getByText(/no budget was given/).first().waitFor();
+    await page
+      .getByText(/no budget was given/)
+      .first()
+      .waitFor();
     await expectNoSeriousA11yViolations(page);
 
     // Editing: the counter picks "named a figure"; left blank it is asked for, then saved in cents.

@@ -21,8 +21,15 @@ async function noHorizontalOverflow(page: Page) {
 /** Every visible button, radio card, text input and checkbox card on the screen is at least 44 px tall. */
 async function touchTargetsAreBig(page: Page) {
   const small = await page.evaluate(() =>
-    [...document.querySelectorAll('main button, main label:has(input[type=radio]), main label:has(input[type=checkbox]), main input[type=text], main input[type=email], main input[type=tel]')]
-      .map((el) => ({ text: (el.textContent ?? (el as HTMLInputElement).name).trim().slice(0, 40), height: el.getBoundingClientRect().height }))
+    [
+      ...document.querySelectorAll(
+        'main button, main label:has(input[type=radio]), main label:has(input[type=checkbox]), main input[type=text], main input[type=email], main input[type=tel]',
+      ),
+    ]
+      .map((el) => ({
+        text: (el.textContent ?? (el as HTMLInputElement).name).trim().slice(0, 40),
+        height: el.getBoundingClientRect().height,
+      }))
       .filter((t) => t.height > 0 && t.height < 44),
   );
   expect(small).toEqual([]);
@@ -39,9 +46,16 @@ describe('the questionnaire on a phone', () => {
   });
   afterAll(async () => {
     await browser?.close();
-    const ids = (await sequelize.query<{ id: number }>('SELECT id FROM leads WHERE email = ?', { replacements: [EMAIL], type: QueryTypes.SELECT })).map((r) => r.id);
+    const ids = (
+      await sequelize.query<{ id: number }>('SELECT id FROM leads WHERE email = ?', {
+        replacements: [EMAIL],
+        type: QueryTypes.SELECT,
+      })
+    ).map((r) => r.id);
     if (ids.length) {
-      await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", { replacements: [ids.map(String)] });
+      await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", {
+        replacements: [ids.map(String)],
+      });
       await sequelize.query('DELETE FROM leads WHERE id IN (?)', { replacements: [ids] });
     }
     await disconnectTestDatabase();
@@ -54,7 +68,10 @@ describe('the questionnaire on a phone', () => {
 
     // From the landing page's link.
     await page.goto(`${appUrl}/`, { waitUntil: 'load' });
-    await Promise.all([page.waitForURL(/\/ask$/), page.getByRole('link', { name: 'Not sure which cam? Answer a few questions' }).click()]);
+    await Promise.all([
+      page.waitForURL(/\/ask$/),
+      page.getByRole('link', { name: 'Not sure which cam? Answer a few questions' }).click(),
+    ]);
     await page.evaluate(() => window.sessionStorage.clear());
     await page.reload();
 
@@ -121,13 +138,18 @@ describe('the questionnaire on a phone', () => {
     await Promise.all([page.waitForURL(/\/ask\/result\/[A-Za-z0-9_-]{43}$/), page.getByLabel('E-mail').press('Enter')]);
 
     await expect(heading.textContent()).resolves.toBe('Your indicative shortlist');
-    await expect(page.getByRole('heading', { name: 'This is an estimate, not a quote' }).isVisible()).resolves.toBe(true);
+    await expect(page.getByRole('heading', { name: 'This is an estimate, not a quote' }).isVisible()).resolves.toBe(
+      true,
+    );
     await expect(page.getByRole('heading', { name: 'The shop will contact you' }).isVisible()).resolves.toBe(true);
     await expect(page.getByRole('heading', { level: 3, name: /^Choice [123]: / }).count()).resolves.toBe(3);
     // Each choice shows the whole job's price before tax — the number the shop's shortlist and quote show
     // for the same build — and no other figure.
     const text = (await page.locator('main').textContent()) ?? '';
-    const prices = text.match(/About \$[\d,]+\.\d\d for the whole job — the cam, the parts it needs, fitting and the tune — before tax/g) ?? [];
+    const prices =
+      text.match(
+        /About \$[\d,]+\.\d\d for the whole job — the cam, the parts it needs, fitting and the tune — before tax/g,
+      ) ?? [];
     expect(prices).toHaveLength(3);
     expect(text.match(/\$[\d,]+(\.\d\d)?/g)).toHaveLength(3);
     await noHorizontalOverflow(page);
@@ -135,13 +157,20 @@ describe('the questionnaire on a phone', () => {
     await page.screenshot({ path: path.join(SHOTS, 'ask-phone-result.png'), fullPage: true });
     // Sent answers are no longer kept in the tab.
     await expect(page.evaluate(() => window.sessionStorage.getItem('lobewise.ask.v2'))).resolves.toBeNull();
-    const [row] = await sequelize.query<{ name: string; answers: string | object; shortlist: string | object }>('SELECT name, answers, shortlist FROM leads WHERE email = ?', { replacements: [EMAIL], type: QueryTypes.SELECT });
+    const [row] = await sequelize.query<{ name: string; answers: string | object; shortlist: string | object }>(
+      'SELECT name, answers, shortlist FROM leads WHERE email = ?',
+      { replacements: [EMAIL], type: QueryTypes.SELECT },
+    );
     expect(row.name).toBe('Pim Ardengast');
     const json = (v: string | object) => (typeof v === 'string' ? JSON.parse(v) : v);
     expect(json(row.answers)).toMatchObject({ vehicle: 'truck' });
     // The prices on the page are the stored job prices, to the cent.
-    const stored = (json(row.shortlist) as { entries: { jobPriceCents: number }[] }).entries.map((e) => e.jobPriceCents);
-    expect(prices.map((p) => p.match(/\$([\d,]+\.\d\d)/)![1])).toEqual(stored.map((c) => (c / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })));
+    const stored = (json(row.shortlist) as { entries: { jobPriceCents: number }[] }).entries.map(
+      (e) => e.jobPriceCents,
+    );
+    expect(prices.map((p) => p.match(/\$([\d,]+\.\d\d)/)![1])).toEqual(
+      stored.map((c) => (c / 100).toLocaleString('en-US', { minimumFractionDigits: 2 })),
+    );
     expect(consoleErrors).toEqual([]);
     await page.close();
   });

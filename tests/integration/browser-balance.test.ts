@@ -51,8 +51,14 @@ describe('the balance in the browser', () => {
     await customer.goto(link);
     await customer.getByRole('heading', { name: 'Status: Job done — balance to pay' }).waitFor();
     await expectNoSeriousA11yViolations(customer);
-    await Promise.all([customer.waitForURL(/\/pay\/cs_/), customer.getByRole('button', { name: `Pay the balance of ${dollars(due)}` }).click()]);
-    await Promise.all([customer.waitForURL((url) => url.href.startsWith(`${link}?paid=balance`)), customer.getByRole('button', { name: /Pay/ }).first().click()]);
+    await Promise.all([
+      customer.waitForURL(/\/pay\/cs_/),
+      customer.getByRole('button', { name: `Pay the balance of ${dollars(due)}` }).click(),
+    ]);
+    await Promise.all([
+      customer.waitForURL((url) => url.href.startsWith(`${link}?paid=balance`)),
+      customer.getByRole('button', { name: /Pay/ }).first().click(),
+    ]);
     for (let i = 0; i < 20 && !(await customer.getByText('Paid in full — thank you.').count()); i++) {
       await customer.waitForTimeout(250);
       await customer.reload();
@@ -90,7 +96,10 @@ describe('the balance in the browser', () => {
     // Too much is stopped before it is sent.
     await page.getByLabel('Amount taken ($)').fill(((due - 10_000) / 100 + 1).toFixed(2));
     await page.getByRole('button', { name: 'Record counter payment' }).click();
-    await page.getByRole('alert').getByText(/At most/).waitFor();
+    await page
+      .getByRole('alert')
+      .getByText(/At most/)
+      .waitFor();
 
     await page.getByLabel('Amount taken ($)').fill(((due - 10_000) / 100).toFixed(2));
     await page.getByLabel('Card at the counter').check();

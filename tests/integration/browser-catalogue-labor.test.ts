@@ -50,7 +50,10 @@ describe('a labour operation through the catalogue form', () => {
 
     await hours.fill('1.25');
     await page.getByText(`Problem: hours must be at most ${LABOR_LIMITS.hours.max} h`).waitFor({ state: 'detached' });
-    await Promise.all([page.waitForURL(/\/catalogue\/labor\?saved=1$/), page.getByRole('button', { name: 'Add labour operation' }).click()]);
+    await Promise.all([
+      page.waitForURL(/\/catalogue\/labor\?saved=1$/),
+      page.getByRole('button', { name: 'Add labour operation' }).click(),
+    ]);
     const saved = await LaborOperation.findOne({ where: { code } });
     expect(Number(saved?.hours)).toBeCloseTo(1.25);
 
@@ -59,11 +62,16 @@ describe('a labour operation through the catalogue form', () => {
     // Someone else saves first (the model bumps the version), then this form saves on the version it read.
     await saved!.update({ hours: 3 });
     await page.getByRole('button', { name: 'Save changes' }).click();
-    await page.getByText('Someone else saved this record while you were editing it. Nothing has been overwritten.').waitFor();
+    await page
+      .getByText('Someone else saved this record while you were editing it. Nothing has been overwritten.')
+      .waitFor();
     await expectNoSeriousA11yViolations(page);
     expect(Number((await LaborOperation.findByPk(saved!.id))?.hours)).toBeCloseTo(3);
     await page.getByRole('button', { name: 'Keep my values (then save again)' }).click();
-    await Promise.all([page.waitForURL(/\/catalogue\/labor\?saved=1$/), page.getByRole('button', { name: 'Save changes' }).click()]);
+    await Promise.all([
+      page.waitForURL(/\/catalogue\/labor\?saved=1$/),
+      page.getByRole('button', { name: 'Save changes' }).click(),
+    ]);
     expect(Number((await LaborOperation.findByPk(saved!.id))?.hours)).toBeCloseTo(2);
     expect(pageErrors).toEqual([]);
   });

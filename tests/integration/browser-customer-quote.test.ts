@@ -22,11 +22,18 @@ describe('the customer quote page on a phone', () => {
     browser = await launchBrowser();
     fs.mkdirSync(SHOTS, { recursive: true });
     const counter = await signedInAgent('counter');
-    const made = await counter.post('/api/quotes').send({ buildId: DEMO.builds.vranesStripCoupe, camId: DEMO.cams.stripStreet224, extraLines: [{ kind: 'labor', laborOperationId: DEMO.labor.camSwapCar }] });
+    const made = await counter.post('/api/quotes').send({
+      buildId: DEMO.builds.vranesStripCoupe,
+      camId: DEMO.cams.stripStreet224,
+      extraLines: [{ kind: 'labor', laborOperationId: DEMO.labor.camSwapCar }],
+    });
     expect(made.status).toBe(201);
     quoteId = made.body.id;
     expect((await counter.post(`/api/quotes/${quoteId}/send`)).status).toBe(200);
-    const messages = (await request(mailUrl).get('/messages').query({ to: 'teddy.vranes@example.com' })).body as { subject: string; text: string }[];
+    const messages = (await request(mailUrl).get('/messages').query({ to: 'teddy.vranes@example.com' })).body as {
+      subject: string;
+      text: string;
+    }[];
     const mail = messages.find((m) => m.subject.includes(made.body.number))!;
     link = /(http:\/\/\S+\/q\/[A-Za-z0-9_-]+)/.exec(mail.text)![1];
   });
@@ -39,19 +46,26 @@ describe('the customer quote page on a phone', () => {
     await page.goto(link, { waitUntil: 'load' });
     await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toMatch(/Your quote Q-\d{4}-\d{4}/);
     await expect(page.getByRole('heading', { name: /Deposit to book the job: \$/ }).isVisible()).resolves.toBe(true);
-    await expect(page.getByText('Your deposit holds the parts and a bay for your job.').isVisible()).resolves.toBe(true);
+    await expect(page.getByText('Your deposit holds the parts and a bay for your job.').isVisible()).resolves.toBe(
+      true,
+    );
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow).toBeLessThanOrEqual(0);
     const button = page.getByRole('button', { name: 'Accept and pay the deposit' });
     const box = await button.boundingBox();
     expect(box!.height).toBeGreaterThanOrEqual(48); // a generous touch target
-    const bodySize = await page.evaluate(() => parseFloat(getComputedStyle(document.querySelector('main > div')!).fontSize));
+    const bodySize = await page.evaluate(() =>
+      parseFloat(getComputedStyle(document.querySelector('main > div')!).fontSize),
+    );
     expect(bodySize).toBeGreaterThanOrEqual(18);
     await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'customer-quote-phone.png'), fullPage: true });
 
     await Promise.all([page.waitForURL(/\/pay\/cs_/), button.click()]);
-    await Promise.all([page.waitForURL((url) => url.href.startsWith(`${link}?paid=1`)), page.getByRole('button', { name: /Pay/ }).first().click()]);
+    await Promise.all([
+      page.waitForURL((url) => url.href.startsWith(`${link}?paid=1`)),
+      page.getByRole('button', { name: /Pay/ }).first().click(),
+    ]);
     // The webhook usually lands before the redirect; reload until it has.
     for (let i = 0; i < 20 && !(await page.getByText('Deposit paid — thank you').count()); i++) {
       await page.waitForTimeout(250);

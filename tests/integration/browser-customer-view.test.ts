@@ -17,15 +17,26 @@ const { appUrl } = readRuntime();
 const SHOTS = path.resolve(__dirname, '../../var/test/screenshots');
 
 type CamRow = {
-  sku: string; name: string; cost_cents: number;
-  intake_duration_050: number; exhaust_duration_050: number; intake_lift_in: number; exhaust_lift_in: number; lsa: number; intake_centerline: number;
+  sku: string;
+  name: string;
+  cost_cents: number;
+  intake_duration_050: number;
+  exhaust_duration_050: number;
+  intake_lift_in: number;
+  exhaust_lift_in: number;
+  lsa: number;
+  intake_centerline: number;
 };
 type StaffRow = { cardName: string; jobPrice: string };
 
 const degree = (n: number) => `${Number.isInteger(Number(n)) ? Number(n) : Number(n).toFixed(1)}°`;
 const money = (cents: number) => (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD' });
 /** Every code the shop keeps for itself: cam and part SKUs and labour codes (a customer never needs them). */
-const SHOP_CODES = [...Object.values(DEMO_KEYS.cams), ...Object.values(DEMO_KEYS.parts), ...Object.values(DEMO_KEYS.labor)];
+const SHOP_CODES = [
+  ...Object.values(DEMO_KEYS.cams),
+  ...Object.values(DEMO_KEYS.parts),
+  ...Object.values(DEMO_KEYS.labor),
+];
 
 async function openShortlist(browser: Browser, width: number): Promise<Page> {
   const context = await staffContext(browser, 'counter', { width, height: 900 });
@@ -42,12 +53,16 @@ async function staffRows(page: Page): Promise<StaffRow[]> {
   const out: StaffRow[] = [];
   for (let i = 0; i < (await rows.count()); i++) {
     const row = rows.nth(i);
-    out.push({ cardName: ((await row.getByRole('button').first().textContent()) ?? '').trim(), jobPrice: ((await row.locator('[data-job-price]').textContent()) ?? '').trim() });
+    out.push({
+      cardName: ((await row.getByRole('button').first().textContent()) ?? '').trim(),
+      jobPrice: ((await row.locator('[data-job-price]').textContent()) ?? '').trim(),
+    });
   }
   return out;
 }
 
-const chartBox = (page: Page, cardName: string) => page.getByRole('checkbox', { name: `Show ${cardName} on the chart` });
+const chartBox = (page: Page, cardName: string) =>
+  page.getByRole('checkbox', { name: `Show ${cardName} on the chart` });
 
 async function pressOn(locator: Locator, key: string): Promise<void> {
   await locator.focus();
@@ -58,7 +73,11 @@ async function pressOn(locator: Locator, key: string): Promise<void> {
 async function expectNoSidewaysScroll(page: Page): Promise<void> {
   const widths = await page.evaluate(() => {
     const dialog = document.querySelector('dialog[open]');
-    return { page: document.documentElement.scrollWidth, screen: window.innerWidth, dialog: dialog ? dialog.scrollWidth - dialog.clientWidth : 0 };
+    return {
+      page: document.documentElement.scrollWidth,
+      screen: window.innerWidth,
+      dialog: dialog ? dialog.scrollWidth - dialog.clientWidth : 0,
+    };
   });
   expect(widths.page).toBeLessThanOrEqual(widths.screen);
   expect(widths.dialog).toBeLessThanOrEqual(0);
@@ -115,23 +134,31 @@ describe('the shortlist turned to the customer', () => {
 
     // Side by side on the staff page: one column per chosen cam, the cards' own figures and the table's prices.
     await pressOn(compareButton, 'Enter');
-    await expect(page.getByRole('button', { name: 'Hide the comparison' }).getAttribute('aria-expanded')).resolves.toBe('true');
+    await expect(page.getByRole('button', { name: 'Hide the comparison' }).getAttribute('aria-expanded')).resolves.toBe(
+      'true',
+    );
     const comparison = page.getByRole('table', { name: 'Chosen cams side by side' });
     await comparison.waitFor();
     const headers = (await comparison.locator('thead th').allTextContents()).map((t) => t.trim());
     expect(headers).toEqual(chosen.map((c) => c.cardName));
-    const cells = async (table: Locator, key: string) => (await table.locator(`tr[data-row="${key}"] td`).allTextContents()).map((t) => t.trim());
+    const cells = async (table: Locator, key: string) =>
+      (await table.locator(`tr[data-row="${key}"] td`).allTextContents()).map((t) => t.trim());
     expect(await cells(comparison, 'price')).toEqual(chosen.map((c) => c.jobPrice));
     const cams = await camsByCardName(chosen.map((c) => c.cardName));
     const durations = await cells(comparison, 'duration');
     expect(durations).toEqual(cams.map((c) => `${degree(c.intake_duration_050)} / ${degree(c.exhaust_duration_050)}`));
-    expect(await cells(comparison, 'lift')).toEqual(cams.map((c) => `${Number(c.intake_lift_in).toFixed(3)}" / ${Number(c.exhaust_lift_in).toFixed(3)}"`));
+    expect(await cells(comparison, 'lift')).toEqual(
+      cams.map((c) => `${Number(c.intake_lift_in).toFixed(3)}" / ${Number(c.exhaust_lift_in).toFixed(3)}"`),
+    );
     expect(await cells(comparison, 'lsa')).toEqual(cams.map((c) => degree(c.lsa)));
     expect(await cells(comparison, 'icl')).toEqual(cams.map((c) => degree(c.intake_centerline)));
-    for (const key of ['ivo', 'ivc', 'evo', 'evc']) for (const cell of await cells(comparison, key)) expect(cell).toMatch(/^\d+(\.\d)?° (before|after) [TB]DC$/);
-    for (const cell of await cells(comparison, 'overlap')) expect(cell).toMatch(/^(None at 0\.050" \(−\d+(\.\d)?°\)|\d+(\.\d)?°)$/);
+    for (const key of ['ivo', 'ivc', 'evo', 'evc'])
+      for (const cell of await cells(comparison, key)) expect(cell).toMatch(/^\d+(\.\d)?° (before|after) [TB]DC$/);
+    for (const cell of await cells(comparison, 'overlap'))
+      expect(cell).toMatch(/^(None at 0\.050" \(−\d+(\.\d)?°\)|\d+(\.\d)?°)$/);
     for (const cell of await cells(comparison, 'dcr')) expect(cell).toMatch(/^\d\.\d:1$/);
-    for (const cell of await cells(comparison, 'vacuum')) expect(cell).toMatch(/^About \d+(\.\d)? inHg: (enough|less than)/);
+    for (const cell of await cells(comparison, 'vacuum'))
+      expect(cell).toMatch(/^About \d+(\.\d)? inHg: (enough|less than)/);
     for (const cell of await cells(comparison, 'needs')) expect(cell).toContain('Fitting');
     await expectNoSeriousA11yViolations(page);
 
@@ -142,17 +169,28 @@ describe('the shortlist turned to the customer', () => {
     await expect(page.evaluate(() => document.activeElement?.textContent)).resolves.toBe('Back to the shop view');
     const grindNames = cams.map((c) => c.name);
     await expect(view.locator('[data-customer-cam] h3').allTextContents()).resolves.toEqual(grindNames);
-    await expect(view.locator('[data-customer-price]').allTextContents()).resolves.toEqual(chosen.map((c) => c.jobPrice));
+    await expect(view.locator('[data-customer-price]').allTextContents()).resolves.toEqual(
+      chosen.map((c) => c.jobPrice),
+    );
     const customerTable = view.getByRole('table', { name: 'The chosen cams side by side' });
     expect((await customerTable.locator('thead th').allTextContents()).map((t) => t.trim())).toEqual(grindNames);
     expect(await cells(customerTable, 'price')).toEqual(chosen.map((c) => c.jobPrice));
     // (The staff page under the open view is inert: its comparison was read before the screen was turned.)
     expect(await cells(customerTable, 'duration')).toEqual(durations);
-    await expect(view.getByRole('img', { name: /Estimated pulling power .* for your engine now and for/ }).isVisible()).resolves.toBe(true);
+    await expect(
+      view.getByRole('img', { name: /Estimated pulling power .* for your engine now and for/ }).isVisible(),
+    ).resolves.toBe(true);
     expect(await view.locator('canvas').count()).toBe(1);
 
     const said = (await view.textContent()) ?? '';
-    for (const caution of [/qualified technician/, /piston-to-valve clearance/, /re-tuned/, /Emissions:/, /Local codes and licensed practice come first/]) expect(said).toMatch(caution);
+    for (const caution of [
+      /qualified technician/,
+      /piston-to-valve clearance/,
+      /re-tuned/,
+      /Emissions:/,
+      /Local codes and licensed practice come first/,
+    ])
+      expect(said).toMatch(caution);
     expect(said).not.toMatch(/\bcosts?\b|margin|\/100|in stock|None: order/i);
     for (const cam of cams) expect(said).not.toContain(money(cam.cost_cents));
     expect(SHOP_CODES.filter((code) => said.includes(code))).toEqual([]);
@@ -188,8 +226,12 @@ describe('the shortlist turned to the customer', () => {
     await page.getByRole('button', { name: 'Show to the customer' }).click();
     const view = page.getByRole('dialog', { name: 'Your cam choices' });
     await view.waitFor();
-    await expect(view.locator('[data-customer-price]').allTextContents()).resolves.toEqual(staff.slice(0, 3).map((c) => c.jobPrice));
-    await expect(view.getByText('Local codes and licensed practice come first', { exact: false }).isVisible()).resolves.toBe(true);
+    await expect(view.locator('[data-customer-price]').allTextContents()).resolves.toEqual(
+      staff.slice(0, 3).map((c) => c.jobPrice),
+    );
+    await expect(
+      view.getByText('Local codes and licensed practice come first', { exact: false }).isVisible(),
+    ).resolves.toBe(true);
     await expectNoSidewaysScroll(page);
     // Large type for reading across the counter: the prices at 24 px or more, body text at 18 px.
     const sizes = await view.evaluate((dialog) => ({

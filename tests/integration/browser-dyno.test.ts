@@ -55,10 +55,16 @@ describe('dyno runs through the job page', () => {
   // Script errors in the page (the old form threw "e.trim is not a function" on every keystroke).
   const pageErrors: string[] = [];
   const form = () => page.getByRole('form', { name: 'Record a dyno run' });
-  const runRows = () => page.getByRole('table').filter({ has: page.getByText('Recorded dyno runs') }).locator('tbody tr');
+  const runRows = () =>
+    page
+      .getByRole('table')
+      .filter({ has: page.getByText('Recorded dyno runs') })
+      .locator('tbody tr');
   /** The table reloads after a save; wait for the nth row, then check there are exactly n. */
   async function rowsShown(n: number) {
-    await runRows().nth(n - 1).waitFor();
+    await runRows()
+      .nth(n - 1)
+      .waitFor();
     await expect(runRows().count()).resolves.toBe(n);
   }
 
@@ -74,7 +80,9 @@ describe('dyno runs through the job page', () => {
   });
   afterAll(async () => {
     await browser?.close();
-    const ids = (await DynoRun.findAll({ where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId } }, attributes: ['id'] })).map((r) => r.id);
+    const ids = (
+      await DynoRun.findAll({ where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId } }, attributes: ['id'] })
+    ).map((r) => r.id);
     await removeDynoRuns(ids);
     await AuditEntry.destroy({ where: { entityType: 'dyno-run', entityId: { [Op.in]: ids.map(String) } } });
     await disconnectTestDatabase();
@@ -142,7 +150,10 @@ describe('dyno runs through the job page', () => {
     expect(after).toContain('394.0 lb·ft @ 4500 rpm');
 
     // Stored in SI whatever the screen shows: 77 °F = 25 °C; 29.53 inHg × 3.386389 kPa/inHg = 100.0 kPa.
-    const stored = await DynoRun.findAll({ where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId }, curve: { [Op.ne]: null } }, order: [['id', 'ASC']] });
+    const stored = await DynoRun.findAll({
+      where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId }, curve: { [Op.ne]: null } },
+      order: [['id', 'ASC']],
+    });
     expect(stored.map((r) => r.phase)).toEqual(['before', 'after']);
     expect(stored[0].airTempC).toBeCloseTo(25, 6);
     expect(stored[0].baroKpa).toBeCloseTo(100.0, 1);
@@ -168,7 +179,8 @@ describe('dyno runs through the job page', () => {
     await form().getByLabel('Correction to standard air').selectOption('none');
     await choose(page, 'Peak figures only');
     await form().getByLabel('Peak power', { exact: true }).waitFor();
-    for (const label of ['Air temperature', 'Barometric pressure', 'Relative humidity']) await typeInto(page, label, '');
+    for (const label of ['Air temperature', 'Barometric pressure', 'Relative humidity'])
+      await typeInto(page, label, '');
     await typeInto(page, 'Peak power', '401.5');
     await typeInto(page, 'rpm at peak power', '6000');
     await typeInto(page, 'Peak torque', '396');
@@ -179,7 +191,9 @@ describe('dyno runs through the job page', () => {
     const last = (await runRows().allTextContents())[2];
     expect(last).toContain('401.5 hp @ 6000 rpm');
     expect(last).toContain('none × 1.0000');
-    const stored = await DynoRun.findOne({ where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId }, peakHp: 401.5 } });
+    const stored = await DynoRun.findOne({
+      where: { buildId: JOB.buildId, id: { [Op.gte]: firstNewId }, peakHp: 401.5 },
+    });
     expect(stored).toMatchObject({ correctionStandard: 'none', airTempC: null, baroKpa: null, humidityPct: null });
     await expectNoSeriousA11yViolations(page);
   }, 90_000);
@@ -190,18 +204,29 @@ describe('dyno runs through the job page', () => {
     await file.setInputFiles({ name: 'sheet.pdf', mimeType: 'application/pdf', buffer: Buffer.from('%PDF-1.4') });
     await form().getByText('sheet.pdf is not a CSV file').waitFor();
     // 15,000 lines of 9 bytes: 135,000 bytes.
-    await file.setInputFiles({ name: 'big.csv', mimeType: 'text/csv', buffer: Buffer.from('3000,300\n'.repeat(15_000)) });
+    await file.setInputFiles({
+      name: 'big.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from('3000,300\n'.repeat(15_000)),
+    });
     await form().getByText('big.csv is 135 kB; a pull’s CSV is at most 100 kB').waitFor();
 
     // Line 1 is the header, line 3 is blank; rpm falls on line 5 and line 6 is not a number pair.
     const pull = 'rpm,torque\n3000,300\n\n3500,310\n3400,305\n4000;x\n';
     await file.setInputFiles({ name: 'pull.csv', mimeType: 'text/csv', buffer: Buffer.from(pull) });
     await form().getByText('line 6: expected two numbers').waitFor();
-    await expect(form().getByLabel(/^Pull points/).inputValue()).resolves.toBe(pull);
+    await expect(
+      form()
+        .getByLabel(/^Pull points/)
+        .inputValue(),
+    ).resolves.toBe(pull);
     await typeInto(page, /^Pull points/, 'rpm,torque\n3000,300\n\n3500,310\n3400,305');
     await form().getByText('line 5: rpm must rise from point to point (3400 after 3500)').waitFor();
 
-    const [download] = await Promise.all([page.waitForEvent('download'), form().getByRole('button', { name: 'Download the template (.csv)' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      form().getByRole('button', { name: 'Download the template (.csv)' }).click(),
+    ]);
     expect(download.suggestedFilename()).toBe('dyno-pull-template.csv');
     const template = fs.readFileSync((await download.path())!, 'utf8');
     expect(template.split('\n')[0]).toBe('rpm,torque_lbft');

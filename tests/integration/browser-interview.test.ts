@@ -33,7 +33,9 @@ describe('counter interview in a real browser', () => {
   });
   afterAll(async () => {
     await browser?.close();
-    const ids = (await Customer.findAll({ where: { name: { [Op.startsWith]: MARK } }, attributes: ['id'] })).map((c) => c.id);
+    const ids = (await Customer.findAll({ where: { name: { [Op.startsWith]: MARK } }, attributes: ['id'] })).map(
+      (c) => c.id,
+    );
     if (ids.length) {
       await Build.destroy({ where: { customerId: ids } });
       await Customer.destroy({ where: { id: ids } });
@@ -79,7 +81,11 @@ describe('counter interview in a real browser', () => {
     await page.getByText('Problem: bore must be at most 4.6 in').waitFor({ state: 'detached' });
 
     // The emissions caution shows because the default answer is "road-legal emissions needed".
-    await expect(page.getByText('many jurisdictions forbid an aftermarket cam on a road vehicle unless the part is certified').isVisible()).resolves.toBe(true);
+    await expect(
+      page
+        .getByText('many jurisdictions forbid an aftermarket cam on a road vehicle unless the part is certified')
+        .isVisible(),
+    ).resolves.toBe(true);
 
     // Ctrl+Enter saves; the budget is still blank, so the cursor lands there with the reason.
     await page.keyboard.press('Control+Enter');

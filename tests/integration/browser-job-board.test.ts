@@ -24,7 +24,9 @@ async function typeInto(page: Page, scope: ReturnType<Page['getByRole']>, label:
 }
 
 async function noSidewaysScroll(page: Page) {
-  await expect(page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).resolves.toBeLessThanOrEqual(0);
+  await expect(
+    page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth),
+  ).resolves.toBeLessThanOrEqual(0);
 }
 
 describe('the job board in the browser', () => {
@@ -115,8 +117,12 @@ describe('the job board in the browser', () => {
     const sheet = page.getByRole('region', { name: 'Sign-off before first start' });
     await sheet.waitFor();
     await expect(sheet.textContent()).resolves.toContain('browser-tune rev 2');
-    await expect(sheet.getByRole('row').filter({ hasText: 'Piston-to-valve, intake' }).textContent()).resolves.toMatch(/0\.070 in.*Check/);
-    await expect(sheet.getByRole('row').filter({ hasText: 'Coil-bind margin' }).textContent()).resolves.toMatch(/0\.085 in.*Within usual/);
+    await expect(sheet.getByRole('row').filter({ hasText: 'Piston-to-valve, intake' }).textContent()).resolves.toMatch(
+      /0\.070 in.*Check/,
+    );
+    await expect(sheet.getByRole('row').filter({ hasText: 'Coil-bind margin' }).textContent()).resolves.toMatch(
+      /0\.085 in.*Within usual/,
+    );
     // The sheet prints: the sign-off stays, the form goes.
     await page.emulateMedia({ media: 'print' });
     await expect(sheet.isVisible()).resolves.toBe(true);

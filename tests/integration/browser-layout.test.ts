@@ -12,7 +12,22 @@ const { appUrl } = readRuntime();
 
 const PAGES: Record<TestRole | 'public', string[]> = {
   public: ['/', '/ask', '/sign-in', '/forgot-password'],
-  counter: ['/dashboard', '/interviews', '/interviews/new', `/advisor?build=${DEMO.builds.whitlockTowingTruck}`, '/leads', '/quotes', `/quotes/${DEMO.quotes.whitlockSent}`, '/catalogue', '/catalogue/cams', `/catalogue/cams/${DEMO.cams.easyDaily194}`, '/catalogue/parts', '/catalogue/labor', '/catalogue/rules', '/account'],
+  counter: [
+    '/dashboard',
+    '/interviews',
+    '/interviews/new',
+    `/advisor?build=${DEMO.builds.whitlockTowingTruck}`,
+    '/leads',
+    '/quotes',
+    `/quotes/${DEMO.quotes.whitlockSent}`,
+    '/catalogue',
+    '/catalogue/cams',
+    `/catalogue/cams/${DEMO.cams.easyDaily194}`,
+    '/catalogue/parts',
+    '/catalogue/labor',
+    '/catalogue/rules',
+    '/account',
+  ],
   tech: ['/jobs', `/jobs/${DEMO.quotes.okaforDepositPaid}`],
   manager: ['/reports', '/staff', '/catalogue/settings', '/catalogue/cams/new', '/catalogue/cams/import'],
 };
@@ -35,9 +50,17 @@ function sidewaysOverflow(page: Page) {
           if (style.position === 'static') continue;
           needPositioned = false;
         }
-        if (['auto', 'scroll', 'hidden', 'clip'].includes(style.overflowX)) { clipped = true; break; }
+        if (['auto', 'scroll', 'hidden', 'clip'].includes(style.overflowX)) {
+          clipped = true;
+          break;
+        }
       }
-      if (!clipped && (!widest || box.right > widest.right)) widest = { tag: el.tagName.toLowerCase(), text: (el.textContent ?? '').trim().slice(0, 40), right: Math.round(box.right) };
+      if (!clipped && (!widest || box.right > widest.right))
+        widest = {
+          tag: el.tagName.toLowerCase(),
+          text: (el.textContent ?? '').trim().slice(0, 40),
+          right: Math.round(box.right),
+        };
     }
     return { excess: document.documentElement.scrollWidth - width, widest };
   });
@@ -47,11 +70,23 @@ function sidewaysOverflow(page: Page) {
 function headerRows(page: Page) {
   return page.evaluate(() => {
     const header = document.querySelector('body > header')!;
-    const items = [header.querySelector('a[href="/"]')!, ...header.querySelectorAll('nav li'), ...header.querySelectorAll('nav > span, nav > button, nav > form')];
-    const boxes = items.map((el) => ({ text: (el.textContent ?? '').trim().slice(0, 30), top: el.getBoundingClientRect().top, bottom: el.getBoundingClientRect().bottom }));
+    const items = [
+      header.querySelector('a[href="/"]')!,
+      ...header.querySelectorAll('nav li'),
+      ...header.querySelectorAll('nav > span, nav > button, nav > form'),
+    ];
+    const boxes = items.map((el) => ({
+      text: (el.textContent ?? '').trim().slice(0, 30),
+      top: el.getBoundingClientRect().top,
+      bottom: el.getBoundingClientRect().bottom,
+    }));
     // Items on one row overlap vertically: every item's box crosses the middle line of the first one.
     const middle = (boxes[0].top + boxes[0].bottom) / 2;
-    return { count: boxes.length, offRow: boxes.filter((b) => b.top > middle || b.bottom < middle).map((b) => b.text), headerHeight: header.getBoundingClientRect().height };
+    return {
+      count: boxes.length,
+      offRow: boxes.filter((b) => b.top > middle || b.bottom < middle).map((b) => b.text),
+      headerHeight: header.getBoundingClientRect().height,
+    };
   });
 }
 
@@ -76,7 +111,11 @@ describe('layout at 1280 px and 390 px', () => {
   const pageErrors: string[] = [];
 
   async function pageFor(role: TestRole | 'public', width: number): Promise<Page> {
-    const context = await browser.newContext({ viewport: { width, height: 900 }, isMobile: width < 500, hasTouch: width < 500 });
+    const context = await browser.newContext({
+      viewport: { width, height: 900 },
+      isMobile: width < 500,
+      hasTouch: width < 500,
+    });
     contexts.push(context);
     if (role !== 'public') {
       const [name, value] = (await signIn(role)).split('=');
@@ -105,36 +144,51 @@ describe('layout at 1280 px and 390 px', () => {
   });
   afterEach(() => expect(pageErrors).toEqual([]));
 
-  it.each(['manager', 'counter', 'tech'] as const)('at 1280 px the %s’s header is one row', async (role) => {
-    const page = await pageFor(role, 1280);
-    await open(page, '/dashboard');
-    const rows = await headerRows(page);
-    expect(rows.count).toBeGreaterThan(4);
-    expect(rows.offRow).toEqual([]);
-    // One row of 14 px links with padding: well under two rows' height.
-    expect(rows.headerHeight).toBeLessThan(70);
-  }, 60_000);
+  it.each(['manager', 'counter', 'tech'] as const)(
+    'at 1280 px the %s’s header is one row',
+    async (role) => {
+      const page = await pageFor(role, 1280);
+      await open(page, '/dashboard');
+      const rows = await headerRows(page);
+      expect(rows.count).toBeGreaterThan(4);
+      expect(rows.offRow).toEqual([]);
+      // One row of 14 px links with padding: well under two rows' height.
+      expect(rows.headerHeight).toBeLessThan(70);
+    },
+    60_000,
+  );
 
-  it.each([1280, 390])('at %i px every lift value in the cam table stays on one line', async (width) => {
-    const page = await pageFor('counter', width);
-    await open(page, '/catalogue/cams');
-    const cells = await liftLines(page);
-    expect(cells.length).toBeGreaterThanOrEqual(10);
-    expect(cells.filter((c) => c.lines !== 1)).toEqual([]);
-    expect(cells[0].text).toMatch(/^0\.\d{3}" \/ 0\.\d{3}"$|^0\.\d{3} \/ 0\.\d{3}/);
-  }, 60_000);
+  it.each([1280, 390])(
+    'at %i px every lift value in the cam table stays on one line',
+    async (width) => {
+      const page = await pageFor('counter', width);
+      await open(page, '/catalogue/cams');
+      const cells = await liftLines(page);
+      expect(cells.length).toBeGreaterThanOrEqual(10);
+      expect(cells.filter((c) => c.lines !== 1)).toEqual([]);
+      expect(cells[0].text).toMatch(/^0\.\d{3}" \/ 0\.\d{3}"$|^0\.\d{3} \/ 0\.\d{3}/);
+    },
+    60_000,
+  );
 
-  it.each(Object.keys(PAGES) as (keyof typeof PAGES)[])('at 390 px no %s page scrolls sideways or has a serious accessibility fault (axe)', async (role) => {
-    const page = await pageFor(role, 390);
-    const problems: string[] = [];
-    const a11y: string[] = [];
-    for (const path of PAGES[role]) {
-      await open(page, path);
-      const { excess, widest } = await sidewaysOverflow(page);
-      if (excess > 0) problems.push(`${path}: ${excess} px too wide (widest: <${widest?.tag}> “${widest?.text}” to ${widest?.right} px)`);
-      a11y.push(...(await seriousA11yViolations(page)));
-    }
-    expect(problems).toEqual([]);
-    expect(a11y).toEqual([]);
-  }, 240_000);
+  it.each(Object.keys(PAGES) as (keyof typeof PAGES)[])(
+    'at 390 px no %s page scrolls sideways or has a serious accessibility fault (axe)',
+    async (role) => {
+      const page = await pageFor(role, 390);
+      const problems: string[] = [];
+      const a11y: string[] = [];
+      for (const path of PAGES[role]) {
+        await open(page, path);
+        const { excess, widest } = await sidewaysOverflow(page);
+        if (excess > 0)
+          problems.push(
+            `${path}: ${excess} px too wide (widest: <${widest?.tag}> “${widest?.text}” to ${widest?.right} px)`,
+          );
+        a11y.push(...(await seriousA11yViolations(page)));
+      }
+      expect(problems).toEqual([]);
+      expect(a11y).toEqual([]);
+    },
+    240_000,
+  );
 });

@@ -24,8 +24,17 @@ describe('following a lead up in the browser', () => {
     connectTestDatabase();
     await clearRateLimits('lead-'); // other files post leads from this address too
     const sent = await request(appUrl).post('/api/leads').send({
-      engine: '5.3', use: 'towing', idle: 'smooth', emissions: 'yes', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000',
-      name: 'Fixture Browser Lead', email, consent: true,
+      engine: '5.3',
+      use: 'towing',
+      idle: 'smooth',
+      emissions: 'yes',
+      transmission: 'automatic',
+      driveline: 'stock',
+      exhaust: 'stock',
+      budget: '1500-3000',
+      name: 'Fixture Browser Lead',
+      email,
+      consent: true,
     });
     if (sent.status !== 201) throw new Error(`lead fixture answered ${sent.status}: ${JSON.stringify(sent.body)}`);
     leadId = sent.body.id;

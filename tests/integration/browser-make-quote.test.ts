@@ -28,7 +28,9 @@ describe('Make a quote from the shortlist', () => {
     const firstCam = page.locator('table tbody tr').first().getByRole('button');
     await firstCam.waitFor();
     const camText = (await firstCam.textContent()) ?? '';
-    const jobPrice = ((await page.locator('table tbody tr').first().locator('[data-job-price]').textContent()) ?? '').trim();
+    const jobPrice = (
+      (await page.locator('table tbody tr').first().locator('[data-job-price]').textContent()) ?? ''
+    ).trim();
     expect(jobPrice).toMatch(/^\$\d{1,3}(,\d{3})*\.\d{2}$/);
     await expect(page.getByRole('columnheader', { name: 'Job before tax' }).isVisible()).resolves.toBe(true);
     await firstCam.click();
@@ -45,7 +47,9 @@ describe('Make a quote from the shortlist', () => {
     // Same number on the quote: its subtotal (before tax), with the truck cam swap among its lines.
     const subtotal = page.locator('dt', { hasText: /^Subtotal$/ }).locator('xpath=following-sibling::dd[1]');
     await expect(subtotal.textContent()).resolves.toBe(jobPrice);
-    await expect(page.getByText('Cam swap, truck (front of engine, lifters inspected)').first().isVisible()).resolves.toBe(true);
+    await expect(
+      page.getByText('Cam swap, truck (front of engine, lifters inspected)').first().isVisible(),
+    ).resolves.toBe(true);
     await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'quote-draft-desktop.png'), fullPage: true });
     await context.close();

@@ -44,9 +44,17 @@ describe('a quote from payment to refund in the browser', () => {
     await customer.emulateMedia({ media: 'screen' });
     await expectNoSeriousA11yViolations(customer);
 
-    await Promise.all([customer.waitForURL(/\/pay\/cs_/), customer.getByRole('button', { name: 'Accept and pay the deposit' }).click()]);
-    await Promise.all([customer.waitForURL((url) => url.href.startsWith(`${link}?paid=1`)), customer.getByRole('button', { name: /Pay/ }).first().click()]);
-    const receipt = (await waitForMailsTo(quote.customerEmail, 2)).find((m) => m.subject.startsWith('Deposit received'));
+    await Promise.all([
+      customer.waitForURL(/\/pay\/cs_/),
+      customer.getByRole('button', { name: 'Accept and pay the deposit' }).click(),
+    ]);
+    await Promise.all([
+      customer.waitForURL((url) => url.href.startsWith(`${link}?paid=1`)),
+      customer.getByRole('button', { name: /Pay/ }).first().click(),
+    ]);
+    const receipt = (await waitForMailsTo(quote.customerEmail, 2)).find((m) =>
+      m.subject.startsWith('Deposit received'),
+    );
     expect(receipt?.text).toContain(quote.number);
 
     const page = await staff.newPage();
@@ -63,7 +71,9 @@ describe('a quote from payment to refund in the browser', () => {
     await expectNoSeriousA11yViolations(page);
 
     await customer.goto(link);
-    await expect(customer.getByRole('heading', { name: /Status: Deposit refunded — job cancelled/ }).isVisible()).resolves.toBe(true);
+    await expect(
+      customer.getByRole('heading', { name: /Status: Deposit refunded — job cancelled/ }).isVisible(),
+    ).resolves.toBe(true);
     await expectNoSeriousA11yViolations(customer);
     await page.close();
     await customer.close();

@@ -27,11 +27,14 @@ describe('the Numbers page', () => {
     const page = await context.newPage();
     await page.goto(`${appUrl}/reports`);
     await page.getByRole('rowheader', { name: 'Net deposits' }).waitFor();
-    const row = (label: string) => page.getByRole('row').filter({ has: page.getByRole('rowheader', { name: label, exact: true }) });
+    const row = (label: string) =>
+      page.getByRole('row').filter({ has: page.getByRole('rowheader', { name: label, exact: true }) });
     await expect(row('All quotes').textContent()).resolves.toMatch(/\d+ quotes?.*\$[\d,]+\.\d{2}/);
     await expect(row('Sent → deposit paid').textContent()).resolves.toMatch(/[\d.]+ %/);
     await expect(page.locator('canvas').count()).resolves.toBe(1);
-    await expect(page.getByRole('img', { name: /Bar chart of quotes by state\. Draft: \d+, Sent: \d+/ }).count()).resolves.toBe(1);
+    await expect(
+      page.getByRole('img', { name: /Bar chart of quotes by state\. Draft: \d+, Sent: \d+/ }).count(),
+    ).resolves.toBe(1);
     await expect(page.getByRole('link', { name: 'Numbers' }).count()).resolves.toBeGreaterThan(0);
     await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'reports-desktop.png'), fullPage: true });
@@ -50,7 +53,9 @@ describe('the Numbers page', () => {
     const page = await context.newPage();
     await page.goto(`${appUrl}/reports?from=2026-12-05&to=2026-12-01`);
     await page.getByText('That date range cannot be used.').waitFor();
-    await expect(page.getByRole('alert').filter({ hasText: 'That date range' }).textContent()).resolves.toContain('from (2026-12-05) must be on or before to');
+    await expect(page.getByRole('alert').filter({ hasText: 'That date range' }).textContent()).resolves.toContain(
+      'from (2026-12-05) must be on or before to',
+    );
     await expectNoSeriousA11yViolations(page);
     await page.screenshot({ path: path.join(SHOTS, 'reports-bad-range.png'), fullPage: true });
     await page.close();

@@ -21,7 +21,14 @@ describe('the shortlist: stock on hand and the certified-only filter', () => {
     const headers = await page.locator('table thead th').allTextContents();
     const column = headers.indexOf('On hand');
     expect(column).toBeGreaterThan(0);
-    return rows().evaluateAll((trs, col) => trs.map((tr) => ({ cam: tr.querySelector('td:nth-child(2) button')?.textContent ?? '', onHand: tr.children[col]?.textContent ?? '' })), column);
+    return rows().evaluateAll(
+      (trs, col) =>
+        trs.map((tr) => ({
+          cam: tr.querySelector('td:nth-child(2) button')?.textContent ?? '',
+          onHand: tr.children[col]?.textContent ?? '',
+        })),
+      column,
+    );
   }
 
   beforeAll(async () => {
@@ -63,14 +70,24 @@ describe('the shortlist: stock on hand and the certified-only filter', () => {
 
   it('ticking “Only emissions-certified cams” leaves out every uncertified cam, and unticking brings them back', async () => {
     const all = (await table()).length;
-    const certified = await Cam.findAll({ where: { isFactoryBaseline: false, active: true, emissionsCertified: true } });
+    const certified = await Cam.findAll({
+      where: { isFactoryBaseline: false, active: true, emissionsCertified: true },
+    });
     await page.getByLabel('Only emissions-certified cams').check();
-    await page.getByRole('status').filter({ hasText: `${certified.length} of ${all} cams shown; ${all - certified.length} not certified left out.` }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({
+        hasText: `${certified.length} of ${all} cams shown; ${all - certified.length} not certified left out.`,
+      })
+      .waitFor();
     const shown = await table();
     expect(shown.map((r) => r.cam).sort()).toEqual(certified.map((c) => `${c.sku} ${c.name}`).sort());
     await expectNoSeriousA11yViolations(page);
     await page.getByLabel('Only emissions-certified cams').uncheck();
-    await page.getByRole('status').filter({ hasText: `All ${all} cams shown.` }).waitFor();
+    await page
+      .getByRole('status')
+      .filter({ hasText: `All ${all} cams shown.` })
+      .waitFor();
     expect((await table()).length).toBe(all);
   }, 60_000);
 });

@@ -36,13 +36,25 @@ describe('stale leads are flagged', () => {
   let settingsBefore = 2;
   const ids = { old: 0, young: 0 };
   const pageErrors: string[] = [];
-  const card = (page: Page, name: string) => page.getByRole('article').filter({ has: page.getByRole('heading', { name: new RegExp(name) }) });
+  const card = (page: Page, name: string) =>
+    page.getByRole('article').filter({ has: page.getByRole('heading', { name: new RegExp(name) }) });
 
   async function postLead(name: string): Promise<number> {
-    const sent = await request(appUrl).post('/api/leads').send({
-      engine: '5.3', use: 'daily', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: 'unsure',
-      name, email: `stale-${tag}-${name.split(' ')[0].toLowerCase()}@example.com`, consent: true,
-    });
+    const sent = await request(appUrl)
+      .post('/api/leads')
+      .send({
+        engine: '5.3',
+        use: 'daily',
+        idle: 'smooth',
+        emissions: 'no',
+        transmission: 'automatic',
+        driveline: 'stock',
+        exhaust: 'stock',
+        budget: 'unsure',
+        name,
+        email: `stale-${tag}-${name.split(' ')[0].toLowerCase()}@example.com`,
+        consent: true,
+      });
     if (sent.status !== 201) throw new Error(`lead fixture answered ${sent.status}: ${JSON.stringify(sent.body)}`);
     return sent.body.id;
   }
@@ -59,8 +71,12 @@ describe('stale leads are flagged', () => {
     ids.old = await postLead(`Oldfield ${tag}`);
     ids.young = await postLead(`Youngman ${tag}`);
     // Arrived 5 days and 30 hours ago (relative to now, whatever day the suite runs).
-    await sequelize.query('UPDATE leads SET created_at = ? WHERE id = ?', { replacements: [new Date(Date.now() - 5 * DAY_MS - 3_600_000), ids.old] });
-    await sequelize.query('UPDATE leads SET created_at = ? WHERE id = ?', { replacements: [new Date(Date.now() - 30 * 3_600_000), ids.young] });
+    await sequelize.query('UPDATE leads SET created_at = ? WHERE id = ?', {
+      replacements: [new Date(Date.now() - 5 * DAY_MS - 3_600_000), ids.old],
+    });
+    await sequelize.query('UPDATE leads SET created_at = ? WHERE id = ?', {
+      replacements: [new Date(Date.now() - 30 * 3_600_000), ids.young],
+    });
     browser = await launchBrowser();
     for (const role of ['counter', 'manager'] as const) {
       const [name, value] = (await signIn(role)).split('=');
@@ -90,7 +106,10 @@ describe('stale leads are flagged', () => {
     await expect(notice.textContent()).resolves.toContain(`${expected} new lead`);
     await counter.getByRole('link', { name: 'Follow them up on Leads' }).click();
     await counter.waitForURL(/\/leads\?status=new$/);
-    await counter.getByRole('status').getByText(new RegExp(`^${expected} new leads? ha(s|ve) waited 2 days or more without contact$`)).waitFor();
+    await counter
+      .getByRole('status')
+      .getByText(new RegExp(`^${expected} new leads? ha(s|ve) waited 2 days or more without contact$`))
+      .waitFor();
     await expect(card(counter, `Oldfield ${tag}`).textContent()).resolves.toContain('Waiting 5 days without contact');
     await expect(card(counter, `Youngman ${tag}`).textContent()).resolves.not.toContain('Waiting');
     await expectNoSeriousA11yViolations(counter);
@@ -123,7 +142,10 @@ describe('stale leads are flagged', () => {
     await expect(card(counter, `Youngman ${tag}`).textContent()).resolves.toContain('Waiting 1 day without contact');
     await expect(card(counter, `Oldfield ${tag}`).textContent()).resolves.not.toContain('Waiting');
     const expected = await staleInDatabase(1);
-    await counter.getByRole('status').getByText(new RegExp(`^${expected} new leads? ha(s|ve) waited 1 day or more without contact$`)).waitFor();
+    await counter
+      .getByRole('status')
+      .getByText(new RegExp(`^${expected} new leads? ha(s|ve) waited 1 day or more without contact$`))
+      .waitFor();
     // Out of range is refused with the field named, and nothing changes.
     await box.click();
     await manager.keyboard.press('ControlOrMeta+a');

@@ -26,17 +26,27 @@ describe('attachment limits', () => {
     const result = await new Promise<{ status: number; bytes: number }>((resolve, reject) => {
       let bytes = 0;
       let answered = false;
-      const req = http.request(`${appUrl}${CAM}`, {
-        method: 'POST',
-        headers: { Cookie: manager, 'Content-Type': `multipart/form-data; boundary=${boundary}`, 'Transfer-Encoding': 'chunked' },
-      }, (res) => {
-        answered = true;
-        res.resume();
-        resolve({ status: res.statusCode ?? 0, bytes });
-        req.destroy();
-      });
+      const req = http.request(
+        `${appUrl}${CAM}`,
+        {
+          method: 'POST',
+          headers: {
+            Cookie: manager,
+            'Content-Type': `multipart/form-data; boundary=${boundary}`,
+            'Transfer-Encoding': 'chunked',
+          },
+        },
+        (res) => {
+          answered = true;
+          res.resume();
+          resolve({ status: res.statusCode ?? 0, bytes });
+          req.destroy();
+        },
+      );
       req.on('error', (error) => (answered ? undefined : reject(error)));
-      req.write(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="big.pdf"\r\nContent-Type: application/pdf\r\n\r\n%PDF-1.4\n`);
+      req.write(
+        `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="big.pdf"\r\nContent-Type: application/pdf\r\n\r\n%PDF-1.4\n`,
+      );
       const chunk = Buffer.alloc(64 * 1024, 0x20);
       const pump = () => {
         while (!answered && bytes < 40 * 1024 * 1024) {
@@ -54,18 +64,30 @@ describe('attachment limits', () => {
   it('keeps at most 10 spec sheets on one record and says so with 409 naming the file field', async () => {
     const existing = (await app().get(CAM).set('Cookie', manager)).body.items.length as number;
     for (let i = existing; i < 10; i += 1) {
-      const upload = await app().post(CAM).set('Cookie', manager).attach('file', pdf, { filename: `sheet-${i}.pdf`, contentType: 'application/pdf' });
+      const upload = await app()
+        .post(CAM)
+        .set('Cookie', manager)
+        .attach('file', pdf, { filename: `sheet-${i}.pdf`, contentType: 'application/pdf' });
       expect(upload.status).toBe(201);
       made.push(`${CAM}/${upload.body.id}`);
     }
-    const refused = await app().post(CAM).set('Cookie', manager).attach('file', pdf, { filename: 'one-too-many.pdf', contentType: 'application/pdf' });
+    const refused = await app()
+      .post(CAM)
+      .set('Cookie', manager)
+      .attach('file', pdf, { filename: 'one-too-many.pdf', contentType: 'application/pdf' });
     expect(refused.status).toBe(409);
     expect(refused.body.message).toMatch(/10 spec sheets/);
     expect(refused.body.errors).toEqual([expect.objectContaining({ field: 'file' })]);
     // removing one makes room again
     const removed = made.pop()!;
-    await app().delete(removed).set('Cookie', manager).expect((r) => expect([200, 204]).toContain(r.status));
-    const again = await app().post(CAM).set('Cookie', manager).attach('file', pdf, { filename: 'room-again.pdf', contentType: 'application/pdf' });
+    await app()
+      .delete(removed)
+      .set('Cookie', manager)
+      .expect((r) => expect([200, 204]).toContain(r.status));
+    const again = await app()
+      .post(CAM)
+      .set('Cookie', manager)
+      .attach('file', pdf, { filename: 'room-again.pdf', contentType: 'application/pdf' });
     expect(again.status).toBe(201);
     made.push(`${CAM}/${again.body.id}`);
   });

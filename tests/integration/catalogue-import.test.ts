@@ -14,11 +14,38 @@ const app = () => request(readRuntime().appUrl);
 let manager: string;
 let counter: string;
 
-const HEADER = 'sku,name,supplier,intake_duration_050,exhaust_duration_050,intake_advertised,exhaust_advertised,intake_lift_in,exhaust_lift_in,lsa,intake_centerline,price,cost,stock_on_hand,active,notes';
-const row = (sku: string, overrides: Partial<Record<'name' | 'supplier' | 'in050' | 'lift' | 'lsa' | 'price' | 'notes', string>> = {}) =>
-  [sku, overrides.name ?? `Import Grind ${sku}`, overrides.supplier ?? NEW_SUPPLIER, overrides.in050 ?? '212', '218', '264', '270', overrides.lift ?? '0.565"', '0.565', overrides.lsa ?? '113', '109', overrides.price ?? '$419.00', '260', '2', 'yes', overrides.notes ?? ''].join(',');
+const HEADER =
+  'sku,name,supplier,intake_duration_050,exhaust_duration_050,intake_advertised,exhaust_advertised,intake_lift_in,exhaust_lift_in,lsa,intake_centerline,price,cost,stock_on_hand,active,notes';
+const row = (
+  sku: string,
+  overrides: Partial<Record<'name' | 'supplier' | 'in050' | 'lift' | 'lsa' | 'price' | 'notes', string>> = {},
+) =>
+  [
+    sku,
+    overrides.name ?? `Import Grind ${sku}`,
+    overrides.supplier ?? NEW_SUPPLIER,
+    overrides.in050 ?? '212',
+    '218',
+    '264',
+    '270',
+    overrides.lift ?? '0.565"',
+    '0.565',
+    overrides.lsa ?? '113',
+    '109',
+    overrides.price ?? '$419.00',
+    '260',
+    '2',
+    'yes',
+    overrides.notes ?? '',
+  ].join(',');
 
-function upload(cookie: string, csv: string | Buffer, mode: 'preview' | 'commit', name = 'cams.csv', type = 'text/csv') {
+function upload(
+  cookie: string,
+  csv: string | Buffer,
+  mode: 'preview' | 'commit',
+  name = 'cams.csv',
+  type = 'text/csv',
+) {
   return app()
     .post('/api/cams/import')
     .set('Cookie', cookie)
@@ -38,21 +65,37 @@ afterAll(async () => {
 });
 
 describe('cam import', () => {
-  const good = [HEADER, row(`${PREFIX}-1`), row(`${PREFIX}-2`, { name: 'Second Import Grind', price: '"1,049.5"' })].join('\r\n');
+  const good = [
+    HEADER,
+    row(`${PREFIX}-1`),
+    row(`${PREFIX}-2`, { name: 'Second Import Grind', price: '"1,049.5"' }),
+  ].join('\r\n');
 
   it('previews a good file row by row and writes nothing', async () => {
     const response = await upload(manager, good, 'preview');
     expect(response.status).toBe(200);
-    expect(response.body).toMatchObject({ mode: 'preview', committed: false, rowCount: 2, summary: { create: 2, update: 0, unchanged: 0, error: 0 }, errors: [] });
+    expect(response.body).toMatchObject({
+      mode: 'preview',
+      committed: false,
+      rowCount: 2,
+      summary: { create: 2, update: 0, unchanged: 0, error: 0 },
+      errors: [],
+    });
     expect(response.body.suppliersToAdd).toEqual([NEW_SUPPLIER]);
-    expect(response.body.rows.map((r: { row: number; action: string }) => [r.row, r.action])).toEqual([[2, 'create'], [3, 'create']]);
+    expect(response.body.rows.map((r: { row: number; action: string }) => [r.row, r.action])).toEqual([
+      [2, 'create'],
+      [3, 'create'],
+    ]);
     expect(await Cam.count({ where: { sku: { [Op.like]: `${PREFIX}%` } } })).toBe(0);
   });
 
   it('commits a good file: cams created with prices in cents, the new supplier added, audit rows written', async () => {
     const response = await upload(manager, good, 'commit');
     expect(response.status).toBe(200);
-    expect(response.body).toMatchObject({ committed: true, result: { created: 2, updated: 0, suppliersAdded: [NEW_SUPPLIER] } });
+    expect(response.body).toMatchObject({
+      committed: true,
+      result: { created: 2, updated: 0, suppliersAdded: [NEW_SUPPLIER] },
+    });
     const cams = await Cam.findAll({ where: { sku: { [Op.like]: `${PREFIX}%` } }, order: [['sku', 'ASC']] });
     expect(cams.map((c) => [c.sku, c.priceCents, c.costCents, c.intakeLiftIn])).toEqual([
       [`${PREFIX}-1`, 41900, 26000, 0.565],
@@ -60,13 +103,18 @@ describe('cam import', () => {
     ]);
     const supplier = await Supplier.findOne({ where: { name: NEW_SUPPLIER } });
     expect(cams[0].supplierId).toBe(supplier?.id);
-    expect(await AuditEntry.count({ where: { action: 'cam.imported', entityId: cams.map((c) => String(c.id)) } })).toBe(2);
+    expect(await AuditEntry.count({ where: { action: 'cam.imported', entityId: cams.map((c) => String(c.id)) } })).toBe(
+      2,
+    );
   });
 
   it('previews an update of an existing SKU with the changed fields, and commits it', async () => {
     const csv = [HEADER, row(`${PREFIX}-1`, { price: '429.00' })].join('\n');
     const preview = await upload(manager, csv, 'preview');
-    expect(preview.body.rows[0]).toMatchObject({ action: 'update', changes: [{ field: 'priceCents', column: 'price', from: 41900, to: 42900 }] });
+    expect(preview.body.rows[0]).toMatchObject({
+      action: 'update',
+      changes: [{ field: 'priceCents', column: 'price', from: 41900, to: 42900 }],
+    });
     const commit = await upload(manager, csv, 'commit');
     expect(commit.body.result).toMatchObject({ created: 0, updated: 1 });
     expect((await Cam.findOne({ where: { sku: `${PREFIX}-1` } }))?.version).toBe(2);
@@ -83,7 +131,9 @@ describe('cam import', () => {
     const preview = await upload(manager, csv, 'preview');
     expect(preview.status).toBe(200);
     const errors = preview.body.errors.map((e: { row: number; column: string }) => `${e.row}:${e.column}`);
-    expect(errors).toEqual(expect.arrayContaining(['3:intake_duration_050', '3:intake_lift_in', '4:sku', '4:price', '5:sku', '5:lsa']));
+    expect(errors).toEqual(
+      expect.arrayContaining(['3:intake_duration_050', '3:intake_lift_in', '4:sku', '4:price', '5:sku', '5:lsa']),
+    );
     expect(preview.body.summary).toMatchObject({ create: 1, error: 3 });
 
     const commit = await upload(manager, csv, 'commit');
@@ -113,7 +163,9 @@ describe('cam import', () => {
     expect(asCsv.status).toBe(415);
     expect(asCsv.body.message).toMatch(/workbook/);
     expect((await upload(manager, Buffer.from('%PDF-1.7\n...'), 'preview', 'cams.csv')).status).toBe(415);
-    expect((await upload(manager, Buffer.from([0x73, 0x6b, 0x75, 0x00, 0x01]), 'preview', 'cams.csv')).status).toBe(415);
+    expect((await upload(manager, Buffer.from([0x73, 0x6b, 0x75, 0x00, 0x01]), 'preview', 'cams.csv')).status).toBe(
+      415,
+    );
     expect((await upload(manager, good, 'preview', 'cams.json', 'application/json')).status).toBe(415);
   });
 
@@ -127,7 +179,9 @@ describe('cam import', () => {
     expect(template.status).toBe(200);
     expect(template.headers['content-type']).toMatch(/text\/csv/);
     const header = template.text.split('\r\n')[0].split(',');
-    expect(header).toEqual(expect.arrayContaining(['sku', 'name', 'intake_duration_050', 'lsa', 'intake_centerline', 'price']));
+    expect(header).toEqual(
+      expect.arrayContaining(['sku', 'name', 'intake_duration_050', 'lsa', 'intake_centerline', 'price']),
+    );
     const preview = await upload(manager, template.text, 'preview');
     expect(preview.body.errors).toEqual([]);
   });
@@ -136,7 +190,12 @@ describe('cam import', () => {
 describe('cam export', () => {
   it('neutralises cells a spreadsheet would run as formulas, and re-imports them unchanged', async () => {
     const names = ['=HYPERLINK("http://x.example","click")', '+1+1', '-2+3', '@SUM(A1)'];
-    const csv = [HEADER, ...names.map((name, i) => row(`${PREFIX}-F${i}`, { name: `"${name.replace(/"/g, '""')}"`, notes: 'formula test' }))].join('\n');
+    const csv = [
+      HEADER,
+      ...names.map((name, i) =>
+        row(`${PREFIX}-F${i}`, { name: `"${name.replace(/"/g, '""')}"`, notes: 'formula test' }),
+      ),
+    ].join('\n');
     const imported = await upload(manager, csv, 'commit');
     expect(imported.status).toBe(200);
     expect(imported.body.result.created).toBe(names.length);
@@ -145,7 +204,10 @@ describe('cam export', () => {
     expect(exported.status).toBe(200);
     expect(exported.headers['content-type']).toMatch(/text\/csv/);
     expect(exported.headers['content-disposition']).toMatch(/attachment; filename="lobewise-cams-/);
-    const parsed = Papa.parse<Record<string, string>>(exported.text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true });
+    const parsed = Papa.parse<Record<string, string>>(exported.text.replace(/^\uFEFF/, ''), {
+      header: true,
+      skipEmptyLines: true,
+    });
     const ours = parsed.data.filter((r) => r.sku.startsWith(`${PREFIX}-F`)).sort((a, b) => a.sku.localeCompare(b.sku));
     expect(ours.map((r) => r.name)).toEqual(names.map((n) => `'${n}`));
     for (const r of parsed.data) expect(r.name).not.toMatch(/^[=+\-@\t\r]/);

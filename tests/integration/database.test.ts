@@ -9,7 +9,12 @@ describe('Sequelize models against the real MariaDB', () => {
   afterAll(() => disconnectTestDatabase());
 
   it('writes and reads back a row, bumping its version on update', async () => {
-    const created = await Customer.create({ name: 'Round Trip Tester', email: 'round.trip@example.com', phone: null, notes: 'x' });
+    const created = await Customer.create({
+      name: 'Round Trip Tester',
+      email: 'round.trip@example.com',
+      phone: null,
+      notes: 'x',
+    });
     const loaded = await Customer.findByPk(created.id);
     expect(loaded?.name).toBe('Round Trip Tester');
     expect(loaded?.version).toBe(1);
@@ -24,16 +29,42 @@ describe('Sequelize models against the real MariaDB', () => {
 
   it('maps every cam-card attribute to its own column (checked against the raw row)', async () => {
     const values = {
-      sku: 'RT-MAP-1', name: 'Column mapping check', intakeDuration050: 211, exhaustDuration050: 217, intakeAdvertised: 263,
-      exhaustAdvertised: 269, intakeLiftIn: 0.561, exhaustLiftIn: 0.557, lsa: 112.5, intakeCenterline: 108.5, rockerRatio: 1.72,
-      springMaxLiftIn: 0.6, priceCents: 41900, archivedAt: null, notes: null, supplierId: null, baselineForLiters: null,
+      sku: 'RT-MAP-1',
+      name: 'Column mapping check',
+      intakeDuration050: 211,
+      exhaustDuration050: 217,
+      intakeAdvertised: 263,
+      exhaustAdvertised: 269,
+      intakeLiftIn: 0.561,
+      exhaustLiftIn: 0.557,
+      lsa: 112.5,
+      intakeCenterline: 108.5,
+      rockerRatio: 1.72,
+      springMaxLiftIn: 0.6,
+      priceCents: 41900,
+      archivedAt: null,
+      notes: null,
+      supplierId: null,
+      baselineForLiters: null,
     };
     const cam = await Cam.create(values);
     try {
-      const [row] = await db().query<Record<string, number>>('SELECT * FROM cams WHERE id = ?', { replacements: [cam.id], type: QueryTypes.SELECT });
+      const [row] = await db().query<Record<string, number>>('SELECT * FROM cams WHERE id = ?', {
+        replacements: [cam.id],
+        type: QueryTypes.SELECT,
+      });
       expect(row).toMatchObject({
-        intake_duration_050: 211, exhaust_duration_050: 217, intake_advertised: 263, exhaust_advertised: 269, intake_lift_in: 0.561,
-        exhaust_lift_in: 0.557, lsa: 112.5, intake_centerline: 108.5, rocker_ratio: 1.72, spring_max_lift_in: 0.6, price_cents: 41900,
+        intake_duration_050: 211,
+        exhaust_duration_050: 217,
+        intake_advertised: 263,
+        exhaust_advertised: 269,
+        intake_lift_in: 0.561,
+        exhaust_lift_in: 0.557,
+        lsa: 112.5,
+        intake_centerline: 108.5,
+        rocker_ratio: 1.72,
+        spring_max_lift_in: 0.6,
+        price_cents: 41900,
       });
       const loaded = await Cam.findByPk(cam.id);
       expect(loaded?.get({ plain: true })).toMatchObject(values);

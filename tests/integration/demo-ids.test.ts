@@ -27,10 +27,13 @@ describe('the demo seed ids (tests/support/demo.ts)', () => {
   it.each(GROUPS)('DEMO.%s: every id is the %s row with that key', async (group, table, keyExpression) => {
     const names = DEMO_KEYS[group] as Record<string, string>;
     const ids = DEMO[group] as Record<string, number>;
-    const rows = await sequelize.query<{ id: number; k: string }>(`SELECT id, ${keyExpression} AS k FROM ${table} WHERE id IN (:ids)`, {
-      replacements: { ids: Object.values(ids) },
-      type: QueryTypes.SELECT,
-    });
+    const rows = await sequelize.query<{ id: number; k: string }>(
+      `SELECT id, ${keyExpression} AS k FROM ${table} WHERE id IN (:ids)`,
+      {
+        replacements: { ids: Object.values(ids) },
+        type: QueryTypes.SELECT,
+      },
+    );
     const found = Object.fromEntries(rows.map((r) => [r.id, r.k]));
     const claimed = Object.fromEntries(Object.keys(names).map((name) => [name, names[name]]));
     const actual = Object.fromEntries(Object.keys(names).map((name) => [name, found[ids[name]] ?? '(no such row)']));
@@ -38,7 +41,11 @@ describe('the demo seed ids (tests/support/demo.ts)', () => {
   });
 
   it('names every demo cam, part and labour operation the seed made', async () => {
-    for (const [group, table] of [['cams', 'cams'], ['parts', 'parts'], ['labor', 'labor_operations']] as const) {
+    for (const [group, table] of [
+      ['cams', 'cams'],
+      ['parts', 'parts'],
+      ['labor', 'labor_operations'],
+    ] as const) {
       const seeded = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM ${table} WHERE id <= :last`, {
         replacements: { last: Math.max(...Object.values(DEMO[group])) },
         type: QueryTypes.SELECT,

@@ -21,7 +21,10 @@ const hoursAgo = (hours: number) => new Date(Date.now() - hours * 3_600_000).toI
 const grid = (from: number, to: number) => Array.from({ length: (to - from) / 250 + 1 }, (_, i) => from + i * 250);
 // The after pull is 20 % stronger up to 3,000 rpm and level from 4,000 rpm: all of its gain is low down.
 const BEFORE = grid(2000, 6000).map((rpm) => ({ rpm, torqueLbFt: 330 }));
-const AFTER = grid(2000, 6000).map((rpm) => ({ rpm, torqueLbFt: rpm <= 3000 ? 396 : rpm >= 4000 ? 330 : 396 - ((rpm - 3000) / 1000) * 66 }));
+const AFTER = grid(2000, 6000).map((rpm) => ({
+  rpm,
+  torqueLbFt: rpm <= 3000 ? 396 : rpm >= 4000 ? 330 : 396 - ((rpm - 3000) / 1000) * 66,
+}));
 const AIR = { airTempC: 25, baroKpa: 99, humidityPct: 40 };
 
 let sequelize: Sequelize;
@@ -32,7 +35,10 @@ let camId: number;
 const created: number[] = [];
 
 async function rowsRead(): Promise<number> {
-  const [row] = await sequelize.query<{ v: unknown }>("SELECT VARIABLE_VALUE AS v FROM information_schema.GLOBAL_STATUS WHERE VARIABLE_NAME = 'ROWS_READ'", { type: QueryTypes.SELECT });
+  const [row] = await sequelize.query<{ v: unknown }>(
+    "SELECT VARIABLE_VALUE AS v FROM information_schema.GLOBAL_STATUS WHERE VARIABLE_NAME = 'ROWS_READ'",
+    { type: QueryTypes.SELECT },
+  );
   return Number(row.v);
 }
 
@@ -61,20 +67,34 @@ async function addUnrelatedHistory(builds: number) {
   const big = { ...profile, engine: { ...profile.engine, boreIn: 4.5, strokeIn: 4.2 } };
   BuildProfileSchema.parse(big);
   const e = (v: unknown) => sequelize.escape(v as string);
-  const people = Array.from({ length: builds }, (_, i) => `(${e(`${MARK} ${i}`)}, ${e(`history${i}@historyrow.example`)})`);
+  const people = Array.from(
+    { length: builds },
+    (_, i) => `(${e(`${MARK} ${i}`)}, ${e(`history${i}@historyrow.example`)})`,
+  );
   await sequelize.query(`INSERT INTO customers (name, email) VALUES ${people.join(',')}`);
   const [customers] = await sequelize.query(`SELECT id FROM customers WHERE name LIKE '${MARK} %' ORDER BY id`);
-  await sequelize.query(`INSERT INTO builds (customer_id, vehicle_label, profile) VALUES ${(customers as { id: number }[]).map((c) => `(${c.id}, 'Historyrow truck', ${e(JSON.stringify(big))})`).join(',')}`);
-  const [made] = await sequelize.query(`SELECT b.id FROM builds b JOIN customers c ON c.id = b.customer_id WHERE c.name LIKE '${MARK} %' ORDER BY b.id`);
+  await sequelize.query(
+    `INSERT INTO builds (customer_id, vehicle_label, profile) VALUES ${(customers as { id: number }[]).map((c) => `(${c.id}, 'Historyrow truck', ${e(JSON.stringify(big))})`).join(',')}`,
+  );
+  const [made] = await sequelize.query(
+    `SELECT b.id FROM builds b JOIN customers c ON c.id = b.customer_id WHERE c.name LIKE '${MARK} %' ORDER BY b.id`,
+  );
   const buildIds = (made as { id: number }[]).map((b) => Number(b.id));
   const curve = e(JSON.stringify(BEFORE.map((p) => ({ ...p, hp: (p.torqueLbFt * p.rpm) / 5252 }))));
   const runs = buildIds.flatMap((id) => [
     `(${id}, NULL, 'before', NOW(), 25, 99, 40, 377, 6000, 330, 2000, ${curve})`,
     `(${id}, ${camId}, 'after', NOW(), 25, 99, 40, 400, 6000, 350, 2000, ${curve})`,
   ]);
-  await sequelize.query(`INSERT INTO dyno_runs (build_id, cam_id, phase, run_at, air_temp_c, baro_kpa, humidity_pct, peak_hp, peak_hp_rpm, peak_torque_lb_ft, peak_torque_rpm, curve) VALUES ${runs.join(',')}`);
+  await sequelize.query(
+    `INSERT INTO dyno_runs (build_id, cam_id, phase, run_at, air_temp_c, baro_kpa, humidity_pct, peak_hp, peak_hp_rpm, peak_torque_lb_ft, peak_torque_rpm, curve) VALUES ${runs.join(',')}`,
+  );
   await sequelize.transaction(async (t) => {
-    await Build.findAll({ where: { id: { [Op.in]: buildIds } }, attributes: ['id'], lock: t.LOCK.UPDATE, transaction: t });
+    await Build.findAll({
+      where: { id: { [Op.in]: buildIds } },
+      attributes: ['id'],
+      lock: t.LOCK.UPDATE,
+      transaction: t,
+    });
     await refreshDynoGains(buildIds, t);
   });
   await sequelize.query('ANALYZE TABLE dyno_runs, dyno_gains');
@@ -86,7 +106,10 @@ beforeAll(async () => {
   await removeMarked();
   [tech, counter] = await Promise.all([signIn('tech'), signIn('counter')]);
   profile = BuildProfileSchema.parse((await Build.findByPk(1))!.profile);
-  camId = (await Cam.findOne({ where: { isFactoryBaseline: false, active: true, sku: { [Op.ne]: 'F9-219' } }, order: [['sku', 'ASC']] }))!.id;
+  camId = (await Cam.findOne({
+    where: { isFactoryBaseline: false, active: true, sku: { [Op.ne]: 'F9-219' } },
+    order: [['sku', 'ASC']],
+  }))!.id;
   expect(await DynoRun.count({ where: { buildId: BUILD_ID } })).toBe(0);
 });
 
@@ -120,8 +143,22 @@ describe('the measured history a ranking reads', () => {
     const without = (await rank({ build: profile, camIds: [camId] })).body.rankings[0] as RankedCam;
     expect(without.history).toBeNull();
 
-    for (const [phase, curve, when] of [['before', BEFORE, 3], ['after', AFTER, 2]] as const) {
-      const res = await request(appUrl).post('/api/dyno-runs').set('Cookie', tech).send({ buildId: BUILD_ID, phase, ...AIR, curve, runAt: hoursAgo(when), ...(phase === 'after' ? { camId } : {}) }).expect(201);
+    for (const [phase, curve, when] of [
+      ['before', BEFORE, 3],
+      ['after', AFTER, 2],
+    ] as const) {
+      const res = await request(appUrl)
+        .post('/api/dyno-runs')
+        .set('Cookie', tech)
+        .send({
+          buildId: BUILD_ID,
+          phase,
+          ...AIR,
+          curve,
+          runAt: hoursAgo(when),
+          ...(phase === 'after' ? { camId } : {}),
+        })
+        .expect(201);
       created.push(res.body.id);
     }
     // Filed in the same transaction as the run: the row is there as soon as the answer is.
@@ -133,7 +170,9 @@ describe('the measured history a ranking reads', () => {
     expect(withHistory.history?.matches).toBe(1);
     // The blend (src/lib/advisor/history.ts): gain = (2 · model + 1 · 20 %) / 3 at full similarity, so the
     // low end rises by a third of the gap between the model's gain and the measured 20 %.
-    const base = (await rank({ build: profile, camIds: [camId] })).body.baseline as { curve: { rpm: number; torqueLbFt: number }[] };
+    const base = (await rank({ build: profile, camIds: [camId] })).body.baseline as {
+      curve: { rpm: number; torqueLbFt: number }[];
+    };
     const baseAt = base.curve.find((p) => p.rpm === lowRpm)!.torqueLbFt;
     const modelGain = (at(without, lowRpm) / baseAt - 1) * 100;
     const blended = (at(withHistory, lowRpm) / baseAt - 1) * 100;
@@ -141,19 +180,29 @@ describe('the measured history a ranking reads', () => {
 
     // The job page draws the prediction over this build's own pulls: asked to leave the build out, the
     // ranking has no history and gives the model's own curve again.
-    const leftOut = (await rank({ build: profile, camIds: [camId], excludeBuildId: BUILD_ID })).body.rankings[0] as RankedCam;
+    const leftOut = (await rank({ build: profile, camIds: [camId], excludeBuildId: BUILD_ID })).body
+      .rankings[0] as RankedCam;
     expect(leftOut.history).toBeNull();
     expect(at(leftOut, lowRpm)).toBeCloseTo(at(without, lowRpm), 6);
   });
 
   it('follows the build: a new engine refiles its history, a deleted run takes it away', async () => {
-    const build = (await request(appUrl).get(`/api/builds/${BUILD_ID}`).set('Cookie', counter).expect(200)).body as { version: number; profile: BuildProfile };
+    const build = (await request(appUrl).get(`/api/builds/${BUILD_ID}`).set('Cookie', counter).expect(200)).body as {
+      version: number;
+      profile: BuildProfile;
+    };
     const edit = (engine: BuildProfile['engine'], version: number) =>
-      request(appUrl).patch(`/api/builds/${BUILD_ID}`).set('Cookie', counter).send({ version, profile: { ...build.profile, engine } });
+      request(appUrl)
+        .patch(`/api/builds/${BUILD_ID}`)
+        .set('Cookie', counter)
+        .send({ version, profile: { ...build.profile, engine } });
     const bored = await edit({ ...build.profile.engine, boreIn: build.profile.engine.boreIn + 0.03 }, build.version);
     expect(bored.status).toBe(200);
     const refiled = (await DynoGain.findOne({ where: { buildId: BUILD_ID, camId } }))!;
-    expect(refiled.displacementCi).toBeCloseTo(Math.PI / 4 * (profile.engine.boreIn + 0.03) ** 2 * profile.engine.strokeIn * profile.engine.cylinders, 6);
+    expect(refiled.displacementCi).toBeCloseTo(
+      (Math.PI / 4) * (profile.engine.boreIn + 0.03) ** 2 * profile.engine.strokeIn * profile.engine.cylinders,
+      6,
+    );
     expect((await edit(build.profile.engine, bored.body.version)).status).toBe(200);
 
     await request(appUrl).delete(`/api/dyno-runs/${created.pop()}`).set('Cookie', tech).expect(200);

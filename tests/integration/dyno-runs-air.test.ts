@@ -11,7 +11,11 @@ import { DEMO } from '../support/demo';
 // SAE J1349 and J607 use temperature, pressure and humidity; DIN 70020 temperature and total pressure;
 // "none" nothing. Runs go on demo build 3 and are deleted afterwards with their audit rows.
 const { appUrl } = readRuntime();
-const CURVE = [{ rpm: 3000, torqueLbFt: 300 }, { rpm: 4000, torqueLbFt: 320 }, { rpm: 5000, torqueLbFt: 310 }];
+const CURVE = [
+  { rpm: 3000, torqueLbFt: 300 },
+  { rpm: 4000, torqueLbFt: 320 },
+  { rpm: 5000, torqueLbFt: 310 },
+];
 
 describe('dyno run air readings by correction standard', () => {
   let tech: string;
@@ -27,7 +31,11 @@ describe('dyno run air readings by correction standard', () => {
     }
     await disconnectTestDatabase();
   });
-  const post = (body: object) => request(appUrl).post('/api/dyno-runs').set('Cookie', tech).send({ buildId: DEMO.builds.vranesStripCoupe, phase: 'before', curve: CURVE, ...body });
+  const post = (body: object) =>
+    request(appUrl)
+      .post('/api/dyno-runs')
+      .set('Cookie', tech)
+      .send({ buildId: DEMO.builds.vranesStripCoupe, phase: 'before', curve: CURVE, ...body });
 
   it('records an uncorrected run without any air readings (factor 1, observed = corrected)', async () => {
     const res = await post({ correctionStandard: 'none' }).expect(201);
@@ -57,6 +65,8 @@ describe('dyno run air readings by correction standard', () => {
     // Left out, the standard is SAE J1349 as before, so an old caller sending no air still hears why.
     const bare = await post({}).expect(422);
     expect(bare.body.errors.map((e: { field: string }) => e.field)).toEqual(['airTempC', 'baroKpa', 'humidityPct']);
-    expect(await DynoRun.count({ where: { buildId: DEMO.builds.vranesStripCoupe, id: { [Op.notIn]: created } } })).toBe(0);
+    expect(await DynoRun.count({ where: { buildId: DEMO.builds.vranesStripCoupe, id: { [Op.notIn]: created } } })).toBe(
+      0,
+    );
   });
 });

@@ -21,8 +21,21 @@ type History = ShopRankingEntry['history'];
 // Relative to now so the before run always sorts first, whatever the day the suite runs.
 const hoursAgo = (hours: number) => new Date(Date.now() - hours * 3_600_000).toISOString();
 const points = (rows: [number, number][]) => rows.map(([rpm, torqueLbFt]) => ({ rpm, torqueLbFt }));
-const BEFORE = points([[3000, 360], [4000, 380], [4500, 370], [5000, 345], [5500, 310]]);
-const AFTER = points([[3000, 340], [4000, 385], [4500, 395], [5000, 390], [5500, 372], [6000, 345]]);
+const BEFORE = points([
+  [3000, 360],
+  [4000, 380],
+  [4500, 370],
+  [5000, 345],
+  [5500, 310],
+]);
+const AFTER = points([
+  [3000, 340],
+  [4000, 385],
+  [4500, 395],
+  [5000, 390],
+  [5500, 372],
+  [6000, 345],
+]);
 // Hand-worked, SAE J1349 with the Magnus vapour pressure (see tests/unit/dyno/correction.test.ts):
 // before, 98 kPa, 30 °C, 50 %: Pd = 98 − 0.5 · 4.23665 = 95.88167 kPa; cf = 1.18 · (99/95.88167) · √(303/298) − 0.18 = 1.048555
 // after, 100 kPa, 20 °C, 30 %: es = 0.61094 · exp(17.625·20/263.04) = 2.33344 kPa; Pd = 100 − 0.3 · 2.33344 = 99.29997 kPa;
@@ -58,7 +71,11 @@ describe('dyno runs', () => {
     const profile = BuildProfileSchema.parse((await Build.findByPk(2))!.profile);
     // A similar build: the same combination bored 0.010" over.
     const similar = { ...profile, engine: { ...profile.engine, boreIn: profile.engine.boreIn + 0.01 } };
-    const response = await request(appUrl).post('/api/advisor/rank').set('Cookie', cookie).send({ build: similar, camIds: [f9Id], includeCurves: false }).expect(200);
+    const response = await request(appUrl)
+      .post('/api/advisor/rank')
+      .set('Cookie', cookie)
+      .send({ build: similar, camIds: [f9Id], includeCurves: false })
+      .expect(200);
     return response.body.rankings[0] as { camId: number; history: History; predicted: { gainPctPeakHp: number } };
   };
 
@@ -76,24 +93,64 @@ describe('dyno runs', () => {
   });
 
   it('answers 422 naming each field and why', async () => {
-    const res = await post(tech, { buildId: JOB.buildId, phase: 'sideways', dynoType: 'rollers', baroKpa: 200, humidityPct: 40, curve: points([[3000, 300], [2900, 310], [4000, 320]]) }).expect(422);
+    const res = await post(tech, {
+      buildId: JOB.buildId,
+      phase: 'sideways',
+      dynoType: 'rollers',
+      baroKpa: 200,
+      humidityPct: 40,
+      curve: points([
+        [3000, 300],
+        [2900, 310],
+        [4000, 320],
+      ]),
+    }).expect(422);
     const fields = (res.body.errors as { field: string; message: string }[]).map((e) => e.field).sort();
     expect(fields).toEqual(['airTempC', 'baroKpa', 'curve.1.rpm', 'dynoType', 'phase']);
-    expect(res.body.errors.find((e: { field: string }) => e.field === 'dynoType').message).toBe('dynoType must be one of: chassis, engine');
-    expect(res.body.errors.find((e: { field: string }) => e.field === 'baroKpa').message).toBe('barometric pressure must be at most 110 kPa');
-    const noBuild = await post(tech, { buildId: MISSING_ID, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
+    expect(res.body.errors.find((e: { field: string }) => e.field === 'dynoType').message).toBe(
+      'dynoType must be one of: chassis, engine',
+    );
+    expect(res.body.errors.find((e: { field: string }) => e.field === 'baroKpa').message).toBe(
+      'barometric pressure must be at most 110 kPa',
+    );
+    const noBuild = await post(tech, { buildId: MISSING_ID, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(
+      422,
+    );
     expect(noBuild.body.errors).toEqual([{ field: 'buildId', message: 'no build with id 999999' }]);
-    const otherQuote = await post(tech, { buildId: JOB.buildId, quoteId: DEMO.quotes.whitlockSent, phase: 'before', ...BEFORE_AIR, curve: BEFORE }).expect(422);
+    const otherQuote = await post(tech, {
+      buildId: JOB.buildId,
+      quoteId: DEMO.quotes.whitlockSent,
+      phase: 'before',
+      ...BEFORE_AIR,
+      curve: BEFORE,
+    }).expect(422);
     expect(otherQuote.body.errors[0].field).toBe('quoteId');
     // Definition of horsepower: 450 hp at 4,000 rpm is 450 · 5252 / 4000 = 590.9 lb·ft there, above a 400 lb·ft peak.
-    const impossible = await post(tech, { buildId: JOB.buildId, phase: 'before', ...BEFORE_AIR, peak: { hp: 450, hpRpm: 4000, torqueLbFt: 400, torqueRpm: 3500 } }).expect(422);
+    const impossible = await post(tech, {
+      buildId: JOB.buildId,
+      phase: 'before',
+      ...BEFORE_AIR,
+      peak: { hp: 450, hpRpm: 4000, torqueLbFt: 400, torqueRpm: 3500 },
+    }).expect(422);
     expect(impossible.body.errors[0]).toMatchObject({ field: 'peak.hp' });
-    await request(appUrl).post('/api/dyno-runs').set('Cookie', tech).set('Content-Type', 'application/json').send('{not json').expect(400);
+    await request(appUrl)
+      .post('/api/dyno-runs')
+      .set('Cookie', tech)
+      .set('Content-Type', 'application/json')
+      .send('{not json')
+      .expect(400);
     expect(await DynoRun.count({ where: { buildId: JOB.buildId } })).toBe(0);
   });
 
   it('a technician records the before pull: hp from the horsepower definition, peaks derived, SAE J1349 correction', async () => {
-    const res = await post(tech, { buildId: JOB.buildId, phase: 'before', ...BEFORE_AIR, curve: BEFORE, notes: 'Baseline, stock cam', runAt: hoursAgo(2) }).expect(201);
+    const res = await post(tech, {
+      buildId: JOB.buildId,
+      phase: 'before',
+      ...BEFORE_AIR,
+      curve: BEFORE,
+      notes: 'Baseline, stock cam',
+      runAt: hoursAgo(2),
+    }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
     // Left out, the kind of dyno is a chassis dyno: every run before the flag existed was one.
@@ -111,7 +168,14 @@ describe('dyno runs', () => {
   });
 
   it('the after pull on F9-219 (the quote’s cam, filled in from the job) corrects down on a cooler, denser day', async () => {
-    const res = await post(tech, { buildId: JOB.buildId, phase: 'after', dynoType: 'chassis', ...AFTER_AIR, curve: AFTER, runAt: hoursAgo(1) }).expect(201);
+    const res = await post(tech, {
+      buildId: JOB.buildId,
+      phase: 'after',
+      dynoType: 'chassis',
+      ...AFTER_AIR,
+      curve: AFTER,
+      runAt: hoursAgo(1),
+    }).expect(201);
     const run = res.body as RunBody;
     created.push(run.id);
     expect(run).toMatchObject({ camId: f9Id, quoteId: JOB.quoteId, phase: 'after' });
@@ -132,12 +196,15 @@ describe('dyno runs', () => {
     const h = ranking.history!;
     expect(h.matches).toBeGreaterThanOrEqual(1);
     // Measured gain from corrected peaks: 388.824 / 344.394 − 1 = +12.90 %.
-    expect(h.measuredGainPctPeakHp).toBeCloseTo(12.90, 1);
+    expect(h.measuredGainPctPeakHp).toBeCloseTo(12.9, 1);
     expect(h.modelGainPctPeakHp).not.toBeCloseTo(h.measuredGainPctPeakHp, 1);
     // The pulls were recorded as curves, so the advisor blends their torque gain rpm by rpm where both
     // covered (3,000–5,500 rpm): the predicted peak may lie above that and keep the model's figure. It never
     // leaves the span between the model and the measurement. (The per-rpm blend: dyno-history.test.ts.)
-    const [lo, hi] = [Math.min(h.modelGainPctPeakHp, h.measuredGainPctPeakHp), Math.max(h.modelGainPctPeakHp, h.measuredGainPctPeakHp)];
+    const [lo, hi] = [
+      Math.min(h.modelGainPctPeakHp, h.measuredGainPctPeakHp),
+      Math.max(h.modelGainPctPeakHp, h.measuredGainPctPeakHp),
+    ];
     expect(h.adjustedGainPctPeakHp).toBeGreaterThanOrEqual(lo);
     expect(h.adjustedGainPctPeakHp).toBeLessThanOrEqual(hi);
   });
@@ -145,17 +212,41 @@ describe('dyno runs', () => {
   it('an engine-dyno pull is never compared with the chassis-dyno before pull', async () => {
     // At the flywheel the same cam reads far more than at the wheels: 430 · 6000 / 5252 = 491.2 hp observed.
     // Paired with the chassis before pull it would claim about +40 %; the measured gain must stay +12.90 %.
-    const flywheel = points([[3000, 420], [4000, 450], [5000, 445], [6000, 430]]);
-    const res = await post(tech, { buildId: JOB.buildId, phase: 'after', dynoType: 'engine', ...AFTER_AIR, curve: flywheel, runAt: hoursAgo(0.5) }).expect(201);
+    const flywheel = points([
+      [3000, 420],
+      [4000, 450],
+      [5000, 445],
+      [6000, 430],
+    ]);
+    const res = await post(tech, {
+      buildId: JOB.buildId,
+      phase: 'after',
+      dynoType: 'engine',
+      ...AFTER_AIR,
+      curve: flywheel,
+      runAt: hoursAgo(0.5),
+    }).expect(201);
     created.push(res.body.id);
     expect(res.body).toMatchObject({ dynoType: 'engine', phase: 'after', camId: f9Id });
     expect((await DynoRun.findByPk(res.body.id))!.dynoType).toBe('engine');
     const h = (await rankF9(counter)).history!;
-    expect(h.measuredGainPctPeakHp).toBeCloseTo(12.90, 1);
+    expect(h.measuredGainPctPeakHp).toBeCloseTo(12.9, 1);
     // An engine-dyno before pull completes the engine pair: 410 · 5000 / 5252 = 390.3 hp observed, so the
     // flywheel gain (491.2 / 390.3 − 1 = +25.9 %, both on the after run's air) now counts as its own job beside the wheel one.
-    const stand = points([[3000, 400], [4000, 415], [5000, 410], [5500, 380]]);
-    const before = await post(tech, { buildId: JOB.buildId, phase: 'before', dynoType: 'engine', ...AFTER_AIR, curve: stand, runAt: hoursAgo(0.75) }).expect(201);
+    const stand = points([
+      [3000, 400],
+      [4000, 415],
+      [5000, 410],
+      [5500, 380],
+    ]);
+    const before = await post(tech, {
+      buildId: JOB.buildId,
+      phase: 'before',
+      dynoType: 'engine',
+      ...AFTER_AIR,
+      curve: stand,
+      runAt: hoursAgo(0.75),
+    }).expect(201);
     created.push(before.body.id);
     const both = (await rankF9(counter)).history!;
     expect(both.measuredGainPctPeakHp).toBeGreaterThan(h.measuredGainPctPeakHp);
@@ -170,7 +261,9 @@ describe('dyno runs', () => {
     const camPrice = (await Cam.findByPk(f9Id))!.priceCents / 100;
     expect(page.text).not.toMatch(/\$\s?\d{1,3}(,\d{3})*\.\d{2}|\$\d{1,3},\d{3}/);
     expect(page.text).not.toContain(camPrice.toLocaleString('en-US', { style: 'currency', currency: 'USD' }));
-    expect(page.text).not.toContain(camPrice.toLocaleString('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 }));
+    expect(page.text).not.toContain(
+      camPrice.toLocaleString('en-US', { style: 'currency', currency: 'USD', maximumFractionDigits: 0 }),
+    );
     const list = await request(appUrl).get('/jobs').set('Cookie', tech).redirects(0).expect(200);
     expect(list.text).toContain('Q-2026-0102');
     const denied = await request(appUrl).get(`/jobs/${JOB.quoteId}`).set('Cookie', counter).redirects(0);
@@ -185,7 +278,9 @@ describe('dyno runs', () => {
       await request(appUrl).get(`/api/dyno-runs/${id}`).set('Cookie', tech).expect(404);
     }
     expect(await DynoRun.count({ where: { buildId: JOB.buildId } })).toBe(0);
-    expect(await AuditEntry.count({ where: { action: 'dyno-run.deleted', entityId: { [Op.in]: created.map(String) } } })).toBe(created.length);
+    expect(
+      await AuditEntry.count({ where: { action: 'dyno-run.deleted', entityId: { [Op.in]: created.map(String) } } }),
+    ).toBe(created.length);
     expect((await rankF9(counter)).history).toBeNull();
   });
 });

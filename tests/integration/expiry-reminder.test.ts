@@ -25,10 +25,23 @@ afterAll(() => disconnectTestDatabase());
 
 // Run without blocking: a synchronous run held the test's event loop past the mail fake's keep-alive
 // timeout, and the next read of the inbox went out on a socket the fake had already closed.
-async function remind(days?: number): Promise<{ reminded: string[]; withoutEmail: string[]; failed: string[]; through: string }> {
-  const args = ['tsx', '--tsconfig', 'tsconfig.cli.json', 'src/cli/remind-expiring.ts', ...(days === undefined ? [] : ['--days', String(days)])];
+async function remind(
+  days?: number,
+): Promise<{ reminded: string[]; withoutEmail: string[]; failed: string[]; through: string }> {
+  const args = [
+    'tsx',
+    '--tsconfig',
+    'tsconfig.cli.json',
+    'src/cli/remind-expiring.ts',
+    ...(days === undefined ? [] : ['--days', String(days)]),
+  ];
   const out = await new Promise<string>((resolve, reject) =>
-    execFile('npx', args, { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', timeout: 60_000 }, (error, stdout) => (error ? reject(error) : resolve(stdout))),
+    execFile(
+      'npx',
+      args,
+      { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', timeout: 60_000 },
+      (error, stdout) => (error ? reject(error) : resolve(stdout)),
+    ),
   );
   return JSON.parse(out.trim().split('\n').at(-1)!);
 }
@@ -39,7 +52,10 @@ describe('the expiry reminder command', () => {
     const soon = await makeSentQuote(counter, 'Expiring soon', { validUntil: dayFromToday(2) });
     const later = await makeSentQuote(counter, 'Expiring later', { validUntil: dayFromToday(12) });
     const declined = await makeSentQuote(counter, 'Expiring declined', { validUntil: dayFromToday(1) });
-    await counter.post(`/api/quotes/${declined.id}/transition`).send({ to: 'declined', version: declined.version }).expect(200);
+    await counter
+      .post(`/api/quotes/${declined.id}/transition`)
+      .send({ to: 'declined', version: declined.version })
+      .expect(200);
     const before = (await counter.get(`/api/quotes/${soon.id}`)).body as { version: number; updatedAt: string };
 
     const first = await remind();
@@ -64,7 +80,10 @@ describe('the expiry reminder command', () => {
     expect(await reminders(soon.customerEmail)).toHaveLength(1);
     expect(await reminders(later.customerEmail)).toHaveLength(0);
     expect(await reminders(declined.customerEmail)).toHaveLength(0);
-    const audit = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM audit_log WHERE action = 'quote.expiry-reminded' AND entity_id = ?", { replacements: [String(soon.id)], type: QueryTypes.SELECT });
+    const audit = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM audit_log WHERE action = 'quote.expiry-reminded' AND entity_id = ?",
+      { replacements: [String(soon.id)], type: QueryTypes.SELECT },
+    );
     expect(Number(audit[0].n)).toBe(1);
 
     // A wider window reaches the later quote, once.
@@ -76,7 +95,13 @@ describe('the expiry reminder command', () => {
     let status = 0;
     let stderr = '';
     try {
-      execFileSync('npx', ['tsx', '--tsconfig', 'tsconfig.cli.json', 'src/cli/remind-expiring.ts', '--days', 'soon'], { cwd: ROOT, env: { ...process.env, ...env }, encoding: 'utf8', stdio: 'pipe', timeout: 60_000 });
+      execFileSync('npx', ['tsx', '--tsconfig', 'tsconfig.cli.json', 'src/cli/remind-expiring.ts', '--days', 'soon'], {
+        cwd: ROOT,
+        env: { ...process.env, ...env },
+        encoding: 'utf8',
+        stdio: 'pipe',
+        timeout: 60_000,
+      });
     } catch (error) {
       status = (error as { status: number }).status;
       stderr = String((error as { stderr: string }).stderr);

@@ -26,7 +26,15 @@ const FULL_SCAN_MAX_ROWS = 500;
 /** The largest page a list hands out; sorting more than this means sorting the table, not a page. */
 const SORT_MAX_ROWS = 200;
 
-type PlanRow = { id: number | null; select_type: string; table: string | null; type: string | null; key: string | null; rows: unknown; Extra: string | null };
+type PlanRow = {
+  id: number | null;
+  select_type: string;
+  table: string | null;
+  type: string | null;
+  key: string | null;
+  rows: unknown;
+  Extra: string | null;
+};
 
 let sequelize: Sequelize;
 
@@ -54,7 +62,8 @@ async function offenders(sql: string): Promise<string[]> {
     const rows = Number(row.rows ?? 0);
     const found: string[] = [];
     if (row.type === 'ALL' && rows > FULL_SCAN_MAX_ROWS) found.push(`full scan of ${row.table} (${rows} rows)`);
-    if ((row.Extra ?? '').includes('Using filesort') && rows > SORT_MAX_ROWS) found.push(`filesort of ${rows} rows of ${row.table} (${row.key ?? 'no index'})`);
+    if ((row.Extra ?? '').includes('Using filesort') && rows > SORT_MAX_ROWS)
+      found.push(`filesort of ${rows} rows of ${row.table} (${row.key ?? 'no index'})`);
     return found.map((f) => `${f} in: ${sql.slice(0, 200)}`);
   });
 }
@@ -84,26 +93,42 @@ afterAll(async () => {
 describe('EXPLAIN of the lists', () => {
   it('the quote list, newest change first, by state, a late page: no scan, no sort of the table', async () => {
     await expectIndexedPlans(() => listQuotes(QuoteListQuerySchema.parse({ page: '1', pageSize: '50' })));
-    await expectIndexedPlans(() => listQuotes(QuoteListQuerySchema.parse({ status: 'sent', page: '1', pageSize: '50' })));
+    await expectIndexedPlans(() =>
+      listQuotes(QuoteListQuerySchema.parse({ status: 'sent', page: '1', pageSize: '50' })),
+    );
     await expectIndexedPlans(() => listQuotes(QuoteListQuerySchema.parse({ page: '40', pageSize: '50' })));
   });
 
   it('the quote search by number, customer and vehicle', async () => {
-    await expectIndexedPlans(() => listQuotes(QuoteListQuerySchema.parse({ q: 'Q-1993-0001', page: '1', pageSize: '50' })));
-    await expectIndexedPlans(() => listQuotes(QuoteListQuerySchema.parse({ q: 'Tamsin Quillfeather12', page: '1', pageSize: '50' })));
-    await expectIndexedPlans(() => listQuotes(QuoteListQuerySchema.parse({ q: 'wagon', status: 'draft', page: '1', pageSize: '50' })));
+    await expectIndexedPlans(() =>
+      listQuotes(QuoteListQuerySchema.parse({ q: 'Q-1993-0001', page: '1', pageSize: '50' })),
+    );
+    await expectIndexedPlans(() =>
+      listQuotes(QuoteListQuerySchema.parse({ q: 'Tamsin Quillfeather12', page: '1', pageSize: '50' })),
+    );
+    await expectIndexedPlans(() =>
+      listQuotes(QuoteListQuerySchema.parse({ q: 'wagon', status: 'draft', page: '1', pageSize: '50' })),
+    );
   });
 
   it('customers by name and by search (full-text words, a short name prefix)', async () => {
     await expectIndexedPlans(() => listCustomers(CustomerListQuerySchema.parse({ page: '1', pageSize: '25' })));
-    await expectIndexedPlans(() => listCustomers(CustomerListQuerySchema.parse({ q: 'Ostrowind42', page: '1', pageSize: '25' })));
-    await expectIndexedPlans(() => listCustomers(CustomerListQuerySchema.parse({ q: 'Ta', page: '1', pageSize: '25' })));
+    await expectIndexedPlans(() =>
+      listCustomers(CustomerListQuerySchema.parse({ q: 'Ostrowind42', page: '1', pageSize: '25' })),
+    );
+    await expectIndexedPlans(() =>
+      listCustomers(CustomerListQuerySchema.parse({ q: 'Ta', page: '1', pageSize: '25' })),
+    );
   });
 
   it('builds, newest first, searched, and one customer’s', async () => {
     await expectIndexedPlans(() => listBuilds(BuildListQuerySchema.parse({ page: '1', pageSize: '25' })));
-    await expectIndexedPlans(() => listBuilds(BuildListQuerySchema.parse({ q: 'Kettleby7', page: '1', pageSize: '25' })));
-    await expectIndexedPlans(() => listBuilds(BuildListQuerySchema.parse({ customerId: '1', page: '1', pageSize: '25' })));
+    await expectIndexedPlans(() =>
+      listBuilds(BuildListQuerySchema.parse({ q: 'Kettleby7', page: '1', pageSize: '25' })),
+    );
+    await expectIndexedPlans(() =>
+      listBuilds(BuildListQuerySchema.parse({ customerId: '1', page: '1', pageSize: '25' })),
+    );
   });
 
   it('leads, newest first and by status', async () => {
@@ -114,15 +139,25 @@ describe('EXPLAIN of the lists', () => {
 
 describe('EXPLAIN of the advisor’s measured history', () => {
   it('reads dyno_gains by similar displacement (and cam), in index order, never the whole table', async () => {
-    const [demo] = await sequelize.query<{ profile: unknown }>('SELECT profile FROM builds WHERE id = :id', { replacements: { id: DEMO.builds.whitlockTowingTruck }, type: QueryTypes.SELECT });
-    const profile = BuildProfileSchema.parse(typeof demo.profile === 'string' ? JSON.parse(demo.profile) : demo.profile);
-    const [cam] = await sequelize.query<{ camId: number }>('SELECT cam_id AS camId FROM dyno_gains ORDER BY id LIMIT 1', { type: QueryTypes.SELECT });
+    const [demo] = await sequelize.query<{ profile: unknown }>('SELECT profile FROM builds WHERE id = :id', {
+      replacements: { id: DEMO.builds.whitlockTowingTruck },
+      type: QueryTypes.SELECT,
+    });
+    const profile = BuildProfileSchema.parse(
+      typeof demo.profile === 'string' ? JSON.parse(demo.profile) : demo.profile,
+    );
+    const [cam] = await sequelize.query<{ camId: number }>(
+      'SELECT cam_id AS camId FROM dyno_gains ORDER BY id LIMIT 1',
+      { type: QueryTypes.SELECT },
+    );
     await expectIndexedPlans(() => loadDynoHistory(profile));
     await expectIndexedPlans(() => loadDynoHistory(profile, [cam.camId]));
     const selects = await selectsOf(() => loadDynoHistory(profile));
     for (const sql of selects) {
       const plan = await sequelize.query<PlanRow>(`EXPLAIN ${sql}`, { type: QueryTypes.SELECT });
-      expect(plan.map((row) => [row.type, row.key, (row.Extra ?? '').includes('filesort')])).toEqual([['range', 'dyno_gains_similar', false]]);
+      expect(plan.map((row) => [row.type, row.key, (row.Extra ?? '').includes('filesort')])).toEqual([
+        ['range', 'dyno_gains_similar', false],
+      ]);
     }
   });
 });

@@ -17,7 +17,11 @@ import { RUNTIME_FILE, readRuntime, type TestRuntime } from '../support/runtime'
 const ROOT = path.resolve(__dirname, '../..');
 const runtime = readRuntime();
 const { appUrl, paymentsUrl, env } = runtime;
-const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
+const stripe = new Stripe(env.STRIPE_SECRET_KEY, {
+  host: '127.0.0.1',
+  port: Number(env.STRIPE_API_PORT),
+  protocol: 'http',
+});
 
 let sequelize: Sequelize;
 let counter: Awaited<ReturnType<typeof signedInAgent>>;
@@ -29,8 +33,13 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   for (const email of customers) {
-    await sequelize.query('DELETE p FROM payments p JOIN quotes q ON q.id = p.quote_id JOIN customers c ON c.id = q.customer_id WHERE c.email = ?', { replacements: [email] });
-    await sequelize.query('DELETE q FROM quotes q JOIN customers c ON c.id = q.customer_id WHERE c.email = ?', { replacements: [email] });
+    await sequelize.query(
+      'DELETE p FROM payments p JOIN quotes q ON q.id = p.quote_id JOIN customers c ON c.id = q.customer_id WHERE c.email = ?',
+      { replacements: [email] },
+    );
+    await sequelize.query('DELETE q FROM quotes q JOIN customers c ON c.id = q.customer_id WHERE c.email = ?', {
+      replacements: [email],
+    });
     await sequelize.query('DELETE FROM customers WHERE email = ?', { replacements: [email] });
   }
   await disconnectTestDatabase();
@@ -50,9 +59,13 @@ function freePort(): Promise<number> {
 async function waitFor(url: string, ok: (status: number | null) => boolean, timeoutMs: number): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
-    const status = await fetch(url).then((r) => r.status, () => null);
+    const status = await fetch(url).then(
+      (r) => r.status,
+      () => null,
+    );
     if (ok(status)) return;
-    if (Date.now() > deadline) throw new Error(`${url} did not reach the expected state in ${timeoutMs} ms (last: ${status})`);
+    if (Date.now() > deadline)
+      throw new Error(`${url} did not reach the expected state in ${timeoutMs} ms (last: ${status})`);
     await new Promise((r) => setTimeout(r, 200));
   }
 }
@@ -60,12 +73,23 @@ async function waitFor(url: string, ok: (status: number | null) => boolean, time
 /** Starts a detached server like the global setup does, logging under var/test/logs. */
 function startDetached(name: string, args: string[], extraEnv: Record<string, string> = {}): ChildProcess {
   const out = fs.openSync(path.join(ROOT, 'var/test/logs', `${name}.log`), 'w');
-  const child = spawn(process.execPath, args, { cwd: ROOT, env: { ...process.env, ...env, ...extraEnv }, stdio: ['ignore', out, out], detached: true });
+  const child = spawn(process.execPath, args, {
+    cwd: ROOT,
+    env: { ...process.env, ...env, ...extraEnv },
+    stdio: ['ignore', out, out],
+    detached: true,
+  });
   child.unref();
   return child;
 }
 
-const readQuote = async (id: number) => (await counter.get(`/api/quotes/${id}`)).body as { status: string; version: number; paidCents: number; payments: unknown[] };
+const readQuote = async (id: number) =>
+  (await counter.get(`/api/quotes/${id}`)).body as {
+    status: string;
+    version: number;
+    paidCents: number;
+    payments: unknown[];
+  };
 const sessionIdOf = (url: string) => new URL(url).pathname.split('/').pop()!;
 
 describe('the payments service is away while a customer pays the deposit', () => {
@@ -94,13 +118,21 @@ describe('the payments service is away while a customer pays the deposit', () =>
       expect(page.text).toContain('Accept and pay the deposit');
     } finally {
       restarted = startDetached('payments-fake-restarted', ['docker-local/payments-fake/server.mjs']);
-      const updated: TestRuntime = { ...readRuntime(), pids: readRuntime().pids.map((pid) => (pid === oldPid ? restarted!.pid! : pid)) };
+      const updated: TestRuntime = {
+        ...readRuntime(),
+        pids: readRuntime().pids.map((pid) => (pid === oldPid ? restarted!.pid! : pid)),
+      };
       fs.writeFileSync(RUNTIME_FILE, JSON.stringify(updated, null, 2));
       await waitFor(`${paymentsUrl}/health`, (s) => s === 200, 15_000);
     }
 
-    const started = await request(appUrl).post(`/api/q/${quote.token}/checkout`).set('Accept', 'application/json').expect(200);
-    await request(paymentsUrl).post(`/_test/sessions/${sessionIdOf(started.body.url)}/complete`).expect(200);
+    const started = await request(appUrl)
+      .post(`/api/q/${quote.token}/checkout`)
+      .set('Accept', 'application/json')
+      .expect(200);
+    await request(paymentsUrl)
+      .post(`/_test/sessions/${sessionIdOf(started.body.url)}/complete`)
+      .expect(200);
     const deadline = Date.now() + 15_000;
     let paid = await readQuote(quote.id);
     while (paid.status !== 'deposit-paid' && Date.now() < deadline) {
@@ -118,7 +150,15 @@ describe('two app instances receive the same webhook at once', () => {
   beforeAll(async () => {
     const port = await freePort();
     secondUrl = `http://127.0.0.1:${port}`;
-    second = startDetached('app-second', ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(port)]);
+    second = startDetached('app-second', [
+      '--max-semi-space-size=64',
+      'node_modules/next/dist/bin/next',
+      'start',
+      '-H',
+      '127.0.0.1',
+      '-p',
+      String(port),
+    ]);
     await waitFor(`${secondUrl}/api/health`, (s) => s === 200, 60_000);
   }, 90_000);
   afterAll(() => {
@@ -132,20 +172,50 @@ describe('two app instances receive the same webhook at once', () => {
   it('records one payment and one audit row for ten deliveries split across both', async () => {
     const quote = await makeSentQuote(counter, 'Two instances');
     customers.push(quote.customerEmail);
-    const started = await request(appUrl).post(`/api/q/${quote.token}/checkout`).set('Accept', 'application/json').expect(200);
+    const started = await request(appUrl)
+      .post(`/api/q/${quote.token}/checkout`)
+      .set('Accept', 'application/json')
+      .expect(200);
     const body = JSON.stringify({
-      id: `evt_test_${crypto.randomBytes(8).toString('hex')}`, object: 'event', type: 'checkout.session.completed', created: Math.floor(Date.now() / 1000),
-      data: { object: { object: 'checkout.session', id: sessionIdOf(started.body.url), status: 'complete', payment_status: 'paid', currency: 'usd', amount_total: quote.depositCents, payment_intent: `pi_test_${crypto.randomBytes(6).toString('hex')}`, client_reference_id: String(quote.id), metadata: { quoteId: String(quote.id) } } },
+      id: `evt_test_${crypto.randomBytes(8).toString('hex')}`,
+      object: 'event',
+      type: 'checkout.session.completed',
+      created: Math.floor(Date.now() / 1000),
+      data: {
+        object: {
+          object: 'checkout.session',
+          id: sessionIdOf(started.body.url),
+          status: 'complete',
+          payment_status: 'paid',
+          currency: 'usd',
+          amount_total: quote.depositCents,
+          payment_intent: `pi_test_${crypto.randomBytes(6).toString('hex')}`,
+          client_reference_id: String(quote.id),
+          metadata: { quoteId: String(quote.id) },
+        },
+      },
     });
     const signature = stripe.webhooks.generateTestHeaderString({ payload: body, secret: env.STRIPE_WEBHOOK_SECRET });
     const answers = await Promise.all(
-      Array.from({ length: 10 }, (_, i) => request(i % 2 ? secondUrl : appUrl).post('/api/payments/webhook').set('Stripe-Signature', signature).set('content-type', 'application/json').send(body)),
+      Array.from({ length: 10 }, (_, i) =>
+        request(i % 2 ? secondUrl : appUrl)
+          .post('/api/payments/webhook')
+          .set('Stripe-Signature', signature)
+          .set('content-type', 'application/json')
+          .send(body),
+      ),
     );
     expect(answers.map((a) => a.status)).toEqual(Array(10).fill(200));
     expect(answers.filter((a) => a.body.result === 'applied')).toHaveLength(1);
-    const rows = await sequelize.query<{ status: string }>('SELECT status FROM payments WHERE quote_id = ?', { replacements: [quote.id], type: QueryTypes.SELECT });
+    const rows = await sequelize.query<{ status: string }>('SELECT status FROM payments WHERE quote_id = ?', {
+      replacements: [quote.id],
+      type: QueryTypes.SELECT,
+    });
     expect(rows).toEqual([{ status: 'paid' }]);
-    const audits = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?", { replacements: [String(quote.id)], type: QueryTypes.SELECT });
+    const audits = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?",
+      { replacements: [String(quote.id)], type: QueryTypes.SELECT },
+    );
     expect(Number(audits[0].n)).toBe(1);
     expect(await readQuote(quote.id)).toMatchObject({ status: 'deposit-paid', paidCents: quote.depositCents });
   });

@@ -40,7 +40,12 @@ function start(name: string, args: string[], env: Record<string, string>): numbe
   const logDir = path.join(ROOT, 'var/test/logs');
   fs.mkdirSync(logDir, { recursive: true });
   const out = fs.openSync(path.join(logDir, `${name}.log`), 'w');
-  const child = spawn(process.execPath, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', out, out], detached: true });
+  const child = spawn(process.execPath, args, {
+    cwd: ROOT,
+    env: { ...process.env, ...env },
+    stdio: ['ignore', out, out],
+    detached: true,
+  });
   child.unref();
   if (!child.pid) throw new Error(`could not start ${name}`);
   return child.pid;
@@ -78,9 +83,27 @@ export default async function globalSetup(): Promise<void> {
   const pids = [
     start('mail-fake', ['docker-local/mail-fake/server.mjs'], env),
     start('payments-fake', ['docker-local/payments-fake/server.mjs'], env),
-    start('app', ['--max-semi-space-size=64', 'node_modules/next/dist/bin/next', 'start', '-H', '127.0.0.1', '-p', String(appPort)], env),
+    start(
+      'app',
+      [
+        '--max-semi-space-size=64',
+        'node_modules/next/dist/bin/next',
+        'start',
+        '-H',
+        '127.0.0.1',
+        '-p',
+        String(appPort),
+      ],
+      env,
+    ),
   ];
-  const runtime: TestRuntime = { appUrl, mailUrl: env.RESEND_BASE_URL, paymentsUrl: `http://127.0.0.1:${paymentsPort}`, env, pids };
+  const runtime: TestRuntime = {
+    appUrl,
+    mailUrl: env.RESEND_BASE_URL,
+    paymentsUrl: `http://127.0.0.1:${paymentsPort}`,
+    env,
+    pids,
+  };
   fs.writeFileSync(RUNTIME_FILE, JSON.stringify(runtime, null, 2));
   try {
     await Promise.all([

@@ -16,12 +16,38 @@ const MARK = `Interview Test ${process.pid}`;
 // A stock 5.3 L towing truck (figures approximate, from memory), as the interview form sends it.
 function truckProfile(): BuildProfileInput {
   return {
-    engine: { cylinders: 8, boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'active' },
+    engine: {
+      cylinders: 8,
+      boreIn: 3.78,
+      strokeIn: 3.622,
+      rodLengthIn: 6.098,
+      compressionRatio: 9.9,
+      headMaterial: 'aluminum',
+      intakeFlowCfm: 240,
+      intakeManifold: 'truck',
+      cylinderDeactivation: 'active',
+    },
     exhaust: { headers: 'manifold', system: 'full-with-cats' },
     drivetrain: { transmission: 'automatic', stallRpm: 2000, axleRatio: 3.42, topGearRatio: 0.7, tireDiameterIn: 31 },
     vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-    use: { primary: 'towing', idle: 'smooth', fuelOctane: 87, emissionsRequired: true, cruiseMph: 65, budgetCents: 350000 },
-    baselineCam: { id: 'typed', name: 'Stock card as typed', intakeDuration050: 190, exhaustDuration050: 191, intakeLiftIn: 0.467, exhaustLiftIn: 0.479, lsa: 114.5, intakeCenterline: 114.5 },
+    use: {
+      primary: 'towing',
+      idle: 'smooth',
+      fuelOctane: 87,
+      emissionsRequired: true,
+      cruiseMph: 65,
+      budgetCents: 350000,
+    },
+    baselineCam: {
+      id: 'typed',
+      name: 'Stock card as typed',
+      intakeDuration050: 190,
+      exhaustDuration050: 191,
+      intakeLiftIn: 0.467,
+      exhaustLiftIn: 0.479,
+      lsa: 114.5,
+      intakeCenterline: 114.5,
+    },
   };
 }
 
@@ -36,7 +62,9 @@ describe('customers and builds API (counter interview)', () => {
   });
 
   afterAll(async () => {
-    const created = (await Customer.findAll({ where: { name: { [Op.startsWith]: MARK } }, attributes: ['id'] })).map((c) => c.id);
+    const created = (await Customer.findAll({ where: { name: { [Op.startsWith]: MARK } }, attributes: ['id'] })).map(
+      (c) => c.id,
+    );
     if (created.length) {
       await Build.destroy({ where: { customerId: created } });
       await Customer.destroy({ where: { id: created } });
@@ -44,8 +72,16 @@ describe('customers and builds API (counter interview)', () => {
     await disconnectTestDatabase();
   });
 
-  const post = (url: string, cookie: string, body: unknown) => request(appUrl).post(url).set('Cookie', cookie).send(body as object);
-  const patch = (url: string, cookie: string, body: unknown) => request(appUrl).patch(url).set('Cookie', cookie).send(body as object);
+  const post = (url: string, cookie: string, body: unknown) =>
+    request(appUrl)
+      .post(url)
+      .set('Cookie', cookie)
+      .send(body as object);
+  const patch = (url: string, cookie: string, body: unknown) =>
+    request(appUrl)
+      .patch(url)
+      .set('Cookie', cookie)
+      .send(body as object);
 
   it('creates a customer and a build in one request, reads both back, and writes audit rows', async () => {
     const created = await post('/api/builds', counter, {
@@ -53,7 +89,13 @@ describe('customers and builds API (counter interview)', () => {
       vehicleLabel: '2014 crew-cab pickup, 5.3 L',
       profile: truckProfile(),
     }).expect(201);
-    expect(created.body).toMatchObject({ vehicleLabel: '2014 crew-cab pickup, 5.3 L', customerName: `${MARK} Walk-in`, profileSchemaVersion: 2, version: 1, baselineCamId: null });
+    expect(created.body).toMatchObject({
+      vehicleLabel: '2014 crew-cab pickup, 5.3 L',
+      customerName: `${MARK} Walk-in`,
+      profileSchemaVersion: 2,
+      version: 1,
+      baselineCamId: null,
+    });
     const id = created.body.id as number;
 
     const read = await request(appUrl).get(`/api/builds/${id}`).set('Cookie', tech).expect(200);
@@ -62,20 +104,38 @@ describe('customers and builds API (counter interview)', () => {
 
     const row = await Build.findByPk(id);
     expect(row!.profileSchemaVersion).toBe(2);
-    const customer = await request(appUrl).get(`/api/customers/${read.body.customerId}`).set('Cookie', tech).expect(200);
+    const customer = await request(appUrl)
+      .get(`/api/customers/${read.body.customerId}`)
+      .set('Cookie', tech)
+      .expect(200);
     expect(customer.body).toMatchObject({ name: `${MARK} Walk-in`, phone: '555-0100', email: 'walk.in@example.com' });
     expect(customer.body.builds.map((b: { id: number }) => b.id)).toEqual([id]);
 
     const audit = await AuditEntry.findAll({
-      where: { [Op.or]: [{ entityType: 'build', entityId: String(id) }, { entityType: 'customer', entityId: String(read.body.customerId) }] },
+      where: {
+        [Op.or]: [
+          { entityType: 'build', entityId: String(id) },
+          { entityType: 'customer', entityId: String(read.body.customerId) },
+        ],
+      },
     });
-    expect(audit.map((a) => `${a.action} by ${a.actor}`).sort()).toEqual(['build.created by counter@lobewise.test', 'customer.created by counter@lobewise.test']);
+    expect(audit.map((a) => `${a.action} by ${a.actor}`).sort()).toEqual([
+      'build.created by counter@lobewise.test',
+      'customer.created by counter@lobewise.test',
+    ]);
   });
 
   it('finds customers by name, e-mail or phone, paged', async () => {
-    const made = await post('/api/customers', manager, { name: `${MARK} Searchable`, email: 'findme.interview@example.com', phone: '555-0987' }).expect(201);
+    const made = await post('/api/customers', manager, {
+      name: `${MARK} Searchable`,
+      email: 'findme.interview@example.com',
+      phone: '555-0987',
+    }).expect(201);
     for (const q of ['Searchable', 'findme.interview', '0987']) {
-      const found = await request(appUrl).get(`/api/customers?q=${encodeURIComponent(q)}`).set('Cookie', counter).expect(200);
+      const found = await request(appUrl)
+        .get(`/api/customers?q=${encodeURIComponent(q)}`)
+        .set('Cookie', counter)
+        .expect(200);
       expect(found.body.items.map((c: { id: number }) => c.id)).toContain(made.body.id);
     }
     const paged = await request(appUrl).get('/api/customers?pageSize=1&page=2').set('Cookie', counter).expect(200);
@@ -88,8 +148,15 @@ describe('customers and builds API (counter interview)', () => {
   });
 
   it('adds a build for an existing customer, listed newest first and found by the customer’s phone', async () => {
-    const customer = await post('/api/customers', counter, { name: `${MARK} Returning`, phone: '555-0444' }).expect(201);
-    const build = await post('/api/builds', counter, { customerId: customer.body.id, vehicleLabel: '2009 regular-cab, 4.8 L', profile: truckProfile(), baselineCamId: DEMO.cams.factory48 }).expect(201);
+    const customer = await post('/api/customers', counter, { name: `${MARK} Returning`, phone: '555-0444' }).expect(
+      201,
+    );
+    const build = await post('/api/builds', counter, {
+      customerId: customer.body.id,
+      vehicleLabel: '2009 regular-cab, 4.8 L',
+      profile: truckProfile(),
+      baselineCamId: DEMO.cams.factory48,
+    }).expect(201);
     expect(build.body.baselineCamId).toBe(1);
     const list = await request(appUrl).get('/api/builds?q=555-0444').set('Cookie', tech).expect(200);
     expect(list.body.items.map((b: { id: number }) => b.id)).toEqual([build.body.id]);
@@ -102,32 +169,72 @@ describe('customers and builds API (counter interview)', () => {
     const before = await Customer.count();
     const profile = truckProfile();
     profile.engine.boreIn = 46;
-    const answer = await post('/api/builds', counter, { customer: { name: `${MARK} Typo` }, vehicleLabel: 'Typo truck', profile }).expect(422);
+    const answer = await post('/api/builds', counter, {
+      customer: { name: `${MARK} Typo` },
+      vehicleLabel: 'Typo truck',
+      profile,
+    }).expect(422);
     expect(answer.body.errors).toEqual([{ field: 'profile.engine.boreIn', message: 'bore must be at most 4.6 in' }]);
     expect(await Customer.count()).toBe(before);
   });
 
   it('answers 422 for other bad input: no customer, unknown customer, unknown baseline cam, bad e-mail, unknown field, not JSON', async () => {
-    const fields = async (body: unknown) => (await post('/api/builds', counter, body).expect(422)).body.errors.map((e: { field: string }) => e.field);
+    const fields = async (body: unknown) =>
+      (await post('/api/builds', counter, body).expect(422)).body.errors.map((e: { field: string }) => e.field);
     expect(await fields({ vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customerId']);
-    expect(await fields({ customerId: MISSING_ID, vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customerId']);
-    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: truckProfile(), baselineCamId: MISSING_ID })).toEqual(['baselineCamId']);
-    expect(await fields({ customer: { name: `${MARK} Bad mail`, email: 'not-an-address' }, vehicleLabel: 'x', profile: truckProfile() })).toEqual(['customer.email']);
+    expect(await fields({ customerId: MISSING_ID, vehicleLabel: 'x', profile: truckProfile() })).toEqual([
+      'customerId',
+    ]);
+    expect(
+      await fields({
+        customerId: DEMO.customers.whitlock,
+        vehicleLabel: 'x',
+        profile: truckProfile(),
+        baselineCamId: MISSING_ID,
+      }),
+    ).toEqual(['baselineCamId']);
+    expect(
+      await fields({
+        customer: { name: `${MARK} Bad mail`, email: 'not-an-address' },
+        vehicleLabel: 'x',
+        profile: truckProfile(),
+      }),
+    ).toEqual(['customer.email']);
     const automaticNoStall = truckProfile();
     delete automaticNoStall.drivetrain.stallRpm;
-    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: automaticNoStall })).toEqual(['profile.drivetrain.stallRpm']);
-    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: { ...truckProfile(), turbo: true } })).toEqual(['profile.turbo']);
-    const notJson = await request(appUrl).post('/api/builds').set('Cookie', counter).set('Content-Type', 'application/json').send('{nope');
+    expect(await fields({ customerId: DEMO.customers.whitlock, vehicleLabel: 'x', profile: automaticNoStall })).toEqual(
+      ['profile.drivetrain.stallRpm'],
+    );
+    expect(
+      await fields({
+        customerId: DEMO.customers.whitlock,
+        vehicleLabel: 'x',
+        profile: { ...truckProfile(), turbo: true },
+      }),
+    ).toEqual(['profile.turbo']);
+    const notJson = await request(appUrl)
+      .post('/api/builds')
+      .set('Cookie', counter)
+      .set('Content-Type', 'application/json')
+      .send('{nope');
     expect(notJson.status).toBe(400);
     expect((await post('/api/customers', counter, { name: '' }).expect(422)).body.errors[0].field).toBe('name');
   });
 
   it('changes a build with the version it read, and answers 409 to a stale version without overwriting', async () => {
-    const created = await post('/api/builds', counter, { customer: { name: `${MARK} Versioned` }, vehicleLabel: 'Before', profile: truckProfile() }).expect(201);
+    const created = await post('/api/builds', counter, {
+      customer: { name: `${MARK} Versioned` },
+      vehicleLabel: 'Before',
+      profile: truckProfile(),
+    }).expect(201);
     const id = created.body.id as number;
     const changedProfile = truckProfile();
     changedProfile.drivetrain.axleRatio = 3.73;
-    const saved = await patch(`/api/builds/${id}`, counter, { version: 1, vehicleLabel: 'After', profile: changedProfile }).expect(200);
+    const saved = await patch(`/api/builds/${id}`, counter, {
+      version: 1,
+      vehicleLabel: 'After',
+      profile: changedProfile,
+    }).expect(200);
     expect(saved.body).toMatchObject({ version: 2, vehicleLabel: 'After' });
     expect(saved.body.profile.drivetrain.axleRatio).toBe(3.73);
 
@@ -135,9 +242,14 @@ describe('customers and builds API (counter interview)', () => {
     expect(stale.body.current).toMatchObject({ version: 2, vehicleLabel: 'After' });
     expect((await Build.findByPk(id))!.vehicleLabel).toBe('After');
 
-    const bad = await patch(`/api/builds/${id}`, counter, { version: 2, profile: { ...changedProfile, engine: { ...changedProfile.engine, strokeIn: 'long' } } }).expect(422);
+    const bad = await patch(`/api/builds/${id}`, counter, {
+      version: 2,
+      profile: { ...changedProfile, engine: { ...changedProfile.engine, strokeIn: 'long' } },
+    }).expect(422);
     expect(bad.body.errors.map((e: { field: string }) => e.field)).toEqual(['profile.engine.strokeIn']);
-    expect((await patch(`/api/builds/${id}`, counter, { vehicleLabel: 'No version' }).expect(422)).body.errors[0].field).toBe('version');
+    expect(
+      (await patch(`/api/builds/${id}`, counter, { vehicleLabel: 'No version' }).expect(422)).body.errors[0].field,
+    ).toBe('version');
   });
 
   it('changes a customer with the version it read, and answers 409 to a stale one', async () => {
@@ -163,7 +275,11 @@ describe('customers and builds API (counter interview)', () => {
   });
 
   it('serves the list and edit pages to counter staff, and keeps technicians off the edit page', async () => {
-    const created = await post('/api/builds', counter, { customer: { name: `${MARK} Pages` }, vehicleLabel: 'Page check van, 6.0 L', profile: truckProfile() }).expect(201);
+    const created = await post('/api/builds', counter, {
+      customer: { name: `${MARK} Pages` },
+      vehicleLabel: 'Page check van, 6.0 L',
+      profile: truckProfile(),
+    }).expect(201);
     const list = await request(appUrl).get('/interviews?q=Page%20check').set('Cookie', counter).expect(200);
     expect(list.text).toContain('Page check van, 6.0 L');
     expect(list.text).toContain(`/advisor?build=${created.body.id}`);
@@ -178,12 +294,18 @@ describe('customers and builds API (counter interview)', () => {
   });
 
   it('ranks a new build through POST /api/advisor/rank', async () => {
-    const created = await post('/api/builds', counter, { customer: { name: `${MARK} Ranked` }, vehicleLabel: '2016 pickup, 5.3 L', profile: truckProfile() }).expect(201);
+    const created = await post('/api/builds', counter, {
+      customer: { name: `${MARK} Ranked` },
+      vehicleLabel: '2016 pickup, 5.3 L',
+      profile: truckProfile(),
+    }).expect(201);
     const stored = await request(appUrl).get(`/api/builds/${created.body.id}`).set('Cookie', counter).expect(200);
     const ranked = await post('/api/advisor/rank', counter, { build: stored.body.profile }).expect(200);
     expect(ranked.body.rankings.length).toBeGreaterThanOrEqual(10);
     expect(ranked.body.baseline.camName).toBe('Stock card as typed');
     // Road-legal emissions needed: a cam that is not certified scores below 100 on emissions.
-    expect(ranked.body.rankings.some((r: { subscores: { emissions: number } }) => r.subscores.emissions < 100)).toBe(true);
+    expect(ranked.body.rankings.some((r: { subscores: { emissions: number } }) => r.subscores.emissions < 100)).toBe(
+      true,
+    );
   });
 });

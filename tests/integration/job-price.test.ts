@@ -26,7 +26,9 @@ beforeAll(async () => {
 afterAll(async () => {
   // Leave the database as we found it: our drafts, their lines and their audit rows.
   if (madeQuotes.length) {
-    await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'quote' AND entity_id IN (?)", { replacements: [madeQuotes.map(String)] });
+    await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'quote' AND entity_id IN (?)", {
+      replacements: [madeQuotes.map(String)],
+    });
     await sequelize.query('DELETE FROM quote_lines WHERE quote_id IN (?)', { replacements: [madeQuotes] });
     await sequelize.query('DELETE FROM quotes WHERE id IN (?)', { replacements: [madeQuotes] });
   }
@@ -34,12 +36,16 @@ afterAll(async () => {
 });
 
 async function storedProfile(): Promise<Record<string, unknown>> {
-  const [row] = await sequelize.query<{ profile: string | object; profile_schema_version: number }>('SELECT profile, profile_schema_version FROM builds WHERE id = ?', { replacements: [BUILD_ID], type: QueryTypes.SELECT });
+  const [row] = await sequelize.query<{ profile: string | object; profile_schema_version: number }>(
+    'SELECT profile, profile_schema_version FROM builds WHERE id = ?',
+    { replacements: [BUILD_ID], type: QueryTypes.SELECT },
+  );
   expect(row.profile_schema_version).toBe(2);
   return (typeof row.profile === 'string' ? JSON.parse(row.profile) : row.profile) as Record<string, unknown>;
 }
 
-const money = (cents: number) => `$${Math.floor(cents / 100).toLocaleString('en-US')}.${String(cents % 100).padStart(2, '0')}`;
+const money = (cents: number) =>
+  `$${Math.floor(cents / 100).toLocaleString('en-US')}.${String(cents % 100).padStart(2, '0')}`;
 const itemCodes = (r: Ranking) => r.neededItems.map((i) => i.part?.sku ?? i.laborOperation?.code);
 
 describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
@@ -61,13 +67,17 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
       expect(itemCodes(r)).toContain('CAM-TRUCK');
       expect(itemCodes(r)).not.toContain('CAM-CAR');
       // The cost reason's "about $X" is the same number, to the cent.
-      expect(r.reasons.find((x) => x.subscore === 'cost')?.text).toContain(`about ${money(r.jobPriceCents!)} before tax`);
+      expect(r.reasons.find((x) => x.subscore === 'cost')?.text).toContain(
+        `about ${money(r.jobPriceCents!)} before tax`,
+      );
     }
   });
 
   it('the advisor’s spring verdict and the quote’s spring kit agree: a 0.525" cam past the 0.500" springs', () => {
     const r = rankings.find((x) => x.camId === RB_198)!;
-    expect(r.reasons.find((x) => x.subscore === 'fit')?.text).toMatch(/Lift 0\.525" is past your installed springs' 0\.500" limit — it needs springs/);
+    expect(r.reasons.find((x) => x.subscore === 'fit')?.text).toMatch(
+      /Lift 0\.525" is past your installed springs' 0\.500" limit — it needs springs/,
+    );
     expect(itemCodes(r)).toEqual(expect.arrayContaining(['SPR-600', 'SPR-INST']));
   });
 
@@ -92,9 +102,16 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
       expect(res.body.subtotalCents).toBe(shortlisted.jobPriceCents);
       expect(lines.reduce((s, l) => s + l.totalCents, 0)).toBe(shortlisted.jobPriceCents);
       // Cam-install labour by vehicle class: the truck swap, 8 h at the shop rate.
-      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.camSwapTruck)).toMatchObject({ quantity: 8, unitPriceCents: LABOR_RATE, totalCents: 108_000 });
+      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.camSwapTruck)).toMatchObject({
+        quantity: 8,
+        unitPriceCents: LABOR_RATE,
+        totalCents: 108_000,
+      });
       expect(lines.find((l) => l.kind === 'part' && l.description.startsWith('SPR-600'))).toBeDefined();
-      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({ quantity: 2, totalCents: 27_000 });
+      expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({
+        quantity: 2,
+        totalCents: 27_000,
+      });
       // Tax on the goods only (cam and parts), 8.25 %, half up; the tune and labour untaxed.
       const goods = lines.filter((l) => ['cam', 'part'].includes(l.kind)).reduce((s, l) => s + l.totalCents, 0);
       expect(res.body.taxCents).toBe(Math.floor((goods * 825 + 5_000) / 10_000));

@@ -60,11 +60,21 @@ afterAll(async () => {
 describe('booking a paid job', () => {
   it('a paid quote is on the board, not booked yet; an unpaid one is not a job', async () => {
     const job = await paid('Board newly paid');
-    const listed = (await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as { id: number; state: string; version: number }[];
+    const listed = (await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as {
+      id: number;
+      state: string;
+      version: number;
+    }[];
     expect(listed.find((j) => j.id === job.id)).toMatchObject({ state: 'not-booked', version: 0 });
     const one = await tech.get(`/api/jobs/${job.id}`);
     expect(one.status).toBe(200);
-    expect(one.body).toMatchObject({ number: job.number, state: 'not-booked', nextStates: ['booked'], deactivationActive: true, signOff: null });
+    expect(one.body).toMatchObject({
+      number: job.number,
+      state: 'not-booked',
+      nextStates: ['booked'],
+      deactivationActive: true,
+      signOff: null,
+    });
     expect(JSON.stringify(one.body)).not.toMatch(/Cents/); // the workshop's view carries no money
 
     const unpaid = await makeSentQuote(counter, 'Board unpaid');
@@ -80,19 +90,31 @@ describe('booking a paid job', () => {
     const badBay = await tech.patch(`/api/jobs/${job.id}`).send({ version: 0, bookedFor: shopDay(3), bay: 99 });
     expect(badBay.status).toBe(422);
     expect(badBay.body.errors).toEqual([expect.objectContaining({ field: 'bay' })]);
-    const badTech = await tech.patch(`/api/jobs/${job.id}`).send({ version: 0, bookedFor: shopDay(3), technicianId: counterId });
+    const badTech = await tech
+      .patch(`/api/jobs/${job.id}`)
+      .send({ version: 0, bookedFor: shopDay(3), technicianId: counterId });
     expect(badTech.status).toBe(422);
     expect(badTech.body.errors).toEqual([expect.objectContaining({ field: 'technicianId' })]);
     const badDate = await tech.patch(`/api/jobs/${job.id}`).send({ version: 0, bookedFor: '2026-02-30' });
     expect(badDate.status).toBe(422);
     expect(badDate.body.errors).toEqual([expect.objectContaining({ field: 'bookedFor' })]);
 
-    const booked = await tech.patch(`/api/jobs/${job.id}`).send({ version: 0, bookedFor: shopDay(3), bay: 2, technicianId: techId });
+    const booked = await tech
+      .patch(`/api/jobs/${job.id}`)
+      .send({ version: 0, bookedFor: shopDay(3), bay: 2, technicianId: techId });
     expect(booked.status).toBe(200);
-    expect(booked.body).toMatchObject({ state: 'booked', version: 1, bookedFor: shopDay(3), bay: 2, technician: { id: techId } });
+    expect(booked.body).toMatchObject({
+      state: 'booked',
+      version: 1,
+      bookedFor: shopDay(3),
+      bay: 2,
+      technician: { id: techId },
+    });
     const row = await Job.findOne({ where: { quoteId: job.id } });
     expect(row).toMatchObject({ state: 'booked', bay: 2, technicianUserId: techId, bookedFor: shopDay(3) });
-    expect(await AuditEntry.count({ where: { action: 'job.booked', entityType: 'job', entityId: String(row!.id) } })).toBe(1);
+    expect(
+      await AuditEntry.count({ where: { action: 'job.booked', entityType: 'job', entityId: String(row!.id) } }),
+    ).toBe(1);
 
     // Someone else's screen still says version 0: their save must not overwrite the booking.
     const stale = await tech.patch(`/api/jobs/${job.id}`).send({ version: 0, bookedFor: shopDay(5) });
@@ -141,8 +163,19 @@ describe('moving a job through the workshop', () => {
     expect(after.body.message).toContain('This job is collected (collected)');
     const rebook = await tech.patch(`/api/jobs/${job.id}`).send({ version: collected.body.version, bay: 3 });
     expect(rebook.status).toBe(409);
-    const audits = await AuditEntry.findAll({ where: { action: 'job.state-changed', entityType: 'job', entityId: String((await Job.findOne({ where: { quoteId: job.id } }))!.id) } });
-    expect(audits.map((a) => (a.after as { state: string }).state)).toEqual(['in-shop', 'on-dyno', 'ready', 'collected']);
+    const audits = await AuditEntry.findAll({
+      where: {
+        action: 'job.state-changed',
+        entityType: 'job',
+        entityId: String((await Job.findOne({ where: { quoteId: job.id } }))!.id),
+      },
+    });
+    expect(audits.map((a) => (a.after as { state: string }).state)).toEqual([
+      'in-shop',
+      'on-dyno',
+      'ready',
+      'collected',
+    ]);
   }, 60_000);
 });
 
@@ -160,25 +193,56 @@ describe("the technician's sign-off", () => {
     const missing = await tech.post(`/api/jobs/${job.id}/sign-off`).send(withoutDelete);
     expect(missing.status).toBe(422);
     expect(missing.body.errors).toEqual([expect.objectContaining({ field: 'deactivationDeleteDone' })]);
-    const impossible = await tech.post(`/api/jobs/${job.id}/sign-off`).send({ ...GOOD_SIGN_OFF, ptvIntakeIn: 2, springSeatPressureLb: 'lots', tuneFile: 'a\nb' });
+    const impossible = await tech
+      .post(`/api/jobs/${job.id}/sign-off`)
+      .send({ ...GOOD_SIGN_OFF, ptvIntakeIn: 2, springSeatPressureLb: 'lots', tuneFile: 'a\nb' });
     expect(impossible.status).toBe(422);
-    expect(impossible.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['ptvIntakeIn', 'springSeatPressureLb', 'tuneFile']);
+    expect(impossible.body.errors.map((e: { field: string }) => e.field).sort()).toEqual([
+      'ptvIntakeIn',
+      'springSeatPressureLb',
+      'tuneFile',
+    ]);
 
     const clean = await tech.post(`/api/jobs/${job.id}/sign-off`).send(GOOD_SIGN_OFF);
     expect(clean.status).toBe(201);
-    expect(clean.body.signOff).toMatchObject({ ptvIntakeIn: 0.095, tuneFile: 'fixture-tune v3', deactivationDeleteDone: true, signedBy: expect.any(String), warnings: [] });
+    expect(clean.body.signOff).toMatchObject({
+      ptvIntakeIn: 0.095,
+      tuneFile: 'fixture-tune v3',
+      deactivationDeleteDone: true,
+      signedBy: expect.any(String),
+      warnings: [],
+    });
 
     // Intake 0.070" (< 0.080"), exhaust 0.090" (< 0.100"), coil bind 0.050" (< 0.060"), delete not done.
-    const tight = await tech.post(`/api/jobs/${job.id}/sign-off`).send({ ...GOOD_SIGN_OFF, ptvIntakeIn: 0.07, ptvExhaustIn: 0.09, coilBindMarginIn: 0.05, deactivationDeleteDone: false });
+    const tight = await tech.post(`/api/jobs/${job.id}/sign-off`).send({
+      ...GOOD_SIGN_OFF,
+      ptvIntakeIn: 0.07,
+      ptvExhaustIn: 0.09,
+      coilBindMarginIn: 0.05,
+      deactivationDeleteDone: false,
+    });
     expect(tight.status).toBe(201);
-    expect(tight.body.signOff.warnings.map((w: { field: string }) => w.field)).toEqual(['ptvIntakeIn', 'ptvExhaustIn', 'coilBindMarginIn', 'deactivationDeleteDone']);
+    expect(tight.body.signOff.warnings.map((w: { field: string }) => w.field)).toEqual([
+      'ptvIntakeIn',
+      'ptvExhaustIn',
+      'coilBindMarginIn',
+      'deactivationDeleteDone',
+    ]);
     expect(tight.body.signOff.warnings[0].message).toContain('0.070 in is under the usual 0.080 in minimum');
     // The newest sign-off is the one the job shows; the page and the sheet read the same.
     expect((await tech.get(`/api/jobs/${job.id}`)).body.signOff.ptvIntakeIn).toBe(0.07);
     const sheet = await tech.get(`/jobs/${job.id}`);
     expect(sheet.text).toContain('fixture-tune v3');
     expect(sheet.text).toContain('under the usual 0.080 in minimum');
-    expect(await AuditEntry.count({ where: { action: 'job.signed-off', entityType: 'job', entityId: String((await Job.findOne({ where: { quoteId: job.id } }))!.id) } })).toBe(2);
+    expect(
+      await AuditEntry.count({
+        where: {
+          action: 'job.signed-off',
+          entityType: 'job',
+          entityId: String((await Job.findOne({ where: { quoteId: job.id } }))!.id),
+        },
+      }),
+    ).toBe(2);
   }, 60_000);
 });
 
@@ -189,9 +253,12 @@ describe('a job whose quote is closed at the counter', () => {
     v = (await move(job.id, v, 'in-shop')).body.version;
     // The balance taken at the counter closes the quote (a hand close is refused while money is due).
     const quote = (await counter.get(`/api/quotes/${job.id}`)).body as { version: number; balanceDueCents: number };
-    const closed = await counter.post(`/api/quotes/${job.id}/payments`).send({ version: quote.version, amountCents: quote.balanceDueCents, method: 'cash' });
+    const closed = await counter
+      .post(`/api/quotes/${job.id}/payments`)
+      .send({ version: quote.version, amountCents: quote.balanceDueCents, method: 'cash' });
     expect([closed.status, closed.body.status]).toEqual([201, 'closed']);
-    const active = async () => ((await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as { id: number }[]).map((j) => j.id);
+    const active = async () =>
+      ((await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as { id: number }[]).map((j) => j.id);
     expect(await active()).toContain(job.id);
     expect((await tech.get(`/api/jobs/${job.id}`)).body.state).toBe('in-shop');
     const sheet = await tech.get(`/jobs/${job.id}`);
@@ -202,18 +269,28 @@ describe('a job whose quote is closed at the counter', () => {
     v = (await move(job.id, v, 'ready')).body.version;
     expect((await move(job.id, v, 'collected')).status).toBe(200);
     expect(await active()).not.toContain(job.id);
-    const history = (await tech.get('/api/jobs').query({ view: 'collected', pageSize: 100 })).body.items as { id: number }[];
+    const history = (await tech.get('/api/jobs').query({ view: 'collected', pageSize: 100 })).body.items as {
+      id: number;
+    }[];
     expect(history.map((j) => j.id)).toContain(job.id);
   }, 60_000);
 });
 
 describe('the board order', () => {
   it('puts overdue first, then today, then not booked, then the coming days; pages are stable', async () => {
-    const [later, today, overdue, waiting] = [await paid('Board later'), await paid('Board today'), await paid('Board overdue'), await paid('Board waiting')];
+    const [later, today, overdue, waiting] = [
+      await paid('Board later'),
+      await paid('Board today'),
+      await paid('Board overdue'),
+      await paid('Board waiting'),
+    ];
     await book(later.id, 2);
     await book(today.id, 0);
     await book(overdue.id, -2);
-    const all = (await tech.get('/api/jobs').query({ pageSize: 100 })).body as { items: { id: number; due: string | null }[]; total: number };
+    const all = (await tech.get('/api/jobs').query({ pageSize: 100 })).body as {
+      items: { id: number; due: string | null }[];
+      total: number;
+    };
     const at = (id: number) => all.items.findIndex((j) => j.id === id);
     expect([at(overdue.id), at(today.id), at(waiting.id), at(later.id)].every((i) => i >= 0)).toBe(true);
     expect(at(overdue.id)).toBeLessThan(at(today.id));
@@ -226,11 +303,15 @@ describe('the board order', () => {
     // Page by page in threes: the same jobs in the same order, none twice.
     const paged: number[] = [];
     for (let page = 1; (page - 1) * 3 < all.total; page++) {
-      paged.push(...((await tech.get('/api/jobs').query({ pageSize: 3, page })).body.items as { id: number }[]).map((j) => j.id));
+      paged.push(
+        ...((await tech.get('/api/jobs').query({ pageSize: 3, page })).body.items as { id: number }[]).map((j) => j.id),
+      );
     }
     expect(paged).toEqual(all.items.map((j) => j.id));
 
-    const week = (await tech.get('/api/jobs').query({ from: shopDay(-2), to: shopDay(0), pageSize: 100 })).body.items.map((j: { id: number }) => j.id);
+    const week = (
+      await tech.get('/api/jobs').query({ from: shopDay(-2), to: shopDay(0), pageSize: 100 })
+    ).body.items.map((j: { id: number }) => j.id);
     expect(week).toEqual(expect.arrayContaining([overdue.id, today.id]));
     expect(week).not.toContain(later.id);
     expect(week).not.toContain(waiting.id);

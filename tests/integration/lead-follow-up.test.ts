@@ -22,7 +22,16 @@ const customers: number[] = [];
 
 async function lead(status: 'new' | 'quoted' = 'new') {
   const email = `follow-up-${crypto.randomBytes(4).toString('hex')}@example.com`;
-  const row = await Lead.create({ name: 'Fixture Follow-up', email, phone: null, answers: { engine: '5.3', name: 'Fixture Follow-up', email }, shortlist: null, status, publicTokenHash: null, customerId: null });
+  const row = await Lead.create({
+    name: 'Fixture Follow-up',
+    email,
+    phone: null,
+    answers: { engine: '5.3', name: 'Fixture Follow-up', email },
+    shortlist: null,
+    status,
+    publicTokenHash: null,
+    customerId: null,
+  });
   leads.push(row.id);
   return row;
 }
@@ -46,8 +55,19 @@ describe("a lead's note log", () => {
     const row = await lead();
     const first = await counter.post(`/api/leads/${row.id}/notes`).send({ body: 'Called at lunch, left a message.' });
     expect(first.status).toBe(201);
-    expect(first.body).toMatchObject({ leadId: row.id, body: 'Called at lunch, left a message.', author: expect.any(String), createdAt: expect.any(String) });
-    expect((await counter.post(`/api/leads/${row.id}/notes`).send({ body: 'Rang back: wants a quote for the towing cam.\r\nBooked a visit.' })).status).toBe(201);
+    expect(first.body).toMatchObject({
+      leadId: row.id,
+      body: 'Called at lunch, left a message.',
+      author: expect.any(String),
+      createdAt: expect.any(String),
+    });
+    expect(
+      (
+        await counter
+          .post(`/api/leads/${row.id}/notes`)
+          .send({ body: 'Rang back: wants a quote for the towing cam.\r\nBooked a visit.' })
+      ).status,
+    ).toBe(201);
 
     const empty = await counter.post(`/api/leads/${row.id}/notes`).send({ body: '   ' });
     expect(empty.status).toBe(422);
@@ -58,8 +78,13 @@ describe("a lead's note log", () => {
     expect((await tech.post(`/api/leads/${row.id}/notes`).send({ body: 'not my job' })).status).toBe(403);
 
     const stored = await LeadNote.findAll({ where: { leadId: row.id }, order: [['id', 'ASC']] });
-    expect(stored.map((n) => n.body)).toEqual(['Called at lunch, left a message.', 'Rang back: wants a quote for the towing cam.\nBooked a visit.']);
-    expect(await AuditEntry.count({ where: { action: 'lead.note-added', entityType: 'lead', entityId: String(row.id) } })).toBe(2);
+    expect(stored.map((n) => n.body)).toEqual([
+      'Called at lunch, left a message.',
+      'Rang back: wants a quote for the towing cam.\nBooked a visit.',
+    ]);
+    expect(
+      await AuditEntry.count({ where: { action: 'lead.note-added', entityType: 'lead', entityId: String(row.id) } }),
+    ).toBe(2);
     const page = await counter.get('/leads');
     expect(page.text).toContain('Called at lunch, left a message.');
   });
@@ -67,7 +92,12 @@ describe("a lead's note log", () => {
 
 describe('an interview started from a lead', () => {
   const build = (leadId: number, label: string) =>
-    counter.post('/api/builds').send({ customer: { name: `Fixture ${label}`, email: `${label}-${crypto.randomBytes(4).toString('hex')}@example.com` }, vehicleLabel: `Fixture truck (${label})`, profile: truckProfile(), leadId });
+    counter.post('/api/builds').send({
+      customer: { name: `Fixture ${label}`, email: `${label}-${crypto.randomBytes(4).toString('hex')}@example.com` },
+      vehicleLabel: `Fixture truck (${label})`,
+      profile: truckProfile(),
+      leadId,
+    });
 
   it('links the lead to the new customer and marks it contacted, with an audit row', async () => {
     const row = await lead();
@@ -76,7 +106,9 @@ describe('an interview started from a lead', () => {
     customers.push(made.body.customerId);
     await row.reload();
     expect(row).toMatchObject({ customerId: made.body.customerId, status: 'contacted', version: 2 });
-    const audit = await AuditEntry.findOne({ where: { action: 'lead.linked', entityType: 'lead', entityId: String(row.id) } });
+    const audit = await AuditEntry.findOne({
+      where: { action: 'lead.linked', entityType: 'lead', entityId: String(row.id) },
+    });
     expect(audit?.after).toEqual({ customerId: made.body.customerId, status: 'contacted' });
   });
 
@@ -100,7 +132,19 @@ describe("the customer's copy", () => {
     const { appUrl } = readRuntime();
     await clearRateLimits('lead-'); // other files post leads from this address too
     const email = `follow-up-copy-${crypto.randomBytes(4).toString('hex')}@example.com`;
-    const answers = { engine: '5.3', use: 'towing', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000', name: 'Fixture <Copy>', email, consent: true };
+    const answers = {
+      engine: '5.3',
+      use: 'towing',
+      idle: 'smooth',
+      emissions: 'no',
+      transmission: 'automatic',
+      driveline: 'stock',
+      exhaust: 'stock',
+      budget: '1500-3000',
+      name: 'Fixture <Copy>',
+      email,
+      consent: true,
+    };
     const res = await request(appUrl).post('/api/leads').send(answers);
     expect(res.status).toBe(201);
     leads.push(res.body.id);

@@ -16,14 +16,31 @@ const run = crypto.randomBytes(4).toString('hex');
 const NAME = `Flood Tester ${run}`;
 
 const answers = (contact: { email?: string; phone?: string }) => ({
-  engine: '5.3', use: 'daily', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: 'unsure',
-  name: NAME, consent: true, ...contact,
+  engine: '5.3',
+  use: 'daily',
+  idle: 'smooth',
+  emissions: 'no',
+  transmission: 'automatic',
+  driveline: 'stock',
+  exhaust: 'stock',
+  budget: 'unsure',
+  name: NAME,
+  consent: true,
+  ...contact,
 });
-const post = (body: unknown) => request(appUrl).post('/api/leads').send(body as object);
+const post = (body: unknown) =>
+  request(appUrl)
+    .post('/api/leads')
+    .send(body as object);
 
 let sequelize: Sequelize;
 const leadCount = async () =>
-  (await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM leads WHERE name = ?', { replacements: [NAME], type: QueryTypes.SELECT }))[0].n;
+  (
+    await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM leads WHERE name = ?', {
+      replacements: [NAME],
+      type: QueryTypes.SELECT,
+    })
+  )[0].n;
 
 beforeAll(() => {
   sequelize = connectTestDatabase();
@@ -32,9 +49,16 @@ beforeEach(async () => {
   await clearRateLimits('lead-');
 });
 afterAll(async () => {
-  const ids = (await sequelize.query<{ id: number }>('SELECT id FROM leads WHERE name = ?', { replacements: [NAME], type: QueryTypes.SELECT })).map((r) => r.id);
+  const ids = (
+    await sequelize.query<{ id: number }>('SELECT id FROM leads WHERE name = ?', {
+      replacements: [NAME],
+      type: QueryTypes.SELECT,
+    })
+  ).map((r) => r.id);
   if (ids.length) {
-    await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", { replacements: [ids.map(String)] });
+    await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", {
+      replacements: [ids.map(String)],
+    });
     await sequelize.query('DELETE FROM leads WHERE id IN (?)', { replacements: [ids] });
   }
   await clearRateLimits('lead-');
@@ -43,7 +67,12 @@ afterAll(async () => {
 
 describe('lead flood limits', () => {
   it('counts an e-mail address in any case and with any +tag as one contact', async () => {
-    const spellings = [`wren-${run}@example.com`, `Wren-${run}+ask1@Example.com`, `WREN-${run}+cams@EXAMPLE.COM`, `wren-${run}+again@example.com`];
+    const spellings = [
+      `wren-${run}@example.com`,
+      `Wren-${run}+ask1@Example.com`,
+      `WREN-${run}+cams@EXAMPLE.COM`,
+      `wren-${run}+again@example.com`,
+    ];
     const statuses = [];
     for (const email of spellings) statuses.push((await post(answers({ email }))).status);
     expect(statuses).toEqual([201, 201, 201, 429]);
@@ -53,21 +82,28 @@ describe('lead flood limits', () => {
     const line = String(1000 + (parseInt(run.slice(0, 4), 16) % 9000));
     const spellings = [`555-010-${line}`, `(555) 010 ${line}`, `555.010.${line}`, `+1 555 010 ${line}`];
     const statuses = [];
-    for (const phone of spellings) statuses.push((await post(answers({ phone, email: `ph-${crypto.randomBytes(3).toString('hex')}-${run}@example.com` }))).status);
+    for (const phone of spellings)
+      statuses.push(
+        (await post(answers({ phone, email: `ph-${crypto.randomBytes(3).toString('hex')}-${run}@example.com` })))
+          .status,
+      );
     expect(statuses).toEqual([201, 201, 201, 429]);
   });
 
   it('lets only 3 of 8 concurrent posts from one contact through', async () => {
     const before = await leadCount();
     const email = `burst-${run}@example.com`;
-    const statuses = (await Promise.all(Array.from({ length: 8 }, () => post(answers({ email }))))).map((r) => r.status);
+    const statuses = (await Promise.all(Array.from({ length: 8 }, () => post(answers({ email }))))).map(
+      (r) => r.status,
+    );
     expect(statuses.filter((s) => s === 201)).toHaveLength(3);
     expect(statuses.filter((s) => s === 429)).toHaveLength(5);
     expect((await leadCount()) - before).toBe(3);
   });
 
   it('holds back more than 20 leads an hour from one address, whatever the contacts', async () => {
-    for (let i = 0; i < 20; i += 1) expect((await post(answers({ email: `addr-${i}-${run}@example.com` }))).status).toBe(201);
+    for (let i = 0; i < 20; i += 1)
+      expect((await post(answers({ email: `addr-${i}-${run}@example.com` }))).status).toBe(201);
     const refused = await post(answers({ email: `addr-last-${run}@example.com` }));
     expect(refused.status).toBe(429);
     expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
@@ -87,13 +123,20 @@ describe('lead flood limits', () => {
 
 describe('body size limits', () => {
   it('refuses a 60 MB JSON post to the lead route with 413 before reading it', async () => {
-    const huge = JSON.stringify({ ...answers({ email: `huge-${run}@example.com` }), name: 'x'.repeat(60 * 1024 * 1024) });
+    const huge = JSON.stringify({
+      ...answers({ email: `huge-${run}@example.com` }),
+      name: 'x'.repeat(60 * 1024 * 1024),
+    });
     const started = Date.now();
     const status = await new Promise<number>((resolve, reject) => {
-      const req = http.request(`${appUrl}/api/leads`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'Content-Length': Buffer.byteLength(huge) } }, (res) => {
-        res.resume();
-        resolve(res.statusCode ?? 0);
-      });
+      const req = http.request(
+        `${appUrl}/api/leads`,
+        { method: 'POST', headers: { 'Content-Type': 'application/json', 'Content-Length': Buffer.byteLength(huge) } },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode ?? 0);
+        },
+      );
       req.on('error', reject);
       req.end(huge);
     });
@@ -105,12 +148,16 @@ describe('body size limits', () => {
     const written = await new Promise<{ status: number; bytes: number }>((resolve, reject) => {
       let bytes = 0;
       let answered = false;
-      const req = http.request(`${appUrl}/api/leads`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'Transfer-Encoding': 'chunked' } }, (res) => {
-        answered = true;
-        res.resume();
-        resolve({ status: res.statusCode ?? 0, bytes });
-        req.destroy();
-      });
+      const req = http.request(
+        `${appUrl}/api/leads`,
+        { method: 'POST', headers: { 'Content-Type': 'application/json', 'Transfer-Encoding': 'chunked' } },
+        (res) => {
+          answered = true;
+          res.resume();
+          resolve({ status: res.statusCode ?? 0, bytes });
+          req.destroy();
+        },
+      );
       req.on('error', (error) => (answered ? undefined : reject(error)));
       const chunk = Buffer.alloc(64 * 1024, 'x');
       req.write('{"name":"');
@@ -128,9 +175,17 @@ describe('body size limits', () => {
   });
 
   it('refuses a webhook body over 1 MB with 413 before checking its signature', async () => {
-    const res = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', 't=1,v1=00').set('content-type', 'application/json').send(JSON.stringify({ pad: 'x'.repeat(2 * 1024 * 1024) }));
+    const res = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set('Stripe-Signature', 't=1,v1=00')
+      .set('content-type', 'application/json')
+      .send(JSON.stringify({ pad: 'x'.repeat(2 * 1024 * 1024) }));
     expect(res.status).toBe(413);
-    const small = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', 't=1,v1=00').set('content-type', 'application/json').send('{}');
+    const small = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set('Stripe-Signature', 't=1,v1=00')
+      .set('content-type', 'application/json')
+      .send('{}');
     expect(small.status).toBe(400);
   });
 });

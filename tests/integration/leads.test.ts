@@ -17,8 +17,19 @@ const run = crypto.randomBytes(4).toString('hex');
 const email = (tag: string) => `ask-${tag}-${run}@example.com`;
 
 const fullAnswers = {
-  engine: '5.3', vehicle: 'suv', use: 'towing', idle: 'smooth', emissions: 'no', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000',
-  name: 'Wren Halvorsen', email: email('full'), phone: '555-0107', consent: true,
+  engine: '5.3',
+  vehicle: 'suv',
+  use: 'towing',
+  idle: 'smooth',
+  emissions: 'no',
+  transmission: 'automatic',
+  driveline: 'stock',
+  exhaust: 'stock',
+  budget: '1500-3000',
+  name: 'Wren Halvorsen',
+  email: email('full'),
+  phone: '555-0107',
+  consent: true,
 };
 
 let sequelize: Sequelize;
@@ -29,9 +40,16 @@ beforeAll(() => {
 });
 afterAll(async () => {
   // Leave the database as we found it: our leads and their audit rows.
-  const ids = (await sequelize.query<{ id: number }>('SELECT id FROM leads WHERE email LIKE ?', { replacements: [`ask-%-${run}@example.com`], type: QueryTypes.SELECT })).map((r) => r.id);
+  const ids = (
+    await sequelize.query<{ id: number }>('SELECT id FROM leads WHERE email LIKE ?', {
+      replacements: [`ask-%-${run}@example.com`],
+      type: QueryTypes.SELECT,
+    })
+  ).map((r) => r.id);
   if (ids.length) {
-    await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", { replacements: [ids.map(String)] });
+    await sequelize.query("DELETE FROM audit_log WHERE entity_type = 'lead' AND entity_id IN (?)", {
+      replacements: [ids.map(String)],
+    });
     await sequelize.query('DELETE FROM leads WHERE id IN (?)', { replacements: [ids] });
   }
   await clearRateLimits('lead-');
@@ -67,21 +85,43 @@ describe('POST /api/leads with a full answer set', () => {
   });
 
   it('stores the lead with the answers, the same shortlist and only the token’s hash', async () => {
-    const [row] = await sequelize.query<{ name: string; email: string; phone: string; status: string; answers: string | object; shortlist: string | object; public_token_hash: string; version: number }>(
-      'SELECT name, email, phone, status, answers, shortlist, public_token_hash, version FROM leads WHERE id = ?',
-      { replacements: [body.id], type: QueryTypes.SELECT },
-    );
+    const [row] = await sequelize.query<{
+      name: string;
+      email: string;
+      phone: string;
+      status: string;
+      answers: string | object;
+      shortlist: string | object;
+      public_token_hash: string;
+      version: number;
+    }>('SELECT name, email, phone, status, answers, shortlist, public_token_hash, version FROM leads WHERE id = ?', {
+      replacements: [body.id],
+      type: QueryTypes.SELECT,
+    });
     const json = (v: string | object) => (typeof v === 'string' ? JSON.parse(v) : v);
-    expect(row).toMatchObject({ name: 'Wren Halvorsen', email: fullAnswers.email, phone: '555-0107', status: 'new', version: 1 });
+    expect(row).toMatchObject({
+      name: 'Wren Halvorsen',
+      email: fullAnswers.email,
+      phone: '555-0107',
+      status: 'new',
+      version: 1,
+    });
     expect(json(row.answers)).toMatchObject({ engine: '5.3', use: 'towing', consent: true });
     expect(json(row.shortlist).entries.map((e: Entry) => e.camId)).toEqual(body.shortlist.entries.map((e) => e.camId));
     expect(row.public_token_hash).toBe(sha256(body.token));
-    const audit = await sequelize.query("SELECT id FROM audit_log WHERE action = 'lead.created' AND entity_id = ?", { replacements: [String(body.id)], type: QueryTypes.SELECT });
+    const audit = await sequelize.query("SELECT id FROM audit_log WHERE action = 'lead.created' AND entity_id = ?", {
+      replacements: [String(body.id)],
+      type: QueryTypes.SELECT,
+    });
     expect(audit).toHaveLength(1);
   });
 
   it('e-mails the shop that a lead arrived, with the answers in plain words', async () => {
-    const messages = (await request(mailUrl).get('/messages').query({ to: SHOP_EMAIL })).body as { subject: string; text: string; reply_to?: unknown }[];
+    const messages = (await request(mailUrl).get('/messages').query({ to: SHOP_EMAIL })).body as {
+      subject: string;
+      text: string;
+      reply_to?: unknown;
+    }[];
     const mail = messages.find((m) => m.subject === `New questionnaire lead #${body.id}: Wren Halvorsen`);
     expect(mail).toBeDefined();
     expect(mail!.text).toContain('What do you mostly use it for? Towing or hauling');
@@ -109,11 +149,24 @@ describe('POST /api/leads with a full answer set', () => {
   });
 
   it('a vehicle that must pass emissions ("not sure" counts as yes) is shown certified cams only; one that need not pass is not limited', async () => {
-    const certified = (await sequelize.query<{ id: number }>('SELECT id FROM cams WHERE emissions_certified = 1 AND is_factory_baseline = 0 AND active = 1 AND archived_at IS NULL', { type: QueryTypes.SELECT })).map((r) => r.id);
+    const certified = (
+      await sequelize.query<{ id: number }>(
+        'SELECT id FROM cams WHERE emissions_certified = 1 AND is_factory_baseline = 0 AND active = 1 AND archived_at IS NULL',
+        { type: QueryTypes.SELECT },
+      )
+    ).map((r) => r.id);
     // The demo shop stocks fewer certified cams than a full shortlist: without the filter an uncertified one would be listed.
     expect(certified.length).toBeLessThan(3);
     for (const emissions of ['unsure', 'yes']) {
-      const res = await request(appUrl).post('/api/leads').send({ ...fullAnswers, emissions, engine: 'unsure', email: email(`emissions-${emissions}`), phone: undefined });
+      const res = await request(appUrl)
+        .post('/api/leads')
+        .send({
+          ...fullAnswers,
+          emissions,
+          engine: 'unsure',
+          email: email(`emissions-${emissions}`),
+          phone: undefined,
+        });
       expect(res.status).toBe(201);
       const entries = res.body.shortlist.entries as Entry[];
       expect(entries.map((e) => e.rank)).toEqual(certified.map((_, i) => i + 1));
@@ -128,8 +181,14 @@ describe('POST /api/leads with a full answer set', () => {
       expect(page.text).not.toContain('not certified for emissions-tested road use');
     }
     // The full answer set above said "no": its three choices are not limited to certified cams.
-    const stored = await sequelize.query<{ shortlist: string | { entries: Entry[] } }>('SELECT shortlist FROM leads WHERE email = ?', { replacements: [fullAnswers.email], type: QueryTypes.SELECT });
-    const list = typeof stored[0].shortlist === 'string' ? (JSON.parse(stored[0].shortlist) as { entries: Entry[] }) : stored[0].shortlist;
+    const stored = await sequelize.query<{ shortlist: string | { entries: Entry[] } }>(
+      'SELECT shortlist FROM leads WHERE email = ?',
+      { replacements: [fullAnswers.email], type: QueryTypes.SELECT },
+    );
+    const list =
+      typeof stored[0].shortlist === 'string'
+        ? (JSON.parse(stored[0].shortlist) as { entries: Entry[] })
+        : stored[0].shortlist;
     expect(list.entries).toHaveLength(3);
     expect(list.entries.some((e) => !e.emissionsCertified)).toBe(true);
   });
@@ -146,7 +205,9 @@ describe('POST /api/leads with bad answers', () => {
     ['email', { email: undefined, phone: undefined }, /e-mail address or a phone number/],
     ['extra', { extra: 1 }, /unknown field/],
   ])('422 naming %s', async (field, change, message) => {
-    const res = await request(appUrl).post('/api/leads').send({ ...fullAnswers, email: email('bad'), ...change });
+    const res = await request(appUrl)
+      .post('/api/leads')
+      .send({ ...fullAnswers, email: email('bad'), ...change });
     expect(res.status).toBe(422);
     const hit = (res.body.errors as { field: string; message: string }[]).find((e) => e.field === field);
     expect(hit?.message).toMatch(message);
@@ -158,7 +219,10 @@ describe('POST /api/leads with bad answers', () => {
   });
 
   it('refuses a post from another site', async () => {
-    const res = await request(appUrl).post('/api/leads').set('Origin', 'https://elsewhere.example').send({ ...fullAnswers, email: email('xsite') });
+    const res = await request(appUrl)
+      .post('/api/leads')
+      .set('Origin', 'https://elsewhere.example')
+      .send({ ...fullAnswers, email: email('xsite') });
     expect(res.status).toBe(403);
   });
 
@@ -178,7 +242,9 @@ describe('the staff side of leads', () => {
   let version: number;
 
   beforeAll(async () => {
-    const res = await request(appUrl).post('/api/leads').send({ ...fullAnswers, name: 'Odile Brannock', email: email('staff') });
+    const res = await request(appUrl)
+      .post('/api/leads')
+      .send({ ...fullAnswers, name: 'Odile Brannock', email: email('staff') });
     expect(res.status).toBe(201);
     leadId = res.body.id;
   });
@@ -188,7 +254,15 @@ describe('the staff side of leads', () => {
     const res = await counter.get('/api/leads').query({ status: 'new', pageSize: 100 });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ page: 1, pageSize: 100 });
-    const lead = (res.body.items as { id: number; status: string; version: number; answers: { engine: string }; shortlist: { entries: unknown[] } }[]).find((l) => l.id === leadId);
+    const lead = (
+      res.body.items as {
+        id: number;
+        status: string;
+        version: number;
+        answers: { engine: string };
+        shortlist: { entries: unknown[] };
+      }[]
+    ).find((l) => l.id === leadId);
     expect(lead).toMatchObject({ status: 'new', answers: { engine: '5.3' } });
     expect(lead!.shortlist.entries).toHaveLength(3);
     version = lead!.version;
@@ -212,7 +286,10 @@ describe('the staff side of leads', () => {
     expect(bad.status).toBe(422);
     expect(bad.body.errors[0].field).toBe('status');
     expect((await manager.patch('/api/leads/999999').send({ version: 1, status: 'closed' })).status).toBe(404);
-    const audit = await sequelize.query("SELECT id FROM audit_log WHERE action = 'lead.status-changed' AND entity_id = ?", { replacements: [String(leadId)], type: QueryTypes.SELECT });
+    const audit = await sequelize.query(
+      "SELECT id FROM audit_log WHERE action = 'lead.status-changed' AND entity_id = ?",
+      { replacements: [String(leadId)], type: QueryTypes.SELECT },
+    );
     expect(audit).toHaveLength(1);
   });
 
@@ -244,7 +321,9 @@ describe('the staff side of leads', () => {
     expect((await tech.get('/api/leads')).status).toBe(403);
     expect((await tech.patch(`/api/leads/${leadId}`).send({ version: 1, status: 'closed' })).status).toBe(403);
     expect((await request(appUrl).get('/api/leads')).status).toBe(401);
-    expect((await request(appUrl).patch(`/api/leads/${leadId}`).send({ version: 1, status: 'closed' })).status).toBe(401);
+    expect((await request(appUrl).patch(`/api/leads/${leadId}`).send({ version: 1, status: 'closed' })).status).toBe(
+      401,
+    );
     const page = await request(appUrl).get('/leads').redirects(0);
     expect([302, 303, 307, 308]).toContain(page.status);
     expect(page.headers.location).toMatch(/\/sign-in/);

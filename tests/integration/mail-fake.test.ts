@@ -9,7 +9,15 @@ import { startFakeProcess, stopFakeProcess, type FakeProcess } from '../support/
 const API_KEY = 're_test_suite_only';
 
 type Fake = FakeProcess;
-type Listed = { id: string; from: string; to: string[]; subject: string; html: string | null; text: string | null; createdAt: string };
+type Listed = {
+  id: string;
+  from: string;
+  to: string[];
+  subject: string;
+  html: string | null;
+  text: string | null;
+  createdAt: string;
+};
 
 const startFake = (dataDir: string) =>
   startFakeProcess('mail-fake', { MAIL_FAKE_PORT: '0', MAIL_FAKE_API_KEY: API_KEY, MAIL_FAKE_DATA_DIR: dataDir });
@@ -47,12 +55,17 @@ describe('mail fake via the resend SDK', () => {
 
   it('stores sent e-mails and lists them newest first', async () => {
     const first = await resend.emails.send({
-      from: 'Quotes <quotes@shop.example.test>', to: 'driver@example.test',
-      subject: 'Your camshaft quote', html: '<p>Quote <b>#101</b></p>', text: 'Quote #101',
+      from: 'Quotes <quotes@shop.example.test>',
+      to: 'driver@example.test',
+      subject: 'Your camshaft quote',
+      html: '<p>Quote <b>#101</b></p>',
+      text: 'Quote #101',
     });
     const second = await resend.emails.send({
-      from: 'quotes@shop.example.test', to: ['other@example.test', 'driver@example.test'],
-      subject: 'Deposit received', text: 'Thanks',
+      from: 'quotes@shop.example.test',
+      to: ['other@example.test', 'driver@example.test'],
+      subject: 'Deposit received',
+      text: 'Thanks',
     });
     expect(first.error).toBeNull();
     expect(second.error).toBeNull();
@@ -60,8 +73,11 @@ describe('mail fake via the resend SDK', () => {
     const listed = await listMessages(fake);
     expect(listed.map((m) => m.id)).toEqual([second.data!.id, first.data!.id]);
     expect(listed[1]).toMatchObject({
-      from: 'Quotes <quotes@shop.example.test>', to: ['driver@example.test'],
-      subject: 'Your camshaft quote', html: '<p>Quote <b>#101</b></p>', text: 'Quote #101',
+      from: 'Quotes <quotes@shop.example.test>',
+      to: ['driver@example.test'],
+      subject: 'Your camshaft quote',
+      html: '<p>Quote <b>#101</b></p>',
+      text: 'Quote #101',
     });
     expect(Date.parse(listed[1].createdAt)).not.toBeNaN();
     expect(listed[0].to).toEqual(['other@example.test', 'driver@example.test']);
@@ -69,13 +85,23 @@ describe('mail fake via the resend SDK', () => {
 
   it('filters the listing by recipient', async () => {
     await resend.emails.send({ from: 'a@shop.example.test', to: 'one@example.test', subject: 'one', text: '1' });
-    await resend.emails.send({ from: 'a@shop.example.test', to: 'Two Person <two@example.test>', subject: 'two', text: '2' });
+    await resend.emails.send({
+      from: 'a@shop.example.test',
+      to: 'Two Person <two@example.test>',
+      subject: 'two',
+      text: '2',
+    });
     expect((await listMessages(fake, 'two@example.test')).map((m) => m.subject)).toEqual(['two']);
     expect(await listMessages(fake, 'nobody@example.test')).toEqual([]);
   });
 
   it('returns a sent e-mail through emails.get', async () => {
-    const sent = await resend.emails.send({ from: 'a@shop.example.test', to: 'x@example.test', subject: 'Lookup', text: 'hi' });
+    const sent = await resend.emails.send({
+      from: 'a@shop.example.test',
+      to: 'x@example.test',
+      subject: 'Lookup',
+      text: 'hi',
+    });
     const fetched = await resend.emails.get(sent.data!.id);
     expect(fetched.error).toBeNull();
     expect(fetched.data).toMatchObject({ id: sent.data!.id, subject: 'Lookup', to: ['x@example.test'] });
@@ -92,20 +118,33 @@ describe('mail fake via the resend SDK', () => {
   });
 
   it('rejects a missing subject with a 422 the SDK reports', async () => {
-    const result = await resend.emails.send({ from: 'a@shop.example.test', to: 'x@example.test', text: 'no subject' } as never);
+    const result = await resend.emails.send({
+      from: 'a@shop.example.test',
+      to: 'x@example.test',
+      text: 'no subject',
+    } as never);
     expect(result.data).toBeNull();
     expect(result.error).toMatchObject({ statusCode: 422, name: 'missing_required_field' });
     expect(await listMessages(fake)).toEqual([]);
   });
 
   it('rejects a message with neither html nor text', async () => {
-    const result = await resend.emails.send({ from: 'a@shop.example.test', to: 'x@example.test', subject: 'empty' } as never);
+    const result = await resend.emails.send({
+      from: 'a@shop.example.test',
+      to: 'x@example.test',
+      subject: 'empty',
+    } as never);
     expect(result.error).toMatchObject({ statusCode: 422 });
   });
 
   it('refuses a wrong API key', async () => {
     const intruder = new Resend('re_wrong_key');
-    const result = await intruder.emails.send({ from: 'a@shop.example.test', to: 'x@example.test', subject: 's', text: 't' });
+    const result = await intruder.emails.send({
+      from: 'a@shop.example.test',
+      to: 'x@example.test',
+      subject: 's',
+      text: 't',
+    });
     expect(result.data).toBeNull();
     expect(result.error).toMatchObject({ statusCode: 403, name: 'invalid_api_key' });
     expect(await listMessages(fake)).toEqual([]);
@@ -121,8 +160,10 @@ describe('mail fake via the resend SDK', () => {
 
   it('escapes message content on the inbox page and sandboxes the HTML body', async () => {
     const sent = await resend.emails.send({
-      from: 'a@shop.example.test', to: 'x@example.test',
-      subject: '<script>alert(1)</script>', html: '<img src=x onerror="alert(2)">',
+      from: 'a@shop.example.test',
+      to: 'x@example.test',
+      subject: '<script>alert(1)</script>',
+      html: '<img src=x onerror="alert(2)">',
     });
     const page = await (await fetch(`${fake.baseUrl}/?id=${sent.data!.id}`)).text();
     expect(page).not.toContain('<script>alert(1)</script>');
@@ -131,7 +172,12 @@ describe('mail fake via the resend SDK', () => {
   });
 
   it('keeps messages across a restart and shuts down cleanly', async () => {
-    const sent = await resend.emails.send({ from: 'a@shop.example.test', to: 'x@example.test', subject: 'Survivor', text: 'still here' });
+    const sent = await resend.emails.send({
+      from: 'a@shop.example.test',
+      to: 'x@example.test',
+      subject: 'Survivor',
+      text: 'still here',
+    });
     expect(await stopFake(fake)).toBe(0);
 
     fake = await startFake(dataDir);

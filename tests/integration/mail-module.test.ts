@@ -7,7 +7,11 @@ describe('the app mail module', () => {
     const subject = `Your quote is ready ${Date.now()}`;
     const { id } = await sendMail({ to: 'mail.module.test@example.com', subject, html: '<p>Hello</p>', text: 'Hello' });
     expect(id).toBeTruthy();
-    const messages = (await (await fetch(`${mailUrl}/messages`)).json()) as { id: string; to: string[]; subject: string }[];
+    const messages = (await (await fetch(`${mailUrl}/messages`)).json()) as {
+      id: string;
+      to: string[];
+      subject: string;
+    }[];
     const found = messages.find((m) => m.id === id);
     expect(found).toBeDefined();
     expect(found!.subject).toBe(subject);

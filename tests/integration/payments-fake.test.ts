@@ -29,20 +29,29 @@ function startReceiver() {
         res.writeHead(503).end();
         return;
       }
-      received.push({ body: Buffer.concat(chunks).toString('utf8'), signature: String(req.headers['stripe-signature']) });
+      received.push({
+        body: Buffer.concat(chunks).toString('utf8'),
+        signature: String(req.headers['stripe-signature']),
+      });
       res.writeHead(200, { 'Content-Type': 'application/json' }).end('{"received":true}');
     });
   });
   const ready = new Promise<string>((resolve) => {
-    server.listen(0, '127.0.0.1', () => resolve(`http://127.0.0.1:${(server.address() as AddressInfo).port}/hooks/payments`));
+    server.listen(0, '127.0.0.1', () =>
+      resolve(`http://127.0.0.1:${(server.address() as AddressInfo).port}/hooks/payments`),
+    );
   });
   return { server, received, control, ready };
 }
 
 const startFake = (dataDir: string, webhookUrl: string) =>
   startFakeProcess('payments-fake', {
-    PAYMENTS_FAKE_PORT: '0', PAYMENTS_FAKE_API_KEY: API_KEY, PAYMENTS_FAKE_DATA_DIR: dataDir,
-    PAYMENTS_FAKE_WEBHOOK_URL: webhookUrl, PAYMENTS_FAKE_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENTS_FAKE_WEBHOOK_RETRY_MS: '50',
+    PAYMENTS_FAKE_PORT: '0',
+    PAYMENTS_FAKE_API_KEY: API_KEY,
+    PAYMENTS_FAKE_DATA_DIR: dataDir,
+    PAYMENTS_FAKE_WEBHOOK_URL: webhookUrl,
+    PAYMENTS_FAKE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+    PAYMENTS_FAKE_WEBHOOK_RETRY_MS: '50',
   });
 
 async function waitFor<T>(probe: () => Promise<T | undefined> | T | undefined, what: string): Promise<T> {
@@ -61,7 +70,8 @@ describe('payments fake via the stripe SDK', () => {
   let fake: Fake;
   let stripe: Stripe;
 
-  const sdk = (key: string) => new Stripe(key, { host: '127.0.0.1', port: fake.port, protocol: 'http', maxNetworkRetries: 0 });
+  const sdk = (key: string) =>
+    new Stripe(key, { host: '127.0.0.1', port: fake.port, protocol: 'http', maxNetworkRetries: 0 });
 
   const createDeposit = (overrides: Partial<Stripe.Checkout.SessionCreateParams> = {}) =>
     stripe.checkout.sessions.create({
@@ -105,9 +115,16 @@ describe('payments fake via the stripe SDK', () => {
     const session = await createDeposit();
     expect(session.id).toMatch(/^cs_test_/);
     expect(session).toMatchObject({
-      object: 'checkout.session', mode: 'payment', status: 'open', payment_status: 'unpaid',
-      amount_total: 6000, currency: 'usd', customer_email: 'driver@example.test',
-      client_reference_id: 'q-101', metadata: { quoteId: 'q-101' }, payment_intent: null,
+      object: 'checkout.session',
+      mode: 'payment',
+      status: 'open',
+      payment_status: 'unpaid',
+      amount_total: 6000,
+      currency: 'usd',
+      customer_email: 'driver@example.test',
+      client_reference_id: 'q-101',
+      metadata: { quoteId: 'q-101' },
+      payment_intent: null,
     });
     expect(session.url).toBe(`${fake.baseUrl}/pay/${session.id}`);
 
@@ -120,9 +137,13 @@ describe('payments fake via the stripe SDK', () => {
   });
 
   it('rejects an incomplete line item with a parameter error', async () => {
-    const bad = createDeposit({ line_items: [{ price_data: { currency: 'usd', product_data: { name: 'x' } }, quantity: 1 }] });
+    const bad = createDeposit({
+      line_items: [{ price_data: { currency: 'usd', product_data: { name: 'x' } }, quantity: 1 }],
+    });
     await expect(bad).rejects.toMatchObject({
-      type: 'StripeInvalidRequestError', statusCode: 400, param: 'line_items[0][price_data][unit_amount]',
+      type: 'StripeInvalidRequestError',
+      statusCode: 400,
+      param: 'line_items[0][price_data][unit_amount]',
     });
   });
 
@@ -139,17 +160,31 @@ describe('payments fake via the stripe SDK', () => {
     expect(event.id).toBe(sent.event.id);
     expect(event.type).toBe('checkout.session.completed');
     const paid = event.data.object as Stripe.Checkout.Session;
-    expect(paid).toMatchObject({ id: session.id, status: 'complete', payment_status: 'paid', metadata: { quoteId: 'q-101' } });
+    expect(paid).toMatchObject({
+      id: session.id,
+      status: 'complete',
+      payment_status: 'paid',
+      metadata: { quoteId: 'q-101' },
+    });
 
     const tampered = body.replace('"amount_total": 6000', '"amount_total": 1');
     expect(tampered).not.toBe(body);
-    expect(() => stripe.webhooks.constructEvent(tampered, signature, WEBHOOK_SECRET)).toThrow(Stripe.errors.StripeSignatureVerificationError);
-    expect(() => stripe.webhooks.constructEvent(body, signature, 'whsec_someone_else')).toThrow(Stripe.errors.StripeSignatureVerificationError);
+    expect(() => stripe.webhooks.constructEvent(tampered, signature, WEBHOOK_SECRET)).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
+    expect(() => stripe.webhooks.constructEvent(body, signature, 'whsec_someone_else')).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
 
     const retrieved = await stripe.checkout.sessions.retrieve(session.id, { expand: ['payment_intent'] });
     expect(retrieved.status).toBe('complete');
     const intent = retrieved.payment_intent as Stripe.PaymentIntent;
-    expect(intent).toMatchObject({ status: 'succeeded', amount: 6000, currency: 'usd', metadata: { quoteId: 'q-101' } });
+    expect(intent).toMatchObject({
+      status: 'succeeded',
+      amount: 6000,
+      currency: 'usd',
+      metadata: { quoteId: 'q-101' },
+    });
     expect((await stripe.paymentIntents.retrieve(intent.id)).amount_received).toBe(6000);
   });
 
@@ -174,7 +209,9 @@ describe('payments fake via the stripe SDK', () => {
     }, 'the retried delivery');
     expect(entry.delivery.attempts.map((a) => a.statusCode)).toEqual([503, 503, 200]);
     expect(receiver.received).toHaveLength(1);
-    expect(stripe.webhooks.constructEvent(receiver.received[0].body, receiver.received[0].signature, WEBHOOK_SECRET).id).toBe(sent.event.id);
+    expect(
+      stripe.webhooks.constructEvent(receiver.received[0].body, receiver.received[0].signature, WEBHOOK_SECRET).id,
+    ).toBe(sent.event.id);
   });
 
   it('refunds part of a payment and refuses more than what is left', async () => {
@@ -187,40 +224,60 @@ describe('payments fake via the stripe SDK', () => {
     expect((await stripe.refunds.retrieve(partial.id)).amount).toBe(4000);
 
     await expect(stripe.refunds.create({ payment_intent: intentId as string, amount: 2001 })).rejects.toMatchObject({
-      type: 'StripeInvalidRequestError', statusCode: 400, code: 'amount_too_large', param: 'amount',
+      type: 'StripeInvalidRequestError',
+      statusCode: 400,
+      code: 'amount_too_large',
+      param: 'amount',
     });
 
     // Without an amount the refund takes whatever is left.
     expect((await stripe.refunds.create({ payment_intent: intentId as string })).amount).toBe(2000);
 
-    const refundEvent = await waitFor(() => receiver.received
-      .map((r) => stripe.webhooks.constructEvent(r.body, r.signature, WEBHOOK_SECRET))
-      .find((e) => e.type === 'charge.refunded' && (e.data.object as Stripe.Charge).refunded), 'charge.refunded');
+    const refundEvent = await waitFor(
+      () =>
+        receiver.received
+          .map((r) => stripe.webhooks.constructEvent(r.body, r.signature, WEBHOOK_SECRET))
+          .find((e) => e.type === 'charge.refunded' && (e.data.object as Stripe.Charge).refunded),
+      'charge.refunded',
+    );
     expect((refundEvent.data.object as Stripe.Charge).amount_refunded).toBe(6000);
   });
 
   it('raises an authentication error for a wrong key', async () => {
     await expect(sdk('sk_test_not_the_key').checkout.sessions.create({ mode: 'payment' })).rejects.toMatchObject({
-      type: 'StripeAuthenticationError', statusCode: 401,
+      type: 'StripeAuthenticationError',
+      statusCode: 401,
     });
   });
 
   it('answers unknown ids with resource_missing', async () => {
     await expect(stripe.checkout.sessions.retrieve('cs_test_does_not_exist')).rejects.toMatchObject({
-      type: 'StripeInvalidRequestError', statusCode: 404, code: 'resource_missing',
+      type: 'StripeInvalidRequestError',
+      statusCode: 404,
+      code: 'resource_missing',
     });
-    await expect(stripe.refunds.retrieve('re_does_not_exist')).rejects.toMatchObject({ statusCode: 404, code: 'resource_missing' });
+    await expect(stripe.refunds.retrieve('re_does_not_exist')).rejects.toMatchObject({
+      statusCode: 404,
+      code: 'resource_missing',
+    });
   });
 
   it('replays a POST sent twice with the same idempotency key', async () => {
     const first = await createDeposit({ client_reference_id: 'q-idem' });
-    const params = { mode: 'payment' as const, line_items: [{ price_data: { currency: 'usd', unit_amount: 500, product_data: { name: 'Hold' } }, quantity: 1 }] };
+    const params = {
+      mode: 'payment' as const,
+      line_items: [{ price_data: { currency: 'usd', unit_amount: 500, product_data: { name: 'Hold' } }, quantity: 1 }],
+    };
     const a = await stripe.checkout.sessions.create(params, { idempotencyKey: 'deposit-q-idem' });
     const b = await stripe.checkout.sessions.create(params, { idempotencyKey: 'deposit-q-idem' });
     expect(b.id).toBe(a.id);
     expect(a.id).not.toBe(first.id);
-    await expect(stripe.checkout.sessions.create({ ...params, client_reference_id: 'other' }, { idempotencyKey: 'deposit-q-idem' }))
-      .rejects.toMatchObject({ type: 'StripeIdempotencyError' });
+    await expect(
+      stripe.checkout.sessions.create(
+        { ...params, client_reference_id: 'other' },
+        { idempotencyKey: 'deposit-q-idem' },
+      ),
+    ).rejects.toMatchObject({ type: 'StripeIdempotencyError' });
   });
 
   it('expires an open session and refuses to expire it again', async () => {

@@ -23,11 +23,27 @@ beforeAll(async () => {
 });
 afterAll(() => disconnectTestDatabase());
 
-const editable = (l: Line) => ({ kind: l.kind, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, discountCents: l.discountCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId });
+const editable = (l: Line) => ({
+  kind: l.kind,
+  description: l.description,
+  quantity: l.quantity,
+  unitPriceCents: l.unitPriceCents,
+  discountCents: l.discountCents,
+  camId: l.camId,
+  partId: l.partId,
+  laborOperationId: l.laborOperationId,
+});
 const read = async (id: number) => (await manager.get(`/api/quotes/${id}`)).body as Quote;
 const camLineIndex = (q: Quote) => q.lines.findIndex((l) => l.kind === 'cam');
 const audits = async (action: string, quoteId: number) =>
-  Number((await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM audit_log WHERE action = ? AND entity_id = ?', { replacements: [action, String(quoteId)], type: QueryTypes.SELECT }))[0].n);
+  Number(
+    (
+      await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM audit_log WHERE action = ? AND entity_id = ?', {
+        replacements: [action, String(quoteId)],
+        type: QueryTypes.SELECT,
+      })
+    )[0].n,
+  );
 
 describe('counter staff and prices', () => {
   it('cannot set a cam line to 1 cent: 403 naming the price, nothing saved', async () => {
@@ -56,18 +72,28 @@ describe('counter staff and prices', () => {
 
   it('adds free lines only as taxed "other" lines; an untaxed free line needs a manager', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Free lines')).id);
-    const lines = [...quote.lines.map(editable), { kind: 'labor', description: 'Cam swap, our price', quantity: 1, unitPriceCents: 1 }];
+    const lines = [
+      ...quote.lines.map(editable),
+      { kind: 'labor', description: 'Cam swap, our price', quantity: 1, unitPriceCents: 1 },
+    ];
     const refused = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
     expect(refused.status).toBe(403);
     expect(refused.body.errors).toEqual([expect.objectContaining({ field: `lines.${lines.length - 1}.kind` })]);
-    const supplies = [...quote.lines.map(editable), { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 }];
+    const supplies = [
+      ...quote.lines.map(editable),
+      { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 },
+    ];
     const ok = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: supplies });
     expect(ok.status).toBe(200);
     expect(ok.body.subtotalCents).toBe(quote.subtotalCents + 1_999);
   });
 
   it('gets 403 naming extraLines when a new quote’s extra line is priced off the catalogue', async () => {
-    const res = await counter.post('/api/quotes').send({ buildId: DEMO.builds.whitlockTowingTruck, camId: DEMO.cams.bigTruck219, extraLines: [{ kind: 'labor', laborOperationId: DEMO.labor.camSwapTruck, unitPriceCents: 100 }] });
+    const res = await counter.post('/api/quotes').send({
+      buildId: DEMO.builds.whitlockTowingTruck,
+      camId: DEMO.cams.bigTruck219,
+      extraLines: [{ kind: 'labor', laborOperationId: DEMO.labor.camSwapTruck, unitPriceCents: 100 }],
+    });
     expect(res.status).toBe(403);
     expect(res.body.errors).toEqual([expect.objectContaining({ field: 'extraLines.0.unitPriceCents' })]);
   });
@@ -88,7 +114,9 @@ describe('discounts', () => {
     expect(saved.lines[i]).toMatchObject({ discountCents: discount, totalCents: lines[i].unitPriceCents - discount });
     expect(saved.subtotalCents).toBe(quote.subtotalCents - discount);
     // The cam is taxed goods: tax falls on the discounted amount, rounded half up once.
-    const goods = saved.lines.filter((l) => ['cam', 'part', 'other'].includes(l.kind)).reduce((s, l) => s + l.totalCents, 0);
+    const goods = saved.lines
+      .filter((l) => ['cam', 'part', 'other'].includes(l.kind))
+      .reduce((s, l) => s + l.totalCents, 0);
     expect(saved.taxCents).toBe(Math.floor((goods * saved.taxRateBp + 5_000) / 10_000));
     expect(saved.totalCents).toBe(saved.subtotalCents + saved.taxCents);
   });
@@ -114,7 +142,10 @@ describe('discounts', () => {
     const raised = await manager.patch('/api/settings').send({ version: before.version, maxCounterDiscountBp: 1_000 });
     expect(raised.status).toBe(200);
     try {
-      expect((await counter.patch('/api/settings').send({ version: raised.body.version, maxCounterDiscountBp: 10_000 })).status).toBe(403);
+      expect(
+        (await counter.patch('/api/settings').send({ version: raised.body.version, maxCounterDiscountBp: 10_000 }))
+          .status,
+      ).toBe(403);
       const quote = await read((await makeDraftQuote(counter, 'Raised limit')).id);
       const lines = quote.lines.map(editable);
       const i = camLineIndex(quote);
@@ -123,7 +154,10 @@ describe('discounts', () => {
       expect((await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines })).status).toBe(200);
     } finally {
       const now = (await manager.get('/api/settings')).body as { version: number };
-      await manager.patch('/api/settings').send({ version: now.version, maxCounterDiscountBp: before.maxCounterDiscountBp }).expect(200);
+      await manager
+        .patch('/api/settings')
+        .send({ version: now.version, maxCounterDiscountBp: before.maxCounterDiscountBp })
+        .expect(200);
     }
   });
 });
@@ -139,7 +173,9 @@ describe('managers override prices', () => {
     expect(overridden.body.lines[i].unitPriceCents).toBe(lines[i].unitPriceCents);
     expect(await audits('quote.price-override', quote.id)).toBe(1);
     const kept = [...lines, { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 999 }];
-    const edited = await counter.patch(`/api/quotes/${quote.id}`).send({ version: overridden.body.version, lines: kept });
+    const edited = await counter
+      .patch(`/api/quotes/${quote.id}`)
+      .send({ version: overridden.body.version, lines: kept });
     expect(edited.status).toBe(200);
     expect(edited.body.lines[i].unitPriceCents).toBe(lines[i].unitPriceCents);
   });

@@ -21,8 +21,15 @@ let shop: { name: string; email: string };
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
-  [counter, manager, tech] = await Promise.all([signedInAgent('counter'), signedInAgent('manager'), signedInAgent('tech')]);
-  [shop] = await sequelize.query<{ name: string; email: string }>('SELECT name, email FROM shop_settings ORDER BY id LIMIT 1', { type: QueryTypes.SELECT });
+  [counter, manager, tech] = await Promise.all([
+    signedInAgent('counter'),
+    signedInAgent('manager'),
+    signedInAgent('tech'),
+  ]);
+  [shop] = await sequelize.query<{ name: string; email: string }>(
+    'SELECT name, email FROM shop_settings ORDER BY id LIMIT 1',
+    { type: QueryTypes.SELECT },
+  );
 });
 afterAll(() => disconnectTestDatabase());
 
@@ -85,7 +92,8 @@ describe('the customer page on paper', () => {
 });
 
 async function fullMail(mail: Mail): Promise<{ from: string; reply_to: string[] }> {
-  return (await request(mailUrl).get(`/emails/${mail.id}`).set('Authorization', `Bearer ${env.RESEND_API_KEY}`)).body as { from: string; reply_to: string[] };
+  return (await request(mailUrl).get(`/emails/${mail.id}`).set('Authorization', `Bearer ${env.RESEND_API_KEY}`))
+    .body as { from: string; reply_to: string[] };
 }
 
 describe('e-mails from templates', () => {
@@ -124,7 +132,9 @@ describe('e-mails from templates', () => {
   it('refund notice: after a full refund, both parts, from the shop', async () => {
     const quote = await makeSentQuote(counter, 'Refund mail');
     await payDeposit(manager, quote);
-    expect((await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: quote.depositCents })).status).toBe(200);
+    expect(
+      (await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: quote.depositCents })).status,
+    ).toBe(200);
     const mails = await waitForMailsTo(quote.customerEmail, 3);
     const notice = mails.find((m) => /refunded/.test(m.subject))!;
     for (const part of [notice.html, notice.text]) {

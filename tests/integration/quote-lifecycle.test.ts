@@ -18,17 +18,37 @@ let tech: Agent;
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
-  [counter, manager, tech] = await Promise.all([signedInAgent('counter'), signedInAgent('manager'), signedInAgent('tech')]);
+  [counter, manager, tech] = await Promise.all([
+    signedInAgent('counter'),
+    signedInAgent('manager'),
+    signedInAgent('tech'),
+  ]);
 });
 afterAll(() => disconnectTestDatabase());
 
-const current = async (id: number) => (await manager.get(`/api/quotes/${id}`)).body as { status: string; version: number; validUntil: string | null; snapshot: { profile: Record<string, unknown>; advice: Record<string, unknown> | null } | null; acceptedAt: string | null; closedAt: string | null; number: string; lines: unknown[]; replacedBy: { number: string } | null; revisionOf: { number: string } | null; revision: number };
+const current = async (id: number) =>
+  (await manager.get(`/api/quotes/${id}`)).body as {
+    status: string;
+    version: number;
+    validUntil: string | null;
+    snapshot: { profile: Record<string, unknown>; advice: Record<string, unknown> | null } | null;
+    acceptedAt: string | null;
+    closedAt: string | null;
+    number: string;
+    lines: unknown[];
+    replacedBy: { number: string } | null;
+    revisionOf: { number: string } | null;
+    revision: number;
+  };
 
 async function transitions(id: number) {
-  return sequelize.query<{ before: unknown; after: unknown }>("SELECT `before`, `after` FROM audit_log WHERE action = 'quote.transition' AND entity_type = 'quote' AND entity_id = :id ORDER BY id", {
-    replacements: { id: String(id) },
-    type: QueryTypes.SELECT,
-  });
+  return sequelize.query<{ before: unknown; after: unknown }>(
+    "SELECT `before`, `after` FROM audit_log WHERE action = 'quote.transition' AND entity_type = 'quote' AND entity_id = :id ORDER BY id",
+    {
+      replacements: { id: String(id) },
+      type: QueryTypes.SELECT,
+    },
+  );
 }
 const parsed = (v: unknown) => (typeof v === 'string' ? JSON.parse(v) : v) as Record<string, unknown>;
 
@@ -41,7 +61,9 @@ async function quoteIn(state: 'draft' | 'sent' | 'accepted' | 'deposit-paid', la
     await payDeposit(manager, sent);
     return { ...sent, version: (await current(sent.id)).version };
   }
-  const accepted = await counter.post(`/api/quotes/${sent.id}/transition`).send({ to: 'accepted', version: sent.version });
+  const accepted = await counter
+    .post(`/api/quotes/${sent.id}/transition`)
+    .send({ to: 'accepted', version: sent.version });
   expect(accepted.status).toBe(200);
   return { ...sent, version: accepted.body.version };
 }
@@ -59,7 +81,9 @@ describe('every move staff may make', () => {
   ] as const)('%s → %s answers 200, is audited, and the quote says so', async (from, to) => {
     const quote = await quoteIn(from, `Move ${from} to ${to}`);
     const before = (await transitions(quote.id)).length;
-    const res = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to, version: quote.version, reason: 'test move' });
+    const res = await counter
+      .post(`/api/quotes/${quote.id}/transition`)
+      .send({ to, version: quote.version, reason: 'test move' });
     expect(res.status).toBe(200);
     expect(res.body.status).toBe(to);
     expect(res.body.version).toBeGreaterThan(quote.version);
@@ -73,7 +97,11 @@ describe('every move staff may make', () => {
   it('records the moves the app makes itself: sent by the send route, deposit paid by the payment', async () => {
     const quote = await makeSentQuote(counter, 'Moves by the app');
     await payDeposit(manager, quote);
-    const audit = (await transitions(quote.id)).map((row) => [parsed(row.before).status, parsed(row.after).status, parsed(row.after).via]);
+    const audit = (await transitions(quote.id)).map((row) => [
+      parsed(row.before).status,
+      parsed(row.after).status,
+      parsed(row.after).via,
+    ]);
     expect(audit).toEqual([
       ['draft', 'sent', 'send'],
       ['sent', 'deposit-paid', 'payment'],
@@ -83,7 +111,9 @@ describe('every move staff may make', () => {
   it('lets a manager refund an accepted-then-paid quote and reopen it (refund → sent)', async () => {
     const quote = await quoteIn('accepted', 'Accepted then paid');
     await payDeposit(manager, quote as FixtureQuote & { token: string });
-    const refund = await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: quote.depositCents, afterFullRefund: 'reopen' });
+    const refund = await manager
+      .post(`/api/quotes/${quote.id}/refund`)
+      .send({ amountCents: quote.depositCents, afterFullRefund: 'reopen' });
     expect(refund.status).toBe(200);
     expect(refund.body.status).toBe('sent');
     const vias = (await transitions(quote.id)).map((row) => parsed(row.after).via);
@@ -118,23 +148,31 @@ describe('moves that are refused', () => {
 
   it('refuses every move out of an end state', async () => {
     const quote = await quoteIn('sent', 'End state');
-    const cancelled = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to: 'cancelled', version: quote.version });
+    const cancelled = await counter
+      .post(`/api/quotes/${quote.id}/transition`)
+      .send({ to: 'cancelled', version: quote.version });
     for (const to of ['sent', 'accepted', 'declined', 'expired', 'closed', 'draft']) {
-      const res = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to, version: cancelled.body.version });
+      const res = await counter
+        .post(`/api/quotes/${quote.id}/transition`)
+        .send({ to, version: cancelled.body.version });
       expect([to, res.status, res.body.state?.status]).toEqual([to, 409, 'cancelled']);
     }
   });
 
   it('refuses a stale version with 409 and the quote as it is now', async () => {
     const quote = await quoteIn('sent', 'Stale move');
-    const res = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to: 'declined', version: quote.version - 1 });
+    const res = await counter
+      .post(`/api/quotes/${quote.id}/transition`)
+      .send({ to: 'declined', version: quote.version - 1 });
     expect(res.status).toBe(409);
     expect(res.body.current).toMatchObject({ status: 'sent', version: quote.version });
   });
 
   it('will not accept a quote past its valid-until day', async () => {
     const quote = await makeSentQuote(counter, 'Lapsed accept', { validUntil: dayFromToday(-1) });
-    const res = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to: 'accepted', version: quote.version });
+    const res = await counter
+      .post(`/api/quotes/${quote.id}/transition`)
+      .send({ to: 'accepted', version: quote.version });
     expect(res.status).toBe(409);
     expect(res.body.state).toMatchObject({ status: 'sent', expired: true });
     expect(res.body.message).toMatch(/valid until/);
@@ -142,14 +180,20 @@ describe('moves that are refused', () => {
 
   it('names the field for bad input (422), keeps technicians out (403) and 404s a missing quote', async () => {
     const quote = await quoteIn('sent', 'Bad move input');
-    const bad = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to: 'paid-in-full', version: quote.version });
+    const bad = await counter
+      .post(`/api/quotes/${quote.id}/transition`)
+      .send({ to: 'paid-in-full', version: quote.version });
     expect(bad.status).toBe(422);
     expect(bad.body.errors).toEqual([expect.objectContaining({ field: 'to' })]);
     const noVersion = await counter.post(`/api/quotes/${quote.id}/transition`).send({ to: 'declined' });
     expect(noVersion.status).toBe(422);
     expect(noVersion.body.errors).toEqual([expect.objectContaining({ field: 'version' })]);
-    expect((await tech.post(`/api/quotes/${quote.id}/transition`).send({ to: 'declined', version: quote.version })).status).toBe(403);
-    expect((await counter.post('/api/quotes/99999999/transition').send({ to: 'declined', version: 1 })).status).toBe(404);
+    expect(
+      (await tech.post(`/api/quotes/${quote.id}/transition`).send({ to: 'declined', version: quote.version })).status,
+    ).toBe(403);
+    expect((await counter.post('/api/quotes/99999999/transition').send({ to: 'declined', version: 1 })).status).toBe(
+      404,
+    );
   });
 });
 
@@ -159,10 +203,15 @@ describe('revising a sent quote', () => {
     const oldLines = (await current(old.id)).lines;
     const res = await counter.post(`/api/quotes/${old.id}/revise`).send({ version: old.version });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ number: `${old.number}-R2`, status: 'draft', revision: 2, revisionOf: { id: old.id, number: old.number } });
-    expect(res.body.lines.map((l: { description: string; totalCents: number }) => [l.description, l.totalCents])).toEqual(
-      (oldLines as { description: string; totalCents: number }[]).map((l) => [l.description, l.totalCents]),
-    );
+    expect(res.body).toMatchObject({
+      number: `${old.number}-R2`,
+      status: 'draft',
+      revision: 2,
+      revisionOf: { id: old.id, number: old.number },
+    });
+    expect(
+      res.body.lines.map((l: { description: string; totalCents: number }) => [l.description, l.totalCents]),
+    ).toEqual((oldLines as { description: string; totalCents: number }[]).map((l) => [l.description, l.totalCents]));
     const before = await current(old.id);
     expect(before).toMatchObject({ status: 'replaced', replacedBy: { number: `${old.number}-R2` } });
 
@@ -199,7 +248,9 @@ describe('revising a sent quote', () => {
     const started = await request(appUrl).post(`/api/q/${old.token}/checkout`).set('Accept', 'application/json');
     expect(started.status).toBe(200);
     expect((await counter.post(`/api/quotes/${old.id}/revise`).send({ version: old.version })).status).toBe(201);
-    await request(paymentsUrl).post(`/_test/sessions/${new URL(started.body.url).pathname.split('/').pop()}/complete`).expect(200);
+    await request(paymentsUrl)
+      .post(`/_test/sessions/${new URL(started.body.url).pathname.split('/').pop()}/complete`)
+      .expect(200);
     const deadline = Date.now() + 15_000;
     let after = (await manager.get(`/api/quotes/${old.id}`)).body;
     while (after.payments[0]?.status !== 'refunded' && Date.now() < deadline) {
@@ -229,13 +280,20 @@ describe('valid-until and the frozen snapshot', () => {
     const sent = await current(quote.id);
     // Thirty days from the send (the test may straddle midnight UTC, hence either day).
     expect([dayFromToday(30), dayFromToday(29)]).toContain(sent.validUntil);
-    const past = await counter.patch(`/api/quotes/${quote.id}`).send({ version: sent.version, validUntil: dayFromToday(-2) });
+    const past = await counter
+      .patch(`/api/quotes/${quote.id}`)
+      .send({ version: sent.version, validUntil: dayFromToday(-2) });
     expect(past.status).toBe(422);
     expect(past.body.errors).toEqual([expect.objectContaining({ field: 'validUntil' })]);
-    const later = await counter.patch(`/api/quotes/${quote.id}`).send({ version: sent.version, validUntil: dayFromToday(45) });
+    const later = await counter
+      .patch(`/api/quotes/${quote.id}`)
+      .send({ version: sent.version, validUntil: dayFromToday(45) });
     expect(later.status).toBe(200);
     expect(later.body.validUntil).toBe(dayFromToday(45));
-    const lines = await counter.patch(`/api/quotes/${quote.id}`).send({ version: later.body.version, lines: [{ kind: 'other', description: 'Shop towel', quantity: 1, unitPriceCents: 100 }] });
+    const lines = await counter.patch(`/api/quotes/${quote.id}`).send({
+      version: later.body.version,
+      lines: [{ kind: 'other', description: 'Shop towel', quantity: 1, unitPriceCents: 100 }],
+    });
     expect(lines.status).toBe(409);
   });
 

@@ -6,7 +6,15 @@ import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { DEMO, MISSING_ID } from '../support/demo';
-import { completeCheckout, FIXTURE_CAM_ID, makeDepositPaidQuote, makeDraftQuote, makeSentQuote, startCheckout, waitForQuote } from '../support/quote-fixtures';
+import {
+  completeCheckout,
+  FIXTURE_CAM_ID,
+  makeDepositPaidQuote,
+  makeDraftQuote,
+  makeSentQuote,
+  startCheckout,
+  waitForQuote,
+} from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
 
 // Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: drafted, priced,
@@ -18,7 +26,11 @@ const CAM_SWAP_TRUCK = DEMO.labor.camSwapTruck; // 8.0 h (the seeded install rul
 const PTV_CHECK = DEMO.labor.ptvCheck; // 1.0 h
 const LABOR_RATE = 13_500; // the demo shop's $135.00 an hour
 const sha256 = (s: string) => crypto.createHash('sha256').update(s).digest('hex');
-const stripe = new Stripe(env.STRIPE_SECRET_KEY, { host: '127.0.0.1', port: Number(env.STRIPE_API_PORT), protocol: 'http' });
+const stripe = new Stripe(env.STRIPE_SECRET_KEY, {
+  host: '127.0.0.1',
+  port: Number(env.STRIPE_API_PORT),
+  protocol: 'http',
+});
 
 // The answers' shapes are the app's own (GET /api/quotes/[id] answers a QuoteRecord).
 type Quote = QuoteRecord;
@@ -32,7 +44,11 @@ let tech: Agent;
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
-  [manager, counter, tech] = await Promise.all([signedInAgent('manager'), signedInAgent('counter'), signedInAgent('tech')]);
+  [manager, counter, tech] = await Promise.all([
+    signedInAgent('manager'),
+    signedInAgent('counter'),
+    signedInAgent('tech'),
+  ]);
 });
 afterAll(() => disconnectTestDatabase());
 
@@ -46,43 +62,101 @@ describe('a draft', () => {
   it('makes a draft whose lines follow the need rules, priced in exact cents', async () => {
     // The demo's towing truck (5.3 L, active deactivation, installed springs good to 0.500", 2,000 rpm stall),
     // copied into a build this test owns, and the demo's F9-219 ($439.00, lift 0.595", not deactivation-compatible).
-    const [seeded] = await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = ?', { replacements: [DEMO.builds.whitlockTowingTruck], type: QueryTypes.SELECT });
+    const [seeded] = await sequelize.query<{ profile: string | object }>('SELECT profile FROM builds WHERE id = ?', {
+      replacements: [DEMO.builds.whitlockTowingTruck],
+      type: QueryTypes.SELECT,
+    });
     const profile = typeof seeded.profile === 'string' ? JSON.parse(seeded.profile) : seeded.profile;
     expect(FIXTURE_CAM_ID).toBe(DEMO.cams.bigTruck219);
-    const ranked = await counter.post('/api/advisor/rank').send({ build: profile, camIds: [FIXTURE_CAM_ID], includeCurves: false });
+    const ranked = await counter
+      .post('/api/advisor/rank')
+      .send({ build: profile, camIds: [FIXTURE_CAM_ID], includeCurves: false });
     expect(ranked.status).toBe(200);
-    const needed = ranked.body.rankings[0].neededItems as { partId: number | null; laborOperationId: number | null; priceCents: number; part?: { sku: string } | null; laborOperation?: { code: string } | null }[];
+    const needed = ranked.body.rankings[0].neededItems as {
+      partId: number | null;
+      laborOperationId: number | null;
+      priceCents: number;
+      part?: { sku: string } | null;
+      laborOperation?: { code: string } | null;
+    }[];
 
-    const draft = await makeDraftQuote(counter, 'Need rules', { profile, extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }] });
+    const draft = await makeDraftQuote(counter, 'Need rules', {
+      profile,
+      extraLines: [{ kind: 'labor', laborOperationId: PTV_CHECK }],
+    });
     const quote = await readQuote(draft.id);
     expect(quote.status).toBe('draft');
     expect(quote.number).toMatch(/^Q-\d{4}-\d{4}$/);
 
     // The cam first, at its catalogue price.
-    expect(quote.lines[0]).toMatchObject({ kind: 'cam', camId: FIXTURE_CAM_ID, quantity: 1, unitPriceCents: 43_900, totalCents: 43_900 });
+    expect(quote.lines[0]).toMatchObject({
+      kind: 'cam',
+      camId: FIXTURE_CAM_ID,
+      quantity: 1,
+      unitPriceCents: 43_900,
+      totalCents: 43_900,
+    });
     // Then exactly what the rules add, in the rules' order and at the advisor's prices.
     const ruleLines = quote.lines.slice(1, 1 + needed.length);
-    expect(ruleLines.map((l) => [l.partId, l.laborOperationId, l.totalCents])).toEqual(needed.map((n) => [n.partId, n.laborOperationId, n.priceCents]));
+    expect(ruleLines.map((l) => [l.partId, l.laborOperationId, l.totalCents])).toEqual(
+      needed.map((n) => [n.partId, n.laborOperationId, n.priceCents]),
+    );
     // Known from the seeded rules and the advisor's needs: a truck → the truck cam swap (8 h) and gaskets;
     // lift 0.595" past the installed springs' 0.500" → ovate springs + install (2 h); 0.595" ≥ 0.580" →
     // hardened pushrods; active deactivation with a non-compatible cam → delete kit + 1.5 h; tune + session.
     const skus = needed.map((n) => n.part?.sku ?? n.laborOperation?.code);
-    expect(skus).toEqual(expect.arrayContaining(['CAM-TRUCK', 'GS-TC', 'SPR-600', 'SPR-INST', 'PR-7400', 'DD-KIT-53', 'DD-ADD', 'TUNE-DYNO', 'TUNE-LAB']));
+    expect(skus).toEqual(
+      expect.arrayContaining([
+        'CAM-TRUCK',
+        'GS-TC',
+        'SPR-600',
+        'SPR-INST',
+        'PR-7400',
+        'DD-KIT-53',
+        'DD-ADD',
+        'TUNE-DYNO',
+        'TUNE-LAB',
+      ]),
+    );
     expect(skus).not.toContain('CAM-CAR');
-    expect(quote.lines.find((l) => l.laborOperationId === CAM_SWAP_TRUCK)).toMatchObject({ kind: 'labor', quantity: 8, totalCents: 108_000 });
-    expect(quote.lines.find((l) => l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({ kind: 'labor', quantity: 2, unitPriceCents: LABOR_RATE, totalCents: 27_000 });
-    expect(quote.lines.find((l) => l.laborOperationId === DEMO.labor.deactivationDelete)).toMatchObject({ quantity: 1.5, totalCents: 20_250 });
-    expect(quote.lines.find((l) => l.partId === DEMO.parts.dynoTune)).toMatchObject({ kind: 'tune', totalCents: 49_500 });
+    expect(quote.lines.find((l) => l.laborOperationId === CAM_SWAP_TRUCK)).toMatchObject({
+      kind: 'labor',
+      quantity: 8,
+      totalCents: 108_000,
+    });
+    expect(quote.lines.find((l) => l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({
+      kind: 'labor',
+      quantity: 2,
+      unitPriceCents: LABOR_RATE,
+      totalCents: 27_000,
+    });
+    expect(quote.lines.find((l) => l.laborOperationId === DEMO.labor.deactivationDelete)).toMatchObject({
+      quantity: 1.5,
+      totalCents: 20_250,
+    });
+    expect(quote.lines.find((l) => l.partId === DEMO.parts.dynoTune)).toMatchObject({
+      kind: 'tune',
+      totalCents: 49_500,
+    });
     // The staff's extra line last: 1 h × $135.00; before it the draft is exactly the shortlist's job price.
-    expect(quote.lines.at(-1)).toMatchObject({ kind: 'labor', laborOperationId: PTV_CHECK, quantity: 1, totalCents: 13_500 });
+    expect(quote.lines.at(-1)).toMatchObject({
+      kind: 'labor',
+      laborOperationId: PTV_CHECK,
+      quantity: 1,
+      totalCents: 13_500,
+    });
     expect(quote.subtotalCents - 13_500).toBe(ranked.body.rankings[0].jobPriceCents);
 
     // Totals: tax 8.25 % on goods only (cam, parts), half up; deposit 20 % clamped to $200…$1,000.
     const subtotal = quote.lines.reduce((s, l) => s + l.totalCents, 0);
-    const goods = quote.lines.filter((l) => ['cam', 'part', 'other'].includes(l.kind)).reduce((s, l) => s + l.totalCents, 0);
+    const goods = quote.lines
+      .filter((l) => ['cam', 'part', 'other'].includes(l.kind))
+      .reduce((s, l) => s + l.totalCents, 0);
     const tax = Math.floor((goods * 825 + 5_000) / 10_000);
     expect(quote).toMatchObject({ subtotalCents: subtotal, taxRateBp: 825, taxCents: tax, totalCents: subtotal + tax });
-    expect(quote.depositCents).toBe(Math.min(100_000, Math.max(20_000, Math.floor(((subtotal + tax) * 2_000 + 5_000) / 10_000))));
+    expect(quote.depositCents).toBe(
+      Math.min(100_000, Math.max(20_000, Math.floor(((subtotal + tax) * 2_000 + 5_000) / 10_000))),
+    );
     expect(Number.isInteger(quote.totalCents) && Number.isInteger(quote.depositCents)).toBe(true);
   });
 
@@ -114,10 +188,15 @@ describe('a draft', () => {
     const bad = await counter.post('/api/quotes').send({ buildId: draft.buildId, camId: MISSING_ID });
     expect(bad.status).toBe(422);
     expect(bad.body.errors).toEqual([expect.objectContaining({ field: 'camId' })]);
-    const line = await counter.patch(`/api/quotes/${draft.id}`).send({ version: draft.version, lines: [{ kind: 'other', description: 'Shop supplies', quantity: 1.005, unitPriceCents: 100 }] });
+    const line = await counter.patch(`/api/quotes/${draft.id}`).send({
+      version: draft.version,
+      lines: [{ kind: 'other', description: 'Shop supplies', quantity: 1.005, unitPriceCents: 100 }],
+    });
     expect(line.status).toBe(422);
     expect(line.body.errors).toEqual([expect.objectContaining({ field: 'lines.0.quantity' })]);
-    const noPrice = await counter.patch(`/api/quotes/${draft.id}`).send({ version: draft.version, lines: [{ kind: 'other', description: 'Shop supplies' }] });
+    const noPrice = await counter
+      .patch(`/api/quotes/${draft.id}`)
+      .send({ version: draft.version, lines: [{ kind: 'other', description: 'Shop supplies' }] });
     expect(noPrice.status).toBe(422);
     expect(noPrice.body.errors).toEqual([expect.objectContaining({ field: 'lines.0.unitPriceCents' })]);
     expect((await readQuote(draft.id)).version).toBe(draft.version);
@@ -125,8 +204,18 @@ describe('a draft', () => {
 
   it('edits lines while a draft, and a stale version gets 409 without overwriting', async () => {
     const quote = await readQuote((await makeDraftQuote(counter, 'Edit lines')).id);
-    const lines = [...quote.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: l.quantity, unitPriceCents: l.unitPriceCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId })),
-      { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 }];
+    const lines = [
+      ...quote.lines.map((l) => ({
+        kind: l.kind,
+        description: l.description,
+        quantity: l.quantity,
+        unitPriceCents: l.unitPriceCents,
+        camId: l.camId,
+        partId: l.partId,
+        laborOperationId: l.laborOperationId,
+      })),
+      { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 },
+    ];
     const saved = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
     expect(saved.status).toBe(200);
     expect(saved.body.version).toBe(quote.version + 1);
@@ -134,7 +223,9 @@ describe('a draft', () => {
     // 19.99 more in goods at 8.25 %: tax on the new goods sum, rounded once.
     expect(saved.body.taxCents).toBeGreaterThanOrEqual(quote.taxCents + 164);
     expect(saved.body.taxCents).toBeLessThanOrEqual(quote.taxCents + 165);
-    const stale = await manager.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: lines.slice(0, 1) });
+    const stale = await manager
+      .patch(`/api/quotes/${quote.id}`)
+      .send({ version: quote.version, lines: lines.slice(0, 1) });
     expect(stale.status).toBe(409);
     expect(stale.body.current.lines).toHaveLength(lines.length);
   });
@@ -146,18 +237,33 @@ describe('sending and the customer’s link', () => {
     const sent = await counter.post(`/api/quotes/${draft.id}/send`);
     expect(sent.status).toBe(200);
     expect(sent.body.status).toBe('sent');
-    const messages = (await request(mailUrl).get('/messages').query({ to: draft.customerEmail })).body as { to: string[]; subject: string; text: string; html: string }[];
+    const messages = (await request(mailUrl).get('/messages').query({ to: draft.customerEmail })).body as {
+      to: string[];
+      subject: string;
+      text: string;
+      html: string;
+    }[];
     const mail = messages.find((m) => m.subject.includes(draft.number));
     expect(mail?.to).toEqual([draft.customerEmail]);
     const match = new RegExp(`${appUrl.replace(/[.:/]/g, '\\$&')}/q/([A-Za-z0-9_-]+)`).exec(mail!.text);
     expect(match).not.toBeNull();
     const token = match![1];
     expect(token.length).toBeGreaterThanOrEqual(43);
-    const row = (await sequelize.query<{ public_token_hash: string }>('SELECT public_token_hash FROM quotes WHERE id = ?', { replacements: [draft.id], type: QueryTypes.SELECT }))[0];
+    const row = (
+      await sequelize.query<{ public_token_hash: string }>('SELECT public_token_hash FROM quotes WHERE id = ?', {
+        replacements: [draft.id],
+        type: QueryTypes.SELECT,
+      })
+    )[0];
     expect(row.public_token_hash).toBe(sha256(token));
-    expect((await counter.patch(`/api/quotes/${draft.id}`).send({ version: sent.body.version, lines: [] })).status).toBe(422);
+    expect(
+      (await counter.patch(`/api/quotes/${draft.id}`).send({ version: sent.body.version, lines: [] })).status,
+    ).toBe(422);
     // A sent quote's lines are locked (it is revised instead); its valid-until day may move (quote-lifecycle.test.ts).
-    const locked = await counter.patch(`/api/quotes/${draft.id}`).send({ version: sent.body.version, lines: [{ kind: 'other', description: 'Shop towel', quantity: 1, unitPriceCents: 100 }] });
+    const locked = await counter.patch(`/api/quotes/${draft.id}`).send({
+      version: sent.body.version,
+      lines: [{ kind: 'other', description: 'Shop towel', quantity: 1, unitPriceCents: 100 }],
+    });
     expect(locked.status).toBe(409);
   });
 
@@ -180,7 +286,11 @@ describe('sending and the customer’s link', () => {
     const sent = await makeSentQuote(counter, 'Wrong token', { customerName: 'Fixture Quillon Marsh' });
     expect((await request(appUrl).get(`/q/${sent.token}`)).text).toContain('Quillon Marsh'); // the right link does show it
     const { token } = sent;
-    for (const wrong of [`${token.slice(0, -1)}${token.endsWith('A') ? 'B' : 'A'}`, 'short', 'demo-quote-nobody-at-all-000']) {
+    for (const wrong of [
+      `${token.slice(0, -1)}${token.endsWith('A') ? 'B' : 'A'}`,
+      'short',
+      'demo-quote-nobody-at-all-000',
+    ]) {
       const page = await request(appUrl).get(`/q/${wrong}`);
       expect(page.status).toBe(404);
       expect(page.text).not.toContain('Quillon Marsh');
@@ -222,13 +332,20 @@ describe('the deposit', () => {
   it('applies the same event twice only once', async () => {
     const paid = await makeDepositPaidQuote(counter, 'Replayed event');
     const body = JSON.stringify(paid.event);
-    const again = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', signed(body)).set('content-type', 'application/json').send(body);
+    const again = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set('Stripe-Signature', signed(body))
+      .set('content-type', 'application/json')
+      .send(body);
     expect(again.status).toBe(200);
     expect(again.body.result).toBe('already');
     const q = await readQuote(paid.id);
     expect(q.payments.filter((p) => p.status === 'paid')).toHaveLength(1);
     expect(q.paidCents).toBe(paid.depositCents);
-    const audits = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?", { replacements: [String(paid.id)], type: QueryTypes.SELECT });
+    const audits = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM audit_log WHERE action = 'payment.received' AND entity_id = ?",
+      { replacements: [String(paid.id)], type: QueryTypes.SELECT },
+    );
     expect(Number(audits[0].n)).toBe(1);
   });
 
@@ -243,16 +360,33 @@ describe('the deposit', () => {
     const original = JSON.stringify(forged);
     const header = signed(original);
     const tampered = original.replace('"cs_forged_session"', '"cs_forged_sessioN"');
-    const res = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', header).set('content-type', 'application/json').send(tampered);
+    const res = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set('Stripe-Signature', header)
+      .set('content-type', 'application/json')
+      .send(tampered);
     expect(res.status).toBe(400);
-    const unsigned = await request(appUrl).post('/api/payments/webhook').set('content-type', 'application/json').send(original);
+    const unsigned = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set('content-type', 'application/json')
+      .send(original);
     expect(unsigned.status).toBe(400);
-    const wrongSecret = await request(appUrl).post('/api/payments/webhook').set('Stripe-Signature', stripe.webhooks.generateTestHeaderString({ payload: original, secret: 'whsec_someone_else' })).set('content-type', 'application/json').send(original);
+    const wrongSecret = await request(appUrl)
+      .post('/api/payments/webhook')
+      .set(
+        'Stripe-Signature',
+        stripe.webhooks.generateTestHeaderString({ payload: original, secret: 'whsec_someone_else' }),
+      )
+      .set('content-type', 'application/json')
+      .send(original);
     expect(wrongSecret.status).toBe(400);
     const untouched = await readQuote(target.id);
     expect(untouched.status).toBe('sent');
     expect(untouched.payments).toEqual([]);
-    const rows = await sequelize.query('SELECT id FROM payments WHERE provider_session_id LIKE ?', { replacements: ['cs_forged%'], type: QueryTypes.SELECT });
+    const rows = await sequelize.query('SELECT id FROM payments WHERE provider_session_id LIKE ?', {
+      replacements: ['cs_forged%'],
+      type: QueryTypes.SELECT,
+    });
     expect(rows).toEqual([]);
   });
 
@@ -262,7 +396,9 @@ describe('the deposit', () => {
     const tooMuch = await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: paid.depositCents + 1 });
     expect(tooMuch.status).toBe(422);
     expect(tooMuch.body.errors).toEqual([expect.objectContaining({ field: 'amountCents' })]);
-    const part = await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: 5_000, reason: 'customer dropped the converter' });
+    const part = await manager
+      .post(`/api/quotes/${paid.id}/refund`)
+      .send({ amountCents: 5_000, reason: 'customer dropped the converter' });
     expect(part.status).toBe(200);
     expect(part.body.refundedCents).toBe(5_000);
     expect(part.body.payments[0].status).toBe('partially-refunded');
@@ -271,8 +407,13 @@ describe('the deposit', () => {
     expect(intent).toMatch(/^pi_/);
     const deadline = Date.now() + 10_000;
     for (;;) {
-      const events = (await request(paymentsUrl).get('/_test/events')).body.data as { event: { type: string; data: { object: { payment_intent?: string } } }; delivery: { status: string } }[];
-      const refundedEvent = events.find((e) => e.event.type === 'charge.refunded' && e.event.data.object.payment_intent === intent);
+      const events = (await request(paymentsUrl).get('/_test/events')).body.data as {
+        event: { type: string; data: { object: { payment_intent?: string } } };
+        delivery: { status: string };
+      }[];
+      const refundedEvent = events.find(
+        (e) => e.event.type === 'charge.refunded' && e.event.data.object.payment_intent === intent,
+      );
       if ((refundedEvent && refundedEvent.delivery.status !== 'pending') || Date.now() > deadline) {
         expect(refundedEvent?.delivery.status).toBe('delivered');
         break;

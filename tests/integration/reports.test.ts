@@ -13,7 +13,17 @@ const DAY = 86_400_000;
 const utcDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 const TODAY = utcDay(Date.now());
 const FROM = utcDay(Date.now() - 29 * DAY);
-const STATUSES = ['draft', 'sent', 'accepted', 'deposit-paid', 'closed', 'declined', 'expired', 'cancelled', 'replaced'];
+const STATUSES = [
+  'draft',
+  'sent',
+  'accepted',
+  'deposit-paid',
+  'closed',
+  'declined',
+  'expired',
+  'cancelled',
+  'replaced',
+];
 
 type Agent = Awaited<ReturnType<typeof signedInAgent>>;
 type Summary = ReportSummary;
@@ -26,11 +36,16 @@ let tech: Agent;
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
-  [manager, counter, tech] = await Promise.all([signedInAgent('manager'), signedInAgent('counter'), signedInAgent('tech')]);
+  [manager, counter, tech] = await Promise.all([
+    signedInAgent('manager'),
+    signedInAgent('counter'),
+    signedInAgent('tech'),
+  ]);
 });
 afterAll(() => disconnectTestDatabase());
 
-const rows = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
+const rows = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) =>
+  sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
 const inRange = (d: Date | string | null) => {
   if (!d) return false;
   const day = utcDay(new Date(d).getTime());
@@ -42,9 +57,16 @@ const halfUp = (num: number, den: number) => Math.floor((2 * num + den) / (2 * d
 
 /** The report, worked out independently from the raw rows of the last 30 days. */
 async function expectedFromRows() {
-  const quotes = (await rows<{ id: number; status: string; total_cents: number; sent_at: Date | null; created_at: Date; cam_id: number | null }>(
-    'SELECT id, status, total_cents, sent_at, created_at, cam_id FROM quotes',
-  )).filter((q) => inRange(q.created_at));
+  const quotes = (
+    await rows<{
+      id: number;
+      status: string;
+      total_cents: number;
+      sent_at: Date | null;
+      created_at: Date;
+      cam_id: number | null;
+    }>('SELECT id, status, total_cents, sent_at, created_at, cam_id FROM quotes')
+  ).filter((q) => inRange(q.created_at));
   const byStatus = STATUSES.map((status) => {
     const these = quotes.filter((q) => q.status === status);
     return { status, count: these.length, valueCents: these.reduce((s, q) => s + Number(q.total_cents), 0) };
@@ -53,8 +75,11 @@ async function expectedFromRows() {
   const sent = quotes.filter((q) => q.sent_at !== null);
   const sentPaid = sent.filter((q) => converted(q.status));
 
-  const allPayments = (await rows<{ amount_cents: number; refunded_cents: number; status: string; paid_at: Date | null; purpose: string }>('SELECT amount_cents, refunded_cents, status, paid_at, purpose FROM payments'))
-    .filter((p) => ['paid', 'partially-refunded', 'refunded'].includes(p.status) && inRange(p.paid_at));
+  const allPayments = (
+    await rows<{ amount_cents: number; refunded_cents: number; status: string; paid_at: Date | null; purpose: string }>(
+      'SELECT amount_cents, refunded_cents, status, paid_at, purpose FROM payments',
+    )
+  ).filter((p) => ['paid', 'partially-refunded', 'refunded'].includes(p.status) && inRange(p.paid_at));
   const money = (purpose: string) => {
     const these = allPayments.filter((p) => p.purpose === purpose);
     const takenCents = these.reduce((s, p) => s + Number(p.amount_cents), 0);
@@ -63,11 +88,26 @@ async function expectedFromRows() {
   };
 
   const paidIds = new Set(quotes.filter((q) => converted(q.status)).map((q) => q.id));
-  const lines = await rows<{ quote_id: number; kind: string; cam_id: number | null; part_id: number | null; quantity: string; total_cents: number }>(
-    'SELECT quote_id, kind, cam_id, part_id, quantity, total_cents FROM quote_lines',
+  const lines = await rows<{
+    quote_id: number;
+    kind: string;
+    cam_id: number | null;
+    part_id: number | null;
+    quantity: string;
+    total_cents: number;
+  }>('SELECT quote_id, kind, cam_id, part_id, quantity, total_cents FROM quote_lines');
+  const camCost = new Map(
+    (await rows<{ id: number; cost_cents: number }>('SELECT id, cost_cents FROM cams')).map((c) => [
+      c.id,
+      Number(c.cost_cents),
+    ]),
   );
-  const camCost = new Map((await rows<{ id: number; cost_cents: number }>('SELECT id, cost_cents FROM cams')).map((c) => [c.id, Number(c.cost_cents)]));
-  const partCost = new Map((await rows<{ id: number; cost_cents: number }>('SELECT id, cost_cents FROM parts')).map((p) => [p.id, Number(p.cost_cents)]));
+  const partCost = new Map(
+    (await rows<{ id: number; cost_cents: number }>('SELECT id, cost_cents FROM parts')).map((p) => [
+      p.id,
+      Number(p.cost_cents),
+    ]),
+  );
   const margin = (kind: 'cam' | 'part' | null): Margin => {
     let revenueCents = 0;
     let costCents = 0;
@@ -79,11 +119,14 @@ async function expectedFromRows() {
       costCents += halfUp(Math.round(Number(l.quantity) * 100) * unit, 100);
     }
     const marginCents = revenueCents - costCents;
-    const marginBp = revenueCents > 0 ? Math.sign(marginCents) * halfUp(Math.abs(marginCents) * 10_000, revenueCents) : null;
+    const marginBp =
+      revenueCents > 0 ? Math.sign(marginCents) * halfUp(Math.abs(marginCents) * 10_000, revenueCents) : null;
     return { revenueCents, costCents, marginCents, marginBp };
   };
 
-  const cams = new Map((await rows<{ id: number; sku: string; name: string }>('SELECT id, sku, name FROM cams')).map((c) => [c.id, c]));
+  const cams = new Map(
+    (await rows<{ id: number; sku: string; name: string }>('SELECT id, sku, name FROM cams')).map((c) => [c.id, c]),
+  );
   const perCam = new Map<number, { quotes: number; deposits: number }>();
   for (const q of quotes) {
     if (q.cam_id === null) continue;
@@ -101,7 +144,11 @@ async function expectedFromRows() {
     range: { from: FROM, to: TODAY, days: 30 },
     created: { count: quotes.length, valueCents },
     byStatus,
-    conversion: { sentCount: sent.length, depositPaidCount: sentPaid.length, rateBp: sent.length ? halfUp(sentPaid.length * 10_000, sent.length) : null },
+    conversion: {
+      sentCount: sent.length,
+      depositPaidCount: sentPaid.length,
+      rateBp: sent.length ? halfUp(sentPaid.length * 10_000, sent.length) : null,
+    },
     averageQuoteCents: quotes.length ? halfUp(valueCents, quotes.length) : null,
     deposits: money('deposit'),
     balances: money('balance'),
@@ -118,10 +165,13 @@ const summary = async (query = `?from=${FROM}&to=${TODAY}`) => {
 
 describe('the summary for the last 30 days', () => {
   it('includes the seeded demo quotes (sent, deposit-paid, draft) and their one paid deposit', async () => {
-    const seeded = await rows<{ number: string; status: string }>("SELECT number, status FROM quotes WHERE number IN ('Q-2026-0101', 'Q-2026-0102', 'Q-2026-0103') ORDER BY number");
+    const seeded = await rows<{ number: string; status: string }>(
+      "SELECT number, status FROM quotes WHERE number IN ('Q-2026-0101', 'Q-2026-0102', 'Q-2026-0103') ORDER BY number",
+    );
     expect(seeded.map((q) => q.status)).toEqual(['sent', 'deposit-paid', 'draft']);
     const body = await summary();
-    for (const status of ['sent', 'deposit-paid', 'draft']) expect(body.byStatus.find((s) => s.status === status)!.count).toBeGreaterThanOrEqual(1);
+    for (const status of ['sent', 'deposit-paid', 'draft'])
+      expect(body.byStatus.find((s) => s.status === status)!.count).toBeGreaterThanOrEqual(1);
     expect(body.deposits.count).toBeGreaterThanOrEqual(1);
     expect(body.margin.total.revenueCents).toBeGreaterThan(0);
   });
@@ -160,10 +210,14 @@ describe('a quote made in the test moves the numbers', () => {
 
   it('counts a new draft: one more draft, its value, one more quote for its cam', async () => {
     const before = await summary();
-    const made = await manager.post('/api/quotes').send({ buildId: DEMO.builds.whitlockTowingTruck, camId: DEMO.cams.bigTruck219 });
+    const made = await manager
+      .post('/api/quotes')
+      .send({ buildId: DEMO.builds.whitlockTowingTruck, camId: DEMO.cams.bigTruck219 });
     expect(made.status).toBe(201);
     quoteId = made.body.id;
-    const [row] = await rows<{ total_cents: number }>('SELECT total_cents FROM quotes WHERE id = :quoteId', { quoteId });
+    const [row] = await rows<{ total_cents: number }>('SELECT total_cents FROM quotes WHERE id = :quoteId', {
+      quoteId,
+    });
     const after = await summary();
     const draft = (s: Summary) => s.byStatus.find((x) => x.status === 'draft')!;
     expect(draft(after).count).toBe(draft(before).count + 1);
@@ -175,14 +229,29 @@ describe('a quote made in the test moves the numbers', () => {
 
   it('counts it as sent, deposit-paid and a deposit with a partial refund, margin and all', async () => {
     const before = await summary();
-    const [q] = await rows<{ deposit_cents: number }>('SELECT deposit_cents FROM quotes WHERE id = :quoteId', { quoteId });
-    await sequelize.query("UPDATE quotes SET status = 'deposit-paid', sent_at = NOW(), accepted_at = NOW() WHERE id = :quoteId", { replacements: { quoteId } });
+    const [q] = await rows<{ deposit_cents: number }>('SELECT deposit_cents FROM quotes WHERE id = :quoteId', {
+      quoteId,
+    });
+    await sequelize.query(
+      "UPDATE quotes SET status = 'deposit-paid', sent_at = NOW(), accepted_at = NOW() WHERE id = :quoteId",
+      { replacements: { quoteId } },
+    );
     const refund = 1_234;
     await sequelize.query(
       "INSERT INTO payments (quote_id, provider, provider_session_id, provider_payment_id, amount_cents, refunded_cents, currency, status, paid_at, created_at, updated_at) VALUES (:quoteId, 'stripe', :session, :intent, :amount, :refund, 'usd', 'partially-refunded', NOW(), NOW(), NOW())",
-      { replacements: { quoteId, session: `cs_test_report_${quoteId}`, intent: `pi_test_report_${quoteId}`, amount: Number(q.deposit_cents), refund } },
+      {
+        replacements: {
+          quoteId,
+          session: `cs_test_report_${quoteId}`,
+          intent: `pi_test_report_${quoteId}`,
+          amount: Number(q.deposit_cents),
+          refund,
+        },
+      },
     );
-    [{ id: paymentId }] = await rows<{ id: number }>('SELECT id FROM payments WHERE provider_session_id = :s', { s: `cs_test_report_${quoteId}` });
+    [{ id: paymentId }] = await rows<{ id: number }>('SELECT id FROM payments WHERE provider_session_id = :s', {
+      s: `cs_test_report_${quoteId}`,
+    });
     const after = await summary();
     expect(after.deposits.count).toBe(before.deposits.count + 1);
     expect(after.deposits.takenCents).toBe(before.deposits.takenCents + Number(q.deposit_cents));
@@ -191,15 +260,22 @@ describe('a quote made in the test moves the numbers', () => {
     expect(after.conversion.sentCount).toBe(before.conversion.sentCount + 1);
     expect(after.conversion.depositPaidCount).toBe(before.conversion.depositPaidCount + 1);
     expect(after.margin.cams.revenueCents).toBeGreaterThan(before.margin.cams.revenueCents);
-    expect(after.topCams.find((c) => c.camId === DEMO.cams.bigTruck219)!.deposits).toBe((before.topCams.find((c) => c.camId === DEMO.cams.bigTruck219)?.deposits ?? 0) + 1);
+    expect(after.topCams.find((c) => c.camId === DEMO.cams.bigTruck219)!.deposits).toBe(
+      (before.topCams.find((c) => c.camId === DEMO.cams.bigTruck219)?.deposits ?? 0) + 1,
+    );
     expect(after).toEqual(await expectedFromRows());
   });
 
   it('still counts it as converted once the job is closed, and its balance payment as a balance, not a deposit', async () => {
     const before = await summary();
-    const [q] = await rows<{ total_cents: number; deposit_cents: number }>('SELECT total_cents, deposit_cents FROM quotes WHERE id = :quoteId', { quoteId });
+    const [q] = await rows<{ total_cents: number; deposit_cents: number }>(
+      'SELECT total_cents, deposit_cents FROM quotes WHERE id = :quoteId',
+      { quoteId },
+    );
     const balance = Number(q.total_cents) - Number(q.deposit_cents);
-    await sequelize.query("UPDATE quotes SET status = 'closed', closed_at = NOW() WHERE id = :quoteId", { replacements: { quoteId } });
+    await sequelize.query("UPDATE quotes SET status = 'closed', closed_at = NOW() WHERE id = :quoteId", {
+      replacements: { quoteId },
+    });
     await sequelize.query(
       "INSERT INTO payments (quote_id, provider, amount_cents, refunded_cents, currency, status, paid_at, purpose, method, created_at, updated_at) VALUES (:quoteId, 'counter', :amount, 0, 'usd', 'paid', NOW(), 'balance', 'cash', NOW(), NOW())",
       { replacements: { quoteId, amount: balance } },
@@ -213,7 +289,9 @@ describe('a quote made in the test moves the numbers', () => {
     expect(after.balances.count).toBe(before.balances.count + 1);
     expect(after.balances.takenCents).toBe(before.balances.takenCents + balance);
     expect(after).toEqual(await expectedFromRows());
-    await sequelize.query("DELETE FROM payments WHERE quote_id = :quoteId AND purpose = 'balance'", { replacements: { quoteId } });
+    await sequelize.query("DELETE FROM payments WHERE quote_id = :quoteId AND purpose = 'balance'", {
+      replacements: { quoteId },
+    });
   });
 });
 
@@ -246,13 +324,19 @@ describe('the quotes CSV', () => {
   let quoteId = 0;
   afterAll(async () => {
     if (quoteId) await sequelize.query('DELETE FROM quotes WHERE id = :quoteId', { replacements: { quoteId } });
-    if (customerId) await sequelize.query('DELETE FROM customers WHERE id = :customerId', { replacements: { customerId } });
+    if (customerId)
+      await sequelize.query('DELETE FROM customers WHERE id = :customerId', { replacements: { customerId } });
   });
 
   it('lists the range’s quotes and neutralises a formula-like customer name', async () => {
     const name = '=HYPERLINK("http://example.invalid","Kestrel")';
-    await sequelize.query("INSERT INTO customers (name, created_at, updated_at) VALUES (:name, NOW(), NOW())", { replacements: { name } });
-    [{ id: customerId }] = await rows<{ id: number }>('SELECT id FROM customers WHERE name = :name ORDER BY id DESC LIMIT 1', { name });
+    await sequelize.query('INSERT INTO customers (name, created_at, updated_at) VALUES (:name, NOW(), NOW())', {
+      replacements: { name },
+    });
+    [{ id: customerId }] = await rows<{ id: number }>(
+      'SELECT id FROM customers WHERE name = :name ORDER BY id DESC LIMIT 1',
+      { name },
+    );
     const number = `Q-1999-${String(customerId % 10_000).padStart(4, '0')}`;
     await sequelize.query(
       "INSERT INTO quotes (number, customer_id, status, subtotal_cents, tax_rate_bp, tax_cents, total_cents, deposit_cents, version, created_at, updated_at) VALUES (:number, :customerId, 'draft', 10000, 825, 825, 10825, 2165, 1, NOW(), NOW())",
@@ -260,18 +344,23 @@ describe('the quotes CSV', () => {
     );
     [{ id: quoteId }] = await rows<{ id: number }>('SELECT id FROM quotes WHERE number = :number', { number });
 
-    const res = await manager.get(`/api/reports/quotes.csv?from=${FROM}&to=${TODAY}`).buffer(true).parse((r, done) => {
-      let text = '';
-      r.setEncoding('utf8');
-      r.on('data', (c: string) => (text += c));
-      r.on('end', () => done(null, text));
-    });
+    const res = await manager
+      .get(`/api/reports/quotes.csv?from=${FROM}&to=${TODAY}`)
+      .buffer(true)
+      .parse((r, done) => {
+        let text = '';
+        r.setEncoding('utf8');
+        r.on('data', (c: string) => (text += c));
+        r.on('end', () => done(null, text));
+      });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
     expect(res.headers['content-disposition']).toContain(`lobewise-quotes-${FROM}-to-${TODAY}.csv`);
     const text = (res.body as string).replace(/^\uFEFF/, '');
     const lines = text.trim().split('\r\n');
-    expect(lines[0]).toBe('number,status,created_utc,sent_utc,customer,vehicle,cam_sku,subtotal_usd,tax_usd,total_usd,deposit_usd,paid_usd,refunded_usd');
+    expect(lines[0]).toBe(
+      'number,status,created_utc,sent_utc,customer,vehicle,cam_sku,subtotal_usd,tax_usd,total_usd,deposit_usd,paid_usd,refunded_usd',
+    );
     const ours = lines.find((l) => l.startsWith(`${number},`));
     expect(ours).toBeDefined();
     // Papaparse quotes the cell (it holds quotes and a comma); inside, the apostrophe comes first.
@@ -279,7 +368,10 @@ describe('the quotes CSV', () => {
     expect(ours).not.toMatch(/,"?=HYPERLINK/);
     expect(ours).toContain(',108.25,21.65,0.00,0.00');
     // Every quote created in the range is a row.
-    const [{ count }] = await rows<{ count: number }>('SELECT COUNT(*) AS count FROM quotes WHERE created_at >= :from AND created_at < :end', { from: `${FROM} 00:00:00`, end: `${utcDay(Date.parse(TODAY) + DAY)} 00:00:00` });
+    const [{ count }] = await rows<{ count: number }>(
+      'SELECT COUNT(*) AS count FROM quotes WHERE created_at >= :from AND created_at < :end',
+      { from: `${FROM} 00:00:00`, end: `${utcDay(Date.parse(TODAY) + DAY)} 00:00:00` },
+    );
     expect(lines.length - 1).toBe(Number(count));
   });
 });

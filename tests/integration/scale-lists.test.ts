@@ -14,7 +14,8 @@ type QuotePage = { items: QuoteSummary[]; total: number; page: number; pageSize:
 let sequelize: Sequelize;
 let counter: Agent;
 let manager: Agent;
-const rows = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
+const rows = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) =>
+  sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
 
 beforeAll(async () => {
   sequelize = connectTestDatabase();
@@ -52,17 +53,31 @@ describe('GET /api/quotes, paged', () => {
     const res = await counter.get('/api/quotes').expect(200);
     expect(res.body.items).toHaveLength(50);
     expect(res.body.total).toBeGreaterThan(6_000);
-    expect(res.body.items[0]).toEqual(expect.objectContaining({ number: expect.any(String), customerName: expect.any(String), status: expect.any(String) }));
+    expect(res.body.items[0]).toEqual(
+      expect.objectContaining({
+        number: expect.any(String),
+        customerName: expect.any(String),
+        status: expect.any(String),
+      }),
+    );
     expect(res.body.items[0]).toHaveProperty('paymentStatus');
   });
 
   it('finds a quote by its number, its customer’s name or e-mail, and its vehicle', async () => {
-    const [one] = await rows<{ id: number; number: string; name: string; email: string; vehicle: string; buildId: number }>(
+    const [one] = await rows<{
+      id: number;
+      number: string;
+      name: string;
+      email: string;
+      vehicle: string;
+      buildId: number;
+    }>(
       `SELECT q.id, q.number, c.name, c.email, b.vehicle_label AS vehicle, b.id AS buildId FROM quotes q JOIN customers c ON c.id = q.customer_id JOIN builds b ON b.id = q.build_id
         WHERE c.name LIKE :mark ORDER BY q.id LIMIT 1 OFFSET 77`,
       { mark: `${BULK_MARK} %` },
     );
-    const find = async (q: string) => ((await counter.get(`/api/quotes?pageSize=200&q=${encodeURIComponent(q)}`).expect(200)).body as QuotePage);
+    const find = async (q: string) =>
+      (await counter.get(`/api/quotes?pageSize=200&q=${encodeURIComponent(q)}`).expect(200)).body as QuotePage;
     expect((await find(one.number)).items.map((i) => i.id)).toEqual([one.id]);
     const surname = one.name.split(' ').at(-1)!; // the row number is part of it: few customers share its start
     const byName = await find(surname);
@@ -78,7 +93,14 @@ describe('GET /api/quotes, paged', () => {
   });
 
   it('refuses bad paging with 422 naming the field', async () => {
-    for (const [query, field] of [['pageSize=0', 'pageSize'], ['pageSize=201', 'pageSize'], ['pageSize=2.5', 'pageSize'], ['page=0', 'page'], ['page=abc', 'page'], ['status=open', 'status']]) {
+    for (const [query, field] of [
+      ['pageSize=0', 'pageSize'],
+      ['pageSize=201', 'pageSize'],
+      ['pageSize=2.5', 'pageSize'],
+      ['page=0', 'page'],
+      ['page=abc', 'page'],
+      ['status=open', 'status'],
+    ]) {
       const res = await counter.get(`/api/quotes?${query}`).expect(422);
       expect(res.body.errors.map((e: { field: string }) => e.field)).toContain(field);
     }
@@ -87,8 +109,16 @@ describe('GET /api/quotes, paged', () => {
 
 describe('GET /api/customers search', () => {
   it('finds a customer by a word of the name, the e-mail or the phone, and by the start of the name', async () => {
-    const [one] = await rows<{ id: number; name: string; email: string; phone: string }>('SELECT id, name, email, phone FROM customers WHERE name LIKE :mark ORDER BY id LIMIT 1 OFFSET 123', { mark: `${BULK_MARK} %` });
-    for (const q of [one.name.split(' ').at(-1)!, one.email, one.phone, one.name.split(' ').slice(1).join(' ').toLowerCase()]) {
+    const [one] = await rows<{ id: number; name: string; email: string; phone: string }>(
+      'SELECT id, name, email, phone FROM customers WHERE name LIKE :mark ORDER BY id LIMIT 1 OFFSET 123',
+      { mark: `${BULK_MARK} %` },
+    );
+    for (const q of [
+      one.name.split(' ').at(-1)!,
+      one.email,
+      one.phone,
+      one.name.split(' ').slice(1).join(' ').toLowerCase(),
+    ]) {
       const res = await counter.get(`/api/customers?pageSize=200&q=${encodeURIComponent(q)}`).expect(200);
       expect(res.body.items.map((c: { id: number }) => c.id)).toContain(one.id);
     }
@@ -102,15 +132,24 @@ describe('GET /api/reports/quotes.csv', () => {
   it('streams every quote of a year, far more than one chunk', async () => {
     const to = new Date().toISOString().slice(0, 10);
     const from = new Date(Date.now() - 364 * 86_400_000).toISOString().slice(0, 10);
-    const res = await manager.get(`/api/reports/quotes.csv?from=${from}&to=${to}`).buffer(true).parse((r, done) => {
-      let text = '';
-      r.setEncoding('utf8');
-      r.on('data', (c: string) => (text += c));
-      r.on('end', () => done(null, text));
-    });
+    const res = await manager
+      .get(`/api/reports/quotes.csv?from=${from}&to=${to}`)
+      .buffer(true)
+      .parse((r, done) => {
+        let text = '';
+        r.setEncoding('utf8');
+        r.on('data', (c: string) => (text += c));
+        r.on('end', () => done(null, text));
+      });
     expect(res.status).toBe(200);
-    const lines = (res.body as string).replace(/^\uFEFF/, '').trim().split('\r\n');
-    const [{ count }] = await rows<{ count: unknown }>('SELECT COUNT(*) AS count FROM quotes WHERE created_at >= :from AND created_at < DATE_ADD(:to, INTERVAL 1 DAY)', { from, to });
+    const lines = (res.body as string)
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
+    const [{ count }] = await rows<{ count: unknown }>(
+      'SELECT COUNT(*) AS count FROM quotes WHERE created_at >= :from AND created_at < DATE_ADD(:to, INTERVAL 1 DAY)',
+      { from, to },
+    );
     expect(Number(count)).toBeGreaterThan(1_500);
     expect(lines.length - 1).toBe(Number(count));
     const numbers = lines.slice(1).map((l) => l.split(',')[0]);

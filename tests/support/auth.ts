@@ -22,7 +22,8 @@ export function sessionCookieFrom(setCookie: string[] | string | undefined): str
 export async function signInWith(email: string, password: string): Promise<string> {
   const { appUrl } = readRuntime();
   const response = await request(appUrl).post('/api/auth/sign-in').send({ email, password });
-  if (response.status !== 200) throw new Error(`sign-in as ${email} answered ${response.status}: ${JSON.stringify(response.body)}`);
+  if (response.status !== 200)
+    throw new Error(`sign-in as ${email} answered ${response.status}: ${JSON.stringify(response.body)}`);
   return sessionCookieFrom(response.headers['set-cookie']);
 }
 
@@ -39,6 +40,7 @@ export async function signedInAgent(role: TestRole) {
   const { appUrl } = readRuntime();
   const agent = request.agent(appUrl);
   const response = await agent.post('/api/auth/sign-in').send({ email: DEMO_EMAILS[role], password: DEMO_PASSWORD });
-  if (response.status !== 200) throw new Error(`sign-in as ${role} answered ${response.status}: ${JSON.stringify(response.body)}`);
+  if (response.status !== 200)
+    throw new Error(`sign-in as ${role} answered ${response.status}: ${JSON.stringify(response.body)}`);
   return agent;
 }

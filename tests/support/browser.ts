@@ -22,7 +22,11 @@ export function launchBrowser(): Promise<Browser> {
 }
 
 /** A browser context signed in as a member of staff: the session cookie of `signIn(role)`, desktop size by default. */
-export async function staffContext(browser: Browser, role: TestRole, viewport = { width: 1280, height: 900 }): Promise<BrowserContext> {
+export async function staffContext(
+  browser: Browser,
+  role: TestRole,
+  viewport = { width: 1280, height: 900 },
+): Promise<BrowserContext> {
   const [name, value] = (await signIn(role)).split('=');
   const context = await browser.newContext({ viewport });
   await context.addCookies([{ name, value, url: readRuntime().appUrl }]);

@@ -24,11 +24,16 @@ type DemoSeed = {
 const seed = (require('../../database/seeders/20261202000100-demo-shop.js') as { demo: DemoSeed }).demo;
 
 /** Each name's id, found by its key; a key the seed does not have stops every test at once, naming it. */
-function idsOf<K extends string>(keys: Record<K, string>, find: (key: string) => number | undefined, what: string): Record<K, number> {
+function idsOf<K extends string>(
+  keys: Record<K, string>,
+  find: (key: string) => number | undefined,
+  what: string,
+): Record<K, number> {
   return Object.fromEntries(
     Object.entries<string>(keys).map(([name, key]) => {
       const id = find(key);
-      if (!id || id < 1) throw new Error(`tests/support/demo.ts: the demo seed has no ${what} ${key} (DEMO.${what}.${name})`);
+      if (!id || id < 1)
+        throw new Error(`tests/support/demo.ts: the demo seed has no ${what} ${key} (DEMO.${what}.${name})`);
       return [name, id];
     }),
   ) as Record<K, number>;
@@ -37,7 +42,12 @@ function idsOf<K extends string>(keys: Record<K, string>, find: (key: string) =>
 /** What names each row in the database: a cam's or part's sku, a labour code, an e-mail, a quote number. */
 export const DEMO_KEYS = {
   users: { manager: 'manager@lobewise.test', counter: 'counter@lobewise.test', tech: 'tech@lobewise.test' },
-  suppliers: { ridgeback: 'Ridgeback Grind Co.', lanternValley: 'Lantern Valley Cams', foundryNine: 'Foundry Nine Valvetrain', prairie: 'Prairie Drivetrain Supply' },
+  suppliers: {
+    ridgeback: 'Ridgeback Grind Co.',
+    lanternValley: 'Lantern Valley Cams',
+    foundryNine: 'Foundry Nine Valvetrain',
+    prairie: 'Prairie Drivetrain Supply',
+  },
   cams: {
     factory48: 'FB-48',
     factory53: 'FB-53',
@@ -109,7 +119,11 @@ export const DEMO_KEYS = {
     converter: 'converter',
     tune: 'tune',
   },
-  customers: { whitlock: 'dana.whitlock@example.com', okafor: 'marisol.okafor@example.com', vranes: 'teddy.vranes@example.com' },
+  customers: {
+    whitlock: 'dana.whitlock@example.com',
+    okafor: 'marisol.okafor@example.com',
+    vranes: 'teddy.vranes@example.com',
+  },
   // A build is named by its customer's e-mail: each demo customer has one.
   builds: {
     whitlockTowingTruck: 'dana.whitlock@example.com', // 5.3 L, active deactivation, 2,000 stall, towing
@@ -127,9 +141,17 @@ export const DEMO = {
   cams: idsOf(DEMO_KEYS.cams, seed.camId, 'cams'),
   parts: idsOf(DEMO_KEYS.parts, seed.partId, 'parts'),
   labor: idsOf(DEMO_KEYS.labor, seed.laborId, 'labor'),
-  needRules: idsOf(DEMO_KEYS.needRules, (key) => seed.needRules.find((r) => `${r.kind}${r.vehicle_class ? `/${r.vehicle_class}` : ''}` === key)?.id, 'needRules'),
+  needRules: idsOf(
+    DEMO_KEYS.needRules,
+    (key) => seed.needRules.find((r) => `${r.kind}${r.vehicle_class ? `/${r.vehicle_class}` : ''}` === key)?.id,
+    'needRules',
+  ),
   customers: idsOf(DEMO_KEYS.customers, customerId, 'customers'),
-  builds: idsOf(DEMO_KEYS.builds, (email) => seed.builds.find((b) => b.customer_id === customerId(email))?.id, 'builds'),
+  builds: idsOf(
+    DEMO_KEYS.builds,
+    (email) => seed.builds.find((b) => b.customer_id === customerId(email))?.id,
+    'builds',
+  ),
   quotes: idsOf(DEMO_KEYS.quotes, (number) => seed.quotes.find((q) => q.number === number)?.id, 'quotes'),
 };
 

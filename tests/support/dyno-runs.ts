@@ -12,7 +12,12 @@ export async function removeDynoRuns(ids: readonly number[]): Promise<void> {
   const runs = await DynoRun.findAll({ where: { id: { [Op.in]: [...ids] } }, attributes: ['id', 'buildId'] });
   const buildIds = [...new Set(runs.map((r) => r.buildId))];
   await db().transaction(async (t) => {
-    await Build.findAll({ where: { id: { [Op.in]: buildIds } }, attributes: ['id'], lock: t.LOCK.UPDATE, transaction: t });
+    await Build.findAll({
+      where: { id: { [Op.in]: buildIds } },
+      attributes: ['id'],
+      lock: t.LOCK.UPDATE,
+      transaction: t,
+    });
     await DynoRun.destroy({ where: { id: { [Op.in]: [...ids] } }, transaction: t });
     await refreshDynoGains(buildIds, t);
   });

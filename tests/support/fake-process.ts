@@ -5,9 +5,15 @@ import path from 'node:path';
 // logs the address it got, and this waits for that line and its /health answer.
 export type FakeProcess = { child: ChildProcess; baseUrl: string; port: number; log: string[] };
 
-export async function startFakeProcess(name: 'mail-fake' | 'payments-fake', env: Record<string, string>): Promise<FakeProcess> {
+export async function startFakeProcess(
+  name: 'mail-fake' | 'payments-fake',
+  env: Record<string, string>,
+): Promise<FakeProcess> {
   const server = path.resolve(__dirname, `../../docker-local/${name}/server.mjs`);
-  const child = spawn(process.execPath, [server], { env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(process.execPath, [server], {
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   const log: string[] = [];
   const baseUrl = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`${name} did not start:\n${log.join('')}`)), 10_000);

@@ -8,5 +8,7 @@ export async function clearRateLimits(prefix: 'signin-' | 'lead-'): Promise<void
 
 /** Makes a counter's window end now, as if its time had passed (the store compares `expire` with the clock). */
 export async function expireRateLimits(keyPrefix: string): Promise<void> {
-  await connectTestDatabase().query('UPDATE rate_limits SET expire = ? WHERE `key` LIKE ?', { replacements: [Date.now() - 1, `${keyPrefix}%`] });
+  await connectTestDatabase().query('UPDATE rate_limits SET expire = ? WHERE `key` LIKE ?', {
+    replacements: [Date.now() - 1, `${keyPrefix}%`],
+  });
 }

@@ -13,12 +13,21 @@ export type Throwaway = { id: number; email: string; password: string };
 
 const created: number[] = [];
 
-export async function createThrowawayUser(role: 'manager' | 'counter' | 'tech', options: { passwordHash?: string; password?: string } = {}): Promise<Throwaway> {
+export async function createThrowawayUser(
+  role: 'manager' | 'counter' | 'tech',
+  options: { passwordHash?: string; password?: string } = {},
+): Promise<Throwaway> {
   connectTestDatabase();
   const tag = crypto.randomBytes(5).toString('hex');
   const email = `throwaway-${role}-${tag}@lobewise.test`;
   const password = options.password ?? `test-password-${tag}`;
-  const user = await User.create({ email, name: `Test ${role} ${tag}`, role, passwordHash: options.passwordHash ?? (await hashPassword(password)), active: true });
+  const user = await User.create({
+    email,
+    name: `Test ${role} ${tag}`,
+    role,
+    passwordHash: options.passwordHash ?? (await hashPassword(password)),
+    active: true,
+  });
   created.push(user.id);
   return { id: user.id, email, password };
 }
@@ -38,7 +47,11 @@ export function testAddress(): string {
  */
 export async function clearSignInAttempts(emails: string[], ips: string[] = []): Promise<void> {
   await clearRateLimits('signin-');
-  await SignInAttempt.destroy({ where: { [Op.or]: [{ email: { [Op.in]: emails.length ? emails : [''] } }, { ip: { [Op.in]: ips.length ? ips : [''] } }] } });
+  await SignInAttempt.destroy({
+    where: {
+      [Op.or]: [{ email: { [Op.in]: emails.length ? emails : [''] } }, { ip: { [Op.in]: ips.length ? ips : [''] } }],
+    },
+  });
 }
 
 /**
@@ -50,6 +63,14 @@ export async function removeThrowawayUsers(extraEmails: string[] = []): Promise<
   connectTestDatabase();
   const demo = new Set(Object.values(DEMO_EMAILS));
   const emails = extraEmails.filter((email) => !demo.has(email));
-  await User.destroy({ where: { [Op.or]: [{ id: { [Op.in]: created.length ? created : [0] } }, { email: { [Op.in]: emails.length ? emails : [''] } }], email: { [Op.notIn]: [...demo] } } });
+  await User.destroy({
+    where: {
+      [Op.or]: [
+        { id: { [Op.in]: created.length ? created : [0] } },
+        { email: { [Op.in]: emails.length ? emails : [''] } },
+      ],
+      email: { [Op.notIn]: [...demo] },
+    },
+  });
   created.length = 0;
 }

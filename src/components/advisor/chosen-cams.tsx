@@ -24,7 +24,10 @@ export function ChosenCams({ cams, ...view }: Omit<CustomerViewProps, 'onClose'>
   const close = () => setShowing(false);
 
   return (
-    <section aria-label="Chosen cams" className="flex flex-col gap-3 rounded-lg border border-steel-300 bg-paper-raised p-3">
+    <section
+      aria-label="Chosen cams"
+      className="flex flex-col gap-3 rounded-lg border border-steel-300 bg-paper-raised p-3"
+    >
       <div className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
         <p role="status" className="text-ink-soft">
           {ready
@@ -32,7 +35,12 @@ export function ChosenCams({ cams, ...view }: Omit<CustomerViewProps, 'onClose'>
             : `Chart ${COMPARE_MIN} or ${COMPARE_MAX} cams to compare them or show them to the customer (${cams.length} on the chart now).`}
         </p>
         <div className="flex flex-wrap gap-2">
-          <Button aria-expanded={comparing && ready} aria-controls={panel} disabled={!ready} onClick={() => setComparing((on) => !on)}>
+          <Button
+            aria-expanded={comparing && ready}
+            aria-controls={panel}
+            disabled={!ready}
+            onClick={() => setComparing((on) => !on)}
+          >
             {comparing && ready ? 'Hide the comparison' : 'Compare side by side'}
           </Button>
           <Button id={opener} variant="primary" disabled={!ready} onClick={() => setShowing(true)}>

@@ -24,7 +24,15 @@ export type CustomerViewProps = {
 // curves, the side-by-side comparison and the whole-job price, with the cautions every cam swap carries.
 // A modal <dialog> on top of the staff page: the page underneath is inert, Escape closes it, and it prints
 // alone (globals.css hides the rest of the body while it is open), so nothing of the staff screen shows.
-export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBand, notice, onClose }: CustomerViewProps) {
+export function CustomerView({
+  cams,
+  baseline,
+  displacementL,
+  stallRpm,
+  drivenBand,
+  notice,
+  onClose,
+}: CustomerViewProps) {
   const dialog = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const element = dialog.current;
@@ -50,19 +58,31 @@ export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBa
       <div className="mx-auto flex max-w-6xl flex-col gap-6 px-4 py-6 text-lg sm:px-8">
         <div className="flex flex-wrap items-start justify-between gap-3">
           <div>
-            <h2 id="customer-view-title" className="text-3xl font-semibold sm:text-4xl">Your cam choices</h2>
+            <h2 id="customer-view-title" className="text-3xl font-semibold sm:text-4xl">
+              Your cam choices
+            </h2>
             <p className="mt-1 text-ink-soft">
-              For your {formatNumber(displacementL, 1, 'L')} engine: {cams.length} cams side by side, with what each one does and what the whole job comes to.
+              For your {formatNumber(displacementL, 1, 'L')} engine: {cams.length} cams side by side, with what each one
+              does and what the whole job comes to.
             </p>
           </div>
           <div className="flex flex-wrap gap-2 print:hidden">
-            <Button size="md" variant="primary" className="min-h-12" onClick={onClose} data-close-view>Back to the shop view</Button>
-            <Button size="md" className="min-h-12" onClick={() => window.print()}>Print</Button>
+            <Button size="md" variant="primary" className="min-h-12" onClick={onClose} data-close-view>
+              Back to the shop view
+            </Button>
+            <Button size="md" className="min-h-12" onClick={() => window.print()}>
+              Print
+            </Button>
           </div>
         </div>
 
-        <section aria-labelledby="customer-chart-title" className="rounded-lg border border-steel-300 bg-paper-raised p-4 break-inside-avoid">
-          <h3 id="customer-chart-title" className="text-xl font-semibold">How each cam pulls against your engine now</h3>
+        <section
+          aria-labelledby="customer-chart-title"
+          className="rounded-lg border border-steel-300 bg-paper-raised p-4 break-inside-avoid"
+        >
+          <h3 id="customer-chart-title" className="text-xl font-semibold">
+            How each cam pulls against your engine now
+          </h3>
           <PowerChart
             baseline={{ label: 'Your engine now', points: baseline.curve }}
             candidates={cams.map((c) => ({ label: customerCamName(c), points: c.curve }))}
@@ -76,28 +96,50 @@ export function CustomerView({ cams, baseline, displacementL, stallRpm, drivenBa
 
         <ul className="grid gap-4 md:grid-cols-3" aria-label="The chosen cams">
           {told.map((cam) => (
-            <li key={String(cam.camId)} className="flex flex-col gap-3 rounded-lg border border-steel-300 bg-paper-raised p-4 break-inside-avoid" data-customer-cam>
+            <li
+              key={String(cam.camId)}
+              className="flex flex-col gap-3 rounded-lg border border-steel-300 bg-paper-raised p-4 break-inside-avoid"
+              data-customer-cam
+            >
               <h3 className="text-2xl font-semibold">{cam.name}</h3>
               <p>
                 <span className="block text-base text-ink-muted">Whole job, before tax</span>
-                <span className="text-3xl font-semibold tabular-nums" data-customer-price>{cam.jobPrice}</span>
+                <span className="text-3xl font-semibold tabular-nums" data-customer-price>
+                  {cam.jobPrice}
+                </span>
               </p>
               <Lines lines={cam.does} />
               {cam.includes.length ? <Lines title="The job includes" lines={cam.includes} /> : null}
-              {cam.knowFirst.length ? <Lines title="Good to know" lines={cam.knowFirst} className="rounded border border-caution-700/40 bg-caution-100 p-3 text-caution-700" /> : null}
+              {cam.knowFirst.length ? (
+                <Lines
+                  title="Good to know"
+                  lines={cam.knowFirst}
+                  className="rounded border border-caution-700/40 bg-caution-100 p-3 text-caution-700"
+                />
+              ) : null}
             </li>
           ))}
         </ul>
 
         <section aria-labelledby="customer-compare-title" className="flex flex-col gap-2">
-          <h3 id="customer-compare-title" className="text-xl font-semibold">Side by side</h3>
+          <h3 id="customer-compare-title" className="text-xl font-semibold">
+            Side by side
+          </h3>
           <CamComparison cams={cams} forCustomer caption="The chosen cams side by side" />
         </section>
 
-        <section aria-labelledby="customer-cautions-title" className="rounded-lg border border-caution-700/40 bg-caution-100 p-4 text-ink break-inside-avoid" data-customer-cautions>
-          <h3 id="customer-cautions-title" className="text-xl font-semibold">Before any cam goes in</h3>
+        <section
+          aria-labelledby="customer-cautions-title"
+          className="rounded-lg border border-caution-700/40 bg-caution-100 p-4 text-ink break-inside-avoid"
+          data-customer-cautions
+        >
+          <h3 id="customer-cautions-title" className="text-xl font-semibold">
+            Before any cam goes in
+          </h3>
           <ul className="mt-2 flex list-disc flex-col gap-1.5 pl-5">
-            {CUSTOMER_CAUTIONS.map((line) => <li key={line}>{line}</li>)}
+            {CUSTOMER_CAUTIONS.map((line) => (
+              <li key={line}>{line}</li>
+            ))}
           </ul>
         </section>
       </div>
@@ -111,7 +153,9 @@ function Lines({ title, lines, className = '' }: { title?: string; lines: readon
     <div className={className}>
       {title ? <h4 className="font-semibold">{title}</h4> : null}
       <ul className="flex list-disc flex-col gap-1 pl-5">
-        {lines.map((line) => <li key={line}>{line}</li>)}
+        {lines.map((line) => (
+          <li key={line}>{line}</li>
+        ))}
       </ul>
     </div>
   );

@@ -18,10 +18,16 @@ export function ChangePasswordForm() {
       initialValues={{ currentPassword: '', newPassword: '', repeat: '' }}
       validate={changePasswordChecks}
       onSubmit={async (values, helpers) => {
-        const answer = await sendJson('POST', '/api/account/password', { currentPassword: values.currentPassword, newPassword: values.newPassword });
+        const answer = await sendJson('POST', '/api/account/password', {
+          currentPassword: values.currentPassword,
+          newPassword: values.newPassword,
+        });
         if (answer.status === 200) {
           const others = Number(answer.body.otherSessionsEnded ?? 0);
-          setResult({ tone: 'ok', text: `Your password is changed.${others ? ` ${others} other session${others === 1 ? '' : 's'} signed out.` : ''}` });
+          setResult({
+            tone: 'ok',
+            text: `Your password is changed.${others ? ` ${others} other session${others === 1 ? '' : 's'} signed out.` : ''}`,
+          });
           helpers.resetForm();
           return;
         }
@@ -32,10 +38,34 @@ export function ChangePasswordForm() {
       {({ isSubmitting }) => (
         <Form className="flex max-w-md flex-col gap-4" noValidate>
           {result ? <Banner tone={result.tone}>{result.text}</Banner> : null}
-          <TextField namedErrors name="currentPassword" label="Current password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
-          <TextField namedErrors name="newPassword" label="New password" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more.`} />
-          <TextField namedErrors name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
-          <div><SubmitButton busy={isSubmitting}>Change password</SubmitButton></div>
+          <TextField
+            namedErrors
+            name="currentPassword"
+            label="Current password"
+            type="password"
+            autoComplete="current-password"
+            maxLength={PASSWORD_MAX}
+          />
+          <TextField
+            namedErrors
+            name="newPassword"
+            label="New password"
+            type="password"
+            autoComplete="new-password"
+            maxLength={PASSWORD_MAX}
+            hint={`${PASSWORD_MIN} characters or more.`}
+          />
+          <TextField
+            namedErrors
+            name="repeat"
+            label="New password again"
+            type="password"
+            autoComplete="new-password"
+            maxLength={PASSWORD_MAX}
+          />
+          <div>
+            <SubmitButton busy={isSubmitting}>Change password</SubmitButton>
+          </div>
         </Form>
       )}
     </Formik>

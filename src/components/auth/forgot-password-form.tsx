@@ -27,8 +27,18 @@ export function ForgotPasswordForm() {
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {answer ? <Banner tone={answer.tone}>{answer.text}</Banner> : null}
-          <TextField namedErrors name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
-          <div><SubmitButton busy={isSubmitting}>Send the link</SubmitButton></div>
+          <TextField
+            namedErrors
+            name="email"
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            autoFocus
+            maxLength={EMAIL_MAX}
+          />
+          <div>
+            <SubmitButton busy={isSubmitting}>Send the link</SubmitButton>
+          </div>
         </Form>
       )}
     </Formik>

@@ -18,7 +18,12 @@ export function ResetPasswordForm({ token }: { token: string }) {
     return (
       <div className="flex flex-col gap-4">
         <Banner tone="ok">{result.text}</Banner>
-        <Link href="/sign-in" className="self-start rounded bg-ember-500 px-4 py-2 font-semibold text-paper-raised hover:bg-ember-600">Go to sign-in</Link>
+        <Link
+          href="/sign-in"
+          className="self-start rounded bg-ember-500 px-4 py-2 font-semibold text-paper-raised hover:bg-ember-600"
+        >
+          Go to sign-in
+        </Link>
       </div>
     );
   }
@@ -28,7 +33,8 @@ export function ResetPasswordForm({ token }: { token: string }) {
       validate={resetPasswordChecks}
       onSubmit={async (values, helpers) => {
         const answer = await sendJson('POST', '/api/auth/reset-password', { token, password: values.password });
-        if (answer.status === 200) return setResult({ tone: 'ok', text: answer.body.message ?? 'Your password is set.' });
+        if (answer.status === 200)
+          return setResult({ tone: 'ok', text: answer.body.message ?? 'Your password is set.' });
         if (answer.status === 422) helpers.setErrors(formErrors<Values>(answer));
         setResult({ tone: 'fault', text: answer.body.message ?? 'That did not work. Try again.' });
       }}
@@ -36,9 +42,27 @@ export function ResetPasswordForm({ token }: { token: string }) {
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {result ? <Banner tone={result.tone}>{result.text}</Banner> : null}
-          <TextField namedErrors name="password" label="New password" type="password" autoComplete="new-password" autoFocus maxLength={PASSWORD_MAX} hint={`${PASSWORD_MIN} characters or more; a short sentence works well.`} />
-          <TextField namedErrors name="repeat" label="New password again" type="password" autoComplete="new-password" maxLength={PASSWORD_MAX} />
-          <div><SubmitButton busy={isSubmitting}>Save the password</SubmitButton></div>
+          <TextField
+            namedErrors
+            name="password"
+            label="New password"
+            type="password"
+            autoComplete="new-password"
+            autoFocus
+            maxLength={PASSWORD_MAX}
+            hint={`${PASSWORD_MIN} characters or more; a short sentence works well.`}
+          />
+          <TextField
+            namedErrors
+            name="repeat"
+            label="New password again"
+            type="password"
+            autoComplete="new-password"
+            maxLength={PASSWORD_MAX}
+          />
+          <div>
+            <SubmitButton busy={isSubmitting}>Save the password</SubmitButton>
+          </div>
         </Form>
       )}
     </Formik>

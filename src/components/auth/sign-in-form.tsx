@@ -36,11 +36,28 @@ export function SignInForm({ next }: { next: string }) {
       {({ isSubmitting }) => (
         <Form className="flex flex-col gap-4" noValidate>
           {problem ? <Banner tone="fault">{problem}</Banner> : null}
-          <TextField namedErrors name="email" label="E-mail" type="email" autoComplete="username" autoFocus maxLength={EMAIL_MAX} />
-          <TextField namedErrors name="password" label="Password" type="password" autoComplete="current-password" maxLength={PASSWORD_MAX} />
+          <TextField
+            namedErrors
+            name="email"
+            label="E-mail"
+            type="email"
+            autoComplete="username"
+            autoFocus
+            maxLength={EMAIL_MAX}
+          />
+          <TextField
+            namedErrors
+            name="password"
+            label="Password"
+            type="password"
+            autoComplete="current-password"
+            maxLength={PASSWORD_MAX}
+          />
           <div className="flex items-center justify-between gap-4">
             <SubmitButton busy={isSubmitting}>Sign in</SubmitButton>
-            <Link href="/forgot-password" className="text-sm text-gauge-700 underline">Forgot your password?</Link>
+            <Link href="/forgot-password" className="text-sm text-gauge-700 underline">
+              Forgot your password?
+            </Link>
           </div>
         </Form>
       )}

@@ -28,13 +28,18 @@ export async function StaffHeaderNav() {
       <ul className="flex flex-wrap items-center gap-x-1 gap-y-1">
         {linksFor(user.role).map((link) => (
           <li key={link.href}>
-            <Link href={link.href} className="whitespace-nowrap rounded px-1.5 py-1 hover:bg-steel-900">{link.label}</Link>
+            <Link href={link.href} className="whitespace-nowrap rounded px-1.5 py-1 hover:bg-steel-900">
+              {link.label}
+            </Link>
           </li>
         ))}
       </ul>
       {/* A long name is cut short (in full on hover) rather than pushing the header onto a second row. */}
       <span className="flex items-baseline gap-1 whitespace-nowrap text-steel-300">
-        <span className="inline-block max-w-[11rem] truncate align-bottom" title={user.name}>{user.name}</span> · <span className="font-semibold text-paper">{ROLE_NAMES[user.role]}</span>
+        <span className="inline-block max-w-[11rem] truncate align-bottom" title={user.name}>
+          {user.name}
+        </span>{' '}
+        · <span className="font-semibold text-paper">{ROLE_NAMES[user.role]}</span>
       </span>
       <SignOutButton />
     </>

@@ -4,8 +4,22 @@ import { Form, Formik, type FormikHelpers } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { useVersionedSave } from '@/lib/api-client';
-import { bpFromPercentText, bpToPercentText, centsFromText, centsToText, formatMoney, percentFromBp } from '@/lib/format';
-import { moneyWithin, numberWithin, percentWithin, textUpTo, validateWithYup, type Range } from '@/lib/forms/yup-limits';
+import {
+  bpFromPercentText,
+  bpToPercentText,
+  centsFromText,
+  centsToText,
+  formatMoney,
+  percentFromBp,
+} from '@/lib/format';
+import {
+  moneyWithin,
+  numberWithin,
+  percentWithin,
+  textUpTo,
+  validateWithYup,
+  type Range,
+} from '@/lib/forms/yup-limits';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
@@ -59,7 +73,8 @@ export function payloadFromValues(fields: FieldDef[], values: FormValues): Recor
     }
     const text = String(v ?? '').trim();
     if (text === '') out[f.name] = null;
-    else if (f.kind === 'number' || f.kind === 'integer') out[f.name] = Number.isFinite(Number(text)) ? Number(text) : text;
+    else if (f.kind === 'number' || f.kind === 'integer')
+      out[f.name] = Number.isFinite(Number(text)) ? Number(text) : text;
     else if (f.kind === 'money') {
       out[f.name] = centsFromText(text) ?? text;
     } else if (f.kind === 'percent') out[f.name] = bpFromPercentText(text) ?? text;
@@ -77,10 +92,16 @@ export function yupValidator(fields: FieldDef[]) {
   const shape: Record<string, yup.AnySchema> = {};
   for (const f of fields) {
     const label = f.term ?? inMessage(f.label);
-    if (f.kind === 'text' || f.kind === 'textarea') shape[f.name] = textUpTo(label, f.maxLength, { required: f.required });
-    else if (f.kind === 'number' || f.kind === 'integer') shape[f.name] = numberWithin(label, f.unit ?? '', f.range, { integer: f.kind === 'integer', required: f.required });
+    if (f.kind === 'text' || f.kind === 'textarea')
+      shape[f.name] = textUpTo(label, f.maxLength, { required: f.required });
+    else if (f.kind === 'number' || f.kind === 'integer')
+      shape[f.name] = numberWithin(label, f.unit ?? '', f.range, {
+        integer: f.kind === 'integer',
+        required: f.required,
+      });
     else if (f.kind === 'money') shape[f.name] = moneyWithin(label, f.range, centsFromText, { required: f.required });
-    else if (f.kind === 'percent') shape[f.name] = percentWithin(label, f.range, bpFromPercentText, { required: f.required });
+    else if (f.kind === 'percent')
+      shape[f.name] = percentWithin(label, f.range, bpFromPercentText, { required: f.required });
   }
   return validateWithYup<FormValues>(yup.object(shape));
 }
@@ -89,10 +110,32 @@ export function yupValidator(fields: FieldDef[]) {
 function Field({ def }: { def: FieldDef }) {
   const wide = def.wide || def.kind === 'textarea' ? 'sm:col-span-2 lg:col-span-3' : '';
   if (def.kind === 'bool') return <CheckboxField name={def.name} label={def.label} hint={def.hint} className="pt-5" />;
-  if (def.kind === 'textarea') return <TextAreaField name={def.name} label={def.label} hint={def.hint} className={wide} maxLength={def.maxLength} />;
-  if (def.kind === 'select') return <SelectField name={def.name} label={def.label} hint={def.hint} className={wide} options={(def.options ?? []).map((o) => [o.value, o.label] as const)} />;
-  if (def.kind === 'text') return <TextField name={def.name} label={def.label} hint={def.hint} className={wide} maxLength={def.maxLength} />;
-  return <NumberField name={def.name} label={def.label} unit={def.unit ?? ''} hint={def.hint ?? ''} decimals={def.kind !== 'integer'} className={wide} />;
+  if (def.kind === 'textarea')
+    return (
+      <TextAreaField name={def.name} label={def.label} hint={def.hint} className={wide} maxLength={def.maxLength} />
+    );
+  if (def.kind === 'select')
+    return (
+      <SelectField
+        name={def.name}
+        label={def.label}
+        hint={def.hint}
+        className={wide}
+        options={(def.options ?? []).map((o) => [o.value, o.label] as const)}
+      />
+    );
+  if (def.kind === 'text')
+    return <TextField name={def.name} label={def.label} hint={def.hint} className={wide} maxLength={def.maxLength} />;
+  return (
+    <NumberField
+      name={def.name}
+      label={def.label}
+      unit={def.unit ?? ''}
+      hint={def.hint ?? ''}
+      decimals={def.kind !== 'integer'}
+      className={wide}
+    />
+  );
 }
 
 function show(def: FieldDef | undefined, value: unknown): string {
@@ -129,7 +172,8 @@ export function RecordForm({
   async function submit(values: FormValues, helpers: FormikHelpers<FormValues>) {
     setProblem(null);
     const payload = { ...payloadFromValues(fields, values), ...extraPayload };
-    const result = base && updateUrl ? await save('PATCH', updateUrl, payload) : await save('POST', createUrl!, payload);
+    const result =
+      base && updateUrl ? await save('PATCH', updateUrl, payload) : await save('POST', createUrl!, payload);
     if (result.ok) {
       onSaved(result.body);
       return;
@@ -153,11 +197,21 @@ export function RecordForm({
   }
 
   return (
-    <Formik initialValues={valuesFromRecord(fields, record)} validate={yupValidator(fields)} onSubmit={submit} enableReinitialize={false}>
+    <Formik
+      initialValues={valuesFromRecord(fields, record)}
+      validate={yupValidator(fields)}
+      onSubmit={submit}
+      enableReinitialize={false}
+    >
       {({ isSubmitting, setValues }) => {
         const differences = conflict
           ? fields
-              .map((f) => ({ def: f, theirs: conflict[f.name], before: base?.[f.name], mine: payloadFromValues([f], mine ?? {})[f.name] }))
+              .map((f) => ({
+                def: f,
+                theirs: conflict[f.name],
+                before: base?.[f.name],
+                mine: payloadFromValues([f], mine ?? {})[f.name],
+              }))
               .filter((d) => JSON.stringify(d.theirs ?? null) !== JSON.stringify(d.before ?? null))
           : [];
         return (
@@ -198,7 +252,11 @@ export function RecordForm({
                 )}
               </ConflictBanner>
             ) : null}
-            {problem ? <Banner tone="fault" title="Not saved">{problem}</Banner> : null}
+            {problem ? (
+              <Banner tone="fault" title="Not saved">
+                {problem}
+              </Banner>
+            ) : null}
             <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
               {fields.map((def) => (
                 <Field key={def.name} def={def} />

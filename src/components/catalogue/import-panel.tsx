@@ -16,7 +16,14 @@ type Report = {
   ignoredColumns: string[];
   summary: { create: number; update: number; unchanged: number; error: number };
   suppliersToAdd: string[];
-  rows: { row: number; sku: string; name: string; action: 'create' | 'update' | 'unchanged' | 'error'; changes: { column: string; field: string; from: unknown; to: unknown }[]; errors: { column: string; message: string }[] }[];
+  rows: {
+    row: number;
+    sku: string;
+    name: string;
+    action: 'create' | 'update' | 'unchanged' | 'error';
+    changes: { column: string; field: string; from: unknown; to: unknown }[];
+    errors: { column: string; message: string }[];
+  }[];
   errors: { row: number; column: string; message: string }[];
 };
 
@@ -24,7 +31,11 @@ const MAX_BYTES = 2 * 1024 * 1024;
 const TEMPLATE_URL = ['/api', 'cams', 'import', 'template'].join('/');
 
 /** XMLHttpRequest rather than fetch: it reports upload progress, which a large file needs. */
-function post(file: File, mode: 'preview' | 'commit', onProgress: (fraction: number) => void): Promise<{ status: number; body: Partial<Report> & { message?: string } }> {
+function post(
+  file: File,
+  mode: 'preview' | 'commit',
+  onProgress: (fraction: number) => void,
+): Promise<{ status: number; body: Partial<Report> & { message?: string } }> {
   return new Promise((resolve) => {
     const xhr = new XMLHttpRequest();
     const form = new FormData();
@@ -80,7 +91,11 @@ export function ImportPanel() {
     }
   }
 
-  const rows = report?.rows.filter((r) => show === 'all' || (show === 'problems' ? r.action === 'error' : r.action === 'create' || r.action === 'update')) ?? [];
+  const rows =
+    report?.rows.filter(
+      (r) =>
+        show === 'all' || (show === 'problems' ? r.action === 'error' : r.action === 'create' || r.action === 'update'),
+    ) ?? [];
   const shown = rows.slice(0, 500);
   return (
     <div className="flex flex-col gap-4">
@@ -95,21 +110,39 @@ export function ImportPanel() {
               const chosen = e.target.files?.[0] ?? null;
               setReport(null);
               setStage('idle');
-              setProblem(chosen && chosen.size > MAX_BYTES ? `That file is ${(chosen.size / (1024 * 1024)).toFixed(1)} MB; the limit is 2 MB. Split it into smaller files.` : null);
+              setProblem(
+                chosen && chosen.size > MAX_BYTES
+                  ? `That file is ${(chosen.size / (1024 * 1024)).toFixed(1)} MB; the limit is 2 MB. Split it into smaller files.`
+                  : null,
+              );
               setFile(chosen && chosen.size <= MAX_BYTES ? chosen : null);
             }}
           />
         </label>
         <div className="flex flex-wrap items-center gap-2">
-          <Button type="button" variant="quiet" disabled={!file || stage === 'uploading' || stage === 'checking'} onClick={() => run('preview')}>
+          <Button
+            type="button"
+            variant="quiet"
+            disabled={!file || stage === 'uploading' || stage === 'checking'}
+            onClick={() => run('preview')}
+          >
             Check the file (nothing is saved)
           </Button>
           <Button
-            type="button" variant="primary"
-            disabled={!file || !report || report.mode !== 'preview' || report.errors.length > 0 || stage === 'uploading' || stage === 'checking'}
+            type="button"
+            variant="primary"
+            disabled={
+              !file ||
+              !report ||
+              report.mode !== 'preview' ||
+              report.errors.length > 0 ||
+              stage === 'uploading' ||
+              stage === 'checking'
+            }
             onClick={() => run('commit')}
           >
-            Import {report && report.mode === 'preview' ? `${report.summary.create + report.summary.update} change(s)` : ''}
+            Import{' '}
+            {report && report.mode === 'preview' ? `${report.summary.create + report.summary.update} change(s)` : ''}
           </Button>
           <a href={TEMPLATE_URL} download className="text-sm text-gauge-700 underline">
             Download the template
@@ -123,8 +156,16 @@ export function ImportPanel() {
         ) : null}
       </div>
 
-      {problem ? <Banner tone="fault" title="Not imported">{problem}</Banner> : null}
-      {report?.committed ? <Banner tone="ok" title="Imported">{report.message}</Banner> : null}
+      {problem ? (
+        <Banner tone="fault" title="Not imported">
+          {problem}
+        </Banner>
+      ) : null}
+      {report?.committed ? (
+        <Banner tone="ok" title="Imported">
+          {report.message}
+        </Banner>
+      ) : null}
 
       {report ? (
         <section aria-labelledby="preview-title" className="flex flex-col gap-2">
@@ -132,17 +173,30 @@ export function ImportPanel() {
             {report.committed ? 'What was imported' : 'What the import would do'} — {report.fileName}
           </h2>
           <p className="text-sm tabular-nums">
-            {report.rowCount} row(s): <strong>{report.summary.create}</strong> new, <strong>{report.summary.update}</strong> updated, {report.summary.unchanged} unchanged,{' '}
-            <strong className={report.summary.error ? 'text-fault-700' : ''}>{report.summary.error} with problems</strong>.
-            {report.suppliersToAdd.length ? ` New supplier(s): ${report.suppliersToAdd.join(', ')}.` : ''}
+            {report.rowCount} row(s): <strong>{report.summary.create}</strong> new,{' '}
+            <strong>{report.summary.update}</strong> updated, {report.summary.unchanged} unchanged,{' '}
+            <strong className={report.summary.error ? 'text-fault-700' : ''}>
+              {report.summary.error} with problems
+            </strong>
+            .{report.suppliersToAdd.length ? ` New supplier(s): ${report.suppliersToAdd.join(', ')}.` : ''}
             {report.ignoredColumns.length ? ` Columns not used: ${report.ignoredColumns.join(', ')}.` : ''}
           </p>
-          {report.errors.filter((e) => e.row <= 1).map((e) => (
-            <Banner key={`${e.row}-${e.column}`} tone="fault" title={`Header row, column ${e.column}`}>{e.message}</Banner>
-          ))}
+          {report.errors
+            .filter((e) => e.row <= 1)
+            .map((e) => (
+              <Banner key={`${e.row}-${e.column}`} tone="fault" title={`Header row, column ${e.column}`}>
+                {e.message}
+              </Banner>
+            ))}
           <div className="flex gap-2 text-sm" role="group" aria-label="Rows to show">
             {(['all', 'problems', 'changes'] as const).map((v) => (
-              <button key={v} type="button" aria-pressed={show === v} className={buttonClass('quiet', show === v ? 'ring-2 ring-gauge-500' : '')} onClick={() => setShow(v)}>
+              <button
+                key={v}
+                type="button"
+                aria-pressed={show === v}
+                className={buttonClass('quiet', show === v ? 'ring-2 ring-gauge-500' : '')}
+                onClick={() => setShow(v)}
+              >
                 {v === 'all' ? 'All rows' : v === 'problems' ? 'Problems only' : 'Changes only'}
               </button>
             ))}
@@ -165,7 +219,15 @@ export function ImportPanel() {
                     <td className={`${tdClass} spec`}>{r.sku || '—'}</td>
                     <td className={tdClass}>{r.name}</td>
                     <td className={tdClass}>
-                      {r.action === 'create' ? <StateTag tone="ok">New</StateTag> : r.action === 'update' ? <StateTag tone="caution">Update</StateTag> : r.action === 'unchanged' ? <StateTag tone="muted">Unchanged</StateTag> : <StateTag tone="fault">Problem</StateTag>}
+                      {r.action === 'create' ? (
+                        <StateTag tone="ok">New</StateTag>
+                      ) : r.action === 'update' ? (
+                        <StateTag tone="caution">Update</StateTag>
+                      ) : r.action === 'unchanged' ? (
+                        <StateTag tone="muted">Unchanged</StateTag>
+                      ) : (
+                        <StateTag tone="fault">Problem</StateTag>
+                      )}
                     </td>
                     <td className={`${tdClass} text-xs`}>
                       {r.errors.map((e) => (
@@ -175,7 +237,9 @@ export function ImportPanel() {
                       ))}
                       {r.changes.map((c) => (
                         <p key={c.column}>
-                          <span className="spec font-semibold">{c.column}</span>: <span className="spec">{cell(c.field, c.from)}</span> → <span className="spec">{cell(c.field, c.to)}</span>
+                          <span className="spec font-semibold">{c.column}</span>:{' '}
+                          <span className="spec">{cell(c.field, c.from)}</span> →{' '}
+                          <span className="spec">{cell(c.field, c.to)}</span>
                         </p>
                       ))}
                     </td>
@@ -183,7 +247,11 @@ export function ImportPanel() {
                 ))}
               </tbody>
             </table>
-            {rows.length > shown.length ? <p className="p-2 text-xs text-ink-muted">Showing the first {shown.length} of {rows.length} rows.</p> : null}
+            {rows.length > shown.length ? (
+              <p className="p-2 text-xs text-ink-muted">
+                Showing the first {shown.length} of {rows.length} rows.
+              </p>
+            ) : null}
             {rows.length === 0 ? <p className="p-3 text-sm text-ink-soft">No rows in this view.</p> : null}
           </div>
         </section>

@@ -12,15 +12,33 @@ import { Button } from '@/components/ui/button';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
 
 type Item = { partId: string; laborOperationId: string; quantity: string };
-type Values = { kind: (typeof NEED_RULE_KIND_OPTIONS)[number]; vehicleClass: VehicleClass | 'any'; label: string; active: boolean; items: Item[] };
-type RuleRecord = { id: number; version: number; kind: Values['kind']; vehicleClass: VehicleClass | null; label: string; active: boolean; items: { partId: number | null; laborOperationId: number | null; quantity: number }[] };
+type Values = {
+  kind: (typeof NEED_RULE_KIND_OPTIONS)[number];
+  vehicleClass: VehicleClass | 'any';
+  label: string;
+  active: boolean;
+  items: Item[];
+};
+type RuleRecord = {
+  id: number;
+  version: number;
+  kind: Values['kind'];
+  vehicleClass: VehicleClass | null;
+  label: string;
+  active: boolean;
+  items: { partId: number | null; laborOperationId: number | null; quantity: number }[];
+};
 
 const toPayload = (v: Values) => ({
   kind: v.kind,
   vehicleClass: v.vehicleClass === 'any' ? null : v.vehicleClass,
   label: v.label,
   active: v.active,
-  items: v.items.map((i) => ({ partId: i.partId ? Number(i.partId) : null, laborOperationId: i.laborOperationId ? Number(i.laborOperationId) : null, quantity: i.quantity ? Number(i.quantity) : 1 })),
+  items: v.items.map((i) => ({
+    partId: i.partId ? Number(i.partId) : null,
+    laborOperationId: i.laborOperationId ? Number(i.laborOperationId) : null,
+    quantity: i.quantity ? Number(i.quantity) : 1,
+  })),
 });
 
 /** A stored rule as the form's values; a new rule starts with one empty item. */
@@ -29,10 +47,22 @@ const valuesOf = (rule: RuleRecord | null): Values => ({
   vehicleClass: rule?.vehicleClass ?? 'any',
   label: rule?.label ?? '',
   active: rule?.active ?? true,
-  items: rule?.items.map((i) => ({ partId: i.partId ? String(i.partId) : '', laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '', quantity: String(i.quantity) })) ?? [{ partId: '', laborOperationId: '', quantity: '1' }],
+  items: rule?.items.map((i) => ({
+    partId: i.partId ? String(i.partId) : '',
+    laborOperationId: i.laborOperationId ? String(i.laborOperationId) : '',
+    quantity: String(i.quantity),
+  })) ?? [{ partId: '', laborOperationId: '', quantity: '1' }],
 });
 
-export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; parts: { id: number; sku: string; name: string }[]; labor: { id: number; code: string; name: string }[] }) {
+export function RuleForm({
+  rule,
+  parts,
+  labor,
+}: {
+  rule: RuleRecord | null;
+  parts: { id: number; sku: string; name: string }[];
+  labor: { id: number; code: string; name: string }[];
+}) {
   const router = useRouter();
   const { conflict, save, settle } = useVersionedSave<RuleRecord>(rule);
   const [problem, setProblem] = useState<string | null>(null);
@@ -45,11 +75,18 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
       validate={(values) => ruleChecks(toPayload(values))}
       onSubmit={async (values) => {
         setProblem(null);
-        const result = rule ? await save('PATCH', `/api/rules/${rule.id}`, toPayload(values)) : await save('POST', '/api/rules', toPayload(values));
+        const result = rule
+          ? await save('PATCH', `/api/rules/${rule.id}`, toPayload(values))
+          : await save('POST', '/api/rules', toPayload(values));
         if (result.ok) {
           router.push('/catalogue/rules?saved=1');
           router.refresh();
-        } else if (result.status !== 409) setProblem(result.body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ?? result.body.message ?? `The server answered ${result.status}.`);
+        } else if (result.status !== 409)
+          setProblem(
+            result.body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ??
+              result.body.message ??
+              `The server answered ${result.status}.`,
+          );
       }}
     >
       {({ values, errors, submitCount, isSubmitting, handleChange, setValues }) => {
@@ -66,13 +103,21 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                 onMine={() => settle()}
               >
                 <p>
-                  Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind}, {RULE_VEHICLE_CLASS_TEXT[conflict.vehicleClass ?? 'any']}, {conflict.items.length} item(s), {conflict.active ? 'active' : 'switched off'}.
+                  Theirs: <span className="spec">{conflict.label}</span>, {conflict.kind},{' '}
+                  {RULE_VEHICLE_CLASS_TEXT[conflict.vehicleClass ?? 'any']}, {conflict.items.length} item(s),{' '}
+                  {conflict.active ? 'active' : 'switched off'}.
                 </p>
               </ConflictBanner>
             ) : null}
-            {problem ? <Banner tone="fault" title="Not saved">{problem}</Banner> : null}
+            {problem ? (
+              <Banner tone="fault" title="Not saved">
+                {problem}
+              </Banner>
+            ) : null}
             <fieldset className="flex flex-col gap-2">
-              <legend className="text-sm font-semibold">Which need does it price? (The advisor decides when a cam has it.)</legend>
+              <legend className="text-sm font-semibold">
+                Which need does it price? (The advisor decides when a cam has it.)
+              </legend>
               {NEED_RULE_KIND_OPTIONS.map((kind) => (
                 <label key={kind} className="flex items-center gap-2 text-sm">
                   <input type="radio" name="kind" value={kind} checked={values.kind === kind} onChange={handleChange} />
@@ -83,27 +128,50 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
             <label className="flex max-w-xs flex-col gap-1 text-sm font-semibold">
               For which vehicles
               <select name="vehicleClass" className={input} value={values.vehicleClass} onChange={handleChange}>
-                {(['any', ...VEHICLE_CLASSES] as const).map((vc) => <option key={vc} value={vc}>{RULE_VEHICLE_CLASS_TEXT[vc]}</option>)}
+                {(['any', ...VEHICLE_CLASSES] as const).map((vc) => (
+                  <option key={vc} value={vc}>
+                    {RULE_VEHICLE_CLASS_TEXT[vc]}
+                  </option>
+                ))}
               </select>
-              <span className="text-xs font-normal text-ink-muted">A rule for one class replaces the “every vehicle” rules of the same need for that class.</span>
+              <span className="text-xs font-normal text-ink-muted">
+                A rule for one class replaces the “every vehicle” rules of the same need for that class.
+              </span>
             </label>
             <label className="flex flex-col gap-1 text-sm font-semibold">
               Label (what staff and customers read)
-              <input name="label" className={input} value={values.label} onChange={handleChange} aria-invalid={show('label') ? true : undefined} />
-              {show('label') ? <span className="text-xs font-normal text-fault-700">Problem: {show('label')}</span> : null}
+              <input
+                name="label"
+                className={input}
+                value={values.label}
+                onChange={handleChange}
+                aria-invalid={show('label') ? true : undefined}
+              />
+              {show('label') ? (
+                <span className="text-xs font-normal text-fault-700">Problem: {show('label')}</span>
+              ) : null}
             </label>
             <label className="flex items-center gap-2 text-sm">
-              <input type="checkbox" name="active" checked={values.active} onChange={handleChange} /> Active (the advisor and quotes use it)
+              <input type="checkbox" name="active" checked={values.active} onChange={handleChange} /> Active (the
+              advisor and quotes use it)
             </label>
             <FieldArray name="items">
               {({ push, remove }) => (
                 <fieldset className="flex flex-col gap-2">
                   <legend className="text-sm font-semibold">Then add</legend>
                   {values.items.map((item, index) => (
-                    <div key={index} className="grid gap-2 rounded border border-steel-300 p-2 sm:grid-cols-[2fr_2fr_6rem_auto]">
+                    <div
+                      key={index}
+                      className="grid gap-2 rounded border border-steel-300 p-2 sm:grid-cols-[2fr_2fr_6rem_auto]"
+                    >
                       <label className="flex flex-col gap-1 text-xs font-semibold">
                         Part
-                        <select name={`items.${index}.partId`} className={input} value={item.partId} onChange={handleChange}>
+                        <select
+                          name={`items.${index}.partId`}
+                          className={input}
+                          value={item.partId}
+                          onChange={handleChange}
+                        >
                           <option value="">(no part)</option>
                           {parts.map((p) => (
                             <option key={p.id} value={p.id}>{`${p.sku} — ${p.name}`}</option>
@@ -112,7 +180,12 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                       </label>
                       <label className="flex flex-col gap-1 text-xs font-semibold">
                         Labour
-                        <select name={`items.${index}.laborOperationId`} className={input} value={item.laborOperationId} onChange={handleChange}>
+                        <select
+                          name={`items.${index}.laborOperationId`}
+                          className={input}
+                          value={item.laborOperationId}
+                          onChange={handleChange}
+                        >
                           <option value="">(no labour)</option>
                           {labor.map((l) => (
                             <option key={l.id} value={l.id}>{`${l.code} — ${l.name}`}</option>
@@ -121,18 +194,36 @@ export function RuleForm({ rule, parts, labor }: { rule: RuleRecord | null; part
                       </label>
                       <label className="flex flex-col gap-1 text-xs font-semibold">
                         Quantity
-                        <input name={`items.${index}.quantity`} inputMode="decimal" className={`${input} spec`} value={item.quantity} onChange={handleChange} />
+                        <input
+                          name={`items.${index}.quantity`}
+                          inputMode="decimal"
+                          className={`${input} spec`}
+                          value={item.quantity}
+                          onChange={handleChange}
+                        />
                       </label>
-                      <button type="button" className="self-end text-xs text-fault-700 underline" onClick={() => remove(index)} disabled={values.items.length === 1}>
+                      <button
+                        type="button"
+                        className="self-end text-xs text-fault-700 underline"
+                        onClick={() => remove(index)}
+                        disabled={values.items.length === 1}
+                      >
                         Remove
                       </button>
                       {show(`items.${index}.partId`) || show(`items.${index}.quantity`) ? (
-                        <p className="text-xs text-fault-700 sm:col-span-4">Problem: {show(`items.${index}.partId`) ?? show(`items.${index}.quantity`)}</p>
+                        <p className="text-xs text-fault-700 sm:col-span-4">
+                          Problem: {show(`items.${index}.partId`) ?? show(`items.${index}.quantity`)}
+                        </p>
                       ) : null}
                     </div>
                   ))}
                   {show('items') ? <p className="text-xs text-fault-700">Problem: {show('items')}</p> : null}
-                  <Button type="button" variant="quiet" className="self-start" onClick={() => push({ partId: '', laborOperationId: '', quantity: '1' })}>
+                  <Button
+                    type="button"
+                    variant="quiet"
+                    className="self-start"
+                    onClick={() => push({ partId: '', laborOperationId: '', quantity: '1' })}
+                  >
                     Add another item
                   </Button>
                 </fieldset>
@@ -156,7 +247,8 @@ export function DeleteButton({ url, label, after }: { url: string; label: string
   return (
     <span className="inline-flex flex-col gap-1">
       <Button
-        type="button" variant="danger"
+        type="button"
+        variant="danger"
         onClick={async () => {
           if (!window.confirm(`${label}?`)) return;
           const result = await sendJson<{ outcome?: string }>('DELETE', url);
@@ -168,7 +260,11 @@ export function DeleteButton({ url, label, after }: { url: string; label: string
       >
         {label}
       </Button>
-      {message ? <span role="alert" className="text-xs text-fault-700">{message}</span> : null}
+      {message ? (
+        <span role="alert" className="text-xs text-fault-700">
+          {message}
+        </span>
+      ) : null}
     </span>
   );
 }

@@ -23,7 +23,15 @@ const END = 630;
 const x = (angle: number) => PAD.left + ((angle - START) / (END - START)) * (W - PAD.left - PAD.right);
 const yOf = (lift: number, maxLift: number) => H - PAD.bottom - (lift / maxLift) * (H - PAD.top - PAD.bottom);
 
-export function ValveEventDiagram({ events, intakeLiftIn, exhaustLiftIn }: { events: ValveEventSet; intakeLiftIn: number; exhaustLiftIn: number }) {
+export function ValveEventDiagram({
+  events,
+  intakeLiftIn,
+  exhaustLiftIn,
+}: {
+  events: ValveEventSet;
+  intakeLiftIn: number;
+  exhaustLiftIn: number;
+}) {
   const maxLift = Math.max(intakeLiftIn, exhaustLiftIn) * 1.1;
   const exOpen = 180 - events.evo;
   const exClose = 360 + events.evc;
@@ -42,11 +50,26 @@ export function ValveEventDiagram({ events, intakeLiftIn, exhaustLiftIn }: { eve
         <title id="valve-diagram-title">
           {`Valve events: exhaust opens ${events.evo.toFixed(1)}° BBDC and closes ${events.evc.toFixed(1)}° ATDC; intake opens ${events.ivo.toFixed(1)}° BTDC and closes ${events.ivc.toFixed(1)}° ABDC; overlap ${events.overlap.toFixed(1)}°.`}
         </title>
-        {events.overlap > 0 ? <rect x={x(overlapFrom)} y={PAD.top} width={Math.max(1, x(overlapTo) - x(overlapFrom))} height={H - PAD.top - PAD.bottom} className="fill-caution-100" /> : null}
+        {events.overlap > 0 ? (
+          <rect
+            x={x(overlapFrom)}
+            y={PAD.top}
+            width={Math.max(1, x(overlapTo) - x(overlapFrom))}
+            height={H - PAD.top - PAD.bottom}
+            className="fill-caution-100"
+          />
+        ) : null}
         <line x1={PAD.left} x2={W - PAD.right} y1={H - PAD.bottom} y2={H - PAD.bottom} className="stroke-steel-500" />
         {marks.map((m) => (
           <g key={m.at}>
-            <line x1={x(m.at)} x2={x(m.at)} y1={PAD.top} y2={H - PAD.bottom} className="stroke-steel-300" strokeDasharray="2 3" />
+            <line
+              x1={x(m.at)}
+              x2={x(m.at)}
+              y1={PAD.top}
+              y2={H - PAD.bottom}
+              className="stroke-steel-300"
+              strokeDasharray="2 3"
+            />
             <text x={x(m.at)} y={H - PAD.bottom + 14} textAnchor="middle" className="fill-ink-muted text-[11px]">
               {m.label}
             </text>
@@ -58,10 +81,26 @@ export function ValveEventDiagram({ events, intakeLiftIn, exhaustLiftIn }: { eve
         <text x={6} y={PAD.top + 8} className="fill-ink-muted text-[11px]">
           lift
         </text>
-        <polyline points={bump(exOpen, exClose, exhaustLiftIn, maxLift)} fill="none" className="stroke-gauge-700" strokeWidth={2} strokeDasharray="6 4" />
-        <polyline points={bump(inOpen, inClose, intakeLiftIn, maxLift)} fill="none" className="stroke-ember-600" strokeWidth={2} />
+        <polyline
+          points={bump(exOpen, exClose, exhaustLiftIn, maxLift)}
+          fill="none"
+          className="stroke-gauge-700"
+          strokeWidth={2}
+          strokeDasharray="6 4"
+        />
+        <polyline
+          points={bump(inOpen, inClose, intakeLiftIn, maxLift)}
+          fill="none"
+          className="stroke-ember-600"
+          strokeWidth={2}
+        />
         {events.overlap > 0 ? (
-          <text x={(x(overlapFrom) + x(overlapTo)) / 2} y={PAD.top + 12} textAnchor="middle" className="fill-caution-700 text-[11px] font-semibold">
+          <text
+            x={(x(overlapFrom) + x(overlapTo)) / 2}
+            y={PAD.top + 12}
+            textAnchor="middle"
+            className="fill-caution-700 text-[11px] font-semibold"
+          >
             overlap {events.overlap.toFixed(1)}°
           </text>
         ) : null}

@@ -23,7 +23,14 @@ export function payloadFromValues(values: InterviewValues, mode: 'create' | 'edi
   const card = p.baselineCam;
   const customer =
     mode === 'create' && values.customerMode === 'new'
-      ? { customer: { name: values.customer.name, phone: values.customer.phone, email: values.customer.email, notes: values.customer.notes } }
+      ? {
+          customer: {
+            name: values.customer.name,
+            phone: values.customer.phone,
+            email: values.customer.email,
+            notes: values.customer.notes,
+          },
+        }
       : { customerId: num(values.customerId) };
   return {
     ...customer,
@@ -41,7 +48,11 @@ export function payloadFromValues(values: InterviewValues, mode: 'create' | 'edi
         intakeManifold: p.engine.intakeManifold,
         cylinderDeactivation: p.engine.cylinderDeactivation,
       },
-      exhaust: { headers: p.exhaust.headers, primaryIn: p.exhaust.headers === 'manifold' ? undefined : num(p.exhaust.primaryIn), system: p.exhaust.system },
+      exhaust: {
+        headers: p.exhaust.headers,
+        primaryIn: p.exhaust.headers === 'manifold' ? undefined : num(p.exhaust.primaryIn),
+        system: p.exhaust.system,
+      },
       drivetrain: {
         transmission: p.drivetrain.transmission,
         stallRpm: manual ? 0 : num(p.drivetrain.stallRpm),
@@ -50,14 +61,19 @@ export function payloadFromValues(values: InterviewValues, mode: 'create' | 'edi
         topGearRatio: num(p.drivetrain.topGearRatio),
         tireDiameterIn: num(p.drivetrain.tireDiameterIn),
       },
-      vehicle: { weightLb: num(p.vehicle.weightLb), powerBrakes: p.vehicle.powerBrakes, class: p.vehicle.class || undefined },
+      vehicle: {
+        weightLb: num(p.vehicle.weightLb),
+        powerBrakes: p.vehicle.powerBrakes,
+        class: p.vehicle.class || undefined,
+      },
       use: {
         primary: p.use.primary,
         idle: p.use.idle,
         fuelOctane: num(p.use.fuelOctane),
         emissionsRequired: p.use.emissionsRequired === 'yes',
         cruiseMph: num(p.use.cruiseMph),
-        budgetCents: p.use.budgetKnown === 'unsure' || budgetDollars === undefined ? undefined : Math.round(budgetDollars * 100),
+        budgetCents:
+          p.use.budgetKnown === 'unsure' || budgetDollars === undefined ? undefined : Math.round(budgetDollars * 100),
       },
       baselineCam: {
         id: values.baselineCamId || 'typed',
@@ -81,7 +97,10 @@ const budgetMax = formatMoney(BUILD_LIMITS.budgetCents.max, { whole: true });
 
 /** The budget is typed in dollars; say its limit in dollars too. */
 function reword(field: string, message: string): string {
-  if (field === 'profile.use.budgetCents') return message.includes('required') ? 'budget is required ($), or choose “Not sure yet”' : `budget must be between $0 and ${budgetMax}`;
+  if (field === 'profile.use.budgetCents')
+    return message.includes('required')
+      ? 'budget is required ($), or choose “Not sure yet”'
+      : `budget must be between $0 and ${budgetMax}`;
   return message;
 }
 
@@ -100,8 +119,11 @@ export function interviewChecks(mode: 'create' | 'edit') {
   const check = buildPayloadChecks[mode];
   return (values: InterviewValues): FormikErrors<InterviewValues> => {
     // The schema takes a missing budget as "none given"; the form asks for a figure unless "not sure" was picked.
-    const budgetMissing = values.profile.use.budgetKnown === 'figure' && num(values.profile.use.budgetCents) === undefined;
-    const list: { field: string; message: string }[] = budgetMissing ? [{ field: 'profile.use.budgetCents', message: 'budget is required' }] : [];
+    const budgetMissing =
+      values.profile.use.budgetKnown === 'figure' && num(values.profile.use.budgetCents) === undefined;
+    const list: { field: string; message: string }[] = budgetMissing
+      ? [{ field: 'profile.use.budgetCents', message: 'budget is required' }]
+      : [];
     const seen = new Set<string>(list.map((l) => l.field));
     for (const [field, message] of Object.entries(check(payloadFromValues(values, mode)))) {
       if (seen.has(field)) continue;

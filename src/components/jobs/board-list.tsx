@@ -12,23 +12,46 @@ export function BoardList({ jobs }: { jobs: BoardJob[] }) {
         <caption className="sr-only">Jobs, overdue and today&apos;s first</caption>
         <thead>
           <tr>
-            <th scope="col" className={thClass}>Job</th>
-            <th scope="col" className={thClass}>State</th>
-            <th scope="col" className={thClass}>Booked for</th>
-            <th scope="col" className={`${thClass} text-right`}>Bay</th>
-            <th scope="col" className={thClass}>Technician</th>
-            <th scope="col" className={thClass}>Vehicle</th>
-            <th scope="col" className={`${thClass} hidden md:table-cell`}>Customer</th>
-            <th scope="col" className={`${thClass} hidden lg:table-cell`}>Cam going in</th>
+            <th scope="col" className={thClass}>
+              Job
+            </th>
+            <th scope="col" className={thClass}>
+              State
+            </th>
+            <th scope="col" className={thClass}>
+              Booked for
+            </th>
+            <th scope="col" className={`${thClass} text-right`}>
+              Bay
+            </th>
+            <th scope="col" className={thClass}>
+              Technician
+            </th>
+            <th scope="col" className={thClass}>
+              Vehicle
+            </th>
+            <th scope="col" className={`${thClass} hidden md:table-cell`}>
+              Customer
+            </th>
+            <th scope="col" className={`${thClass} hidden lg:table-cell`}>
+              Cam going in
+            </th>
           </tr>
         </thead>
         <tbody>
           {jobs.map((job) => (
             <tr key={job.id} data-job={job.number}>
               <td className={tdClass}>
-                <Link href={`/jobs/${job.id}`} className="spec font-semibold text-gauge-700 underline-offset-2 hover:underline">{job.number}</Link>
+                <Link
+                  href={`/jobs/${job.id}`}
+                  className="spec font-semibold text-gauge-700 underline-offset-2 hover:underline"
+                >
+                  {job.number}
+                </Link>
               </td>
-              <td className={tdClass}><JobStateTag state={job.state} /></td>
+              <td className={tdClass}>
+                <JobStateTag state={job.state} />
+              </td>
               <td className={`${tdClass} whitespace-nowrap`}>
                 {job.bookedFor ? <span className="spec">{dayLabel(job.bookedFor)}</span> : '—'} <DueTag due={job.due} />
               </td>

@@ -9,7 +9,11 @@ export function BoardWeek({ days, jobs, today }: { days: string[]; jobs: BoardJo
       {days.map((day) => {
         const booked = jobs.filter((j) => j.bookedFor === day);
         return (
-          <li key={day} className={`min-w-0 rounded border p-2 ${day === today ? 'border-ember-500' : 'border-steel-300'}`} aria-label={dayLabel(day)}>
+          <li
+            key={day}
+            className={`min-w-0 rounded border p-2 ${day === today ? 'border-ember-500' : 'border-steel-300'}`}
+            aria-label={dayLabel(day)}
+          >
             <p className="text-xs font-semibold uppercase tracking-wide text-ink-muted">
               {dayLabel(day)} {day === today ? <span className="text-ember-600">· Today</span> : null}
             </p>
@@ -17,7 +21,12 @@ export function BoardWeek({ days, jobs, today }: { days: string[]; jobs: BoardJo
             <ul className="mt-1 flex flex-col gap-1">
               {booked.map((job) => (
                 <li key={job.id} className="rounded bg-paper-raised p-1.5 text-xs ring-1 ring-steel-100">
-                  <Link href={`/jobs/${job.id}`} className="spec font-semibold text-gauge-700 underline-offset-2 hover:underline">{job.number}</Link>{' '}
+                  <Link
+                    href={`/jobs/${job.id}`}
+                    className="spec font-semibold text-gauge-700 underline-offset-2 hover:underline"
+                  >
+                    {job.number}
+                  </Link>{' '}
                   <JobStateTag state={job.state} /> <DueTag due={job.due} />
                   <p className="truncate">{job.vehicleLabel}</p>
                   <p className="text-ink-muted">

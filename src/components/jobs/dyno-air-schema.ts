@@ -14,10 +14,25 @@ export const AIR_FIELDS: { name: AirFieldName; si: keyof AirReading }[] = [
   { name: 'humidityPct', si: 'humidityPct' },
 ];
 
-export function airFieldText(units: AirUnits, si: keyof AirReading): { label: string; unit: string; min: number; max: number; step: string } {
+export function airFieldText(
+  units: AirUnits,
+  si: keyof AirReading,
+): { label: string; unit: string; min: number; max: number; step: string } {
   const u = AIR_UNIT_TEXT[units];
-  if (si === 'airTempC') return { label: AIR_TEXT.airTempC.label, unit: u.temp, ...rangeIn(units, 'temp', L.airTempC), step: units === 'imperial' ? '1' : '0.1' };
-  if (si === 'baroKpa') return { label: AIR_TEXT.baroKpa.label, unit: u.baro, ...rangeIn(units, 'baro', L.baroKpa), step: units === 'imperial' ? '0.01' : '0.1' };
+  if (si === 'airTempC')
+    return {
+      label: AIR_TEXT.airTempC.label,
+      unit: u.temp,
+      ...rangeIn(units, 'temp', L.airTempC),
+      step: units === 'imperial' ? '1' : '0.1',
+    };
+  if (si === 'baroKpa')
+    return {
+      label: AIR_TEXT.baroKpa.label,
+      unit: u.baro,
+      ...rangeIn(units, 'baro', L.baroKpa),
+      step: units === 'imperial' ? '0.01' : '0.1',
+    };
   return { label: AIR_TEXT.humidityPct.label, unit: AIR_TEXT.humidityPct.unit, ...L.humidityPct, step: '1' };
 }
 
@@ -30,7 +45,9 @@ function reading(units: AirUnits, si: keyof AirReading) {
     .min(min, `${label} must be at least ${min} ${unit}`)
     .max(max, `${label} must be at most ${max} ${unit}`)
     .when('correctionStandard', ([standard], schema) =>
-      AIR_NEEDED_BY[standard as CorrectionStandard]?.includes(si) ? schema.required(`${label} is required for ${STANDARD_LABELS[standard as CorrectionStandard]} (${unit})`) : schema.optional(),
+      AIR_NEEDED_BY[standard as CorrectionStandard]?.includes(si)
+        ? schema.required(`${label} is required for ${STANDARD_LABELS[standard as CorrectionStandard]} (${unit})`)
+        : schema.optional(),
     );
 }
 

@@ -32,7 +32,9 @@ export function CurveInput() {
       return;
     }
     if (file.size > CURVE_CSV_MAX_BYTES) {
-      setFileProblem(`${file.name} is ${Math.ceil(file.size / 1000)} kB; a pull’s CSV is at most ${CURVE_CSV_MAX_BYTES / 1000} kB`);
+      setFileProblem(
+        `${file.name} is ${Math.ceil(file.size / 1000)} kB; a pull’s CSV is at most ${CURVE_CSV_MAX_BYTES / 1000} kB`,
+      );
       return;
     }
     const text = await file.text();
@@ -43,10 +45,13 @@ export function CurveInput() {
 
   return (
     <div className="flex flex-col gap-1 text-sm">
-      <label htmlFor="dyno-curveCsv" className="font-semibold">Pull points (rpm, torque in lb·ft)</label>
+      <label htmlFor="dyno-curveCsv" className="font-semibold">
+        Pull points (rpm, torque in lb·ft)
+      </label>
       <span id="dyno-curveCsv-hint" className="text-xs text-ink-muted">
-        One line per point, a header line is allowed. Power is worked out as lb·ft × rpm ÷ 5252. {L.curvePoints.min}–{L.curvePoints.max} points, rpm rising,{' '}
-        {L.rpm.min}–{L.rpm.max} rpm, {L.torqueLbFt.min}–{L.torqueLbFt.max} lb·ft.
+        One line per point, a header line is allowed. Power is worked out as lb·ft × rpm ÷ 5252. {L.curvePoints.min}–
+        {L.curvePoints.max} points, rpm rising, {L.rpm.min}–{L.rpm.max} rpm, {L.torqueLbFt.min}–{L.torqueLbFt.max}{' '}
+        lb·ft.
       </span>
       <textarea
         {...field}
@@ -59,9 +64,19 @@ export function CurveInput() {
       />
       <FieldProblem id="dyno-curveCsv-error" error={error} />
       <div className="flex flex-wrap items-center gap-3 print:hidden">
-        <label htmlFor="dyno-curveFile" className="font-semibold">Or load a CSV file</label>
-        <input id="dyno-curveFile" type="file" accept=".csv,.txt,text/csv,text/plain" onChange={(e) => void load(e.target.files?.[0])} className="text-xs" />
-        <button type="button" onClick={downloadTemplate} className="text-xs text-gauge-700 underline">Download the template (.csv)</button>
+        <label htmlFor="dyno-curveFile" className="font-semibold">
+          Or load a CSV file
+        </label>
+        <input
+          id="dyno-curveFile"
+          type="file"
+          accept=".csv,.txt,text/csv,text/plain"
+          onChange={(e) => void load(e.target.files?.[0])}
+          className="text-xs"
+        />
+        <button type="button" onClick={downloadTemplate} className="text-xs text-gauge-700 underline">
+          Download the template (.csv)
+        </button>
       </div>
       <FieldProblem id="dyno-curveFile-error" error={fileProblem ?? undefined} />
     </div>

@@ -13,15 +13,31 @@ export function FieldProblem({ id, error }: { id: string; error?: string }) {
   ) : null;
 }
 
-export function NumberBox({ name, label, unit, min, max, step = 'any', hint }: {
-  name: string; label: string; unit: string; min: number; max: number; step?: string; hint?: string;
+export function NumberBox({
+  name,
+  label,
+  unit,
+  min,
+  max,
+  step = 'any',
+  hint,
+}: {
+  name: string;
+  label: string;
+  unit: string;
+  min: number;
+  max: number;
+  step?: string;
+  hint?: string;
 }) {
   const [field, meta] = useField<number | ''>(name);
   const id = `dyno-${name}`;
   const error = meta.touched ? meta.error : undefined;
   return (
     <div className="flex flex-col gap-1 text-sm">
-      <label htmlFor={id} className="font-semibold">{label}</label>
+      <label htmlFor={id} className="font-semibold">
+        {label}
+      </label>
       <span className="flex items-center gap-1">
         <input
           {...field}
@@ -38,7 +54,10 @@ export function NumberBox({ name, label, unit, min, max, step = 'any', hint }: {
         />
         <span className="text-ink-muted">{unit}</span>
       </span>
-      <span id={`${id}-hint`} className="text-xs text-ink-muted">{min}–{max} {unit}{hint ? ` · ${hint}` : ''}</span>
+      <span id={`${id}-hint`} className="text-xs text-ink-muted">
+        {min}–{max} {unit}
+        {hint ? ` · ${hint}` : ''}
+      </span>
       <FieldProblem id={`${id}-error`} error={error} />
     </div>
   );

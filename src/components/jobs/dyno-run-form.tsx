@@ -17,11 +17,24 @@ import { convertAir, initialValues, payloadOf, schemaErrors, toFormErrors, type 
 // Recording one dyno pull. The air is typed in the shop's units and sent in °C and kPa; the rest is checked
 // with yup built from the schema's limits, in the server's words (lib/forms/dyno-checks.ts); the route uses zod.
 
-const ENTRY_CHOICES = [['curve', 'The pull: rpm, torque'], ['peak', 'Peak figures only']] as const;
+const ENTRY_CHOICES = [
+  ['curve', 'The pull: rpm, torque'],
+  ['peak', 'Peak figures only'],
+] as const;
 const selectClass = 'rounded border border-steel-300 bg-paper-raised px-2 py-1';
 
-export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }: {
-  buildId: number; quoteId: number; units: AirUnits; onUnitsChange: (units: AirUnits) => void; onSaved: () => void;
+export function DynoRunForm({
+  buildId,
+  quoteId,
+  units,
+  onUnitsChange,
+  onSaved,
+}: {
+  buildId: number;
+  quoteId: number;
+  units: AirUnits;
+  onUnitsChange: (units: AirUnits) => void;
+  onSaved: () => void;
 }) {
   const ids = { buildId, quoteId };
   const validationSchema = useMemo(() => airSchema(units), [units]);
@@ -31,7 +44,15 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
     const answer = await sendJson('POST', '/api/dyno-runs', payload);
     if (answer.status === 201) {
       // The next pull is usually the same day and the same cell: keep the air and the choices.
-      const keep = { phase: values.phase, dynoType: values.dynoType, correctionStandard: values.correctionStandard, airTemp: values.airTemp, baro: values.baro, humidityPct: values.humidityPct, entry: values.entry };
+      const keep = {
+        phase: values.phase,
+        dynoType: values.dynoType,
+        correctionStandard: values.correctionStandard,
+        airTemp: values.airTemp,
+        baro: values.baro,
+        humidityPct: values.humidityPct,
+        entry: values.entry,
+      };
       helpers.resetForm({ values: { ...initialValues, ...keep } });
       helpers.setStatus({ tone: 'ok', text: 'Run recorded.' });
       onSaved();
@@ -44,7 +65,12 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
   }
 
   return (
-    <Formik<Values> initialValues={initialValues} validationSchema={validationSchema} validate={(values) => schemaErrors(values, ids, units)} onSubmit={submit}>
+    <Formik<Values>
+      initialValues={initialValues}
+      validationSchema={validationSchema}
+      validate={(values) => schemaErrors(values, ids, units)}
+      onSubmit={submit}
+    >
       {({ values, isSubmitting, status, setValues, setFieldValue, submitForm }) => (
         <Form
           className="flex flex-col gap-3"
@@ -52,38 +78,76 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
           aria-labelledby="record-title"
           onKeyDown={submitOnCtrlEnter(submitForm)}
         >
-          <h3 id="record-title" className="font-semibold">Record a dyno run</h3>
+          <h3 id="record-title" className="font-semibold">
+            Record a dyno run
+          </h3>
           <p className="text-xs text-ink-muted">Ctrl+Enter saves from any box.</p>
           <div className="flex flex-wrap gap-4">
             <div className="flex flex-col gap-1 text-sm">
-              <label htmlFor="dyno-phase" className="font-semibold">Pull</label>
+              <label htmlFor="dyno-phase" className="font-semibold">
+                Pull
+              </label>
               <Field as="select" id="dyno-phase" name="phase" className={selectClass}>
                 <option value="before">Before (cam coming out)</option>
                 <option value="after">After (cam going in)</option>
               </Field>
             </div>
             <div className="flex flex-col gap-1 text-sm">
-              <label htmlFor="dyno-type" className="font-semibold">Dyno</label>
-              <Field as="select" id="dyno-type" name="dynoType" aria-describedby="dyno-type-hint" className={selectClass}>
-                {DYNO_TYPES.map((t) => <option key={t} value={t}>{DYNO_TYPE_WORDS[t].long}</option>)}
+              <label htmlFor="dyno-type" className="font-semibold">
+                Dyno
+              </label>
+              <Field
+                as="select"
+                id="dyno-type"
+                name="dynoType"
+                aria-describedby="dyno-type-hint"
+                className={selectClass}
+              >
+                {DYNO_TYPES.map((t) => (
+                  <option key={t} value={t}>
+                    {DYNO_TYPE_WORDS[t].long}
+                  </option>
+                ))}
               </Field>
-              <span id="dyno-type-hint" className="max-w-xs text-xs text-ink-muted">Compared only with runs on the same kind of dyno.</span>
+              <span id="dyno-type-hint" className="max-w-xs text-xs text-ink-muted">
+                Compared only with runs on the same kind of dyno.
+              </span>
             </div>
             <div className="flex flex-col gap-1 text-sm">
-              <label htmlFor="dyno-runAt" className="font-semibold">When</label>
-              <Field id="dyno-runAt" name="runAt" type="datetime-local" aria-describedby="dyno-runAt-hint" className={`spec ${selectClass}`} />
-              <span id="dyno-runAt-hint" className="text-xs text-ink-muted">empty = now</span>
+              <label htmlFor="dyno-runAt" className="font-semibold">
+                When
+              </label>
+              <Field
+                id="dyno-runAt"
+                name="runAt"
+                type="datetime-local"
+                aria-describedby="dyno-runAt-hint"
+                className={`spec ${selectClass}`}
+              />
+              <span id="dyno-runAt-hint" className="text-xs text-ink-muted">
+                empty = now
+              </span>
               <ErrorMessage name="runAt">{(m) => <FieldProblem id="dyno-runAt-error" error={m} />}</ErrorMessage>
             </div>
             <div className="flex flex-col gap-1 text-sm">
-              <label htmlFor="dyno-standard" className="font-semibold">Correction to standard air</label>
-              <Field as="select" id="dyno-standard" name="correctionStandard" aria-describedby="dyno-standard-hint" className={selectClass}>
+              <label htmlFor="dyno-standard" className="font-semibold">
+                Correction to standard air
+              </label>
+              <Field
+                as="select"
+                id="dyno-standard"
+                name="correctionStandard"
+                aria-describedby="dyno-standard-hint"
+                className={selectClass}
+              >
                 <option value="sae-j1349">SAE J1349</option>
                 <option value="sae-j607">SAE J607</option>
                 <option value="din-70020">DIN 70020</option>
                 <option value="none">None (observed)</option>
               </Field>
-              <span id="dyno-standard-hint" className="max-w-xs text-xs text-ink-muted">{CORRECTION_TEXT[values.correctionStandard].formula}</span>
+              <span id="dyno-standard-hint" className="max-w-xs text-xs text-ink-muted">
+                {CORRECTION_TEXT[values.correctionStandard].formula}
+              </span>
             </div>
           </div>
           <fieldset className="flex flex-wrap items-start gap-4">
@@ -116,7 +180,13 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
                   name={name}
                   {...text}
                   label={text.label[0].toUpperCase() + text.label.slice(1)}
-                  hint={needed ? `needed for ${standard}` : values.correctionStandard === 'none' ? 'optional without a correction' : `optional, not used by ${standard}`}
+                  hint={
+                    needed
+                      ? `needed for ${standard}`
+                      : values.correctionStandard === 'none'
+                        ? 'optional without a correction'
+                        : `optional, not used by ${standard}`
+                  }
                 />
               );
             })}
@@ -126,7 +196,14 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
             <div className="flex gap-4 text-sm" role="radiogroup" aria-label="How the figures are given">
               {ENTRY_CHOICES.map(([value, label]) => (
                 <label key={value} className="flex items-center gap-1">
-                  <input type="radio" name="entry" value={value} checked={values.entry === value} onChange={() => void setFieldValue('entry', value)} /> {label}
+                  <input
+                    type="radio"
+                    name="entry"
+                    value={value}
+                    checked={values.entry === value}
+                    onChange={() => void setFieldValue('entry', value)}
+                  />{' '}
+                  {label}
                 </label>
               ))}
             </div>
@@ -142,12 +219,23 @@ export function DynoRunForm({ buildId, quoteId, units, onUnitsChange, onSaved }:
             )}
           </fieldset>
           <div className="flex flex-col gap-1 text-sm">
-            <label htmlFor="dyno-notes" className="font-semibold">Notes</label>
-            <Field as="textarea" id="dyno-notes" name="notes" rows={2} maxLength={L.notesMaxLength} className={selectClass} />
+            <label htmlFor="dyno-notes" className="font-semibold">
+              Notes
+            </label>
+            <Field
+              as="textarea"
+              id="dyno-notes"
+              name="notes"
+              rows={2}
+              maxLength={L.notesMaxLength}
+              className={selectClass}
+            />
             <ErrorMessage name="notes">{(m) => <FieldProblem id="dyno-notes-error" error={m} />}</ErrorMessage>
           </div>
           <div className="flex items-center gap-3">
-            <Button type="submit" variant="primary" disabled={isSubmitting}>{isSubmitting ? 'Saving…' : 'Record run'}</Button>
+            <Button type="submit" variant="primary" disabled={isSubmitting}>
+              {isSubmitting ? 'Saving…' : 'Record run'}
+            </Button>
             {status ? (
               <p role="status" className={`text-sm ${status.tone === 'ok' ? 'text-ok-700' : 'text-fault-700'}`}>
                 <span className="font-semibold">{status.tone === 'ok' ? 'Done:' : 'Problem:'}</span> {status.text}

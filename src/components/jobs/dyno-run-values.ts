@@ -15,16 +15,33 @@ export type Values = {
   runAt: string;
   correctionStandard: CorrectionStandard;
   /** In the shop's units (°F or °C, inHg or kPa); converted to °C and kPa only in the payload. */
-  airTemp: Num; baro: Num; humidityPct: Num;
+  airTemp: Num;
+  baro: Num;
+  humidityPct: Num;
   entry: 'curve' | 'peak';
   curveCsv: string;
-  hp: Num; hpRpm: Num; torqueLbFt: Num; torqueRpm: Num;
+  hp: Num;
+  hpRpm: Num;
+  torqueLbFt: Num;
+  torqueRpm: Num;
   notes: string;
 };
 
 export const initialValues: Values = {
-  phase: 'before', dynoType: 'chassis', runAt: '', correctionStandard: 'sae-j1349', airTemp: '', baro: '', humidityPct: '',
-  entry: 'curve', curveCsv: '', hp: '', hpRpm: '', torqueLbFt: '', torqueRpm: '', notes: '',
+  phase: 'before',
+  dynoType: 'chassis',
+  runAt: '',
+  correctionStandard: 'sae-j1349',
+  airTemp: '',
+  baro: '',
+  humidityPct: '',
+  entry: 'curve',
+  curveCsv: '',
+  hp: '',
+  hpRpm: '',
+  torqueLbFt: '',
+  torqueRpm: '',
+  notes: '',
 };
 
 /** A box's value as a number for the payload; text is tolerated should a browser ever hand formik some. */
@@ -39,7 +56,10 @@ export function payloadOf(values: Values, ids: { buildId: number; quoteId: numbe
   const temp = num(values.airTemp);
   const baro = num(values.baro);
   const payload: Record<string, unknown> = {
-    ...ids, phase: values.phase, dynoType: values.dynoType, correctionStandard: values.correctionStandard,
+    ...ids,
+    phase: values.phase,
+    dynoType: values.dynoType,
+    correctionStandard: values.correctionStandard,
     airTempC: temp === undefined ? undefined : tempToCelsius(units, temp),
     baroKpa: baro === undefined ? undefined : baroToKpa(units, baro),
     humidityPct: num(values.humidityPct),
@@ -47,14 +67,23 @@ export function payloadOf(values: Values, ids: { buildId: number; quoteId: numbe
     notes: values.notes.trim() || undefined,
   };
   if (values.entry === 'curve') payload.curve = csv.points;
-  else payload.peak = { hp: num(values.hp), hpRpm: num(values.hpRpm), torqueLbFt: num(values.torqueLbFt), torqueRpm: num(values.torqueRpm) };
+  else
+    payload.peak = {
+      hp: num(values.hp),
+      hpRpm: num(values.hpRpm),
+      torqueLbFt: num(values.torqueLbFt),
+      torqueRpm: num(values.torqueRpm),
+    };
   return { payload, csv };
 }
 
 const SI_TO_FORM: Record<string, keyof Values> = { airTempC: 'airTemp', baroKpa: 'baro', humidityPct: 'humidityPct' };
 
 /** An API or schema field name → the form's box, with curve points named by the CSV line they came from. */
-export function toFormErrors(list: { field: string; message: string }[], csvLines: number[] = []): FormikErrors<Values> {
+export function toFormErrors(
+  list: { field: string; message: string }[],
+  csvLines: number[] = [],
+): FormikErrors<Values> {
   const out: Partial<Record<keyof Values, string>> = {};
   for (const { field, message } of list) {
     const [head, index] = field.split('.');
@@ -72,11 +101,17 @@ export function toFormErrors(list: { field: string; message: string }[], csvLine
 }
 
 /** The server's checks, in yup from the schema's limits (lib/forms/dyno-checks.ts), bar the air readings (dyno-air-schema.ts). */
-export function schemaErrors(values: Values, ids: { buildId: number; quoteId: number }, units: AirUnits): FormikErrors<Values> {
+export function schemaErrors(
+  values: Values,
+  ids: { buildId: number; quoteId: number },
+  units: AirUnits,
+): FormikErrors<Values> {
   const { payload, csv } = payloadOf(values, ids, units);
   const issues = Object.entries(dynoRunChecks(payload)).map(([field, message]) => ({ field, message }));
   const errors = toFormErrors(issues, csv.lines);
-  if (csv.errors.length) errors.curveCsv = csv.errors.slice(0, 3).join('; ') + (csv.errors.length > 3 ? ` (and ${csv.errors.length - 3} more lines)` : '');
+  if (csv.errors.length)
+    errors.curveCsv =
+      csv.errors.slice(0, 3).join('; ') + (csv.errors.length > 3 ? ` (and ${csv.errors.length - 3} more lines)` : '');
   return errors;
 }
 

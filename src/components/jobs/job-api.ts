@@ -12,6 +12,7 @@ export async function sendJob(url: string, method: 'PATCH' | 'POST', body: unkno
 export function jobResult(answer: ApiAnswer<BoardJob>): ApiResult {
   if (answer.ok) return { ok: true, job: answer.body };
   const fields = Object.fromEntries((answer.body.errors ?? []).map((e) => [e.field, e.message]));
-  if (answer.status === 401) return { ok: false, message: 'You are signed out. Sign in again; nothing was saved.', fields };
+  if (answer.status === 401)
+    return { ok: false, message: 'You are signed out. Sign in again; nothing was saved.', fields };
   return { ok: false, message: answer.body.message ?? `Not saved (${answer.status}).`, fields };
 }

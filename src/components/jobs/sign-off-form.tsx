@@ -15,11 +15,14 @@ import { READINGS, type ReadingKey } from './sign-off-fields';
 
 // The technician's checks before first start. Numbers are typed as text and sent as numbers; what yup (from
 // the schema's limits) or the server refuses shows beside the field. Readings outside the usual limits are saved with a warning.
-const asNumber = (v: string) => (v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : v.trim() === '' ? undefined : v);
+const asNumber = (v: string) =>
+  v.trim() !== '' && Number.isFinite(Number(v)) ? Number(v) : v.trim() === '' ? undefined : v;
 
 export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deactivationActive: boolean }) {
   const router = useRouter();
-  const [values, setValues] = useState<Record<ReadingKey, string>>(() => Object.fromEntries(READINGS.map((r) => [r.key, ''])) as Record<ReadingKey, string>);
+  const [values, setValues] = useState<Record<ReadingKey, string>>(
+    () => Object.fromEntries(READINGS.map((r) => [r.key, ''])) as Record<ReadingKey, string>,
+  );
   const [deleteDone, setDeleteDone] = useState<'' | 'yes' | 'no'>('');
   const [tuneFile, setTuneFile] = useState('');
   const [notes, setNotes] = useState('');
@@ -79,23 +82,66 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
       {deactivationActive ? (
         <fieldset className="text-sm">
           <legend className="font-semibold">Cylinder deactivation delete (this build has it working)</legend>
-          <label className="mr-4 inline-flex items-center gap-1"><input type="radio" name="deactivation" checked={deleteDone === 'yes'} onChange={() => setDeleteDone('yes')} /> Delete done</label>
-          <label className="inline-flex items-center gap-1"><input type="radio" name="deactivation" checked={deleteDone === 'no'} onChange={() => setDeleteDone('no')} /> Left in place</label>
-          {problem?.fields.deactivationDeleteDone ? <p className="text-xs text-fault-700">Problem: {problem.fields.deactivationDeleteDone}</p> : null}
+          <label className="mr-4 inline-flex items-center gap-1">
+            <input
+              type="radio"
+              name="deactivation"
+              checked={deleteDone === 'yes'}
+              onChange={() => setDeleteDone('yes')}
+            />{' '}
+            Delete done
+          </label>
+          <label className="inline-flex items-center gap-1">
+            <input
+              type="radio"
+              name="deactivation"
+              checked={deleteDone === 'no'}
+              onChange={() => setDeleteDone('no')}
+            />{' '}
+            Left in place
+          </label>
+          {problem?.fields.deactivationDeleteDone ? (
+            <p className="text-xs text-fault-700">Problem: {problem.fields.deactivationDeleteDone}</p>
+          ) : null}
         </fieldset>
       ) : null}
-      <TextControl id="sign-off-tuneFile" label="Tune file and version" maxLength={JOB_LIMITS.tuneFileMaxLength} error={problem?.fields.tuneFile} value={tuneFile} onChange={(e) => setTuneFile(e.target.value)} />
-      <TextAreaControl id="sign-off-notes" label="Notes" rows={2} maxLength={JOB_LIMITS.notesMaxLength} error={problem?.fields.notes} value={notes} onChange={(e) => setNotes(e.target.value)} />
+      <TextControl
+        id="sign-off-tuneFile"
+        label="Tune file and version"
+        maxLength={JOB_LIMITS.tuneFileMaxLength}
+        error={problem?.fields.tuneFile}
+        value={tuneFile}
+        onChange={(e) => setTuneFile(e.target.value)}
+      />
+      <TextAreaControl
+        id="sign-off-notes"
+        label="Notes"
+        rows={2}
+        maxLength={JOB_LIMITS.notesMaxLength}
+        error={problem?.fields.notes}
+        value={notes}
+        onChange={(e) => setNotes(e.target.value)}
+      />
       <div>
-        <Button type="submit" variant="primary" disabled={busy}>{busy ? 'Saving…' : 'Record the sign-off'}</Button>
+        <Button type="submit" variant="primary" disabled={busy}>
+          {busy ? 'Saving…' : 'Record the sign-off'}
+        </Button>
         <span className="ml-2 text-xs text-ink-muted">Ctrl+Enter records from any field.</span>
       </div>
       <div aria-live="polite">
-        {problem ? <Banner tone="fault" title="Sign-off not recorded">{problem.message}</Banner> : null}
+        {problem ? (
+          <Banner tone="fault" title="Sign-off not recorded">
+            {problem.message}
+          </Banner>
+        ) : null}
         {saved && saved.length === 0 ? <Banner tone="ok" title="Sign-off recorded." /> : null}
         {saved && saved.length > 0 ? (
           <Banner tone="caution" title="Sign-off recorded, with warnings">
-            <ul className="list-disc pl-5">{saved.map((w) => <li key={w.field + w.message}>{w.message}</li>)}</ul>
+            <ul className="list-disc pl-5">
+              {saved.map((w) => (
+                <li key={w.field + w.message}>{w.message}</li>
+              ))}
+            </ul>
           </Banner>
         ) : null}
       </div>

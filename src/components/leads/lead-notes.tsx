@@ -35,7 +35,8 @@ export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteVi
         {notes.map((n) => (
           <li key={n.id} className="border-l-2 border-steel-300 pl-2">
             <p className="text-xs text-ink-muted">
-              {n.author ?? 'A former staff member'} · <span className="spec">{n.createdAt.slice(0, 16).replace('T', ' ')}</span> UTC
+              {n.author ?? 'A former staff member'} ·{' '}
+              <span className="spec">{n.createdAt.slice(0, 16).replace('T', ' ')}</span> UTC
             </p>
             <p className="whitespace-pre-line">{n.body}</p>
           </li>
@@ -48,7 +49,9 @@ export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteVi
           void add();
         }}
       >
-        <label htmlFor={`lead-note-${leadId}`} className="sr-only">New note on lead {leadId}</label>
+        <label htmlFor={`lead-note-${leadId}`} className="sr-only">
+          New note on lead {leadId}
+        </label>
         <textarea
           id={`lead-note-${leadId}`}
           rows={2}
@@ -64,9 +67,15 @@ export function LeadNotes({ leadId, notes }: { leadId: number; notes: LeadNoteVi
             }
           }}
         />
-        <Button type="submit" variant="quiet" disabled={saving || !body.trim()}>Add note</Button>
+        <Button type="submit" variant="quiet" disabled={saving || !body.trim()}>
+          Add note
+        </Button>
       </form>
-      {message ? <p role="status" className="text-xs text-ink-soft">{message}</p> : null}
+      {message ? (
+        <p role="status" className="text-xs text-ink-soft">
+          {message}
+        </p>
+      ) : null}
     </section>
   );
 }

@@ -15,7 +15,10 @@ export function LeadStatusForm({ id, status, version }: { id: number; status: Le
   const [value, setValue] = useState<LeadStatus>(status);
   const [message, setMessage] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
-  const { base, conflict, save, settle } = useVersionedSave<{ status: LeadStatus; version: number }>({ status, version });
+  const { base, conflict, save, settle } = useVersionedSave<{ status: LeadStatus; version: number }>({
+    status,
+    version,
+  });
 
   async function submit(event: React.FormEvent) {
     event.preventDefault();
@@ -31,11 +34,28 @@ export function LeadStatusForm({ id, status, version }: { id: number; status: Le
 
   return (
     <form onSubmit={submit} className="flex flex-wrap items-center gap-2 text-sm">
-      <label htmlFor={`lead-status-${id}`} className="font-semibold">Status</label>
-      <select id={`lead-status-${id}`} value={value} onChange={(e) => setValue(e.target.value as LeadStatus)} className="rounded border border-steel-300 bg-paper-raised px-2 py-1">
-        {LEAD_STATUSES.map((s) => <option key={s} value={s}>{LEAD_STATUS_WORDS[s]}</option>)}
+      <label htmlFor={`lead-status-${id}`} className="font-semibold">
+        Status
+      </label>
+      <select
+        id={`lead-status-${id}`}
+        value={value}
+        onChange={(e) => setValue(e.target.value as LeadStatus)}
+        className="rounded border border-steel-300 bg-paper-raised px-2 py-1"
+      >
+        {LEAD_STATUSES.map((s) => (
+          <option key={s} value={s}>
+            {LEAD_STATUS_WORDS[s]}
+          </option>
+        ))}
       </select>
-      <Button type="submit" disabled={saving || Boolean(conflict) || value === (base?.status ?? status)} variant="quiet">{saving ? 'Saving…' : 'Save'}</Button>
+      <Button
+        type="submit"
+        disabled={saving || Boolean(conflict) || value === (base?.status ?? status)}
+        variant="quiet"
+      >
+        {saving ? 'Saving…' : 'Save'}
+      </Button>
       {message && !conflict ? <span role="status">{message}</span> : null}
       {conflict ? (
         <ConflictBanner
@@ -52,7 +72,8 @@ export function LeadStatusForm({ id, status, version }: { id: number; status: Le
           theirsLabel="Take their status"
           mineLabel="Keep mine (then save again)"
         >
-          They set it to <strong>{LEAD_STATUS_WORDS[conflict.status]}</strong>; yours is <strong>{LEAD_STATUS_WORDS[value]}</strong>.
+          They set it to <strong>{LEAD_STATUS_WORDS[conflict.status]}</strong>; yours is{' '}
+          <strong>{LEAD_STATUS_WORDS[value]}</strong>.
         </ConflictBanner>
       ) : null}
     </form>

@@ -100,7 +100,8 @@ export function Questionnaire() {
     const trap = (event.currentTarget.elements.namedItem('website') as HTMLInputElement | null)?.value || undefined;
     const local: FieldErrors = {};
     if (!answers.name?.trim()) local.name = 'Please tell us your name.';
-    if (!answers.email?.trim() && !answers.phone?.trim()) local.email = 'Give an e-mail address or a phone number so the shop can reach you.';
+    if (!answers.email?.trim() && !answers.phone?.trim())
+      local.email = 'Give an e-mail address or a phone number so the shop can reach you.';
     if (answers.consent !== 'yes') local.consent = 'Tick the box so the shop may contact you.';
     setErrors(local);
     if (Object.keys(local).length) return;
@@ -145,7 +146,11 @@ export function Questionnaire() {
         <form onSubmit={next} className="mt-6" noValidate>
           <fieldset aria-describedby={errors[question.key] ? `${question.key}-error` : undefined}>
             <legend className="contents">
-              <h1 ref={heading} tabIndex={-1} className="text-3xl font-bold leading-tight focus:outline-none sm:text-4xl">
+              <h1
+                ref={heading}
+                tabIndex={-1}
+                className="text-3xl font-bold leading-tight focus:outline-none sm:text-4xl"
+              >
                 {question.title}
               </h1>
             </legend>
@@ -187,10 +192,46 @@ export function Questionnaire() {
           <h1 ref={heading} tabIndex={-1} className="text-3xl font-bold leading-tight focus:outline-none sm:text-4xl">
             How can the shop reach you?
           </h1>
-          <p className="mt-3 text-ink-soft">An e-mail address or a phone number is enough. We use it only to talk to you about this job.</p>
-          <TextControl look="large" id="ask-name" name="name" label="Your name" value={answers.name ?? ''} error={errors.name} onChange={(e) => set('name', e.target.value)} autoComplete="name" maxLength={LEAD_LIMITS.nameMaxLength} />
-          <TextControl look="large" id="ask-email" name="email" label="E-mail" type="email" inputMode="email" value={answers.email ?? ''} error={errors.email} onChange={(e) => set('email', e.target.value)} autoComplete="email" maxLength={LEAD_LIMITS.emailMaxLength} />
-          <TextControl look="large" id="ask-phone" name="phone" label="Phone" type="tel" inputMode="tel" value={answers.phone ?? ''} error={errors.phone} onChange={(e) => set('phone', e.target.value)} autoComplete="tel" maxLength={LEAD_LIMITS.phoneMaxLength} />
+          <p className="mt-3 text-ink-soft">
+            An e-mail address or a phone number is enough. We use it only to talk to you about this job.
+          </p>
+          <TextControl
+            look="large"
+            id="ask-name"
+            name="name"
+            label="Your name"
+            value={answers.name ?? ''}
+            error={errors.name}
+            onChange={(e) => set('name', e.target.value)}
+            autoComplete="name"
+            maxLength={LEAD_LIMITS.nameMaxLength}
+          />
+          <TextControl
+            look="large"
+            id="ask-email"
+            name="email"
+            label="E-mail"
+            type="email"
+            inputMode="email"
+            value={answers.email ?? ''}
+            error={errors.email}
+            onChange={(e) => set('email', e.target.value)}
+            autoComplete="email"
+            maxLength={LEAD_LIMITS.emailMaxLength}
+          />
+          <TextControl
+            look="large"
+            id="ask-phone"
+            name="phone"
+            label="Phone"
+            type="tel"
+            inputMode="tel"
+            value={answers.phone ?? ''}
+            error={errors.phone}
+            onChange={(e) => set('phone', e.target.value)}
+            autoComplete="tel"
+            maxLength={LEAD_LIMITS.phoneMaxLength}
+          />
           {/* Not shown, not focusable, not filled by autofill; a robot reading the markup fills it. */}
           <div hidden>
             <label htmlFor="website">Leave this empty</label>
@@ -206,16 +247,33 @@ export function Questionnaire() {
             onChange={(e) => set('consent', e.target.checked ? 'yes' : '')}
           />
           {problem ? (
-            <p role="alert" className="mt-4 rounded-lg border-2 border-fault-700 bg-fault-100 p-4 font-semibold">{problem}</p>
+            <p role="alert" className="mt-4 rounded-lg border-2 border-fault-700 bg-fault-100 p-4 font-semibold">
+              {problem}
+            </p>
           ) : null}
-          <Nav step={step} onBack={() => go(step - 1)} nextLabel={sending ? 'Sending…' : 'See my shortlist'} disabled={sending || !restored} />
+          <Nav
+            step={step}
+            onBack={() => go(step - 1)}
+            nextLabel={sending ? 'Sending…' : 'See my shortlist'}
+            disabled={sending || !restored}
+          />
         </form>
       )}
     </div>
   );
 }
 
-function Nav({ step, onBack, nextLabel, disabled }: { step: number; onBack: () => void; nextLabel: string; disabled?: boolean }) {
+function Nav({
+  step,
+  onBack,
+  nextLabel,
+  disabled,
+}: {
+  step: number;
+  onBack: () => void;
+  nextLabel: string;
+  disabled?: boolean;
+}) {
   return (
     <div className="mt-8 flex flex-wrap-reverse gap-3">
       {step > 0 ? (

@@ -12,8 +12,10 @@ export const CUSTOMER_CAUTIONS = [
 
 /** The job price the shop would quote, before tax; older saved shortlists carried only "from" the cam and parts. */
 function priceWords(entry: ShortlistEntry): string {
-  if (typeof entry.jobPriceCents === 'number') return `About ${jobPrice(entry.jobPriceCents)} for the whole job — the cam, the parts it needs, fitting and the tune — before tax`;
-  if (typeof entry.fromPriceCents === 'number') return `${fromPrice(entry.fromPriceCents)} for the cam and what it needs; fitting comes on top`;
+  if (typeof entry.jobPriceCents === 'number')
+    return `About ${jobPrice(entry.jobPriceCents)} for the whole job — the cam, the parts it needs, fitting and the tune — before tax`;
+  if (typeof entry.fromPriceCents === 'number')
+    return `${fromPrice(entry.fromPriceCents)} for the cam and what it needs; fitting comes on top`;
   return 'Ask the shop for the price';
 }
 
@@ -24,29 +26,48 @@ export function ShortlistCards({ shortlist, compact = false }: { shortlist: Shor
   return (
     <ol className={`flex flex-col ${compact ? 'gap-2' : 'gap-5'}`}>
       {shortlist.entries.map((entry) => (
-        <li key={String(entry.camId)} className={`rounded-lg border border-steel-300 bg-paper-raised ${compact ? 'p-3' : 'p-5'}`}>
+        <li
+          key={String(entry.camId)}
+          className={`rounded-lg border border-steel-300 bg-paper-raised ${compact ? 'p-3' : 'p-5'}`}
+        >
           <h3 className={compact ? 'font-semibold' : 'text-2xl font-semibold'}>
             Choice {entry.rank}: {entry.camName}
           </h3>
           <p className={compact ? 'text-sm text-ink-soft' : 'mt-1 text-base text-ink-soft'}>
             {priceWords(entry)} ·{' '}
-            {entry.emissionsCertified ? 'certified for emissions-tested road use' : 'not certified for emissions-tested road use'}
-            {compact ? ` · peak power ${entry.gainPctPeakHp >= 0 ? '+' : ''}${entry.gainPctPeakHp.toLocaleString('en-US', { maximumFractionDigits: 1 })} % (indicative)` : ''}
+            {entry.emissionsCertified
+              ? 'certified for emissions-tested road use'
+              : 'not certified for emissions-tested road use'}
+            {compact
+              ? ` · peak power ${entry.gainPctPeakHp >= 0 ? '+' : ''}${entry.gainPctPeakHp.toLocaleString('en-US', { maximumFractionDigits: 1 })} % (indicative)`
+              : ''}
           </p>
           {compact ? null : (
             <>
               <h4 className="mt-4 text-xl font-semibold">Why it fits</h4>
-              <ul className="mt-1 list-disc pl-6">{entry.reasons.map((text) => <li key={text}>{text}</li>)}</ul>
+              <ul className="mt-1 list-disc pl-6">
+                {entry.reasons.map((text) => (
+                  <li key={text}>{text}</li>
+                ))}
+              </ul>
               {entry.alsoNeeds.length ? (
                 <>
                   <h4 className="mt-4 text-xl font-semibold">What else the job needs</h4>
-                  <ul className="mt-1 list-disc pl-6">{entry.alsoNeeds.map((text) => <li key={text}>{text}</li>)}</ul>
+                  <ul className="mt-1 list-disc pl-6">
+                    {entry.alsoNeeds.map((text) => (
+                      <li key={text}>{text}</li>
+                    ))}
+                  </ul>
                 </>
               ) : null}
               {entry.cautions.length ? (
                 <>
                   <h4 className="mt-4 text-xl font-semibold">Keep in mind</h4>
-                  <ul className="mt-1 list-disc pl-6">{entry.cautions.map((text) => <li key={text}>{text}</li>)}</ul>
+                  <ul className="mt-1 list-disc pl-6">
+                    {entry.cautions.map((text) => (
+                      <li key={text}>{text}</li>
+                    ))}
+                  </ul>
                 </>
               ) : null}
             </>

@@ -10,7 +10,19 @@ import type { QuoteRun } from './quote-run';
 // The balance once the deposit is paid: what the job came to, what was paid and refunded, what is left,
 // and the two ways to take the rest — e-mail the customer a pay-online link, or record money taken at
 // the counter. The server checks the amount against the balance again and refuses a stale version.
-export function BalancePanel({ quote, url, run, busy, canWrite }: { quote: QuoteRecord; url: string; run: QuoteRun; busy: boolean; canWrite: boolean }) {
+export function BalancePanel({
+  quote,
+  url,
+  run,
+  busy,
+  canWrite,
+}: {
+  quote: QuoteRecord;
+  url: string;
+  run: QuoteRun;
+  busy: boolean;
+  canWrite: boolean;
+}) {
   const due = quote.balanceDueCents;
   const [amount, setAmount] = useState(centsToText(due));
   const [method, setMethod] = useState<'cash' | 'card-present'>('card-present');
@@ -19,45 +31,113 @@ export function BalancePanel({ quote, url, run, busy, canWrite }: { quote: Quote
 
   return (
     <section aria-labelledby="balance" className="rounded border border-steel-300 bg-paper-raised p-3 text-sm">
-      <h2 id="balance" className="font-semibold">Balance</h2>
+      <h2 id="balance" className="font-semibold">
+        Balance
+      </h2>
       <dl className="spec mt-2 grid max-w-md grid-cols-[1fr_auto] gap-x-4 gap-y-0.5">
-        <dt className="font-sans">Job total</dt><dd className="text-right">{formatMoney(quote.totalCents)}</dd>
-        <dt className="font-sans">Deposit paid</dt><dd className="text-right">{formatMoney(quote.depositPaidCents)}</dd>
-        <dt className="font-sans">Balance payments</dt><dd className="text-right">{formatMoney(quote.balancePaidCents)}</dd>
-        <dt className="font-sans">Refunded</dt><dd className="text-right">{formatMoney(quote.refundedCents)}</dd>
-        <dt className="font-sans font-semibold">Balance due</dt><dd className="text-right font-semibold" data-testid="balance-due">{formatMoney(due)}</dd>
+        <dt className="font-sans">Job total</dt>
+        <dd className="text-right">{formatMoney(quote.totalCents)}</dd>
+        <dt className="font-sans">Deposit paid</dt>
+        <dd className="text-right">{formatMoney(quote.depositPaidCents)}</dd>
+        <dt className="font-sans">Balance payments</dt>
+        <dd className="text-right">{formatMoney(quote.balancePaidCents)}</dd>
+        <dt className="font-sans">Refunded</dt>
+        <dd className="text-right">{formatMoney(quote.refundedCents)}</dd>
+        <dt className="font-sans font-semibold">Balance due</dt>
+        <dd className="text-right font-semibold" data-testid="balance-due">
+          {formatMoney(due)}
+        </dd>
       </dl>
-      {quote.status === 'closed' ? <p className="mt-2 font-semibold text-ok-700">Paid in full{quote.closedAt ? ` · closed ${quote.closedAt.slice(0, 10)}` : ''}.</p> : null}
-      {open && quote.balanceRequestedAt ? <p className="mt-2 text-ink-soft">Pay-the-balance link last e-mailed {quote.balanceRequestedAt.slice(0, 16).replace('T', ' ')} UTC.</p> : null}
+      {quote.status === 'closed' ? (
+        <p className="mt-2 font-semibold text-ok-700">
+          Paid in full{quote.closedAt ? ` · closed ${quote.closedAt.slice(0, 10)}` : ''}.
+        </p>
+      ) : null}
+      {open && quote.balanceRequestedAt ? (
+        <p className="mt-2 text-ink-soft">
+          Pay-the-balance link last e-mailed {quote.balanceRequestedAt.slice(0, 16).replace('T', ' ')} UTC.
+        </p>
+      ) : null}
       {open && canWrite ? (
         <div className="mt-3 flex flex-col gap-3">
           <div>
-            <Button type="button" variant="primary" disabled={busy || !quote.customer.email}
-              onClick={() => void run('Not e-mailed', 'POST', `${url}/balance-request`, { version: quote.version }, `E-mailed ${quote.customer.email} the balance of ${formatMoney(due)} with a link to pay it online.`)}>
+            <Button
+              type="button"
+              variant="primary"
+              disabled={busy || !quote.customer.email}
+              onClick={() =>
+                void run(
+                  'Not e-mailed',
+                  'POST',
+                  `${url}/balance-request`,
+                  { version: quote.version },
+                  `E-mailed ${quote.customer.email} the balance of ${formatMoney(due)} with a link to pay it online.`,
+                )
+              }
+            >
               E-mail the pay-the-balance link
             </Button>
-            {!quote.customer.email ? <p className="mt-1 text-ink-soft">The customer has no e-mail address: take the balance at the counter.</p> : null}
+            {!quote.customer.email ? (
+              <p className="mt-1 text-ink-soft">The customer has no e-mail address: take the balance at the counter.</p>
+            ) : null}
           </div>
-          <form className="flex flex-wrap items-end gap-2"
+          <form
+            className="flex flex-wrap items-end gap-2"
             onSubmit={(e) => {
               e.preventDefault();
               const checked = amountWithin(amount, due, 'pay');
               if ('problem' in checked) return setProblem(checked.problem);
               const { cents } = checked;
               setProblem(null);
-              void run('Not recorded', 'POST', `${url}/payments`, { version: quote.version, amountCents: cents, method }, `Recorded ${formatMoney(cents)} taken at the counter; the receipt is e-mailed to the customer.`);
-            }}>
+              void run(
+                'Not recorded',
+                'POST',
+                `${url}/payments`,
+                { version: quote.version, amountCents: cents, method },
+                `Recorded ${formatMoney(cents)} taken at the counter; the receipt is e-mailed to the customer.`,
+              );
+            }}
+          >
             <fieldset className="flex gap-3">
               <legend className="sr-only">How the customer paid</legend>
-              <label className="flex items-center gap-1"><input type="radio" name="method" value="card-present" checked={method === 'card-present'} onChange={() => setMethod('card-present')} /> Card at the counter</label>
-              <label className="flex items-center gap-1"><input type="radio" name="method" value="cash" checked={method === 'cash'} onChange={() => setMethod('cash')} /> Cash</label>
+              <label className="flex items-center gap-1">
+                <input
+                  type="radio"
+                  name="method"
+                  value="card-present"
+                  checked={method === 'card-present'}
+                  onChange={() => setMethod('card-present')}
+                />{' '}
+                Card at the counter
+              </label>
+              <label className="flex items-center gap-1">
+                <input
+                  type="radio"
+                  name="method"
+                  value="cash"
+                  checked={method === 'cash'}
+                  onChange={() => setMethod('cash')}
+                />{' '}
+                Cash
+              </label>
             </fieldset>
             <label>
               Amount taken ($)
-              <input value={amount} onChange={(e) => setAmount(e.target.value)} inputMode="decimal" className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5" />
+              <input
+                value={amount}
+                onChange={(e) => setAmount(e.target.value)}
+                inputMode="decimal"
+                className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5"
+              />
             </label>
-            <Button type="submit" variant="quiet" disabled={busy}>Record counter payment</Button>
-            {problem ? <p className="w-full text-fault-700" role="alert">{problem}</p> : null}
+            <Button type="submit" variant="quiet" disabled={busy}>
+              Record counter payment
+            </Button>
+            {problem ? (
+              <p className="w-full text-fault-700" role="alert">
+                {problem}
+              </p>
+            ) : null}
           </form>
         </div>
       ) : null}

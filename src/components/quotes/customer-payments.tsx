@@ -7,11 +7,14 @@ import { METHOD_WORDS, PURPOSE_WORDS } from '@/lib/quotes/balance';
 
 export function CustomerPayments({ quote, token, currency }: { quote: QuoteRecord; token: string; currency: string }) {
   const base = `/api/q/${encodeURIComponent(token)}`;
-  const canPayBalance = quote.status === 'deposit-paid' && quote.balanceDueCents > 0 && quote.balanceRequestedAt !== null;
+  const canPayBalance =
+    quote.status === 'deposit-paid' && quote.balanceDueCents > 0 && quote.balanceRequestedAt !== null;
   const paidInFull = quote.status === 'closed' && quote.balanceDueCents === 0;
   return (
     <section aria-labelledby="paid" className="mt-8 rounded-lg border border-steel-300 bg-paper-raised p-5">
-      <h2 id="paid" className="text-2xl font-semibold">What you have paid</h2>
+      <h2 id="paid" className="text-2xl font-semibold">
+        What you have paid
+      </h2>
       <ul className="mt-3 flex flex-col gap-2">
         {quote.payments.map((p) => (
           <li key={p.id} className="flex flex-wrap items-baseline justify-between gap-x-4">
@@ -19,7 +22,10 @@ export function CustomerPayments({ quote, token, currency }: { quote: QuoteRecor
               {PURPOSE_WORDS[p.purpose]}, {METHOD_WORDS[p.method].toLowerCase()}
               {p.paidAt ? `, ${longDate(p.paidAt)}` : ''}
               {p.refundedCents ? ` (${formatMoney(p.refundedCents, { currency: p.currency })} refunded)` : ''}
-              <a className="ml-2 text-base font-semibold text-gauge-700 underline print:hidden" href={`${base}/receipts/${p.id}`}>
+              <a
+                className="ml-2 text-base font-semibold text-gauge-700 underline print:hidden"
+                href={`${base}/receipts/${p.id}`}
+              >
                 Receipt (PDF)
               </a>
             </span>
@@ -49,7 +55,9 @@ export function CustomerPayments({ quote, token, currency }: { quote: QuoteRecor
           >
             Pay the balance of {formatMoney(quote.balanceDueCents, { currency })}
           </button>
-          <p className="mt-2 text-base text-ink-muted">You pay on the payment service’s secure page. You can also pay when you collect the car.</p>
+          <p className="mt-2 text-base text-ink-muted">
+            You pay on the payment service’s secure page. You can also pay when you collect the car.
+          </p>
         </form>
       ) : null}
     </section>

@@ -21,7 +21,19 @@ const MOVE_LABEL: Partial<Record<QuoteStatus, string>> = {
 };
 const NEEDS_CONFIRM: readonly QuoteStatus[] = ['declined', 'cancelled', 'expired', 'closed'];
 
-export function LifecyclePanel({ quote, url, run, busy, canWrite }: { quote: QuoteRecord; url: string; run: QuoteRun; busy: boolean; canWrite: boolean }) {
+export function LifecyclePanel({
+  quote,
+  url,
+  run,
+  busy,
+  canWrite,
+}: {
+  quote: QuoteRecord;
+  url: string;
+  run: QuoteRun;
+  busy: boolean;
+  canWrite: boolean;
+}) {
   const router = useRouter();
   const [confirming, setConfirming] = useState<QuoteStatus | null>(null);
   const [validUntil, setValidUntil] = useState(quote.validUntil ?? '');
@@ -39,60 +51,135 @@ export function LifecyclePanel({ quote, url, run, busy, canWrite }: { quote: Quo
 
   return (
     <section aria-labelledby="lifecycle" className="rounded border border-steel-300 bg-paper-raised p-3 text-sm">
-      <h2 id="lifecycle" className="font-semibold">State: {stateWord(quote.status)}</h2>
+      <h2 id="lifecycle" className="font-semibold">
+        State: {stateWord(quote.status)}
+      </h2>
       <p className="mt-1 text-ink-soft">
         {quote.revision > 1 && quote.revisionOf ? (
-          <>Revision {quote.revision}, replaces <Link className="underline" href={`/quotes/${quote.revisionOf.id}`}>{quote.revisionOf.number}</Link>. </>
+          <>
+            Revision {quote.revision}, replaces{' '}
+            <Link className="underline" href={`/quotes/${quote.revisionOf.id}`}>
+              {quote.revisionOf.number}
+            </Link>
+            .{' '}
+          </>
         ) : null}
         {quote.replacedBy ? (
-          <>Replaced by <Link className="underline" href={`/quotes/${quote.replacedBy.id}`}>{quote.replacedBy.number}</Link> ({stateWord(quote.replacedBy.status).toLowerCase()}); the customer’s old link says so. </>
+          <>
+            Replaced by{' '}
+            <Link className="underline" href={`/quotes/${quote.replacedBy.id}`}>
+              {quote.replacedBy.number}
+            </Link>{' '}
+            ({stateWord(quote.replacedBy.status).toLowerCase()}); the customer’s old link says so.{' '}
+          </>
         ) : null}
-        {quote.validUntil ? `Valid until ${quote.validUntil}. ` : 'Valid-until is set when the quote is sent (30 days unless you choose). '}
+        {quote.validUntil
+          ? `Valid until ${quote.validUntil}. `
+          : 'Valid-until is set when the quote is sent (30 days unless you choose). '}
         {quote.closedAt ? `Closed ${quote.closedAt.slice(0, 10)}.` : ''}
       </p>
       {isOpen(quote.status) && isPastValidUntil(quote.validUntil) ? (
         <p role="status" className="mt-1 font-semibold text-caution-700">
-          Past its valid-until day: the customer can no longer accept or pay it. Move the date, revise it, or mark it expired.
+          Past its valid-until day: the customer can no longer accept or pay it. Move the date, revise it, or mark it
+          expired.
         </p>
       ) : null}
       <div className="mt-2 flex flex-wrap gap-2">
         {moves.map((to) =>
           confirming === to ? null : (
-            <Button key={to} type="button" variant={to === 'accepted' || to === 'closed' ? 'primary' : 'quiet'} disabled={busy}
-              onClick={() => (NEEDS_CONFIRM.includes(to) ? setConfirming(to) : void run('Not changed', 'POST', `${url}/transition`, { to, version: quote.version }, `Now: ${stateWord(to).toLowerCase()}.`))}>
+            <Button
+              key={to}
+              type="button"
+              variant={to === 'accepted' || to === 'closed' ? 'primary' : 'quiet'}
+              disabled={busy}
+              onClick={() =>
+                NEEDS_CONFIRM.includes(to)
+                  ? setConfirming(to)
+                  : void run(
+                      'Not changed',
+                      'POST',
+                      `${url}/transition`,
+                      { to, version: quote.version },
+                      `Now: ${stateWord(to).toLowerCase()}.`,
+                    )
+              }
+            >
               {MOVE_LABEL[to] ?? stateWord(to)}
             </Button>
           ),
         )}
         {canWrite && canRevise(quote.status) ? (
-          <Button type="button" variant="quiet" disabled={busy} onClick={() => void revise()}>Revise (new draft, new number)</Button>
+          <Button type="button" variant="quiet" disabled={busy} onClick={() => void revise()}>
+            Revise (new draft, new number)
+          </Button>
         ) : null}
-        <ButtonAnchor variant="quiet" href={`${url}/pdf`}>Download PDF</ButtonAnchor>
+        <ButtonAnchor variant="quiet" href={`${url}/pdf`}>
+          Download PDF
+        </ButtonAnchor>
       </div>
       {confirming ? (
-        <div role="alertdialog" aria-labelledby="move-confirm" className="mt-2 rounded border border-caution-700 bg-caution-100 p-2">
-          <p id="move-confirm">{MOVE_LABEL[confirming]}: the quote becomes “{stateWord(confirming).toLowerCase()}”. Sure?</p>
+        <div
+          role="alertdialog"
+          aria-labelledby="move-confirm"
+          className="mt-2 rounded border border-caution-700 bg-caution-100 p-2"
+        >
+          <p id="move-confirm">
+            {MOVE_LABEL[confirming]}: the quote becomes “{stateWord(confirming).toLowerCase()}”. Sure?
+          </p>
           <div className="mt-2 flex gap-2">
-            <Button type="button" variant="danger" disabled={busy}
-              onClick={() => void run('Not changed', 'POST', `${url}/transition`, { to: confirming, version: quote.version }, `Now: ${stateWord(confirming).toLowerCase()}.`).then(() => setConfirming(null))}>
+            <Button
+              type="button"
+              variant="danger"
+              disabled={busy}
+              onClick={() =>
+                void run(
+                  'Not changed',
+                  'POST',
+                  `${url}/transition`,
+                  { to: confirming, version: quote.version },
+                  `Now: ${stateWord(confirming).toLowerCase()}.`,
+                ).then(() => setConfirming(null))
+              }
+            >
               Yes, {(MOVE_LABEL[confirming] ?? '').toLowerCase()}
             </Button>
-            <Button type="button" variant="quiet" onClick={() => setConfirming(null)}>No, go back</Button>
+            <Button type="button" variant="quiet" onClick={() => setConfirming(null)}>
+              No, go back
+            </Button>
           </div>
         </div>
       ) : null}
-      {reviseError ? <p role="alert" className="mt-2 text-fault-700">Not revised: {reviseError}</p> : null}
+      {reviseError ? (
+        <p role="alert" className="mt-2 text-fault-700">
+          Not revised: {reviseError}
+        </p>
+      ) : null}
       {datable ? (
-        <form className="mt-2 flex flex-wrap items-end gap-2"
+        <form
+          className="mt-2 flex flex-wrap items-end gap-2"
           onSubmit={(e) => {
             e.preventDefault();
-            void run('Date not saved', 'PATCH', url, { version: quote.version, validUntil: validUntil || null }, 'Valid-until saved.');
-          }}>
+            void run(
+              'Date not saved',
+              'PATCH',
+              url,
+              { version: quote.version, validUntil: validUntil || null },
+              'Valid-until saved.',
+            );
+          }}
+        >
           <label>
             Valid until
-            <input type="date" value={validUntil} onChange={(e) => setValidUntil(e.target.value)} className="spec mt-1 block rounded border border-steel-300 px-1 py-0.5" />
+            <input
+              type="date"
+              value={validUntil}
+              onChange={(e) => setValidUntil(e.target.value)}
+              className="spec mt-1 block rounded border border-steel-300 px-1 py-0.5"
+            />
           </label>
-          <Button type="submit" variant="quiet" disabled={busy}>Save date</Button>
+          <Button type="submit" variant="quiet" disabled={busy}>
+            Save date
+          </Button>
         </form>
       ) : null}
     </section>

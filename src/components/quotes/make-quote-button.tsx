@@ -13,20 +13,32 @@ export function MakeQuoteButton({ buildId, camId }: { buildId: number; camId: nu
   return (
     <div className="mt-3">
       <Button
-        type="button" variant="primary"
+        type="button"
+        variant="primary"
         disabled={busy}
         onClick={async () => {
           setBusy(true);
           setError(null);
-          const { status, body } = await sendJson<{ id: number }>('POST', '/api/quotes', { buildId, camId: Number(camId) });
+          const { status, body } = await sendJson<{ id: number }>('POST', '/api/quotes', {
+            buildId,
+            camId: Number(camId),
+          });
           if (status === 201) return router.push(`/quotes/${body.id}`);
           setBusy(false);
-          setError(body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ?? body.message ?? `The server answered ${status}.`);
+          setError(
+            body.errors?.map((e) => `${e.field}: ${e.message}`).join('; ') ??
+              body.message ??
+              `The server answered ${status}.`,
+          );
         }}
       >
         {busy ? 'Making the quote…' : 'Make a quote'}
       </Button>
-      {error ? <p role="alert" className="mt-1 text-sm text-fault-700">Not made: {error}</p> : null}
+      {error ? (
+        <p role="alert" className="mt-1 text-sm text-fault-700">
+          Not made: {error}
+        </p>
+      ) : null}
     </div>
   );
 }

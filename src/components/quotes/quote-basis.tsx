@@ -6,7 +6,10 @@ export function QuoteBasis({ snapshot, compact = false }: { snapshot: { advice: 
   const { reasons, cautions } = adviceWords(snapshot.advice);
   if (!reasons.length && !cautions.length) return null;
   return (
-    <section aria-labelledby="basis" className={compact ? 'rounded border border-steel-300 bg-paper-raised p-3 text-sm' : 'mt-8'}>
+    <section
+      aria-labelledby="basis"
+      className={compact ? 'rounded border border-steel-300 bg-paper-raised p-3 text-sm' : 'mt-8'}
+    >
       <h2 id="basis" className={compact ? 'text-sm font-semibold' : 'text-2xl font-semibold'}>
         Why this cam{compact ? ' (as sent; later build edits do not change it)' : ''}
       </h2>
@@ -27,7 +30,9 @@ export function QuoteBasis({ snapshot, compact = false }: { snapshot: { advice: 
           </ul>
         </>
       ) : null}
-      <p className={compact ? 'mt-2 text-xs text-ink-muted' : 'mt-2 text-base text-ink-muted'}>Predictions are indicative; the dyno has the last word.</p>
+      <p className={compact ? 'mt-2 text-xs text-ink-muted' : 'mt-2 text-base text-ink-muted'}>
+        Predictions are indicative; the dyno has the last word.
+      </p>
     </section>
   );
 }

@@ -23,12 +23,29 @@ import { PaymentList } from './payment-list';
 import { QuoteStatusTag } from './status';
 
 // discountCents rides along unchanged, so saving other lines keeps a discount already given.
-type EditLine = { kind: QuoteLineKind; description: string; quantity: string; price: string; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null };
+type EditLine = {
+  kind: QuoteLineKind;
+  description: string;
+  quantity: string;
+  price: string;
+  discountCents: number;
+  camId: number | null;
+  partId: number | null;
+  laborOperationId: number | null;
+};
 type Notice = { tone: 'ok' | 'fault' | 'caution'; title: string; detail?: string } | null;
 
-
 const toEdit = (q: QuoteRecord): EditLine[] =>
-  q.lines.map((l) => ({ kind: l.kind, description: l.description, quantity: String(l.quantity), price: centsToText(l.unitPriceCents), discountCents: l.discountCents ?? 0, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId }));
+  q.lines.map((l) => ({
+    kind: l.kind,
+    description: l.description,
+    quantity: String(l.quantity),
+    price: centsToText(l.unitPriceCents),
+    discountCents: l.discountCents ?? 0,
+    camId: l.camId,
+    partId: l.partId,
+    laborOperationId: l.laborOperationId,
+  }));
 
 function errorText(body: { message?: string; errors?: { field: string; message: string }[] }) {
   return body.errors?.length ? body.errors.map((e) => `${e.field}: ${e.message}`).join('; ') : undefined;
@@ -46,7 +63,14 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
   // The lines are the quote's versioned edit: a newer save answers 409, shown beside the lines typed here.
   const lineSave = useVersionedSave<QuoteRecord>(quote);
 
-  async function run(label: string, call: () => Promise<{ status: number; body: QuoteRecord & { message?: string; errors?: { field: string; message: string }[]; current?: unknown } }>, okTitle: string) {
+  async function run(
+    label: string,
+    call: () => Promise<{
+      status: number;
+      body: QuoteRecord & { message?: string; errors?: { field: string; message: string }[]; current?: unknown };
+    }>,
+    okTitle: string,
+  ) {
     setBusy(true);
     setNotice(null);
     const { status, body } = await call();
@@ -57,7 +81,11 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
       return true;
     }
     if (status === 409 && body.current) await mutate(body.current as QuoteRecord, { revalidate: false });
-    setNotice({ tone: 'fault', title: `${label}: ${body.message ?? `the server answered ${status}`}`, detail: errorText(body) });
+    setNotice({
+      tone: 'fault',
+      title: `${label}: ${body.message ?? `the server answered ${status}`}`,
+      detail: errorText(body),
+    });
     return false;
   }
 
@@ -65,33 +93,79 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
 
   async function saveLines() {
     if (!editing) return;
-    const lines: Array<{ kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; discountCents: number; camId: number | null; partId: number | null; laborOperationId: number | null }> = [];
+    const lines: Array<{
+      kind: QuoteLineKind;
+      description: string;
+      quantity: number;
+      unitPriceCents: number;
+      discountCents: number;
+      camId: number | null;
+      partId: number | null;
+      laborOperationId: number | null;
+    }> = [];
     for (const [i, l] of editing.entries()) {
       const cents = centsFromText(l.price);
       const quantity = Number(l.quantity);
-      if (cents === null) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the price must be dollars and cents, e.g. 129.50` });
-      if (!Number.isFinite(quantity) || quantity <= 0) return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
-      lines.push({ kind: l.kind, description: l.description, quantity, unitPriceCents: cents, discountCents: l.discountCents, camId: l.camId, partId: l.partId, laborOperationId: l.laborOperationId });
+      if (cents === null)
+        return setNotice({ tone: 'fault', title: `Line ${i + 1}: the price must be dollars and cents, e.g. 129.50` });
+      if (!Number.isFinite(quantity) || quantity <= 0)
+        return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
+      lines.push({
+        kind: l.kind,
+        description: l.description,
+        quantity,
+        unitPriceCents: cents,
+        discountCents: l.discountCents,
+        camId: l.camId,
+        partId: l.partId,
+        laborOperationId: l.laborOperationId,
+      });
     }
-    if (await run('Not saved', () => lineSave.save('PATCH', url, { lines }), 'Lines saved; totals updated.')) setEditing(null);
+    if (await run('Not saved', () => lineSave.save('PATCH', url, { lines }), 'Lines saved; totals updated.'))
+      setEditing(null);
   }
 
-  const set = (i: number, change: Partial<EditLine>) => setEditing((rows) => rows!.map((r, j) => (j === i ? { ...r, ...change } : r)));
+  const set = (i: number, change: Partial<EditLine>) =>
+    setEditing((rows) => rows!.map((r, j) => (j === i ? { ...r, ...change } : r)));
   // Refunds here are of the deposit; a balance taken at the counter is given back at the counter.
-  const paid = quote.payments.find((p) => p.purpose === 'deposit' && !p.duplicateOfPaymentId && (p.status === 'paid' || p.status === 'partially-refunded'));
+  const paid = quote.payments.find(
+    (p) =>
+      p.purpose === 'deposit' && !p.duplicateOfPaymentId && (p.status === 'paid' || p.status === 'partially-refunded'),
+  );
 
   return (
     <div className="flex flex-col gap-4">
       <PageHeader
         title={`Quote ${quote.number}`}
         back={{ href: '/quotes', label: 'Quotes' }}
-        lead={<>{quote.customer.name}{quote.customer.email ? ` <${quote.customer.email}>` : ' (no e-mail on file)'} · {quote.build?.vehicleLabel ?? 'no build'} · <QuoteStatusTag status={quote.status} /></>}
+        lead={
+          <>
+            {quote.customer.name}
+            {quote.customer.email ? ` <${quote.customer.email}>` : ' (no e-mail on file)'} ·{' '}
+            {quote.build?.vehicleLabel ?? 'no build'} · <QuoteStatusTag status={quote.status} />
+          </>
+        }
         actions={
           canWrite ? (
             <>
-              {isDraft && !editing ? <Button type="button" variant="quiet" onClick={() => setEditing(toEdit(quote))}>Edit lines</Button> : null}
+              {isDraft && !editing ? (
+                <Button type="button" variant="quiet" onClick={() => setEditing(toEdit(quote))}>
+                  Edit lines
+                </Button>
+              ) : null}
               {(isDraft || quote.status === 'sent') && !editing ? (
-                <Button type="button" variant="primary" disabled={busy} onClick={() => run('Not sent', () => sendJson('POST', `${url}/send`), `Sent to ${quote.customer.email}. The customer’s link is in the e-mail.`)}>
+                <Button
+                  type="button"
+                  variant="primary"
+                  disabled={busy}
+                  onClick={() =>
+                    run(
+                      'Not sent',
+                      () => sendJson('POST', `${url}/send`),
+                      `Sent to ${quote.customer.email}. The customer’s link is in the e-mail.`,
+                    )
+                  }
+                >
                   {quote.status === 'sent' ? 'Send again (new link)' : 'Send to customer'}
                 </Button>
               ) : null}
@@ -99,10 +173,27 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           ) : null
         }
       />
-      {notice ? <Banner tone={notice.tone} title={notice.title}>{notice.detail}</Banner> : null}
+      {notice ? (
+        <Banner tone={notice.tone} title={notice.title}>
+          {notice.detail}
+        </Banner>
+      ) : null}
       <LifecyclePanel key={quote.version} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
-      {quote.status === 'deposit-paid' || quote.status === 'closed' ? <BalancePanel key={`balance-${quote.version}`} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} /> : null}
-      {!isDraft ? <p className="text-sm text-ink-soft">Lines can be changed only while the quote is a draft; revise a sent quote to change them.</p> : null}
+      {quote.status === 'deposit-paid' || quote.status === 'closed' ? (
+        <BalancePanel
+          key={`balance-${quote.version}`}
+          quote={quote}
+          url={url}
+          run={runJson}
+          busy={busy}
+          canWrite={canWrite}
+        />
+      ) : null}
+      {!isDraft ? (
+        <p className="text-sm text-ink-soft">
+          Lines can be changed only while the quote is a draft; revise a sent quote to change them.
+        </p>
+      ) : null}
 
       <TableScroll label="Quote lines">
         <table className={tableClass}>
@@ -116,7 +207,11 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
               <th className={`${thClass} text-right`}>Line</th>
               <th className={thClass}>Tax</th>
               {quote.costCents !== undefined ? <th className={`${thClass} text-right`}>Unit cost</th> : null}
-              {editing ? <th className={thClass}><span className="sr-only">Remove</span></th> : null}
+              {editing ? (
+                <th className={thClass}>
+                  <span className="sr-only">Remove</span>
+                </th>
+              ) : null}
             </tr>
           </thead>
           <tbody>
@@ -124,23 +219,66 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
               ? editing.map((l, i) => {
                   const cents = centsFromText(l.price);
                   const q = Number(l.quantity);
-                  const total = cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6 ? Math.max(0, lineTotalCents(q, cents) - l.discountCents) : null;
+                  const total =
+                    cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6
+                      ? Math.max(0, lineTotalCents(q, cents) - l.discountCents)
+                      : null;
                   // A catalogue line's kind (and so its tax) follows the catalogue item.
                   const fromCatalogue = Boolean(l.camId || l.partId || l.laborOperationId);
                   return (
                     <tr key={i}>
                       <td className={tdClass}>
-                        <select aria-label={`Line ${i + 1} kind`} value={l.kind} disabled={fromCatalogue} title={fromCatalogue ? 'Follows the catalogue item' : undefined} onChange={(e) => set(i, { kind: e.target.value as QuoteLineKind })} className="rounded border border-steel-300 bg-paper-raised px-1 py-0.5">
-                          {QUOTE_LINE_KIND_LIST.map((k) => <option key={k}>{k}</option>)}
+                        <select
+                          aria-label={`Line ${i + 1} kind`}
+                          value={l.kind}
+                          disabled={fromCatalogue}
+                          title={fromCatalogue ? 'Follows the catalogue item' : undefined}
+                          onChange={(e) => set(i, { kind: e.target.value as QuoteLineKind })}
+                          className="rounded border border-steel-300 bg-paper-raised px-1 py-0.5"
+                        >
+                          {QUOTE_LINE_KIND_LIST.map((k) => (
+                            <option key={k}>{k}</option>
+                          ))}
                         </select>
                       </td>
-                      <td className={tdClass}><input aria-label={`Line ${i + 1} description`} value={l.description} onChange={(e) => set(i, { description: e.target.value })} className="w-full rounded border border-steel-300 px-1 py-0.5" /></td>
-                      <td className={tdClass}><input aria-label={`Line ${i + 1} quantity`} inputMode="decimal" value={l.quantity} onChange={(e) => set(i, { quantity: e.target.value })} className="spec w-20 rounded border border-steel-300 px-1 py-0.5 text-right" /></td>
-                      <td className={tdClass}><input aria-label={`Line ${i + 1} unit price in dollars`} inputMode="decimal" value={l.price} onChange={(e) => set(i, { price: e.target.value })} className="spec w-24 rounded border border-steel-300 px-1 py-0.5 text-right" /></td>
+                      <td className={tdClass}>
+                        <input
+                          aria-label={`Line ${i + 1} description`}
+                          value={l.description}
+                          onChange={(e) => set(i, { description: e.target.value })}
+                          className="w-full rounded border border-steel-300 px-1 py-0.5"
+                        />
+                      </td>
+                      <td className={tdClass}>
+                        <input
+                          aria-label={`Line ${i + 1} quantity`}
+                          inputMode="decimal"
+                          value={l.quantity}
+                          onChange={(e) => set(i, { quantity: e.target.value })}
+                          className="spec w-20 rounded border border-steel-300 px-1 py-0.5 text-right"
+                        />
+                      </td>
+                      <td className={tdClass}>
+                        <input
+                          aria-label={`Line ${i + 1} unit price in dollars`}
+                          inputMode="decimal"
+                          value={l.price}
+                          onChange={(e) => set(i, { price: e.target.value })}
+                          className="spec w-24 rounded border border-steel-300 px-1 py-0.5 text-right"
+                        />
+                      </td>
                       <td className={`${tdClass} spec text-right`}>{total === null ? 'check' : formatMoney(total)}</td>
                       <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
                       {quote.costCents !== undefined ? <td className={tdClass} /> : null}
-                      <td className={tdClass}><button type="button" className="text-fault-700 underline" onClick={() => setEditing((rows) => rows!.filter((_, j) => j !== i))}>Remove</button></td>
+                      <td className={tdClass}>
+                        <button
+                          type="button"
+                          className="text-fault-700 underline"
+                          onClick={() => setEditing((rows) => rows!.filter((_, j) => j !== i))}
+                        >
+                          Remove
+                        </button>
+                      </td>
                     </tr>
                   );
                 })
@@ -148,14 +286,21 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                   <tr key={l.id}>
                     <td className={tdClass}>{l.kind}</td>
                     <td className={tdClass}>{l.description}</td>
-                    <td className={`${tdClass} spec text-right`}>{l.quantity}{l.kind === 'labor' ? ' h' : ''}</td>
+                    <td className={`${tdClass} spec text-right`}>
+                      {l.quantity}
+                      {l.kind === 'labor' ? ' h' : ''}
+                    </td>
                     <td className={`${tdClass} spec text-right`}>{formatMoney(l.unitPriceCents)}</td>
                     <td className={`${tdClass} spec text-right`}>
                       {formatMoney(l.totalCents)}
-                      {l.discountCents ? <span className="block text-xs text-ink-muted">after {formatMoney(l.discountCents)} off</span> : null}
+                      {l.discountCents ? (
+                        <span className="block text-xs text-ink-muted">after {formatMoney(l.discountCents)} off</span>
+                      ) : null}
                     </td>
                     <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
-                    {quote.costCents !== undefined ? <td className={`${tdClass} spec text-right`}>{formatMoney(l.unitCostCents ?? null)}</td> : null}
+                    {quote.costCents !== undefined ? (
+                      <td className={`${tdClass} spec text-right`}>{formatMoney(l.unitCostCents ?? null)}</td>
+                    ) : null}
                   </tr>
                 ))}
           </tbody>
@@ -172,46 +317,94 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           theirsLabel="Load their lines"
           mineLabel="Keep my lines (then save again)"
         >
-          Theirs: {lineSave.conflict.lines.length} line(s), total {formatMoney(lineSave.conflict.totalCents)}, <QuoteStatusTag status={lineSave.conflict.status} />. The table above shows yours until you choose.
+          Theirs: {lineSave.conflict.lines.length} line(s), total {formatMoney(lineSave.conflict.totalCents)},{' '}
+          <QuoteStatusTag status={lineSave.conflict.status} />. The table above shows yours until you choose.
         </ConflictBanner>
       ) : null}
       {editing ? (
         <div className="flex flex-wrap gap-2">
-          <Button type="button" variant="quiet" onClick={() => setEditing((rows) => [...rows!, { kind: 'other', description: '', quantity: '1', price: '0.00', discountCents: 0, camId: null, partId: null, laborOperationId: null }])}>Add a line</Button>
-          <Button type="button" variant="primary" disabled={busy || Boolean(lineSave.conflict)} onClick={saveLines}>Save lines</Button>
-          <Button type="button" variant="quiet" onClick={() => setEditing(null)}>Cancel</Button>
+          <Button
+            type="button"
+            variant="quiet"
+            onClick={() =>
+              setEditing((rows) => [
+                ...rows!,
+                {
+                  kind: 'other',
+                  description: '',
+                  quantity: '1',
+                  price: '0.00',
+                  discountCents: 0,
+                  camId: null,
+                  partId: null,
+                  laborOperationId: null,
+                },
+              ])
+            }
+          >
+            Add a line
+          </Button>
+          <Button type="button" variant="primary" disabled={busy || Boolean(lineSave.conflict)} onClick={saveLines}>
+            Save lines
+          </Button>
+          <Button type="button" variant="quiet" onClick={() => setEditing(null)}>
+            Cancel
+          </Button>
         </div>
       ) : null}
 
       <div className="grid gap-4 md:grid-cols-2">
         <section aria-labelledby="totals" className="rounded border border-steel-300 bg-paper-raised p-3">
-          <h2 id="totals" className="text-sm font-semibold">Totals</h2>
+          <h2 id="totals" className="text-sm font-semibold">
+            Totals
+          </h2>
           <dl className="spec mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-sm">
-            <dt className="font-sans">Subtotal</dt><dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
-            <dt className="font-sans">Tax ({percentFromBp(quote.taxRateBp)} on goods)</dt><dd className="text-right">{formatMoney(quote.taxCents)}</dd>
-            <dt className="font-sans font-semibold">Total</dt><dd className="text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
-            <dt className="font-sans">Deposit</dt><dd className="text-right">{formatMoney(quote.depositCents)}</dd>
+            <dt className="font-sans">Subtotal</dt>
+            <dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
+            <dt className="font-sans">Tax ({percentFromBp(quote.taxRateBp)} on goods)</dt>
+            <dd className="text-right">{formatMoney(quote.taxCents)}</dd>
+            <dt className="font-sans font-semibold">Total</dt>
+            <dd className="text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
+            <dt className="font-sans">Deposit</dt>
+            <dd className="text-right">{formatMoney(quote.depositCents)}</dd>
             {quote.costCents !== undefined ? (
               <>
-                <dt className="font-sans">Goods cost</dt><dd className="text-right">{formatMoney(quote.costCents)}</dd>
-                <dt className="font-sans">Goods margin</dt><dd className="text-right">{formatMoney(quote.marginCents)}</dd>
+                <dt className="font-sans">Goods cost</dt>
+                <dd className="text-right">{formatMoney(quote.costCents)}</dd>
+                <dt className="font-sans">Goods margin</dt>
+                <dd className="text-right">{formatMoney(quote.marginCents)}</dd>
               </>
             ) : null}
           </dl>
         </section>
         <section aria-labelledby="payment" className="rounded border border-steel-300 bg-paper-raised p-3">
-          <h2 id="payment" className="text-sm font-semibold">Payments</h2>
+          <h2 id="payment" className="text-sm font-semibold">
+            Payments
+          </h2>
           <p className="mt-1 text-sm">
-            Paid {formatMoney(quote.paidCents)} · refunded {formatMoney(quote.refundedCents)} · sent {quote.sentAt ? quote.sentAt.slice(0, 16).replace('T', ' ') : 'not yet'}
+            Paid {formatMoney(quote.paidCents)} · refunded {formatMoney(quote.refundedCents)} · sent{' '}
+            {quote.sentAt ? quote.sentAt.slice(0, 16).replace('T', ' ') : 'not yet'}
           </p>
           <PaymentList payments={quote.payments} receiptHref={(id) => `${url}/payments/${id}/receipt`} />
-          {quote.status === 'closed' && quote.balanceDueCents === 0 ? <p className="mt-2 text-sm"><a className="underline" href={`${url}/invoice`}>Final invoice (PDF)</a></p> : null}
-          {roleCan(role, 'quotes.refund') && paid ? <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} /> : null}
+          {quote.status === 'closed' && quote.balanceDueCents === 0 ? (
+            <p className="mt-2 text-sm">
+              <a className="underline" href={`${url}/invoice`}>
+                Final invoice (PDF)
+              </a>
+            </p>
+          ) : null}
+          {roleCan(role, 'quotes.refund') && paid ? (
+            <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} />
+          ) : null}
         </section>
       </div>
       {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} compact /> : null}
       <p className="text-xs text-ink-muted">
-        Made from the <Link className="underline" href="/advisor">cam shortlist</Link>. Tax applies to the cam, parts and other goods; labour and the tune are not taxed.
+        Made from the{' '}
+        <Link className="underline" href="/advisor">
+          cam shortlist
+        </Link>
+        . Tax applies to the cam, parts and other goods; labour and the tune are not taxed.
       </p>
     </div>
   );

@@ -9,7 +9,17 @@ import type { QuoteRun } from './quote-run';
 // A refund is money leaving the shop: the manager types an amount, then confirms it on a second step
 // that says what happens to the job. A full refund asks whether the job is cancelled or the quote
 // reopened for a new payment; nothing is sent until "Confirm refund".
-export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; url: string; run: QuoteRun; busy: boolean }) {
+export function RefundForm({
+  leftCents,
+  url,
+  run,
+  busy,
+}: {
+  leftCents: number;
+  url: string;
+  run: QuoteRun;
+  busy: boolean;
+}) {
   const [amount, setAmount] = useState('');
   const [reason, setReason] = useState('');
   const [review, setReview] = useState<number | null>(null);
@@ -19,19 +29,36 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
 
   if (review !== null) {
     return (
-      <div role="alertdialog" aria-labelledby="refund-confirm" className="mt-3 rounded border-2 border-fault-700 bg-fault-100 p-3 text-sm">
+      <div
+        role="alertdialog"
+        aria-labelledby="refund-confirm"
+        className="mt-3 rounded border-2 border-fault-700 bg-fault-100 p-3 text-sm"
+      >
         <p id="refund-confirm" className="font-semibold">
-          Refund {formatMoney(review)} to the customer’s card{full ? ' — the whole deposit that is left' : ''}? This cannot be undone.
+          Refund {formatMoney(review)} to the customer’s card{full ? ' — the whole deposit that is left' : ''}? This
+          cannot be undone.
         </p>
         {full ? (
           <fieldset className="mt-2">
             <legend className="font-semibold">Then the job…</legend>
             <label className="mt-1 flex items-center gap-2">
-              <input type="radio" name="after" value="cancel" checked={after === 'cancel'} onChange={() => setAfter('cancel')} />
+              <input
+                type="radio"
+                name="after"
+                value="cancel"
+                checked={after === 'cancel'}
+                onChange={() => setAfter('cancel')}
+              />
               Cancel the job (the quote is closed and leaves the jobs list)
             </label>
             <label className="mt-1 flex items-center gap-2">
-              <input type="radio" name="after" value="reopen" checked={after === 'reopen'} onChange={() => setAfter('reopen')} />
+              <input
+                type="radio"
+                name="after"
+                value="reopen"
+                checked={after === 'reopen'}
+                onChange={() => setAfter('reopen')}
+              />
               Reopen the quote (the customer may pay the deposit again)
             </label>
           </fieldset>
@@ -41,10 +68,17 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
         <p className="mt-1">The customer is e-mailed when the whole deposit has been refunded.</p>
         <div className="mt-3 flex flex-wrap gap-2">
           <Button
-            type="button" variant="danger"
+            type="button"
+            variant="danger"
             disabled={busy}
             onClick={() =>
-              void run('Not refunded', 'POST', `${url}/refund`, { amountCents: review, ...(reason ? { reason } : {}), ...(full ? { afterFullRefund: after } : {}) }, `Refund of ${formatMoney(review)} sent to the payment service.`).then((ok) => {
+              void run(
+                'Not refunded',
+                'POST',
+                `${url}/refund`,
+                { amountCents: review, ...(reason ? { reason } : {}), ...(full ? { afterFullRefund: after } : {}) },
+                `Refund of ${formatMoney(review)} sent to the payment service.`,
+              ).then((ok) => {
                 if (ok) {
                   setAmount('');
                   setReason('');
@@ -75,16 +109,30 @@ export function RefundForm({ leftCents, url, run, busy }: { leftCents: number; u
     >
       <label className="text-sm">
         Refund amount ($, at most {formatMoney(leftCents)})
-        <input value={amount} onChange={(e) => setAmount(e.target.value)} inputMode="decimal" className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5" />
+        <input
+          value={amount}
+          onChange={(e) => setAmount(e.target.value)}
+          inputMode="decimal"
+          className="spec mt-1 block w-32 rounded border border-steel-300 px-1 py-0.5"
+        />
       </label>
       <label className="text-sm">
         Reason (optional)
-        <input value={reason} onChange={(e) => setReason(e.target.value)} maxLength={255} className="mt-1 block w-48 rounded border border-steel-300 px-1 py-0.5" />
+        <input
+          value={reason}
+          onChange={(e) => setReason(e.target.value)}
+          maxLength={255}
+          className="mt-1 block w-48 rounded border border-steel-300 px-1 py-0.5"
+        />
       </label>
       <Button type="submit" variant="danger" disabled={busy}>
         Review refund…
       </Button>
-      {problem ? <p className="w-full text-sm text-fault-700" role="alert">{problem}</p> : null}
+      {problem ? (
+        <p className="w-full text-sm text-fault-700" role="alert">
+          {problem}
+        </p>
+      ) : null}
     </form>
   );
 }

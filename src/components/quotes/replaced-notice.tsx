@@ -10,7 +10,9 @@ export function ReplacedNotice({ replacedBy, shop, customerEmail }: Props) {
   const sent = replacedBy && replacedBy.status !== 'draft' && replacedBy.sentAt;
   return (
     <div role="status" className="mt-6 rounded-lg border-2 border-gauge-500 bg-gauge-100 p-4">
-      <p className="text-xl font-semibold">This quote was replaced by a newer quote{replacedBy ? ` (${replacedBy.number})` : ''}.</p>
+      <p className="text-xl font-semibold">
+        This quote was replaced by a newer quote{replacedBy ? ` (${replacedBy.number})` : ''}.
+      </p>
       <p className="mt-1 text-base">
         {sent
           ? `We e-mailed the newer quote${customerEmail ? ` to ${customerEmail}` : ''}; open it from the link in that e-mail. This one can no longer be paid.`

@@ -3,13 +3,31 @@ import { stateWord } from '@/lib/quotes/lifecycle';
 
 // Quote and payment states, always as a word (the colour only repeats it).
 const QUOTE_TONE: Record<string, 'ok' | 'caution' | 'fault' | 'muted'> = {
-  draft: 'muted', sent: 'caution', accepted: 'caution', 'deposit-paid': 'ok', closed: 'ok', declined: 'fault', expired: 'fault', cancelled: 'fault', replaced: 'muted',
+  draft: 'muted',
+  sent: 'caution',
+  accepted: 'caution',
+  'deposit-paid': 'ok',
+  closed: 'ok',
+  declined: 'fault',
+  expired: 'fault',
+  cancelled: 'fault',
+  replaced: 'muted',
 };
 const PAYMENT_TONE: Record<string, 'ok' | 'caution' | 'fault' | 'muted'> = {
-  pending: 'caution', paid: 'ok', failed: 'fault', expired: 'muted', refunded: 'muted', 'partially-refunded': 'caution',
+  pending: 'caution',
+  paid: 'ok',
+  failed: 'fault',
+  expired: 'muted',
+  refunded: 'muted',
+  'partially-refunded': 'caution',
 };
 const PAYMENT_WORD: Record<string, string> = {
-  pending: 'Checkout started', paid: 'Paid', failed: 'Failed', expired: 'Checkout expired', refunded: 'Refunded', 'partially-refunded': 'Partly refunded',
+  pending: 'Checkout started',
+  paid: 'Paid',
+  failed: 'Failed',
+  expired: 'Checkout expired',
+  refunded: 'Refunded',
+  'partially-refunded': 'Partly refunded',
 };
 
 /** The word for a quote state, as every screen says it. */

@@ -1,6 +1,14 @@
 'use client';
 
-import { BarElement, CategoryScale, Chart as ChartJS, LinearScale, Tooltip, type ChartOptions, type Plugin } from 'chart.js';
+import {
+  BarElement,
+  CategoryScale,
+  Chart as ChartJS,
+  LinearScale,
+  Tooltip,
+  type ChartOptions,
+  type Plugin,
+} from 'chart.js';
 import { Bar } from 'react-chartjs-2';
 import { quoteStatusWord } from '@/components/quotes/status';
 import { palette } from '@/lib/palette';
@@ -12,8 +20,13 @@ export type StatusBar = { status: string; count: number };
 // Horizontal bars take the state's tone (the same tones as the status tags), but the state's word is
 // written beside every bar and the count at its end, so colour never carries the meaning alone.
 const TONE: Record<string, string> = {
-  draft: palette.steel[500], sent: palette.gauge[500], accepted: palette.gauge[700], 'deposit-paid': palette.ok[700],
-  declined: palette.fault[700], expired: palette.ember[700], cancelled: palette.steel[700],
+  draft: palette.steel[500],
+  sent: palette.gauge[500],
+  accepted: palette.gauge[700],
+  'deposit-paid': palette.ok[700],
+  declined: palette.fault[700],
+  expired: palette.ember[700],
+  cancelled: palette.steel[700],
 };
 
 const countsOnBars: Plugin<'bar'> = {
@@ -39,14 +52,16 @@ export function StatusChart({ bars }: { bars: StatusBar[] }) {
   const max = Math.max(1, ...bars.map((b) => b.count));
   const data = {
     labels: bars.map((b) => quoteStatusWord(b.status)),
-    datasets: [{
-      label: 'Quotes created in the range, by state now',
-      data: bars.map((b) => b.count),
-      backgroundColor: bars.map((b) => TONE[b.status] ?? palette.steel[500]),
-      borderColor: palette.ink.soft,
-      borderWidth: 1,
-      maxBarThickness: 22,
-    }],
+    datasets: [
+      {
+        label: 'Quotes created in the range, by state now',
+        data: bars.map((b) => b.count),
+        backgroundColor: bars.map((b) => TONE[b.status] ?? palette.steel[500]),
+        borderColor: palette.ink.soft,
+        borderWidth: 1,
+        maxBarThickness: 22,
+      },
+    ],
   };
   const options: ChartOptions<'bar'> = {
     animation: false,
@@ -73,7 +88,9 @@ export function StatusChart({ bars }: { bars: StatusBar[] }) {
         {/* The box above names the chart; the canvas itself (role="img" from react-chartjs-2) is left out. */}
         <Bar data={data} options={options} plugins={[countsOnBars]} aria-hidden />
       </div>
-      <figcaption className="text-xs text-ink-muted">Quotes created in the range, by the state they are in now.</figcaption>
+      <figcaption className="text-xs text-ink-muted">
+        Quotes created in the range, by the state they are in now.
+      </figcaption>
     </figure>
   );
 }

@@ -28,11 +28,24 @@ export function calibrationReport(fitted: FittedConstants, peaks: readonly PeakF
   return {
     peaks: peaks.map((f) => {
       const predicted = curvePeaks(rpms, curve(f.cam))[f.quantity];
-      return { cam: f.cam.id, quantity: f.quantity, set: f.set, measured: f.value, predicted: Math.round(predicted * 10) / 10, errorPct: Math.round((predicted / f.value - 1) * 1000) / 10 };
+      return {
+        cam: f.cam.id,
+        quantity: f.quantity,
+        set: f.set,
+        measured: f.value,
+        predicted: Math.round(predicted * 10) / 10,
+        errorPct: Math.round((predicted / f.value - 1) * 1000) / 10,
+      };
     }),
     crossings: crossings.map((c) => {
       const predicted = crossoverRpm(rpms, curve(c.candidate), curve(c.against));
-      return { what: c.what, set: 'held-out' as const, measuredRpm: c.rpm, predictedRpm: predicted, errorRpm: predicted === null ? null : predicted - c.rpm };
+      return {
+        what: c.what,
+        set: 'held-out' as const,
+        measuredRpm: c.rpm,
+        predictedRpm: predicted,
+        errorRpm: predicted === null ? null : predicted - c.rpm,
+      };
     }),
   };
 }

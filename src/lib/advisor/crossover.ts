@@ -18,7 +18,12 @@ function lastIndex(rpms: ArrayLike<number>, limitRpm: number): number {
 // Definition used by the shop: the crossover is the first rpm from which the candidate out-pulls the
 // baseline and keeps doing so to the engine's rev limit (default: the top of the curve). Between grid
 // points the torque difference is interpolated linearly. Null when the candidate is behind at the limit.
-export function crossoverRpm(rpms: ArrayLike<number>, candidate: ArrayLike<number>, baseline: ArrayLike<number>, limitRpm = Infinity): number | null {
+export function crossoverRpm(
+  rpms: ArrayLike<number>,
+  candidate: ArrayLike<number>,
+  baseline: ArrayLike<number>,
+  limitRpm = Infinity,
+): number | null {
   const n = lastIndex(rpms, limitRpm);
   let first = -1;
   for (let i = n; i >= 0; i--) {
@@ -27,7 +32,9 @@ export function crossoverRpm(rpms: ArrayLike<number>, candidate: ArrayLike<numbe
   }
   if (first < 0) return null;
   if (first === 0) return rpms[0];
-  return round(signChangeRpm(rpms, candidate[first - 1] - baseline[first - 1], candidate[first] - baseline[first], first));
+  return round(
+    signChangeRpm(rpms, candidate[first - 1] - baseline[first - 1], candidate[first] - baseline[first], first),
+  );
 }
 
 export type LeadStretch = { fromRpm: number; toRpm: number };
@@ -37,7 +44,12 @@ export type LeadStretch = { fromRpm: number; toRpm: number };
  * it never does. A cam that leads from 2,300 to 6,500 rpm but falls behind past the valvetrain's limit
  * still leads where the engine is really used.
  */
-export function leadStretch(rpms: ArrayLike<number>, candidate: ArrayLike<number>, baseline: ArrayLike<number>, limitRpm = Infinity): LeadStretch | null {
+export function leadStretch(
+  rpms: ArrayLike<number>,
+  candidate: ArrayLike<number>,
+  baseline: ArrayLike<number>,
+  limitRpm = Infinity,
+): LeadStretch | null {
   const n = lastIndex(rpms, limitRpm);
   let best: LeadStretch | null = null;
   let start = -1;
@@ -45,8 +57,12 @@ export function leadStretch(rpms: ArrayLike<number>, candidate: ArrayLike<number
     const ahead = i <= n && candidate[i] > baseline[i];
     if (ahead && start < 0) start = i;
     if (!ahead && start >= 0) {
-      const from = start === 0 ? rpms[0] : signChangeRpm(rpms, candidate[start - 1] - baseline[start - 1], candidate[start] - baseline[start], start);
-      const to = i > n ? rpms[n] : signChangeRpm(rpms, candidate[i - 1] - baseline[i - 1], candidate[i] - baseline[i], i);
+      const from =
+        start === 0
+          ? rpms[0]
+          : signChangeRpm(rpms, candidate[start - 1] - baseline[start - 1], candidate[start] - baseline[start], start);
+      const to =
+        i > n ? rpms[n] : signChangeRpm(rpms, candidate[i - 1] - baseline[i - 1], candidate[i] - baseline[i], i);
       if (!best || to - from > best.toRpm - best.fromRpm) best = { fromRpm: round(from), toRpm: round(to) };
       start = -1;
     }
@@ -55,7 +71,12 @@ export function leadStretch(rpms: ArrayLike<number>, candidate: ArrayLike<number
 }
 
 /** True when the candidate is ahead of the baseline at this rpm on the grid (nearest point). */
-export function aheadAt(rpms: ArrayLike<number>, candidate: ArrayLike<number>, baseline: ArrayLike<number>, rpm: number): boolean {
+export function aheadAt(
+  rpms: ArrayLike<number>,
+  candidate: ArrayLike<number>,
+  baseline: ArrayLike<number>,
+  rpm: number,
+): boolean {
   let best = 0;
   for (let i = 1; i < rpms.length; i++) if (Math.abs(rpms[i] - rpm) < Math.abs(rpms[best] - rpm)) best = i;
   return candidate[best] > baseline[best];

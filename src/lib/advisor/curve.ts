@@ -2,7 +2,13 @@ import { horsepower } from './horsepower';
 import { roundTo } from './format';
 
 /** One rpm of a predicted curve; the band (when given) is where a measured curve may honestly fall. */
-export type CurvePoint = { rpm: number; torqueLbFt: number; hp: number; torqueLowLbFt?: number; torqueHighLbFt?: number };
+export type CurvePoint = {
+  rpm: number;
+  torqueLbFt: number;
+  hp: number;
+  torqueLowLbFt?: number;
+  torqueHighLbFt?: number;
+};
 
 export type PredictedSummary = {
   peakHp: number;
@@ -66,7 +72,13 @@ export function lowEndLossPct(rpms: Float64Array, torque: Float64Array, baseline
 }
 
 /** The output summary, rounded to 0.1 for display. */
-export function summarize(rpms: Float64Array, torque: Float64Array, baseline: Float64Array, baselinePeakHp: number, limitRpm = Infinity): PredictedSummary {
+export function summarize(
+  rpms: Float64Array,
+  torque: Float64Array,
+  baseline: Float64Array,
+  baselinePeakHp: number,
+  limitRpm = Infinity,
+): PredictedSummary {
   const p = curvePeaks(rpms, torque, limitRpm);
   return {
     peakHp: roundTo(p.peakHp, 1),

@@ -19,21 +19,28 @@ export function historySimilarity(entry: HistoryEntry, build: BuildProfile, disp
   const dz = ((entry.displacementCi - displacementCi) / displacementCi) * (100 / h.displacementWidthPct);
   let s = Math.exp(-dz * dz);
   if (entry.intakeFlowCfm !== undefined) {
-    const fz = ((entry.intakeFlowCfm - build.engine.intakeFlowCfm) / build.engine.intakeFlowCfm) * (100 / h.flowWidthPct);
+    const fz =
+      ((entry.intakeFlowCfm - build.engine.intakeFlowCfm) / build.engine.intakeFlowCfm) * (100 / h.flowWidthPct);
     s *= Math.exp(-fz * fz);
   }
   if (entry.headers !== undefined && entry.headers !== build.exhaust.headers) s *= h.mismatch.headers;
   if (entry.system !== undefined && entry.system !== build.exhaust.system) s *= h.mismatch.system;
-  if (entry.intakeManifold !== undefined && entry.intakeManifold !== build.engine.intakeManifold) s *= h.mismatch.intakeManifold;
+  if (entry.intakeManifold !== undefined && entry.intakeManifold !== build.engine.intakeManifold)
+    s *= h.mismatch.intakeManifold;
   return s;
 }
 
 function usable(e: HistoryEntry): boolean {
   const g = HISTORY_SETTINGS.gainLimitsPct;
-  return Number.isFinite(e.measuredGainPctPeakHp) && e.measuredGainPctPeakHp >= g.min && e.measuredGainPctPeakHp <= g.max
-    && Number.isFinite(e.displacementCi) && e.displacementCi > 0
-    && (e.weight === undefined || (Number.isFinite(e.weight) && e.weight > 0))
-    && (e.intakeFlowCfm === undefined || (Number.isFinite(e.intakeFlowCfm) && e.intakeFlowCfm > 0));
+  return (
+    Number.isFinite(e.measuredGainPctPeakHp) &&
+    e.measuredGainPctPeakHp >= g.min &&
+    e.measuredGainPctPeakHp <= g.max &&
+    Number.isFinite(e.displacementCi) &&
+    e.displacementCi > 0 &&
+    (e.weight === undefined || (Number.isFinite(e.weight) && e.weight > 0)) &&
+    (e.intakeFlowCfm === undefined || (Number.isFinite(e.intakeFlowCfm) && e.intakeFlowCfm > 0))
+  );
 }
 
 /** A peak-power record speaks for the top end only: full weight from 80 % of the peak-power rpm, none below 60 % (our choice). */
@@ -41,7 +48,10 @@ export const PEAK_ONLY_TAPER = { fromShare: 0.6, fullShare: 0.8 } as const;
 
 function peakOnlyTaper(rpm: number, peakHpRpm: number): number {
   const share = rpm / peakHpRpm;
-  return Math.min(1, Math.max(0, (share - PEAK_ONLY_TAPER.fromShare) / (PEAK_ONLY_TAPER.fullShare - PEAK_ONLY_TAPER.fromShare)));
+  return Math.min(
+    1,
+    Math.max(0, (share - PEAK_ONLY_TAPER.fromShare) / (PEAK_ONLY_TAPER.fullShare - PEAK_ONLY_TAPER.fromShare)),
+  );
 }
 
 function gainAt(points: readonly { rpm: number; gainPct: number }[], rpm: number): number | null {
@@ -63,8 +73,15 @@ export type HistoryBlend = { torque: Float64Array; evidence: Float64Array; adjus
  * the top end (its peak gain, as an offset on the model's). With few records it stays near the model.
  */
 export function blendHistory(
-  camId: string | number, rpms: Float64Array, torque: Float64Array, baseline: Float64Array, peakHpRpm: number, modelPeakGainPct: number,
-  history: readonly HistoryEntry[], build: BuildProfile, displacementCi: number,
+  camId: string | number,
+  rpms: Float64Array,
+  torque: Float64Array,
+  baseline: Float64Array,
+  peakHpRpm: number,
+  modelPeakGainPct: number,
+  history: readonly HistoryEntry[],
+  build: BuildProfile,
+  displacementCi: number,
 ): HistoryBlend | null {
   const h = HISTORY_SETTINGS;
   const used: { w: number; e: HistoryEntry }[] = [];
@@ -81,7 +98,8 @@ export function blendHistory(
     let wsum = 0;
     let gsum = 0;
     for (const { w, e } of used) {
-      const byRpm = e.measuredGainPctByRpm && e.measuredGainPctByRpm.length >= 2 ? gainAt(e.measuredGainPctByRpm, rpms[i]) : null;
+      const byRpm =
+        e.measuredGainPctByRpm && e.measuredGainPctByRpm.length >= 2 ? gainAt(e.measuredGainPctByRpm, rpms[i]) : null;
       if (byRpm !== null) {
         wsum += w;
         gsum += w * byRpm;
@@ -100,6 +118,12 @@ export function blendHistory(
   return {
     torque: out,
     evidence,
-    adjustment: { matches: used.length, evidenceWeight: wTotal, modelGainPctPeakHp: modelPeakGainPct, measuredGainPctPeakHp: measured, adjustedGainPctPeakHp: NaN },
+    adjustment: {
+      matches: used.length,
+      evidenceWeight: wTotal,
+      modelGainPctPeakHp: modelPeakGainPct,
+      measuredGainPctPeakHp: measured,
+      adjustedGainPctPeakHp: NaN,
+    },
   };
 }

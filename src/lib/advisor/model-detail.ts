@@ -54,13 +54,21 @@ export function modelDetail(build: BuildProfile, cam: CamCard): ModelDetail {
   }));
   const lift = Array.from({ length: 720 / LIFT_STEP_DEG }, (_, i) => {
     const deg = i * LIFT_STEP_DEG;
-    return { crankDeg: deg, intakeIn: roundTo(valveLiftIn(intake, deg), 3), exhaustIn: roundTo(valveLiftIn(exhaust, deg), 3) };
+    return {
+      crankDeg: deg,
+      intakeIn: roundTo(valveLiftIn(intake, deg), 3),
+      exhaustIn: roundTo(valveLiftIn(exhaust, deg), 3),
+    };
   });
   const maxLift = Math.max(intake.valveLiftIn, exhaust.valveLiftIn);
   const head = ctx.spec.head;
   const headFlow = Array.from({ length: Math.ceil(maxLift / FLOW_STEP_IN) }, (_, i) => {
     const liftIn = roundTo(Math.min(maxLift, (i + 1) * FLOW_STEP_IN), 3);
-    return { liftIn, intakeCfm: Math.round(flowAtLiftCfm(head.intakeFlow, liftIn)), exhaustCfm: Math.round(flowAtLiftCfm(head.exhaustFlow, liftIn)) };
+    return {
+      liftIn,
+      intakeCfm: Math.round(flowAtLiftCfm(head.intakeFlow, liftIn)),
+      exhaustCfm: Math.round(flowAtLiftCfm(head.exhaustFlow, liftIn)),
+    };
   });
   return { camId: cam.id, camName: cam.name, simulated, lift, headFlow, fittedConstants: FITTED };
 }

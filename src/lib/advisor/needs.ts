@@ -5,7 +5,15 @@ import type { Need, NeedKind } from './types';
 import { groupThousands, inches } from './format';
 
 /** Every need kind, in the order a job sheet lists them (the rules page and the forms read this list). */
-export const NEED_KIND_LIST = ['install', 'springs', 'pushrods', 'lifters', 'deactivation-delete', 'converter', 'tune'] as const satisfies readonly NeedKind[];
+export const NEED_KIND_LIST = [
+  'install',
+  'springs',
+  'pushrods',
+  'lifters',
+  'deactivation-delete',
+  'converter',
+  'tune',
+] as const satisfies readonly NeedKind[];
 
 // Common practice, values from memory (no published source): past about 0.580" of lift the heavier
 // springs load the pushrods enough that hardened ones go in; past about 0.600" a stock hydraulic
@@ -16,7 +24,9 @@ export const NEED_LIFT_THRESHOLDS = { pushrodsFromIn: 0.58, liftersFromIn: 0.6 }
 // The advisor alone decides whether a kind is needed; the rules only say what it costs in this shop.
 export function camNeeds(fit: FitDetail, converter: ConverterDetail, build?: BuildProfile, cam?: CamCard): Need[] {
   // Every cam swap is fitted: the rules price the labour by vehicle class.
-  const needs: Need[] = [{ kind: 'install', reason: 'Fitting the cam: the front of the engine comes apart and the lifters are inspected.' }];
+  const needs: Need[] = [
+    { kind: 'install', reason: 'Fitting the cam: the front of the engine comes apart and the lifters are inspected.' },
+  ];
   if (fit.springsNeeded) {
     needs.push({
       kind: 'springs',
@@ -24,7 +34,8 @@ export function camNeeds(fit: FitDetail, converter: ConverterDetail, build?: Bui
       minLiftIn: fit.maxLiftIn,
     });
   }
-  const rockerChange = build !== undefined && cam !== undefined && Math.abs(cam.rockerRatio - build.baselineCam.rockerRatio) > 1e-9;
+  const rockerChange =
+    build !== undefined && cam !== undefined && Math.abs(cam.rockerRatio - build.baselineCam.rockerRatio) > 1e-9;
   if (fit.maxLiftIn >= NEED_LIFT_THRESHOLDS.pushrodsFromIn || rockerChange) {
     needs.push({
       kind: 'pushrods',
@@ -35,10 +46,16 @@ export function camNeeds(fit: FitDetail, converter: ConverterDetail, build?: Bui
   }
   const stockValvetrain = (build?.engine.valvetrain ?? 'stock-hydraulic') === 'stock-hydraulic';
   if (fit.maxLiftIn >= NEED_LIFT_THRESHOLDS.liftersFromIn && stockValvetrain && !fit.deleteNeeded) {
-    needs.push({ kind: 'lifters', reason: `Lift ${inches(fit.maxLiftIn)} is at or past ${inches(NEED_LIFT_THRESHOLDS.liftersFromIn)} on a stock hydraulic valvetrain: lifters made for it.` });
+    needs.push({
+      kind: 'lifters',
+      reason: `Lift ${inches(fit.maxLiftIn)} is at or past ${inches(NEED_LIFT_THRESHOLDS.liftersFromIn)} on a stock hydraulic valvetrain: lifters made for it.`,
+    });
   }
   if (fit.deleteNeeded) {
-    needs.push({ kind: 'deactivation-delete', reason: 'The engine has active cylinder deactivation and this cam is not listed as compatible.' });
+    needs.push({
+      kind: 'deactivation-delete',
+      reason: 'The engine has active cylinder deactivation and this cam is not listed as compatible.',
+    });
   }
   if (converter.suggestedStallRpm !== null && converter.crossoverRpm !== null) {
     needs.push({

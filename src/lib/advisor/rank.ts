@@ -13,10 +13,23 @@ import { idleVacuumInHg } from './idle';
 import { camNeeds } from './needs';
 import { engineContext, torqueCurve, type EngineContext } from './prediction';
 import {
-  compressionReason, converterReason, costReason, emissionsReason, fitReason, idleReason, powerbandReason,
+  compressionReason,
+  converterReason,
+  costReason,
+  emissionsReason,
+  fitReason,
+  idleReason,
+  powerbandReason,
 } from './reasons';
 import {
-  powerbandWeights, scoreCompression, scoreConverter, scoreCost, scoreEmissions, scoreFit, scoreIdle, scorePowerband,
+  powerbandWeights,
+  scoreCompression,
+  scoreConverter,
+  scoreCost,
+  scoreEmissions,
+  scoreFit,
+  scoreIdle,
+  scorePowerband,
   totalScore,
 } from './scoring';
 import { revLimitRpm } from './rpm-grid';
@@ -25,7 +38,8 @@ import type { BaselineResult, CamRanking, CamSpecs, EngineFacts, RankingResult, 
 import { overlap050Deg, seatOverlapDeg, valveEvents } from './valve-events';
 import { SCORING_WEIGHTS } from './weights';
 
-export const PREDICTION_NOTICE = 'Predictions are indicative: an engine-cycle model with a few physical constants fitted to engine-dyno results, shown with its band; not a measurement of this engine.';
+export const PREDICTION_NOTICE =
+  'Predictions are indicative: an engine-cycle model with a few physical constants fitted to engine-dyno results, shown with its band; not a measurement of this engine.';
 
 /** Work shared by every cam of one ranking. */
 type BuildWork = {
@@ -40,14 +54,25 @@ type BuildWork = {
   torqueOf: (cam: CamCard) => Float64Array;
 };
 
-function prepare(build: BuildProfile, ctx = engineContext(build), torqueOf = (cam: CamCard) => torqueCurve(ctx, cam)): BuildWork {
+function prepare(
+  build: BuildProfile,
+  ctx = engineContext(build),
+  torqueOf = (cam: CamCard) => torqueCurve(ctx, cam),
+): BuildWork {
   const baseTorque = torqueOf(build.baselineCam);
   const cruiseRpm = buildCruiseRpm(build);
   const pullAway = pullAwayRpm(build);
   const baseLimitRpm = revLimitRpm(build, ctx.rpms[ctx.rpms.length - 1], false);
   return {
-    build, ctx, baseTorque, basePeakHp: curvePeaks(ctx.rpms, baseTorque, baseLimitRpm).peakHp, baseLimitRpm, cruiseRpm, pullAway,
-    weights: powerbandWeights(build, ctx.rpms, pullAway.rpm, cruiseRpm), torqueOf,
+    build,
+    ctx,
+    baseTorque,
+    basePeakHp: curvePeaks(ctx.rpms, baseTorque, baseLimitRpm).peakHp,
+    baseLimitRpm,
+    cruiseRpm,
+    pullAway,
+    weights: powerbandWeights(build, ctx.rpms, pullAway.rpm, cruiseRpm),
+    torqueOf,
   };
 }
 
@@ -85,7 +110,17 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
   let evidence: Float64Array | null = null;
   if (options.history && options.history.length > 0) {
     const peaks = curvePeaks(rpms, torque, limitRpm);
-    const blend = blendHistory(cam.id, rpms, torque, baseTorque, peaks.peakHpRpm, percentChange(peaks.peakHp, w.basePeakHp), options.history, build, ctx.displacementCi);
+    const blend = blendHistory(
+      cam.id,
+      rpms,
+      torque,
+      baseTorque,
+      peaks.peakHpRpm,
+      percentChange(peaks.peakHp, w.basePeakHp),
+      options.history,
+      build,
+      ctx.displacementCi,
+    );
     if (blend) {
       torque = blend.torque;
       evidence = blend.evidence;
@@ -105,26 +140,63 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
   const lead = leadStretch(rpms, torque, baseTorque, limitRpm);
   // The crossover's range: the same comparison with the candidate's gain moved by its calibration uncertainty.
   const shift = BAND.gainUncertaintyPct / 100;
-  const early = crossoverRpm(rpms, torque.map((t) => t * (1 + shift)), baseTorque, limitRpm);
-  const late = crossoverRpm(rpms, torque.map((t) => t * (1 - shift)), baseTorque, limitRpm);
-  const crossoverRange = crossover === null ? null : ([early ?? crossover, late ?? rpms[rpms.length - 1]] as [number, number]);
+  const early = crossoverRpm(
+    rpms,
+    torque.map((t) => t * (1 + shift)),
+    baseTorque,
+    limitRpm,
+  );
+  const late = crossoverRpm(
+    rpms,
+    torque.map((t) => t * (1 - shift)),
+    baseTorque,
+    limitRpm,
+  );
+  const crossoverRange =
+    crossover === null ? null : ([early ?? crossover, late ?? rpms[rpms.length - 1]] as [number, number]);
   const events = valveEvents(cam);
   const dcr = dynamicCompression(build, cam);
   const vacuum = idleVacuumInHg(seatOverlapDeg(cam), ctx.cylinderCi);
 
   const powerband = scorePowerband(w.weights, rpms, torque, baseTorque);
-  const converter = scoreConverter(build, w.pullAway.rpm, crossover, aheadAt(rpms, torque, baseTorque, w.pullAway.rpm), crossoverRange, lead);
+  const converter = scoreConverter(
+    build,
+    w.pullAway.rpm,
+    crossover,
+    aheadAt(rpms, torque, baseTorque, w.pullAway.rpm),
+    crossoverRange,
+    lead,
+  );
   const idle = scoreIdle(build, vacuum);
   const compression = scoreCompression(build, dcr);
   const fit = fit0;
   const emissions = scoreEmissions(build, cam);
   const needs = camNeeds(fit, converter, build, cam);
-  const cost = scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents, options.jobPriceCents?.(cam, needs));
+  const cost = scoreCost(
+    build,
+    cam,
+    needs.map((n) => n.kind),
+    options.needPriceCents,
+    options.jobPriceCents?.(cam, needs),
+  );
 
-  const raw = { powerband: powerband.score, converter: converter.score, idle: idle.score, compression: compression.score, fit: fit.score, emissions: emissions.score, cost: cost.score };
+  const raw = {
+    powerband: powerband.score,
+    converter: converter.score,
+    idle: idle.score,
+    compression: compression.score,
+    fit: fit.score,
+    emissions: emissions.score,
+    cost: cost.score,
+  };
   const subscores = {
-    powerband: Math.round(raw.powerband), converter: Math.round(raw.converter), idle: Math.round(raw.idle),
-    compression: Math.round(raw.compression), fit: Math.round(raw.fit), emissions: Math.round(raw.emissions), cost: Math.round(raw.cost),
+    powerband: Math.round(raw.powerband),
+    converter: Math.round(raw.converter),
+    idle: Math.round(raw.idle),
+    compression: Math.round(raw.compression),
+    fit: Math.round(raw.fit),
+    emissions: Math.round(raw.emissions),
+    cost: Math.round(raw.cost),
   };
   const reasons: Reason[] = [
     powerbandReason(powerband, build, w.cruiseRpm, predicted.peakHp, predicted.gainPctPeakHp),
@@ -162,9 +234,25 @@ function analyseCam(w: BuildWork, cam: CamCard, options: RankOptions): CamRankin
 }
 
 function camSpecs(cam: CamCard): CamSpecs {
-  const { intakeDuration050, exhaustDuration050, intakeLiftIn, exhaustLiftIn, lsa, intakeCenterline, rockerRatio, intakeAdvertised, exhaustAdvertised } = cam;
+  const {
+    intakeDuration050,
+    exhaustDuration050,
+    intakeLiftIn,
+    exhaustLiftIn,
+    lsa,
+    intakeCenterline,
+    rockerRatio,
+    intakeAdvertised,
+    exhaustAdvertised,
+  } = cam;
   return {
-    intakeDuration050, exhaustDuration050, intakeLiftIn, exhaustLiftIn, lsa, intakeCenterline, rockerRatio,
+    intakeDuration050,
+    exhaustDuration050,
+    intakeLiftIn,
+    exhaustLiftIn,
+    lsa,
+    intakeCenterline,
+    rockerRatio,
     ...(intakeAdvertised === undefined ? {} : { intakeAdvertised }),
     ...(exhaustAdvertised === undefined ? {} : { exhaustAdvertised }),
   };
@@ -193,18 +281,32 @@ function upperBoundScore(w: BuildWork, cam: CamCard, options: RankOptions): numb
   // which only the curve can call for, is left out: a converter verdict "ahead at pull-away" asks for none.
   const needs = camNeeds(fit, scoreConverter(build, w.pullAway.rpm, null, true), build, cam);
   const raw = {
-    powerband: 100, converter: 100,
+    powerband: 100,
+    converter: 100,
     idle: scoreIdle(build, idleVacuumInHg(seatOverlapDeg(cam), ctx.cylinderCi)).score,
     compression: scoreCompression(build, dynamicCompression(build, cam)).score,
-    fit: fit.score, emissions: emissions.score,
-    cost: scoreCost(build, cam, needs.map((n) => n.kind), options.needPriceCents, options.jobPriceCents?.(cam, needs)).score,
+    fit: fit.score,
+    emissions: emissions.score,
+    cost: scoreCost(
+      build,
+      cam,
+      needs.map((n) => n.kind),
+      options.needPriceCents,
+      options.jobPriceCents?.(cam, needs),
+    ).score,
   };
   return totalScore(raw, emissions.gated);
 }
 
 /** The large-catalogue path (see screening.ts): exact top ten, the cycle model run only where it can matter. */
-function boundedRankings(w: BuildWork, cams: readonly CamCard[], options: RankOptions): { rankings: CamRanking[]; ruledOut: RuledOut[] } {
-  const bounded = cams.map((cam) => ({ cam, bound: upperBoundScore(w, cam, options) })).sort((a, b) => b.bound - a.bound || compareIds(a.cam.id, b.cam.id));
+function boundedRankings(
+  w: BuildWork,
+  cams: readonly CamCard[],
+  options: RankOptions,
+): { rankings: CamRanking[]; ruledOut: RuledOut[] } {
+  const bounded = cams
+    .map((cam) => ({ cam, bound: upperBoundScore(w, cam, options) }))
+    .sort((a, b) => b.bound - a.bound || compareIds(a.cam.id, b.cam.id));
   const modelled: CamRanking[] = [];
   const top: number[] = []; // the best modelled scores, highest first, at most protectedTop long
   let next = 0;
@@ -216,7 +318,9 @@ function boundedRankings(w: BuildWork, cams: readonly CamCard[], options: RankOp
     top.push(r.score);
     top.sort((a, b) => b - a).splice(SCREENING.protectedTop);
   }
-  const ruledOut = bounded.slice(next).map(({ cam, bound }) => ({ camId: cam.id, camName: cam.name, maxScore: roundTo(bound, 1) }));
+  const ruledOut = bounded
+    .slice(next)
+    .map(({ cam, bound }) => ({ camId: cam.id, camName: cam.name, maxScore: roundTo(bound, 1) }));
   return { rankings: sortRankings(modelled), ruledOut };
 }
 
@@ -241,9 +345,10 @@ function compareIds(a: CamCard['id'], b: CamCard['id']): number {
  */
 export function rankCams(build: BuildProfile, cams: readonly CamCard[], options: RankOptions = {}): RankingResult {
   const w = prepare(build);
-  const { rankings: scored, ruledOut } = cams.length <= SCREENING.fullModelUpToCams
-    ? { rankings: sortRankings(cams.map((cam) => analyseCam(w, cam, options))), ruledOut: [] }
-    : boundedRankings(w, cams, options);
+  const { rankings: scored, ruledOut } =
+    cams.length <= SCREENING.fullModelUpToCams
+      ? { rankings: sortRankings(cams.map((cam) => analyseCam(w, cam, options))), ruledOut: [] }
+      : boundedRankings(w, cams, options);
   scored.forEach((r, i) => {
     r.rank = i + 1;
   });
@@ -260,7 +365,11 @@ export function rankCams(build: BuildProfile, cams: readonly CamCard[], options:
 export function predictCurve(build: BuildProfile, cam: CamCard) {
   const w = prepare(build);
   const torque = torqueCurve(w.ctx, cam);
-  const limitRpm = revLimitRpm(build, w.ctx.rpms[w.ctx.rpms.length - 1], scoreFit(build, cam, overlap050Deg(cam)).springsNeeded);
+  const limitRpm = revLimitRpm(
+    build,
+    w.ctx.rpms[w.ctx.rpms.length - 1],
+    scoreFit(build, cam, overlap050Deg(cam)).springsNeeded,
+  );
   return {
     curve: curvePoints(w.ctx.rpms, torque, bandPcts(w.ctx.rpms, null)),
     predicted: summarize(w.ctx.rpms, torque, w.baseTorque, w.basePeakHp, limitRpm),

@@ -14,11 +14,16 @@ export const SAFE_PISTON_SPEED_FT_MIN = 4500;
  * memory, deferring to the cam and spring maker's figures: stock hydraulic-roller springs about 6,200;
  * upgraded springs on hydraulic rollers about 6,800; a solid roller past the curve's 7,000.
  */
-export const VALVETRAIN_LIMIT_RPM = { 'stock-hydraulic': 6200, 'upgraded-hydraulic': 6800, 'solid-roller': 7500 } as const;
+export const VALVETRAIN_LIMIT_RPM = {
+  'stock-hydraulic': 6200,
+  'upgraded-hydraulic': 6800,
+  'solid-roller': 7500,
+} as const;
 
 /** The grid: 1,500 to 7,000 in 100s, cut at the mean-piston-speed limit when that comes first. */
 export function rpmGrid(build: BuildProfile): Float64Array {
-  const safe = Math.floor(rpmAtMeanPistonSpeed(build.engine.strokeIn, SAFE_PISTON_SPEED_FT_MIN) / CURVE_STEP_RPM) * CURVE_STEP_RPM;
+  const safe =
+    Math.floor(rpmAtMeanPistonSpeed(build.engine.strokeIn, SAFE_PISTON_SPEED_FT_MIN) / CURVE_STEP_RPM) * CURVE_STEP_RPM;
   const end = Math.max(CURVE_START_RPM + 10 * CURVE_STEP_RPM, Math.min(CURVE_END_RPM, safe));
   const n = Math.floor((end - CURVE_START_RPM) / CURVE_STEP_RPM) + 1;
   const out = new Float64Array(n);

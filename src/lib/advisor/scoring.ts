@@ -3,8 +3,19 @@ import type { CamCard } from '@/lib/schemas/cam-card';
 import { IDLE_VACUUM } from './idle';
 import type { NeedKind } from './types';
 import {
-  BELOW_PULL_AWAY_FACTOR, COMPRESSION_SCORING, CONVERTER_SCORING, COST_SCORING, CRUISE_BUMP, EMISSIONS_GATE_MAX_SCORE,
-  FIT_SCORING, HEAVY_VEHICLE, IDLE_SCORING, POWERBAND_SCALE_PCT, SCORING_WEIGHTS, SUBSCORE_NAMES, USE_BANDS,
+  BELOW_PULL_AWAY_FACTOR,
+  COMPRESSION_SCORING,
+  CONVERTER_SCORING,
+  COST_SCORING,
+  CRUISE_BUMP,
+  EMISSIONS_GATE_MAX_SCORE,
+  FIT_SCORING,
+  HEAVY_VEHICLE,
+  IDLE_SCORING,
+  POWERBAND_SCALE_PCT,
+  SCORING_WEIGHTS,
+  SUBSCORE_NAMES,
+  USE_BANDS,
   type SubscoreName,
 } from './weights';
 
@@ -13,11 +24,20 @@ import {
 const clamp = (v: number, lo = 0, hi = 100) => Math.min(hi, Math.max(lo, v));
 
 /** Weight of each rpm step for this customer's use; the same for every cam, so worked out once. */
-export function powerbandWeights(build: BuildProfile, rpms: Float64Array, pullAwayRpm: number, cruiseRpm: number): Float64Array {
+export function powerbandWeights(
+  build: BuildProfile,
+  rpms: Float64Array,
+  pullAwayRpm: number,
+  cruiseRpm: number,
+): Float64Array {
   const use = build.use.primary;
   const bands = USE_BANDS[use];
   const bump = CRUISE_BUMP[use];
-  const heavy = clamp(build.vehicle.weightLb / HEAVY_VEHICLE.refWeightLb, HEAVY_VEHICLE.minFactor, HEAVY_VEHICLE.maxFactor);
+  const heavy = clamp(
+    build.vehicle.weightLb / HEAVY_VEHICLE.refWeightLb,
+    HEAVY_VEHICLE.minFactor,
+    HEAVY_VEHICLE.maxFactor,
+  );
   const out = new Float64Array(rpms.length);
   for (let i = 0; i < rpms.length; i++) {
     const rpm = rpms[i];
@@ -37,7 +57,12 @@ export function powerbandWeights(build: BuildProfile, rpms: Float64Array, pullAw
 export type PowerbandDetail = { score: number; avgGainPct: number; bandFromRpm: number; bandToRpm: number };
 
 // Weighted mean of torque change against the baseline over where this customer drives.
-export function scorePowerband(weights: Float64Array, rpms: Float64Array, torque: Float64Array, baseline: Float64Array): PowerbandDetail {
+export function scorePowerband(
+  weights: Float64Array,
+  rpms: Float64Array,
+  torque: Float64Array,
+  baseline: Float64Array,
+): PowerbandDetail {
   let sum = 0;
   let wsum = 0;
   let from = Infinity;
@@ -79,27 +104,50 @@ export type ConverterDetail = {
 // Crossover against converter stall (or launch rpm): full marks when the cam already pulls by then.
 // A converter is a need only when even the earliest end of the crossover's range sits well above the stall.
 export function scoreConverter(
-  build: BuildProfile, pullAwayRpm: number, crossover: number | null, aheadAtPullAway: boolean,
-  crossoverRange: [number, number] | null = null, lead: { fromRpm: number; toRpm: number } | null = null,
+  build: BuildProfile,
+  pullAwayRpm: number,
+  crossover: number | null,
+  aheadAtPullAway: boolean,
+  crossoverRange: [number, number] | null = null,
+  lead: { fromRpm: number; toRpm: number } | null = null,
 ): ConverterDetail {
   const c = CONVERTER_SCORING;
   const transmission = build.drivetrain.transmission;
-  const base = { transmission, pullAwayRpm, crossoverRpm: crossover, crossoverRangeRpm: crossoverRange, aheadAtPullAway, lead };
+  const base = {
+    transmission,
+    pullAwayRpm,
+    crossoverRpm: crossover,
+    crossoverRangeRpm: crossoverRange,
+    aheadAtPullAway,
+    lead,
+  };
   if (crossover === null) {
     // Leads somewhere below the limit without holding to it: judge it where it starts to lead.
     const from = lead?.fromRpm ?? null;
-    const score = aheadAtPullAway ? 100 : from !== null ? clamp(100 - Math.max(0, from - pullAwayRpm - c.toleranceRpm) * c.manualPointsPerRpm) : c.neverCrossesScore;
+    const score = aheadAtPullAway
+      ? 100
+      : from !== null
+        ? clamp(100 - Math.max(0, from - pullAwayRpm - c.toleranceRpm) * c.manualPointsPerRpm)
+        : c.neverCrossesScore;
     return { ...base, score, marginRpm: null, suggestedStallRpm: null };
   }
   const margin = crossover - pullAwayRpm;
   const slope = transmission === 'automatic' ? c.automaticPointsPerRpm : c.manualPointsPerRpm;
   const score = clamp(100 - Math.max(0, margin - c.toleranceRpm) * slope);
   const earliest = crossoverRange ? crossoverRange[0] : crossover;
-  const suggest = transmission === 'automatic' && earliest - pullAwayRpm > c.suggestConverterAboveStallRpm ? Math.ceil(crossover / 100) * 100 : null;
+  const suggest =
+    transmission === 'automatic' && earliest - pullAwayRpm > c.suggestConverterAboveStallRpm
+      ? Math.ceil(crossover / 100) * 100
+      : null;
   return { ...base, score, marginRpm: margin, suggestedStallRpm: suggest };
 }
 
-export type IdleDetail = { score: number; vacuumInHg: number; wish: BuildProfile['use']['idle']; brakesShortInHg: number };
+export type IdleDetail = {
+  score: number;
+  vacuumInHg: number;
+  wish: BuildProfile['use']['idle'];
+  brakesShortInHg: number;
+};
 
 // Idle vacuum against the customer's wish, then against vacuum brake assist.
 export function scoreIdle(build: BuildProfile, vacuumInHg: number): IdleDetail {
@@ -111,7 +159,8 @@ export function scoreIdle(build: BuildProfile, vacuumInHg: number): IdleDetail {
     score -= Math.max(0, s.noticeable.wantFromInHg - vacuumInHg) * s.noticeable.pointsPerInHgShort;
     score -= Math.max(0, vacuumInHg - s.noticeable.wantToInHg) * s.noticeable.pointsPerInHgMild;
   } else score -= Math.max(0, vacuumInHg - s.aggressive.wantAtMostInHg) * s.aggressive.pointsPerInHgMild;
-  const brakesShort = build.vehicle.powerBrakes === 'vacuum' ? Math.max(0, IDLE_VACUUM.brakeBoosterMinInHg - vacuumInHg) : 0;
+  const brakesShort =
+    build.vehicle.powerBrakes === 'vacuum' ? Math.max(0, IDLE_VACUUM.brakeBoosterMinInHg - vacuumInHg) : 0;
   score -= brakesShort * s.brakePointsPerInHgShort;
   return { score: clamp(score), vacuumInHg, wish, brakesShortInHg: brakesShort };
 }
@@ -159,7 +208,10 @@ export function installedSpringLimitIn(build: BuildProfile): { limitIn: number; 
 // Common practice, values from memory: piston-to-valve gets tighter with lift and with overlap.
 export function pistonToValveRisk(maxLiftIn: number, overlap050Deg: number): number {
   const f = FIT_SCORING;
-  return Math.max(0, maxLiftIn - f.ptvLiftFromIn) / f.ptvLiftStepIn + Math.max(0, overlap050Deg - f.ptvOverlapFromDeg) / f.ptvOverlapStepDeg;
+  return (
+    Math.max(0, maxLiftIn - f.ptvLiftFromIn) / f.ptvLiftStepIn +
+    Math.max(0, overlap050Deg - f.ptvOverlapFromDeg) / f.ptvOverlapStepDeg
+  );
 }
 
 export function scoreFit(build: BuildProfile, cam: CamCard, overlap050: number): FitDetail {
@@ -169,11 +221,21 @@ export function scoreFit(build: BuildProfile, cam: CamCard, overlap050: number):
   const springsNeeded = maxLiftIn > limitIn + 1e-9;
   const ptvRisk = pistonToValveRisk(maxLiftIn, overlap050);
   const deleteNeeded = build.engine.cylinderDeactivation === 'active' && cam.deactivationCompatible !== true;
-  const score = 100 - (springsNeeded ? f.springsNeededPoints : 0) - Math.min(f.ptvMaxPoints, ptvRisk * f.ptvPointsPerUnit) - (deleteNeeded ? f.deactivationDeletePoints : 0);
+  const score =
+    100 -
+    (springsNeeded ? f.springsNeededPoints : 0) -
+    Math.min(f.ptvMaxPoints, ptvRisk * f.ptvPointsPerUnit) -
+    (deleteNeeded ? f.deactivationDeletePoints : 0);
   return {
-    score: clamp(score), maxLiftIn, springLimitIn: limitIn, springLimitAssumed: assumed, springsNeeded, ptvRisk,
+    score: clamp(score),
+    maxLiftIn,
+    springLimitIn: limitIn,
+    springLimitAssumed: assumed,
+    springsNeeded,
+    ptvRisk,
     ptvLevel: ptvRisk < 0.5 ? 'low' : ptvRisk < 1.5 ? 'moderate' : 'high',
-    deactivation: build.engine.cylinderDeactivation, deleteNeeded,
+    deactivation: build.engine.cylinderDeactivation,
+    deleteNeeded,
   };
 }
 
@@ -187,15 +249,27 @@ export function scoreEmissions(build: BuildProfile, cam: CamCard): EmissionsDeta
 }
 
 /** wholeJob: jobCents is the shop's full job price before tax (labour and tune included). */
-export type CostDetail = { score: number; priceCents: number | null; jobCents: number | null; budgetCents: number; partsPriced: boolean; wholeJob?: boolean };
+export type CostDetail = {
+  score: number;
+  priceCents: number | null;
+  jobCents: number | null;
+  budgetCents: number;
+  partsPriced: boolean;
+  wholeJob?: boolean;
+};
 
 // Price against the budget: the whole job when the shop priced it (or part prices are known), else the cam against its share.
 export function scoreCost(
-  build: BuildProfile, cam: CamCard, needKinds: NeedKind[], needPriceCents?: Partial<Record<NeedKind, number>>, jobPriceCents?: number | null,
+  build: BuildProfile,
+  cam: CamCard,
+  needKinds: NeedKind[],
+  needPriceCents?: Partial<Record<NeedKind, number>>,
+  jobPriceCents?: number | null,
 ): CostDetail {
   const c = COST_SCORING;
   const budget = build.use.budgetCents;
-  if (cam.priceCents === undefined || jobPriceCents === null) return { score: c.noPriceScore, priceCents: null, jobCents: null, budgetCents: budget, partsPriced: false };
+  if (cam.priceCents === undefined || jobPriceCents === null)
+    return { score: c.noPriceScore, priceCents: null, jobCents: null, budgetCents: budget, partsPriced: false };
   const wholeJob = jobPriceCents !== undefined;
   const partsPriced = wholeJob || (needPriceCents !== undefined && Object.keys(needPriceCents).length > 0);
   let job = wholeJob ? jobPriceCents : cam.priceCents;

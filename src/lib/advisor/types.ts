@@ -62,7 +62,16 @@ export type RankOptions = {
 };
 
 /** The cam card's own figures (never its price), so a side-by-side comparison reads them from the ranking. */
-export type CamSpecs = Pick<CamCard, 'intakeDuration050' | 'exhaustDuration050' | 'intakeLiftIn' | 'exhaustLiftIn' | 'lsa' | 'intakeCenterline' | 'rockerRatio'> &
+export type CamSpecs = Pick<
+  CamCard,
+  | 'intakeDuration050'
+  | 'exhaustDuration050'
+  | 'intakeLiftIn'
+  | 'exhaustLiftIn'
+  | 'lsa'
+  | 'intakeCenterline'
+  | 'rockerRatio'
+> &
   Partial<Pick<CamCard, 'intakeAdvertised' | 'exhaustAdvertised'>>;
 
 export type CamRanking = {

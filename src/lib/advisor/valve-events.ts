@@ -50,7 +50,11 @@ export function eventsFromDurations(
 export function valveEvents(cam: CamCard): ValveEvents {
   const at050 = eventsFromDurations(cam.intakeDuration050, cam.exhaustDuration050, cam.lsa, cam.intakeCenterline);
   const out: ValveEvents = {
-    ivo: at050.ivo, ivc: at050.ivc, evo: at050.evo, evc: at050.evc, overlap: at050.overlap,
+    ivo: at050.ivo,
+    ivc: at050.ivc,
+    evo: at050.evo,
+    evc: at050.evc,
+    overlap: at050.overlap,
     exhaustCenterline: exhaustCenterlineDeg(cam.lsa, cam.intakeCenterline),
   };
   if (cam.intakeAdvertised !== undefined && cam.exhaustAdvertised !== undefined) {

@@ -9,10 +9,14 @@ export const MIN_SECRET_LENGTH = 32;
 export function sessionSecret(): string {
   const secret = process.env.SESSION_SECRET;
   if (!secret) {
-    throw new Error('SESSION_SECRET is not set. It signs and encrypts the staff session cookie; set it to a random string of 32 or more characters (see .env.example).');
+    throw new Error(
+      'SESSION_SECRET is not set. It signs and encrypts the staff session cookie; set it to a random string of 32 or more characters (see .env.example).',
+    );
   }
   if (secret.length < MIN_SECRET_LENGTH) {
-    throw new Error(`SESSION_SECRET is ${secret.length} characters long; it must be at least ${MIN_SECRET_LENGTH}. Use a long random string (see .env.example).`);
+    throw new Error(
+      `SESSION_SECRET is ${secret.length} characters long; it must be at least ${MIN_SECRET_LENGTH}. Use a long random string (see .env.example).`,
+    );
   }
   return secret;
 }

@@ -30,6 +30,15 @@ export async function knownDeviceId(email: string): Promise<string | null> {
 /** Keeps the browser's device id for this account (or makes one) and refreshes the cookie's life. */
 export async function rememberDevice(email: string, secure: boolean): Promise<void> {
   const deviceId = (await knownDeviceId(email)) ?? crypto.randomBytes(16).toString('base64url');
-  const sealed = await sealData({ account: accountKey(email), deviceId } satisfies DeviceData, { password: sessionSecret(), ttl: DEVICE_TTL_SECONDS });
-  (await cookies()).set(cookieName(email), sealed, { httpOnly: true, sameSite: 'lax', secure, path: '/', maxAge: DEVICE_TTL_SECONDS });
+  const sealed = await sealData({ account: accountKey(email), deviceId } satisfies DeviceData, {
+    password: sessionSecret(),
+    ttl: DEVICE_TTL_SECONDS,
+  });
+  (await cookies()).set(cookieName(email), sealed, {
+    httpOnly: true,
+    sameSite: 'lax',
+    secure,
+    path: '/',
+    maxAge: DEVICE_TTL_SECONDS,
+  });
 }

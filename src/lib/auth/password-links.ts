@@ -11,7 +11,10 @@ export const RESET_LINK_TTL_MS = 60 * 60 * 1000;
 export const INVITE_LINK_TTL_MS = 72 * 60 * 60 * 1000;
 
 function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string);
+  return text.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string,
+  );
 }
 
 export async function issuePasswordLink(
@@ -21,12 +24,17 @@ export async function issuePasswordLink(
 ): Promise<void> {
   const token = randomToken();
   const ttl = purpose === 'invite' ? INVITE_LINK_TTL_MS : RESET_LINK_TTL_MS;
-  await createPasswordToken({ userId: user.id, tokenHash: hashToken(token), purpose, expiresAt: new Date(Date.now() + ttl) }, options.transaction);
+  await createPasswordToken(
+    { userId: user.id, tokenHash: hashToken(token), purpose, expiresAt: new Date(Date.now() + ttl) },
+    options.transaction,
+  );
   const link = `${appBaseUrl()}/reset-password?token=${encodeURIComponent(token)}${purpose === 'invite' ? '&welcome=1' : ''}`;
   const name = user.name || user.email;
   if (purpose === 'invite') {
     const who = options.invitedBy ? `${options.invitedBy} has` : 'You have been';
-    const lead = options.invitedBy ? `${who} added you to the shop's Lobewise staff.` : `${who} added to the shop's Lobewise staff.`;
+    const lead = options.invitedBy
+      ? `${who} added you to the shop's Lobewise staff.`
+      : `${who} added to the shop's Lobewise staff.`;
     await sendMail({
       to: user.email,
       subject: 'Your Lobewise staff account: choose a password',

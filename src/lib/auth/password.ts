@@ -20,7 +20,13 @@ export async function verifyPassword(hash: string, password: string): Promise<bo
 
 export function needsNewHash(hash: string): boolean {
   try {
-    return argon2.needsRehash(hash, { memoryCost: ARGON2_OPTIONS.memoryCost, timeCost: ARGON2_OPTIONS.timeCost, parallelism: ARGON2_OPTIONS.parallelism }) || !hash.startsWith('$argon2id$');
+    return (
+      argon2.needsRehash(hash, {
+        memoryCost: ARGON2_OPTIONS.memoryCost,
+        timeCost: ARGON2_OPTIONS.timeCost,
+        parallelism: ARGON2_OPTIONS.parallelism,
+      }) || !hash.startsWith('$argon2id$')
+    );
   } catch {
     return true;
   }

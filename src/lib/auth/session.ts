@@ -1,7 +1,12 @@
 import { getIronSession, type IronSession, type SessionOptions } from 'iron-session';
 import { cookies, headers } from 'next/headers';
 import { cache } from 'react';
-import { createStaffSession, findActiveSession, revokeSession, type ActiveSession } from '@/lib/db/queries/staff-sessions';
+import {
+  createStaffSession,
+  findActiveSession,
+  revokeSession,
+  type ActiveSession,
+} from '@/lib/db/queries/staff-sessions';
 import { SESSION_COOKIE, SESSION_TTL_SECONDS, sessionSecret } from './config';
 import { clientIp, isHttps, userAgent } from './request-info';
 import { hashToken, randomToken } from './tokens';
@@ -27,7 +32,10 @@ async function ironSession(): Promise<IronSession<CookieData>> {
     return await getIronSession<CookieData>(store, options);
   } catch {
     // A cookie so mangled that it cannot even be parsed: treat it as absent (and overwrite it).
-    const withoutIt = { get: (name: string) => (name === SESSION_COOKIE ? undefined : store.get(name)), set: store.set.bind(store) };
+    const withoutIt = {
+      get: (name: string) => (name === SESSION_COOKIE ? undefined : store.get(name)),
+      set: store.set.bind(store),
+    };
     return getIronSession<CookieData>(withoutIt, options);
   }
 }

@@ -18,9 +18,19 @@ export type SignInOutcome =
  * password yet and wrong password all give the same answer, after the same work. The attempt is
  * counted before the password is checked (src/lib/throttle/sign-in-limits.ts).
  */
-export async function checkSignIn(email: string, password: string, ip: string, knownDeviceId: string | null): Promise<SignInOutcome> {
+export async function checkSignIn(
+  email: string,
+  password: string,
+  ip: string,
+  knownDeviceId: string | null,
+): Promise<SignInOutcome> {
   const reservation = await reserveSignInAttempt({ email, ip, knownDeviceId });
-  if (!reservation.ok) return { kind: 'throttled', retryAfterSeconds: reservation.retryAfterSeconds, pauseStarted: reservation.pauseStarted };
+  if (!reservation.ok)
+    return {
+      kind: 'throttled',
+      retryAfterSeconds: reservation.retryAfterSeconds,
+      pauseStarted: reservation.pauseStarted,
+    };
 
   const user = await findUserByEmail(email);
   let ok = false;
@@ -32,7 +42,13 @@ export async function checkSignIn(email: string, password: string, ip: string, k
 
   await reservation.settle(ok && !!user);
   if (!ok || !user) {
-    await recordAudit({ actor: email, action: 'auth.sign-in-failed', entityType: user ? 'user' : null, entityId: user?.id ?? null, ip });
+    await recordAudit({
+      actor: email,
+      action: 'auth.sign-in-failed',
+      entityType: user ? 'user' : null,
+      entityId: user?.id ?? null,
+      ip,
+    });
     return { kind: 'wrong-pair' };
   }
 

@@ -4,7 +4,10 @@ import { sendMail } from '@/lib/mail';
 
 // ASVS V2.2.3: the owner hears when their account is being guessed at, and what still works.
 function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string);
+  return text.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string,
+  );
 }
 
 /** Tells an active account's owner that sign-ins from new devices are paused; silent for anyone else. */

@@ -7,8 +7,20 @@ import { vehicleClassOf } from '@/lib/schemas/build-profile';
 
 export type BaselineCard = Pick<
   CamRecord,
-  'id' | 'sku' | 'name' | 'baselineForLiters' | 'intakeDuration050' | 'exhaustDuration050' | 'intakeAdvertised' | 'exhaustAdvertised' |
-  'intakeLiftIn' | 'exhaustLiftIn' | 'lsa' | 'intakeCenterline' | 'rockerRatio' | 'springMaxLiftIn'
+  | 'id'
+  | 'sku'
+  | 'name'
+  | 'baselineForLiters'
+  | 'intakeDuration050'
+  | 'exhaustDuration050'
+  | 'intakeAdvertised'
+  | 'exhaustAdvertised'
+  | 'intakeLiftIn'
+  | 'exhaustLiftIn'
+  | 'lsa'
+  | 'intakeCenterline'
+  | 'rockerRatio'
+  | 'springMaxLiftIn'
 >;
 
 type S = string;
@@ -19,16 +31,44 @@ export type InterviewValues = {
   vehicleLabel: S;
   baselineCamId: S;
   profile: {
-    engine: { cylinders: S; boreIn: S; strokeIn: S; rodLengthIn: S; compressionRatio: S; headMaterial: S; intakeFlowCfm: S; intakeManifold: S; cylinderDeactivation: S };
+    engine: {
+      cylinders: S;
+      boreIn: S;
+      strokeIn: S;
+      rodLengthIn: S;
+      compressionRatio: S;
+      headMaterial: S;
+      intakeFlowCfm: S;
+      intakeManifold: S;
+      cylinderDeactivation: S;
+    };
     exhaust: { headers: S; primaryIn: S; system: S };
     drivetrain: { transmission: S; stallRpm: S; launchRpm: S; axleRatio: S; topGearRatio: S; tireDiameterIn: S };
     vehicle: { weightLb: S; powerBrakes: S; class: S };
     // budgetCents holds dollars as typed; the payload turns them into whole cents. budgetKnown 'unsure' is
     // the customer's "not sure yet": no budget is sent (stored as 0, "none given").
-    use: { primary: S; idle: S; fuelOctane: S; emissionsRequired: 'yes' | 'no'; cruiseMph: S; budgetKnown: 'figure' | 'unsure'; budgetCents: S };
+    use: {
+      primary: S;
+      idle: S;
+      fuelOctane: S;
+      emissionsRequired: 'yes' | 'no';
+      cruiseMph: S;
+      budgetKnown: 'figure' | 'unsure';
+      budgetCents: S;
+    };
     baselineCam: {
-      id: S; name: S; intakeDuration050: S; exhaustDuration050: S; intakeAdvertised: S; exhaustAdvertised: S;
-      intakeLiftIn: S; exhaustLiftIn: S; lsa: S; intakeCenterline: S; rockerRatio: S; springMaxLiftIn: S;
+      id: S;
+      name: S;
+      intakeDuration050: S;
+      exhaustDuration050: S;
+      intakeAdvertised: S;
+      exhaustAdvertised: S;
+      intakeLiftIn: S;
+      exhaustLiftIn: S;
+      lsa: S;
+      intakeCenterline: S;
+      rockerRatio: S;
+      springMaxLiftIn: S;
     };
   };
 };
@@ -50,11 +90,66 @@ export type EnginePreset = {
 // are typical stock figures FROM MEMORY (approximate, not from a published table): the counter checks
 // them against the customer's engine and corrects what differs.
 export const ENGINE_PRESETS: readonly EnginePreset[] = [
-  { liters: 4.8, label: '4.8 L', boreIn: 3.78, strokeIn: 3.268, rodLengthIn: 6.275, compressionRatio: 9.0, headMaterial: 'iron', intakeFlowCfm: 225, intakeManifold: 'truck', cylinderDeactivation: 'none' },
-  { liters: 5.3, label: '5.3 L', boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'active' },
-  { liters: 5.7, label: '5.7 L', boreIn: 3.898, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 10.1, headMaterial: 'aluminum', intakeFlowCfm: 265, intakeManifold: 'car', cylinderDeactivation: 'none' },
-  { liters: 6.0, label: '6.0 L', boreIn: 4.0, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.4, headMaterial: 'aluminum', intakeFlowCfm: 250, intakeManifold: 'truck', cylinderDeactivation: 'none' },
-  { liters: 6.2, label: '6.2 L', boreIn: 4.065, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 10.4, headMaterial: 'aluminum', intakeFlowCfm: 310, intakeManifold: 'truck', cylinderDeactivation: 'active' },
+  {
+    liters: 4.8,
+    label: '4.8 L',
+    boreIn: 3.78,
+    strokeIn: 3.268,
+    rodLengthIn: 6.275,
+    compressionRatio: 9.0,
+    headMaterial: 'iron',
+    intakeFlowCfm: 225,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'none',
+  },
+  {
+    liters: 5.3,
+    label: '5.3 L',
+    boreIn: 3.78,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 9.9,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 240,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'active',
+  },
+  {
+    liters: 5.7,
+    label: '5.7 L',
+    boreIn: 3.898,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 10.1,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 265,
+    intakeManifold: 'car',
+    cylinderDeactivation: 'none',
+  },
+  {
+    liters: 6.0,
+    label: '6.0 L',
+    boreIn: 4.0,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 9.4,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 250,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'none',
+  },
+  {
+    liters: 6.2,
+    label: '6.2 L',
+    boreIn: 4.065,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 10.4,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 310,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'active',
+  },
 ];
 
 const str = (v: unknown) => (v === null || v === undefined ? '' : String(v));
@@ -67,7 +162,11 @@ export function applyPreset(values: InterviewValues, preset: EnginePreset, cards
     ...values,
     profile: {
       ...values.profile,
-      engine: { ...values.profile.engine, cylinders: '8', ...Object.fromEntries(Object.entries(engine).map(([k, v]) => [k, String(v)])) } as InterviewValues['profile']['engine'],
+      engine: {
+        ...values.profile.engine,
+        cylinders: '8',
+        ...Object.fromEntries(Object.entries(engine).map(([k, v]) => [k, String(v)])),
+      } as InterviewValues['profile']['engine'],
     },
   };
   const card = cards.find((c) => c.baselineForLiters === preset.liters);
@@ -76,7 +175,12 @@ export function applyPreset(values: InterviewValues, preset: EnginePreset, cards
 
 /** Fills the "cam in the engine now" card from a catalogue card (still editable afterwards). */
 export function applyCard(values: InterviewValues, card: BaselineCard | null): InterviewValues {
-  if (!card) return { ...values, baselineCamId: '', profile: { ...values.profile, baselineCam: { ...values.profile.baselineCam, id: 'typed' } } };
+  if (!card)
+    return {
+      ...values,
+      baselineCamId: '',
+      profile: { ...values.profile, baselineCam: { ...values.profile.baselineCam, id: 'typed' } },
+    };
   return {
     ...values,
     baselineCamId: String(card.id),
@@ -109,19 +213,66 @@ export function blankInterview(cards: BaselineCard[]): InterviewValues {
     vehicleLabel: '',
     baselineCamId: '',
     profile: {
-      engine: { cylinders: '8', boreIn: '', strokeIn: '', rodLengthIn: '', compressionRatio: '', headMaterial: 'aluminum', intakeFlowCfm: '', intakeManifold: 'truck', cylinderDeactivation: 'none' },
+      engine: {
+        cylinders: '8',
+        boreIn: '',
+        strokeIn: '',
+        rodLengthIn: '',
+        compressionRatio: '',
+        headMaterial: 'aluminum',
+        intakeFlowCfm: '',
+        intakeManifold: 'truck',
+        cylinderDeactivation: 'none',
+      },
       exhaust: { headers: 'manifold', primaryIn: '', system: 'full-with-cats' },
-      drivetrain: { transmission: 'automatic', stallRpm: '2000', launchRpm: '', axleRatio: '3.42', topGearRatio: '0.70', tireDiameterIn: '31' },
+      drivetrain: {
+        transmission: 'automatic',
+        stallRpm: '2000',
+        launchRpm: '',
+        axleRatio: '3.42',
+        topGearRatio: '0.70',
+        tireDiameterIn: '31',
+      },
       vehicle: { weightLb: '5200', powerBrakes: 'vacuum', class: 'truck' },
-      use: { primary: 'daily', idle: 'smooth', fuelOctane: '87', emissionsRequired: 'yes', cruiseMph: '65', budgetKnown: 'figure', budgetCents: '' },
-      baselineCam: { id: 'typed', name: '', intakeDuration050: '', exhaustDuration050: '', intakeAdvertised: '', exhaustAdvertised: '', intakeLiftIn: '', exhaustLiftIn: '', lsa: '', intakeCenterline: '', rockerRatio: '1.7', springMaxLiftIn: '' },
+      use: {
+        primary: 'daily',
+        idle: 'smooth',
+        fuelOctane: '87',
+        emissionsRequired: 'yes',
+        cruiseMph: '65',
+        budgetKnown: 'figure',
+        budgetCents: '',
+      },
+      baselineCam: {
+        id: 'typed',
+        name: '',
+        intakeDuration050: '',
+        exhaustDuration050: '',
+        intakeAdvertised: '',
+        exhaustAdvertised: '',
+        intakeLiftIn: '',
+        exhaustLiftIn: '',
+        lsa: '',
+        intakeCenterline: '',
+        rockerRatio: '1.7',
+        springMaxLiftIn: '',
+      },
     },
   };
   return applyPreset(base, ENGINE_PRESETS[1], cards);
 }
 
 /** A stored build back into the form (edit page). */
-export function valuesFromBuild(build: { customerId: number; customerName: string; vehicleLabel: string; baselineCamId: number | null; profile: Record<string, unknown> }, cards: BaselineCard[]): InterviewValues {
+export function valuesFromBuild(
+  build: {
+    customerId: number;
+    customerName: string;
+    vehicleLabel: string;
+    baselineCamId: number | null;
+    profile: Record<string, unknown>;
+  },
+  cards: BaselineCard[],
+): InterviewValues {
   const v = blankInterview(cards);
   const p = build.profile as Record<string, Record<string, unknown>>;
   const section = <K extends keyof InterviewValues['profile']>(key: K): InterviewValues['profile'][K] => {
@@ -131,7 +282,8 @@ export function valuesFromBuild(build: { customerId: number; customerName: strin
   };
   const vehicle = section('vehicle');
   // A profile saved before schema 2 has no class: show the default the advisor and the rules use.
-  if (!vehicle.class) vehicle.class = vehicleClassOf({ vehicle: {}, engine: { intakeManifold: str(p.engine?.intakeManifold) } });
+  if (!vehicle.class)
+    vehicle.class = vehicleClassOf({ vehicle: {}, engine: { intakeManifold: str(p.engine?.intakeManifold) } });
   const use = section('use');
   use.emissionsRequired = p.use?.emissionsRequired === false ? 'no' : 'yes';
   const budget = Number(p.use?.budgetCents);
@@ -144,6 +296,13 @@ export function valuesFromBuild(build: { customerId: number; customerName: strin
     customer: { name: build.customerName, phone: '', email: '', notes: '' },
     vehicleLabel: build.vehicleLabel,
     baselineCamId: build.baselineCamId === null ? '' : String(build.baselineCamId),
-    profile: { engine: section('engine'), exhaust: section('exhaust'), drivetrain: section('drivetrain'), vehicle, use, baselineCam: section('baselineCam') },
+    profile: {
+      engine: section('engine'),
+      exhaust: section('exhaust'),
+      drivetrain: section('drivetrain'),
+      vehicle,
+      use,
+      baselineCam: section('baselineCam'),
+    },
   };
 }

@@ -3,10 +3,22 @@ import type { CamCard } from '@/lib/schemas/cam-card';
 // A stored cam (model row, API record or baseline option) as the advisor's cam card. Pure, so the
 // questionnaire's profile builder and the ranking query share it; "not given" (null) becomes undefined.
 export type CamCardSource = {
-  id: number; sku: string; name: string;
-  intakeDuration050: number; exhaustDuration050: number; intakeAdvertised: number | null; exhaustAdvertised: number | null;
-  intakeLiftIn: number; exhaustLiftIn: number; lsa: number; intakeCenterline: number; rockerRatio: number; springMaxLiftIn: number | null;
-  deactivationCompatible?: boolean; emissionsCertified?: boolean; priceCents?: number;
+  id: number;
+  sku: string;
+  name: string;
+  intakeDuration050: number;
+  exhaustDuration050: number;
+  intakeAdvertised: number | null;
+  exhaustAdvertised: number | null;
+  intakeLiftIn: number;
+  exhaustLiftIn: number;
+  lsa: number;
+  intakeCenterline: number;
+  rockerRatio: number;
+  springMaxLiftIn: number | null;
+  deactivationCompatible?: boolean;
+  emissionsCertified?: boolean;
+  priceCents?: number;
 };
 
 export function camCardOf(cam: CamCardSource): CamCard {

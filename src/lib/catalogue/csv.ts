@@ -45,11 +45,17 @@ export type CsvColumn<F extends string = string> = {
 /** Why the file itself is not CSV text, or null when it looks like CSV. */
 export function notCsvReason(bytes: Uint8Array, fileName: string, declaredType: string): string | null {
   const starts = (sig: number[]) => sig.every((b, i) => bytes[i] === b);
-  if (starts([0x50, 0x4b, 0x03, 0x04])) return 'This looks like a spreadsheet workbook (.xlsx). Save it as "CSV UTF-8" and upload that.';
-  if (starts([0xd0, 0xcf, 0x11, 0xe0])) return 'This looks like an old-style spreadsheet (.xls). Save it as "CSV UTF-8" and upload that.';
+  if (starts([0x50, 0x4b, 0x03, 0x04]))
+    return 'This looks like a spreadsheet workbook (.xlsx). Save it as "CSV UTF-8" and upload that.';
+  if (starts([0xd0, 0xcf, 0x11, 0xe0]))
+    return 'This looks like an old-style spreadsheet (.xls). Save it as "CSV UTF-8" and upload that.';
   if (starts([0x25, 0x50, 0x44, 0x46])) return 'This is a PDF, not a CSV file.';
-  if (/\.(xlsx?|ods|numbers|pdf|png|jpe?g|zip|docx?)$/i.test(fileName)) return `A .${fileName.split('.').pop()} file is not CSV. Save the sheet as CSV and upload that.`;
-  if (declaredType && !/^(text\/(csv|plain|comma-separated-values)|application\/(csv|vnd\.ms-excel|octet-stream))\b/i.test(declaredType)) {
+  if (/\.(xlsx?|ods|numbers|pdf|png|jpe?g|zip|docx?)$/i.test(fileName))
+    return `A .${fileName.split('.').pop()} file is not CSV. Save the sheet as CSV and upload that.`;
+  if (
+    declaredType &&
+    !/^(text\/(csv|plain|comma-separated-values)|application\/(csv|vnd\.ms-excel|octet-stream))\b/i.test(declaredType)
+  ) {
     return `Files of type ${declaredType} are not CSV.`;
   }
   const head = bytes.subarray(0, 64 * 1024);
@@ -62,7 +68,11 @@ export function notCsvReason(bytes: Uint8Array, fileName: string, declaredType: 
   return null;
 }
 
-export type ParsedCsv = { header: string[]; rows: { row: number; cells: Record<string, string> }[]; errors: { row: number; column: string; message: string }[] };
+export type ParsedCsv = {
+  header: string[];
+  rows: { row: number; cells: Record<string, string> }[];
+  errors: { row: number; column: string; message: string }[];
+};
 
 /**
  * Parses CSV text: the header names are trimmed and lower-cased, blank lines are skipped, and each
@@ -71,7 +81,11 @@ export type ParsedCsv = { header: string[]; rows: { row: number; cells: Record<s
 export function parseCsv(text: string): ParsedCsv {
   const source = text.replace(/^\uFEFF/, '');
   const result = Papa.parse<string[]>(source, { skipEmptyLines: 'greedy' });
-  const errors: ParsedCsv['errors'] = result.errors.map((e) => ({ row: (e.row ?? 0) + 1, column: '(row)', message: e.message }));
+  const errors: ParsedCsv['errors'] = result.errors.map((e) => ({
+    row: (e.row ?? 0) + 1,
+    column: '(row)',
+    message: e.message,
+  }));
   const [headerRow = [], ...data] = result.data;
   const header = headerRow.map((h) => h.trim().toLowerCase());
   const rows = data.map((cells, index) => ({

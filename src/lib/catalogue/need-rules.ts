@@ -67,7 +67,8 @@ export function evaluateNeedRules(rules: readonly NeedRuleInput[], context: Need
   const reasons = new Map<NeedKind, string>();
   for (const need of context.needs) if (!reasons.has(need.kind)) reasons.set(need.kind, need.reason);
   const firing = new Set<number>();
-  for (const kind of reasons.keys()) for (const rule of rulesFor(rules, kind, context.vehicleClass)) firing.add(rule.id);
+  for (const kind of reasons.keys())
+    for (const rule of rulesFor(rules, kind, context.vehicleClass)) firing.add(rule.id);
 
   const needs: Need[] = [];
   const byKey = new Map<string, Need>();
@@ -76,9 +77,22 @@ export function evaluateNeedRules(rules: readonly NeedRuleInput[], context: Need
     const reason = reasons.get(rule.kind)!;
     for (const item of rule.items) {
       const entries: Array<Pick<Need, 'type' | 'partId' | 'laborOperationId' | 'part' | 'laborOperation'>> = [];
-      if (item.partId !== null) entries.push({ type: 'part', partId: item.partId, laborOperationId: null, part: item.part ?? null, laborOperation: null });
+      if (item.partId !== null)
+        entries.push({
+          type: 'part',
+          partId: item.partId,
+          laborOperationId: null,
+          part: item.part ?? null,
+          laborOperation: null,
+        });
       if (item.laborOperationId !== null) {
-        entries.push({ type: 'labor', partId: null, laborOperationId: item.laborOperationId, part: null, laborOperation: item.laborOperation ?? null });
+        entries.push({
+          type: 'labor',
+          partId: null,
+          laborOperationId: item.laborOperationId,
+          part: null,
+          laborOperation: item.laborOperation ?? null,
+        });
       }
       for (const entry of entries) {
         const key = entry.type === 'part' ? `part:${entry.partId}` : `labor:${entry.laborOperationId}`;
@@ -87,7 +101,12 @@ export function evaluateNeedRules(rules: readonly NeedRuleInput[], context: Need
           seen.quantity = Math.max(seen.quantity, item.quantity);
           continue;
         }
-        const need: Need = { ...entry, quantity: item.quantity, rule: { id: rule.id, kind: rule.kind, label: rule.label, vehicleClass: rule.vehicleClass }, reason };
+        const need: Need = {
+          ...entry,
+          quantity: item.quantity,
+          rule: { id: rule.id, kind: rule.kind, label: rule.label, vehicleClass: rule.vehicleClass },
+          reason,
+        };
         byKey.set(key, need);
         needs.push(need);
       }

@@ -30,7 +30,13 @@ export function forgetSequelizeIfSettingsChanged(): void {
   if (!current) return;
   const wanted = databaseConfig.connectionSettings() as unknown as SharedSettings;
   const { host, port, database, username } = current.config;
-  if (wanted.host === host && Number(wanted.port) === Number(port) && wanted.database === database && wanted.username === username) return;
+  if (
+    wanted.host === host &&
+    Number(wanted.port) === Number(port) &&
+    wanted.database === database &&
+    wanted.username === username
+  )
+    return;
   globalForDb.lobewiseSequelize = undefined;
   // No query has run on it, so its pool holds no connection; closing only settles its timers.
   void current.close();

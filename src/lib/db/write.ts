@@ -1,5 +1,11 @@
 import 'server-only';
-import { ForeignKeyConstraintError, OptimisticLockError, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
+import {
+  ForeignKeyConstraintError,
+  OptimisticLockError,
+  QueryTypes,
+  UniqueConstraintError,
+  type Transaction,
+} from 'sequelize';
 import type { FieldError } from '@/lib/http/responses';
 import { db } from '@/lib/db/models';
 
@@ -15,7 +21,9 @@ export type WriteOutcome<R> =
   | { ok: false; reason: 'refused'; status: 409; message: string };
 
 export class WriteRefused extends Error {
-  constructor(readonly outcome: Exclude<WriteOutcome<never>, { ok: true }> | { ok: false; reason: 'conflict'; current: unknown }) {
+  constructor(
+    readonly outcome: Exclude<WriteOutcome<never>, { ok: true }> | { ok: false; reason: 'conflict'; current: unknown },
+  ) {
     super('write refused');
   }
 }
@@ -39,13 +47,18 @@ export async function runWrite<R>(
     return { ok: true, record, changed };
   } catch (error) {
     if (error instanceof WriteRefused) return error.outcome as WriteOutcome<R>;
-    if (error instanceof OptimisticLockError) return { ok: false, reason: 'conflict', current: options.reload ? await options.reload() : null };
+    if (error instanceof OptimisticLockError)
+      return { ok: false, reason: 'conflict', current: options.reload ? await options.reload() : null };
     if (error instanceof UniqueConstraintError) {
       const columns = error.errors.map((e) => e.path ?? '').filter(Boolean);
       const fields = Object.entries(options.uniqueFields ?? {});
       const hit = fields.find(([column]) => columns.some((c) => c === column || c.includes(column))) ?? fields[0];
       const [, field] = hit ?? ['', '(body)'];
-      return { ok: false, reason: 'invalid', errors: [{ field, message: `${field} is already used by another record` }] };
+      return {
+        ok: false,
+        reason: 'invalid',
+        errors: [{ field, message: `${field} is already used by another record` }],
+      };
     }
     if (error instanceof ForeignKeyConstraintError) {
       return { ok: false, reason: 'refused', status: 409, message: 'Another record still refers to this one.' };
@@ -55,7 +68,11 @@ export async function runWrite<R>(
 }
 
 /** True when two plain records differ in any listed field. */
-export function changedFields<T extends Record<string, unknown>>(before: T, after: T, fields: readonly (keyof T)[]): (keyof T)[] {
+export function changedFields<T extends Record<string, unknown>>(
+  before: T,
+  after: T,
+  fields: readonly (keyof T)[],
+): (keyof T)[] {
   return fields.filter((f) => JSON.stringify(before[f] ?? null) !== JSON.stringify(after[f] ?? null));
 }
 
@@ -68,12 +85,21 @@ export function likeTerm(q: string): string {
  * How many rows of `table` point at `id` through `column`. Table and column are fixed names from the
  * caller's code (never user input); some of these foreign keys have no association on their model.
  */
-export async function countReferences(table: string, column: string, id: number, transaction: Transaction): Promise<number> {
-  if (!/^[a-z_]+$/.test(table) || !/^[a-z_]+$/.test(column)) throw new Error('countReferences takes fixed table and column names');
-  const rows = await db().query<{ n: number | string }>(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE \`${column}\` = ?`, {
-    replacements: [id],
-    type: QueryTypes.SELECT,
-    transaction,
-  });
+export async function countReferences(
+  table: string,
+  column: string,
+  id: number,
+  transaction: Transaction,
+): Promise<number> {
+  if (!/^[a-z_]+$/.test(table) || !/^[a-z_]+$/.test(column))
+    throw new Error('countReferences takes fixed table and column names');
+  const rows = await db().query<{ n: number | string }>(
+    `SELECT COUNT(*) AS n FROM \`${table}\` WHERE \`${column}\` = ?`,
+    {
+      replacements: [id],
+      type: QueryTypes.SELECT,
+      transaction,
+    },
+  );
   return Number(rows[0]?.n ?? 0);
 }

@@ -13,7 +13,12 @@ export const AIR_NEEDED_BY: Record<CorrectionStandard, readonly (keyof AirReadin
   none: [],
 };
 
-export const STANDARD_LABELS: Record<CorrectionStandard, string> = { 'sae-j1349': 'SAE J1349', 'sae-j607': 'SAE J607', 'din-70020': 'DIN 70020', none: 'no correction' };
+export const STANDARD_LABELS: Record<CorrectionStandard, string> = {
+  'sae-j1349': 'SAE J1349',
+  'sae-j607': 'SAE J607',
+  'din-70020': 'DIN 70020',
+  none: 'no correction',
+};
 
 /** 1 inHg = 3.386389 kPa (mercury at 0 °C, standard gravity). */
 export const KPA_PER_INHG = 3.386389;
@@ -57,7 +62,8 @@ export type Correction = {
 
 export const CORRECTION_TEXT: Record<CorrectionStandard, { formula: string; source: string }> = {
   'sae-j1349': {
-    formula: 'cf = 1.18 · (99 / Pd) · √((T + 273) / 298) − 0.18; Pd = barometric − RH · es(T), es by the Magnus formula',
+    formula:
+      'cf = 1.18 · (99 / Pd) · √((T + 273) / 298) − 0.18; Pd = barometric − RH · es(T), es by the Magnus formula',
     source: 'SAE J1349 (reference 99 kPa dry air, 25 °C); vapour pressure: Magnus formula, Alduchov & Eskridge (1996)',
   },
   'sae-j607': {

@@ -12,7 +12,10 @@ export const CURVE_CSV_TEMPLATE = 'rpm,torque_lbft\n3000,352.4\n3500,371.0\n4000
 export const CURVE_CSV_MAX_BYTES = 100_000;
 
 export function parseCurveCsv(text: string): { points: CsvPoint[]; lines: number[]; errors: string[] } {
-  const parsed = Papa.parse<string[]>(text.replace(/\s+$/, ''), { skipEmptyLines: false, delimitersToGuess: [',', ';', '\t'] });
+  const parsed = Papa.parse<string[]>(text.replace(/\s+$/, ''), {
+    skipEmptyLines: false,
+    delimitersToGuess: [',', ';', '\t'],
+  });
   const points: CsvPoint[] = [];
   const lines: number[] = [];
   const errors: string[] = [];

@@ -50,24 +50,35 @@ function sharedGrid(curves: readonly (readonly CurvePoint[])[]): number[] {
  * Torque gain of the after pulls over the before pulls, % per rpm, where every pull of both phases was
  * measured (pulls of one phase averaged point by point). Fewer than two shared points says nothing.
  */
-export function gainByRpm(before: readonly (readonly CurvePoint[])[], after: readonly (readonly CurvePoint[])[]): { rpm: number; gainPct: number }[] | undefined {
+export function gainByRpm(
+  before: readonly (readonly CurvePoint[])[],
+  after: readonly (readonly CurvePoint[])[],
+): { rpm: number; gainPct: number }[] | undefined {
   const usable = (c: readonly CurvePoint[]) => c.length >= 2;
   const b = before.filter(usable);
   const a = after.filter(usable);
   if (b.length === 0 || a.length === 0) return undefined;
   const grid = sharedGrid([...b, ...a]);
   if (grid.length < 2) return undefined;
-  return grid.map((rpm) => ({ rpm, gainPct: gainPct(mean(b.map((c) => torqueAt(c, rpm))), mean(a.map((c) => torqueAt(c, rpm)))) }));
+  return grid.map((rpm) => ({
+    rpm,
+    gainPct: gainPct(mean(b.map((c) => torqueAt(c, rpm))), mean(a.map((c) => torqueAt(c, rpm)))),
+  }));
 }
 
-export function historyFromRuns(runs: readonly RunForHistory[], profiles: ReadonlyMap<number, BuildProfile>): HistoryEntry[] {
+export function historyFromRuns(
+  runs: readonly RunForHistory[],
+  profiles: ReadonlyMap<number, BuildProfile>,
+): HistoryEntry[] {
   const byBench = new Map<string, RunForHistory[]>();
   for (const run of runs) {
     if (run.correctedPeakHp === null || !Number.isFinite(run.correctedPeakHp) || run.correctedPeakHp <= 0) continue;
     const key = `${run.buildId}:${run.dynoType}`;
     byBench.set(key, [...(byBench.get(key) ?? []), run]);
   }
-  const benches = [...byBench.values()].sort((a, b) => a[0].buildId - b[0].buildId || a[0].dynoType.localeCompare(b[0].dynoType));
+  const benches = [...byBench.values()].sort(
+    (a, b) => a[0].buildId - b[0].buildId || a[0].dynoType.localeCompare(b[0].dynoType),
+  );
   const curvesOf = (list: RunForHistory[]) => list.flatMap((r) => (r.correctedCurve ? [r.correctedCurve] : []));
   const entries: HistoryEntry[] = [];
   for (const list of benches) {

@@ -16,7 +16,10 @@ export const inHgFromKpa = (kpa: number) => kpa / KPA_PER_INHG;
 export const kpaFromInHg = (inHg: number) => inHg * KPA_PER_INHG;
 
 /** Decimals worth showing and typing: a whole °F is finer than 0.1 °C; 0.01 inHg is finer than 0.1 kPa. */
-export const AIR_DIGITS: Record<AirUnits, { temp: number; baro: number }> = { imperial: { temp: 0, baro: 2 }, metric: { temp: 1, baro: 1 } };
+export const AIR_DIGITS: Record<AirUnits, { temp: number; baro: number }> = {
+  imperial: { temp: 0, baro: 2 },
+  metric: { temp: 1, baro: 1 },
+};
 
 export function tempIn(units: AirUnits, celsius: number): number {
   return units === 'imperial' ? fahrenheitFromCelsius(celsius) : celsius;
@@ -40,9 +43,16 @@ export function roundTo(value: number, digits: number): number {
  * An SI range in the shop's units, rounded inwards to the digits shown, so any value inside the shown
  * range still lies inside the SI range once converted (70 kPa = 20.671 inHg → from 20.68 inHg).
  */
-export function rangeIn(units: AirUnits, kind: 'temp' | 'baro', si: { min: number; max: number }): { min: number; max: number } {
+export function rangeIn(
+  units: AirUnits,
+  kind: 'temp' | 'baro',
+  si: { min: number; max: number },
+): { min: number; max: number } {
   const digits = AIR_DIGITS[units][kind];
   const convert = kind === 'temp' ? tempIn : baroIn;
   const scale = 10 ** digits;
-  return { min: Math.ceil(roundTo(convert(units, si.min) * scale, 6)) / scale, max: Math.floor(roundTo(convert(units, si.max) * scale, 6)) / scale };
+  return {
+    min: Math.ceil(roundTo(convert(units, si.min) * scale, 6)) / scale,
+    max: Math.floor(roundTo(convert(units, si.max) * scale, 6)) / scale,
+  };
 }

@@ -39,17 +39,32 @@ export function moneyWithin(
     .string()
     .test('money', `${label} must be dollars and cents, e.g. 129.50`, (v) => !v?.trim() || toCents(v) !== null);
   if (range) {
-    schema = schema.test('range', `${label} must be between $${centsToText(range.min)} and $${centsToText(range.max)}`, (v) => {
-      const cents = v?.trim() ? toCents(v) : null;
-      return cents === null || (cents >= range.min && cents <= range.max);
-    });
+    schema = schema.test(
+      'range',
+      `${label} must be between $${centsToText(range.min)} and $${centsToText(range.max)}`,
+      (v) => {
+        const cents = v?.trim() ? toCents(v) : null;
+        return cents === null || (cents >= range.min && cents <= range.max);
+      },
+    );
   }
   return options.required ? schema.test('required', `${label} is required`, (v) => Boolean(v?.trim())) : schema;
 }
 
 /** A percent typed as text ("8.25"), checked against a range kept in basis points. */
-export function percentWithin(label: string, range: Range | undefined, toBp: (text: string) => number | null, options: { required?: boolean } = {}) {
-  let schema = yup.string().test('percent', `${label} must be a percent with at most two decimals, e.g. 8.25`, (v) => !v?.trim() || toBp(v) !== null);
+export function percentWithin(
+  label: string,
+  range: Range | undefined,
+  toBp: (text: string) => number | null,
+  options: { required?: boolean } = {},
+) {
+  let schema = yup
+    .string()
+    .test(
+      'percent',
+      `${label} must be a percent with at most two decimals, e.g. 8.25`,
+      (v) => !v?.trim() || toBp(v) !== null,
+    );
   if (range) {
     schema = schema.test('range', `${label} must be between ${range.min / 100} % and ${range.max / 100} %`, (v) => {
       const bp = v?.trim() ? toBp(v) : null;

@@ -20,7 +20,10 @@ export function declaredTooLarge(request: Request, limitBytes: number): boolean 
  * The body as a stream that errors with BodyTooLarge once more than `limitBytes` have arrived;
  * `passedLimit()` says so even when a consumer (formData) wraps the error in its own.
  */
-export function limitedBody(request: Request, limitBytes: number): { stream: ReadableStream<Uint8Array> | null; passedLimit: () => boolean } {
+export function limitedBody(
+  request: Request,
+  limitBytes: number,
+): { stream: ReadableStream<Uint8Array> | null; passedLimit: () => boolean } {
   let seen = 0;
   const passedLimit = () => seen > limitBytes;
   if (!request.body) return { stream: null, passedLimit };

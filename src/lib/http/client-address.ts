@@ -11,7 +11,12 @@ export function trustedProxyHops(raw = process.env.TRUSTED_PROXY_HOPS): number {
 }
 
 function tidy(address: string): string {
-  return address.trim().replace(/^::ffff:/, '').slice(0, 64) || 'unknown';
+  return (
+    address
+      .trim()
+      .replace(/^::ffff:/, '')
+      .slice(0, 64) || 'unknown'
+  );
 }
 
 /**
@@ -19,10 +24,19 @@ function tidy(address: string): string {
  * the socket's peer (the nearest proxy); the client is the entry N places from the right — the last
  * one a trusted proxy wrote. Entries further left were written by whoever called the first proxy.
  */
-export function clientAddressFrom(forwardedFor: string | string[] | undefined, socketAddress: string | undefined, hops: number): string {
+export function clientAddressFrom(
+  forwardedFor: string | string[] | undefined,
+  socketAddress: string | undefined,
+  hops: number,
+): string {
   const peer = socketAddress ?? 'unknown';
   if (hops === 0) return tidy(peer);
-  const listed = ([] as string[]).concat(forwardedFor ?? []).join(',').split(',').map((part) => part.trim()).filter(Boolean);
+  const listed = ([] as string[])
+    .concat(forwardedFor ?? [])
+    .join(',')
+    .split(',')
+    .map((part) => part.trim())
+    .filter(Boolean);
   const chain = [...listed, peer];
   return tidy(chain[Math.max(0, chain.length - 1 - hops)]);
 }

@@ -4,6 +4,7 @@ import { HttpError } from './errors';
 export function idFromParam(raw: string | undefined, label: string): number {
   const text = raw ?? '';
   const n = Number(text);
-  if (!/^\d{1,10}$/.test(text) || !Number.isSafeInteger(n) || n < 1) throw new HttpError(404, `No ${label} with id ${text}.`);
+  if (!/^\d{1,10}$/.test(text) || !Number.isSafeInteger(n) || n < 1)
+    throw new HttpError(404, `No ${label} with id ${text}.`);
   return n;
 }

@@ -6,16 +6,23 @@ import type { WriteOutcome } from '@/lib/db/write';
 // lib/http/route.ts, reads ids, queries and bodies).
 
 /** Turns a write outcome into the answer: 200/201 with the record, 404, 409 with the current record, 422. */
-export function outcomeResponse<R>(outcome: WriteOutcome<R>, options: { status?: number; label: string; present?: (r: R) => unknown }): NextResponse {
+export function outcomeResponse<R>(
+  outcome: WriteOutcome<R>,
+  options: { status?: number; label: string; present?: (r: R) => unknown },
+): NextResponse {
   const present = options.present ?? ((r: R) => r);
   if (outcome.ok) return NextResponse.json(present(outcome.record), { status: options.status ?? 200 });
   switch (outcome.reason) {
     case 'not-found':
       return errorResponse(404, `That ${options.label} no longer exists.`);
     case 'conflict':
-      return errorResponse(409, `Someone else saved this ${options.label} after you opened it. Nothing was overwritten; review their changes and save again.`, {
-        current: outcome.current === null ? null : present(outcome.current as R),
-      });
+      return errorResponse(
+        409,
+        `Someone else saved this ${options.label} after you opened it. Nothing was overwritten; review their changes and save again.`,
+        {
+          current: outcome.current === null ? null : present(outcome.current as R),
+        },
+      );
     case 'invalid':
       return validationFailed(outcome.errors);
     case 'refused':

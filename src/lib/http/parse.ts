@@ -11,7 +11,11 @@ export function readQuery<S extends z.ZodType>(request: Request, schema: S): z.o
   return parsed.data;
 }
 
-export async function readBody<S extends z.ZodType>(request: Request, schema: S, limitBytes?: number): Promise<z.output<S>> {
+export async function readBody<S extends z.ZodType>(
+  request: Request,
+  schema: S,
+  limitBytes?: number,
+): Promise<z.output<S>> {
   const parsed = schema.safeParse(await readJsonBody(request, limitBytes));
   if (!parsed.success) throw invalidFields(parsed.error);
   return parsed.data;
@@ -28,14 +32,20 @@ export async function readPatch<C extends z.ZodObject, S extends z.ZodType>(
   current: Record<string, unknown>,
 ): Promise<{ control: z.output<C>; values: z.output<S> }> {
   const raw = await readJsonBody(request);
-  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) throw invalidFields([{ field: '(body)', message: 'the body must be a JSON object' }]);
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw))
+    throw invalidFields([{ field: '(body)', message: 'the body must be a JSON object' }]);
   const body = raw as Record<string, unknown>;
   const controlKeys = Object.keys(control.shape);
-  const controlParsed = control.safeParse(Object.fromEntries(controlKeys.filter((k) => k in body).map((k) => [k, body[k]])));
+  const controlParsed = control.safeParse(
+    Object.fromEntries(controlKeys.filter((k) => k in body).map((k) => [k, body[k]])),
+  );
   const changes = Object.fromEntries(Object.entries(body).filter(([k]) => !controlKeys.includes(k)));
   const valuesParsed = schema.safeParse({ ...current, ...changes });
   if (!controlParsed.success || !valuesParsed.success) {
-    throw invalidFields([...(controlParsed.success ? [] : formatZodIssues(controlParsed.error)), ...(valuesParsed.success ? [] : formatZodIssues(valuesParsed.error))]);
+    throw invalidFields([
+      ...(controlParsed.success ? [] : formatZodIssues(controlParsed.error)),
+      ...(valuesParsed.success ? [] : formatZodIssues(valuesParsed.error)),
+    ]);
   }
   return { control: controlParsed.data, values: valuesParsed.data };
 }

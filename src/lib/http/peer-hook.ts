@@ -8,7 +8,9 @@ import { CLIENT_ADDRESS_HEADER, clientAddressFrom, trustedProxyHops } from './cl
 const MARK = Symbol.for('lobewise.peerHook');
 
 export function installPeerHook(): void {
-  const proto = http.Server.prototype as unknown as Record<symbol, boolean> & { emit: (event: string, ...args: unknown[]) => boolean };
+  const proto = http.Server.prototype as unknown as Record<symbol, boolean> & {
+    emit: (event: string, ...args: unknown[]) => boolean;
+  };
   if (proto[MARK]) return;
   proto[MARK] = true;
   const hops = trustedProxyHops();
@@ -16,7 +18,11 @@ export function installPeerHook(): void {
   proto.emit = function emit(this: http.Server, event: string, ...args: unknown[]) {
     if (event === 'request') {
       const request = args[0] as http.IncomingMessage;
-      request.headers[CLIENT_ADDRESS_HEADER] = clientAddressFrom(request.headers['x-forwarded-for'], request.socket?.remoteAddress, hops);
+      request.headers[CLIENT_ADDRESS_HEADER] = clientAddressFrom(
+        request.headers['x-forwarded-for'],
+        request.socket?.remoteAddress,
+        hops,
+      );
     }
     return originalEmit.call(this, event, ...args);
   };

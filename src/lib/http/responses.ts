@@ -12,7 +12,12 @@ export function validationFailed(errors: ZodError | FieldError[]): NextResponse 
   return NextResponse.json({ message: 'Some fields need attention.', errors: list }, { status: 422 });
 }
 
-export function errorResponse(status: number, message: string, extra: Record<string, unknown> = {}, headers?: HeadersInit): NextResponse {
+export function errorResponse(
+  status: number,
+  message: string,
+  extra: Record<string, unknown> = {},
+  headers?: HeadersInit,
+): NextResponse {
   return NextResponse.json({ message, ...extra }, { status, headers });
 }
 
@@ -26,18 +31,28 @@ export async function readJsonBody(request: Request, limitBytes = JSON_BODY_LIMI
     bytes = await readLimitedBytes(request, limitBytes);
   } catch (error) {
     if (error instanceof BodyTooLarge) {
-      throw new HttpError(413, `The request body is larger than ${kilobytes(limitBytes)}, the limit for this request.`, { errors: [{ field: '(body)', message: `larger than ${kilobytes(limitBytes)}` }] });
+      throw new HttpError(
+        413,
+        `The request body is larger than ${kilobytes(limitBytes)}, the limit for this request.`,
+        { errors: [{ field: '(body)', message: `larger than ${kilobytes(limitBytes)}` }] },
+      );
     }
-    throw new HttpError(400, 'The request body could not be read.', { errors: [{ field: '(body)', message: 'unreadable' }] });
+    throw new HttpError(400, 'The request body could not be read.', {
+      errors: [{ field: '(body)', message: 'unreadable' }],
+    });
   }
   try {
     return JSON.parse(new TextDecoder().decode(bytes));
   } catch {
-    throw new HttpError(400, 'The request body must be valid JSON.', { errors: [{ field: '(body)', message: 'not valid JSON' }] });
+    throw new HttpError(400, 'The request body must be valid JSON.', {
+      errors: [{ field: '(body)', message: 'not valid JSON' }],
+    });
   }
 }
 
 /** A 422 to throw: the fields and what is wrong with each. */
 export function invalidFields(errors: ZodError | FieldError[]): HttpError {
-  return new HttpError(422, 'Some fields need attention.', { errors: Array.isArray(errors) ? errors : formatZodIssues(errors) });
+  return new HttpError(422, 'Some fields need attention.', {
+    errors: Array.isArray(errors) ? errors : formatZodIssues(errors),
+  });
 }

@@ -48,18 +48,25 @@ export type RouteContext<P extends Permission | 'public', I extends IdLabels, B 
 
 type NextContext = { params: Promise<Record<string, string | string[]>> };
 
-export function route<P extends Permission | 'public', I extends IdLabels = Record<never, string>, B extends Schema = undefined, Q extends Schema = undefined>(
+export function route<
+  P extends Permission | 'public',
+  I extends IdLabels = Record<never, string>,
+  B extends Schema = undefined,
+  Q extends Schema = undefined,
+>(
   spec: RouteSpec<P, I, B, Q>,
   handler: (context: RouteContext<P, I, B, Q>) => Promise<Response> | Response,
 ): (request: Request, context: NextContext) => Promise<Response> {
   return async (request, context) => {
     try {
-      if (!spec.allowCrossSite && isCrossSite(request)) return errorResponse(403, 'This request came from another site and was refused.');
+      if (!spec.allowCrossSite && isCrossSite(request))
+        return errorResponse(403, 'This request came from another site and was refused.');
       // Public routes never read the session: the webhook and the health check must not need the database for it.
       const user = spec.permission === 'public' ? null : await currentUser();
       if (spec.permission !== 'public') {
         if (!user) return errorResponse(401, 'Sign in to continue.');
-        if (!roleCan(user.role, spec.permission)) return errorResponse(403, `Your role (${user.role}) does not allow this.`);
+        if (!roleCan(user.role, spec.permission))
+          return errorResponse(403, `Your role (${user.role}) does not allow this.`);
       }
       const raw = (await context?.params) ?? {};
       const params = Object.fromEntries(Object.entries(raw).map(([k, v]) => [k, Array.isArray(v) ? v.join('/') : v]));
@@ -67,7 +74,14 @@ export function route<P extends Permission | 'public', I extends IdLabels = Reco
       for (const [name, label] of Object.entries(spec.ids ?? {})) ids[name] = idFromParam(params[name], label);
       const query = spec.query ? readQuery(request, spec.query) : undefined;
       const body = spec.body ? await readBody(request, spec.body, spec.bodyLimitBytes) : undefined;
-      return await handler({ request, user: user as RouteContext<P, I, B, Q>['user'], ids: ids as RouteContext<P, I, B, Q>['ids'], params, body: body as Output<B>, query: query as Output<Q> });
+      return await handler({
+        request,
+        user: user as RouteContext<P, I, B, Q>['user'],
+        ids: ids as RouteContext<P, I, B, Q>['ids'],
+        params,
+        body: body as Output<B>,
+        query: query as Output<Q>,
+      });
     } catch (error) {
       if (error instanceof HttpError) return httpErrorResponse(error);
       throw error;

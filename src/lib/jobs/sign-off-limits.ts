@@ -52,22 +52,55 @@ const in3 = (n: number) => `${n.toFixed(3)} in`;
 
 export function signOffWarnings(r: SignOffReadings): SignOffWarning[] {
   const out: SignOffWarning[] = [];
-  if (r.ptvIntakeIn < SAFE.ptvIntakeMinIn) out.push({ field: 'ptvIntakeIn', message: `Intake piston-to-valve ${in3(r.ptvIntakeIn)} is under the usual ${in3(SAFE.ptvIntakeMinIn)} minimum.` });
-  if (r.ptvExhaustIn < SAFE.ptvExhaustMinIn) out.push({ field: 'ptvExhaustIn', message: `Exhaust piston-to-valve ${in3(r.ptvExhaustIn)} is under the usual ${in3(SAFE.ptvExhaustMinIn)} minimum.` });
+  if (r.ptvIntakeIn < SAFE.ptvIntakeMinIn)
+    out.push({
+      field: 'ptvIntakeIn',
+      message: `Intake piston-to-valve ${in3(r.ptvIntakeIn)} is under the usual ${in3(SAFE.ptvIntakeMinIn)} minimum.`,
+    });
+  if (r.ptvExhaustIn < SAFE.ptvExhaustMinIn)
+    out.push({
+      field: 'ptvExhaustIn',
+      message: `Exhaust piston-to-valve ${in3(r.ptvExhaustIn)} is under the usual ${in3(SAFE.ptvExhaustMinIn)} minimum.`,
+    });
   if (r.springInstalledHeightIn < SAFE.installedHeightMinIn || r.springInstalledHeightIn > SAFE.installedHeightMaxIn) {
-    out.push({ field: 'springInstalledHeightIn', message: `Installed height ${in3(r.springInstalledHeightIn)} is outside the usual ${in3(SAFE.installedHeightMinIn)}–${in3(SAFE.installedHeightMaxIn)}; set it to the spring maker’s figure.` });
+    out.push({
+      field: 'springInstalledHeightIn',
+      message: `Installed height ${in3(r.springInstalledHeightIn)} is outside the usual ${in3(SAFE.installedHeightMinIn)}–${in3(SAFE.installedHeightMaxIn)}; set it to the spring maker’s figure.`,
+    });
   }
-  if (r.springSeatPressureLb < SAFE.seatPressureMinLb) out.push({ field: 'springSeatPressureLb', message: `Seat pressure ${r.springSeatPressureLb} lb is under about ${SAFE.seatPressureMinLb} lb: risk of valve float with a hydraulic roller cam.` });
-  if (r.springSeatPressureLb > SAFE.seatPressureMaxLb) out.push({ field: 'springSeatPressureLb', message: `Seat pressure ${r.springSeatPressureLb} lb is over about ${SAFE.seatPressureMaxLb} lb: hard on hydraulic roller lifters.` });
-  if (r.coilBindMarginIn < SAFE.coilBindMinIn) out.push({ field: 'coilBindMarginIn', message: `Coil-bind margin ${in3(r.coilBindMarginIn)} is under the usual ${in3(SAFE.coilBindMinIn)} minimum.` });
+  if (r.springSeatPressureLb < SAFE.seatPressureMinLb)
+    out.push({
+      field: 'springSeatPressureLb',
+      message: `Seat pressure ${r.springSeatPressureLb} lb is under about ${SAFE.seatPressureMinLb} lb: risk of valve float with a hydraulic roller cam.`,
+    });
+  if (r.springSeatPressureLb > SAFE.seatPressureMaxLb)
+    out.push({
+      field: 'springSeatPressureLb',
+      message: `Seat pressure ${r.springSeatPressureLb} lb is over about ${SAFE.seatPressureMaxLb} lb: hard on hydraulic roller lifters.`,
+    });
+  if (r.coilBindMarginIn < SAFE.coilBindMinIn)
+    out.push({
+      field: 'coilBindMarginIn',
+      message: `Coil-bind margin ${in3(r.coilBindMarginIn)} is under the usual ${in3(SAFE.coilBindMinIn)} minimum.`,
+    });
   if (r.pushrodLengthIn < SAFE.pushrodMinIn || r.pushrodLengthIn > SAFE.pushrodMaxIn) {
-    out.push({ field: 'pushrodLengthIn', message: `Pushrod length ${in3(r.pushrodLengthIn)} is outside the usual ${in3(SAFE.pushrodMinIn)}–${in3(SAFE.pushrodMaxIn)}; check it with a checking pushrod.` });
+    out.push({
+      field: 'pushrodLengthIn',
+      message: `Pushrod length ${in3(r.pushrodLengthIn)} is outside the usual ${in3(SAFE.pushrodMinIn)}–${in3(SAFE.pushrodMaxIn)}; check it with a checking pushrod.`,
+    });
   }
   if (r.lifterPreloadIn < SAFE.preloadMinIn || r.lifterPreloadIn > SAFE.preloadMaxIn) {
-    out.push({ field: 'lifterPreloadIn', message: `Lifter preload ${in3(r.lifterPreloadIn)} is outside the usual ${in3(SAFE.preloadMinIn)}–${in3(SAFE.preloadMaxIn)} for hydraulic lifters.` });
+    out.push({
+      field: 'lifterPreloadIn',
+      message: `Lifter preload ${in3(r.lifterPreloadIn)} is outside the usual ${in3(SAFE.preloadMinIn)}–${in3(SAFE.preloadMaxIn)} for hydraulic lifters.`,
+    });
   }
   if (r.deactivationDeleteDone === false) {
-    out.push({ field: 'deactivationDeleteDone', message: 'Cylinder deactivation left in place: only with a cam made for deactivation lifters and a tune set for it.' });
+    out.push({
+      field: 'deactivationDeleteDone',
+      message:
+        'Cylinder deactivation left in place: only with a cam made for deactivation lifters and a tune set for it.',
+    });
   }
   return out;
 }

@@ -1,11 +1,16 @@
 // The customer's copy of their questionnaire result: the private link (so they need not keep the page
 // open), the promise that the shop will call, and the usual word that the shortlist is an estimate.
 // Plain text and simple HTML; every value from the customer or the shop is escaped.
-const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const escape = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 type Shop = { name: string; phone: string; email: string } | null;
 
-export function customerResultEmail({ name, resultUrl, shop }: { name: string; resultUrl: string; shop: Shop }): { subject: string; text: string; html: string } {
+export function customerResultEmail({ name, resultUrl, shop }: { name: string; resultUrl: string; shop: Shop }): {
+  subject: string;
+  text: string;
+  html: string;
+} {
   const shopName = shop?.name || 'The shop';
   const subject = `${shopName}: your cam shortlist and what happens next`;
   const call = shop?.phone ? ` If you would rather call first, the number is ${shop.phone}.` : '';

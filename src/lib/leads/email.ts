@@ -4,11 +4,24 @@ import type { LeadAnswers } from '@/lib/schemas/lead';
 
 // The note to the shop that a questionnaire lead arrived: who, how to reach them, what they answered
 // and the shortlist they saw. No link to the customer's private result (that stays theirs).
-const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const escape = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
-export function newLeadEmail({ leadId, answers, shortlist, leadsUrl }: { leadId: number; answers: LeadAnswers; shortlist: Shortlist; leadsUrl: string }): { subject: string; text: string; html: string } {
+export function newLeadEmail({
+  leadId,
+  answers,
+  shortlist,
+  leadsUrl,
+}: {
+  leadId: number;
+  answers: LeadAnswers;
+  shortlist: Shortlist;
+  leadsUrl: string;
+}): { subject: string; text: string; html: string } {
   const subject = `New questionnaire lead #${leadId}: ${answers.name}`;
-  const contact = [answers.email && `e-mail ${answers.email}`, answers.phone && `phone ${answers.phone}`].filter(Boolean).join(', ');
+  const contact = [answers.email && `e-mail ${answers.email}`, answers.phone && `phone ${answers.phone}`]
+    .filter(Boolean)
+    .join(', ');
   const words = answersInWords(answers);
   const cams = shortlist.entries.map((e) => `${e.rank}. ${e.camName}`);
   const text = [

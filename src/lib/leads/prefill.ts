@@ -27,6 +27,11 @@ export function interviewValuesFromLead(lead: LeadRecord, cards: BaselineCardOpt
     ...values,
     customerMode: 'new',
     customerId: '',
-    customer: { name: lead.name, phone: lead.phone ?? '', email: lead.email ?? '', notes: `From the at-home questionnaire (lead #${lead.id}); the build figures are assumed defaults.` },
+    customer: {
+      name: lead.name,
+      phone: lead.phone ?? '',
+      email: lead.email ?? '',
+      notes: `From the at-home questionnaire (lead #${lead.id}); the build figures are assumed defaults.`,
+    },
   };
 }

@@ -26,7 +26,11 @@ const STALL_RPM = { stock: 2000, changed: 2800 } as const;
 // did not rule out. "Not sure" gives no budget at all (undefined; the schema stores 0, "none given") rather
 // than a guessed range that would rank the dearer cams down for a limit the customer never set.
 const BUDGET_CENTS: Record<LeadAnswers['budget'], number | undefined> = {
-  'under-1500': 150_000, '1500-3000': 300_000, '3000-5000': 500_000, 'over-5000': 800_000, unsure: undefined,
+  'under-1500': 150_000,
+  '1500-3000': 300_000,
+  '3000-5000': 500_000,
+  'over-5000': 800_000,
+  unsure: undefined,
 };
 
 export function engineLiters(answers: Pick<LeadAnswers, 'engine'>): number {
@@ -34,7 +38,10 @@ export function engineLiters(answers: Pick<LeadAnswers, 'engine'>): number {
 }
 
 /** Builds the profile; null when the catalogue holds no stock cam card for that engine. */
-export function buildProfileFromAnswers(answers: LeadAnswers, baselineCards: BaselineCardOption[]): BuildProfile | null {
+export function buildProfileFromAnswers(
+  answers: LeadAnswers,
+  baselineCards: BaselineCardOption[],
+): BuildProfile | null {
   const liters = engineLiters(answers);
   const preset = ENGINE_PRESETS.find((p) => p.liters === liters);
   const card = baselineCards.find((c) => c.baselineForLiters === liters);
@@ -66,13 +73,19 @@ export function buildProfileFromAnswers(answers: LeadAnswers, baselineCards: Bas
     exhaust,
     drivetrain: {
       transmission: answers.transmission,
-      ...(answers.transmission === 'automatic' ? { stallRpm: converterChanged ? STALL_RPM.changed : STALL_RPM.stock } : { stallRpm: 0 }),
+      ...(answers.transmission === 'automatic'
+        ? { stallRpm: converterChanged ? STALL_RPM.changed : STALL_RPM.stock }
+        : { stallRpm: 0 }),
       axleRatio: gearsChanged ? vehicle.changedAxleRatio : vehicle.axleRatio,
       topGearRatio: TOP_GEAR[answers.transmission],
       tireDiameterIn: vehicle.tireDiameterIn,
     },
     // Vacuum brakes: the case where a lumpy idle costs brake assist, so the advisor keeps it in view.
-    vehicle: { weightLb: vehicle.weightLb, powerBrakes: 'vacuum', ...(answers.vehicle ? { class: answers.vehicle } : {}) },
+    vehicle: {
+      weightLb: vehicle.weightLb,
+      powerBrakes: 'vacuum',
+      ...(answers.vehicle ? { class: answers.vehicle } : {}),
+    },
     use: {
       primary: answers.use,
       idle: answers.idle,

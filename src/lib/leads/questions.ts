@@ -2,7 +2,8 @@ import type { LeadAnswers } from '@/lib/schemas/lead';
 
 // The questionnaire's questions in plain words, one screen each. The staff leads page reads the same
 // labels, so the shop sees exactly what the customer picked.
-export type ChoiceKey = 'engine' | 'vehicle' | 'use' | 'idle' | 'emissions' | 'transmission' | 'driveline' | 'exhaust' | 'budget';
+export type ChoiceKey =
+  'engine' | 'vehicle' | 'use' | 'idle' | 'emissions' | 'transmission' | 'driveline' | 'exhaust' | 'budget';
 export type ChoiceQuestion = {
   key: ChoiceKey;
   title: string;
@@ -90,7 +91,11 @@ export const CHOICE_QUESTIONS: readonly ChoiceQuestion[] = [
     title: 'What exhaust does it have?',
     options: [
       { value: 'stock', label: 'Stock', hint: 'As it came from the factory.' },
-      { value: 'headers', label: 'Headers', hint: 'Aftermarket tube pipes off the engine, with a full exhaust after them.' },
+      {
+        value: 'headers',
+        label: 'Headers',
+        hint: 'Aftermarket tube pipes off the engine, with a full exhaust after them.',
+      },
       { value: 'open', label: 'Open', hint: 'Short pipes or no mufflers.' },
     ],
   },

@@ -29,26 +29,51 @@ export type ShortlistEntry = {
 };
 export type Shortlist = { entries: ShortlistEntry[]; notice: string; engineLiters: number };
 
-const IDLE_WORDS: Record<IdleCharacter, string> = { smooth: 'idle smoothly', noticeable: 'idle with a little lope you can hear', aggressive: 'idle with a big, choppy lope' };
-const WISH_WORDS: Record<LeadAnswers['idle'], string> = { smooth: 'a smooth idle', noticeable: 'a little lope', aggressive: 'a big lope' };
-const USE_WORDS: Record<LeadAnswers['use'], string> = { daily: 'everyday driving', towing: 'towing', street: 'fun on the street', strip: 'the track' };
+const IDLE_WORDS: Record<IdleCharacter, string> = {
+  smooth: 'idle smoothly',
+  noticeable: 'idle with a little lope you can hear',
+  aggressive: 'idle with a big, choppy lope',
+};
+const WISH_WORDS: Record<LeadAnswers['idle'], string> = {
+  smooth: 'a smooth idle',
+  noticeable: 'a little lope',
+  aggressive: 'a big lope',
+};
+const USE_WORDS: Record<LeadAnswers['use'], string> = {
+  daily: 'everyday driving',
+  towing: 'towing',
+  street: 'fun on the street',
+  strip: 'the track',
+};
 
 const roundTo100 = (rpm: number) => formatNumber(Math.round(rpm / 100) * 100);
 const wholePct = (n: number) => `${Math.round(Math.abs(n))} %`;
 
-function plainReasons(r: ShopRankingEntry, answers: Pick<LeadAnswers, 'idle' | 'use'>, certified: boolean, emissionsRequired: boolean): string[] {
+function plainReasons(
+  r: ShopRankingEntry,
+  answers: Pick<LeadAnswers, 'idle' | 'use'>,
+  certified: boolean,
+  emissionsRequired: boolean,
+): string[] {
   const out: string[] = [];
   const gain = r.predicted.gainPctPeakHp;
-  out.push(gain >= 0.5 ? `About ${wholePct(gain)} more top-end power than the cam in your engine now (an estimate).` : 'About the same top-end power as the cam in your engine now (an estimate).');
+  out.push(
+    gain >= 0.5
+      ? `About ${wholePct(gain)} more top-end power than the cam in your engine now (an estimate).`
+      : 'About the same top-end power as the cam in your engine now (an estimate).',
+  );
   out.push(
     r.predicted.lowEndLossPct >= 3
       ? `It gives up about ${wholePct(r.predicted.lowEndLossPct)} of pulling power low down (below 3,500 engine rpm), which matters for ${USE_WORDS[answers.use]}.`
       : 'It keeps the low-down pulling power you have now.',
   );
-  if (r.crossoverRpm !== null) out.push(`It starts pulling harder than your current cam from about ${roundTo100(r.crossoverRpm)} engine rpm.`);
+  if (r.crossoverRpm !== null)
+    out.push(`It starts pulling harder than your current cam from about ${roundTo100(r.crossoverRpm)} engine rpm.`);
   const sound = idleCharacter(r.idleVacuumInHg);
   const matches = sound === answers.idle || (answers.idle === 'aggressive' && sound !== 'smooth');
-  out.push(`It should ${IDLE_WORDS[sound]}${matches ? ', as you asked' : ` (you asked for ${WISH_WORDS[answers.idle]})`}.`);
+  out.push(
+    `It should ${IDLE_WORDS[sound]}${matches ? ', as you asked' : ` (you asked for ${WISH_WORDS[answers.idle]})`}.`,
+  );
   out.push(
     certified
       ? 'It is certified for emissions-tested road use where its paperwork covers your vehicle.'
@@ -79,9 +104,12 @@ export function plainNeed(kind: NeedKind, suggestedStallRpm?: number): string {
 }
 
 export const PLAIN_CAUTION: Record<CautionKind, string> = {
-  emissions: 'Not certified for emissions-tested road use: where your vehicle is tested, this cam may not be allowed. Your local rules decide.',
-  brakes: 'It lowers engine vacuum at idle, which power brakes rely on. A qualified technician checks brake assist; extra brake assist may be needed.',
-  valvetrain: 'Valve springs, piston-to-valve clearance and pushrod length must be checked on your engine by a qualified technician.',
+  emissions:
+    'Not certified for emissions-tested road use: where your vehicle is tested, this cam may not be allowed. Your local rules decide.',
+  brakes:
+    'It lowers engine vacuum at idle, which power brakes rely on. A qualified technician checks brake assist; extra brake assist may be needed.',
+  valvetrain:
+    'Valve springs, piston-to-valve clearance and pushrod length must be checked on your engine by a qualified technician.',
   converter: 'A higher-stall converter changes how the vehicle creeps and pulls away from a stop.',
   tune: 'The engine must be re-tuned after the swap.',
 };
@@ -91,7 +119,13 @@ export const PLAIN_CAUTION: Record<CautionKind, string> = {
  * treated as yes) never sees a cam that is not certified: the next certified cams move up instead, and
  * the choices are numbered 1, 2, 3 as shown. The advisor only scores such a cam down; this removes it.
  */
-export function shortlistFrom(result: ShopRanking, answers: LeadAnswers, engineLiters: number, emissionsRequired: boolean, certified: (camId: string | number) => boolean): Shortlist {
+export function shortlistFrom(
+  result: ShopRanking,
+  answers: LeadAnswers,
+  engineLiters: number,
+  emissionsRequired: boolean,
+  certified: (camId: string | number) => boolean,
+): Shortlist {
   const allowed = result.rankings.filter((r) => !emissionsRequired || certified(r.camId));
   const entries = allowed.slice(0, SHORTLIST_SIZE).map((r, index) => {
     const isCertified = certified(r.camId);
@@ -124,7 +158,10 @@ export function fromPrice(cents: number): string {
  * A stored shortlist as the customer may see it now: leads saved before the emissions filter could hold a
  * non-certified cam for a vehicle that must pass; it is left out and the rest renumbered.
  */
-export function shortlistForCustomer(shortlist: Shortlist, answers: Partial<Pick<LeadAnswers, 'emissions'>>): Shortlist {
+export function shortlistForCustomer(
+  shortlist: Shortlist,
+  answers: Partial<Pick<LeadAnswers, 'emissions'>>,
+): Shortlist {
   if (answers.emissions === 'no') return shortlist;
   const entries = shortlist.entries.filter((e) => e.emissionsCertified).map((e, index) => ({ ...e, rank: index + 1 }));
   return { ...shortlist, entries };

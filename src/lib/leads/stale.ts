@@ -12,7 +12,12 @@ export function lastTouch(lead: LeadForStaleness, noteTimes: readonly (string | 
 }
 
 /** Whole days the lead has waited without contact when it is stale (at least `staleDays`), else null. */
-export function staleDays(lead: LeadForStaleness, noteTimes: readonly (string | Date)[], now: Date, limitDays: number): number | null {
+export function staleDays(
+  lead: LeadForStaleness,
+  noteTimes: readonly (string | Date)[],
+  now: Date,
+  limitDays: number,
+): number | null {
   if (lead.status !== 'new') return null;
   const waited = Math.floor((now.getTime() - lastTouch(lead, noteTimes).getTime()) / DAY_MS);
   return waited >= limitDays ? waited : null;

@@ -20,11 +20,24 @@ export type LineForAuthority = {
   description: string;
 };
 
-export type Override = { index: number; description: string; what: 'price' | 'untaxed-free-line'; cataloguePriceCents: number | null; unitPriceCents: number };
-export type AuthorityVerdict = { forbidden: FieldError[]; overrides: Override[]; discountBp: number; discountOverLimit: boolean };
+export type Override = {
+  index: number;
+  description: string;
+  what: 'price' | 'untaxed-free-line';
+  cataloguePriceCents: number | null;
+  unitPriceCents: number;
+};
+export type AuthorityVerdict = {
+  forbidden: FieldError[];
+  overrides: Override[];
+  discountBp: number;
+  discountOverLimit: boolean;
+};
 
 /** The discount as a share of the job before discounts, in basis points (rounded half up). */
-export function discountShareBp(lines: readonly Pick<LineForAuthority, 'quantity' | 'unitPriceCents' | 'discountCents'>[]): number {
+export function discountShareBp(
+  lines: readonly Pick<LineForAuthority, 'quantity' | 'unitPriceCents' | 'discountCents'>[],
+): number {
   const gross = lines.reduce((s, l) => s + lineTotalCents(l.quantity, l.unitPriceCents), 0);
   const discount = lines.reduce((s, l) => s + l.discountCents, 0);
   if (discount <= 0) return 0;
@@ -32,8 +45,10 @@ export function discountShareBp(lines: readonly Pick<LineForAuthority, 'quantity
   return divideRoundHalfUp(discount * 10_000, gross);
 }
 
-
-export function checkPriceAuthority(lines: readonly LineForAuthority[], options: { role: PricingRole; maxCounterDiscountBp: number; field: string }): AuthorityVerdict {
+export function checkPriceAuthority(
+  lines: readonly LineForAuthority[],
+  options: { role: PricingRole; maxCounterDiscountBp: number; field: string },
+): AuthorityVerdict {
   const manager = options.role === 'manager';
   const forbidden: FieldError[] = [];
   const overrides: Override[] = [];
@@ -42,16 +57,37 @@ export function checkPriceAuthority(lines: readonly LineForAuthority[], options:
     if (line.cataloguePriceCents === null) {
       // A free line is taxed goods at the counter; an untaxed one could carry a cam at a labour line's tax.
       if (line.kind !== 'other') {
-        if (!manager) forbidden.push({ field: `${at}.kind`, message: `a line that names no catalogue item is "other" (taxed) for counter staff; a ${line.kind} line needs a manager` });
-        else overrides.push({ index, description: line.description, what: 'untaxed-free-line', cataloguePriceCents: null, unitPriceCents: line.unitPriceCents });
+        if (!manager)
+          forbidden.push({
+            field: `${at}.kind`,
+            message: `a line that names no catalogue item is "other" (taxed) for counter staff; a ${line.kind} line needs a manager`,
+          });
+        else
+          overrides.push({
+            index,
+            description: line.description,
+            what: 'untaxed-free-line',
+            cataloguePriceCents: null,
+            unitPriceCents: line.unitPriceCents,
+          });
       }
       return;
     }
     const allowed = line.unitPriceCents === line.cataloguePriceCents || line.unitPriceCents === line.keptPriceCents;
     if (allowed) return;
     if (!manager) {
-      forbidden.push({ field: `${at}.unitPriceCents`, message: `counter staff sell at the catalogue price (${formatMoney(line.cataloguePriceCents)}); a different price needs a manager` });
-    } else overrides.push({ index, description: line.description, what: 'price', cataloguePriceCents: line.cataloguePriceCents, unitPriceCents: line.unitPriceCents });
+      forbidden.push({
+        field: `${at}.unitPriceCents`,
+        message: `counter staff sell at the catalogue price (${formatMoney(line.cataloguePriceCents)}); a different price needs a manager`,
+      });
+    } else
+      overrides.push({
+        index,
+        description: line.description,
+        what: 'price',
+        cataloguePriceCents: line.cataloguePriceCents,
+        unitPriceCents: line.unitPriceCents,
+      });
   });
   const discountBp = discountShareBp(lines);
   const discountOverLimit = discountBp > options.maxCounterDiscountBp;

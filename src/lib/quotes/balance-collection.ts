@@ -24,20 +24,41 @@ import type { QuoteRecord } from './types';
 // rollback over locks runs again. When nothing is left to pay, the quote closes (lifecycle via 'payment').
 
 /** A 409 that carries the quote as it is now, so the page can show what changed. */
-async function refusedWithQuote(quoteId: number, message: string, user: SessionUser, t: Transaction): Promise<HttpError> {
+async function refusedWithQuote(
+  quoteId: number,
+  message: string,
+  user: SessionUser,
+  t: Transaction,
+): Promise<HttpError> {
   const current = await getQuote(quoteId, t);
   return new HttpError(409, message, current ? { current: presentQuote(current, user) } : {});
 }
 
 /** Locks the quote (checking the caller's version and that a balance is being taken) and its payments. */
-async function withLockedBalance<T>(id: number, version: number, user: SessionUser, fn: (quote: Quote, rows: Payment[], t: Transaction) => Promise<T>): Promise<T> {
+async function withLockedBalance<T>(
+  id: number,
+  version: number,
+  user: SessionUser,
+  fn: (quote: Quote, rows: Payment[], t: Transaction) => Promise<T>,
+): Promise<T> {
   return retryOnLockContention(() =>
     db().transaction(async (t) => {
       const quote = await lockQuote(id, t);
       if (!quote) throw noQuoteWithId(id);
-      if (quote.version !== version) throw await refusedWithQuote(id, `Quote ${quote.number} changed after you opened it. Nothing was recorded; look again and retry.`, user, t);
+      if (quote.version !== version)
+        throw await refusedWithQuote(
+          id,
+          `Quote ${quote.number} changed after you opened it. Nothing was recorded; look again and retry.`,
+          user,
+          t,
+        );
       if (quote.status !== 'deposit-paid') {
-        throw await refusedWithQuote(id, `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}: a balance is taken once the deposit is paid and until the job is paid in full.`, user, t);
+        throw await refusedWithQuote(
+          id,
+          `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}: a balance is taken once the deposit is paid and until the job is paid in full.`,
+          user,
+          t,
+        );
       }
       const rows = await lockPayments(id, t);
       return fn(quote, rows, t);
@@ -73,17 +94,47 @@ export type CounterPaymentInput = { version: number; amountCents: number; method
  * At most the balance due (422 on amountCents); the caller's version guards against a double submit.
  * An open online balance checkout is expired first, so the customer cannot pay the same money twice.
  */
-export async function recordCounterPayment(id: number, input: CounterPaymentInput, user: SessionUser): Promise<QuoteRecord> {
+export async function recordCounterPayment(
+  id: number,
+  input: CounterPaymentInput,
+  user: SessionUser,
+): Promise<QuoteRecord> {
   const paymentId = await withLockedBalance(id, input.version, user, async (quote, rows, t) => {
     const due = balanceDueCents(quote.totalCents, rows);
     if (due === 0) throw await refusedWithQuote(id, `Quote ${quote.number} has nothing left to pay.`, user, t);
-    if (input.amountCents > due) throw fieldsRefused([{ field: 'amountCents', message: `at most ${due} cents is left to pay on quote ${quote.number}` }]);
+    if (input.amountCents > due)
+      throw fieldsRefused([
+        { field: 'amountCents', message: `at most ${due} cents is left to pay on quote ${quote.number}` },
+      ]);
     if (!(await expireOpenBalanceSessions(rows, t))) {
-      throw await refusedWithQuote(id, 'The customer is paying the balance online right now. Wait a minute and look again before taking money at the counter.', user, t);
+      throw await refusedWithQuote(
+        id,
+        'The customer is paying the balance online right now. Wait a minute and look again before taking money at the counter.',
+        user,
+        t,
+      );
     }
     const settings = await shopSettingsRow(t);
-    const payment = await insertCounterPayment({ quoteId: quote.id, amountCents: input.amountCents, currency: settings?.currency ?? 'usd', method: input.method, userId: user.id }, t);
-    await recordAudit({ user, action: 'payment.counter-recorded', entityType: 'quote', entityId: quote.id, after: { paymentId: payment.id, amountCents: input.amountCents, method: input.method, dueBeforeCents: due } }, t);
+    const payment = await insertCounterPayment(
+      {
+        quoteId: quote.id,
+        amountCents: input.amountCents,
+        currency: settings?.currency ?? 'usd',
+        method: input.method,
+        userId: user.id,
+      },
+      t,
+    );
+    await recordAudit(
+      {
+        user,
+        action: 'payment.counter-recorded',
+        entityType: 'quote',
+        entityId: quote.id,
+        after: { paymentId: payment.id, amountCents: input.amountCents, method: input.method, dueBeforeCents: due },
+      },
+      t,
+    );
     // The quote's version moves with every payment, so the same form submitted twice records once.
     await saveQuote(quote, t, { touch: true });
     await closeWhenPaid(quote, { user }, payment.id, t);
@@ -104,17 +155,33 @@ export async function requestBalance(id: number, input: { version: number }, use
       const due = balanceDueCents(quote.totalCents, rows);
       if (due === 0) throw await refusedWithQuote(id, `Quote ${quote.number} has nothing left to pay.`, user, t);
       const record = (await getQuote(id, t))!;
-      if (!record.customer.email) throw fieldsRefused([{ field: 'customer.email', message: 'the customer has no e-mail address; add one, or take the balance at the counter' }]);
+      if (!record.customer.email)
+        throw fieldsRefused([
+          {
+            field: 'customer.email',
+            message: 'the customer has no e-mail address; add one, or take the balance at the counter',
+          },
+        ]);
       const token = randomToken();
       await addQuoteLink(quote.id, hashToken(token), 'balance', t);
       quote.set({ balanceRequestedAt: new Date() });
       await saveQuote(quote, t);
-      await recordAudit({ user, action: 'quote.balance-requested', entityType: 'quote', entityId: quote.id, after: { to: record.customer.email, balanceCents: due } }, t);
+      await recordAudit(
+        {
+          user,
+          action: 'quote.balance-requested',
+          entityType: 'quote',
+          entityId: quote.id,
+          after: { to: record.customer.email, balanceCents: due },
+        },
+        t,
+      );
       const settings = await shopSettingsRow(t);
       await sendMail(await balanceDueMail({ ...record, balanceDueCents: due }, settings, `${appBaseUrl()}/q/${token}`));
     });
   } catch (error) {
-    if (error instanceof MailError) throw mailNotSent('The e-mail could not be sent, so nothing was changed. Try again in a moment.');
+    if (error instanceof MailError)
+      throw mailNotSent('The e-mail could not be sent, so nothing was changed. Try again in a moment.');
     throw error;
   }
   return (await getQuote(id))!;

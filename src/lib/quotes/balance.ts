@@ -32,7 +32,12 @@ export function moneyIn(payments: readonly CountablePayment[]): MoneyIn {
     else depositsCents += p.amountCents;
     refundedCents += p.refundedCents;
   }
-  return { depositsCents, balancePaidCents, refundedCents, netPaidCents: depositsCents + balancePaidCents - refundedCents };
+  return {
+    depositsCents,
+    balancePaidCents,
+    refundedCents,
+    netPaidCents: depositsCents + balancePaidCents - refundedCents,
+  };
 }
 
 /** What the customer still owes on a quote of totalCents. */

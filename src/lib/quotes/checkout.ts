@@ -26,19 +26,34 @@ type Locked = CheckoutStarted | HttpError;
 // An open session this close to its own expiry is replaced rather than handed out again.
 const REUSE_MARGIN_SECONDS = 10 * 60;
 
-const providerDown = () => new HttpError(502, 'The payment service did not answer. Nothing was charged; please try again in a moment.');
-const noPaymentPage = () => new HttpError(502, 'The payment service gave no payment page. Nothing was charged; please try again.');
+const providerDown = () =>
+  new HttpError(502, 'The payment service did not answer. Nothing was charged; please try again in a moment.');
+const noPaymentPage = () =>
+  new HttpError(502, 'The payment service gave no payment page. Nothing was charged; please try again.');
 
 /** The deposit payment that counts: paid (or partly refunded) and not a refunded duplicate. */
-export const heldDeposit = (rows: readonly Payment[]) => rows.find((p) => p.purpose !== 'balance' && p.duplicateOfPaymentId === null && HELD.includes(p.status));
+export const heldDeposit = (rows: readonly Payment[]) =>
+  rows.find((p) => p.purpose !== 'balance' && p.duplicateOfPaymentId === null && HELD.includes(p.status));
 
 function depositState(quote: Quote, rows: readonly Payment[], paymentConfirming = false): CheckoutState {
   const depositPaid = Boolean(heldDeposit(rows)) || quote.status === 'deposit-paid';
-  return { status: quote.status, depositPaid, validUntil: quote.validUntil ?? null, expired: isPastValidUntil(quote.validUntil ?? null), paymentConfirming };
+  return {
+    status: quote.status,
+    depositPaid,
+    validUntil: quote.validUntil ?? null,
+    expired: isPastValidUntil(quote.validUntil ?? null),
+    paymentConfirming,
+  };
 }
 
 function balanceState(quote: Quote, rows: readonly Payment[], paymentConfirming = false): CheckoutState {
-  return { status: quote.status, depositPaid: rows.some((p) => p.purpose === 'deposit' && counts(p)), validUntil: quote.validUntil ?? null, expired: isPastValidUntil(quote.validUntil ?? null), paymentConfirming };
+  return {
+    status: quote.status,
+    depositPaid: rows.some((p) => p.purpose === 'deposit' && counts(p)),
+    validUntil: quote.validUntil ?? null,
+    expired: isPastValidUntil(quote.validUntil ?? null),
+    paymentConfirming,
+  };
 }
 
 /**
@@ -46,7 +61,12 @@ function balanceState(quote: Quote, rows: readonly Payment[], paymentConfirming 
  * that is not about to lapse is handed out again; any other is expired through the SDK first. Returns the
  * answer to give (that session, "being confirmed", the provider down), or null to open a new session.
  */
-async function settleOpenSessions(rows: readonly Payment[], amountCents: number, confirming: (message: string) => HttpError, t: Transaction): Promise<Locked | null> {
+async function settleOpenSessions(
+  rows: readonly Payment[],
+  amountCents: number,
+  confirming: (message: string) => HttpError,
+  t: Transaction,
+): Promise<Locked | null> {
   for (const pending of rows.filter((p) => p.status === 'pending' && p.providerSessionId)) {
     let session: Stripe.Checkout.Session;
     try {
@@ -54,8 +74,14 @@ async function settleOpenSessions(rows: readonly Payment[], amountCents: number,
     } catch {
       return providerDown();
     }
-    if (session.status === 'complete') return confirming('Your payment has reached the payment service and is being confirmed. Refresh this page in a minute; you will not be charged twice.');
-    const fits = session.amount_total === amountCents && (session.currency ?? '') === pending.currency && session.expires_at - Date.now() / 1000 > REUSE_MARGIN_SECONDS;
+    if (session.status === 'complete')
+      return confirming(
+        'Your payment has reached the payment service and is being confirmed. Refresh this page in a minute; you will not be charged twice.',
+      );
+    const fits =
+      session.amount_total === amountCents &&
+      (session.currency ?? '') === pending.currency &&
+      session.expires_at - Date.now() / 1000 > REUSE_MARGIN_SECONDS;
     if (session.status === 'open' && fits && session.url) return { url: session.url, reused: true };
     if (session.status === 'open') {
       try {
@@ -70,10 +96,21 @@ async function settleOpenSessions(rows: readonly Payment[], amountCents: number,
   return null;
 }
 
-type NewSession = { quote: Quote; token: string; purpose: PaymentPurpose; amountCents: number; currency: string; email: string | null; attempt: number };
+type NewSession = {
+  quote: Quote;
+  token: string;
+  purpose: PaymentPurpose;
+  amountCents: number;
+  currency: string;
+  email: string | null;
+  attempt: number;
+};
 
 /** A new hosted checkout for `amountCents`, recorded as a pending payment of the quote. */
-async function openSession({ quote, token, purpose, amountCents, currency, email, attempt }: NewSession, t: Transaction): Promise<Locked> {
+async function openSession(
+  { quote, token, purpose, amountCents, currency, email, attempt }: NewSession,
+  t: Transaction,
+): Promise<Locked> {
   const back = `${appBaseUrl()}/q/${token}`;
   const balance = purpose === 'balance';
   const metadata = { quoteId: String(quote.id), quoteNumber: quote.number, ...(balance ? { purpose: 'balance' } : {}) };
@@ -82,7 +119,16 @@ async function openSession({ quote, token, purpose, amountCents, currency, email
     session = await payments().checkout.sessions.create(
       {
         mode: 'payment',
-        line_items: [{ quantity: 1, price_data: { currency, unit_amount: amountCents, product_data: { name: `${balance ? 'Balance' : 'Deposit'} for quote ${quote.number}` } } }],
+        line_items: [
+          {
+            quantity: 1,
+            price_data: {
+              currency,
+              unit_amount: amountCents,
+              product_data: { name: `${balance ? 'Balance' : 'Deposit'} for quote ${quote.number}` },
+            },
+          },
+        ],
         success_url: `${back}?paid=${balance ? 'balance' : '1'}`,
         cancel_url: `${back}?cancelled=${balance ? 'balance' : '1'}`,
         client_reference_id: String(quote.id),
@@ -91,27 +137,47 @@ async function openSession({ quote, token, purpose, amountCents, currency, email
         ...(email ? { customer_email: email } : {}),
       },
       // A retried transaction asks for the same session again instead of opening a second one.
-      { idempotencyKey: `${balance ? 'balance' : 'checkout'}-${quote.number}-${attempt}-${hashToken(token).slice(0, 16)}` },
+      {
+        idempotencyKey: `${balance ? 'balance' : 'checkout'}-${quote.number}-${attempt}-${hashToken(token).slice(0, 16)}`,
+      },
     );
   } catch {
     return providerDown();
   }
   if (!session.url) return noPaymentPage();
   await insertPendingCheckout({ quoteId: quote.id, sessionId: session.id, amountCents, currency, purpose }, t);
-  await recordAudit({ actor: 'customer-link', action: balance ? 'quote.balance-checkout-started' : 'quote.checkout-started', entityType: 'quote', entityId: quote.id, after: { session: session.id, amountCents } }, t);
+  await recordAudit(
+    {
+      actor: 'customer-link',
+      action: balance ? 'quote.balance-checkout-started' : 'quote.checkout-started',
+      entityType: 'quote',
+      entityId: quote.id,
+      after: { session: session.id, amountCents },
+    },
+    t,
+  );
   return { url: session.url, reused: false };
 }
 
 /** Runs a locked checkout step; anything unexpected is a 503 that charged nothing. */
-async function checkoutFor(token: string, what: string, step: (quoteId: number, currency: string, email: string | null, t: Transaction) => Promise<Locked>): Promise<CheckoutStarted> {
+async function checkoutFor(
+  token: string,
+  what: string,
+  step: (quoteId: number, currency: string, email: string | null, t: Transaction) => Promise<Locked>,
+): Promise<CheckoutStarted> {
   const found = await getQuoteByToken(token);
   if (!found) throw linkOpensNothing();
   let result: Locked;
   try {
-    result = await retryOnLockContention(() => db().transaction((t) => step(found.quote.id, found.shop.currency, found.quote.customer.email, t)));
+    result = await retryOnLockContention(() =>
+      db().transaction((t) => step(found.quote.id, found.shop.currency, found.quote.customer.email, t)),
+    );
   } catch (error) {
     console.error(`[${what}] checkout failed`, error);
-    throw new HttpError(503, 'We could not start the payment just now. Nothing was charged; please try again in a moment.');
+    throw new HttpError(
+      503,
+      'We could not start the payment just now. Nothing was charged; please try again in a moment.',
+    );
   }
   if (result instanceof HttpError) throw result;
   return result;
@@ -127,17 +193,35 @@ export function startCheckout(token: string): Promise<CheckoutStarted> {
     const quote = await lockQuote(quoteId, t);
     if (!quote) return linkOpensNothing();
     const rows = await lockPayments(quoteId, t);
-    const refuse = (message: string, confirming = false) => stateRefused(message, { state: depositState(quote, rows, confirming) });
-    if (depositState(quote, rows).depositPaid) return refuse(`The deposit for quote ${quote.number} has already been paid; nothing more is due online.`);
-    if (quote.status === 'replaced') return refuse(`Quote ${quote.number} was replaced by a newer quote; please pay from the newer quote's link we e-mailed you.`);
-    if (!isOpen(quote.status)) return refuse(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be paid online. Please call the shop.`);
+    const refuse = (message: string, confirming = false) =>
+      stateRefused(message, { state: depositState(quote, rows, confirming) });
+    if (depositState(quote, rows).depositPaid)
+      return refuse(`The deposit for quote ${quote.number} has already been paid; nothing more is due online.`);
+    if (quote.status === 'replaced')
+      return refuse(
+        `Quote ${quote.number} was replaced by a newer quote; please pay from the newer quote's link we e-mailed you.`,
+      );
+    if (!isOpen(quote.status))
+      return refuse(
+        `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be paid online. Please call the shop.`,
+      );
     if (isPastValidUntil(quote.validUntil ?? null)) {
-      return refuse(`Quote ${quote.number} was valid until ${quote.validUntil} and can no longer be accepted or paid. Ask the shop for a fresh quote.`);
+      return refuse(
+        `Quote ${quote.number} was valid until ${quote.validUntil} and can no longer be accepted or paid. Ask the shop for a fresh quote.`,
+      );
     }
     if (quote.depositCents <= 0) return refuse('This quote has no deposit to pay.');
-    const open = await settleOpenSessions(rows.filter((p) => p.purpose !== 'balance'), quote.depositCents, (message) => refuse(message, true), t);
+    const open = await settleOpenSessions(
+      rows.filter((p) => p.purpose !== 'balance'),
+      quote.depositCents,
+      (message) => refuse(message, true),
+      t,
+    );
     if (open) return open;
-    return openSession({ quote, token, purpose: 'deposit', amountCents: quote.depositCents, currency, email, attempt: rows.length + 1 }, t);
+    return openSession(
+      { quote, token, purpose: 'deposit', amountCents: quote.depositCents, currency, email, attempt: rows.length + 1 },
+      t,
+    );
   });
 }
 
@@ -147,13 +231,27 @@ export function startBalanceCheckout(token: string): Promise<CheckoutStarted> {
     const quote = await lockQuote(quoteId, t);
     if (!quote) return linkOpensNothing();
     const rows = await lockPayments(quoteId, t);
-    const refuse = (message: string, confirming = false) => stateRefused(message, { state: balanceState(quote, rows, confirming) });
+    const refuse = (message: string, confirming = false) =>
+      stateRefused(message, { state: balanceState(quote, rows, confirming) });
     const due = balanceDueCents(quote.totalCents, rows);
-    if (quote.status === 'closed' || (quote.status === 'deposit-paid' && due === 0)) return refuse(`Quote ${quote.number} is paid in full; nothing more is due.`);
-    if (quote.status !== 'deposit-paid') return refuse(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; there is no balance to pay online. Please call the shop.`);
-    if (!quote.balanceRequestedAt) return refuse(`The balance of quote ${quote.number} is paid when the job is done; we will e-mail you then.`);
-    const open = await settleOpenSessions(rows.filter((p) => p.purpose === 'balance'), due, (message) => refuse(message, true), t);
+    if (quote.status === 'closed' || (quote.status === 'deposit-paid' && due === 0))
+      return refuse(`Quote ${quote.number} is paid in full; nothing more is due.`);
+    if (quote.status !== 'deposit-paid')
+      return refuse(
+        `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; there is no balance to pay online. Please call the shop.`,
+      );
+    if (!quote.balanceRequestedAt)
+      return refuse(`The balance of quote ${quote.number} is paid when the job is done; we will e-mail you then.`);
+    const open = await settleOpenSessions(
+      rows.filter((p) => p.purpose === 'balance'),
+      due,
+      (message) => refuse(message, true),
+      t,
+    );
     if (open) return open;
-    return openSession({ quote, token, purpose: 'balance', amountCents: due, currency, email, attempt: rows.length + 1 }, t);
+    return openSession(
+      { quote, token, purpose: 'balance', amountCents: due, currency, email, attempt: rows.length + 1 },
+      t,
+    );
   });
 }

@@ -26,10 +26,16 @@ export type CompletedSession = {
 export function sessionMismatches(session: CompletedSession, asked: AskedFor): string[] {
   const problems: string[] = [];
   const quote = String(asked.quoteId);
-  if (session.metadata?.quoteId !== quote) problems.push(`the session names quote ${session.metadata?.quoteId ?? 'none'}, not quote ${quote}`);
-  if (session.client_reference_id !== null && session.client_reference_id !== quote) problems.push(`the session's reference is ${session.client_reference_id}, not quote ${quote}`);
-  if (session.amount_total !== asked.amountCents) problems.push(`the session charged ${session.amount_total ?? 'nothing'} cents, the deposit asked for was ${asked.amountCents}`);
-  if ((session.currency ?? '').toLowerCase() !== asked.currency.toLowerCase()) problems.push(`the session is in ${session.currency ?? 'no currency'}, not ${asked.currency}`);
+  if (session.metadata?.quoteId !== quote)
+    problems.push(`the session names quote ${session.metadata?.quoteId ?? 'none'}, not quote ${quote}`);
+  if (session.client_reference_id !== null && session.client_reference_id !== quote)
+    problems.push(`the session's reference is ${session.client_reference_id}, not quote ${quote}`);
+  if (session.amount_total !== asked.amountCents)
+    problems.push(
+      `the session charged ${session.amount_total ?? 'nothing'} cents, the deposit asked for was ${asked.amountCents}`,
+    );
+  if ((session.currency ?? '').toLowerCase() !== asked.currency.toLowerCase())
+    problems.push(`the session is in ${session.currency ?? 'no currency'}, not ${asked.currency}`);
   return problems;
 }
 

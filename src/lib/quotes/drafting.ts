@@ -3,7 +3,16 @@ import { rankForShop } from '@/lib/ranking/rank-for-shop';
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
-import { draftSources, getQuote, insertDraft, lockQuote, presentQuote, saveQuote, shopSettingsRow, writeLines } from '@/lib/db/queries/quotes';
+import {
+  draftSources,
+  getQuote,
+  insertDraft,
+  lockQuote,
+  presentQuote,
+  saveQuote,
+  shopSettingsRow,
+  writeLines,
+} from '@/lib/db/queries/quotes';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from '@/lib/db/queries/quote-lines';
 import type { FieldError } from '@/lib/http/responses';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
@@ -33,22 +42,51 @@ async function withPriceAuthority(write: () => Promise<WriteOutcome<QuoteRecord>
 }
 
 /** What a manager allowed beyond the counter's authority, one audit row each. */
-async function auditAuthority(verdict: AuthorityVerdict, limitBp: number, user: SessionUser, quoteId: number, t: Transaction) {
+async function auditAuthority(
+  verdict: AuthorityVerdict,
+  limitBp: number,
+  user: SessionUser,
+  quoteId: number,
+  t: Transaction,
+) {
   if (verdict.overrides.length) {
-    await recordAudit({ user, action: 'quote.price-override', entityType: 'quote', entityId: quoteId, after: { overrides: verdict.overrides } }, t);
+    await recordAudit(
+      {
+        user,
+        action: 'quote.price-override',
+        entityType: 'quote',
+        entityId: quoteId,
+        after: { overrides: verdict.overrides },
+      },
+      t,
+    );
   }
   if (verdict.discountOverLimit) {
-    await recordAudit({ user, action: 'quote.discount-over-limit', entityType: 'quote', entityId: quoteId, after: { discountBp: verdict.discountBp, counterLimitBp: limitBp } }, t);
+    await recordAudit(
+      {
+        user,
+        action: 'quote.discount-over-limit',
+        entityType: 'quote',
+        entityId: quoteId,
+        after: { discountBp: verdict.discountBp, counterLimitBp: limitBp },
+      },
+      t,
+    );
   }
 }
 
 async function requiredSettings(t: Transaction) {
   const settings = await shopSettingsRow(t);
-  if (!settings) throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
+  if (!settings)
+    throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
   return settings;
 }
 
-const policyOf = (s: { depositPercentBp: number; depositMinCents: number; depositMaxCents: number }) => ({ percentBp: s.depositPercentBp, minCents: s.depositMinCents, maxCents: s.depositMaxCents });
+const policyOf = (s: { depositPercentBp: number; depositMinCents: number; depositMaxCents: number }) => ({
+  percentBp: s.depositPercentBp,
+  minCents: s.depositMinCents,
+  maxCents: s.depositMaxCents,
+});
 
 /** A draft from a saved build and a chosen cam: the cam, what the need rules add, the staff's extra lines. */
 export async function createQuoteFromBuild(input: CreateQuoteInput, user: SessionUser): Promise<QuoteRecord> {
@@ -56,28 +94,63 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
   const errors: FieldError[] = [];
   if (!build) errors.push({ field: 'buildId', message: `there is no build with id ${input.buildId}` });
   if (!cam) errors.push({ field: 'camId', message: `there is no cam with id ${input.camId}` });
-  else if (cam.isFactoryBaseline) errors.push({ field: 'camId', message: 'a factory baseline card is a reference, not a cam the shop sells' });
+  else if (cam.isFactoryBaseline)
+    errors.push({ field: 'camId', message: 'a factory baseline card is a reference, not a cam the shop sells' });
   if (errors.length || !build || !cam) throw fieldsRefused(errors);
   const profile = BuildProfileSchema.safeParse(build.profile);
-  if (!profile.success) throw fieldsRefused([{ field: 'buildId', message: 'the saved build is incomplete; finish the interview first' }]);
+  if (!profile.success)
+    throw fieldsRefused([{ field: 'buildId', message: 'the saved build is incomplete; finish the interview first' }]);
   const ranked = await rankForShop(profile.data, { camIds: [cam.id], includeCurves: false });
   const ranking = ranked.ok ? ranked.result.rankings.find((r) => String(r.camId) === String(cam.id)) : undefined;
-  if (!ranking) throw fieldsRefused([{ field: 'camId', message: 'the advisor could not rank this cam for this build' }]);
+  if (!ranking)
+    throw fieldsRefused([{ field: 'camId', message: 'the advisor could not rank this cam for this build' }]);
 
   for (let attempt = 0; ; attempt++) {
-    const outcome = await withPriceAuthority(() => runWrite(async (t) => {
-      const settings = await requiredSettings(t);
-      // The very lines the shortlist priced (jobLines), so the draft's pre-tax total is its job price.
-      const lines: LineDraft[] = jobLines({ id: cam.id, description: `${cam.sku} ${cam.name}`, priceCents: cam.priceCents }, ranking.neededItems, settings.laborRateCents);
-      const extra = await resolveLines(input.extraLines ?? [], { field: 'extraLines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user }, t);
-      lines.push(...extra.lines);
-      const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));
-      const id = await insertDraft({ customerId: build.customerId, buildId: build.id, camId: cam.id, createdByUserId: user.id, totals }, lines, t);
-      const record = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.created', entityType: 'quote', entityId: id, before: null, after: { number: record.number, totalCents: record.totalCents } }, t);
-      await auditAuthority(extra.verdict, settings.maxCounterDiscountBp, user, id, t);
-      return { record };
-    }, { uniqueFields: { number: 'number' } }));
+    const outcome = await withPriceAuthority(() =>
+      runWrite(
+        async (t) => {
+          const settings = await requiredSettings(t);
+          // The very lines the shortlist priced (jobLines), so the draft's pre-tax total is its job price.
+          const lines: LineDraft[] = jobLines(
+            { id: cam.id, description: `${cam.sku} ${cam.name}`, priceCents: cam.priceCents },
+            ranking.neededItems,
+            settings.laborRateCents,
+          );
+          const extra = await resolveLines(
+            input.extraLines ?? [],
+            {
+              field: 'extraLines',
+              laborRateCents: settings.laborRateCents,
+              maxCounterDiscountBp: settings.maxCounterDiscountBp,
+              user,
+            },
+            t,
+          );
+          lines.push(...extra.lines);
+          const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));
+          const id = await insertDraft(
+            { customerId: build.customerId, buildId: build.id, camId: cam.id, createdByUserId: user.id, totals },
+            lines,
+            t,
+          );
+          const record = (await getQuote(id, t))!;
+          await recordAudit(
+            {
+              user,
+              action: 'quote.created',
+              entityType: 'quote',
+              entityId: id,
+              before: null,
+              after: { number: record.number, totalCents: record.totalCents },
+            },
+            t,
+          );
+          await auditAuthority(extra.verdict, settings.maxCounterDiscountBp, user, id, t);
+          return { record };
+        },
+        { uniqueFields: { number: 'number' } },
+      ),
+    );
     // Two creators racing for the same number: the loser tries again with the next one.
     const numberClash = !outcome.ok && outcome.reason === 'invalid' && outcome.errors.some((e) => e.field === 'number');
     if (!numberClash || attempt >= 3) return recordOrThrow(outcome, (r) => presentQuote(r, user));
@@ -86,43 +159,80 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
 
 /** Lines (replaced as a whole) and the validity date, while the quote is a draft; totals follow. */
 export async function updateQuote(id: number, patch: QuotePatch, user: SessionUser): Promise<QuoteRecord> {
-  const outcome = await withPriceAuthority(() => runWrite(
-    async (t) => {
-      const quote = await lockQuote(id, t);
-      if (!quote) throw notFound();
-      if (quote.version !== patch.version) throw conflict(await getQuote(id, t));
-      // Lines change only on a draft (a sent quote is revised instead); the valid-until day may be moved
-      // while the customer can still act on the quote.
-      if (patch.lines && quote.status !== 'draft') throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft's lines can be changed. Revise it for new lines.`);
-      if (!['draft', 'sent', 'accepted'].includes(quote.status)) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be changed.`);
-      if (patch.validUntil !== undefined && quote.status !== 'draft' && (patch.validUntil === null || patch.validUntil < new Date().toISOString().slice(0, 10))) {
-        throw invalid([{ field: 'validUntil', message: 'a sent quote needs a valid-until day of today or later' }]);
-      }
-      const before = await getQuote(id, t);
-      const settings = await requiredSettings(t);
-      let touched = false;
-      if (patch.lines) {
-        // A price already on the quote (a manager's, or last month's catalogue price) may stay as it is.
-        const kept = new Map<string, number>();
-        for (const l of before?.lines ?? []) {
-          const key = catalogueKey(l);
-          if (key) kept.set(key, l.unitPriceCents);
+  const outcome = await withPriceAuthority(() =>
+    runWrite(
+      async (t) => {
+        const quote = await lockQuote(id, t);
+        if (!quote) throw notFound();
+        if (quote.version !== patch.version) throw conflict(await getQuote(id, t));
+        // Lines change only on a draft (a sent quote is revised instead); the valid-until day may be moved
+        // while the customer can still act on the quote.
+        if (patch.lines && quote.status !== 'draft')
+          throw refused(
+            `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft's lines can be changed. Revise it for new lines.`,
+          );
+        if (!['draft', 'sent', 'accepted'].includes(quote.status))
+          throw refused(
+            `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()} and can no longer be changed.`,
+          );
+        if (
+          patch.validUntil !== undefined &&
+          quote.status !== 'draft' &&
+          (patch.validUntil === null || patch.validUntil < new Date().toISOString().slice(0, 10))
+        ) {
+          throw invalid([{ field: 'validUntil', message: 'a sent quote needs a valid-until day of today or later' }]);
         }
-        const { lines, verdict } = await resolveLines(patch.lines, { field: 'lines', laborRateCents: settings.laborRateCents, maxCounterDiscountBp: settings.maxCounterDiscountBp, user, kept }, t);
-        await writeLines(id, lines, t);
-        await auditAuthority(verdict, settings.maxCounterDiscountBp, user, id, t);
-        const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
-        quote.set({ subtotalCents: totals.subtotalCents, taxCents: totals.taxCents, totalCents: totals.totalCents, depositCents: totals.depositCents });
-        touched = true;
-      }
-      if (patch.validUntil !== undefined) quote.set({ validUntil: patch.validUntil });
-      if (!touched && !quote.changed()) return { record: before!, changed: false };
-      await saveQuote(quote, t, { touch: touched });
-      const after = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.updated', entityType: 'quote', entityId: id, before: { totalCents: before?.totalCents, validUntil: before?.validUntil }, after: { totalCents: after.totalCents, validUntil: after.validUntil } }, t);
-      return { record: after };
-    },
-    { reload: () => getQuote(id) },
-  ));
+        const before = await getQuote(id, t);
+        const settings = await requiredSettings(t);
+        let touched = false;
+        if (patch.lines) {
+          // A price already on the quote (a manager's, or last month's catalogue price) may stay as it is.
+          const kept = new Map<string, number>();
+          for (const l of before?.lines ?? []) {
+            const key = catalogueKey(l);
+            if (key) kept.set(key, l.unitPriceCents);
+          }
+          const { lines, verdict } = await resolveLines(
+            patch.lines,
+            {
+              field: 'lines',
+              laborRateCents: settings.laborRateCents,
+              maxCounterDiscountBp: settings.maxCounterDiscountBp,
+              user,
+              kept,
+            },
+            t,
+          );
+          await writeLines(id, lines, t);
+          await auditAuthority(verdict, settings.maxCounterDiscountBp, user, id, t);
+          const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
+          quote.set({
+            subtotalCents: totals.subtotalCents,
+            taxCents: totals.taxCents,
+            totalCents: totals.totalCents,
+            depositCents: totals.depositCents,
+          });
+          touched = true;
+        }
+        if (patch.validUntil !== undefined) quote.set({ validUntil: patch.validUntil });
+        if (!touched && !quote.changed()) return { record: before!, changed: false };
+        await saveQuote(quote, t, { touch: touched });
+        const after = (await getQuote(id, t))!;
+        await recordAudit(
+          {
+            user,
+            action: 'quote.updated',
+            entityType: 'quote',
+            entityId: id,
+            before: { totalCents: before?.totalCents, validUntil: before?.validUntil },
+            after: { totalCents: after.totalCents, validUntil: after.validUntil },
+          },
+          t,
+        );
+        return { record: after };
+      },
+      { reload: () => getQuote(id) },
+    ),
+  );
   return recordOrThrow(outcome, (r) => presentQuote(r, user));
 }

@@ -17,7 +17,13 @@ import { envelope, mailShop } from './quote-notices';
 // transaction, so running the command twice — or on two machines at once — reminds each customer once,
 // and a refused e-mail leaves the quote unstamped for the next run.
 
-export type ReminderRun = { today: string; through: string; reminded: string[]; withoutEmail: string[]; failed: string[] };
+export type ReminderRun = {
+  today: string;
+  through: string;
+  reminded: string[];
+  withoutEmail: string[];
+  failed: string[];
+};
 
 /** Open quotes valid through today … today + withinDays (UTC days) that were never reminded. */
 export async function remindExpiringQuotes(options: { now?: Date; withinDays?: number } = {}): Promise<ReminderRun> {
@@ -35,10 +41,30 @@ export async function remindExpiringQuotes(options: { now?: Date; withinDays?: n
         const token = randomToken();
         await addQuoteLink(id, hashToken(token), 'reminder', t);
         await stampReminded(id, now, t);
-        await recordAudit({ actor: 'expiry-reminder', action: 'quote.expiry-reminded', entityType: 'quote', entityId: id, after: { to: record.customer.email, validUntil: quote.validUntil } }, t);
+        await recordAudit(
+          {
+            actor: 'expiry-reminder',
+            action: 'quote.expiry-reminded',
+            entityType: 'quote',
+            entityId: id,
+            after: { to: record.customer.email, validUntil: quote.validUntil },
+          },
+          t,
+        );
         const shop = mailShop(await shopSettingsRow(t));
-        const props = { shop, customerName: record.customer.name, number: record.number, totalCents: record.totalCents, depositCents: record.depositCents, validUntil: quote.validUntil!, link: `${appBaseUrl()}/q/${token}` };
-        await sendMail({ ...envelope(shop, record.customer.email), ...(await renderMail(expiryReminderSubject(props), createElement(ExpiryReminderEmail, props))) });
+        const props = {
+          shop,
+          customerName: record.customer.name,
+          number: record.number,
+          totalCents: record.totalCents,
+          depositCents: record.depositCents,
+          validUntil: quote.validUntil!,
+          link: `${appBaseUrl()}/q/${token}`,
+        };
+        await sendMail({
+          ...envelope(shop, record.customer.email),
+          ...(await renderMail(expiryReminderSubject(props), createElement(ExpiryReminderEmail, props))),
+        });
         return 'reminded' as const;
       });
       if (outcome === 'reminded') run.reminded.push(number);

@@ -32,21 +32,45 @@ export function jobItemLine(item: JobItem, laborRateCents: number): JobLine | nu
   if (item.type === 'part' && item.part) {
     const p = item.part;
     return {
-      kind: p.category === 'tune' ? 'tune' : 'part', camId: null, partId: p.id, laborOperationId: null,
-      description: `${p.sku} ${p.name}`, quantity: item.quantity, unitPriceCents: p.priceCents, discountCents: 0,
+      kind: p.category === 'tune' ? 'tune' : 'part',
+      camId: null,
+      partId: p.id,
+      laborOperationId: null,
+      description: `${p.sku} ${p.name}`,
+      quantity: item.quantity,
+      unitPriceCents: p.priceCents,
+      discountCents: 0,
     };
   }
   if (item.type === 'labor' && item.laborOperation) {
     const op = item.laborOperation;
     const { quantity, unitPriceCents } = laborLine(op.hours, item.quantity, laborRateCents);
-    return { kind: 'labor', camId: null, partId: null, laborOperationId: op.id, description: op.name, quantity, unitPriceCents, discountCents: 0 };
+    return {
+      kind: 'labor',
+      camId: null,
+      partId: null,
+      laborOperationId: op.id,
+      description: op.name,
+      quantity,
+      unitPriceCents,
+      discountCents: 0,
+    };
   }
   return null;
 }
 
 /** The cam line, then one line per item, in the rules' order. */
 export function jobLines(cam: JobCam, items: readonly JobItem[], laborRateCents: number): JobLine[] {
-  const camLine: JobLine = { kind: 'cam', camId: cam.id, partId: null, laborOperationId: null, description: cam.description, quantity: 1, unitPriceCents: cam.priceCents, discountCents: 0 };
+  const camLine: JobLine = {
+    kind: 'cam',
+    camId: cam.id,
+    partId: null,
+    laborOperationId: null,
+    description: cam.description,
+    quantity: 1,
+    unitPriceCents: cam.priceCents,
+    discountCents: 0,
+  };
   return [camLine, ...items.map((item) => jobItemLine(item, laborRateCents)).filter((l): l is JobLine => l !== null)];
 }
 

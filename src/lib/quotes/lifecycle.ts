@@ -4,7 +4,17 @@
 // transition route cannot fake a payment or skip the e-mail that sending is.
 
 /** Every state a quote can be in (the database enum follows this list; see the lifecycle migration). */
-export const QUOTE_STATE_LIST = ['draft', 'sent', 'accepted', 'deposit-paid', 'closed', 'declined', 'expired', 'cancelled', 'replaced'] as const;
+export const QUOTE_STATE_LIST = [
+  'draft',
+  'sent',
+  'accepted',
+  'deposit-paid',
+  'closed',
+  'declined',
+  'expired',
+  'cancelled',
+  'replaced',
+] as const;
 export type QuoteStatus = (typeof QUOTE_STATE_LIST)[number];
 
 /** 'staff': the transition route. 'send' | 'payment' | 'refund' | 'revise': only the flow that does it. */
@@ -25,11 +35,31 @@ const EDGES: readonly Edge[] = [
   { from: 'deposit-paid', to: 'closed', via: 'staff', why: 'the job is done and nothing is left to pay' },
   ...OPEN.map((from): Edge => ({ from, to: 'declined', via: 'staff', why: 'the customer said no' })),
   ...OPEN.map((from): Edge => ({ from, to: 'expired', via: 'staff', why: 'past its valid-until day' })),
-  ...(['draft', ...OPEN] as QuoteStatus[]).map((from): Edge => ({ from, to: 'cancelled', via: 'staff', why: 'withdrawn by the shop' })),
+  ...(['draft', ...OPEN] as QuoteStatus[]).map((from): Edge => ({
+    from,
+    to: 'cancelled',
+    via: 'staff',
+    why: 'withdrawn by the shop',
+  })),
   // A paid job ends only through the refund of its deposit: money held is never silently dropped.
-  ...(['deposit-paid', 'accepted'] as QuoteStatus[]).map((from): Edge => ({ from, to: 'cancelled', via: 'refund', why: 'deposit refunded, job cancelled' })),
-  ...(['deposit-paid', 'accepted'] as QuoteStatus[]).map((from): Edge => ({ from, to: 'sent', via: 'refund', why: 'deposit refunded, quote open again' })),
-  ...(['sent', 'accepted', 'expired', 'declined'] as QuoteStatus[]).map((from): Edge => ({ from, to: 'replaced', via: 'revise', why: 'a newer revision replaces it' })),
+  ...(['deposit-paid', 'accepted'] as QuoteStatus[]).map((from): Edge => ({
+    from,
+    to: 'cancelled',
+    via: 'refund',
+    why: 'deposit refunded, job cancelled',
+  })),
+  ...(['deposit-paid', 'accepted'] as QuoteStatus[]).map((from): Edge => ({
+    from,
+    to: 'sent',
+    via: 'refund',
+    why: 'deposit refunded, quote open again',
+  })),
+  ...(['sent', 'accepted', 'expired', 'declined'] as QuoteStatus[]).map((from): Edge => ({
+    from,
+    to: 'replaced',
+    via: 'revise',
+    why: 'a newer revision replaces it',
+  })),
 ];
 
 /** What each state is called on every screen, document and e-mail. */
@@ -73,7 +103,9 @@ export function refusalMessage(from: QuoteStatus, to: QuoteStatus, via: Transiti
     return `A quote goes from ${STATE_WORDS[from].toLowerCase()} to ${STATE_WORDS[to].toLowerCase()} only by ${how[other.via]}.`;
   }
   const allowed = staffMoves(from);
-  const next = allowed.length ? ` From here staff may move it to: ${allowed.map((s) => STATE_WORDS[s].toLowerCase()).join(', ')}.` : ' Nothing more can happen to it.';
+  const next = allowed.length
+    ? ` From here staff may move it to: ${allowed.map((s) => STATE_WORDS[s].toLowerCase()).join(', ')}.`
+    : ' Nothing more can happen to it.';
   return `A quote that is ${STATE_WORDS[from].toLowerCase()} cannot become ${STATE_WORDS[to].toLowerCase()}.${next}`;
 }
 

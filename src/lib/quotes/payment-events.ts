@@ -3,7 +3,16 @@ import type Stripe from 'stripe';
 import { recordAudit } from '@/lib/audit';
 import { retryOnLockContention } from '@/lib/db/lock-contention';
 import { db, type Payment, type Quote } from '@/lib/db/models';
-import { lockPayment, lockPayments, markGivenBack, markPaid, paymentForProviderPayment, paymentForSession, setRefundedCents, type PaymentStatus } from '@/lib/db/queries/quote-payments';
+import {
+  lockPayment,
+  lockPayments,
+  markGivenBack,
+  markPaid,
+  paymentForProviderPayment,
+  paymentForSession,
+  setRefundedCents,
+  type PaymentStatus,
+} from '@/lib/db/queries/quote-payments';
 import { moveQuote } from '@/lib/db/queries/quote-lifecycle';
 import { lockQuote } from '@/lib/db/queries/quotes';
 import { settleFullRefund } from '@/lib/db/queries/refund-effects';
@@ -38,22 +47,42 @@ export async function recordCheckoutCompleted(session: Stripe.Checkout.Session):
     console.warn(`[deposits] refused checkout.session.completed for ${session.id}: no checkout the app opened`);
     return { result: 'refused', reason: 'unknown-session' };
   }
-  const outcome = await retryOnLockContention(() => db().transaction((t) => completeLocked(session, known.quoteId, known.id, t)));
+  const outcome = await retryOnLockContention(() =>
+    db().transaction((t) => completeLocked(session, known.quoteId, known.id, t)),
+  );
   // After the commit, once: a replayed event answers 'already' and sends nothing.
   if (outcome.result === 'applied') await sendPaymentReceipt(known.quoteId, known.id);
   return outcome;
 }
 
-async function completeLocked(session: Stripe.Checkout.Session, quoteId: number, paymentId: number, t: Transaction): Promise<WebhookResult> {
+async function completeLocked(
+  session: Stripe.Checkout.Session,
+  quoteId: number,
+  paymentId: number,
+  t: Transaction,
+): Promise<WebhookResult> {
   const quote = await lockQuote(quoteId, t);
   const payment = await lockPayment(paymentId, t);
   if (!quote || !payment) return { result: 'refused', reason: 'unknown-session' };
   if (!OPEN.includes(payment.status)) return { result: 'already' };
   const intent = stripeId(session.payment_intent);
-  const problems = sessionMismatches(session, { quoteId, amountCents: payment.amountCents, currency: payment.currency });
+  const problems = sessionMismatches(session, {
+    quoteId,
+    amountCents: payment.amountCents,
+    currency: payment.currency,
+  });
   if (!intent) problems.push('the session has no payment');
   if (problems.length || !intent) {
-    await recordAudit({ actor: 'payments-webhook', action: 'payment.refused', entityType: 'quote', entityId: quoteId, after: { paymentId, session: session.id, problems } }, t);
+    await recordAudit(
+      {
+        actor: 'payments-webhook',
+        action: 'payment.refused',
+        entityType: 'quote',
+        entityId: quoteId,
+        after: { paymentId, session: session.id, problems },
+      },
+      t,
+    );
     return { result: 'refused', reason: problems.join('; ') };
   }
   if (payment.purpose === 'balance') return completeBalanceLocked(quote, payment, intent, session.id, t);
@@ -63,22 +92,46 @@ async function completeLocked(session: Stripe.Checkout.Session, quoteId: number,
   const closed = !canTransition(quote.status, 'deposit-paid', 'payment');
   if (earlier || closed) {
     await payments().refunds.create(
-      { payment_intent: intent, reason: earlier ? 'duplicate' : 'requested_by_customer', metadata: { quoteId: String(quoteId), paymentId: String(paymentId) } },
+      {
+        payment_intent: intent,
+        reason: earlier ? 'duplicate' : 'requested_by_customer',
+        metadata: { quoteId: String(quoteId), paymentId: String(paymentId) },
+      },
       { idempotencyKey: `deposit-auto-refund-${session.id}` },
     );
     await markGivenBack(payment, intent, earlier?.id ?? null, t);
     await recordAudit(
       {
-        actor: 'payments-webhook', action: earlier ? 'payment.duplicate-refunded' : 'payment.closed-quote-refunded', entityType: 'quote', entityId: quoteId,
-        after: { paymentId, session: session.id, amountCents: payment.amountCents, duplicateOfPaymentId: earlier?.id ?? null, quoteStatus: quote.status },
+        actor: 'payments-webhook',
+        action: earlier ? 'payment.duplicate-refunded' : 'payment.closed-quote-refunded',
+        entityType: 'quote',
+        entityId: quoteId,
+        after: {
+          paymentId,
+          session: session.id,
+          amountCents: payment.amountCents,
+          duplicateOfPaymentId: earlier?.id ?? null,
+          quoteStatus: quote.status,
+        },
       },
       t,
     );
-    return earlier ? { result: 'refunded-duplicate', duplicateOfPaymentId: earlier.id } : { result: 'refunded-closed-quote' };
+    return earlier
+      ? { result: 'refunded-duplicate', duplicateOfPaymentId: earlier.id }
+      : { result: 'refunded-closed-quote' };
   }
   await markPaid(payment, intent, t);
   await moveQuote(quote, 'deposit-paid', 'payment', { actor: 'payments-webhook' }, t, { paymentId });
-  await recordAudit({ actor: 'payments-webhook', action: 'payment.received', entityType: 'quote', entityId: quoteId, after: { paymentId, amountCents: payment.amountCents } }, t);
+  await recordAudit(
+    {
+      actor: 'payments-webhook',
+      action: 'payment.received',
+      entityType: 'quote',
+      entityId: quoteId,
+      after: { paymentId, amountCents: payment.amountCents },
+    },
+    t,
+  );
   return { result: 'applied' };
 }
 
@@ -88,24 +141,58 @@ async function completeLocked(session: Stripe.Checkout.Session, quoteId: number,
  * than is left — goes back through the SDK at once, kept and never counted; otherwise it is recorded and
  * the quote closes when nothing is left.
  */
-async function completeBalanceLocked(quote: Quote, payment: Payment, intent: string, sessionId: string, t: Transaction): Promise<WebhookResult> {
+async function completeBalanceLocked(
+  quote: Quote,
+  payment: Payment,
+  intent: string,
+  sessionId: string,
+  t: Transaction,
+): Promise<WebhookResult> {
   const others = await lockPayments(quote.id, t, { except: payment.id });
   const due = balanceDueCents(quote.totalCents, others);
   if (quote.status !== 'deposit-paid' || payment.amountCents > due) {
     const earlier = [...others].reverse().find((p) => p.purpose === 'balance' && counts(p));
     await payments().refunds.create(
-      { payment_intent: intent, reason: earlier ? 'duplicate' : 'requested_by_customer', metadata: { quoteId: String(quote.id), paymentId: String(payment.id) } },
+      {
+        payment_intent: intent,
+        reason: earlier ? 'duplicate' : 'requested_by_customer',
+        metadata: { quoteId: String(quote.id), paymentId: String(payment.id) },
+      },
       { idempotencyKey: `balance-auto-refund-${sessionId}` },
     );
     await markGivenBack(payment, intent, earlier?.id ?? null, t);
     await recordAudit(
-      { actor: 'payments-webhook', action: 'payment.balance-refunded', entityType: 'quote', entityId: quote.id, after: { paymentId: payment.id, session: sessionId, amountCents: payment.amountCents, dueCents: due, quoteStatus: quote.status, duplicateOfPaymentId: earlier?.id ?? null } },
+      {
+        actor: 'payments-webhook',
+        action: 'payment.balance-refunded',
+        entityType: 'quote',
+        entityId: quote.id,
+        after: {
+          paymentId: payment.id,
+          session: sessionId,
+          amountCents: payment.amountCents,
+          dueCents: due,
+          quoteStatus: quote.status,
+          duplicateOfPaymentId: earlier?.id ?? null,
+        },
+      },
       t,
     );
-    return earlier ? { result: 'refunded-duplicate', duplicateOfPaymentId: earlier.id } : { result: 'refunded-closed-quote' };
+    return earlier
+      ? { result: 'refunded-duplicate', duplicateOfPaymentId: earlier.id }
+      : { result: 'refunded-closed-quote' };
   }
   await markPaid(payment, intent, t);
-  await recordAudit({ actor: 'payments-webhook', action: 'payment.received', entityType: 'quote', entityId: quote.id, after: { paymentId: payment.id, amountCents: payment.amountCents, purpose: 'balance' } }, t);
+  await recordAudit(
+    {
+      actor: 'payments-webhook',
+      action: 'payment.received',
+      entityType: 'quote',
+      entityId: quote.id,
+      after: { paymentId: payment.id, amountCents: payment.amountCents, purpose: 'balance' },
+    },
+    t,
+  );
   await closeWhenPaid(quote, { actor: 'payments-webhook' }, payment.id, t);
   return { result: 'applied' };
 }
@@ -125,9 +212,19 @@ export async function recordChargeRefunded(charge: Stripe.Charge): Promise<Webho
       const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, charge.amount_refunded));
       if (refunded === payment.refundedCents) return { result: 'already' };
       await setRefundedCents(payment, refunded, t);
-      await recordAudit({ actor: 'payments-webhook', action: 'payment.refunded', entityType: 'quote', entityId: payment.quoteId, after: { paymentId: payment.id, refundedCents: refunded } }, t);
+      await recordAudit(
+        {
+          actor: 'payments-webhook',
+          action: 'payment.refunded',
+          entityType: 'quote',
+          entityId: payment.quoteId,
+          after: { paymentId: payment.id, refundedCents: refunded },
+        },
+        t,
+      );
       // A refund made at the provider, outside the app: the job is cancelled, as the app's own default.
-      settled = payment.status === 'refunded' && (await settleFullRefund(quote, 'cancel', { actor: 'payments-webhook' }, t));
+      settled =
+        payment.status === 'refunded' && (await settleFullRefund(quote, 'cancel', { actor: 'payments-webhook' }, t));
       return { result: 'applied' };
     }),
   );

@@ -15,21 +15,40 @@ import type { QuoteRecord } from './types';
 // Receipts go after the commit: a refused e-mail is logged and never undoes a payment.
 
 /** The balance request, sent by the caller inside its transaction (a refused e-mail changes nothing). */
-export async function balanceDueMail(record: QuoteRecord, settings: Parameters<typeof mailShop>[0], link: string): Promise<OutgoingMail> {
+export async function balanceDueMail(
+  record: QuoteRecord,
+  settings: Parameters<typeof mailShop>[0],
+  link: string,
+): Promise<OutgoingMail> {
   const shop = mailShop(settings);
   const props = {
-    shop, customerName: record.customer.name, number: record.number, vehicleLabel: record.build?.vehicleLabel ?? null, totalCents: record.totalCents,
-    paidCents: record.paidCents - record.refundedCents, balanceCents: record.balanceDueCents, link,
+    shop,
+    customerName: record.customer.name,
+    number: record.number,
+    vehicleLabel: record.build?.vehicleLabel ?? null,
+    totalCents: record.totalCents,
+    paidCents: record.paidCents - record.refundedCents,
+    balanceCents: record.balanceDueCents,
+    link,
   };
-  return { ...envelope(shop, record.customer.email ?? ''), ...(await renderMail(balanceDueSubject(props), createElement(BalanceDueEmail, props))) };
+  return {
+    ...envelope(shop, record.customer.email ?? ''),
+    ...(await renderMail(balanceDueSubject(props), createElement(BalanceDueEmail, props))),
+  };
 }
 
 /** The PDFs that go with a payment's receipt: its receipt, and the final invoice once nothing is left to pay. */
 export async function paymentDocuments(record: QuoteRecord, paymentId: number): Promise<MailAttachment[]> {
   const shop = await shopForDocuments();
   if (!shop) return [];
-  const files: MailAttachment[] = [{ filename: `receipt-${receiptNumber(record.number, paymentId)}.pdf`, content: await receiptPdf(record, paymentId, shop) }];
-  if (record.status === 'closed' && record.balanceDueCents === 0) files.push({ filename: `invoice-${invoiceNumber(record.number)}.pdf`, content: await invoicePdf(record, shop) });
+  const files: MailAttachment[] = [
+    {
+      filename: `receipt-${receiptNumber(record.number, paymentId)}.pdf`,
+      content: await receiptPdf(record, paymentId, shop),
+    },
+  ];
+  if (record.status === 'closed' && record.balanceDueCents === 0)
+    files.push({ filename: `invoice-${invoiceNumber(record.number)}.pdf`, content: await invoicePdf(record, shop) });
   return files;
 }
 
@@ -40,18 +59,37 @@ export async function sendPaymentReceipt(quoteId: number, paymentId: number): Pr
     const payment = record?.payments.find((p) => p.id === paymentId);
     if (!record?.customer.email || !payment) return;
     const shop = mailShop(await shopSettingsRow());
-    const paidAt = (payment.paidAt ?? new Date().toISOString());
+    const paidAt = payment.paidAt ?? new Date().toISOString();
     const rendered =
       payment.purpose === 'deposit'
         ? await (async () => {
-            const props = { shop, customerName: record.customer.name, number: record.number, amountCents: payment.amountCents, paidAt, totalCents: record.totalCents };
+            const props = {
+              shop,
+              customerName: record.customer.name,
+              number: record.number,
+              amountCents: payment.amountCents,
+              paidAt,
+              totalCents: record.totalCents,
+            };
             return renderMail(depositReceiptSubject(props), createElement(DepositReceiptEmail, props));
           })()
         : await (async () => {
-            const props = { shop, customerName: record.customer.name, number: record.number, amountCents: payment.amountCents, method: payment.method, paidAt, balanceDueCents: record.balanceDueCents };
+            const props = {
+              shop,
+              customerName: record.customer.name,
+              number: record.number,
+              amountCents: payment.amountCents,
+              method: payment.method,
+              paidAt,
+              balanceDueCents: record.balanceDueCents,
+            };
             return renderMail(balanceReceiptSubject(props), createElement(BalanceReceiptEmail, props));
           })();
-    await sendMail({ ...envelope(shop, record.customer.email), ...rendered, attachments: await paymentDocuments(record, paymentId) });
+    await sendMail({
+      ...envelope(shop, record.customer.email),
+      ...rendered,
+      attachments: await paymentDocuments(record, paymentId),
+    });
   } catch (error) {
     console.error(`[payments] the receipt for payment ${paymentId} of quote ${quoteId} was not sent`, error);
   }

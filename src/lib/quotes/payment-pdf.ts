@@ -12,14 +12,23 @@ import { isTaxable } from './pricing';
 
 export type DocumentShop = { name: string; address: string; phone: string; email: string };
 
-type Kit = { doc: PDFKit.PDFDocument; done: Promise<Buffer>; left: number; width: number; row: (label: string, cents: number, strong?: boolean) => void };
+type Kit = {
+  doc: PDFKit.PDFDocument;
+  done: Promise<Buffer>;
+  left: number;
+  width: number;
+  row: (label: string, cents: number, strong?: boolean) => void;
+};
 
 function startDocument(title: string, shop: DocumentShop): Kit {
   const { doc, done, left, width } = openPdf(title, shop);
   const amountX = left + width - 110;
   const row = (label: string, cents: number, strong = false) => {
     const y = doc.y;
-    doc.font(strong ? 'bold' : 'regular').fontSize(strong ? 12 : 10).text(label, left, y, { width: width - 120 });
+    doc
+      .font(strong ? 'bold' : 'regular')
+      .fontSize(strong ? 12 : 10)
+      .text(label, left, y, { width: width - 120 });
     doc.text(formatMoney(cents), amountX, y, { width: 110, align: 'right' });
     doc.x = left;
   };
@@ -30,7 +39,8 @@ function startDocument(title: string, shop: DocumentShop): Kit {
 const forWhom = (q: QuoteRecord) => `For ${q.customer.name}${q.build ? `, ${q.build.vehicleLabel}` : ''}`;
 
 /** The payments that took money, oldest first (the id breaks ties). */
-const takenPayments = (q: QuoteRecord) => q.payments.filter(counts).sort((a, b) => (a.paidAt ?? '').localeCompare(b.paidAt ?? '') || a.id - b.id);
+const takenPayments = (q: QuoteRecord) =>
+  q.payments.filter(counts).sort((a, b) => (a.paidAt ?? '').localeCompare(b.paidAt ?? '') || a.id - b.id);
 
 /** One payment's receipt: what, how, when, and where the account stood once it was taken. */
 export function receiptPdf(q: QuoteRecord, paymentId: number, shop: DocumentShop): Promise<Buffer> {
@@ -40,7 +50,10 @@ export function receiptPdf(q: QuoteRecord, paymentId: number, shop: DocumentShop
   const payment = taken[index];
   const paidThrough = taken.slice(0, index + 1).reduce((s, p) => s + p.amountCents, 0);
   const { doc, done, left, width, row } = startDocument(`Receipt ${receiptNumber(q.number, payment.id)}`, shop);
-  doc.font('bold').fontSize(20).text(`Receipt ${receiptNumber(q.number, payment.id)}`);
+  doc
+    .font('bold')
+    .fontSize(20)
+    .text(`Receipt ${receiptNumber(q.number, payment.id)}`);
   doc.font('regular').fontSize(10).text(forWhom(q));
   doc.text(`Quote ${q.number}`);
   if (payment.paidAt) doc.text(`Received ${longDate(payment.paidAt)}`);
@@ -52,7 +65,13 @@ export function receiptPdf(q: QuoteRecord, paymentId: number, shop: DocumentShop
   row('Quote total', q.totalCents);
   row('Paid up to and including this payment', paidThrough);
   row('Left to pay after this payment', Math.max(0, q.totalCents - paidThrough));
-  doc.moveDown().fontSize(9).fillColor(palette.ink.muted).text('Keep this receipt. Refunds, if any, are shown on your quote page and on the final invoice.', left, doc.y, { width });
+  doc
+    .moveDown()
+    .fontSize(9)
+    .fillColor(palette.ink.muted)
+    .text('Keep this receipt. Refunds, if any, are shown on your quote page and on the final invoice.', left, doc.y, {
+      width,
+    });
   doc.end();
   return done;
 }
@@ -60,38 +79,67 @@ export function receiptPdf(q: QuoteRecord, paymentId: number, shop: DocumentShop
 /** The final invoice: the quote's own lines and totals, every payment, and nothing left to pay. */
 export function invoicePdf(q: QuoteRecord, shop: DocumentShop): Promise<Buffer> {
   const { doc, done, left, width, row } = startDocument(`Invoice ${invoiceNumber(q.number)}`, shop);
-  doc.font('bold').fontSize(20).text(`Invoice ${invoiceNumber(q.number)}`);
+  doc
+    .font('bold')
+    .fontSize(20)
+    .text(`Invoice ${invoiceNumber(q.number)}`);
   doc.font('regular').fontSize(10).text(forWhom(q));
   doc.text(`For the work quoted in ${q.number}`);
-  doc.font('bold').text(q.closedAt ? `Paid in full · closed ${longDate(q.closedAt)}` : 'Paid in full').font('regular');
+  doc
+    .font('bold')
+    .text(q.closedAt ? `Paid in full · closed ${longDate(q.closedAt)}` : 'Paid in full')
+    .font('regular');
   doc.moveDown();
-  doc.font('bold').fontSize(10).text('Work and parts', left, doc.y, { width: width - 120 });
-  doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).stroke(palette.steel[500]);
+  doc
+    .font('bold')
+    .fontSize(10)
+    .text('Work and parts', left, doc.y, { width: width - 120 });
+  doc
+    .moveTo(left, doc.y + 2)
+    .lineTo(left + width, doc.y + 2)
+    .stroke(palette.steel[500]);
   doc.moveDown(0.5);
   for (const line of q.lines) {
     const y = doc.y;
     const detail = `${line.kind === 'labor' ? `${line.quantity} h at ${formatMoney(line.unitPriceCents)}` : `${line.quantity} × ${formatMoney(line.unitPriceCents)}`}${line.discountCents ? `, ${formatMoney(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
-    doc.font('regular').fontSize(10).text(line.description, left, y, { width: width - 120 });
-    doc.fontSize(8).fillColor(palette.ink.muted).text(detail, { width: width - 120 }).fillColor(palette.ink.DEFAULT);
+    doc
+      .font('regular')
+      .fontSize(10)
+      .text(line.description, left, y, { width: width - 120 });
+    doc
+      .fontSize(8)
+      .fillColor(palette.ink.muted)
+      .text(detail, { width: width - 120 })
+      .fillColor(palette.ink.DEFAULT);
     const after = doc.y;
     doc.fontSize(10).text(formatMoney(line.totalCents), left + width - 110, y, { width: 110, align: 'right' });
     doc.y = Math.max(after, doc.y) + 4;
     doc.x = left;
   }
-  doc.moveTo(left, doc.y).lineTo(left + width, doc.y).stroke(palette.steel[500]);
+  doc
+    .moveTo(left, doc.y)
+    .lineTo(left + width, doc.y)
+    .stroke(palette.steel[500]);
   doc.moveDown(0.5);
   row('Before tax', q.subtotalCents);
   row(`Sales tax (${percentFromBp(q.taxRateBp)} on parts and goods)`, q.taxCents);
   row('Total', q.totalCents, true);
   doc.moveDown().font('bold').fontSize(12).text('Payments', left);
   for (const p of takenPayments(q)) {
-    row(`${p.paidAt ? longDate(p.paidAt) : ''} · ${PURPOSE_WORDS[p.purpose]} · ${METHOD_WORDS[p.method]} · receipt ${receiptNumber(q.number, p.id)}`, p.amountCents);
+    row(
+      `${p.paidAt ? longDate(p.paidAt) : ''} · ${PURPOSE_WORDS[p.purpose]} · ${METHOD_WORDS[p.method]} · receipt ${receiptNumber(q.number, p.id)}`,
+      p.amountCents,
+    );
     if (p.refundedCents) row('    refunded', -p.refundedCents);
   }
   doc.moveDown(0.5);
   row('Paid in all', q.paidCents - q.refundedCents, true);
   row('Balance due', q.balanceDueCents, true);
-  doc.moveDown().fontSize(9).fillColor(palette.ink.muted).text('Thank you. Predicted gains were indicative; the dyno has the last word.', left, doc.y, { width });
+  doc
+    .moveDown()
+    .fontSize(9)
+    .fillColor(palette.ink.muted)
+    .text('Thank you. Predicted gains were indicative; the dyno has the last word.', left, doc.y, { width });
   doc.end();
   return done;
 }

@@ -12,14 +12,32 @@ import { isTaxable, type QuoteLineKind } from './pricing';
 // at run time. No costs or margins: the same figures the customer's page shows.
 
 /** The money and dates are the quote record's own, so the document can never drift from it. */
-type QuoteFigures = Pick<QuoteRecord, 'subtotalCents' | 'taxRateBp' | 'taxCents' | 'totalCents' | 'depositCents' | 'paidCents' | 'refundedCents' | 'validUntil' | 'sentAt'>;
+type QuoteFigures = Pick<
+  QuoteRecord,
+  | 'subtotalCents'
+  | 'taxRateBp'
+  | 'taxCents'
+  | 'totalCents'
+  | 'depositCents'
+  | 'paidCents'
+  | 'refundedCents'
+  | 'validUntil'
+  | 'sentAt'
+>;
 
 export type QuoteDocument = QuoteFigures & {
   number: string;
   stateWord: string;
   customerName: string;
   vehicleLabel: string | null;
-  lines: { kind: QuoteLineKind; description: string; quantity: number; unitPriceCents: number; discountCents: number; totalCents: number }[];
+  lines: {
+    kind: QuoteLineKind;
+    description: string;
+    quantity: number;
+    unitPriceCents: number;
+    discountCents: number;
+    totalCents: number;
+  }[];
   replacedBy: string | null;
   shop: { name: string; address: string; phone: string; email: string; depositPolicyText: string };
 };
@@ -28,15 +46,28 @@ const FONT_DIR = path.join(process.cwd(), 'src', 'app', 'fonts');
 
 let fonts: { regular: Buffer; bold: Buffer } | undefined;
 function loadFonts() {
-  fonts ??= { regular: fs.readFileSync(path.join(FONT_DIR, 'inter-latin-400-normal.ttf')), bold: fs.readFileSync(path.join(FONT_DIR, 'inter-latin-700-normal.ttf')) };
+  fonts ??= {
+    regular: fs.readFileSync(path.join(FONT_DIR, 'inter-latin-400-normal.ttf')),
+    bold: fs.readFileSync(path.join(FONT_DIR, 'inter-latin-700-normal.ttf')),
+  };
   return fonts;
 }
 
 /** A letter-size document in the app's fonts with the shop's name and contacts at the top; `done` is its bytes. */
-export function openPdf(title: string, shop: { name: string; address: string; phone: string; email: string }, options: { compress?: boolean } = {}) {
+export function openPdf(
+  title: string,
+  shop: { name: string; address: string; phone: string; email: string },
+  options: { compress?: boolean } = {},
+) {
   const { regular, bold } = loadFonts();
   // `font` replaces pdfkit's default Helvetica, whose metrics file a bundled server may not find.
-  const doc = new PDFDocument({ size: 'LETTER', margin: 54, font: regular as unknown as string, compress: options.compress ?? true, info: { Title: title, Author: shop.name } });
+  const doc = new PDFDocument({
+    size: 'LETTER',
+    margin: 54,
+    font: regular as unknown as string,
+    compress: options.compress ?? true,
+    info: { Title: title, Author: shop.name },
+  });
   doc.registerFont('regular', regular);
   doc.registerFont('bold', bold);
   const chunks: Buffer[] = [];
@@ -47,7 +78,8 @@ export function openPdf(title: string, shop: { name: string; address: string; ph
   });
   doc.font('bold').fontSize(16).text(shop.name);
   doc.font('regular').fontSize(9).fillColor(palette.ink.muted);
-  for (const line of [shop.address, shop.phone && `Phone ${shop.phone}`, shop.email].filter(Boolean)) doc.text(String(line));
+  for (const line of [shop.address, shop.phone && `Phone ${shop.phone}`, shop.email].filter(Boolean))
+    doc.text(String(line));
   return { doc, done, left: 54, width: doc.page.width - 108 };
 }
 
@@ -55,32 +87,55 @@ export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {})
   const { doc, done, left, width } = openPdf(`Quote ${q.number}`, q.shop, options);
 
   doc.moveDown().fillColor(palette.ink.DEFAULT).font('bold').fontSize(20).text(`Quote ${q.number}`);
-  doc.font('regular').fontSize(10).text(`For ${q.customerName}${q.vehicleLabel ? `, ${q.vehicleLabel}` : ''}`);
+  doc
+    .font('regular')
+    .fontSize(10)
+    .text(`For ${q.customerName}${q.vehicleLabel ? `, ${q.vehicleLabel}` : ''}`);
   doc.text(`Status: ${q.stateWord}`);
   if (q.sentAt) doc.text(`Sent ${longDate(q.sentAt)}`);
-  if (q.validUntil) doc.text(`Valid until ${longDate(q.validUntil)} (prices and parts after that day need a fresh quote)`);
+  if (q.validUntil)
+    doc.text(`Valid until ${longDate(q.validUntil)} (prices and parts after that day need a fresh quote)`);
   if (q.replacedBy) doc.font('bold').text(`Replaced by a newer quote: ${q.replacedBy}`).font('regular');
   doc.moveDown();
 
   // The lines: description on the left, the line total on the right.
   const amountX = left + width - 100;
-  doc.font('bold').fontSize(10).text('What is included', left, doc.y, { width: width - 110 });
-  doc.moveTo(left, doc.y + 2).lineTo(left + width, doc.y + 2).stroke(palette.steel[500]);
+  doc
+    .font('bold')
+    .fontSize(10)
+    .text('What is included', left, doc.y, { width: width - 110 });
+  doc
+    .moveTo(left, doc.y + 2)
+    .lineTo(left + width, doc.y + 2)
+    .stroke(palette.steel[500]);
   doc.moveDown(0.5);
   for (const line of q.lines) {
     const y = doc.y;
     const detail = `${line.kind === 'labor' ? `${line.quantity} h of labour at ${formatMoney(line.unitPriceCents)}` : `${line.quantity} × ${formatMoney(line.unitPriceCents)}`}${line.discountCents ? `, ${formatMoney(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
-    doc.font('regular').fontSize(10).text(line.description, left, y, { width: width - 110 });
-    doc.fontSize(8).fillColor(palette.ink.muted).text(detail, { width: width - 110 }).fillColor(palette.ink.DEFAULT);
+    doc
+      .font('regular')
+      .fontSize(10)
+      .text(line.description, left, y, { width: width - 110 });
+    doc
+      .fontSize(8)
+      .fillColor(palette.ink.muted)
+      .text(detail, { width: width - 110 })
+      .fillColor(palette.ink.DEFAULT);
     const after = doc.y;
     doc.fontSize(10).text(formatMoney(line.totalCents), amountX, y, { width: 100, align: 'right' });
     doc.y = Math.max(after, doc.y) + 4;
   }
-  doc.moveTo(left, doc.y).lineTo(left + width, doc.y).stroke(palette.steel[500]);
+  doc
+    .moveTo(left, doc.y)
+    .lineTo(left + width, doc.y)
+    .stroke(palette.steel[500]);
   doc.moveDown(0.5);
   const row = (label: string, cents: number, strong = false) => {
     const y = doc.y;
-    doc.font(strong ? 'bold' : 'regular').fontSize(strong ? 12 : 10).text(label, left, y, { width: width - 110 });
+    doc
+      .font(strong ? 'bold' : 'regular')
+      .fontSize(strong ? 12 : 10)
+      .text(label, left, y, { width: width - 110 });
     doc.text(formatMoney(cents), amountX, y, { width: 100, align: 'right' });
     doc.x = left;
   };
@@ -98,7 +153,11 @@ export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {})
   doc.moveDown().font('bold').fontSize(12).text('Good to know before a cam swap');
   doc.font('regular').fontSize(9);
   for (const caution of CUSTOMER_CAUTIONS) doc.text(`• ${caution}`, { width }).moveDown(0.2);
-  doc.moveDown().fontSize(8).fillColor(palette.ink.muted).text('Predicted gains are indicative; the dyno has the last word.', { width });
+  doc
+    .moveDown()
+    .fontSize(8)
+    .fillColor(palette.ink.muted)
+    .text('Predicted gains are indicative; the dyno has the last word.', { width });
   doc.end();
   return done;
 }

@@ -19,7 +19,14 @@ export type QuoteLineKind = (typeof QUOTE_LINE_KIND_LIST)[number];
 
 export type PricedLineInput = { kind: QuoteLineKind; quantity: number; unitPriceCents: number; discountCents?: number };
 export type DepositPolicy = { percentBp: number; minCents: number; maxCents: number };
-export type QuoteTotals = { subtotalCents: number; taxableCents: number; taxRateBp: number; taxCents: number; totalCents: number; depositCents: number };
+export type QuoteTotals = {
+  subtotalCents: number;
+  taxableCents: number;
+  taxRateBp: number;
+  taxCents: number;
+  totalCents: number;
+  depositCents: number;
+};
 
 /** The one rule for which lines carry sales tax (see the note at the top of this file). */
 export function isTaxable(kind: QuoteLineKind): boolean {
@@ -29,7 +36,9 @@ export function isTaxable(kind: QuoteLineKind): boolean {
 /** a / b for non-negative integers a and positive b, rounded half up, exactly. */
 export function divideRoundHalfUp(numerator: number, denominator: number): number {
   if (!Number.isSafeInteger(numerator) || !Number.isSafeInteger(denominator) || denominator <= 0 || numerator < 0) {
-    throw new RangeError(`divideRoundHalfUp needs a non-negative safe integer over a positive one (got ${numerator} / ${denominator})`);
+    throw new RangeError(
+      `divideRoundHalfUp needs a non-negative safe integer over a positive one (got ${numerator} / ${denominator})`,
+    );
   }
   const quotient = Math.floor(numerator / denominator);
   const remainder = numerator - quotient * denominator;
@@ -47,7 +56,8 @@ export function quantityHundredths(quantity: number): number {
 
 /** quantity × unit price, rounded half up to the cent: 1.5 h × $135.00 = $202.50; 0.33 × 1001 ¢ = 330.33 → 330 ¢. */
 export function lineTotalCents(quantity: number, unitPriceCents: number): number {
-  if (!Number.isSafeInteger(unitPriceCents) || unitPriceCents < 0) throw new RangeError(`unit price must be whole cents, zero or more (got ${unitPriceCents})`);
+  if (!Number.isSafeInteger(unitPriceCents) || unitPriceCents < 0)
+    throw new RangeError(`unit price must be whole cents, zero or more (got ${unitPriceCents})`);
   return divideRoundHalfUp(quantityHundredths(quantity) * unitPriceCents, 100);
 }
 
@@ -55,7 +65,8 @@ export function lineTotalCents(quantity: number, unitPriceCents: number): number
 export function lineNetCents(line: PricedLineInput): number {
   const gross = lineTotalCents(line.quantity, line.unitPriceCents);
   const discount = line.discountCents ?? 0;
-  if (!Number.isSafeInteger(discount) || discount < 0 || discount > gross) throw new RangeError(`a discount must be whole cents between 0 and the line's ${gross} (got ${discount})`);
+  if (!Number.isSafeInteger(discount) || discount < 0 || discount > gross)
+    throw new RangeError(`a discount must be whole cents between 0 and the line's ${gross} (got ${discount})`);
   return gross - discount;
 }
 
@@ -83,11 +94,22 @@ export function quoteTotals(lines: readonly PricedLineInput[], taxRateBp: number
   }
   const tax = taxCents(taxable, taxRateBp);
   const total = subtotal + tax;
-  return { subtotalCents: subtotal, taxableCents: taxable, taxRateBp, taxCents: tax, totalCents: total, depositCents: depositCents(total, policy) };
+  return {
+    subtotalCents: subtotal,
+    taxableCents: taxable,
+    taxRateBp,
+    taxCents: tax,
+    totalCents: total,
+    depositCents: depositCents(total, policy),
+  };
 }
 
 /** Hours of labour at the shop's hourly rate, as one line's unit price and quantity. */
-export function laborLine(hours: number, quantity: number, laborRateCents: number): { quantity: number; unitPriceCents: number } {
+export function laborLine(
+  hours: number,
+  quantity: number,
+  laborRateCents: number,
+): { quantity: number; unitPriceCents: number } {
   // hours × quantity can carry more than two decimals (1.25 h × 1.5); keep the product in hundredths.
   return { quantity: Math.round(hours * quantity * 100) / 100, unitPriceCents: laborRateCents };
 }

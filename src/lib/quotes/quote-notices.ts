@@ -12,7 +12,12 @@ import type { QuoteRecord } from './types';
 // never undoes a refund.
 
 export function mailShop(settings: { name: string; email: string; phone: string; address: string } | null): MailShop {
-  return { name: settings?.name || 'Your shop', email: settings?.email || null, phone: settings?.phone || null, address: settings?.address || null };
+  return {
+    name: settings?.name || 'Your shop',
+    email: settings?.email || null,
+    phone: settings?.phone || null,
+    address: settings?.address || null,
+  };
 }
 
 /** To the customer, from the shop's name, replies to the shop. */
@@ -21,12 +26,27 @@ export function envelope(shop: MailShop, to: string): Pick<OutgoingMail, 'to' | 
 }
 
 /** The quote (or revised quote) with its private link; sent inside the send transaction by the caller. */
-export async function quoteSentMail(record: QuoteRecord, shop: MailShop, link: string, replaces: string | null): Promise<OutgoingMail> {
+export async function quoteSentMail(
+  record: QuoteRecord,
+  shop: MailShop,
+  link: string,
+  replaces: string | null,
+): Promise<OutgoingMail> {
   const props = {
-    shop, customerName: record.customer.name, number: record.number, vehicleLabel: record.build?.vehicleLabel ?? null, totalCents: record.totalCents,
-    depositCents: record.depositCents, validUntil: record.validUntil, link, replaces,
+    shop,
+    customerName: record.customer.name,
+    number: record.number,
+    vehicleLabel: record.build?.vehicleLabel ?? null,
+    totalCents: record.totalCents,
+    depositCents: record.depositCents,
+    validUntil: record.validUntil,
+    link,
+    replaces,
   };
-  return { ...envelope(shop, record.customer.email ?? ''), ...(await renderMail(quoteSentSubject(props), createElement(QuoteSentEmail, props))) };
+  return {
+    ...envelope(shop, record.customer.email ?? ''),
+    ...(await renderMail(quoteSentSubject(props), createElement(QuoteSentEmail, props))),
+  };
 }
 
 /** The refund notice after the deposit was refunded in full. It carries no link: only the token's hash is kept. */
@@ -35,8 +55,17 @@ export async function sendRefundNotice(quoteId: number): Promise<void> {
     const [{ quote, customer, payments }, settings] = await Promise.all([quoteForNotice(quoteId), shopSettingsRow()]);
     if (!quote || !customer?.email) return;
     const shop = mailShop(settings);
-    const props = { shop, customerName: customer.name, number: quote.number, refundedCents: payments.reduce((s, p) => s + p.refundedCents, 0), reopened: quote.status === 'sent' };
-    await sendMail({ ...envelope(shop, customer.email), ...(await renderMail(refundNoticeSubject(props), createElement(RefundNoticeEmail, props))) });
+    const props = {
+      shop,
+      customerName: customer.name,
+      number: quote.number,
+      refundedCents: payments.reduce((s, p) => s + p.refundedCents, 0),
+      reopened: quote.status === 'sent',
+    };
+    await sendMail({
+      ...envelope(shop, customer.email),
+      ...(await renderMail(refundNoticeSubject(props), createElement(RefundNoticeEmail, props))),
+    });
   } catch (error) {
     console.error(`[refunds] the refund notice for quote ${quoteId} was not sent`, error);
   }

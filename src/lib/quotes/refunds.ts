@@ -18,20 +18,36 @@ import type { AfterFullRefund, QuoteRecord } from './types';
  * reopens the quote, as the manager chooses) and e-mails the customer. A refund the provider refuses
  * changes nothing (502).
  */
-export async function refundQuote(id: number, amountCents: number, reason: string | undefined, user: SessionUser, afterFullRefund: AfterFullRefund = 'cancel'): Promise<QuoteRecord> {
+export async function refundQuote(
+  id: number,
+  amountCents: number,
+  reason: string | undefined,
+  user: SessionUser,
+  afterFullRefund: AfterFullRefund = 'cancel',
+): Promise<QuoteRecord> {
   const settled = await db().transaction(async (t) => {
     // The quote row first, then its payments: the order every money path locks in.
     const quote = await lockQuote(id, t);
     if (!quote) throw noQuoteWithId(id);
     const payment = await lockRefundableDeposit(id, t);
-    if (!payment || !payment.providerPaymentId) throw stateRefused(`Quote ${quote.number} has no paid deposit to refund.`);
+    if (!payment || !payment.providerPaymentId)
+      throw stateRefused(`Quote ${quote.number} has no paid deposit to refund.`);
     const left = payment.amountCents - payment.refundedCents;
     if (amountCents > left) {
-      throw fieldsRefused([{ field: 'amountCents', message: `at most ${left} cents can be refunded (paid ${payment.amountCents}, already refunded ${payment.refundedCents})` }]);
+      throw fieldsRefused([
+        {
+          field: 'amountCents',
+          message: `at most ${left} cents can be refunded (paid ${payment.amountCents}, already refunded ${payment.refundedCents})`,
+        },
+      ]);
     }
     try {
       await payments().refunds.create(
-        { payment_intent: payment.providerPaymentId, amount: amountCents, metadata: { quoteId: String(id), byUser: String(user.id), ...(reason ? { note: reason.slice(0, 200) } : {}) } },
+        {
+          payment_intent: payment.providerPaymentId,
+          amount: amountCents,
+          metadata: { quoteId: String(id), byUser: String(user.id), ...(reason ? { note: reason.slice(0, 200) } : {}) },
+        },
         { idempotencyKey: `refund-${payment.id}-${payment.refundedCents}-${amountCents}` },
       );
     } catch (error) {
@@ -40,9 +56,21 @@ export async function refundQuote(id: number, amountCents: number, reason: strin
     }
     // The webhook may have landed first; both sides take the larger running total, so it is counted once.
     await payment.reload({ transaction: t, lock: t.LOCK.UPDATE });
-    const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, payment.amountCents - left + amountCents));
+    const refunded = Math.min(
+      payment.amountCents,
+      Math.max(payment.refundedCents, payment.amountCents - left + amountCents),
+    );
     await setRefundedCents(payment, refunded, t);
-    await recordAudit({ user, action: 'payment.refund-requested', entityType: 'quote', entityId: id, after: { paymentId: payment.id, amountCents, reason: reason ?? null } }, t);
+    await recordAudit(
+      {
+        user,
+        action: 'payment.refund-requested',
+        entityType: 'quote',
+        entityId: id,
+        after: { paymentId: payment.id, amountCents, reason: reason ?? null },
+      },
+      t,
+    );
     return payment.status === 'refunded' && (await settleFullRefund(quote, afterFullRefund, { user }, t));
   });
   if (settled) await sendRefundNotice(id);

@@ -11,13 +11,15 @@ export const noQuoteWithId = (id: number) => new HttpError(404, `No quote with i
 export const linkOpensNothing = () => new HttpError(404, 'This link does not open a quote.');
 
 /** Counter staff asking for what only a manager may give: 403 naming the fields, nothing written. */
-export const needsManager = (errors: FieldError[]) => new HttpError(403, 'Only a manager may set these prices, kinds or discounts.', { errors });
+export const needsManager = (errors: FieldError[]) =>
+  new HttpError(403, 'Only a manager may set these prices, kinds or discounts.', { errors });
 
 /** The e-mail did not go, so the write it belonged to was rolled back. */
 export const mailNotSent = (message: string) => new HttpError(502, message);
 
 /** A refusal because of where the quote (or its money) stands: 409 with whatever tells the caller why. */
-export const stateRefused = (message: string, extra: Record<string, unknown> = {}) => new HttpError(409, message, extra);
+export const stateRefused = (message: string, extra: Record<string, unknown> = {}) =>
+  new HttpError(409, message, extra);
 
 export const fieldsRefused = (errors: FieldError[]) => invalidFields(errors);
 
@@ -28,9 +30,13 @@ export function recordOrThrow<R>(outcome: WriteOutcome<R>, present: (record: R) 
     case 'not-found':
       throw new HttpError(404, 'That quote no longer exists.');
     case 'conflict':
-      throw new HttpError(409, 'Someone else saved this quote after you opened it. Nothing was overwritten; review their changes and save again.', {
-        current: outcome.current === null ? null : present(outcome.current as R),
-      });
+      throw new HttpError(
+        409,
+        'Someone else saved this quote after you opened it. Nothing was overwritten; review their changes and save again.',
+        {
+          current: outcome.current === null ? null : present(outcome.current as R),
+        },
+      );
     case 'invalid':
       throw invalidFields(outcome.errors);
     case 'refused':

@@ -3,7 +3,15 @@ import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken, randomToken } from '@/lib/auth/tokens';
 import { invalid, notFound, refused, runWrite } from '@/lib/db/write';
 import { LifecycleRefused, moveQuote } from '@/lib/db/queries/quote-lifecycle';
-import { freezeSnapshot, getQuote, isFrozen, lockQuoteWithParts, presentQuote, shopSettingsRow, snapshotSource } from '@/lib/db/queries/quotes';
+import {
+  freezeSnapshot,
+  getQuote,
+  isFrozen,
+  lockQuoteWithParts,
+  presentQuote,
+  shopSettingsRow,
+  snapshotSource,
+} from '@/lib/db/queries/quotes';
 import { appBaseUrl } from '@/lib/env';
 import { MailError, sendMail } from '@/lib/mail';
 import { stateWord, validUntilFrom } from './lifecycle';
@@ -30,29 +38,58 @@ export async function sendQuote(id: number, user: SessionUser): Promise<QuoteRec
       if (!quote) throw notFound();
       const email = quote.customer?.email;
       if (quote.status === 'draft' || quote.status === 'sent') {
-        if (!email) throw invalid([{ field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' }]);
+        if (!email)
+          throw invalid([
+            { field: 'customer.email', message: 'the customer has no e-mail address; add one before sending' },
+          ]);
         if (!(quote.lines ?? []).length) throw invalid([{ field: 'lines', message: 'the quote has no lines' }]);
       }
       const token = randomToken();
       const now = new Date();
-      quote.set({ publicTokenHash: hashToken(token), sentAt: now, validUntil: quote.validUntil ?? validUntilFrom(now) });
+      quote.set({
+        publicTokenHash: hashToken(token),
+        sentAt: now,
+        validUntil: quote.validUntil ?? validUntilFrom(now),
+      });
       if (snapshot && !isFrozen(quote)) freezeSnapshot(quote, snapshot);
       try {
         await moveQuote(quote, 'sent', 'send', { user }, t, { to: email });
       } catch (error) {
-        if (error instanceof LifecycleRefused) throw refused(`Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft or a sent quote can be sent.`);
+        if (error instanceof LifecycleRefused)
+          throw refused(
+            `Quote ${quote.number} is ${stateWord(quote.status).toLowerCase()}; only a draft or a sent quote can be sent.`,
+          );
         throw error;
       }
       const settings = await shopSettingsRow(t);
-      if (!settings) throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
+      if (!settings)
+        throw refused('The shop settings are missing; a manager has to set the labour rate, tax and deposit first.');
       const record = (await getQuote(id, t))!;
-      await recordAudit({ user, action: 'quote.sent', entityType: 'quote', entityId: id, before: null, after: { to: email, revision: record.revision } }, t);
-      await sendMail(await quoteSentMail(record, mailShop(settings), `${appBaseUrl()}/q/${token}`, record.revisionOf?.number ?? null));
+      await recordAudit(
+        {
+          user,
+          action: 'quote.sent',
+          entityType: 'quote',
+          entityId: id,
+          before: null,
+          after: { to: email, revision: record.revision },
+        },
+        t,
+      );
+      await sendMail(
+        await quoteSentMail(
+          record,
+          mailShop(settings),
+          `${appBaseUrl()}/q/${token}`,
+          record.revisionOf?.number ?? null,
+        ),
+      );
       return { record };
     });
     return recordOrThrow(outcome, (r) => presentQuote(r, user));
   } catch (error) {
-    if (error instanceof MailError) throw mailNotSent('The e-mail could not be sent, so the quote was not marked as sent. Try again in a moment.');
+    if (error instanceof MailError)
+      throw mailNotSent('The e-mail could not be sent, so the quote was not marked as sent. Try again in a moment.');
     throw error;
   }
 }

@@ -91,12 +91,25 @@ export type QuoteRecord = {
 };
 
 /** The shop's details printed on documents and the customer's page. */
-export type DocumentShop = { name: string; phone: string; email: string; address: string; depositPolicyText: string; currency: string };
+export type DocumentShop = {
+  name: string;
+  phone: string;
+  email: string;
+  address: string;
+  depositPolicyText: string;
+  currency: string;
+};
 
 export type PublicQuote = { quote: QuoteRecord; shop: DocumentShop };
 
 /** What the customer's page and a refused checkout say about where the quote stands. */
-export type CheckoutState = { status: QuoteStatus; depositPaid: boolean; validUntil: string | null; expired: boolean; paymentConfirming: boolean };
+export type CheckoutState = {
+  status: QuoteStatus;
+  depositPaid: boolean;
+  validUntil: string | null;
+  expired: boolean;
+  paymentConfirming: boolean;
+};
 
 /** A checkout the customer can go to: a new payment page, or the open one handed out again. */
 export type CheckoutStarted = { url: string; reused: boolean };
@@ -109,7 +122,14 @@ export type WebhookResult =
   | { result: 'refunded-closed-quote' };
 
 /** Where a quote stands, answered with a refused move: the state, its word and what staff may do from there. */
-export type LifecycleState = { status: QuoteStatus; word: string; allowed: QuoteStatus[]; validUntil: string | null; expired: boolean; replacedBy: number | null };
+export type LifecycleState = {
+  status: QuoteStatus;
+  word: string;
+  allowed: QuoteStatus[];
+  validUntil: string | null;
+  expired: boolean;
+  replacedBy: number | null;
+};
 
 /** After a full refund of the deposit: the job is cancelled (the default) or the quote reopened for a new payment. */
 export type AfterFullRefund = 'cancel' | 'reopen';

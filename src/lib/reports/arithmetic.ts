@@ -36,7 +36,8 @@ export function goodsMargin(lines: readonly MarginLine[]): Margin {
 /** The margin of summed revenue and cost (the database sums them for the report; see reports.ts). */
 export function marginOfSums(revenueCents: number, costCents: number): Margin {
   const marginCents = revenueCents - costCents;
-  const marginBp = revenueCents > 0 ? Math.sign(marginCents) * divideRoundHalfUp(Math.abs(marginCents) * 10_000, revenueCents) : null;
+  const marginBp =
+    revenueCents > 0 ? Math.sign(marginCents) * divideRoundHalfUp(Math.abs(marginCents) * 10_000, revenueCents) : null;
   return { revenueCents, costCents, marginCents, marginBp };
 }
 

@@ -21,7 +21,10 @@ export const newPasswordField = z
   .max(PASSWORD_MAX, `at most ${PASSWORD_MAX} characters`);
 
 /** A password being checked: only bounded, never judged (old passwords may be shorter). */
-const givenPasswordField = z.string({ error: 'required' }).min(1, 'required').max(PASSWORD_MAX, `at most ${PASSWORD_MAX} characters`);
+const givenPasswordField = z
+  .string({ error: 'required' })
+  .min(1, 'required')
+  .max(PASSWORD_MAX, `at most ${PASSWORD_MAX} characters`);
 
 export const signInSchema = z.strictObject({ email: emailField, password: givenPasswordField });
 export type SignInInput = z.infer<typeof signInSchema>;
@@ -37,5 +40,8 @@ export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
 
 export const changePasswordSchema = z
   .strictObject({ currentPassword: givenPasswordField, newPassword: newPasswordField })
-  .refine((value) => value.currentPassword !== value.newPassword, { path: ['newPassword'], message: 'must differ from the current password' });
+  .refine((value) => value.currentPassword !== value.newPassword, {
+    path: ['newPassword'],
+    message: 'must differ from the current password',
+  });
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;

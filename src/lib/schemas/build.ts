@@ -18,16 +18,22 @@ export const BUILD_RECORD_LIMITS = {
 
 const idOf = (label: string) =>
   z
-    .number({ error: (iss) => (iss.input === undefined ? `${label} is required` : `${label} must be a whole number (an id)`) })
+    .number({
+      error: (iss) => (iss.input === undefined ? `${label} is required` : `${label} must be a whole number (an id)`),
+    })
     .int({ error: `${label} must be a whole number (an id)` })
     .positive({ error: `${label} must be a whole number (an id)` });
 
 export const VehicleLabelSchema = text('vehicle', { error: presence('vehicle', 'text') })
   .min(1, { error: 'vehicle must not be empty (year, body, engine, e.g. "2012 pickup, 5.3 L")' })
-  .max(BUILD_RECORD_LIMITS.vehicleLabelMaxLength, { error: `vehicle must be at most ${BUILD_RECORD_LIMITS.vehicleLabelMaxLength} characters` });
+  .max(BUILD_RECORD_LIMITS.vehicleLabelMaxLength, {
+    error: `vehicle must be at most ${BUILD_RECORD_LIMITS.vehicleLabelMaxLength} characters`,
+  });
 
 /** The catalogue cam the engine has now (a factory baseline card), when it was picked from the catalogue. */
-const BaselineCamIdSchema = idOf('baselineCamId').nullish().transform((v) => v ?? null);
+const BaselineCamIdSchema = idOf('baselineCamId')
+  .nullish()
+  .transform((v) => v ?? null);
 
 /** POST /api/builds: an existing customer's id, or a new customer inline; never both. */
 export const BuildCreateSchema = z
@@ -45,10 +51,18 @@ export const BuildCreateSchema = z
   )
   .superRefine((b, ctx) => {
     if (b.customerId === undefined && b.customer === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['customerId'], message: 'pick a customer (customerId) or enter a new one (customer)' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['customerId'],
+        message: 'pick a customer (customerId) or enter a new one (customer)',
+      });
     }
     if (b.customerId !== undefined && b.customer !== undefined) {
-      ctx.addIssue({ code: 'custom', path: ['customer'], message: 'send either customerId or a new customer, not both' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['customer'],
+        message: 'send either customerId or a new customer, not both',
+      });
     }
   });
 export type BuildCreate = z.output<typeof BuildCreateSchema>;

@@ -22,7 +22,10 @@ type Range = { min: number; max: number };
 /** A finite number within [min, max], with a message that names the unit. */
 export function boundedNumber(label: string, unit: string, range: Range) {
   return z
-    .number({ error: (iss) => (iss.input === undefined ? `${label} is required (${unit})` : `${label} must be a number (${unit})`) })
+    .number({
+      error: (iss) =>
+        iss.input === undefined ? `${label} is required (${unit})` : `${label} must be a number (${unit})`,
+    })
     .min(range.min, { error: `${label} must be at least ${range.min} ${unit}` })
     .max(range.max, { error: `${label} must be at most ${range.max} ${unit}` });
 }
@@ -35,10 +38,7 @@ function optional<T extends z.ZodType>(schema: T) {
 const L = CAM_LIMITS;
 
 export const CamIdSchema = z.union(
-  [
-    text('id').min(1).max(L.idMaxLength),
-    z.number().int().min(0).max(Number.MAX_SAFE_INTEGER),
-  ],
+  [text('id').min(1).max(L.idMaxLength), z.number().int().min(0).max(Number.MAX_SAFE_INTEGER)],
   { error: `id must be a non-empty text (up to ${L.idMaxLength} characters) or a whole number` },
 );
 
@@ -48,27 +48,32 @@ export function presence(label: string, kind: string) {
 }
 
 export const CamCardSchema = z
-  .strictObject({
-    id: CamIdSchema,
-    name: text('name', { error: presence('name', 'text') })
-      .min(1, { error: 'name must not be empty' })
-      .max(L.nameMaxLength, { error: `name must be at most ${L.nameMaxLength} characters` }),
-    intakeDuration050: boundedNumber('intake duration at 0.050"', 'deg', L.duration050Deg),
-    exhaustDuration050: boundedNumber('exhaust duration at 0.050"', 'deg', L.duration050Deg),
-    intakeAdvertised: optional(boundedNumber('intake advertised duration', 'deg', L.advertisedDeg)),
-    exhaustAdvertised: optional(boundedNumber('exhaust advertised duration', 'deg', L.advertisedDeg)),
-    intakeLiftIn: boundedNumber('intake lift at the valve', 'in', L.liftIn),
-    exhaustLiftIn: boundedNumber('exhaust lift at the valve', 'in', L.liftIn),
-    lsa: boundedNumber('lobe separation angle', 'deg', L.lsaDeg),
-    intakeCenterline: boundedNumber('installed intake centerline', 'deg', L.intakeCenterlineDeg),
-    rockerRatio: boundedNumber('rocker ratio', ':1', L.rockerRatio).nullish().transform((v) => v ?? L.rockerRatio.default),
-    deactivationCompatible: optional(z.boolean({ error: presence('deactivationCompatible', 'true or false') })),
-    emissionsCertified: optional(z.boolean({ error: presence('emissionsCertified', 'true or false') })),
-    springMaxLiftIn: optional(boundedNumber('spring max lift', 'in', L.springMaxLiftIn)),
-    priceCents: optional(
-      boundedNumber('price', 'cents', L.priceCents).int({ error: 'price must be a whole number of cents' }),
-    ),
-  }, { error: presence('cam card', 'an object') })
+  .strictObject(
+    {
+      id: CamIdSchema,
+      name: text('name', { error: presence('name', 'text') })
+        .min(1, { error: 'name must not be empty' })
+        .max(L.nameMaxLength, { error: `name must be at most ${L.nameMaxLength} characters` }),
+      intakeDuration050: boundedNumber('intake duration at 0.050"', 'deg', L.duration050Deg),
+      exhaustDuration050: boundedNumber('exhaust duration at 0.050"', 'deg', L.duration050Deg),
+      intakeAdvertised: optional(boundedNumber('intake advertised duration', 'deg', L.advertisedDeg)),
+      exhaustAdvertised: optional(boundedNumber('exhaust advertised duration', 'deg', L.advertisedDeg)),
+      intakeLiftIn: boundedNumber('intake lift at the valve', 'in', L.liftIn),
+      exhaustLiftIn: boundedNumber('exhaust lift at the valve', 'in', L.liftIn),
+      lsa: boundedNumber('lobe separation angle', 'deg', L.lsaDeg),
+      intakeCenterline: boundedNumber('installed intake centerline', 'deg', L.intakeCenterlineDeg),
+      rockerRatio: boundedNumber('rocker ratio', ':1', L.rockerRatio)
+        .nullish()
+        .transform((v) => v ?? L.rockerRatio.default),
+      deactivationCompatible: optional(z.boolean({ error: presence('deactivationCompatible', 'true or false') })),
+      emissionsCertified: optional(z.boolean({ error: presence('emissionsCertified', 'true or false') })),
+      springMaxLiftIn: optional(boundedNumber('spring max lift', 'in', L.springMaxLiftIn)),
+      priceCents: optional(
+        boundedNumber('price', 'cents', L.priceCents).int({ error: 'price must be a whole number of cents' }),
+      ),
+    },
+    { error: presence('cam card', 'an object') },
+  )
   // Advertised duration is measured at a smaller tappet lift than 0.050", so it is always the longer one.
   .refine((c) => c.intakeAdvertised === undefined || c.intakeAdvertised > c.intakeDuration050, {
     path: ['intakeAdvertised'],
@@ -84,4 +89,6 @@ export type CamCard = z.output<typeof CamCardSchema>;
 /** What a caller may send before validation. */
 export type CamCardInput = z.input<typeof CamCardSchema>;
 
-export const CamCatalogueSchema = z.array(CamCardSchema, { error: 'the cams file must be a JSON array of cam cards' }).max(20_000);
+export const CamCatalogueSchema = z
+  .array(CamCardSchema, { error: 'the cams file must be a JSON array of cam cards' })
+  .max(20_000);

@@ -22,11 +22,16 @@ export function skuSchema(label = 'SKU', maxLength = L.skuMaxLength) {
   return text(label, { error: presence(label, 'text') })
     .min(1, { error: `${label} must not be empty` })
     .max(maxLength, { error: `${label} must be at most ${maxLength} characters` })
-    .refine((v) => v === '' || /^[A-Za-z0-9][A-Za-z0-9._/-]*$/.test(v), { error: `${label} may hold only letters, digits and . _ - / (no spaces)` });
+    .refine((v) => v === '' || /^[A-Za-z0-9][A-Za-z0-9._/-]*$/.test(v), {
+      error: `${label} may hold only letters, digits and . _ - / (no spaces)`,
+    });
 }
 
 export function flag(label: string, fallback: boolean) {
-  return z.boolean({ error: `${label} must be true or false` }).nullish().transform((v) => v ?? fallback);
+  return z
+    .boolean({ error: `${label} must be true or false` })
+    .nullish()
+    .transform((v) => v ?? fallback);
 }
 
 export function wholeCents(label: string, range: { min: number; max: number } = L.priceCents) {
@@ -70,10 +75,16 @@ export const CatalogueCamSchema = z
       deactivationCompatible: flag('deactivation compatible', false),
       emissionsCertified: flag('certified for emissions', false),
       isFactoryBaseline: flag('factory baseline', false),
-      baselineForLiters: boundedNumber('baseline for displacement', 'L', L.baselineForLiters).nullish().transform((v) => v ?? null),
+      baselineForLiters: boundedNumber('baseline for displacement', 'L', L.baselineForLiters)
+        .nullish()
+        .transform((v) => v ?? null),
       priceCents: wholeCents('price'),
-      costCents: wholeCents('cost', L.costCents).nullish().transform((v) => v ?? 0),
-      stockOnHand: wholeCount('stock on hand', 'units', L.stockOnHand).nullish().transform((v) => v ?? 0),
+      costCents: wholeCents('cost', L.costCents)
+        .nullish()
+        .transform((v) => v ?? 0),
+      stockOnHand: wholeCount('stock on hand', 'units', L.stockOnHand)
+        .nullish()
+        .transform((v) => v ?? 0),
       active: flag('active', true),
       notes: optionalText('notes', L.notesMaxLength),
     },
@@ -100,7 +111,10 @@ export const CATALOGUE_CAM_FIELDS = Object.keys(CatalogueCamSchema.shape) as (ke
 
 /** A PATCH: the record's version (optimistic locking) plus any fields to change, and archive on/off. */
 export const VersionSchema = z
-  .number({ error: (iss) => (iss.input === undefined ? 'version is required (the version you loaded)' : 'version must be a whole number') })
+  .number({
+    error: (iss) =>
+      iss.input === undefined ? 'version is required (the version you loaded)' : 'version must be a whole number',
+  })
   .int({ error: 'version must be a whole number' })
   .positive({ error: 'version must be a whole number' });
 
@@ -110,7 +124,18 @@ export const CamPatchControlSchema = z.object({
 });
 
 /** Query string of GET /api/cams. */
-export const CAM_SORTS = ['sku', 'name', 'supplier', 'intakeDuration050', 'exhaustDuration050', 'intakeLiftIn', 'lsa', 'priceCents', 'stockOnHand', 'updatedAt'] as const;
+export const CAM_SORTS = [
+  'sku',
+  'name',
+  'supplier',
+  'intakeDuration050',
+  'exhaustDuration050',
+  'intakeLiftIn',
+  'lsa',
+  'priceCents',
+  'stockOnHand',
+  'updatedAt',
+] as const;
 export type CamSort = (typeof CAM_SORTS)[number];
 
 const numberParam = (label: string) =>
@@ -133,17 +158,37 @@ const boolParam = (label: string) =>
     .transform((v) => (v === 'true' ? true : v === 'false' ? false : undefined));
 
 export const pageParams = {
-  page: numberParam('page').pipe(z.number().int({ error: 'page must be a whole number' }).min(1, { error: 'page must be at least 1' }).optional()).transform((v) => v ?? 1),
+  page: numberParam('page')
+    .pipe(
+      z.number().int({ error: 'page must be a whole number' }).min(1, { error: 'page must be at least 1' }).optional(),
+    )
+    .transform((v) => v ?? 1),
   pageSize: numberParam('pageSize')
-    .pipe(z.number().int({ error: 'pageSize must be a whole number' }).min(1, { error: 'pageSize must be at least 1' }).max(200, { error: 'pageSize must be at most 200' }).optional())
+    .pipe(
+      z
+        .number()
+        .int({ error: 'pageSize must be a whole number' })
+        .min(1, { error: 'pageSize must be at least 1' })
+        .max(200, { error: 'pageSize must be at most 200' })
+        .optional(),
+    )
     .transform((v) => v ?? 25),
-  dir: z.enum(['asc', 'desc'], { error: 'dir must be asc or desc' }).optional().transform((v) => v ?? 'asc'),
-  q: text('q').max(100, { error: 'q must be at most 100 characters' }).optional().transform((v) => (v ? v : undefined)),
+  dir: z
+    .enum(['asc', 'desc'], { error: 'dir must be asc or desc' })
+    .optional()
+    .transform((v) => v ?? 'asc'),
+  q: text('q')
+    .max(100, { error: 'q must be at most 100 characters' })
+    .optional()
+    .transform((v) => (v ? v : undefined)),
 };
 
 export const CamListQuerySchema = z.strictObject({
   ...pageParams,
-  sort: z.enum(CAM_SORTS, { error: `sort must be one of: ${CAM_SORTS.join(', ')}` }).optional().transform((v) => v ?? 'intakeDuration050'),
+  sort: z
+    .enum(CAM_SORTS, { error: `sort must be one of: ${CAM_SORTS.join(', ')}` })
+    .optional()
+    .transform((v) => v ?? 'intakeDuration050'),
   supplier: numberParam('supplier').pipe(z.number().int({ error: 'supplier must be a supplier id' }).optional()),
   durationMin: numberParam('durationMin'),
   durationMax: numberParam('durationMax'),

@@ -22,7 +22,11 @@ export const DYNO_LIMITS = {
 const L = DYNO_LIMITS;
 
 function bounded(label: string, unit: string, { min, max }: { min: number; max: number }, whole = false) {
-  let n = z.number({ error: (iss) => (iss.input === undefined ? `${label} is required (${unit})` : `${label} must be a number (${unit})`) })
+  let n = z
+    .number({
+      error: (iss) =>
+        iss.input === undefined ? `${label} is required (${unit})` : `${label} must be a number (${unit})`,
+    })
     .min(min, { error: `${label} must be at least ${min} ${unit}` })
     .max(max, { error: `${label} must be at most ${max} ${unit}` });
   if (whole) n = n.int({ error: `${label} must be a whole number of ${unit}` });
@@ -35,7 +39,11 @@ export const AIR_TEXT = {
   humidityPct: { label: 'relative humidity', unit: '%' },
 } as const;
 
-const id = (label: string) => z.number({ error: `${label} must be a record id (whole number)` }).int({ error: `${label} must be a whole number` }).positive({ error: `${label} must be a record id` });
+const id = (label: string) =>
+  z
+    .number({ error: `${label} must be a record id (whole number)` })
+    .int({ error: `${label} must be a whole number` })
+    .positive({ error: `${label} must be a record id` });
 
 export const CurvePointSchema = z.strictObject({
   rpm: bounded('rpm', 'rpm', L.rpm, true),
@@ -70,8 +78,14 @@ export const DynoRunSchema = z
       phase: z.enum(['before', 'after'], { error: 'phase must be before or after' }),
       // Optional for callers that predate it: a run without it was made on the rollers, as every run was then.
       dynoType: z.enum(DYNO_TYPES, { error: `dynoType must be one of: ${DYNO_TYPES.join(', ')}` }).default('chassis'),
-      runAt: z.iso.datetime({ offset: true, error: 'runAt must be a date and time (ISO 8601, e.g. 2026-12-02T14:30:00Z)' }).nullish(),
-      correctionStandard: z.enum(CORRECTION_STANDARD_NAMES, { error: `correctionStandard must be one of: ${CORRECTION_STANDARD_NAMES.join(', ')}` }).default('sae-j1349'),
+      runAt: z.iso
+        .datetime({ offset: true, error: 'runAt must be a date and time (ISO 8601, e.g. 2026-12-02T14:30:00Z)' })
+        .nullish(),
+      correctionStandard: z
+        .enum(CORRECTION_STANDARD_NAMES, {
+          error: `correctionStandard must be one of: ${CORRECTION_STANDARD_NAMES.join(', ')}`,
+        })
+        .default('sae-j1349'),
       // Optional here; required below only when the chosen standard's formula uses the reading.
       airTempC: bounded(AIR_TEXT.airTempC.label, AIR_TEXT.airTempC.unit, L.airTempC).nullish(),
       baroKpa: bounded(AIR_TEXT.baroKpa.label, AIR_TEXT.baroKpa.unit, L.baroKpa).nullish(),
@@ -84,13 +98,19 @@ export const DynoRunSchema = z
         .superRefine((points, ctx) => {
           for (let i = 1; i < points.length; i++) {
             if (points[i].rpm <= points[i - 1].rpm) {
-              ctx.addIssue({ code: 'custom', path: [i, 'rpm'], message: `rpm must rise from point to point (${points[i].rpm} after ${points[i - 1].rpm})` });
+              ctx.addIssue({
+                code: 'custom',
+                path: [i, 'rpm'],
+                message: `rpm must rise from point to point (${points[i].rpm} after ${points[i - 1].rpm})`,
+              });
               return;
             }
           }
         })
         .nullish(),
-      notes: text('notes', { multiline: true, error: 'notes must be text' }).max(L.notesMaxLength, { error: `notes must be at most ${L.notesMaxLength} characters` }).nullish(),
+      notes: text('notes', { multiline: true, error: 'notes must be text' })
+        .max(L.notesMaxLength, { error: `notes must be at most ${L.notesMaxLength} characters` })
+        .nullish(),
     },
     { error: 'the dyno run must be an object' },
   )
@@ -100,20 +120,37 @@ export const DynoRunSchema = z
       if (typeof run !== 'object' || run === null || !Object.hasOwn(AIR_NEEDED_BY, run.correctionStandard)) return;
       for (const field of AIR_NEEDED_BY[run.correctionStandard]) {
         if (run[field] === undefined || run[field] === null) {
-          ctx.addIssue({ code: 'custom', path: [field], message: `${AIR_TEXT[field].label} is required for ${STANDARD_LABELS[run.correctionStandard]} (${AIR_TEXT[field].unit})` });
+          ctx.addIssue({
+            code: 'custom',
+            path: [field],
+            message: `${AIR_TEXT[field].label} is required for ${STANDARD_LABELS[run.correctionStandard]} (${AIR_TEXT[field].unit})`,
+          });
         }
       }
     },
     { when: () => true },
   )
   .superRefine((run, ctx) => {
-    if (!run.peak && !run.curve) ctx.addIssue({ code: 'custom', path: ['curve'], message: 'give either the peak figures (peak) or the pull as rpm/torque points (curve)' });
-    if (run.peak && run.curve) ctx.addIssue({ code: 'custom', path: ['peak'], message: 'give the peak figures or a curve, not both (peaks are derived from the curve)' });
+    if (!run.peak && !run.curve)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['curve'],
+        message: 'give either the peak figures (peak) or the pull as rpm/torque points (curve)',
+      });
+    if (run.peak && run.curve)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['peak'],
+        message: 'give the peak figures or a curve, not both (peaks are derived from the curve)',
+      });
   });
 
 export type DynoRunInput = z.input<typeof DynoRunSchema>;
 export type DynoRunValues = z.output<typeof DynoRunSchema>;
 
 export const DynoRunListQuerySchema = z.strictObject({
-  buildId: z.coerce.number({ error: 'buildId must be a record id' }).int({ error: 'buildId must be a whole number' }).positive({ error: 'buildId is required (a build id)' }),
+  buildId: z.coerce
+    .number({ error: 'buildId must be a record id' })
+    .int({ error: 'buildId must be a whole number' })
+    .positive({ error: 'buildId is required (a build id)' }),
 });

@@ -3,7 +3,7 @@ import type { z } from 'zod';
 export type FieldIssue = { field: string; message: string };
 
 function dotted(path: readonly PropertyKey[]): string {
-  return path.map((p) => (typeof p === 'symbol' ? p.description ?? 'symbol' : String(p))).join('.');
+  return path.map((p) => (typeof p === 'symbol' ? (p.description ?? 'symbol') : String(p))).join('.');
 }
 
 /**

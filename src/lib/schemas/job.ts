@@ -34,8 +34,15 @@ export const JobPatchSchema = z.strictObject(
     // 0 for a paid job that has never been booked: the first save creates its booking.
     version: wholeNumber('version').min(0, { error: 'version must be 0 or more' }),
     bookedFor: bookingDate.optional(),
-    bay: wholeNumber('bay').min(1, { error: 'bay must be at least 1' }).max(JOB_LIMITS.bays, { error: `bay must be at most ${JOB_LIMITS.bays}` }).nullable().optional(),
-    technicianId: wholeNumber('technicianId').min(1, { error: 'technicianId must be a staff id' }).nullable().optional(),
+    bay: wholeNumber('bay')
+      .min(1, { error: 'bay must be at least 1' })
+      .max(JOB_LIMITS.bays, { error: `bay must be at most ${JOB_LIMITS.bays}` })
+      .nullable()
+      .optional(),
+    technicianId: wholeNumber('technicianId')
+      .min(1, { error: 'technicianId must be a staff id' })
+      .nullable()
+      .optional(),
     state: z.enum(JOB_STATES, { error: presence('state', `one of: ${JOB_STATES.join(', ')}`) }).optional(),
   },
   { error: presence('body', 'an object') },
@@ -49,7 +56,11 @@ export const JobListQuerySchema = z
     view: z.enum(JOB_VIEWS, { error: `view must be one of: ${JOB_VIEWS.join(', ')}` }).default('active'),
     from: z.iso.date({ error: 'from must be a date (YYYY-MM-DD)' }).optional(),
     to: z.iso.date({ error: 'to must be a date (YYYY-MM-DD)' }).optional(),
-    page: z.coerce.number({ error: 'page must be a whole number' }).int({ error: 'page must be a whole number' }).min(1, { error: 'page must be at least 1' }).default(1),
+    page: z.coerce
+      .number({ error: 'page must be a whole number' })
+      .int({ error: 'page must be a whole number' })
+      .min(1, { error: 'page must be at least 1' })
+      .default(1),
     pageSize: z.coerce
       .number({ error: 'pageSize must be a whole number' })
       .int({ error: 'pageSize must be a whole number' })
@@ -83,16 +94,33 @@ export const SignOffSchema = z.strictObject(
   {
     ptvIntakeIn: reading('ptvIntakeIn', R.ptvIntakeIn.unit, R.ptvIntakeIn.min, R.ptvIntakeIn.max),
     ptvExhaustIn: reading('ptvExhaustIn', R.ptvExhaustIn.unit, R.ptvExhaustIn.min, R.ptvExhaustIn.max),
-    springInstalledHeightIn: reading('springInstalledHeightIn', R.springInstalledHeightIn.unit, R.springInstalledHeightIn.min, R.springInstalledHeightIn.max),
-    springSeatPressureLb: reading('springSeatPressureLb', R.springSeatPressureLb.unit, R.springSeatPressureLb.min, R.springSeatPressureLb.max),
-    coilBindMarginIn: reading('coilBindMarginIn', R.coilBindMarginIn.unit, R.coilBindMarginIn.min, R.coilBindMarginIn.max),
+    springInstalledHeightIn: reading(
+      'springInstalledHeightIn',
+      R.springInstalledHeightIn.unit,
+      R.springInstalledHeightIn.min,
+      R.springInstalledHeightIn.max,
+    ),
+    springSeatPressureLb: reading(
+      'springSeatPressureLb',
+      R.springSeatPressureLb.unit,
+      R.springSeatPressureLb.min,
+      R.springSeatPressureLb.max,
+    ),
+    coilBindMarginIn: reading(
+      'coilBindMarginIn',
+      R.coilBindMarginIn.unit,
+      R.coilBindMarginIn.min,
+      R.coilBindMarginIn.max,
+    ),
     pushrodLengthIn: reading('pushrodLengthIn', R.pushrodLengthIn.unit, R.pushrodLengthIn.min, R.pushrodLengthIn.max),
     lifterPreloadIn: reading('lifterPreloadIn', R.lifterPreloadIn.unit, R.lifterPreloadIn.min, R.lifterPreloadIn.max),
     // Required by the route when the build has active cylinder deactivation; otherwise not asked.
     deactivationDeleteDone: z.boolean({ error: 'deactivationDeleteDone must be true or false' }).optional(),
     tuneFile: text('tuneFile', { error: presence('tuneFile', 'text') })
       .min(1, { error: 'tuneFile must name the tune file and version loaded' })
-      .max(JOB_LIMITS.tuneFileMaxLength, { error: `tuneFile must be at most ${JOB_LIMITS.tuneFileMaxLength} characters` }),
+      .max(JOB_LIMITS.tuneFileMaxLength, {
+        error: `tuneFile must be at most ${JOB_LIMITS.tuneFileMaxLength} characters`,
+      }),
     notes: text('notes', { multiline: true })
       .max(JOB_LIMITS.notesMaxLength, { error: `notes must be at most ${JOB_LIMITS.notesMaxLength} characters` })
       .optional()

@@ -22,10 +22,14 @@ export const LaborSchema = z.strictObject(
       .refine((h) => Math.abs(h * 100 - Math.round(h * 100)) < 1e-6, { error: 'hours may have at most two decimals' }),
     engines: text('engines', { error: 'engines must be text' })
       .toLowerCase()
-      .max(LABOR_LIMITS.enginesMaxLength, { error: `engines must be at most ${LABOR_LIMITS.enginesMaxLength} characters` })
+      .max(LABOR_LIMITS.enginesMaxLength, {
+        error: `engines must be at most ${LABOR_LIMITS.enginesMaxLength} characters`,
+      })
       .nullish()
       .transform((v) => (v ? v : 'all'))
-      .refine((v) => ENGINES_PATTERN.test(v), { error: 'engines must be "all" or a comma list of short words (truck, car, 5.3)' })
+      .refine((v) => ENGINES_PATTERN.test(v), {
+        error: 'engines must be "all" or a comma list of short words (truck, car, 5.3)',
+      })
       .transform((v) => v.split(/\s*,\s*/).join(', ')),
     active: flag('active', true),
   },
@@ -40,7 +44,13 @@ export const LaborPatchControlSchema = z.object({ version: VersionSchema });
 export const LABOR_SORTS = ['code', 'name', 'hours', 'updatedAt'] as const;
 export const LaborListQuerySchema = z.strictObject({
   ...pageParams,
-  sort: z.enum(LABOR_SORTS, { error: `sort must be one of: ${LABOR_SORTS.join(', ')}` }).optional().transform((v) => v ?? 'code'),
-  active: z.enum(['true', 'false', 'all', ''], { error: 'active must be true, false or all' }).optional().transform((v) => (v === 'true' ? true : v === 'false' ? false : undefined)),
+  sort: z
+    .enum(LABOR_SORTS, { error: `sort must be one of: ${LABOR_SORTS.join(', ')}` })
+    .optional()
+    .transform((v) => v ?? 'code'),
+  active: z
+    .enum(['true', 'false', 'all', ''], { error: 'active must be true, false or all' })
+    .optional()
+    .transform((v) => (v === 'true' ? true : v === 'false' ? false : undefined)),
 });
 export type LaborListQuery = z.output<typeof LaborListQuerySchema>;

@@ -9,7 +9,9 @@ export const LeadNoteSchema = z.strictObject(
   {
     body: text('body', { multiline: true, error: presence('body', 'text') })
       .min(1, { error: 'body must say what was said' })
-      .max(LEAD_NOTE_LIMITS.bodyMaxLength, { error: `body must be at most ${LEAD_NOTE_LIMITS.bodyMaxLength} characters` }),
+      .max(LEAD_NOTE_LIMITS.bodyMaxLength, {
+        error: `body must be at most ${LEAD_NOTE_LIMITS.bodyMaxLength} characters`,
+      }),
   },
   { error: presence('body', 'an object') },
 );

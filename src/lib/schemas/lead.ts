@@ -33,43 +33,63 @@ const optionalText = (label: string, max: number) =>
     .transform((v) => (v ? v : undefined));
 
 export const LeadAnswersSchema = z
-  .strictObject({
-    engine: choice('engine', ENGINE_CHOICES),
-    // Optional so answers saved before the question existed still read; the questionnaire always asks it.
-    vehicle: choice('vehicle', VEHICLE_CHOICES).optional(),
-    use: choice('use', USE_CHOICES),
-    idle: choice('idle', IDLE_CHOICES),
-    emissions: choice('emissions', EMISSIONS_CHOICES),
-    transmission: choice('transmission', TRANSMISSION_CHOICES),
-    driveline: choice('driveline', DRIVELINE_CHOICES),
-    exhaust: choice('exhaust', EXHAUST_CHOICES),
-    budget: choice('budget', BUDGET_CHOICES),
-    name: text('name', { error: presence('name', 'text') })
-      .min(1, { error: 'name must not be empty' })
-      .max(LEAD_LIMITS.nameMaxLength, { error: `name must be at most ${LEAD_LIMITS.nameMaxLength} characters` }),
-    email: optionalText('email', LEAD_LIMITS.emailMaxLength).refine((v) => v === undefined || z.email().safeParse(v).success, {
-      error: 'email must be an e-mail address like name@example.com',
-    }),
-    phone: optionalText('phone', LEAD_LIMITS.phoneMaxLength).refine(
-      (v) => v === undefined || (/^[0-9+()\-.\s]+$/.test(v) && v.replace(/\D/g, '').length >= LEAD_LIMITS.phoneMinDigits),
-      { error: `phone must be digits (at least ${LEAD_LIMITS.phoneMinDigits}), spaces, +, -, ( or )` },
-    ),
-    consent: z.literal(true, { error: 'consent must be given: the shop may only contact you if you say so' }),
-    // The honeypot (hidden from people on /ask): anything in it marks the post as a robot's.
-    website: optionalText('website', LEAD_LIMITS.honeypotMaxLength).optional(),
-  }, { error: presence('answers', 'an object') })
-  .refine((a) => a.email !== undefined || a.phone !== undefined, { path: ['email'], error: 'give an e-mail address or a phone number so the shop can reach you' });
+  .strictObject(
+    {
+      engine: choice('engine', ENGINE_CHOICES),
+      // Optional so answers saved before the question existed still read; the questionnaire always asks it.
+      vehicle: choice('vehicle', VEHICLE_CHOICES).optional(),
+      use: choice('use', USE_CHOICES),
+      idle: choice('idle', IDLE_CHOICES),
+      emissions: choice('emissions', EMISSIONS_CHOICES),
+      transmission: choice('transmission', TRANSMISSION_CHOICES),
+      driveline: choice('driveline', DRIVELINE_CHOICES),
+      exhaust: choice('exhaust', EXHAUST_CHOICES),
+      budget: choice('budget', BUDGET_CHOICES),
+      name: text('name', { error: presence('name', 'text') })
+        .min(1, { error: 'name must not be empty' })
+        .max(LEAD_LIMITS.nameMaxLength, { error: `name must be at most ${LEAD_LIMITS.nameMaxLength} characters` }),
+      email: optionalText('email', LEAD_LIMITS.emailMaxLength).refine(
+        (v) => v === undefined || z.email().safeParse(v).success,
+        {
+          error: 'email must be an e-mail address like name@example.com',
+        },
+      ),
+      phone: optionalText('phone', LEAD_LIMITS.phoneMaxLength).refine(
+        (v) =>
+          v === undefined || (/^[0-9+()\-.\s]+$/.test(v) && v.replace(/\D/g, '').length >= LEAD_LIMITS.phoneMinDigits),
+        { error: `phone must be digits (at least ${LEAD_LIMITS.phoneMinDigits}), spaces, +, -, ( or )` },
+      ),
+      consent: z.literal(true, { error: 'consent must be given: the shop may only contact you if you say so' }),
+      // The honeypot (hidden from people on /ask): anything in it marks the post as a robot's.
+      website: optionalText('website', LEAD_LIMITS.honeypotMaxLength).optional(),
+    },
+    { error: presence('answers', 'an object') },
+  )
+  .refine((a) => a.email !== undefined || a.phone !== undefined, {
+    path: ['email'],
+    error: 'give an e-mail address or a phone number so the shop can reach you',
+  });
 
 export type LeadAnswers = z.output<typeof LeadAnswersSchema>;
 
-export const LeadPatchSchema = z.strictObject({
-  version: z.number({ error: presence('version', 'a whole number') }).int({ error: 'version must be a whole number' }).min(1, { error: 'version must be at least 1' }),
-  status: choice('status', LEAD_STATUSES),
-}, { error: presence('body', 'an object') });
+export const LeadPatchSchema = z.strictObject(
+  {
+    version: z
+      .number({ error: presence('version', 'a whole number') })
+      .int({ error: 'version must be a whole number' })
+      .min(1, { error: 'version must be at least 1' }),
+    status: choice('status', LEAD_STATUSES),
+  },
+  { error: presence('body', 'an object') },
+);
 
 export const LeadListQuerySchema = z.strictObject({
   status: choice('status', LEAD_STATUSES).optional(),
-  page: z.coerce.number({ error: 'page must be a whole number' }).int({ error: 'page must be a whole number' }).min(1, { error: 'page must be at least 1' }).default(1),
+  page: z.coerce
+    .number({ error: 'page must be a whole number' })
+    .int({ error: 'page must be a whole number' })
+    .min(1, { error: 'page must be at least 1' })
+    .default(1),
   pageSize: z.coerce
     .number({ error: 'pageSize must be a whole number' })
     .int({ error: 'pageSize must be a whole number' })

@@ -29,7 +29,13 @@ export const NEED_RULE_KIND_TEXT: Record<NeedRuleKindOption, { title: string }> 
 };
 
 /** The vehicle-class choice of a rule: one class, or every class without a rule of its own. */
-export const RULE_VEHICLE_CLASS_TEXT: Record<VehicleClass | 'any', string> = { any: 'Every vehicle', truck: 'Trucks', suv: 'SUVs', van: 'Vans', car: 'Cars' };
+export const RULE_VEHICLE_CLASS_TEXT: Record<VehicleClass | 'any', string> = {
+  any: 'Every vehicle',
+  truck: 'Trucks',
+  suv: 'SUVs',
+  van: 'Vans',
+  car: 'Cars',
+};
 
 const id = (label: string) =>
   z
@@ -50,21 +56,33 @@ export const NeedRuleItemSchema = z
       .nullish()
       .transform((v) => v ?? 1),
   })
-  .refine((i) => i.partId !== null || i.laborOperationId !== null, { path: ['partId'], error: 'each item needs a part, a labour operation or both' });
+  .refine((i) => i.partId !== null || i.laborOperationId !== null, {
+    path: ['partId'],
+    error: 'each item needs a part, a labour operation or both',
+  });
 
 export const NeedRuleSchema = z.strictObject(
   {
     kind: z.enum(NEED_RULE_KIND_OPTIONS, { error: presence('kind', `one of: ${NEED_RULE_KIND_OPTIONS.join(', ')}`) }),
     // null or absent: every vehicle class that has no rule of its own for this kind.
     vehicleClass: z
-      .enum(VEHICLE_CLASSES, { error: `vehicleClass must be one of: ${VEHICLE_CLASSES.join(', ')} (or null for every vehicle)` })
+      .enum(VEHICLE_CLASSES, {
+        error: `vehicleClass must be one of: ${VEHICLE_CLASSES.join(', ')} (or null for every vehicle)`,
+      })
       .nullish()
       .transform((v) => v ?? null),
     // Schema 1 rules carried their own lift or rpm threshold; that decision is the advisor's now.
-    threshold: z.null({ error: 'rules take no threshold: the advisor decides when a cam needs springs (past the installed springs’ limit), a converter or the rest' }).optional(),
+    threshold: z
+      .null({
+        error:
+          'rules take no threshold: the advisor decides when a cam needs springs (past the installed springs’ limit), a converter or the rest',
+      })
+      .optional(),
     label: text('label', { error: presence('label', 'text') })
       .min(1, { error: 'label must not be empty' })
-      .max(NEED_RULE_LIMITS.labelMaxLength, { error: `label must be at most ${NEED_RULE_LIMITS.labelMaxLength} characters` }),
+      .max(NEED_RULE_LIMITS.labelMaxLength, {
+        error: `label must be at most ${NEED_RULE_LIMITS.labelMaxLength} characters`,
+      }),
     active: flag('active', true),
     items: z
       .array(NeedRuleItemSchema, { error: 'items must be a list of parts and labour' })
@@ -77,5 +95,8 @@ export type NeedRuleValues = z.output<typeof NeedRuleSchema>;
 export type NeedRuleFormInput = z.input<typeof NeedRuleSchema>;
 
 export const NeedRulePatchControlSchema = z.object({
-  version: z.number({ error: 'version is required (the version you loaded)' }).int().positive({ error: 'version must be a whole number' }),
+  version: z
+    .number({ error: 'version is required (the version you loaded)' })
+    .int()
+    .positive({ error: 'version must be a whole number' }),
 });

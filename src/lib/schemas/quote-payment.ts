@@ -10,11 +10,18 @@ export const COUNTER_METHODS = ['cash', 'card-present'] as const;
 export const CounterPaymentSchema = z.strictObject({
   version: VersionSchema,
   amountCents: z
-    .number({ error: (iss) => (iss.input === undefined ? 'amountCents is required' : 'amountCents must be a whole number of cents') })
+    .number({
+      error: (iss) =>
+        iss.input === undefined ? 'amountCents is required' : 'amountCents must be a whole number of cents',
+    })
     .int({ error: 'amountCents must be a whole number of cents' })
     .min(COUNTER_PAYMENT_LIMITS.amountCents.min, { error: 'amountCents must be at least 1' })
-    .max(COUNTER_PAYMENT_LIMITS.amountCents.max, { error: `amountCents must be at most ${COUNTER_PAYMENT_LIMITS.amountCents.max}` }),
-  method: z.enum(COUNTER_METHODS, { error: "method must be 'cash' or 'card-present' (a card on the shop's own terminal)" }),
+    .max(COUNTER_PAYMENT_LIMITS.amountCents.max, {
+      error: `amountCents must be at most ${COUNTER_PAYMENT_LIMITS.amountCents.max}`,
+    }),
+  method: z.enum(COUNTER_METHODS, {
+    error: "method must be 'cash' or 'card-present' (a card on the shop's own terminal)",
+  }),
 });
 
 /** POST /api/quotes/[id]/balance-request */

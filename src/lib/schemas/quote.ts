@@ -29,7 +29,9 @@ export const QuoteLineInputSchema = z.strictObject({
   kind: z.enum(QUOTE_LINE_KIND_LIST, { error: `kind must be one of: ${QUOTE_LINE_KIND_LIST.join(', ')}` }),
   description: text('description', { error: 'description must be text' })
     .min(1, { error: 'description must not be empty' })
-    .max(QUOTE_LIMITS.descriptionMaxLength, { error: `description must be at most ${QUOTE_LIMITS.descriptionMaxLength} characters` })
+    .max(QUOTE_LIMITS.descriptionMaxLength, {
+      error: `description must be at most ${QUOTE_LIMITS.descriptionMaxLength} characters`,
+    })
     .optional(),
   quantity: z
     .number({ error: 'quantity must be a number' })
@@ -41,7 +43,9 @@ export const QuoteLineInputSchema = z.strictObject({
     .number({ error: 'unitPriceCents must be a whole number of cents' })
     .int({ error: 'unitPriceCents must be a whole number of cents' })
     .min(QUOTE_LIMITS.unitPriceCents.min, { error: 'unitPriceCents must not be negative' })
-    .max(QUOTE_LIMITS.unitPriceCents.max, { error: `unitPriceCents must be at most ${QUOTE_LIMITS.unitPriceCents.max}` })
+    .max(QUOTE_LIMITS.unitPriceCents.max, {
+      error: `unitPriceCents must be at most ${QUOTE_LIMITS.unitPriceCents.max}`,
+    })
     .optional(),
   /** Taken off this line before tax; how much counter staff may give is checked on the server (src/lib/quotes/authority.ts). */
   discountCents: z
@@ -56,7 +60,9 @@ export const QuoteLineInputSchema = z.strictObject({
 });
 export type QuoteLineInput = z.output<typeof QuoteLineInputSchema>;
 
-const lines = z.array(QuoteLineInputSchema, { error: 'lines must be a list' }).max(QUOTE_LIMITS.lines, { error: `at most ${QUOTE_LIMITS.lines} lines` });
+const lines = z
+  .array(QuoteLineInputSchema, { error: 'lines must be a list' })
+  .max(QUOTE_LIMITS.lines, { error: `at most ${QUOTE_LIMITS.lines} lines` });
 
 export const QuoteCreateSchema = z.strictObject({
   buildId: id('buildId'),
@@ -71,21 +77,31 @@ export const QuotePatchSchema = z.strictObject({
 });
 
 export const QuoteRefundSchema = z.strictObject({
-  afterFullRefund: z.enum(['cancel', 'reopen'], { error: "afterFullRefund must be 'cancel' (the job is cancelled) or 'reopen' (the quote can be paid again)" }).optional(),
+  afterFullRefund: z
+    .enum(['cancel', 'reopen'], {
+      error: "afterFullRefund must be 'cancel' (the job is cancelled) or 'reopen' (the quote can be paid again)",
+    })
+    .optional(),
   amountCents: z
-    .number({ error: (iss) => (iss.input === undefined ? 'amountCents is required' : 'amountCents must be a whole number of cents') })
+    .number({
+      error: (iss) =>
+        iss.input === undefined ? 'amountCents is required' : 'amountCents must be a whole number of cents',
+    })
     .int({ error: 'amountCents must be a whole number of cents' })
     .min(QUOTE_LIMITS.refundCents.min, { error: 'amountCents must be at least 1' })
     .max(QUOTE_LIMITS.refundCents.max, { error: `amountCents must be at most ${QUOTE_LIMITS.refundCents.max}` }),
-  reason: text('reason', { error: 'reason must be text' }).max(255, { error: 'reason must be at most 255 characters' }).optional(),
+  reason: text('reason', { error: 'reason must be text' })
+    .max(255, { error: 'reason must be at most 255 characters' })
+    .optional(),
 });
-
 
 /** A staff move through the lifecycle; which moves are legal is decided by src/lib/quotes/lifecycle.ts (409). */
 export const QuoteTransitionSchema = z.strictObject({
   to: z.enum(QUOTE_STATUSES, { error: `to must be one of: ${QUOTE_STATUSES.join(', ')}` }),
   version: VersionSchema,
-  reason: text('reason', { error: 'reason must be text' }).max(255, { error: 'reason must be at most 255 characters' }).optional(),
+  reason: text('reason', { error: 'reason must be text' })
+    .max(255, { error: 'reason must be at most 255 characters' })
+    .optional(),
 });
 
 export const QuoteReviseSchema = z.strictObject({ version: VersionSchema });

@@ -20,7 +20,8 @@ const day = (label: string) =>
     .optional();
 
 export const utcDay = (d: Date) => d.toISOString().slice(0, 10);
-export const addDays = (isoDay: string, days: number) => utcDay(new Date(Date.parse(`${isoDay}T00:00:00Z`) + days * DAY_MS));
+export const addDays = (isoDay: string, days: number) =>
+  utcDay(new Date(Date.parse(`${isoDay}T00:00:00Z`) + days * DAY_MS));
 
 /** Days from `from` to `to`, both included: the same day twice is 1. */
 export function daysInRange(from: string, to: string): number {
@@ -31,22 +32,24 @@ export type ReportRange = { from: string; to: string; days: number };
 
 /** Builds the schema against a given "today" so tests and the page agree on the default range. */
 export function reportRangeSchema(today: () => string = () => utcDay(new Date())) {
-  return z
-    .object({ from: day('from'), to: day('to') })
-    .transform((v, ctx): ReportRange => {
-      const to = v.to ?? (v.from ? addDays(v.from, REPORT_LIMITS.defaultDays - 1) : today());
-      const from = v.from ?? addDays(to, -(REPORT_LIMITS.defaultDays - 1));
-      const days = daysInRange(from, to);
-      if (days < 1) {
-        ctx.addIssue({ code: 'custom', path: ['from'], message: `from (${from}) must be on or before to (${to})` });
-        return z.NEVER;
-      }
-      if (days > REPORT_LIMITS.maxDays) {
-        ctx.addIssue({ code: 'custom', path: ['to'], message: `the range may be at most one year (${REPORT_LIMITS.maxDays} days); ${from} to ${to} is ${days} days` });
-        return z.NEVER;
-      }
-      return { from, to, days };
-    });
+  return z.object({ from: day('from'), to: day('to') }).transform((v, ctx): ReportRange => {
+    const to = v.to ?? (v.from ? addDays(v.from, REPORT_LIMITS.defaultDays - 1) : today());
+    const from = v.from ?? addDays(to, -(REPORT_LIMITS.defaultDays - 1));
+    const days = daysInRange(from, to);
+    if (days < 1) {
+      ctx.addIssue({ code: 'custom', path: ['from'], message: `from (${from}) must be on or before to (${to})` });
+      return z.NEVER;
+    }
+    if (days > REPORT_LIMITS.maxDays) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['to'],
+        message: `the range may be at most one year (${REPORT_LIMITS.maxDays} days); ${from} to ${to} is ${days} days`,
+      });
+      return z.NEVER;
+    }
+    return { from, to, days };
+  });
 }
 
 export const ReportRangeSchema = reportRangeSchema();

@@ -27,10 +27,17 @@ export const ShopSettingsSchema = z
       name: setting('shop name', S.nameMaxLength, { required: true }),
       address: setting('address', 255, { multiline: true }),
       phone: setting('phone', 40),
-      email: z.union([z.literal(''), text('email').pipe(z.email({ error: 'email must be an e-mail address' }).max(254))], { error: 'email must be an e-mail address' }),
+      email: z.union(
+        [z.literal(''), text('email').pipe(z.email({ error: 'email must be an e-mail address' }).max(254))],
+        { error: 'email must be an e-mail address' },
+      ),
       laborRateCents: wholeCents('labour rate', S.laborRateCents),
-      taxRateBp: boundedNumber('tax rate', 'bp', S.taxRateBp).int({ error: 'tax rate must be a whole number of basis points' }),
-      depositPercentBp: boundedNumber('deposit percent', 'bp', S.depositPercentBp).int({ error: 'deposit percent must be a whole number of basis points' }),
+      taxRateBp: boundedNumber('tax rate', 'bp', S.taxRateBp).int({
+        error: 'tax rate must be a whole number of basis points',
+      }),
+      depositPercentBp: boundedNumber('deposit percent', 'bp', S.depositPercentBp).int({
+        error: 'deposit percent must be a whole number of basis points',
+      }),
       depositMinCents: wholeCents('deposit minimum', S.depositCents),
       depositMaxCents: wholeCents('deposit maximum', S.depositCents),
       // Optional so a form that does not show it yet keeps the stored value (issue 12 item 8).

@@ -13,14 +13,19 @@ export const ROLE_LABELS: Record<(typeof STAFF_ROLE_VALUES)[number], string> = {
 };
 
 const roleField = z.enum(STAFF_ROLE_VALUES, { error: 'must be manager, counter or tech' });
-const nameField = text('name', { error: 'required' }).min(1, 'required').max(NAME_MAX, `at most ${NAME_MAX} characters`);
+const nameField = text('name', { error: 'required' })
+  .min(1, 'required')
+  .max(NAME_MAX, `at most ${NAME_MAX} characters`);
 
 export const inviteUserSchema = z.strictObject({ email: emailField, name: nameField, role: roleField });
 export type InviteUserInput = z.infer<typeof inviteUserSchema>;
 
 export const updateUserSchema = z
   .strictObject({
-    version: z.number({ error: 'required (the version you last saw)' }).int('a whole number').positive('a whole number from 1'),
+    version: z
+      .number({ error: 'required (the version you last saw)' })
+      .int('a whole number')
+      .positive('a whole number from 1'),
     role: roleField.optional(),
     active: z.boolean({ error: 'must be true or false' }).optional(),
     name: nameField.optional(),
@@ -31,4 +36,7 @@ export const updateUserSchema = z
   });
 export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
-export const userIdParam = z.coerce.number({ error: 'must be a number' }).int('a whole number').positive('a whole number from 1');
+export const userIdParam = z.coerce
+  .number({ error: 'must be a number' })
+  .int('a whole number')
+  .positive('a whole number from 1');

@@ -47,7 +47,9 @@ export function needLabel(kind: NeedKind, suggestedStallRpm?: number): string {
     case 'deactivation-delete':
       return 'Cylinder-shutdown delete';
     case 'converter':
-      return suggestedStallRpm ? `Converter (about ${formatNumber(Math.round(suggestedStallRpm / 100) * 100)} rpm stall)` : 'Converter';
+      return suggestedStallRpm
+        ? `Converter (about ${formatNumber(Math.round(suggestedStallRpm / 100) * 100)} rpm stall)`
+        : 'Converter';
     case 'tune':
       return 'Re-tune';
   }
@@ -67,14 +69,26 @@ export function jobPriceText(cents: number | null): string {
 }
 
 export function comparisonGroups(cams: readonly ComparedCam[]): ComparisonGroup[] {
-  const row = (key: string, label: string, value: (cam: ComparedCam) => string): ComparisonRow => ({ key, label, values: cams.map(value) });
+  const row = (key: string, label: string, value: (cam: ComparedCam) => string): ComparisonRow => ({
+    key,
+    label,
+    values: cams.map(value),
+  });
   return [
     {
       key: 'card',
       title: 'The cam card',
       rows: [
-        row('duration', 'Duration at 0.050" (intake / exhaust)', (c) => `${deg(c.specs.intakeDuration050)} / ${deg(c.specs.exhaustDuration050)}`),
-        row('lift', 'Lift at the valve (intake / exhaust)', (c) => `${inches(c.specs.intakeLiftIn)} / ${inches(c.specs.exhaustLiftIn)}`),
+        row(
+          'duration',
+          'Duration at 0.050" (intake / exhaust)',
+          (c) => `${deg(c.specs.intakeDuration050)} / ${deg(c.specs.exhaustDuration050)}`,
+        ),
+        row(
+          'lift',
+          'Lift at the valve (intake / exhaust)',
+          (c) => `${inches(c.specs.intakeLiftIn)} / ${inches(c.specs.exhaustLiftIn)}`,
+        ),
         row('lsa', 'Lobe separation angle (LSA)', (c) => deg(c.specs.lsa)),
         row('icl', 'Intake centerline, installed', (c) => deg(c.specs.intakeCenterline)),
       ],
@@ -97,19 +111,37 @@ export function comparisonGroups(cams: readonly ComparedCam[]): ComparisonGroup[
         row('dcr', 'Dynamic compression', (c) => `${formatNumber(c.dynamicCompression, 1)}:1`),
         row('idle', 'Idle', (c) => IDLE_WORDS[idleCharacter(c.idleVacuumInHg)]),
         row('vacuum', 'Vacuum at idle', (c) => vacuumWords(c.idleVacuumInHg)),
-        row('peak', 'Peak power', (c) => `${hpText(c.predicted.peakHp)} (${pctText(c.predicted.gainPctPeakHp)} on now)`),
+        row(
+          'peak',
+          'Peak power',
+          (c) => `${hpText(c.predicted.peakHp)} (${pctText(c.predicted.gainPctPeakHp)} on now)`,
+        ),
         row('crossover', 'Pulls harder than the cam in it now', (c) =>
-          c.crossoverRpm === null ? 'Not within the rev range' : `From about ${formatNumber(Math.round(c.crossoverRpm / 100) * 100, 0, 'rpm')}`),
+          c.crossoverRpm === null
+            ? 'Not within the rev range'
+            : `From about ${formatNumber(Math.round(c.crossoverRpm / 100) * 100, 0, 'rpm')}`,
+        ),
         row('low', `Pulling power below ${formatNumber(LOW_END_TOP_RPM, 0, 'rpm')}`, (c) =>
-          c.predicted.lowEndLossPct >= 1 ? `Up to ${formatNumber(c.predicted.lowEndLossPct, 0, '%')} less than now` : 'About the same as now'),
+          c.predicted.lowEndLossPct >= 1
+            ? `Up to ${formatNumber(c.predicted.lowEndLossPct, 0, '%')} less than now`
+            : 'About the same as now',
+        ),
       ],
     },
     {
       key: 'job',
       title: 'The job',
       rows: [
-        row('needs', 'The job includes', (c) => c.needs.map((n) => needLabel(n.kind, n.suggestedStallRpm)).join(', ') || 'The cam only'),
-        row('emissions', 'Emissions', (c) => (c.emissionsCertified ? 'Certified for emissions-tested road use' : 'Not certified for emissions-tested road use')),
+        row(
+          'needs',
+          'The job includes',
+          (c) => c.needs.map((n) => needLabel(n.kind, n.suggestedStallRpm)).join(', ') || 'The cam only',
+        ),
+        row('emissions', 'Emissions', (c) =>
+          c.emissionsCertified
+            ? 'Certified for emissions-tested road use'
+            : 'Not certified for emissions-tested road use',
+        ),
         row('price', 'Whole job before tax', (c) => jobPriceText(c.jobPriceCents)),
       ],
     },

@@ -30,7 +30,8 @@ const IDLE_SENTENCE = {
 const PER_CAM_CAUTIONS: readonly CautionKind[] = ['emissions', 'brakes', 'converter'];
 
 /** A catalogue cam by its grind name (the card name starts with the shop's SKU); a card given whole keeps its name. */
-export const customerCamName = (cam: Pick<ComparedCam, 'camId' | 'camName'>) => (typeof cam.camId === 'number' ? grindNameOf(cam.camName) : cam.camName);
+export const customerCamName = (cam: Pick<ComparedCam, 'camId' | 'camName'>) =>
+  typeof cam.camId === 'number' ? grindNameOf(cam.camName) : cam.camName;
 
 const aboutRpm = (rpm: number) => formatNumber(Math.round(rpm / 100) * 100, 0, 'rpm');
 
@@ -54,6 +55,8 @@ export function customerCam(cam: ComparedCam): CustomerCam {
       IDLE_SENTENCE[idleCharacter(cam.idleVacuumInHg)],
     ],
     includes: cam.needs.map((n) => plainNeed(n.kind, n.suggestedStallRpm)),
-    knowFirst: [...new Set(cam.cautions.filter((c) => PER_CAM_CAUTIONS.includes(c.kind)).map((c) => PLAIN_CAUTION[c.kind]))],
+    knowFirst: [
+      ...new Set(cam.cautions.filter((c) => PER_CAM_CAUTIONS.includes(c.kind)).map((c) => PLAIN_CAUTION[c.kind])),
+    ],
   };
 }

@@ -7,7 +7,12 @@ import { blobStore } from './index';
 // Spec-sheet attachments for catalogue records: the metadata row (model CatalogueAttachment) and the
 // bytes in the blob store. The content type comes from the file's first bytes, never from its name.
 
-export { ATTACHMENT_CONTENT_TYPES, ATTACHMENT_ENTITY_TYPES, type AttachmentContentType, type AttachmentEntityType } from '@/lib/db/models';
+export {
+  ATTACHMENT_CONTENT_TYPES,
+  ATTACHMENT_ENTITY_TYPES,
+  type AttachmentContentType,
+  type AttachmentEntityType,
+} from '@/lib/db/models';
 export const ATTACHMENT_MAX_BYTES = 5 * 1024 * 1024;
 // Spec sheets per cam, part or labour operation: enough for every sheet a supplier sends, not a file store.
 export const ATTACHMENT_MAX_PER_RECORD = 10;
@@ -30,7 +35,10 @@ export function sniffAttachmentType(bytes: Uint8Array): AttachmentContentType | 
 
 /** A display name safe for a header and a page: no paths, no control characters, at most 160 chars. */
 export function safeFileName(name: string, contentType: AttachmentContentType): string {
-  const base = (name.split(/[\\/]/).pop() ?? '').replace(/[^\w .()-]+/g, '_').replace(/^[ .]+/, '').slice(0, 150);
+  const base = (name.split(/[\\/]/).pop() ?? '')
+    .replace(/[^\w .()-]+/g, '_')
+    .replace(/^[ .]+/, '')
+    .slice(0, 150);
   const ext = contentType === 'application/pdf' ? '.pdf' : contentType === 'image/png' ? '.png' : '.jpg';
   const stem = base.replace(/\.[A-Za-z0-9]{1,5}$/, '') || 'spec-sheet';
   return `${stem}${ext}`;
@@ -63,7 +71,11 @@ export async function listAttachments(entityType: AttachmentEntityType, entityId
   return rows.map(toRecord);
 }
 
-export async function getAttachment(entityType: AttachmentEntityType, entityId: number, id: number): Promise<(AttachmentRecord & { storageKey: string }) | null> {
+export async function getAttachment(
+  entityType: AttachmentEntityType,
+  entityId: number,
+  id: number,
+): Promise<(AttachmentRecord & { storageKey: string }) | null> {
   const row = await CatalogueAttachment.findOne({ where: { id, entityType, entityId } });
   return row ? { ...toRecord(row), storageKey: row.storageKey } : null;
 }
@@ -84,7 +96,12 @@ export async function addAttachment(
   try {
     return await db().transaction(async (t) => {
       // Locking the record's attachment rows (and the index gap after them) makes two uploads at once queue for the cap.
-      const existing = await CatalogueAttachment.findAll({ attributes: ['id'], where: { entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
+      const existing = await CatalogueAttachment.findAll({
+        attributes: ['id'],
+        where: { entityType, entityId },
+        transaction: t,
+        lock: t.LOCK.UPDATE,
+      });
       if (existing.length >= ATTACHMENT_MAX_PER_RECORD) throw new AttachmentLimitReached();
       const row = await CatalogueAttachment.create(
         {
@@ -100,7 +117,10 @@ export async function addAttachment(
         { transaction: t },
       );
       const record = toRecord(row);
-      await recordAudit({ user, action: 'attachment.added', entityType, entityId: String(entityId), before: null, after: record }, t);
+      await recordAudit(
+        { user, action: 'attachment.added', entityType, entityId: String(entityId), before: null, after: record },
+        t,
+      );
       return record;
     });
   } catch (error) {
@@ -109,13 +129,32 @@ export async function addAttachment(
   }
 }
 
-export async function removeAttachment(entityType: AttachmentEntityType, entityId: number, id: number, user: SessionUser): Promise<(AttachmentRecord & { storageKey: string }) | null> {
+export async function removeAttachment(
+  entityType: AttachmentEntityType,
+  entityId: number,
+  id: number,
+  user: SessionUser,
+): Promise<(AttachmentRecord & { storageKey: string }) | null> {
   const removed = await db().transaction(async (t) => {
-    const row = await CatalogueAttachment.findOne({ where: { id, entityType, entityId }, transaction: t, lock: t.LOCK.UPDATE });
+    const row = await CatalogueAttachment.findOne({
+      where: { id, entityType, entityId },
+      transaction: t,
+      lock: t.LOCK.UPDATE,
+    });
     if (!row) return null;
     const record = { ...toRecord(row), storageKey: row.storageKey };
     await row.destroy({ transaction: t });
-    await recordAudit({ user, action: 'attachment.removed', entityType, entityId: String(entityId), before: toRecord(row), after: null }, t);
+    await recordAudit(
+      {
+        user,
+        action: 'attachment.removed',
+        entityType,
+        entityId: String(entityId),
+        before: toRecord(row),
+        after: null,
+      },
+      t,
+    );
     return record;
   });
   if (removed) await blobStore().remove(removed.storageKey);

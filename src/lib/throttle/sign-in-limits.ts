@@ -23,15 +23,36 @@ export const SIGN_IN_LIMITS = {
   addressWindowSeconds: 15 * 60,
 } as const;
 
-type Limiters = { account: RateLimiterMySQL; pauses: RateLimiterMySQL; device: RateLimiterMySQL; address: RateLimiterMySQL };
+type Limiters = {
+  account: RateLimiterMySQL;
+  pauses: RateLimiterMySQL;
+  device: RateLimiterMySQL;
+  address: RateLimiterMySQL;
+};
 let limiters: Limiters | undefined;
 
 function signInLimiters(): Limiters {
   limiters ??= {
-    account: makeLimiter({ keyPrefix: 'signin-account', points: SIGN_IN_LIMITS.accountFailures, durationSeconds: SIGN_IN_LIMITS.accountWindowSeconds }),
-    pauses: makeLimiter({ keyPrefix: 'signin-pauses', points: 1_000_000, durationSeconds: SIGN_IN_LIMITS.pauseMemorySeconds }),
-    device: makeLimiter({ keyPrefix: 'signin-device', points: SIGN_IN_LIMITS.deviceFailures, durationSeconds: SIGN_IN_LIMITS.deviceWindowSeconds }),
-    address: makeLimiter({ keyPrefix: 'signin-address', points: SIGN_IN_LIMITS.addressFailures, durationSeconds: SIGN_IN_LIMITS.addressWindowSeconds }),
+    account: makeLimiter({
+      keyPrefix: 'signin-account',
+      points: SIGN_IN_LIMITS.accountFailures,
+      durationSeconds: SIGN_IN_LIMITS.accountWindowSeconds,
+    }),
+    pauses: makeLimiter({
+      keyPrefix: 'signin-pauses',
+      points: 1_000_000,
+      durationSeconds: SIGN_IN_LIMITS.pauseMemorySeconds,
+    }),
+    device: makeLimiter({
+      keyPrefix: 'signin-device',
+      points: SIGN_IN_LIMITS.deviceFailures,
+      durationSeconds: SIGN_IN_LIMITS.deviceWindowSeconds,
+    }),
+    address: makeLimiter({
+      keyPrefix: 'signin-address',
+      points: SIGN_IN_LIMITS.addressFailures,
+      durationSeconds: SIGN_IN_LIMITS.addressWindowSeconds,
+    }),
   };
   return limiters;
 }
@@ -68,7 +89,8 @@ async function reserveUnknownDevice(email: string, ip: string): Promise<SignInRe
   const { account, pauses, address } = signInLimiters();
   const key = accountKey(email);
   const byAddress = await consumePoint(address, ip);
-  if (!byAddress.allowed) return { ok: false, retryAfterSeconds: retryAfterSeconds(byAddress.res), pauseStarted: false };
+  if (!byAddress.allowed)
+    return { ok: false, retryAfterSeconds: retryAfterSeconds(byAddress.res), pauseStarted: false };
   const byAccount = await consumePoint(account, key);
   if (!byAccount.allowed) {
     // A refused attempt checked no password, so it is not a failure from this address.
@@ -91,7 +113,11 @@ async function reserveUnknownDevice(email: string, ip: string): Promise<SignInRe
   };
 }
 
-export function reserveSignInAttempt(input: { email: string; ip: string; knownDeviceId: string | null }): Promise<SignInReservation> {
+export function reserveSignInAttempt(input: {
+  email: string;
+  ip: string;
+  knownDeviceId: string | null;
+}): Promise<SignInReservation> {
   return input.knownDeviceId ? reserveKnownDevice(input.knownDeviceId) : reserveUnknownDevice(input.email, input.ip);
 }
 

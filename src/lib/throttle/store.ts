@@ -67,13 +67,17 @@ function sequelizePool() {
         releaseConnection(conn: DriverConnection): void;
       };
       manager.getConnection().then(
-        (conn) => cb(null, callbackConnection(conn, () => {
-          try {
-            manager.releaseConnection(conn);
-          } catch {
-            // released twice: nothing left to give back
-          }
-        })),
+        (conn) =>
+          cb(
+            null,
+            callbackConnection(conn, () => {
+              try {
+                manager.releaseConnection(conn);
+              } catch {
+                // released twice: nothing left to give back
+              }
+            }),
+          ),
         (error: Error) => cb(error),
       );
     },
@@ -102,7 +106,11 @@ export function makeLimiter(options: LimiterOptions): RateLimiterMySQL {
  * Concurrent consumes of one key can deadlock on the upsert's row lock (MariaDB rolls one back, 1213);
  * that one is counted again rather than answered 500.
  */
-export async function consumePoint(limiter: RateLimiterMySQL, key: string, points = 1): Promise<{ allowed: boolean; res: RateLimiterRes }> {
+export async function consumePoint(
+  limiter: RateLimiterMySQL,
+  key: string,
+  points = 1,
+): Promise<{ allowed: boolean; res: RateLimiterRes }> {
   return retryOnLockContention(async () => {
     try {
       return { allowed: true, res: await limiter.consume(key, points) };

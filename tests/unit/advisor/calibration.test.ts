@@ -1,5 +1,12 @@
 import { BAND } from '@/lib/advisor/bands';
-import { PEAK_FACTS, CROSSING_FACTS, CALIBRATION_ENGINE, CALIBRATION_STOCK_CAM, CALIBRATION_TRUCK_CAM, CALIBRATION_BIG_CAM } from '@/lib/advisor/calibration';
+import {
+  PEAK_FACTS,
+  CROSSING_FACTS,
+  CALIBRATION_ENGINE,
+  CALIBRATION_STOCK_CAM,
+  CALIBRATION_TRUCK_CAM,
+  CALIBRATION_BIG_CAM,
+} from '@/lib/advisor/calibration';
 import { calibrationReport } from '@/lib/advisor/calibration-report';
 import { FITTED, FITTED_RANGES } from '@/lib/advisor/cycle/constants';
 import { predictCurve } from '@/lib/advisor';
@@ -49,7 +56,9 @@ describe('calibration (engine-dyno facts, common practice, values from memory)',
     const peakRms = rms(report.peaks.map((p) => p.errorPct));
     expect(BAND.halfWidthPct).toBeGreaterThanOrEqual(2 * peakRms);
     const stockHp = report.peaks.find((p) => p.cam === 'stock' && p.quantity === 'peakHp')!;
-    const gains = report.peaks.filter((p) => p.cam !== 'stock' && p.quantity === 'peakHp').map((p) => ((1 + p.errorPct / 100) / (1 + stockHp.errorPct / 100) - 1) * 100);
+    const gains = report.peaks
+      .filter((p) => p.cam !== 'stock' && p.quantity === 'peakHp')
+      .map((p) => ((1 + p.errorPct / 100) / (1 + stockHp.errorPct / 100) - 1) * 100);
     expect(BAND.gainUncertaintyPct).toBeGreaterThanOrEqual(rms(gains) * 0.95);
   });
 });

@@ -7,7 +7,12 @@ import { join } from 'node:path';
 const root = join(__dirname, '../../..');
 const examples = join(root, 'docs/examples');
 const advise = (...args: string[]) =>
-  spawnSync('npx', ['tsx', 'src/cli/advise.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000, maxBuffer: 64 * 1024 * 1024 });
+  spawnSync('npx', ['tsx', 'src/cli/advise.ts', ...args], {
+    cwd: root,
+    encoding: 'utf8',
+    timeout: 60_000,
+    maxBuffer: 64 * 1024 * 1024,
+  });
 
 const scratch = mkdtempSync(join(tmpdir(), 'lobewise-advise-'));
 const write = (name: string, text: string) => {
@@ -44,7 +49,21 @@ describe('npm run advise', () => {
   });
 
   it('exits 2 with the field and the reason on a schema failure', () => {
-    const cams = write('cams.json', JSON.stringify([{ id: 'x', name: 'x', intakeDuration050: 2120, exhaustDuration050: 218, intakeLiftIn: 0.55, exhaustLiftIn: 0.55, lsa: 113, intakeCenterline: 109 }]));
+    const cams = write(
+      'cams.json',
+      JSON.stringify([
+        {
+          id: 'x',
+          name: 'x',
+          intakeDuration050: 2120,
+          exhaustDuration050: 218,
+          intakeLiftIn: 0.55,
+          exhaustLiftIn: 0.55,
+          lsa: 113,
+          intakeCenterline: 109,
+        },
+      ]),
+    );
     const r = advise('--build', join(examples, 'build-street-car.json'), '--cams', cams);
     expect(r.status).toBe(2);
     expect(r.stderr).toContain('cams.0.intakeDuration050: intake duration at 0.050" must be at most 300 deg');

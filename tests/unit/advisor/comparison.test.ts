@@ -9,13 +9,30 @@ import { bigCam, dynoBuild, truckCam } from './fixtures';
 // leave customerCam().
 const ranking = rankCams(dynoBuild, [truckCam, bigCam]);
 const byId = (id: string) => ranking.rankings.find((r) => r.camId === id)!;
-const compared = (id: string, jobPriceCents: number | null, emissionsCertified = false): ComparedCam => ({ ...byId(id), jobPriceCents, emissionsCertified });
-const rowsOf = (cams: ComparedCam[]) => Object.fromEntries(comparisonGroups(cams).flatMap((g) => g.rows).map((r) => [r.key, r.values]));
+const compared = (id: string, jobPriceCents: number | null, emissionsCertified = false): ComparedCam => ({
+  ...byId(id),
+  jobPriceCents,
+  emissionsCertified,
+});
+const rowsOf = (cams: ComparedCam[]) =>
+  Object.fromEntries(
+    comparisonGroups(cams)
+      .flatMap((g) => g.rows)
+      .map((r) => [r.key, r.values]),
+  );
 
 describe('cam comparison (the ranking’s own figures, in words and units)', () => {
   it('carries each cam card’s figures in the ranking, without its price', () => {
     const truck = byId('truck-212');
-    expect(truck.specs).toEqual({ intakeDuration050: 212, exhaustDuration050: 218, intakeLiftIn: 0.565, exhaustLiftIn: 0.565, lsa: 113, intakeCenterline: 109, rockerRatio: 1.7 });
+    expect(truck.specs).toEqual({
+      intakeDuration050: 212,
+      exhaustDuration050: 218,
+      intakeLiftIn: 0.565,
+      exhaustLiftIn: 0.565,
+      lsa: 113,
+      intakeCenterline: 109,
+      rockerRatio: 1.7,
+    });
     expect('priceCents' in truck.specs).toBe(false);
   });
 
@@ -36,7 +53,10 @@ describe('cam comparison (the ranking’s own figures, in words and units)', () 
     expect(rows.dcr).toEqual([`${truck.dynamicCompression.toFixed(1)}:1`, `${big.dynamicCompression.toFixed(1)}:1`]);
     expect(rows.vacuum[0]).toContain(`About ${Math.round(truck.idleVacuumInHg)} inHg`);
     expect(rows.price).toEqual(['$3,012.50', 'Price at the counter']);
-    expect(rows.emissions).toEqual(['Certified for emissions-tested road use', 'Not certified for emissions-tested road use']);
+    expect(rows.emissions).toEqual([
+      'Certified for emissions-tested road use',
+      'Not certified for emissions-tested road use',
+    ]);
     for (const values of Object.values(rows)) expect(values).toHaveLength(2);
   });
 
@@ -63,6 +83,8 @@ describe('customer words for a chosen cam', () => {
 
   it('names a catalogue cam by its grind, without the shop’s SKU (a card given whole keeps its name)', () => {
     expect(customerCamName({ camId: 14, camName: 'F9-216 Street pull grind' })).toBe('Street pull grind');
-    expect(customerCamName({ camId: 'truck-212', camName: 'Invented truck grind 212' })).toBe('Invented truck grind 212');
+    expect(customerCamName({ camId: 'truck-212', camName: 'Invented truck grind 212' })).toBe(
+      'Invented truck grind 212',
+    );
   });
 });

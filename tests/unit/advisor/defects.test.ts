@@ -7,16 +7,60 @@ import { build, cam, stockTruckCam } from './fixtures';
 // Each defect issue 8 reported, rebuilt from the input that showed it. Engine specs are the makers'
 // published figures, from memory; the expectations are common practice of the trade, no published source.
 
-const input = (p: { engine?: Partial<BuildProfileInput['engine']>; exhaust?: Partial<BuildProfileInput['exhaust']>; use?: Partial<BuildProfileInput['use']>; drivetrain?: Partial<BuildProfileInput['drivetrain']> } = {}): BuildProfileInput => ({
-  engine: { cylinders: 8, boreIn: 3.78, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 9.9, headMaterial: 'aluminum', intakeFlowCfm: 240, intakeManifold: 'truck', cylinderDeactivation: 'none', ...p.engine },
+const input = (
+  p: {
+    engine?: Partial<BuildProfileInput['engine']>;
+    exhaust?: Partial<BuildProfileInput['exhaust']>;
+    use?: Partial<BuildProfileInput['use']>;
+    drivetrain?: Partial<BuildProfileInput['drivetrain']>;
+  } = {},
+): BuildProfileInput => ({
+  engine: {
+    cylinders: 8,
+    boreIn: 3.78,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 9.9,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 240,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'none',
+    ...p.engine,
+  },
   exhaust: { headers: 'long-tube', primaryIn: 1.75, system: 'full', ...p.exhaust },
-  drivetrain: { transmission: 'automatic', stallRpm: 2200, axleRatio: 3.42, topGearRatio: 0.7, tireDiameterIn: 30, ...p.drivetrain },
+  drivetrain: {
+    transmission: 'automatic',
+    stallRpm: 2200,
+    axleRatio: 3.42,
+    topGearRatio: 0.7,
+    tireDiameterIn: 30,
+    ...p.drivetrain,
+  },
   vehicle: { weightLb: 5000, powerBrakes: 'vacuum' },
-  use: { primary: 'daily', idle: 'smooth', fuelOctane: 87, emissionsRequired: false, cruiseMph: 65, budgetCents: 300000, ...p.use },
+  use: {
+    primary: 'daily',
+    idle: 'smooth',
+    fuelOctane: 87,
+    emissionsRequired: false,
+    cruiseMph: 65,
+    budgetCents: 300000,
+    ...p.use,
+  },
   baselineCam: stockTruckCam,
 });
 const truck53 = (p: Parameters<typeof input>[0] = {}): BuildProfile => build(input(p));
-const mild212 = cam({ id: 'm212', name: 'mild truck 212', intakeDuration050: 212, exhaustDuration050: 218, intakeAdvertised: 264, exhaustAdvertised: 270, intakeLiftIn: 0.565, exhaustLiftIn: 0.565, lsa: 113, intakeCenterline: 109 });
+const mild212 = cam({
+  id: 'm212',
+  name: 'mild truck 212',
+  intakeDuration050: 212,
+  exhaustDuration050: 218,
+  intakeAdvertised: 264,
+  exhaustAdvertised: 270,
+  intakeLiftIn: 0.565,
+  exhaustLiftIn: 0.565,
+  lsa: 113,
+  intakeCenterline: 109,
+});
 const at = (r: ReturnType<typeof predictCurve>, rpm: number) => r.curve.find((p) => p.rpm === rpm)!.torqueLbFt;
 
 describe('issue 8 defects, each from the input that showed it', () => {
@@ -30,8 +74,19 @@ describe('issue 8 defects, each from the input that showed it', () => {
   });
 
   it('bigger engine, more power: same 240 cfm heads and stock cam, 4.8 < 5.3 < 6.0 < 6.2 L in peak hp and torque', () => {
-    const sizes: [number, number][] = [[3.78, 3.267], [3.78, 3.622], [4.0, 3.622], [4.065, 3.622]];
-    const r = sizes.map(([bore, stroke]) => predictCurve(truck53({ engine: { boreIn: bore, strokeIn: stroke, rodLengthIn: stroke < 3.5 ? 6.275 : 6.098 } }), stockTruckCam).predicted);
+    const sizes: [number, number][] = [
+      [3.78, 3.267],
+      [3.78, 3.622],
+      [4.0, 3.622],
+      [4.065, 3.622],
+    ];
+    const r = sizes.map(
+      ([bore, stroke]) =>
+        predictCurve(
+          truck53({ engine: { boreIn: bore, strokeIn: stroke, rodLengthIn: stroke < 3.5 ? 6.275 : 6.098 } }),
+          stockTruckCam,
+        ).predicted,
+    );
     for (let i = 1; i < r.length; i++) {
       expect(r[i].peakHp).toBeGreaterThan(r[i - 1].peakHp);
       expect(r[i].peakTorqueLbFt).toBeGreaterThan(r[i - 1].peakTorqueLbFt * 1.02);
@@ -39,8 +94,20 @@ describe('issue 8 defects, each from the input that showed it', () => {
   });
 
   it('a ceiling: a 4.8 L at 12:1 with 350 cfm heads and a 220°/106° cam stays under 215 psi BMEP', () => {
-    const b = truck53({ engine: { strokeIn: 3.267, rodLengthIn: 6.275, compressionRatio: 12, intakeFlowCfm: 350 }, use: { fuelOctane: 93 } });
-    const big = cam({ id: 'b220', name: 'tight 220', intakeDuration050: 220, exhaustDuration050: 228, intakeLiftIn: 0.6, exhaustLiftIn: 0.6, lsa: 106, intakeCenterline: 104 });
+    const b = truck53({
+      engine: { strokeIn: 3.267, rodLengthIn: 6.275, compressionRatio: 12, intakeFlowCfm: 350 },
+      use: { fuelOctane: 93 },
+    });
+    const big = cam({
+      id: 'b220',
+      name: 'tight 220',
+      intakeDuration050: 220,
+      exhaustDuration050: 228,
+      intakeLiftIn: 0.6,
+      exhaustLiftIn: 0.6,
+      lsa: 106,
+      intakeCenterline: 104,
+    });
     const ci = (Math.PI / 4) * 3.78 ** 2 * 3.267 * 8;
     expect((150.8 * predictCurve(b, big).predicted.peakTorqueLbFt) / ci).toBeLessThanOrEqual(215);
   });
@@ -55,7 +122,18 @@ describe('issue 8 defects, each from the input that showed it', () => {
   });
 
   it('a cam ahead of stock through the usable range is never told it "never out-pulls"', () => {
-    const c196 = cam({ id: 'e196', name: 'easy 196', intakeDuration050: 196, exhaustDuration050: 202, intakeAdvertised: 248, exhaustAdvertised: 254, intakeLiftIn: 0.51, exhaustLiftIn: 0.51, lsa: 116, intakeCenterline: 112 });
+    const c196 = cam({
+      id: 'e196',
+      name: 'easy 196',
+      intakeDuration050: 196,
+      exhaustDuration050: 202,
+      intakeAdvertised: 248,
+      exhaustAdvertised: 254,
+      intakeLiftIn: 0.51,
+      exhaustLiftIn: 0.51,
+      lsa: 116,
+      intakeCenterline: 112,
+    });
     const r = rankCams(truck53(), [c196]).rankings[0];
     expect(r.leads).not.toBeNull();
     expect(r.reasons.find((x) => x.subscore === 'converter')!.text).not.toMatch(/Never out-pulls/);
@@ -72,7 +150,8 @@ describe('issue 8 defects, each from the input that showed it', () => {
   });
 
   it('a factory 5.3 L at 9.9:1 on 87 octane is inside the compression window, in words that agree with the numbers', () => {
-    const r = rankCams(truck53({ exhaust: { headers: 'manifold', system: 'full-with-cats' } }), [stockTruckCam]).rankings[0];
+    const r = rankCams(truck53({ exhaust: { headers: 'manifold', system: 'full-with-cats' } }), [stockTruckCam])
+      .rankings[0];
     expect(r.subscores.compression).toBe(100);
     const text = r.reasons.find((x) => x.subscore === 'compression')!.text;
     expect(text).toMatch(/inside/);
@@ -84,7 +163,16 @@ describe('issue 8 defects, each from the input that showed it', () => {
   it('a stock engine makes real low-end torque; a big cam never clamps to zero at 1,500 rpm', () => {
     const stock = predictCurve(truck53({ exhaust: { headers: 'manifold', system: 'full-with-cats' } }), stockTruckCam);
     expect(at(stock, 1500) / stock.predicted.peakTorqueLbFt).toBeGreaterThan(0.75); // was 55 %
-    const huge = cam({ id: 'h235', name: 'race 235', intakeDuration050: 235, exhaustDuration050: 243, intakeLiftIn: 0.64, exhaustLiftIn: 0.63, lsa: 108, intakeCenterline: 104 });
+    const huge = cam({
+      id: 'h235',
+      name: 'race 235',
+      intakeDuration050: 235,
+      exhaustDuration050: 243,
+      intakeLiftIn: 0.64,
+      exhaustLiftIn: 0.63,
+      lsa: 108,
+      intakeCenterline: 104,
+    });
     const r = predictCurve(truck53({ engine: { strokeIn: 3.267, rodLengthIn: 6.275 } }), huge);
     expect(at(r, 1500)).toBeGreaterThan(100);
   });
@@ -93,13 +181,24 @@ describe('issue 8 defects, each from the input that showed it', () => {
     const b = truck53({ exhaust: { system: 'open-short' } });
     const without = rankCams(b, [mild212]).rankings[0];
     const ci = (Math.PI / 4) * 3.78 ** 2 * 3.622 * 8;
-    const withOne = rankCams(b, [mild212], { history: [{ camId: 'm212', measuredGainPctPeakHp: without.predicted.gainPctPeakHp + 8, displacementCi: ci, intakeFlowCfm: 240 }] }).rankings[0];
+    const withOne = rankCams(b, [mild212], {
+      history: [
+        {
+          camId: 'm212',
+          measuredGainPctPeakHp: without.predicted.gainPctPeakHp + 8,
+          displacementCi: ci,
+          intakeFlowCfm: 240,
+        },
+      ],
+    }).rankings[0];
     expect(withOne.predicted.peakHp).toBeGreaterThan(without.predicted.peakHp);
     expect(Math.abs((withOne.crossoverRpm ?? 0) - (without.crossoverRpm ?? 0))).toBeLessThanOrEqual(100); // was 370 rpm
   });
 
   it('an impossible cruise is a 422 naming the fields, not a reason', () => {
-    const bad = BuildProfileSchema.safeParse(input({ drivetrain: { axleRatio: 6.5, topGearRatio: 1.5, tireDiameterIn: 20 }, use: { cruiseMph: 90 } }));
+    const bad = BuildProfileSchema.safeParse(
+      input({ drivetrain: { axleRatio: 6.5, topGearRatio: 1.5, tireDiameterIn: 20 }, use: { cruiseMph: 90 } }),
+    );
     expect(bad.success).toBe(false);
     const fields = formatZodIssues(bad.error!).map((e) => e.field);
     expect(fields).toContain('use.cruiseMph');
@@ -121,7 +220,16 @@ describe('issue 8 defects, each from the input that showed it', () => {
   });
 
   it('198° at 0.050", 114° LSA is a smooth idle, never "a noticeable lope"', () => {
-    const c198 = cam({ id: 't198', name: 'tow 198', intakeDuration050: 198, exhaustDuration050: 204, intakeLiftIn: 0.525, exhaustLiftIn: 0.525, lsa: 114, intakeCenterline: 110 });
+    const c198 = cam({
+      id: 't198',
+      name: 'tow 198',
+      intakeDuration050: 198,
+      exhaustDuration050: 204,
+      intakeLiftIn: 0.525,
+      exhaustLiftIn: 0.525,
+      lsa: 114,
+      intakeCenterline: 110,
+    });
     const r = rankCams(truck53({ use: { idle: 'noticeable' } }), [c198]).rankings[0];
     const text = r.reasons.find((x) => x.subscore === 'idle')!.text;
     expect(text).toMatch(/smooth idle/);

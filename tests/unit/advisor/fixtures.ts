@@ -8,18 +8,38 @@ export const build = (b: BuildProfileInput): BuildProfile => BuildProfileSchema.
 // Dyno facts (common practice, measured on an engine dyno, no published source; values from memory):
 // stock truck cam about 190°/191° at 0.050", 0.467"/0.479" lift, 114.5° LSA (installed straight up).
 export const stockTruckCam = cam({
-  id: 'stock', name: 'Stock truck cam (approximate)', intakeDuration050: 190, exhaustDuration050: 191,
-  intakeLiftIn: 0.467, exhaustLiftIn: 0.479, lsa: 114.5, intakeCenterline: 114.5,
+  id: 'stock',
+  name: 'Stock truck cam (approximate)',
+  intakeDuration050: 190,
+  exhaustDuration050: 191,
+  intakeLiftIn: 0.467,
+  exhaustLiftIn: 0.479,
+  lsa: 114.5,
+  intakeCenterline: 114.5,
 });
 // "A truck-oriented cam of about 212° intake": exhaust, lift, LSA and ICL are our plausible picks.
 export const truckCam = cam({
-  id: 'truck-212', name: 'Invented truck grind 212', intakeDuration050: 212, exhaustDuration050: 218,
-  intakeLiftIn: 0.565, exhaustLiftIn: 0.565, lsa: 113, intakeCenterline: 109, priceCents: 41900,
+  id: 'truck-212',
+  name: 'Invented truck grind 212',
+  intakeDuration050: 212,
+  exhaustDuration050: 218,
+  intakeLiftIn: 0.565,
+  exhaustLiftIn: 0.565,
+  lsa: 113,
+  intakeCenterline: 109,
+  priceCents: 41900,
 });
 // "A bigger cam of 219°/225°": lift, LSA and ICL are our plausible picks.
 export const bigCam = cam({
-  id: 'big-219', name: 'Invented big truck grind 219', intakeDuration050: 219, exhaustDuration050: 225,
-  intakeLiftIn: 0.595, exhaustLiftIn: 0.595, lsa: 113, intakeCenterline: 109, priceCents: 43900,
+  id: 'big-219',
+  name: 'Invented big truck grind 219',
+  intakeDuration050: 219,
+  exhaustDuration050: 225,
+  intakeLiftIn: 0.595,
+  exhaustLiftIn: 0.595,
+  lsa: 113,
+  intakeCenterline: 109,
+  priceCents: 43900,
 });
 
 // The dyno engine: a 5.3 L truck block bored to 3.900" (5.7 L), 3.622" stroke, 6.098" rod (maker's
@@ -27,16 +47,40 @@ export const bigCam = cam({
 // pick from memory, not a measurement — truck intake, 1-7/8" long tubes, short open collectors.
 // 10.0:1 static compression is our estimate for the bored block.
 export const dynoInput: BuildProfileInput = {
-  engine: { cylinders: 8, boreIn: 3.9, strokeIn: 3.622, rodLengthIn: 6.098, compressionRatio: 10.0, headMaterial: 'aluminum', intakeFlowCfm: 290, intakeManifold: 'truck', cylinderDeactivation: 'deleted' },
+  engine: {
+    cylinders: 8,
+    boreIn: 3.9,
+    strokeIn: 3.622,
+    rodLengthIn: 6.098,
+    compressionRatio: 10.0,
+    headMaterial: 'aluminum',
+    intakeFlowCfm: 290,
+    intakeManifold: 'truck',
+    cylinderDeactivation: 'deleted',
+  },
   exhaust: { headers: 'long-tube', primaryIn: 1.875, system: 'open-short' },
   drivetrain: { transmission: 'automatic', stallRpm: 2200, axleRatio: 3.73, topGearRatio: 0.7, tireDiameterIn: 31 },
   vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-  use: { primary: 'daily', idle: 'smooth', fuelOctane: 91, emissionsRequired: false, cruiseMph: 70, budgetCents: 300000 },
+  use: {
+    primary: 'daily',
+    idle: 'smooth',
+    fuelOctane: 91,
+    emissionsRequired: false,
+    cruiseMph: 70,
+    budgetCents: 300000,
+  },
   baselineCam: stockTruckCam,
 };
 export const dynoBuild = build(dynoInput);
 
-type Patch = { engine?: Partial<BuildProfileInput['engine']>; exhaust?: Partial<BuildProfileInput['exhaust']>; drivetrain?: Partial<BuildProfileInput['drivetrain']>; vehicle?: Partial<BuildProfileInput['vehicle']>; use?: Partial<BuildProfileInput['use']>; baselineCam?: CamCardInput };
+type Patch = {
+  engine?: Partial<BuildProfileInput['engine']>;
+  exhaust?: Partial<BuildProfileInput['exhaust']>;
+  drivetrain?: Partial<BuildProfileInput['drivetrain']>;
+  vehicle?: Partial<BuildProfileInput['vehicle']>;
+  use?: Partial<BuildProfileInput['use']>;
+  baselineCam?: CamCardInput;
+};
 
 /** The dyno build with some fields changed (validated again). */
 export function variant(p: Patch, base: BuildProfileInput = dynoInput): BuildProfile {

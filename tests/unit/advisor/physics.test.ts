@@ -1,6 +1,15 @@
 import {
-  crankToPinDistanceIn, cruiseRpm, displacementCi, dynamicCompression, dynamicCompressionRatio, horsepower,
-  litresFromCubicInches, meanPistonSpeedFtMin, pistonTravelFromTdcIn, predictCurve, valveEvents,
+  crankToPinDistanceIn,
+  cruiseRpm,
+  displacementCi,
+  dynamicCompression,
+  dynamicCompressionRatio,
+  horsepower,
+  litresFromCubicInches,
+  meanPistonSpeedFtMin,
+  pistonTravelFromTdcIn,
+  predictCurve,
+  valveEvents,
 } from '@/lib/advisor';
 import { cam, dynoBuild, bigCam, truckCam, variant } from './fixtures';
 
@@ -65,7 +74,18 @@ describe('valve events', () => {
     // IVO = 220/2 − 108 = 2° BTDC; IVC = 220/2 + 108 − 180 = 38° ABDC.
     // ECL = 2 · 112 − 108 = 116°; EVO = 230/2 + 116 − 180 = 51° BBDC; EVC = 230/2 − 116 = −1° ATDC.
     // Overlap = IVO + EVC = 2 + (−1) = 1°.
-    const e = valveEvents(cam({ id: 1, name: 'hand example', intakeDuration050: 220, exhaustDuration050: 230, intakeLiftIn: 0.58, exhaustLiftIn: 0.58, lsa: 112, intakeCenterline: 108 }));
+    const e = valveEvents(
+      cam({
+        id: 1,
+        name: 'hand example',
+        intakeDuration050: 220,
+        exhaustDuration050: 230,
+        intakeLiftIn: 0.58,
+        exhaustLiftIn: 0.58,
+        lsa: 112,
+        intakeCenterline: 108,
+      }),
+    );
     expect(Math.abs(e.ivo - 2)).toBeLessThanOrEqual(0.5);
     expect(Math.abs(e.ivc - 38)).toBeLessThanOrEqual(0.5);
     expect(Math.abs(e.exhaustCenterline - 116)).toBeLessThanOrEqual(0.5);
@@ -78,7 +98,20 @@ describe('valve events', () => {
   it('gives the advertised events when the card has both advertised durations (hand-worked example)', () => {
     // 272°/282°, LSA 112, ICL 108: IVO = 136 − 108 = 28; IVC = 136 + 108 − 180 = 64;
     // EVO = 141 + 116 − 180 = 77; EVC = 141 − 116 = 25; overlap = 53.
-    const e = valveEvents(cam({ id: 2, name: 'adv example', intakeDuration050: 220, exhaustDuration050: 230, intakeAdvertised: 272, exhaustAdvertised: 282, intakeLiftIn: 0.58, exhaustLiftIn: 0.58, lsa: 112, intakeCenterline: 108 }));
+    const e = valveEvents(
+      cam({
+        id: 2,
+        name: 'adv example',
+        intakeDuration050: 220,
+        exhaustDuration050: 230,
+        intakeAdvertised: 272,
+        exhaustAdvertised: 282,
+        intakeLiftIn: 0.58,
+        exhaustLiftIn: 0.58,
+        lsa: 112,
+        intakeCenterline: 108,
+      }),
+    );
     expect(e.advertised).toEqual({ ivo: 28, ivc: 64, evo: 77, evc: 25, overlap: 53 });
   });
 });
@@ -98,10 +131,22 @@ describe('dynamic compression', () => {
 
   it('uses the advertised IVC when given, else 0.050" IVC + 26° (half the 52° hydraulic-roller ramp the lift curves use; from memory)', () => {
     // 0.050" IVC = 220/2 + 108 − 180 = 38°, + 26° = 64°; advertised 276°: 138 + 108 − 180 = 66°.
-    const base = { id: 3, name: 'x', intakeDuration050: 220, exhaustDuration050: 226, intakeLiftIn: 0.58, exhaustLiftIn: 0.58, lsa: 112, intakeCenterline: 108 };
+    const base = {
+      id: 3,
+      name: 'x',
+      intakeDuration050: 220,
+      exhaustDuration050: 226,
+      intakeLiftIn: 0.58,
+      exhaustLiftIn: 0.58,
+      lsa: 112,
+      intakeCenterline: 108,
+    };
     const b = variant({ engine: { compressionRatio: 10 } });
     expect(dynamicCompression(b, cam(base))).toBeCloseTo(dynamicCompressionRatio(3.622, 6.098, 10, 64), 9);
-    expect(dynamicCompression(b, cam({ ...base, intakeAdvertised: 276 }))).toBeCloseTo(dynamicCompressionRatio(3.622, 6.098, 10, 66), 9);
+    expect(dynamicCompression(b, cam({ ...base, intakeAdvertised: 276 }))).toBeCloseTo(
+      dynamicCompressionRatio(3.622, 6.098, 10, 66),
+      9,
+    );
     // A later-closing intake traps less charge: lower DCR (Heywood ch. 2).
     expect(dynamicCompressionRatio(3.622, 6.098, 10, 66)).toBeLessThan(dynamicCompressionRatio(3.622, 6.098, 10, 64));
   });

@@ -8,33 +8,56 @@ const order = (r: ReturnType<typeof rankCams>) => r.rankings.map((x) => x.camId)
 describe('rankings (common practice, no published source)', () => {
   it('daily truck on a stock 2,200 converter: the truck cam ranks above the bigger one', () => {
     for (const system of ['full', 'open-short'] as const) {
-      const b = variant({ exhaust: { system }, use: { primary: 'daily', idle: 'smooth' }, drivetrain: { stallRpm: 2200 } });
+      const b = variant({
+        exhaust: { system },
+        use: { primary: 'daily', idle: 'smooth' },
+        drivetrain: { stallRpm: 2200 },
+      });
       expect(order(rankCams(b, [bigCam, truckCam]))).toEqual(['truck-212', 'big-219']);
     }
   });
 
   it('towing truck on a stock converter: the truck cam ranks above the bigger one', () => {
-    const b = variant({ use: { primary: 'towing', idle: 'smooth' }, drivetrain: { stallRpm: 2000 }, vehicle: { weightLb: 6500 } });
+    const b = variant({
+      use: { primary: 'towing', idle: 'smooth' },
+      drivetrain: { stallRpm: 2000 },
+      vehicle: { weightLb: 6500 },
+    });
     expect(order(rankCams(b, [bigCam, truckCam]))).toEqual(['truck-212', 'big-219']);
   });
 
   it('street/strip with a 3,000+ converter and an aggressive idle allowed: the bigger cam ranks above', () => {
-    for (const primary of ['street', 'strip'] as const) for (const stallRpm of [3000, 3400]) {
-      const b = variant({ use: { primary, idle: 'aggressive' }, drivetrain: { stallRpm }, vehicle: { weightLb: 3600 } });
-      expect(order(rankCams(b, [truckCam, bigCam]))).toEqual(['big-219', 'truck-212']);
-    }
+    for (const primary of ['street', 'strip'] as const)
+      for (const stallRpm of [3000, 3400]) {
+        const b = variant({
+          use: { primary, idle: 'aggressive' },
+          drivetrain: { stallRpm },
+          vehicle: { weightLb: 3600 },
+        });
+        expect(order(rankCams(b, [truckCam, bigCam]))).toEqual(['big-219', 'truck-212']);
+      }
   });
 
   it('ranks are 1..n by score, scores within 0–100, and the output has the contract shape', () => {
     const r = rankCams(dynoBuild, [truckCam, bigCam, stockTruckCam]);
     expect(r.rankings.map((x) => x.rank)).toEqual([1, 2, 3]);
-    for (let i = 1; i < r.rankings.length; i++) expect(r.rankings[i].score).toBeLessThanOrEqual(r.rankings[i - 1].score);
+    for (let i = 1; i < r.rankings.length; i++)
+      expect(r.rankings[i].score).toBeLessThanOrEqual(r.rankings[i - 1].score);
     for (const x of r.rankings) {
       expect(x.score).toBeGreaterThanOrEqual(0);
       expect(x.score).toBeLessThanOrEqual(100);
       expect(Object.keys(x.subscores).sort()).toEqual(Object.keys(SCORING_WEIGHTS).sort());
-      expect(Object.keys(x.predicted).sort()).toEqual(['gainPctPeakHp', 'lowEndLossPct', 'peakHp', 'peakHpRpm', 'peakTorqueLbFt', 'peakTorqueRpm']);
-      expect(Object.keys(x.valveEvents)).toEqual(expect.arrayContaining(['ivo', 'ivc', 'evo', 'evc', 'overlap', 'exhaustCenterline']));
+      expect(Object.keys(x.predicted).sort()).toEqual([
+        'gainPctPeakHp',
+        'lowEndLossPct',
+        'peakHp',
+        'peakHpRpm',
+        'peakTorqueLbFt',
+        'peakTorqueRpm',
+      ]);
+      expect(Object.keys(x.valveEvents)).toEqual(
+        expect.arrayContaining(['ivo', 'ivc', 'evo', 'evc', 'overlap', 'exhaustCenterline']),
+      );
       // Every sub-score yields a reason.
       expect(x.reasons.map((r) => r.subscore).sort()).toEqual(Object.keys(SCORING_WEIGHTS).sort());
       for (const reason of x.reasons) expect(reason.text.length).toBeGreaterThan(20);
@@ -78,7 +101,8 @@ describe('needs', () => {
   });
 
   it('a tune, always', () => {
-    for (const c of [truckCam, bigCam, stockTruckCam]) expect(rankCams(dynoBuild, [c]).rankings[0].needs.map((n) => n.kind)).toContain('tune');
+    for (const c of [truckCam, bigCam, stockTruckCam])
+      expect(rankCams(dynoBuild, [c]).rankings[0].needs.map((n) => n.kind)).toContain('tune');
   });
 });
 
@@ -93,7 +117,16 @@ describe('cautions and gates', () => {
   });
 
   it('brakes: vacuum below ~15 inHg with vacuum brakes gives a brake caution (common practice)', () => {
-    const big = cam({ id: 'lumpy', name: 'lumpy', intakeDuration050: 236, exhaustDuration050: 244, intakeLiftIn: 0.63, exhaustLiftIn: 0.62, lsa: 108, intakeCenterline: 104 });
+    const big = cam({
+      id: 'lumpy',
+      name: 'lumpy',
+      intakeDuration050: 236,
+      exhaustDuration050: 244,
+      intakeLiftIn: 0.63,
+      exhaustLiftIn: 0.62,
+      lsa: 108,
+      intakeCenterline: 104,
+    });
     const r = rankCams(dynoBuild, [big]).rankings[0];
     expect(r.idleVacuumInHg).toBeLessThan(15);
     expect(r.cautions.map((c) => c.kind)).toContain('brakes');
@@ -122,7 +155,8 @@ describe('cautions and gates', () => {
     expect(rankCams(cheap, [truckCam]).rankings[0].subscores.cost).toBe(100);
     expect(rankCams(tight, [truckCam]).rankings[0].subscores.cost).toBeLessThan(50);
     // With part prices known the whole job is compared with the budget.
-    const priced = rankCams(cheap, [truckCam], { needPriceCents: { springs: 30000, converter: 90000, tune: 50000 } }).rankings[0];
+    const priced = rankCams(cheap, [truckCam], { needPriceCents: { springs: 30000, converter: 90000, tune: 50000 } })
+      .rankings[0];
     expect(priced.reasons.find((r) => r.subscore === 'cost')?.text).toMatch(/parts it needs/);
   });
 });
@@ -131,7 +165,16 @@ describe('options.history (measured results nudge predicted gains)', () => {
   const modelGain = rankCams(dynoBuild, [truckCam]).rankings[0].predicted.gainPctPeakHp;
 
   it('a similar build measuring more gain moves the prediction toward it, not all the way', () => {
-    const history = [{ camId: 'truck-212', measuredGainPctPeakHp: modelGain + 10, displacementCi: 346, intakeFlowCfm: 290, headers: 'long-tube' as const, system: 'open-short' as const }];
+    const history = [
+      {
+        camId: 'truck-212',
+        measuredGainPctPeakHp: modelGain + 10,
+        displacementCi: 346,
+        intakeFlowCfm: 290,
+        headers: 'long-tube' as const,
+        system: 'open-short' as const,
+      },
+    ];
     const r = rankCams(dynoBuild, [truckCam], { history }).rankings[0];
     expect(r.history?.matches).toBe(1);
     expect(r.predicted.gainPctPeakHp).toBeGreaterThan(modelGain + 1);

@@ -10,21 +10,41 @@ import { variant } from './fixtures';
 // catalogue in slices no larger than the full-model limit and merging gives the full model's order.
 function fullModelRanking(b: BuildProfile, cams: CamCard[]): CamRanking[] {
   const all: CamRanking[] = [];
-  for (let i = 0; i < cams.length; i += SCREENING.fullModelUpToCams) all.push(...rankCams(b, cams.slice(i, i + SCREENING.fullModelUpToCams)).rankings);
+  for (let i = 0; i < cams.length; i += SCREENING.fullModelUpToCams)
+    all.push(...rankCams(b, cams.slice(i, i + SCREENING.fullModelUpToCams)).rankings);
   const id = (r: CamRanking) => String(r.camId);
-  return all.sort((a, c) => c.score - a.score || c.subscores.powerband - a.subscores.powerband || (id(a) < id(c) ? -1 : id(a) > id(c) ? 1 : 0));
+  return all.sort(
+    (a, c) =>
+      c.score - a.score ||
+      c.subscores.powerband - a.subscores.powerband ||
+      (id(a) < id(c) ? -1 : id(a) > id(c) ? 1 : 0),
+  );
 }
 
 const builds: [string, BuildProfile][] = [
-  ['5.3 L daily truck, full exhaust', variant({ engine: { boreIn: 3.78, intakeFlowCfm: 240, cylinderDeactivation: 'none' }, exhaust: { primaryIn: 1.75, system: 'full' } })],
-  ['6.0 L street car, single plane, manual', variant({ engine: { boreIn: 4.0, compressionRatio: 10.5, intakeFlowCfm: 300, intakeManifold: 'single-plane' }, drivetrain: { transmission: 'manual' }, vehicle: { weightLb: 3600, powerBrakes: 'hydraulic' }, use: { primary: 'street', idle: 'aggressive', budgetCents: 400000 } })],
+  [
+    '5.3 L daily truck, full exhaust',
+    variant({
+      engine: { boreIn: 3.78, intakeFlowCfm: 240, cylinderDeactivation: 'none' },
+      exhaust: { primaryIn: 1.75, system: 'full' },
+    }),
+  ],
+  [
+    '6.0 L street car, single plane, manual',
+    variant({
+      engine: { boreIn: 4.0, compressionRatio: 10.5, intakeFlowCfm: 300, intakeManifold: 'single-plane' },
+      drivetrain: { transmission: 'manual' },
+      vehicle: { weightLb: 3600, powerBrakes: 'hydraulic' },
+      use: { primary: 'street', idle: 'aggressive', budgetCents: 400000 },
+    }),
+  ],
 ];
 
 describe('large-catalogue screening (an upper bound on each score, then the full model)', () => {
   // Twice the full-model limit: big enough to screen, small enough to model whole for the comparison.
   const cams = generatedCatalogue(SCREENING.fullModelUpToCams * 2, 7);
 
-  it.each(builds)('%s: the top ten and their figures are the full model\'s', (_name, b) => {
+  it.each(builds)("%s: the top ten and their figures are the full model's", (_name, b) => {
     const screened = rankCams(b, cams);
     const full = fullModelRanking(b, cams);
     expect(screened.rankings.slice(0, 10).map((r) => r.camId)).toEqual(full.slice(0, 10).map((r) => r.camId));

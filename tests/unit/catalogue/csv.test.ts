@@ -1,10 +1,21 @@
-import { centsToDollars, convertCell, neutraliseCell, notCsvReason, parseCsv, toCsv, unneutraliseCell } from '@/lib/catalogue/csv';
+import {
+  centsToDollars,
+  convertCell,
+  neutraliseCell,
+  notCsvReason,
+  parseCsv,
+  toCsv,
+  unneutraliseCell,
+} from '@/lib/catalogue/csv';
 
 describe('catalogue CSV helpers', () => {
-  it.each(['=1+1', '+1', '-1', '@x', '\tx', '\rx'])('neutralises %j with a leading apostrophe and takes it off again', (cell) => {
-    expect(neutraliseCell(cell)).toBe(`'${cell}`);
-    expect(unneutraliseCell(neutraliseCell(cell))).toBe(cell);
-  });
+  it.each(['=1+1', '+1', '-1', '@x', '\tx', '\rx'])(
+    'neutralises %j with a leading apostrophe and takes it off again',
+    (cell) => {
+      expect(neutraliseCell(cell)).toBe(`'${cell}`);
+      expect(unneutraliseCell(neutraliseCell(cell))).toBe(cell);
+    },
+  );
 
   it('leaves ordinary text alone, including a real leading apostrophe', () => {
     expect(neutraliseCell('Tow Boss 198')).toBe('Tow Boss 198');
@@ -12,8 +23,14 @@ describe('catalogue CSV helpers', () => {
   });
 
   it('writes a header and rows with formulas neutralised and commas quoted', () => {
-    const csv = toCsv(['sku', 'name', 'price'], [['A-1', '=cmd', 4.5], ['B-2', 'one, two', null]]);
-    expect(csv).toBe("sku,name,price\r\nA-1,'=cmd,4.5\r\nB-2,\"one, two\",");
+    const csv = toCsv(
+      ['sku', 'name', 'price'],
+      [
+        ['A-1', '=cmd', 4.5],
+        ['B-2', 'one, two', null],
+      ],
+    );
+    expect(csv).toBe('sku,name,price\r\nA-1,\'=cmd,4.5\r\nB-2,"one, two",');
     const parsed = parseCsv(csv);
     expect(parsed.rows[0]).toEqual({ row: 2, cells: { sku: 'A-1', name: '=cmd', price: '4.5' } });
   });

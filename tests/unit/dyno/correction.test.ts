@@ -1,5 +1,11 @@
 import {
-  correctionFor, din70020Factor, dryAirPressureKpa, KPA_PER_INHG, saeJ1349Factor, saeJ607Factor, saturationVapourPressureKpa,
+  correctionFor,
+  din70020Factor,
+  dryAirPressureKpa,
+  KPA_PER_INHG,
+  saeJ1349Factor,
+  saeJ607Factor,
+  saturationVapourPressureKpa,
 } from '@/lib/dyno/correction';
 
 describe('saturation vapour pressure (Magnus formula, Alduchov & Eskridge 1996)', () => {

@@ -1,5 +1,13 @@
 import { parseCurveCsv } from '@/lib/dyno/curve-csv';
-import { baroToKpa, celsiusFromFahrenheit, fahrenheitFromCelsius, inHgFromKpa, kpaFromInHg, rangeIn, tempToCelsius } from '@/lib/dyno/units';
+import {
+  baroToKpa,
+  celsiusFromFahrenheit,
+  fahrenheitFromCelsius,
+  inHgFromKpa,
+  kpaFromInHg,
+  rangeIn,
+  tempToCelsius,
+} from '@/lib/dyno/units';
 import { DynoRunSchema } from '@/lib/schemas/dyno-run';
 
 // Shop units at the edge, SI inside: °F = °C × 9/5 + 32 (definition of the Fahrenheit scale);
@@ -30,18 +38,27 @@ describe('air units', () => {
 describe('pull CSV line numbers', () => {
   it('names the line the technician sees, counting the header and blank lines', () => {
     const parsed = parseCurveCsv('rpm,torque\n3000,300\n\n3500,310\n4000;x\n');
-    expect(parsed.points).toEqual([{ rpm: 3000, torqueLbFt: 300 }, { rpm: 3500, torqueLbFt: 310 }]);
+    expect(parsed.points).toEqual([
+      { rpm: 3000, torqueLbFt: 300 },
+      { rpm: 3500, torqueLbFt: 310 },
+    ]);
     expect(parsed.lines).toEqual([2, 4]);
     expect(parsed.errors).toEqual(['line 5: expected two numbers, rpm and torque in lb·ft (got "4000;x")']);
   });
   it('skips a header only on the first non-blank line', () => {
     expect(parseCurveCsv('\n\nrpm,torque\n3000,300').lines).toEqual([4]);
-    expect(parseCurveCsv('3000,300\nrpm,torque').errors).toEqual(['line 2: expected two numbers, rpm and torque in lb·ft (got "rpm,torque")']);
+    expect(parseCurveCsv('3000,300\nrpm,torque').errors).toEqual([
+      'line 2: expected two numbers, rpm and torque in lb·ft (got "rpm,torque")',
+    ]);
   });
 });
 
 describe('air readings by correction standard (the route’s schema)', () => {
-  const curve = [{ rpm: 3000, torqueLbFt: 300 }, { rpm: 4000, torqueLbFt: 320 }, { rpm: 5000, torqueLbFt: 310 }];
+  const curve = [
+    { rpm: 3000, torqueLbFt: 300 },
+    { rpm: 4000, torqueLbFt: 320 },
+    { rpm: 5000, torqueLbFt: 310 },
+  ];
   const fields = (body: object) => {
     const result = DynoRunSchema.safeParse({ buildId: 1, phase: 'before', curve, ...body });
     return result.success ? [] : result.error.issues.map((i) => i.path.join('.'));
@@ -53,6 +70,10 @@ describe('air readings by correction standard (the route’s schema)', () => {
     expect(fields({ correctionStandard: 'none' })).toEqual([]);
   });
   it('names a missing reading together with every other problem', () => {
-    expect(fields({ phase: 'sideways', baroKpa: 200, humidityPct: 40 }).sort()).toEqual(['airTempC', 'baroKpa', 'phase']);
+    expect(fields({ phase: 'sideways', baroKpa: 200, humidityPct: 40 }).sort()).toEqual([
+      'airTempC',
+      'baroKpa',
+      'phase',
+    ]);
   });
 });

@@ -41,7 +41,9 @@ describe('an amount typed at the counter', () => {
   it('reads it into cents within what is left, or says what is wrong', () => {
     expect(amountWithin('120.50', 20000, 'pay')).toEqual({ cents: 12050 });
     expect(amountWithin('0', 20000, 'pay')).toEqual({ problem: 'The amount must be dollars and cents above 0.' });
-    expect(amountWithin('12.345', 20000, 'refund')).toEqual({ problem: 'The amount must be dollars and cents above 0.' });
+    expect(amountWithin('12.345', 20000, 'refund')).toEqual({
+      problem: 'The amount must be dollars and cents above 0.',
+    });
     expect(amountWithin('200.01', 20000, 'refund')).toEqual({ problem: 'At most $200.00 is left to refund.' });
   });
 });

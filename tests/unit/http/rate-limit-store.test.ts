@@ -3,7 +3,14 @@ import { pauseSeconds } from '@/lib/throttle/sign-in-limits';
 
 describe('the rate-limit store adapter', () => {
   it('inlines ?? identifiers as quoted names and keeps ? values in order', () => {
-    expect(translateQuery('SELECT points FROM ??.?? WHERE `key` = ? AND expire > ?', ['lobewise_test', 'rate_limits', 'k', 5])).toEqual({
+    expect(
+      translateQuery('SELECT points FROM ??.?? WHERE `key` = ? AND expire > ?', [
+        'lobewise_test',
+        'rate_limits',
+        'k',
+        5,
+      ]),
+    ).toEqual({
       sql: 'SELECT points FROM `lobewise_test`.`rate_limits` WHERE `key` = ? AND expire > ?',
       values: ['k', 5],
     });

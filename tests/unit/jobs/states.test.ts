@@ -14,18 +14,46 @@ describe('job states', () => {
     for (const s of JOB_STATES) expect(canMove('collected', s)).toBe(s === 'collected');
   });
   it('say where the job is in words and in its code when refusing', () => {
-    expect(illegalMoveMessage('booked', 'ready')).toBe('This job is booked (booked); it cannot go to ready to collect (ready). From here it can go to: in the shop.');
+    expect(illegalMoveMessage('booked', 'ready')).toBe(
+      'This job is booked (booked); it cannot go to ready to collect (ready). From here it can go to: in the shop.',
+    );
     for (const word of Object.values(STATE_WORDS)) expect(word).not.toMatch(/^[a-z]+(-[a-z]+)*$/);
   });
 });
 
 describe('sign-off warnings (limits from memory)', () => {
-  const ok: SignOffReadings = { ptvIntakeIn: 0.08, ptvExhaustIn: 0.1, springInstalledHeightIn: 1.8, springSeatPressureLb: 130, coilBindMarginIn: 0.06, pushrodLengthIn: 7.4, lifterPreloadIn: 0.05, deactivationDeleteDone: null };
+  const ok: SignOffReadings = {
+    ptvIntakeIn: 0.08,
+    ptvExhaustIn: 0.1,
+    springInstalledHeightIn: 1.8,
+    springSeatPressureLb: 130,
+    coilBindMarginIn: 0.06,
+    pushrodLengthIn: 7.4,
+    lifterPreloadIn: 0.05,
+    deactivationDeleteDone: null,
+  };
   it('are silent exactly at the usual minimums', () => expect(signOffWarnings(ok)).toEqual([]));
   it('name each reading just under or outside its limit', () => {
-    const bad = { ...ok, ptvIntakeIn: 0.079, ptvExhaustIn: 0.099, coilBindMarginIn: 0.059, springSeatPressureLb: 210, springInstalledHeightIn: 1.95, pushrodLengthIn: 9.5, lifterPreloadIn: 0.2, deactivationDeleteDone: false };
+    const bad = {
+      ...ok,
+      ptvIntakeIn: 0.079,
+      ptvExhaustIn: 0.099,
+      coilBindMarginIn: 0.059,
+      springSeatPressureLb: 210,
+      springInstalledHeightIn: 1.95,
+      pushrodLengthIn: 9.5,
+      lifterPreloadIn: 0.2,
+      deactivationDeleteDone: false,
+    };
     expect(signOffWarnings(bad).map((w) => w.field)).toEqual([
-      'ptvIntakeIn', 'ptvExhaustIn', 'springInstalledHeightIn', 'springSeatPressureLb', 'coilBindMarginIn', 'pushrodLengthIn', 'lifterPreloadIn', 'deactivationDeleteDone',
+      'ptvIntakeIn',
+      'ptvExhaustIn',
+      'springInstalledHeightIn',
+      'springSeatPressureLb',
+      'coilBindMarginIn',
+      'pushrodLengthIn',
+      'lifterPreloadIn',
+      'deactivationDeleteDone',
     ]);
   });
 });

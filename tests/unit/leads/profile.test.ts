@@ -8,14 +8,35 @@ import { ENGINE_CHOICES, LeadAnswersSchema, type LeadAnswers } from '@/lib/schem
 // The questionnaire's answers → a conservative build profile. The defaults are our own choices and
 // figures from memory (see src/lib/leads/profile.ts); these tests pin the direction of each choice.
 const card = (liters: number, id: number): BaselineCardOption => ({
-  id, sku: `FB-${id}`, name: `Stock card ${liters} L`, baselineForLiters: liters,
-  intakeDuration050: 190, exhaustDuration050: 191, intakeAdvertised: null, exhaustAdvertised: null,
-  intakeLiftIn: 0.467, exhaustLiftIn: 0.479, lsa: 114.5, intakeCenterline: 114.5, rockerRatio: 1.7, springMaxLiftIn: 0.5,
+  id,
+  sku: `FB-${id}`,
+  name: `Stock card ${liters} L`,
+  baselineForLiters: liters,
+  intakeDuration050: 190,
+  exhaustDuration050: 191,
+  intakeAdvertised: null,
+  exhaustAdvertised: null,
+  intakeLiftIn: 0.467,
+  exhaustLiftIn: 0.479,
+  lsa: 114.5,
+  intakeCenterline: 114.5,
+  rockerRatio: 1.7,
+  springMaxLiftIn: 0.5,
 });
 const CARDS = [4.8, 5.3, 5.7, 6.0, 6.2].map((l, i) => card(l, i + 1));
 const base: LeadAnswers = {
-  engine: '5.3', use: 'daily', idle: 'smooth', emissions: 'yes', transmission: 'automatic', driveline: 'stock', exhaust: 'stock', budget: '1500-3000',
-  name: 'Test Customer', email: 'test@example.com', phone: undefined, consent: true,
+  engine: '5.3',
+  use: 'daily',
+  idle: 'smooth',
+  emissions: 'yes',
+  transmission: 'automatic',
+  driveline: 'stock',
+  exhaust: 'stock',
+  budget: '1500-3000',
+  name: 'Test Customer',
+  email: 'test@example.com',
+  phone: undefined,
+  consent: true,
 };
 const build = (change: Partial<LeadAnswers>) => buildProfileFromAnswers({ ...base, ...change }, CARDS)!;
 
@@ -35,7 +56,8 @@ describe('buildProfileFromAnswers', () => {
   });
 
   it('carries the kind of vehicle into the profile; answers saved before the question read with the default', () => {
-    for (const vehicle of ['truck', 'suv', 'van', 'car'] as const) expect(build({ vehicle }).vehicle.class).toBe(vehicle);
+    for (const vehicle of ['truck', 'suv', 'van', 'car'] as const)
+      expect(build({ vehicle }).vehicle.class).toBe(vehicle);
     const older = build({});
     expect(older.vehicle.class).toBeUndefined();
     expect(vehicleClassOf(older)).toBe('truck'); // the 5.3 L's truck intake
@@ -54,7 +76,9 @@ describe('buildProfileFromAnswers', () => {
     expect(build({ exhaust: 'open' }).exhaust).toMatchObject({ system: 'open-short' });
     expect(build({ driveline: 'stock' }).drivetrain.stallRpm).toBe(2000);
     expect(build({ driveline: 'converter' }).drivetrain.stallRpm).toBe(2800);
-    expect(build({ driveline: 'gears' }).drivetrain.axleRatio).toBeGreaterThan(build({ driveline: 'stock' }).drivetrain.axleRatio);
+    expect(build({ driveline: 'gears' }).drivetrain.axleRatio).toBeGreaterThan(
+      build({ driveline: 'stock' }).drivetrain.axleRatio,
+    );
     expect(build({ transmission: 'manual' }).drivetrain.stallRpm).toBe(0);
     const p = build({});
     expect(p.vehicle.powerBrakes).toBe('vacuum');
@@ -62,7 +86,12 @@ describe('buildProfileFromAnswers', () => {
   });
 
   it('returns null when the catalogue has no stock card for the engine', () => {
-    expect(buildProfileFromAnswers(base, CARDS.filter((c) => c.baselineForLiters !== 5.3))).toBeNull();
+    expect(
+      buildProfileFromAnswers(
+        base,
+        CARDS.filter((c) => c.baselineForLiters !== 5.3),
+      ),
+    ).toBeNull();
   });
 });
 

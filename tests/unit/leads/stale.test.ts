@@ -12,12 +12,15 @@ describe('stale leads', () => {
   });
   it('counts a note as contact: the newest note restarts the wait', () => {
     const old = lead('2026-12-01T12:00:00Z');
-    expect(lastTouch(old, ['2026-12-03T08:00:00Z', '2026-12-09T18:00:00Z']).toISOString()).toBe('2026-12-09T18:00:00.000Z');
+    expect(lastTouch(old, ['2026-12-03T08:00:00Z', '2026-12-09T18:00:00Z']).toISOString()).toBe(
+      '2026-12-09T18:00:00.000Z',
+    );
     expect(staleDays(old, ['2026-12-09T18:00:00Z'], NOW, 2)).toBeNull();
     expect(staleDays(old, ['2026-12-03T08:00:00Z'], NOW, 2)).toBe(7);
   });
   it('never flags a lead that has moved past new', () => {
-    for (const status of ['contacted', 'quoted', 'closed']) expect(staleDays(lead('2026-11-01T00:00:00Z', status), [], NOW, 2)).toBeNull();
+    for (const status of ['contacted', 'quoted', 'closed'])
+      expect(staleDays(lead('2026-11-01T00:00:00Z', status), [], NOW, 2)).toBeNull();
   });
   it('follows the shop’s limit', () => {
     const l = lead('2026-12-09T06:00:00Z'); // 1 day 6 hours ago

@@ -1,4 +1,13 @@
-import { canRevise, canTransition, QUOTE_STATE_LIST, refusalMessage, revisionNumber, staffMoves, STATE_WORDS, validUntilFrom } from '@/lib/quotes/lifecycle';
+import {
+  canRevise,
+  canTransition,
+  QUOTE_STATE_LIST,
+  refusalMessage,
+  revisionNumber,
+  staffMoves,
+  STATE_WORDS,
+  validUntilFrom,
+} from '@/lib/quotes/lifecycle';
 
 // The lifecycle's rules, pure: who may make which move, and the words for each state.
 describe('quote lifecycle', () => {
@@ -11,7 +20,8 @@ describe('quote lifecycle', () => {
     expect(staffMoves('sent').sort()).toEqual(['accepted', 'cancelled', 'declined', 'expired']);
     expect(staffMoves('accepted').sort()).toEqual(['cancelled', 'declined', 'expired']);
     expect(staffMoves('deposit-paid')).toEqual(['closed']);
-    for (const end of ['closed', 'declined', 'expired', 'cancelled', 'replaced'] as const) expect(staffMoves(end)).toEqual([]);
+    for (const end of ['closed', 'declined', 'expired', 'cancelled', 'replaced'] as const)
+      expect(staffMoves(end)).toEqual([]);
     expect(canTransition('sent', 'deposit-paid', 'staff')).toBe(false);
     expect(canTransition('sent', 'deposit-paid', 'payment')).toBe(true);
     expect(canTransition('deposit-paid', 'cancelled', 'staff')).toBe(false);

@@ -1,5 +1,14 @@
 import {
-  depositCents, divideRoundHalfUp, formatQuoteNumber, isTaxable, laborLine, lineTotalCents, nextQuoteSequence, quantityHundredths, quoteTotals, taxCents,
+  depositCents,
+  divideRoundHalfUp,
+  formatQuoteNumber,
+  isTaxable,
+  laborLine,
+  lineTotalCents,
+  nextQuoteSequence,
+  quantityHundredths,
+  quoteTotals,
+  taxCents,
 } from '@/lib/quotes/pricing';
 
 // Hand-worked examples; each figure below was worked out on paper, not by running the code.
@@ -97,14 +106,26 @@ describe('a whole quote, worked by hand', () => {
     // subtotal 36,900 + 3,900 + 49,500 + 108,000 + 40,500 = 238,800 ¢
     // taxable 40,800 ¢ × 8.25 % = 3,366 ¢ exactly; total 242,166 ¢; deposit 20 % = 48,433.2 → 48,433 ¢
     expect(quoteTotals(lines, 825, demoPolicy)).toEqual({
-      subtotalCents: 238_800, taxableCents: 40_800, taxRateBp: 825, taxCents: 3_366, totalCents: 242_166, depositCents: 48_433,
+      subtotalCents: 238_800,
+      taxableCents: 40_800,
+      taxRateBp: 825,
+      taxCents: 3_366,
+      totalCents: 242_166,
+      depositCents: 48_433,
     });
   });
 
   it('rounds tax once on the taxable sum, not per line', () => {
     // two goods lines of $0.06: tax per line would be round(0.495) + round(0.495) = 0 + 0 = 0 ¢;
     // on the sum: 12 ¢ × 8.25 % = 0.99 ¢ → 1 ¢
-    const totals = quoteTotals([{ kind: 'part', quantity: 1, unitPriceCents: 6 }, { kind: 'part', quantity: 1, unitPriceCents: 6 }], 825, demoPolicy);
+    const totals = quoteTotals(
+      [
+        { kind: 'part', quantity: 1, unitPriceCents: 6 },
+        { kind: 'part', quantity: 1, unitPriceCents: 6 },
+      ],
+      825,
+      demoPolicy,
+    );
     expect(totals.taxCents).toBe(1);
     expect(totals.totalCents).toBe(13);
     expect(totals.depositCents).toBe(13); // the minimum is above the total

@@ -38,7 +38,12 @@ describe('margin on cams and parts', () => {
     expect(m).toEqual({ revenueCents: 53_650, costCents: 33_519, marginCents: 20_131, marginBp: 3_752 });
   });
   it('can be negative when a line sold below cost', () => {
-    expect(goodsMargin([{ totalCents: 1_000, quantityHundredths: 100, unitCostCents: 1_200 }])).toEqual({ revenueCents: 1_000, costCents: 1_200, marginCents: -200, marginBp: -2_000 });
+    expect(goodsMargin([{ totalCents: 1_000, quantityHundredths: 100, unitCostCents: 1_200 }])).toEqual({
+      revenueCents: 1_000,
+      costCents: 1_200,
+      marginCents: -200,
+      marginBp: -2_000,
+    });
   });
   it('has no rate when nothing was sold', () => {
     expect(goodsMargin([])).toEqual({ revenueCents: 0, costCents: 0, marginCents: 0, marginBp: null });
@@ -69,7 +74,9 @@ describe('the report date range', () => {
   it('names the field and the reason for bad dates', () => {
     expect(issues({ from: '2026-02-30' })).toEqual([['from', expect.stringContaining('YYYY-MM-DD')]]);
     expect(issues({ from: '2026-12-01', to: 'yesterday' })).toEqual([['to', expect.stringContaining('YYYY-MM-DD')]]);
-    expect(issues({ from: '2026-12-02', to: '2026-12-01' })).toEqual([['from', expect.stringContaining('on or before')]]);
+    expect(issues({ from: '2026-12-02', to: '2026-12-01' })).toEqual([
+      ['from', expect.stringContaining('on or before')],
+    ]);
     expect(issues({ from: '2025-12-01', to: '2026-12-02' })).toEqual([['to', expect.stringContaining('one year')]]);
   });
 });

@@ -19,13 +19,19 @@ describe('build profile schema 2', () => {
 
   it('fills vehicle.class from the label’s words, else from the intake, and keeps every other field', () => {
     const cases: [string, string][] = [
-      ['2011 full-size pickup, 5.3 L, crew cab', 'truck'], ['2008 SUV, 5.3 L', 'suv'], ['Cargo van 6.0 L', 'van'],
-      ['2001 coupe, 5.7 L, manual', 'car'], ['customer’s 5.3 L', 'truck'],
+      ['2011 full-size pickup, 5.3 L, crew cab', 'truck'],
+      ['2008 SUV, 5.3 L', 'suv'],
+      ['Cargo van 6.0 L', 'van'],
+      ['2001 coupe, 5.7 L, manual', 'car'],
+      ['customer’s 5.3 L', 'truck'],
     ];
     for (const [label, want] of cases) {
       const v2 = migration.profileToV2(label, JSON.stringify(v1));
       expect(v2.vehicle.class).toBe(want);
-      expect({ ...v2, vehicle: { ...v2.vehicle, class: undefined } }).toEqual({ ...v1, vehicle: { ...v1.vehicle, class: undefined } });
+      expect({ ...v2, vehicle: { ...v2.vehicle, class: undefined } }).toEqual({
+        ...v1,
+        vehicle: { ...v1.vehicle, class: undefined },
+      });
       expect(BuildProfileSchema.safeParse(v2).success).toBe(true);
     }
     const carIntake = { ...v1, engine: { ...v1.engine, intakeManifold: 'car' } };

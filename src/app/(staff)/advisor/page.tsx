@@ -11,7 +11,11 @@ export const metadata: Metadata = { title: 'Cam shortlist' };
 // ?build=<id> (the interview lands here after saving) preselects that build, even beyond the newest.
 // Without it, or when it names no readable build, nothing is preselected: showing some other
 // customer's build instead would put the wrong engine in front of the person at the counter.
-const BuildParam = z.string().regex(/^\d{1,10}$/).transform(Number).pipe(z.number().int().positive().max(Number.MAX_SAFE_INTEGER));
+const BuildParam = z
+  .string()
+  .regex(/^\d{1,10}$/)
+  .transform(Number)
+  .pipe(z.number().int().positive().max(Number.MAX_SAFE_INTEGER));
 
 export default async function AdvisorPage({ searchParams }: { searchParams: Promise<{ build?: string | string[] }> }) {
   await requireAccessForPage('advisor.use');
@@ -33,8 +37,10 @@ export default async function AdvisorPage({ searchParams }: { searchParams: Prom
 
   let problem: string | null = null;
   if (parsed && !parsed.success) problem = `“${given!.slice(0, 40)}” is not a build number. Pick a build below.`;
-  else if (wanted !== undefined && !found) problem = `Build ${wanted} was not found: it may have been deleted, or the link is mistyped. Pick a build below.`;
-  else if (wanted !== undefined && !readable) problem = `Build ${wanted} cannot be read; open it from Interviews and save it again, or pick another build below.`;
+  else if (wanted !== undefined && !found)
+    problem = `Build ${wanted} was not found: it may have been deleted, or the link is mistyped. Pick a build below.`;
+  else if (wanted !== undefined && !readable)
+    problem = `Build ${wanted} cannot be read; open it from Interviews and save it again, or pick another build below.`;
 
   return (
     <div className="flex flex-col gap-4">

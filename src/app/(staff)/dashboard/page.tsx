@@ -10,7 +10,11 @@ import { staleCutoff } from '@/lib/leads/stale';
 
 export const metadata: Metadata = { title: 'Staff home' };
 
-export default async function DashboardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function DashboardPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const user = await requireAccessForPage('staff-area.open');
   const params = await searchParams;
   const denied = typeof params.denied === 'string' ? params.denied : null;
@@ -22,20 +26,34 @@ export default async function DashboardPage({ searchParams }: { searchParams: Pr
     <div className="flex flex-col gap-6">
       <header>
         <h1 className="text-2xl font-semibold">Hello, {user.name}</h1>
-        <p className="text-sm text-ink-soft">Signed in as <span className="font-semibold">{ROLE_NAMES[user.role]}</span> ({user.email}).</p>
+        <p className="text-sm text-ink-soft">
+          Signed in as <span className="font-semibold">{ROLE_NAMES[user.role]}</span> ({user.email}).
+        </p>
       </header>
-      {denied ? <Banner tone="caution">The page <span className="spec">{denied}</span> is not open to the {ROLE_NAMES[user.role].toLowerCase()} role. Ask a manager if you need it.</Banner> : null}
+      {denied ? (
+        <Banner tone="caution">
+          The page <span className="spec">{denied}</span> is not open to the {ROLE_NAMES[user.role].toLowerCase()} role.
+          Ask a manager if you need it.
+        </Banner>
+      ) : null}
       {staleLeads > 0 ? (
         <Banner tone="caution">
-          {staleLeads} new lead{staleLeads === 1 ? ' has' : 's have'} waited {limitDays} day{limitDays === 1 ? '' : 's'} or more without contact.{' '}
-          <Link href="/leads?status=new" className="font-semibold underline">Follow them up on Leads</Link>.
+          {staleLeads} new lead{staleLeads === 1 ? ' has' : 's have'} waited {limitDays} day{limitDays === 1 ? '' : 's'}{' '}
+          or more without contact.{' '}
+          <Link href="/leads?status=new" className="font-semibold underline">
+            Follow them up on Leads
+          </Link>
+          .
         </Banner>
       ) : null}
       <nav aria-label="Your pages">
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
           {links.map((link) => (
             <li key={link.href}>
-              <Link href={link.href} className="block h-full rounded-lg border border-steel-300 bg-paper-raised p-4 hover:border-gauge-500">
+              <Link
+                href={link.href}
+                className="block h-full rounded-lg border border-steel-300 bg-paper-raised p-4 hover:border-gauge-500"
+              >
                 <span className="font-semibold">{link.label}</span>
                 <span className="mt-1 block text-sm text-ink-soft">{link.description}</span>
               </Link>

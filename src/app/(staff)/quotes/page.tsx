@@ -21,7 +21,11 @@ function hrefOf(v: { status?: QuoteStatus; q?: string; page?: number }): string 
   return `?${p}`;
 }
 
-export default async function QuotesPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function QuotesPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   await requireAccessForPage('quotes.read');
   const raw = await searchParams;
   const parsed = QuoteListQuerySchema.safeParse({ status: raw.status, q: raw.q, page: raw.page });
@@ -36,7 +40,12 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
       <PageHeader title="Quotes" lead="Newest change first. Make a new one from the cam shortlist." actions={null} />
       <nav aria-label="Filter by status" className="flex flex-wrap gap-2 text-sm">
         {[undefined, ...QUOTE_STATUSES].map((s) => (
-          <Link key={s ?? 'all'} href={hrefOf({ status: s, q })} aria-current={status === s ? 'page' : undefined} className={`rounded px-2 py-1 ring-1 ring-steel-300 ${status === s ? 'bg-ink text-paper' : 'bg-paper-raised'}`}>
+          <Link
+            key={s ?? 'all'}
+            href={hrefOf({ status: s, q })}
+            aria-current={status === s ? 'page' : undefined}
+            className={`rounded px-2 py-1 ring-1 ring-steel-300 ${status === s ? 'bg-ink text-paper' : 'bg-paper-raised'}`}
+          >
             {s ? quoteStatusWord(s) : 'All'}
           </Link>
         ))}
@@ -45,10 +54,23 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
         {status ? <input type="hidden" name="status" value={status} /> : null}
         <label className="flex flex-col gap-1">
           <span className="font-semibold">Find a quote</span>
-          <input type="search" name="q" defaultValue={q ?? ''} maxLength={100} placeholder="Number, customer or vehicle" className="w-72 rounded px-2 py-1 ring-1 ring-steel-300" />
+          <input
+            type="search"
+            name="q"
+            defaultValue={q ?? ''}
+            maxLength={100}
+            placeholder="Number, customer or vehicle"
+            className="w-72 rounded px-2 py-1 ring-1 ring-steel-300"
+          />
         </label>
-        <Button type="submit" variant="quiet">Search</Button>
-        {q ? <Link className="text-gauge-700 underline" href={hrefOf({ status })}>Clear the search</Link> : null}
+        <Button type="submit" variant="quiet">
+          Search
+        </Button>
+        {q ? (
+          <Link className="text-gauge-700 underline" href={hrefOf({ status })}>
+            Clear the search
+          </Link>
+        ) : null}
       </form>
       <div className="overflow-x-auto rounded border border-steel-300 bg-paper-raised">
         <table className={tableClass}>
@@ -67,28 +89,51 @@ export default async function QuotesPage({ searchParams }: { searchParams: Promi
           <tbody>
             {quotes.map((q) => (
               <tr key={q.id}>
-                <td className={`${tdClass} spec`}><Link className="text-gauge-700 underline" href={`/quotes/${q.id}`}>{q.number}</Link></td>
+                <td className={`${tdClass} spec`}>
+                  <Link className="text-gauge-700 underline" href={`/quotes/${q.id}`}>
+                    {q.number}
+                  </Link>
+                </td>
                 <td className={tdClass}>{q.customerName}</td>
                 <td className={tdClass}>{q.vehicleLabel ?? '—'}</td>
-                <td className={tdClass}><QuoteStatusTag status={q.status} /></td>
+                <td className={tdClass}>
+                  <QuoteStatusTag status={q.status} />
+                </td>
                 <td className={`${tdClass} spec text-right`}>{formatMoney(q.totalCents)}</td>
                 <td className={`${tdClass} spec text-right`}>{formatMoney(q.depositCents)}</td>
-                <td className={tdClass}><PaymentStatusTag status={q.paymentStatus} /></td>
+                <td className={tdClass}>
+                  <PaymentStatusTag status={q.paymentStatus} />
+                </td>
                 <td className={`${tdClass} spec text-xs`}>{q.updatedAt.slice(0, 16).replace('T', ' ')}</td>
               </tr>
             ))}
             {quotes.length === 0 ? (
-              <tr><td colSpan={8} className={`${tdClass} text-ink-muted`}>No quotes{status ? ` in the state “${quoteStatusWord(status)}”` : ''}{q ? ` matching “${q}”` : ''}{page > 1 ? ' on this page' : ' yet'}.</td></tr>
+              <tr>
+                <td colSpan={8} className={`${tdClass} text-ink-muted`}>
+                  No quotes{status ? ` in the state “${quoteStatusWord(status)}”` : ''}
+                  {q ? ` matching “${q}”` : ''}
+                  {page > 1 ? ' on this page' : ' yet'}.
+                </td>
+              </tr>
             ) : null}
           </tbody>
         </table>
       </div>
       <nav aria-label="Pages" className="flex flex-wrap items-center gap-3 text-sm">
         <span className="tabular-nums">
-          {first}–{first === 0 ? 0 : first + quotes.length - 1} of {total} {total === 1 ? 'quote' : 'quotes'} · page {page} of {pages}
+          {first}–{first === 0 ? 0 : first + quotes.length - 1} of {total} {total === 1 ? 'quote' : 'quotes'} · page{' '}
+          {page} of {pages}
         </span>
-        {page > 1 ? <ButtonLink variant="quiet" href={hrefOf({ status, q, page: page - 1 })}>← Newer</ButtonLink> : null}
-        {page < pages ? <ButtonLink variant="quiet" href={hrefOf({ status, q, page: page + 1 })}>Older →</ButtonLink> : null}
+        {page > 1 ? (
+          <ButtonLink variant="quiet" href={hrefOf({ status, q, page: page - 1 })}>
+            ← Newer
+          </ButtonLink>
+        ) : null}
+        {page < pages ? (
+          <ButtonLink variant="quiet" href={hrefOf({ status, q, page: page + 1 })}>
+            Older →
+          </ButtonLink>
+        ) : null}
       </nav>
     </div>
   );

@@ -14,7 +14,10 @@ export async function checkoutResponse(request: Request, start: () => Promise<Ch
     started = await start();
   } catch (error) {
     if (wantsJson || !(error instanceof HttpError)) throw error;
-    return new NextResponse(`${error.message}\n`, { status: error.status, headers: { 'content-type': 'text/plain; charset=utf-8' } });
+    return new NextResponse(`${error.message}\n`, {
+      status: error.status,
+      headers: { 'content-type': 'text/plain; charset=utf-8' },
+    });
   }
   if (wantsJson) return NextResponse.json({ url: started.url, reused: started.reused });
   return NextResponse.redirect(started.url, 303);

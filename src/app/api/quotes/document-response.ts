@@ -13,12 +13,22 @@ import type { DocumentShop, QuoteRecord } from '@/lib/quotes/types';
 export function pdfDownload(bytes: Buffer, filename: string): Response {
   return new Response(new Uint8Array(bytes), {
     status: 200,
-    headers: { 'Content-Type': 'application/pdf', 'Content-Disposition': `attachment; filename="${filename}"`, 'Cache-Control': 'no-store', 'X-Content-Type-Options': 'nosniff' },
+    headers: {
+      'Content-Type': 'application/pdf',
+      'Content-Disposition': `attachment; filename="${filename}"`,
+      'Cache-Control': 'no-store',
+      'X-Content-Type-Options': 'nosniff',
+    },
   });
 }
 
 /** Makes a PDF; a missing font file or a bad glyph is the server's problem, said plainly (503) instead of a bare 500. */
-export async function madePdf(make: () => Promise<Buffer>, what: string, filename: string, failure = 'The PDF could not be made just now. Please try again in a moment.'): Promise<Response> {
+export async function madePdf(
+  make: () => Promise<Buffer>,
+  what: string,
+  filename: string,
+  failure = 'The PDF could not be made just now. Please try again in a moment.',
+): Promise<Response> {
   let bytes: Buffer;
   try {
     bytes = await make();
@@ -31,14 +41,19 @@ export async function madePdf(make: () => Promise<Buffer>, what: string, filenam
 
 export function receiptResponse(quote: QuoteRecord, paymentId: number, shop: DocumentShop): Promise<Response> {
   const payment = quote.payments.find((p) => p.id === paymentId);
-  if (!payment || !counts(payment)) throw new HttpError(404, `Quote ${quote.number} has no payment ${paymentId} that took money.`);
+  if (!payment || !counts(payment))
+    throw new HttpError(404, `Quote ${quote.number} has no payment ${paymentId} that took money.`);
   const number = receiptNumber(quote.number, paymentId);
   return madePdf(() => receiptPdf(quote, paymentId, shop), `receipt ${number}`, `receipt-${number}.pdf`);
 }
 
 export function invoiceResponse(quote: QuoteRecord, shop: DocumentShop): Promise<Response> {
   if (quote.status !== 'closed' || quote.balanceDueCents > 0) {
-    throw new HttpError(409, `Quote ${quote.number} is not paid in full yet (${centsToText(quote.balanceDueCents)} dollars left); the final invoice is made once it is.`, { state: { status: quote.status, balanceDueCents: quote.balanceDueCents } });
+    throw new HttpError(
+      409,
+      `Quote ${quote.number} is not paid in full yet (${centsToText(quote.balanceDueCents)} dollars left); the final invoice is made once it is.`,
+      { state: { status: quote.status, balanceDueCents: quote.balanceDueCents } },
+    );
   }
   const number = invoiceNumber(quote.number);
   return madePdf(() => invoicePdf(quote, shop), `invoice ${number}`, `invoice-${number}.pdf`);
@@ -50,7 +65,11 @@ type Make = (quote: QuoteRecord, shop: DocumentShop) => Promise<Response>;
 export async function staffDocument(id: number, make: Make): Promise<Response> {
   const [quote, shop] = await Promise.all([getQuote(id), shopForDocuments()]);
   if (!quote) throw noQuoteWithId(id);
-  if (!shop) throw new HttpError(409, 'The shop settings are missing; a manager has to fill them in before documents can be made.');
+  if (!shop)
+    throw new HttpError(
+      409,
+      'The shop settings are missing; a manager has to fill them in before documents can be made.',
+    );
   return make(quote, shop);
 }
 

@@ -24,8 +24,20 @@ export function seatDurationDeg(duration050Deg: number, advertisedDeg: number | 
 export function camLobes(cam: CamCard): { intake: LobeShape; exhaust: LobeShape } {
   const ecl = exhaustCenterlineDeg(cam.lsa, cam.intakeCenterline);
   return {
-    intake: lobeShape(360 + cam.intakeCenterline, cam.intakeDuration050, seatDurationDeg(cam.intakeDuration050, cam.intakeAdvertised), cam.intakeLiftIn, cam.rockerRatio),
-    exhaust: lobeShape(360 - ecl, cam.exhaustDuration050, seatDurationDeg(cam.exhaustDuration050, cam.exhaustAdvertised), cam.exhaustLiftIn, cam.rockerRatio),
+    intake: lobeShape(
+      360 + cam.intakeCenterline,
+      cam.intakeDuration050,
+      seatDurationDeg(cam.intakeDuration050, cam.intakeAdvertised),
+      cam.intakeLiftIn,
+      cam.rockerRatio,
+    ),
+    exhaust: lobeShape(
+      360 - ecl,
+      cam.exhaustDuration050,
+      seatDurationDeg(cam.exhaustDuration050, cam.exhaustAdvertised),
+      cam.exhaustLiftIn,
+      cam.rockerRatio,
+    ),
   };
 }
 

@@ -15,6 +15,11 @@ export function startOfBurnDegAtdc(burnDurationDeg: number, retardDeg: number): 
 
 // Heywood ch. 3–4: heat released by a rich-of-stoichiometric charge is oxygen-limited:
 // Q = η_c · m_air · LHV / (A/F)_stoich.
-export function chargeHeatJ(trappedAirKg: number, lhvMjPerKg: number, stoichAfr: number, combustionEfficiency: number): number {
+export function chargeHeatJ(
+  trappedAirKg: number,
+  lhvMjPerKg: number,
+  stoichAfr: number,
+  combustionEfficiency: number,
+): number {
   return (combustionEfficiency * trappedAirKg * lhvMjPerKg * 1e6) / stoichAfr;
 }

@@ -43,7 +43,12 @@ export const E85_EQUIVALENT_AKI = 100;
  * The physical constants fitted once (see docs/advisor.md, "Calibration"): each with its published range.
  * Fitted on the fitting set only; the held-out set was not looked at while choosing them.
  */
-export type FittedConstants = { burnDurationDeg: number; combustionEfficiency: number; frictionScale: number; waveAttenuation: number };
+export type FittedConstants = {
+  burnDurationDeg: number;
+  combustionEfficiency: number;
+  frictionScale: number;
+  waveAttenuation: number;
+};
 
 export const FITTED: FittedConstants = {
   // Wiebe total burn angle (0–99 %), crank deg. Heywood ch. 9: Wiebe Δθ 50–90° at full load. Set at 60°, not fitted.

@@ -20,7 +20,13 @@ export function simulationRpms(gridRpms: ArrayLike<number>, stepRpm: number = SI
 export type ModelCurve = { torqueLbFt: Float64Array; points: CyclePoint[] };
 
 /** Torque (lb·ft) over the grid for one cam in one engine, with the simulated points for "how it was reached". */
-export function modelCurve(engine: EngineSpec, cam: CamSpec, gridRpms: Float64Array, fitted: Fitted = FITTED, stepRpm: number = SIMULATION_STEP_RPM): ModelCurve {
+export function modelCurve(
+  engine: EngineSpec,
+  cam: CamSpec,
+  gridRpms: Float64Array,
+  fitted: Fitted = FITTED,
+  stepRpm: number = SIMULATION_STEP_RPM,
+): ModelCurve {
   const rpms = simulationRpms(gridRpms, stepRpm);
   const points: CyclePoint[] = [];
   let warm: WarmStart | undefined;
@@ -29,6 +35,10 @@ export function modelCurve(engine: EngineSpec, cam: CamSpec, gridRpms: Float64Ar
     points.push(r.point);
     warm = r.warm;
   }
-  const torqueLbFt = monotoneCubic(rpms, points.map((p) => p.torqueNm / NM_PER_LBFT), gridRpms);
+  const torqueLbFt = monotoneCubic(
+    rpms,
+    points.map((p) => p.torqueNm / NM_PER_LBFT),
+    gridRpms,
+  );
   return { torqueLbFt, points };
 }

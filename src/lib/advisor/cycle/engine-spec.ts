@@ -1,6 +1,16 @@
 import type { BuildProfile } from '@/lib/schemas/build-profile';
 import { pistonTravelFromTdcIn } from '../geometry';
-import { AMBIENT_TEMPERATURE_K, CRANK_STEP_DEG, E85_EQUIVALENT_AKI, FITTED, FUELS, GAMMA_AIR, INTAKE_CHARGE_HEATING_K, M_PER_IN, type FittedConstants } from './constants';
+import {
+  AMBIENT_TEMPERATURE_K,
+  CRANK_STEP_DEG,
+  E85_EQUIVALENT_AKI,
+  FITTED,
+  FUELS,
+  GAMMA_AIR,
+  INTAKE_CHARGE_HEATING_K,
+  M_PER_IN,
+  type FittedConstants,
+} from './constants';
 import { speedOfSoundMPerS } from './gas-flow';
 import { HEAD_PRESET_FIGURES, headFromPeak, type HeadSpec } from './head-flow';
 import { researchOctaneFromAki } from './knock';
@@ -71,20 +81,32 @@ function headOf(build: BuildProfile): HeadSpec {
   const e = build.engine;
   if (e.intakeFlowSheet && e.intakeFlowSheet.length >= 2) {
     const fromPeak = headFromPeak(e.intakeFlowCfm, e.intakeValveIn, e.exhaustValveIn);
-    return { ...fromPeak, intakeFlow: e.intakeFlowSheet, exhaustFlow: e.exhaustFlowSheet && e.exhaustFlowSheet.length >= 2 ? e.exhaustFlowSheet : fromPeak.exhaustFlow };
+    return {
+      ...fromPeak,
+      intakeFlow: e.intakeFlowSheet,
+      exhaustFlow: e.exhaustFlowSheet && e.exhaustFlowSheet.length >= 2 ? e.exhaustFlowSheet : fromPeak.exhaustFlow,
+    };
   }
   if (e.headPreset) {
     // The interview's peak figure wins over the preset's; the preset gives the valve sizes. (The generic
     // 0.75 exhaust ratio is kept, as in the fit, rather than the preset's own.)
     const preset = HEAD_PRESET_FIGURES[e.headPreset];
-    return headFromPeak(e.intakeFlowCfm, e.intakeValveIn ?? preset.intakeValveIn, e.exhaustValveIn ?? preset.exhaustValveIn);
+    return headFromPeak(
+      e.intakeFlowCfm,
+      e.intakeValveIn ?? preset.intakeValveIn,
+      e.exhaustValveIn ?? preset.exhaustValveIn,
+    );
   }
   return headFromPeak(e.intakeFlowCfm, e.intakeValveIn, e.exhaustValveIn);
 }
 
 const area = (diameterIn: number) => (Math.PI / 4) * (diameterIn * M_PER_IN) ** 2;
 
-export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED, crankStepDeg: number = CRANK_STEP_DEG): EngineSpec {
+export function engineSpec(
+  build: BuildProfile,
+  fitted: FittedConstants = FITTED,
+  crankStepDeg: number = CRANK_STEP_DEG,
+): EngineSpec {
   const e = build.engine;
   const x = build.exhaust;
   const boreM = e.boreIn * M_PER_IN;
@@ -95,9 +117,12 @@ export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED
   const head = headOf(build);
   const runnerAreaM2 = e.intakeFlowCfm * RUNNER_IN2_PER_CFM * M_PER_IN * M_PER_IN;
   const runnerLengthM = RUNNER_LENGTH_IN[e.intakeManifold] * M_PER_IN;
-  const primaryBoreIn = x.headers === 'manifold' ? MANIFOLD_EQUIVALENT_BORE_IN : (x.primaryIn ?? 1.75) - PRIMARY_WALL_ALLOWANCE_IN;
+  const primaryBoreIn =
+    x.headers === 'manifold' ? MANIFOLD_EQUIVALENT_BORE_IN : (x.primaryIn ?? 1.75) - PRIMARY_WALL_ALLOWANCE_IN;
   const primaryAreaM2 = area(primaryBoreIn);
-  const primaryLengthM = (x.headers === 'manifold' ? PRIMARY_LENGTH_IN.manifold : x.primaryLengthIn ?? PRIMARY_LENGTH_IN[x.headers]) * M_PER_IN;
+  const primaryLengthM =
+    (x.headers === 'manifold' ? PRIMARY_LENGTH_IN.manifold : (x.primaryLengthIn ?? PRIMARY_LENGTH_IN[x.headers])) *
+    M_PER_IN;
   const intakeTemperatureK = AMBIENT_TEMPERATURE_K + INTAKE_CHARGE_HEATING_K;
   const intakeSoundSpeedMPerS = speedOfSoundMPerS(GAMMA_AIR, intakeTemperatureK);
   const a = fitted.waveAttenuation;
@@ -111,10 +136,18 @@ export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED
   const exhaustEchoes = (c: number): Echo[] => {
     const echoes: Echo[] = [{ delayS: (2 * primaryLengthM) / c, gain: rJunction * a }];
     // Losses happen mostly where the area changes, so each echo loses the attenuation once.
-    if (x.system === 'open-short') echoes.push({ delayS: (2 * (primaryLengthM + collectorM)) / c, gain: tOut * tBack * -1 * a });
+    if (x.system === 'open-short')
+      echoes.push({ delayS: (2 * (primaryLengthM + collectorM)) / c, gain: tOut * tBack * -1 * a });
     else {
-      if (x.system === 'full-with-cats') echoes.push({ delayS: (2 * (primaryLengthM + PIPE_TO_CATALYST_IN * M_PER_IN)) / c, gain: tOut * tBack * CATALYST_REFLECTION * a });
-      echoes.push({ delayS: (2 * (primaryLengthM + PIPE_TO_MUFFLER_IN * M_PER_IN)) / c, gain: tOut * tBack * MUFFLER_REFLECTION * a });
+      if (x.system === 'full-with-cats')
+        echoes.push({
+          delayS: (2 * (primaryLengthM + PIPE_TO_CATALYST_IN * M_PER_IN)) / c,
+          gain: tOut * tBack * CATALYST_REFLECTION * a,
+        });
+      echoes.push({
+        delayS: (2 * (primaryLengthM + PIPE_TO_MUFFLER_IN * M_PER_IN)) / c,
+        gain: tOut * tBack * MUFFLER_REFLECTION * a,
+      });
     }
     return echoes;
   };
@@ -135,16 +168,27 @@ export function engineSpec(build: BuildProfile, fitted: FittedConstants = FITTED
   const fuel = build.use.fuel === 'e85' ? FUELS.e85 : FUELS.gasoline;
   const aki = build.use.fuel === 'e85' ? Math.max(E85_EQUIVALENT_AKI, build.use.fuelOctane) : build.use.fuelOctane;
   return {
-    cylinders: e.cylinders, crankStepDeg, boreM, strokeM, sweptM3, clearanceM3, pistonAreaM2, head,
+    cylinders: e.cylinders,
+    crankStepDeg,
+    boreM,
+    strokeM,
+    sweptM3,
+    clearanceM3,
+    pistonAreaM2,
+    head,
     runner: { lengthM: runnerLengthM, areaM2: runnerAreaM2 },
     primary: { lengthM: primaryLengthM, areaM2: primaryAreaM2 },
     exhaustEchoes,
     // The runner opens into the plenum: an open end (R = −1).
     intakeEchoes: [{ delayS: (2 * runnerLengthM) / intakeSoundSpeedMPerS, gain: -1 * a }],
-    intakeSoundSpeedMPerS, intakeTemperatureK,
+    intakeSoundSpeedMPerS,
+    intakeTemperatureK,
     backPressurePaAtRef: EXHAUST_BACK_PRESSURE_KPA[x.system] * 1000,
     intakeRestrictionPaAtRef: INTAKE_RESTRICTION_KPA * 1000,
-    fuel, researchOctane: researchOctaneFromAki(aki),
-    volumeM3, dVolumeM3, wallAreaM2,
+    fuel,
+    researchOctane: researchOctaneFromAki(aki),
+    volumeM3,
+    dVolumeM3,
+    wallAreaM2,
   };
 }

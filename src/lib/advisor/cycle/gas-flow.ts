@@ -3,7 +3,13 @@ import { GAS_CONSTANT_J_PER_KG_K } from './constants';
 // Heywood app. C: compressible quasi-steady flow through a restriction of effective area CdA.
 // Subsonic: ṁ = CdA·p0/√(R·T0) · (pT/p0)^(1/γ) · √(2γ/(γ−1) · [1 − (pT/p0)^((γ−1)/γ)]);
 // choked below the critical ratio (2/(γ+1))^(γ/(γ−1)): ṁ = CdA·p0/√(R·T0) · √γ · (2/(γ+1))^((γ+1)/(2(γ−1))).
-export function orificeMassFlowKgPerS(effectiveAreaM2: number, upstreamPa: number, upstreamK: number, downstreamPa: number, gamma: number): number {
+export function orificeMassFlowKgPerS(
+  effectiveAreaM2: number,
+  upstreamPa: number,
+  upstreamK: number,
+  downstreamPa: number,
+  gamma: number,
+): number {
   if (effectiveAreaM2 <= 0 || upstreamPa <= downstreamPa) return 0;
   const k = chokeConstants(gamma);
   const lead = (effectiveAreaM2 * upstreamPa) / Math.sqrt(GAS_CONSTANT_J_PER_KG_K * upstreamK);

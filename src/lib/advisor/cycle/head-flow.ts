@@ -16,7 +16,10 @@ export type HeadSpec = {
 export type HeadPreset = (typeof HEAD_PRESETS)[number];
 
 /** Peak intake cfm, valve sizes and the exhaust-to-intake flow ratio of each preset (from memory). */
-export const HEAD_PRESET_FIGURES: Record<HeadPreset, { peakCfm: number; intakeValveIn: number; exhaustValveIn: number; exhaustRatio: number }> = {
+export const HEAD_PRESET_FIGURES: Record<
+  HeadPreset,
+  { peakCfm: number; intakeValveIn: number; exhaustValveIn: number; exhaustRatio: number }
+> = {
   'stock-cathedral': { peakCfm: 240, intakeValveIn: 1.89, exhaustValveIn: 1.55, exhaustRatio: 0.75 },
   'ported-cathedral': { peakCfm: 290, intakeValveIn: 2.0, exhaustValveIn: 1.57, exhaustRatio: 0.76 },
   'stock-rectangle': { peakCfm: 315, intakeValveIn: 2.165, exhaustValveIn: 1.59, exhaustRatio: 0.7 },
@@ -43,7 +46,10 @@ export function genericFlowCurve(peakCfm: number, valveIn: number): FlowPoint[] 
   const k = CURTAIN_TO_PORT_SHARPNESS;
   for (let liftIn = 0.025; liftIn <= 0.9001; liftIn += 0.025) {
     const curtainCfm = CFM_PER_EFFECTIVE_IN2 * CURTAIN_DISCHARGE_COEFFICIENT * Math.PI * valveIn * liftIn;
-    points.push({ liftIn: Math.round(liftIn * 1000) / 1000, cfm: Math.pow(Math.pow(curtainCfm, -k) + Math.pow(peakCfm, -k), -1 / k) });
+    points.push({
+      liftIn: Math.round(liftIn * 1000) / 1000,
+      cfm: Math.pow(Math.pow(curtainCfm, -k) + Math.pow(peakCfm, -k), -1 / k),
+    });
   }
   return points;
 }
@@ -53,10 +59,20 @@ export function valveSizeFromPeakCfm(peakCfm: number): number {
   return Math.sqrt(peakCfm / 66);
 }
 
-export function headFromPeak(peakCfm: number, intakeValveIn?: number, exhaustValveIn?: number, exhaustRatio = 0.75): HeadSpec {
+export function headFromPeak(
+  peakCfm: number,
+  intakeValveIn?: number,
+  exhaustValveIn?: number,
+  exhaustRatio = 0.75,
+): HeadSpec {
   const di = intakeValveIn ?? valveSizeFromPeakCfm(peakCfm);
   const de = exhaustValveIn ?? di * 0.8;
-  return { intakeValveIn: di, exhaustValveIn: de, intakeFlow: genericFlowCurve(peakCfm, di), exhaustFlow: genericFlowCurve(peakCfm * exhaustRatio, de) };
+  return {
+    intakeValveIn: di,
+    exhaustValveIn: de,
+    intakeFlow: genericFlowCurve(peakCfm, di),
+    exhaustFlow: genericFlowCurve(peakCfm * exhaustRatio, de),
+  };
 }
 
 /** Bench flow (cfm) at a lift, linear between points, rising linearly from zero below the first point, flat past the last. */

@@ -2,7 +2,9 @@
 // ignition delay τ (ms) = 17.68 · (ON/100)^3.402 · p(atm)^−1.7 · exp(3800 / T). Livengood–Wu: the end gas
 // auto-ignites (knocks) when ∫ dt/τ reaches 1 before the flame has consumed it.
 export function ignitionDelayMs(octaneNumber: number, pressurePa: number, temperatureK: number): number {
-  return 17.68 * Math.exp(3.402 * Math.log(octaneNumber / 100) - 1.7 * Math.log(pressurePa / 101_325) + 3800 / temperatureK);
+  return (
+    17.68 * Math.exp(3.402 * Math.log(octaneNumber / 100) - 1.7 * Math.log(pressurePa / 101_325) + 3800 / temperatureK)
+  );
 }
 
 // Isentropic compression of the unburned end gas (Heywood ch. 4): T = T_ref · (p / p_ref)^((γ−1)/γ).

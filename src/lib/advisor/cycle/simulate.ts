@@ -1,6 +1,12 @@
 import {
-  AMBIENT_PRESSURE_PA, AMBIENT_TEMPERATURE_K, type FittedConstants, GAMMA_AIR, GAMMA_BURNED, GAMMA_UNBURNED,
-  GAS_CONSTANT_J_PER_KG_K as R, WALL_TEMPERATURE_K,
+  AMBIENT_PRESSURE_PA,
+  AMBIENT_TEMPERATURE_K,
+  type FittedConstants,
+  GAMMA_AIR,
+  GAMMA_BURNED,
+  GAMMA_UNBURNED,
+  GAS_CONSTANT_J_PER_KG_K as R,
+  WALL_TEMPERATURE_K,
 } from './constants';
 import { chargeHeatJ, startOfBurnDegAtdc, wiebeFractionBurned } from './combustion';
 import type { CamSpec } from './cam-spec';
@@ -35,8 +41,16 @@ export type CyclePoint = {
 
 /** What one rpm hands the next as its starting guess (the answer barely changes between grid points). */
 export type WarmStart = {
-  massKg: number; airKg: number; tempK: number; airflowKgPerS: number; exhaustTempK: number; retardDeg: number;
-  intakeForward: Float64Array; exhaustForward: Float64Array; meanOutIntakeKgPerS: number; meanOutExhaustKgPerS: number;
+  massKg: number;
+  airKg: number;
+  tempK: number;
+  airflowKgPerS: number;
+  exhaustTempK: number;
+  retardDeg: number;
+  intakeForward: Float64Array;
+  exhaustForward: Float64Array;
+  meanOutIntakeKgPerS: number;
+  meanOutExhaustKgPerS: number;
 };
 
 type Gas = { m: number; air: number; t: number };
@@ -51,11 +65,22 @@ function gammaOf(g: Gas): number {
 }
 
 /** Mass flow out of the cylinder through one valve into a port whose pressure rises with that flow (the pipe's impedance). */
-function valveFlowOut(areaM2: number, pCyl: number, tCyl: number, gCyl: number, portBasePa: number, impedance: number, tPort: number, guess: number): number {
+function valveFlowOut(
+  areaM2: number,
+  pCyl: number,
+  tCyl: number,
+  gCyl: number,
+  portBasePa: number,
+  impedance: number,
+  tPort: number,
+  guess: number,
+): number {
   // Solve ṁ = f(p_port(ṁ)) by the secant method from the last step's flow; f falls as ṁ grows, so the root is unique.
   const f = (mdot: number) => {
     const pPort = Math.max(1000, portBasePa + impedance * mdot);
-    return pCyl >= pPort ? orificeMassFlowKgPerS(areaM2, pCyl, tCyl, pPort, gCyl) : -orificeMassFlowKgPerS(areaM2, pPort, tPort, pCyl, GAMMA_AIR);
+    return pCyl >= pPort
+      ? orificeMassFlowKgPerS(areaM2, pCyl, tCyl, pPort, gCyl)
+      : -orificeMassFlowKgPerS(areaM2, pPort, tPort, pCyl, GAMMA_AIR);
   };
   let m0 = guess;
   let g0 = f(m0) - m0;
@@ -64,7 +89,9 @@ function valveFlowOut(areaM2: number, pCyl: number, tCyl: number, gCyl: number, 
     const g1 = f(m1) - m1;
     if (g1 === g0 || Math.abs(g1) < 1e-7) return m1;
     const m2 = m1 - (g1 * (m1 - m0)) / (g1 - g0);
-    m0 = m1; g0 = g1; m1 = m2;
+    m0 = m1;
+    g0 = g1;
+    m1 = m2;
   }
   return m1;
 }
@@ -84,7 +111,13 @@ function fromBuffer(b: Buffer, dm: number, farAirShare: number, farT: number): {
   return { air: near * b.air + far * farAirShare, heat: AIR_CP * (near * b.t + far * farT) };
 }
 
-export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitted: Fitted, warm?: WarmStart): { point: CyclePoint; warm: WarmStart } {
+export function simulateRpm(
+  engine: EngineSpec,
+  cam: CamSpec,
+  rpm: number,
+  fitted: Fitted,
+  warm?: WarmStart,
+): { point: CyclePoint; warm: WarmStart } {
   const slots = engine.volumeM3.length;
   const stepDeg = engine.crankStepDeg;
   const dt = stepDeg / (6 * rpm);
@@ -99,13 +132,23 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
   let exhaustTempK = warm?.exhaustTempK ?? 900;
   let airflow = warm?.airflowKgPerS ?? (0.9 * AMBIENT_DENSITY * engine.sweptM3 * engine.cylinders * rpm) / 120;
   let retard = Math.max(0, (warm?.retardDeg ?? 0) - 2 * KNOCK_RETARD_STEP_DEG);
-  const intakePipe: WavePipe = makeWavePipe(engine.intakeEchoes, engine.intakeSoundSpeedMPerS, engine.runner.areaM2, slots);
+  const intakePipe: WavePipe = makeWavePipe(
+    engine.intakeEchoes,
+    engine.intakeSoundSpeedMPerS,
+    engine.runner.areaM2,
+    slots,
+  );
   if (warm) intakePipe.forward.set(warm.intakeForward);
   const gas: Gas = warm
     ? { m: warm.massKg, air: warm.airKg, t: warm.tempK }
     : { m: (0.9 * AMBIENT_PRESSURE_PA * vol[start]) / (R * tIn), air: 0, t: 340 };
   if (!warm) gas.air = 0.93 * gas.m;
-  const intakeBuf: Buffer = { m: 0, air: 0, t: tIn, capKg: AMBIENT_DENSITY * engine.runner.areaM2 * engine.runner.lengthM };
+  const intakeBuf: Buffer = {
+    m: 0,
+    air: 0,
+    t: tIn,
+    capKg: AMBIENT_DENSITY * engine.runner.areaM2 * engine.runner.lengthM,
+  };
   const exhaustBuf: Buffer = { m: 0, air: 0, t: exhaustTempK, capKg: 0 };
   const burnDeg = fitted.burnDurationDeg;
   const exhaustPipe: WavePipe = makeWavePipe([], 1, engine.primary.areaM2, slots);
@@ -121,7 +164,7 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
     const cEx = speedOfSoundMPerS(GAMMA_BURNED, 0.85 * exhaustTempK);
     exhaustPipe.echoes = engine.exhaustEchoes(cEx);
     exhaustPipe.impedanceSPerM2 = cEx / engine.primary.areaM2;
-    exhaustBuf.capKg = ((AMBIENT_PRESSURE_PA / (R * exhaustTempK)) * engine.primary.areaM2 * engine.primary.lengthM);
+    exhaustBuf.capKg = (AMBIENT_PRESSURE_PA / (R * exhaustTempK)) * engine.primary.areaM2 * engine.primary.lengthM;
     const flowRatio = airflow / REFERENCE_ENGINE_AIRFLOW_KG_S;
     const plenumPa = AMBIENT_PRESSURE_PA - engine.intakeRestrictionPaAtRef * flowRatio * flowRatio;
     const backPa = AMBIENT_PRESSURE_PA + engine.backPressurePaAtRef * (1.07 * flowRatio) * (1.07 * flowRatio);
@@ -134,7 +177,9 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
     let closedWork = 0;
     let knocked = true;
     while (knocked) {
-      gas.m = startGas.m; gas.air = startGas.air; gas.t = startGas.t;
+      gas.m = startGas.m;
+      gas.air = startGas.air;
+      gas.t = startGas.t;
       closedWork = 0;
       const sob = 720 + startOfBurnDegAtdc(burnDeg, retard);
       const pRef = (gas.m * R * gas.t) / vol[start];
@@ -152,7 +197,17 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
         const dQ = q * (nextBurned - burned);
         const gU = GAMMA_UNBURNED;
         const pMotored = pRef * Math.pow(vRef / v, gU);
-        const w = woschniGasSpeedMPerS(WOSCHNI.c1Closed, meanPistonSpeed, burned > 0 ? WOSCHNI.c2Combustion : 0, engine.sweptM3, tRef, pRef, vRef, p, pMotored);
+        const w = woschniGasSpeedMPerS(
+          WOSCHNI.c1Closed,
+          meanPistonSpeed,
+          burned > 0 ? WOSCHNI.c2Combustion : 0,
+          engine.sweptM3,
+          tRef,
+          pRef,
+          vRef,
+          p,
+          pMotored,
+        );
         const h = woschniCoefficientWPerM2K(engine.boreM, p, gas.t, w);
         const qWall = h * wall[s] * (gas.t - WALL_TEMPERATURE_K) * dt;
         const g = gammaOf(gas);
@@ -200,8 +255,32 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
       const aEx = cam.exhaustAreaM2[s];
       const zIn = intakePipe.impedanceSPerM2;
       const zEx = exhaustPipe.impedanceSPerM2;
-      mdotIn = aIn > 0 ? valveFlowOut(aIn, p, gas.t, g, plenumPa + 2 * bIn - zIn * meanOutIn, zIn, intakeBuf.m > 0 ? intakeBuf.t : tIn, mdotIn) : 0;
-      mdotEx = aEx > 0 ? valveFlowOut(aEx, p, gas.t, g, backPa + 2 * bEx - zEx * meanOutEx, zEx, exhaustBuf.m > 0 ? exhaustBuf.t : exhaustTempK, mdotEx) : 0;
+      mdotIn =
+        aIn > 0
+          ? valveFlowOut(
+              aIn,
+              p,
+              gas.t,
+              g,
+              plenumPa + 2 * bIn - zIn * meanOutIn,
+              zIn,
+              intakeBuf.m > 0 ? intakeBuf.t : tIn,
+              mdotIn,
+            )
+          : 0;
+      mdotEx =
+        aEx > 0
+          ? valveFlowOut(
+              aEx,
+              p,
+              gas.t,
+              g,
+              backPa + 2 * bEx - zEx * meanOutEx,
+              zEx,
+              exhaustBuf.m > 0 ? exhaustBuf.t : exhaustTempK,
+              mdotEx,
+            )
+          : 0;
       launchWave(intakePipe, s, mdotIn - meanOutIn, bIn);
       launchWave(exhaustPipe, s, mdotEx - meanOutEx, bEx);
       sumOutIn += mdotIn;
@@ -228,19 +307,30 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
       // Intake valve: in from the runner (first what flowed back into it), or back out into it.
       if (dmIn > 0) {
         const drawn = fromBuffer(intakeBuf, dmIn, 1, tIn);
-        mass += dmIn; air += drawn.air; energy += drawn.heat; inducted += drawn.air;
+        mass += dmIn;
+        air += drawn.air;
+        energy += drawn.heat;
+        inducted += drawn.air;
       } else if (dmIn < 0) {
         intoBuffer(intakeBuf, -dmIn, -dmIn * airShare, gas.t);
-        mass += dmIn; air += dmIn * airShare; energy += cp * gas.t * dmIn; inducted += dmIn * airShare;
+        mass += dmIn;
+        air += dmIn * airShare;
+        energy += cp * gas.t * dmIn;
+        inducted += dmIn * airShare;
       }
       // Exhaust valve: out into the primary, or back in from it (reversion).
       if (dmEx > 0) {
         const drawn = fromBuffer(exhaustBuf, dmEx, exhaustBuf.air, exhaustTempK);
-        mass += dmEx; air += drawn.air; energy += drawn.heat;
+        mass += dmEx;
+        air += drawn.air;
+        energy += drawn.heat;
       } else if (dmEx < 0) {
         intoBuffer(exhaustBuf, -dmEx, -dmEx * airShare, gas.t);
-        mass += dmEx; air += dmEx * airShare; energy += cp * gas.t * dmEx;
-        outEnergy -= dmEx * gas.t; outMass -= dmEx;
+        mass += dmEx;
+        air += dmEx * airShare;
+        energy += cp * gas.t * dmEx;
+        outEnergy -= dmEx * gas.t;
+        outMass -= dmEx;
       }
       const w = WOSCHNI.c1GasExchange * meanPistonSpeed;
       const h = woschniCoefficientWPerM2K(engine.boreM, p, gas.t, w);
@@ -276,7 +366,18 @@ export function simulateRpm(engine: EngineSpec, cam: CamSpec, rpm: number, fitte
     if (cycle === cycles - 1) {
       return {
         point,
-        warm: { massKg: gas.m, airKg: gas.air, tempK: gas.t, airflowKgPerS: airflow, exhaustTempK, retardDeg: retard, intakeForward: intakePipe.forward.slice(), exhaustForward: exhaustPipe.forward.slice(), meanOutIntakeKgPerS: meanOutIn, meanOutExhaustKgPerS: meanOutEx },
+        warm: {
+          massKg: gas.m,
+          airKg: gas.air,
+          tempK: gas.t,
+          airflowKgPerS: airflow,
+          exhaustTempK,
+          retardDeg: retard,
+          intakeForward: intakePipe.forward.slice(),
+          exhaustForward: exhaustPipe.forward.slice(),
+          meanOutIntakeKgPerS: meanOutIn,
+          meanOutExhaustKgPerS: meanOutEx,
+        },
       };
     }
   }

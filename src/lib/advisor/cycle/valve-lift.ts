@@ -24,7 +24,13 @@ function halfAngleForRatio(ratio: number, n: number): number {
 }
 
 /** Solves the fullness n so the lobe is dur050 wide at 0.050" and durSeat wide at the seat lift. */
-export function lobeShape(centerDeg: number, duration050Deg: number, seatDurationDeg: number, valveLiftIn: number, rockerRatio: number): LobeShape {
+export function lobeShape(
+  centerDeg: number,
+  duration050Deg: number,
+  seatDurationDeg: number,
+  valveLiftIn: number,
+  rockerRatio: number,
+): LobeShape {
   const tappetLiftIn = valveLiftIn / rockerRatio;
   const r050 = Math.min(0.95, CHECKING_TAPPET_LIFT_IN / tappetLiftIn);
   const rSeat = Math.min(r050 * 0.99, SEAT_TAPPET_LIFT_IN / tappetLiftIn);

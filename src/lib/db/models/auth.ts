@@ -1,6 +1,11 @@
 import 'server-only';
 import {
-  DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from 'sequelize';
 
 // Models for the sign-in tables (migration 20261202000200-auth); bound with the others in ./index.ts.
@@ -57,7 +62,13 @@ export class PasswordToken extends Model<InferAttributes<PasswordToken>, InferCr
         usedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'PasswordToken', tableName: 'password_reset_tokens', underscored: true, updatedAt: false },
+      {
+        sequelize,
+        modelName: 'PasswordToken',
+        tableName: 'password_reset_tokens',
+        underscored: true,
+        updatedAt: false,
+      },
     );
   }
 }

@@ -1,6 +1,12 @@
 import 'server-only';
 import {
-  DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from 'sequelize';
 
 export class Customer extends Model<InferAttributes<Customer>, InferCreationAttributes<Customer>> {
@@ -76,7 +82,11 @@ export class Interview extends Model<InferAttributes<Interview>, InferCreationAt
     Interview.init(
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        status: { type: DataTypes.ENUM('in-progress', 'complete', 'abandoned'), allowNull: false, defaultValue: 'in-progress' },
+        status: {
+          type: DataTypes.ENUM('in-progress', 'complete', 'abandoned'),
+          allowNull: false,
+          defaultValue: 'in-progress',
+        },
         answers: { type: DataTypes.JSON, allowNull: true },
         rankingSnapshot: { type: DataTypes.JSON, allowNull: true },
         completedAt: { type: DataTypes.DATE, allowNull: true },

@@ -1,6 +1,12 @@
 import 'server-only';
 import {
-  DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from 'sequelize';
 import { DYNO_TYPES, type DynoType } from '@/lib/dyno/dyno-type';
 
@@ -38,7 +44,11 @@ export class DynoRun extends Model<InferAttributes<DynoRun>, InferCreationAttrib
         phase: { type: DataTypes.ENUM('before', 'after'), allowNull: false },
         dynoType: { type: DataTypes.ENUM(...DYNO_TYPES), allowNull: false, defaultValue: 'chassis' },
         runAt: { type: DataTypes.DATE, allowNull: false },
-        correctionStandard: { type: DataTypes.ENUM(...CORRECTION_STANDARDS), allowNull: false, defaultValue: 'sae-j1349' },
+        correctionStandard: {
+          type: DataTypes.ENUM(...CORRECTION_STANDARDS),
+          allowNull: false,
+          defaultValue: 'sae-j1349',
+        },
         airTempC: optional(),
         baroKpa: optional(),
         humidityPct: optional(),

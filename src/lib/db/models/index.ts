@@ -4,7 +4,13 @@ import { getSequelize } from '../connection';
 import { AuditEntry } from './audit-entry';
 import { PasswordToken, SignInAttempt, StaffSession, TOKEN_PURPOSES, type TokenPurpose } from './auth';
 import { Cam } from './cam';
-import { ATTACHMENT_CONTENT_TYPES, ATTACHMENT_ENTITY_TYPES, CatalogueAttachment, type AttachmentContentType, type AttachmentEntityType } from './catalogue-attachment';
+import {
+  ATTACHMENT_CONTENT_TYPES,
+  ATTACHMENT_ENTITY_TYPES,
+  CatalogueAttachment,
+  type AttachmentContentType,
+  type AttachmentEntityType,
+} from './catalogue-attachment';
 import { Build, Customer, Interview } from './customer';
 import { DynoGain } from './dyno-gain';
 import { DynoRun } from './dyno-run';
@@ -21,16 +27,71 @@ import { Supplier } from './supplier';
 import { User } from './user';
 
 export {
-  AuditEntry, Build, Cam, CatalogueAttachment, Customer, DynoGain, DynoRun, Interview, Job, JobSignOff, LaborOperation, Lead, LeadNote, NeedRule,
-  NeedRuleItem, Part, PasswordToken, Payment, Quote, QuoteLine, QuoteLink, ShopSettings, SignInAttempt, StaffSession, Supplier, User,
+  AuditEntry,
+  Build,
+  Cam,
+  CatalogueAttachment,
+  Customer,
+  DynoGain,
+  DynoRun,
+  Interview,
+  Job,
+  JobSignOff,
+  LaborOperation,
+  Lead,
+  LeadNote,
+  NeedRule,
+  NeedRuleItem,
+  Part,
+  PasswordToken,
+  Payment,
+  Quote,
+  QuoteLine,
+  QuoteLink,
+  ShopSettings,
+  SignInAttempt,
+  StaffSession,
+  Supplier,
+  User,
 };
-export { ATTACHMENT_CONTENT_TYPES, ATTACHMENT_ENTITY_TYPES, TOKEN_PURPOSES, type AttachmentContentType, type AttachmentEntityType, type TokenPurpose };
+export {
+  ATTACHMENT_CONTENT_TYPES,
+  ATTACHMENT_ENTITY_TYPES,
+  TOKEN_PURPOSES,
+  type AttachmentContentType,
+  type AttachmentEntityType,
+  type TokenPurpose,
+};
 
 // Every model the app uses, bound together. A model missing here fails its first query with
 // "Model not initialized", so a new model file is added to this list in the same commit.
 const MODELS = [
-  User, ShopSettings, Supplier, Cam, Part, LaborOperation, NeedRule, NeedRuleItem, Customer, Build, Interview, Quote, QuoteLine, QuoteLink, Payment,
-  Lead, LeadNote, DynoRun, DynoGain, Job, JobSignOff, AuditEntry, CatalogueAttachment, StaffSession, PasswordToken, SignInAttempt,
+  User,
+  ShopSettings,
+  Supplier,
+  Cam,
+  Part,
+  LaborOperation,
+  NeedRule,
+  NeedRuleItem,
+  Customer,
+  Build,
+  Interview,
+  Quote,
+  QuoteLine,
+  QuoteLink,
+  Payment,
+  Lead,
+  LeadNote,
+  DynoRun,
+  DynoGain,
+  Job,
+  JobSignOff,
+  AuditEntry,
+  CatalogueAttachment,
+  StaffSession,
+  PasswordToken,
+  SignInAttempt,
 ];
 
 let boundTo: Sequelize | undefined;

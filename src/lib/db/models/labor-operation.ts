@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export class LaborOperation extends Model<InferAttributes<LaborOperation>, InferCreationAttributes<LaborOperation>> {
   declare id: CreationOptional<number>;

@@ -1,11 +1,26 @@
 import 'server-only';
 import {
-  DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize,
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
 } from 'sequelize';
 import type { Supplier } from './supplier';
 
 export const PART_CATEGORIES = [
-  'springs', 'pushrods', 'lifters', 'deactivation-delete', 'timing', 'gaskets', 'converter', 'tune', 'hardware', 'other',
+  'springs',
+  'pushrods',
+  'lifters',
+  'deactivation-delete',
+  'timing',
+  'gaskets',
+  'converter',
+  'tune',
+  'hardware',
+  'other',
 ] as const;
 export type PartCategory = (typeof PART_CATEGORIES)[number];
 

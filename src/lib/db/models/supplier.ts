@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export class Supplier extends Model<InferAttributes<Supplier>, InferCreationAttributes<Supplier>> {
   declare id: CreationOptional<number>;

@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export const STAFF_ROLES = ['manager', 'counter', 'tech'] as const;
 export type StaffRole = (typeof STAFF_ROLES)[number];

@@ -17,7 +17,10 @@ export type BuildSummary = { id: number; vehicleLabel: string; customerName: str
 export async function listBuildSummaries(limit = 50): Promise<BuildSummary[]> {
   const builds = await Build.findAll({
     include: [{ model: Customer, as: 'customer', attributes: ['name'] }],
-    order: [['updatedAt', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['updatedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit,
   });
   return builds.map(toSummary);
@@ -33,7 +36,12 @@ type BuildWithCustomer = Build & { customer?: Customer | null };
 
 function toSummary(build: Build): BuildSummary {
   const customer = (build as BuildWithCustomer).customer;
-  return { id: build.id, vehicleLabel: build.vehicleLabel, customerName: customer?.name ?? 'Unknown customer', profile: build.profile };
+  return {
+    id: build.id,
+    vehicleLabel: build.vehicleLabel,
+    customerName: customer?.name ?? 'Unknown customer',
+    profile: build.profile,
+  };
 }
 
 export type BuildRecord = {
@@ -96,8 +104,13 @@ const withCustomer = () => [{ model: Customer, as: 'customer', attributes: ['id'
 function matchingIdsSql(q: string): string | null {
   const search = textSearch(q);
   if (search.kind === 'nothing') return null;
-  const parts = [`SELECT bc.id FROM customers c JOIN builds bc ON bc.customer_id = c.id WHERE ${customerMatchSql(search, 'c')}`];
-  if (search.kind === 'fulltext') parts.push(`SELECT id FROM builds WHERE MATCH(vehicle_label) AGAINST (${db().escape(search.against)} IN BOOLEAN MODE)`);
+  const parts = [
+    `SELECT bc.id FROM customers c JOIN builds bc ON bc.customer_id = c.id WHERE ${customerMatchSql(search, 'c')}`,
+  ];
+  if (search.kind === 'fulltext')
+    parts.push(
+      `SELECT id FROM builds WHERE MATCH(vehicle_label) AGAINST (${db().escape(search.against)} IN BOOLEAN MODE)`,
+    );
   return parts.join(' UNION ');
 }
 
@@ -110,7 +123,10 @@ export async function listBuilds(query: BuildListQuery): Promise<{ items: BuildL
   const where = query.customerId !== undefined ? `WHERE b.customer_id = ${sequelize.escape(query.customerId)}` : '';
   const offset = (query.page - 1) * query.pageSize;
   const [ids, counted] = await Promise.all([
-    sequelize.query<{ id: number }>(`SELECT b.id FROM ${from} ${where} ORDER BY b.updated_at DESC, b.id DESC LIMIT ${query.pageSize} OFFSET ${offset}`, { type: QueryTypes.SELECT }),
+    sequelize.query<{ id: number }>(
+      `SELECT b.id FROM ${from} ${where} ORDER BY b.updated_at DESC, b.id DESC LIMIT ${query.pageSize} OFFSET ${offset}`,
+      { type: QueryTypes.SELECT },
+    ),
     sequelize.query<{ total: unknown }>(`SELECT COUNT(*) AS total FROM ${from} ${where}`, { type: QueryTypes.SELECT }),
   ]);
   const total = Number(counted[0]?.total ?? 0);
@@ -131,12 +147,14 @@ export function buildFormValues(r: BuildRecord): Record<keyof BuildUpdate, unkno
 }
 
 async function checkCustomer(customerId: number, t: Transaction) {
-  if (!(await Customer.findByPk(customerId, { transaction: t }))) throw invalid([{ field: 'customerId', message: `there is no customer with id ${customerId}` }]);
+  if (!(await Customer.findByPk(customerId, { transaction: t })))
+    throw invalid([{ field: 'customerId', message: `there is no customer with id ${customerId}` }]);
 }
 
 async function checkBaselineCam(camId: number | null, t: Transaction) {
   if (camId === null) return;
-  if (!(await Cam.findByPk(camId, { attributes: ['id'], transaction: t }))) throw invalid([{ field: 'baselineCamId', message: `there is no cam with id ${camId} in the catalogue` }]);
+  if (!(await Cam.findByPk(camId, { attributes: ['id'], transaction: t })))
+    throw invalid([{ field: 'baselineCamId', message: `there is no cam with id ${camId} in the catalogue` }]);
 }
 
 /** A new build, with a new customer when one is given inline; all in one transaction. */
@@ -150,18 +168,32 @@ export async function createBuild(values: BuildCreate, user: SessionUser): Promi
     }
     await checkBaselineCam(values.baselineCamId, t);
     const build = await Build.create(
-      { customerId, vehicleLabel: values.vehicleLabel, baselineCamId: values.baselineCamId, profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion },
+      {
+        customerId,
+        vehicleLabel: values.vehicleLabel,
+        baselineCamId: values.baselineCamId,
+        profile: values.profile,
+        profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion,
+      },
       { transaction: t },
     );
     if (values.leadId !== undefined) await linkLeadToCustomer(values.leadId, customerId, user, t);
     const record = (await getBuild(build.id, t))!;
-    await recordAudit({ user, action: 'build.created', entityType: 'build', entityId: build.id, before: null, after: record }, t);
+    await recordAudit(
+      { user, action: 'build.created', entityType: 'build', entityId: build.id, before: null, after: record },
+      t,
+    );
     return { record };
   });
 }
 
 /** Applies validated values when the client's version is still current; otherwise 409 with the current record. */
-export async function updateBuild(id: number, expectedVersion: number, values: BuildUpdate, user: SessionUser): Promise<WriteOutcome<BuildRecord>> {
+export async function updateBuild(
+  id: number,
+  expectedVersion: number,
+  values: BuildUpdate,
+  user: SessionUser,
+): Promise<WriteOutcome<BuildRecord>> {
   return runWrite(
     async (t) => {
       const build = await Build.findByPk(id, { include: withCustomer(), transaction: t, lock: t.LOCK.UPDATE });
@@ -171,9 +203,14 @@ export async function updateBuild(id: number, expectedVersion: number, values: B
       if (values.customerId !== before.customerId) await checkCustomer(values.customerId, t);
       if (values.baselineCamId !== before.baselineCamId) await checkBaselineCam(values.baselineCamId, t);
       const sameProfile = JSON.stringify(values.profile) === JSON.stringify(before.profile);
-      build.set({ customerId: values.customerId, vehicleLabel: values.vehicleLabel, baselineCamId: values.baselineCamId });
+      build.set({
+        customerId: values.customerId,
+        vehicleLabel: values.vehicleLabel,
+        baselineCamId: values.baselineCamId,
+      });
       // JSON columns compare by reference; only mark the profile when its content differs.
-      if (!sameProfile) build.set({ profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion });
+      if (!sameProfile)
+        build.set({ profile: values.profile, profileSchemaVersion: BUILD_RECORD_LIMITS.profileSchemaVersion });
       if (!build.changed()) return { record: before, changed: false };
       await build.save({ transaction: t });
       // The measured history is filed under the engine's figures: a new profile refiles it.
@@ -188,13 +225,28 @@ export async function updateBuild(id: number, expectedVersion: number, values: B
 
 /** The catalogue's factory-baseline cards (not archived), for "the cam in the engine now". */
 export async function listBaselineCards(): Promise<BaselineCardOption[]> {
-  const cams = await Cam.findAll({ where: { isFactoryBaseline: true, archivedAt: null }, order: [['baselineForLiters', 'ASC'], ['sku', 'ASC']] });
+  const cams = await Cam.findAll({
+    where: { isFactoryBaseline: true, archivedAt: null },
+    order: [
+      ['baselineForLiters', 'ASC'],
+      ['sku', 'ASC'],
+    ],
+  });
   const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
   return cams.map((c) => ({
-    id: c.id, sku: c.sku, name: c.name, baselineForLiters: n(c.baselineForLiters),
-    intakeDuration050: Number(c.intakeDuration050), exhaustDuration050: Number(c.exhaustDuration050),
-    intakeAdvertised: n(c.intakeAdvertised), exhaustAdvertised: n(c.exhaustAdvertised),
-    intakeLiftIn: Number(c.intakeLiftIn), exhaustLiftIn: Number(c.exhaustLiftIn), lsa: Number(c.lsa), intakeCenterline: Number(c.intakeCenterline),
-    rockerRatio: Number(c.rockerRatio), springMaxLiftIn: n(c.springMaxLiftIn),
+    id: c.id,
+    sku: c.sku,
+    name: c.name,
+    baselineForLiters: n(c.baselineForLiters),
+    intakeDuration050: Number(c.intakeDuration050),
+    exhaustDuration050: Number(c.exhaustDuration050),
+    intakeAdvertised: n(c.intakeAdvertised),
+    exhaustAdvertised: n(c.exhaustAdvertised),
+    intakeLiftIn: Number(c.intakeLiftIn),
+    exhaustLiftIn: Number(c.exhaustLiftIn),
+    lsa: Number(c.lsa),
+    intakeCenterline: Number(c.intakeCenterline),
+    rockerRatio: Number(c.rockerRatio),
+    springMaxLiftIn: n(c.springMaxLiftIn),
   }));
 }

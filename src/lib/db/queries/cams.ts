@@ -2,7 +2,16 @@ import 'server-only';
 import { Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { changedFields, conflict, countReferences, invalid, likeTerm, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
+import {
+  changedFields,
+  conflict,
+  countReferences,
+  invalid,
+  likeTerm,
+  notFound,
+  runWrite,
+  type WriteOutcome,
+} from '@/lib/db/write';
 import { CATALOGUE_CAM_FIELDS, type CamListQuery, type CatalogueCam } from '@/lib/schemas/catalogue-cam';
 import type { CamRecord, SupplierOption } from '@/lib/catalogue/types';
 import { Cam, Supplier } from '../models';
@@ -32,7 +41,8 @@ export function toCamRecord(cam: CamWithSupplier): CamRecord {
     deactivationCompatible: Boolean(cam.deactivationCompatible),
     emissionsCertified: Boolean(cam.emissionsCertified),
     isFactoryBaseline: Boolean(cam.isFactoryBaseline),
-    baselineForLiters: cam.baselineForLiters === null || cam.baselineForLiters === undefined ? null : Number(cam.baselineForLiters),
+    baselineForLiters:
+      cam.baselineForLiters === null || cam.baselineForLiters === undefined ? null : Number(cam.baselineForLiters),
     priceCents: cam.priceCents,
     costCents: cam.costCents,
     stockOnHand: cam.stockOnHand,
@@ -84,13 +94,21 @@ const withSupplier = () => [{ model: Supplier, as: 'supplier', attributes: ['id'
 
 function camOrder(query: Pick<CamListQuery, 'sort' | 'dir'>): Order {
   const dir = query.dir === 'desc' ? 'DESC' : 'ASC';
-  if (query.sort === 'supplier') return [[{ model: Supplier, as: 'supplier' }, 'name', dir], ['sku', 'ASC']];
-  return [[query.sort, dir], ['id', 'ASC']];
+  if (query.sort === 'supplier')
+    return [
+      [{ model: Supplier, as: 'supplier' }, 'name', dir],
+      ['sku', 'ASC'],
+    ];
+  return [
+    [query.sort, dir],
+    ['id', 'ASC'],
+  ];
 }
 
 export async function listCams(query: CamListQuery): Promise<{ items: CamRecord[]; total: number }> {
   const and: WhereOptions<Cam>[] = [];
-  if (query.q) and.push({ [Op.or]: [{ sku: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }] });
+  if (query.q)
+    and.push({ [Op.or]: [{ sku: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }] });
   if (query.supplier !== undefined) and.push({ supplierId: query.supplier });
   if (query.durationMin !== undefined) and.push({ intakeDuration050: { [Op.gte]: query.durationMin } });
   if (query.durationMax !== undefined) and.push({ intakeDuration050: { [Op.lte]: query.durationMax } });
@@ -126,7 +144,8 @@ export async function listSuppliers(): Promise<SupplierOption[]> {
 
 async function checkSupplier(supplierId: number | null, transaction: Transaction) {
   if (supplierId === null) return;
-  if (!(await Supplier.findByPk(supplierId, { transaction }))) throw invalid([{ field: 'supplierId', message: `there is no supplier with id ${supplierId}` }]);
+  if (!(await Supplier.findByPk(supplierId, { transaction })))
+    throw invalid([{ field: 'supplierId', message: `there is no supplier with id ${supplierId}` }]);
 }
 
 const uniqueFields = { sku: 'sku' };
@@ -137,7 +156,10 @@ export async function createCam(values: CatalogueCam, user: SessionUser): Promis
       await checkSupplier(values.supplierId, t);
       const cam = await Cam.create({ ...camColumns(values), archivedAt: null }, { transaction: t });
       const record = (await getCam(cam.id, t))!;
-      await recordAudit({ user, action: 'cam.created', entityType: 'cam', entityId: String(cam.id), before: null, after: record }, t);
+      await recordAudit(
+        { user, action: 'cam.created', entityType: 'cam', entityId: String(cam.id), before: null, after: record },
+        t,
+      );
       return { record };
     },
     { uniqueFields },
@@ -165,7 +187,12 @@ export async function updateCam(
       if (!cam.changed()) return { record: before, changed: false };
       await cam.save({ transaction: t });
       const after = (await getCam(id, t))!;
-      const action = archived === true && !before.archivedAt ? 'cam.archived' : archived === false && before.archivedAt ? 'cam.restored' : 'cam.updated';
+      const action =
+        archived === true && !before.archivedAt
+          ? 'cam.archived'
+          : archived === false && before.archivedAt
+            ? 'cam.restored'
+            : 'cam.updated';
       await recordAudit({ user, action, entityType: 'cam', entityId: String(id), before, after }, t);
       return { record: after };
     },
@@ -189,7 +216,10 @@ async function camReferenceCount(id: number, transaction: Transaction): Promise<
  * DELETE: a cam that any quote, quote line, build, interview or dyno run refers to is archived
  * (kept, hidden from the advisor and the default list); a cam nothing refers to is deleted.
  */
-export async function removeCam(id: number, user: SessionUser): Promise<WriteOutcome<{ outcome: 'archived' | 'deleted'; cam: CamRecord }>> {
+export async function removeCam(
+  id: number,
+  user: SessionUser,
+): Promise<WriteOutcome<{ outcome: 'archived' | 'deleted'; cam: CamRecord }>> {
   return runWrite<{ outcome: 'archived' | 'deleted'; cam: CamRecord }>(async (t) => {
     const cam = await Cam.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
     if (!cam) throw notFound();
@@ -223,17 +253,26 @@ export async function suppliersByName(): Promise<Map<string, SupplierOption>> {
   return new Map(list.map((s) => [s.name.trim().toLowerCase(), s]));
 }
 
-export type CamImportRow = { values: Omit<CatalogueCam, 'supplierId'>; supplierName: string | null; existing: CamRecord | null };
+export type CamImportRow = {
+  values: Omit<CatalogueCam, 'supplierId'>;
+  supplierName: string | null;
+  existing: CamRecord | null;
+};
 
 /**
  * Writes a whole import in one transaction: new suppliers by name, then each cam created or updated
  * (by SKU). Any failure rolls everything back. Rows whose existing version moved on since the
  * preview are refused as a conflict, so an import never overwrites a manager's concurrent edit.
  */
-export async function commitCamImport(rows: CamImportRow[], user: SessionUser): Promise<WriteOutcome<{ created: number; updated: number; unchanged: number; suppliersAdded: string[] }>> {
+export async function commitCamImport(
+  rows: CamImportRow[],
+  user: SessionUser,
+): Promise<WriteOutcome<{ created: number; updated: number; unchanged: number; suppliersAdded: string[] }>> {
   return runWrite(
     async (t) => {
-      const suppliers = new Map((await Supplier.findAll({ transaction: t })).map((s) => [s.name.trim().toLowerCase(), s.id]));
+      const suppliers = new Map(
+        (await Supplier.findAll({ transaction: t })).map((s) => [s.name.trim().toLowerCase(), s.id]),
+      );
       const suppliersAdded: string[] = [];
       let created = 0;
       let updated = 0;
@@ -243,7 +282,10 @@ export async function commitCamImport(rows: CamImportRow[], user: SessionUser): 
         if (row.supplierName) {
           const key = row.supplierName.trim().toLowerCase();
           if (!suppliers.has(key)) {
-            const supplier = await Supplier.create({ name: row.supplierName.trim(), contactEmail: null }, { transaction: t });
+            const supplier = await Supplier.create(
+              { name: row.supplierName.trim(), contactEmail: null },
+              { transaction: t },
+            );
             suppliers.set(key, supplier.id);
             suppliersAdded.push(supplier.name);
           }
@@ -253,13 +295,25 @@ export async function commitCamImport(rows: CamImportRow[], user: SessionUser): 
         if (!row.existing) {
           const cam = await Cam.create({ ...camColumns(values), archivedAt: null }, { transaction: t });
           const after = (await getCam(cam.id, t))!;
-          await recordAudit({ user, action: 'cam.imported', entityType: 'cam', entityId: String(cam.id), before: null, after }, t);
+          await recordAudit(
+            { user, action: 'cam.imported', entityType: 'cam', entityId: String(cam.id), before: null, after },
+            t,
+          );
           created += 1;
           continue;
         }
-        const cam = await Cam.findByPk(row.existing.id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
+        const cam = await Cam.findByPk(row.existing.id, {
+          include: withSupplier(),
+          transaction: t,
+          lock: t.LOCK.UPDATE,
+        });
         if (!cam || cam.version !== row.existing.version) {
-          throw invalid([{ field: `sku`, message: `${row.values.sku} was changed by someone else since the preview; preview the file again` }]);
+          throw invalid([
+            {
+              field: `sku`,
+              message: `${row.values.sku} was changed by someone else since the preview; preview the file again`,
+            },
+          ]);
         }
         const before = toCamRecord(cam);
         cam.set(camColumns(values));
@@ -269,7 +323,10 @@ export async function commitCamImport(rows: CamImportRow[], user: SessionUser): 
         }
         await cam.save({ transaction: t });
         const after = (await getCam(cam.id, t))!;
-        await recordAudit({ user, action: 'cam.imported', entityType: 'cam', entityId: String(cam.id), before, after }, t);
+        await recordAudit(
+          { user, action: 'cam.imported', entityType: 'cam', entityId: String(cam.id), before, after },
+          t,
+        );
         updated += 1;
       }
       return { record: { created, updated, unchanged, suppliersAdded } };

@@ -52,7 +52,8 @@ export function customerMatchSql(search: Exclude<TextSearch, { kind: 'nothing' }
   // Unqualified for a query on customers alone: the production build minifies model names, and with
   // them the table alias Sequelize writes.
   const c = (column: string) => (alias ? `${alias}.${column}` : column);
-  if (search.kind === 'fulltext') return `MATCH(${c('name')}, ${c('email')}, ${c('phone')}) AGAINST (${e(search.against)} IN BOOLEAN MODE)`;
+  if (search.kind === 'fulltext')
+    return `MATCH(${c('name')}, ${c('email')}, ${c('phone')}) AGAINST (${e(search.against)} IN BOOLEAN MODE)`;
   return `${c('name')} LIKE ${e(search.like)}`;
 }
 
@@ -62,7 +63,10 @@ export async function listCustomers(query: CustomerListQuery): Promise<{ items: 
   if (search?.kind === 'nothing') return { items: [], total: 0 };
   const { rows, count } = await Customer.findAndCountAll({
     where: search ? { [Op.and]: [literal(customerMatchSql(search))] } : {},
-    order: [['name', 'ASC'], ['id', 'ASC']],
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   });
@@ -77,15 +81,36 @@ export async function getCustomer(id: number, transaction?: Transaction): Promis
 export async function getCustomerDetail(id: number): Promise<CustomerDetail | null> {
   const c = await Customer.findByPk(id);
   if (!c) return null;
-  const builds = await Build.findAll({ where: { customerId: id }, attributes: ['id', 'vehicleLabel', 'updatedAt'], order: [['updatedAt', 'DESC'], ['id', 'DESC']] });
-  return { ...toCustomerRecord(c), builds: builds.map((b) => ({ id: b.id, vehicleLabel: b.vehicleLabel, updatedAt: new Date(b.updatedAt).toISOString() })) };
+  const builds = await Build.findAll({
+    where: { customerId: id },
+    attributes: ['id', 'vehicleLabel', 'updatedAt'],
+    order: [
+      ['updatedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
+  return {
+    ...toCustomerRecord(c),
+    builds: builds.map((b) => ({
+      id: b.id,
+      vehicleLabel: b.vehicleLabel,
+      updatedAt: new Date(b.updatedAt).toISOString(),
+    })),
+  };
 }
 
 /** Inside a caller's transaction (a build created with a new customer inline uses this too). */
-export async function insertCustomer(values: CustomerValues, user: SessionUser, t: Transaction): Promise<CustomerRecord> {
+export async function insertCustomer(
+  values: CustomerValues,
+  user: SessionUser,
+  t: Transaction,
+): Promise<CustomerRecord> {
   const c = await Customer.create({ ...values }, { transaction: t });
   const record = toCustomerRecord(c);
-  await recordAudit({ user, action: 'customer.created', entityType: 'customer', entityId: c.id, before: null, after: record }, t);
+  await recordAudit(
+    { user, action: 'customer.created', entityType: 'customer', entityId: c.id, before: null, after: record },
+    t,
+  );
   return record;
 }
 
@@ -94,7 +119,12 @@ export async function createCustomer(values: CustomerValues, user: SessionUser):
 }
 
 /** Applies validated values when the client's version is still current; otherwise 409 with the current record. */
-export async function updateCustomer(id: number, expectedVersion: number, values: CustomerValues, user: SessionUser): Promise<WriteOutcome<CustomerRecord>> {
+export async function updateCustomer(
+  id: number,
+  expectedVersion: number,
+  values: CustomerValues,
+  user: SessionUser,
+): Promise<WriteOutcome<CustomerRecord>> {
   return runWrite(
     async (t) => {
       const c = await Customer.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });

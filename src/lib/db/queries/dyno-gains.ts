@@ -22,8 +22,23 @@ export async function refreshDynoGains(buildIds: readonly number[], t: Transacti
     Build.findAll({ where: { id: { [Op.in]: ids } }, attributes: ['id', 'profile'], transaction: t }),
     DynoRun.findAll({
       where: { buildId: { [Op.in]: ids } },
-      attributes: ['id', 'buildId', 'phase', 'dynoType', 'camId', 'peakHp', 'curve', 'correctionStandard', 'airTempC', 'baroKpa', 'humidityPct'],
-      order: [['buildId', 'ASC'], ['id', 'ASC']],
+      attributes: [
+        'id',
+        'buildId',
+        'phase',
+        'dynoType',
+        'camId',
+        'peakHp',
+        'curve',
+        'correctionStandard',
+        'airTempC',
+        'baroKpa',
+        'humidityPct',
+      ],
+      order: [
+        ['buildId', 'ASC'],
+        ['id', 'ASC'],
+      ],
       lock: t.LOCK.SHARE,
       transaction: t,
     }),
@@ -42,7 +57,10 @@ export async function refreshDynoGains(buildIds: readonly number[], t: Transacti
       dynoType: r.dynoType,
       camId: r.camId ?? null,
       correctedPeakHp: f !== undefined && r.peakHp !== null ? correctedFigure(r.peakHp, f) : null,
-      correctedCurve: f !== undefined && r.curve ? r.curve.map((p) => ({ rpm: p.rpm, torqueLbFt: correctedFigure(p.torqueLbFt, f) })) : null,
+      correctedCurve:
+        f !== undefined && r.curve
+          ? r.curve.map((p) => ({ rpm: p.rpm, torqueLbFt: correctedFigure(p.torqueLbFt, f) }))
+          : null,
     };
   });
   const runsByBench = new Map<string, RunForHistory[]>();
@@ -63,8 +81,10 @@ export async function refreshDynoGains(buildIds: readonly number[], t: Transacti
       intakeManifold: e.intakeManifold!,
       gainPctPeakHp: e.measuredGainPctPeakHp,
       // Hundredths of a percent are far finer than a dyno repeats; the row stays small.
-      gainPctByRpm: e.measuredGainPctByRpm?.map((p) => ({ rpm: p.rpm, gainPct: Math.round(p.gainPct * 100) / 100 })) ?? null,
-    })));
+      gainPctByRpm:
+        e.measuredGainPctByRpm?.map((p) => ({ rpm: p.rpm, gainPct: Math.round(p.gainPct * 100) / 100 })) ?? null,
+    })),
+  );
   await DynoGain.destroy({ where: { buildId: { [Op.in]: ids } }, transaction: t });
   if (rows.length) await DynoGain.bulkCreate(rows, { transaction: t });
 }
@@ -77,7 +97,12 @@ export async function refreshAllDynoGains(chunk = 500): Promise<number> {
   for (let i = 0; i < ids.length; i += chunk) {
     const part = ids.slice(i, i + chunk);
     await sequelize.transaction(async (t) => {
-      await Build.findAll({ where: { id: { [Op.in]: part } }, attributes: ['id'], lock: t.LOCK.UPDATE, transaction: t });
+      await Build.findAll({
+        where: { id: { [Op.in]: part } },
+        attributes: ['id'],
+        lock: t.LOCK.UPDATE,
+        transaction: t,
+      });
       await refreshDynoGains(part, t);
     });
   }

@@ -23,11 +23,17 @@ const includes = () => [
   { model: User, as: 'recordedBy', attributes: ['id', 'name'] },
 ];
 
-export function runCorrection(run: Pick<DynoRun, 'correctionStandard' | 'airTempC' | 'baroKpa' | 'humidityPct'>): Correction | null {
+export function runCorrection(
+  run: Pick<DynoRun, 'correctionStandard' | 'airTempC' | 'baroKpa' | 'humidityPct'>,
+): Correction | null {
   // A reading the standard does not use may be missing (DIN 70020 ignores humidity); 0 stands in, unused.
   const standard = run.correctionStandard as CorrectionStandard;
   if (AIR_NEEDED_BY[standard].some((field) => run[field] === null)) return null;
-  return correctionFor(standard, { airTempC: run.airTempC ?? 0, baroKpa: run.baroKpa ?? 0, humidityPct: run.humidityPct ?? 0 });
+  return correctionFor(standard, {
+    airTempC: run.airTempC ?? 0,
+    baroKpa: run.baroKpa ?? 0,
+    humidityPct: run.humidityPct ?? 0,
+  });
 }
 
 export function viewOf(run: RunWithRefs): DynoRunView {
@@ -46,11 +52,19 @@ export function viewOf(run: RunWithRefs): DynoRunView {
     recordedBy: run.recordedBy?.name ?? null,
     air: { airTempC: run.airTempC, baroKpa: run.baroKpa, humidityPct: run.humidityPct },
     correction,
-    observed: { peakHp: run.peakHp, peakHpRpm: run.peakHpRpm, peakTorqueLbFt: run.peakTorqueLbFt, peakTorqueRpm: run.peakTorqueRpm },
+    observed: {
+      peakHp: run.peakHp,
+      peakHpRpm: run.peakHpRpm,
+      peakTorqueLbFt: run.peakTorqueLbFt,
+      peakTorqueRpm: run.peakTorqueRpm,
+    },
     corrected: correction ? { peakHp: scale(run.peakHp), peakTorqueLbFt: scale(run.peakTorqueLbFt) } : null,
     curve: run.curve,
     // Torque is scaled by the factor and power computed again from it, so hp = lb·ft · rpm / 5252 still holds.
-    correctedCurve: run.curve && f !== undefined ? pullWithPower(run.curve.map((p) => ({ rpm: p.rpm, torqueLbFt: correctedFigure(p.torqueLbFt, f) }))) : null,
+    correctedCurve:
+      run.curve && f !== undefined
+        ? pullWithPower(run.curve.map((p) => ({ rpm: p.rpm, torqueLbFt: correctedFigure(p.torqueLbFt, f) })))
+        : null,
     notes: run.notes,
   };
 }
@@ -60,7 +74,14 @@ export async function buildExists(buildId: number): Promise<boolean> {
 }
 
 export async function listDynoRuns(buildId: number): Promise<DynoRunView[]> {
-  const runs = await DynoRun.findAll({ where: { buildId }, include: includes(), order: [['runAt', 'ASC'], ['id', 'ASC']] });
+  const runs = await DynoRun.findAll({
+    where: { buildId },
+    include: includes(),
+    order: [
+      ['runAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return runs.map((r) => viewOf(r as RunWithRefs));
 }
 
@@ -74,13 +95,25 @@ async function quoteFor(values: DynoRunValues, t: Transaction): Promise<Quote | 
   if (values.quoteId) {
     const quote = await Quote.findByPk(values.quoteId, { transaction: t });
     if (!quote) throw invalid([{ field: 'quoteId', message: `no quote with id ${values.quoteId}` }]);
-    if (quote.buildId !== values.buildId) throw invalid([{ field: 'quoteId', message: `quote ${values.quoteId} is not for build ${values.buildId}` }]);
+    if (quote.buildId !== values.buildId)
+      throw invalid([{ field: 'quoteId', message: `quote ${values.quoteId} is not for build ${values.buildId}` }]);
     return quote;
   }
-  return Quote.findOne({ where: { buildId: values.buildId, status: { [Op.in]: [...JOB_QUOTE_STATUSES] } }, order: [['updatedAt', 'DESC'], ['id', 'DESC']], transaction: t });
+  return Quote.findOne({
+    where: { buildId: values.buildId, status: { [Op.in]: [...JOB_QUOTE_STATUSES] } },
+    order: [
+      ['updatedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    transaction: t,
+  });
 }
 
-export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip: string | null): Promise<WriteOutcome<DynoRunView>> {
+export async function createDynoRun(
+  values: DynoRunValues,
+  user: SessionUser,
+  ip: string | null,
+): Promise<WriteOutcome<DynoRunView>> {
   return runWrite(async (t) => {
     // Locked first: the build's dyno_gains rows are rewritten below, one write to a build at a time.
     const build = await Build.findByPk(values.buildId, { transaction: t, lock: t.LOCK.UPDATE });
@@ -88,17 +121,29 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
     const quote = await quoteFor(values, t);
     let camId = values.camId ?? null;
     if (camId !== null) {
-      if (!(await Cam.count({ where: { id: camId }, transaction: t }))) throw invalid([{ field: 'camId', message: `no cam with id ${camId}` }]);
+      if (!(await Cam.count({ where: { id: camId }, transaction: t })))
+        throw invalid([{ field: 'camId', message: `no cam with id ${camId}` }]);
     } else {
       camId = values.phase === 'after' ? (quote?.camId ?? null) : (build.baselineCamId ?? null);
     }
     if (values.phase === 'after' && camId === null) {
-      throw invalid([{ field: 'camId', message: 'an after run needs the cam that was fitted: give camId (this build has no accepted quote with a cam)' }]);
+      throw invalid([
+        {
+          field: 'camId',
+          message:
+            'an after run needs the cam that was fitted: give camId (this build has no accepted quote with a cam)',
+        },
+      ]);
     }
     const curve = values.curve ? pullWithPower(values.curve) : null;
     const peaks = curve
       ? peaksOf(curve)
-      : { peakHp: values.peak!.hp, peakHpRpm: values.peak!.hpRpm, peakTorqueLbFt: values.peak!.torqueLbFt, peakTorqueRpm: values.peak!.torqueRpm };
+      : {
+          peakHp: values.peak!.hp,
+          peakHpRpm: values.peak!.hpRpm,
+          peakTorqueLbFt: values.peak!.torqueLbFt,
+          peakTorqueRpm: values.peak!.torqueRpm,
+        };
     const run = await DynoRun.create(
       {
         buildId: values.buildId,
@@ -121,14 +166,32 @@ export async function createDynoRun(values: DynoRunValues, user: SessionUser, ip
     await refreshDynoGains([values.buildId], t);
     const record = (await getDynoRun(run.id, t))!;
     await recordAudit(
-      { user, action: 'dyno-run.recorded', entityType: 'dyno-run', entityId: run.id, after: { buildId: record.buildId, phase: record.phase, dynoType: record.dynoType, camId: record.camId, observed: record.observed, corrected: record.corrected }, ip },
+      {
+        user,
+        action: 'dyno-run.recorded',
+        entityType: 'dyno-run',
+        entityId: run.id,
+        after: {
+          buildId: record.buildId,
+          phase: record.phase,
+          dynoType: record.dynoType,
+          camId: record.camId,
+          observed: record.observed,
+          corrected: record.corrected,
+        },
+        ip,
+      },
       t,
     );
     return { record };
   });
 }
 
-export async function deleteDynoRun(id: number, user: SessionUser, ip: string | null): Promise<WriteOutcome<{ id: number; deleted: true }>> {
+export async function deleteDynoRun(
+  id: number,
+  user: SessionUser,
+  ip: string | null,
+): Promise<WriteOutcome<{ id: number; deleted: true }>> {
   return runWrite(async (t) => {
     // The build before the run, in the order every dyno write takes its locks (no deadlock with a create).
     const owner = await DynoRun.findByPk(id, { attributes: ['id', 'buildId'], transaction: t });
@@ -136,7 +199,15 @@ export async function deleteDynoRun(id: number, user: SessionUser, ip: string | 
     await Build.findByPk(owner.buildId, { attributes: ['id'], transaction: t, lock: t.LOCK.UPDATE });
     const run = await DynoRun.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!run) throw notFound();
-    const before = { buildId: run.buildId, phase: run.phase, dynoType: run.dynoType, camId: run.camId, peakHp: run.peakHp, peakTorqueLbFt: run.peakTorqueLbFt, runAt: run.runAt };
+    const before = {
+      buildId: run.buildId,
+      phase: run.phase,
+      dynoType: run.dynoType,
+      camId: run.camId,
+      peakHp: run.peakHp,
+      peakTorqueLbFt: run.peakTorqueLbFt,
+      runAt: run.runAt,
+    };
     await run.destroy({ transaction: t });
     await refreshDynoGains([run.buildId], t);
     await recordAudit({ user, action: 'dyno-run.deleted', entityType: 'dyno-run', entityId: id, before, ip }, t);

@@ -15,7 +15,12 @@ import { Build, Cam, Customer, db, Job, JobSignOff, Quote, User } from '../model
 /** Quote statuses that are jobs: paid, or paid and closed (see src/lib/quotes/lifecycle.ts). */
 export const JOB_QUOTE_STATES = ['deposit-paid', 'closed'] as const;
 
-type QuoteRow = Quote & { customer?: Customer; build?: Build | null; cam?: Cam | null; job?: (Job & { technician?: User | null }) | null };
+type QuoteRow = Quote & {
+  customer?: Customer;
+  build?: Build | null;
+  cam?: Cam | null;
+  job?: (Job & { technician?: User | null }) | null;
+};
 type SignOffRow = JobSignOff & { signedBy?: User | null };
 
 /** The shop's date today, on the server's clock (run the server in the shop's time zone). */
@@ -34,7 +39,14 @@ export function dueOf(state: BoardState, bookedFor: string | null, today: string
 function signOffView(row: SignOffRow): SignOffView {
   const readings = readingsOf(row);
   // Warnings are worked out on every read, so they always follow the limits in sign-off-limits.ts.
-  return { ...readings, tuneFile: row.tuneFile, notes: row.notes, signedBy: row.signedBy?.name ?? null, signedAt: new Date(row.createdAt).toISOString(), warnings: signOffWarnings(readings) };
+  return {
+    ...readings,
+    tuneFile: row.tuneFile,
+    notes: row.notes,
+    signedBy: row.signedBy?.name ?? null,
+    signedAt: new Date(row.createdAt).toISOString(),
+    warnings: signOffWarnings(readings),
+  };
 }
 
 export function deactivationActiveOf(build: Build | null | undefined): boolean {
@@ -84,7 +96,11 @@ async function latestSignOffs(jobIds: number[], transaction?: Transaction): Prom
 
 /** One job by its quote id; null when the quote is not a deposit-paid job. */
 export async function getBoardJob(quoteId: number, transaction?: Transaction): Promise<BoardJob | null> {
-  const q = (await Quote.findOne({ where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATES] } }, include: includes(), transaction })) as QuoteRow | null;
+  const q = (await Quote.findOne({
+    where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATES] } },
+    include: includes(),
+    transaction,
+  })) as QuoteRow | null;
   if (!q) return null;
   const signOffs = q.job ? await latestSignOffs([q.job.id], transaction) : new Map();
   return viewOf(q, shopToday(), (q.job && signOffs.get(q.job.id)) ?? null);
@@ -94,12 +110,17 @@ export async function getBoardJob(quoteId: number, transaction?: Transaction): P
  * The board, paged. Active view: overdue first, then today's, then paid jobs not booked yet, then the
  * coming days, then jobs ready to collect; within each, by date, then quote id so pages never shuffle.
  */
-export async function listBoard(query: JobListQuery): Promise<{ items: BoardJob[]; total: number; page: number; pageSize: number; today: string }> {
+export async function listBoard(
+  query: JobListQuery,
+): Promise<{ items: BoardJob[]; total: number; page: number; pageSize: number; today: string }> {
   const sequelize = db();
   const today = shopToday();
   const where: WhereOptions[] = [{ status: { [Op.in]: [...JOB_QUOTE_STATES] } }];
   // Active: paid and not booked yet, or booked and not collected (a closed quote never booked is history).
-  if (query.view === 'active') where.push({ [Op.or]: [{ status: 'deposit-paid', '$job.id$': null }, { '$job.state$': { [Op.ne]: 'collected' } }] });
+  if (query.view === 'active')
+    where.push({
+      [Op.or]: [{ status: 'deposit-paid', '$job.id$': null }, { '$job.state$': { [Op.ne]: 'collected' } }],
+    });
   if (query.view === 'collected') where.push({ '$job.state$': 'collected' });
   if (query.from) where.push({ '$job.booked_for$': { [Op.gte]: query.from } });
   if (query.to) where.push({ '$job.booked_for$': { [Op.lte]: query.to } });
@@ -111,8 +132,15 @@ export async function listBoard(query: JobListQuery): Promise<{ items: BoardJob[
   const byDate = { model: Job, as: 'job' };
   const order: Order =
     query.view === 'collected'
-      ? [[byDate, 'bookedFor', 'DESC'], ['id', 'DESC']]
-      : [[rank, 'ASC'], [byDate, 'bookedFor', 'ASC'], ['id', 'ASC']];
+      ? [
+          [byDate, 'bookedFor', 'DESC'],
+          ['id', 'DESC'],
+        ]
+      : [
+          [rank, 'ASC'],
+          [byDate, 'bookedFor', 'ASC'],
+          ['id', 'ASC'],
+        ];
   const { rows, count } = await Quote.findAndCountAll({
     where: { [Op.and]: where },
     include: includes(),
@@ -125,11 +153,27 @@ export async function listBoard(query: JobListQuery): Promise<{ items: BoardJob[
   });
   const quotes = rows as QuoteRow[];
   const signOffs = await latestSignOffs(quotes.flatMap((q) => (q.job ? [q.job.id] : [])));
-  return { items: quotes.map((q) => viewOf(q, today, (q.job && signOffs.get(q.job.id)) ?? null)), total: count, page: query.page, pageSize: query.pageSize, today };
+  return {
+    items: quotes.map((q) => viewOf(q, today, (q.job && signOffs.get(q.job.id)) ?? null)),
+    total: count,
+    page: query.page,
+    pageSize: query.pageSize,
+    today,
+  };
 }
 
 /** Who a job can be given to: active staff who may record job work (jobs.record: technicians and managers). */
-export async function listAssignableStaff(transaction?: Transaction): Promise<{ id: number; name: string; role: string }[]> {
-  const users = await User.findAll({ where: { active: true, role: { [Op.in]: [...rolesWith('jobs.record')] } }, attributes: ['id', 'name', 'role'], order: [['name', 'ASC'], ['id', 'ASC']], transaction });
+export async function listAssignableStaff(
+  transaction?: Transaction,
+): Promise<{ id: number; name: string; role: string }[]> {
+  const users = await User.findAll({
+    where: { active: true, role: { [Op.in]: [...rolesWith('jobs.record')] } },
+    attributes: ['id', 'name', 'role'],
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    transaction,
+  });
   return users.map((u) => ({ id: u.id, name: u.name, role: u.role }));
 }

@@ -9,7 +9,16 @@ import { JOB_QUOTE_STATUSES } from './dyno-runs';
 // The technician's view of a job: a quote the customer has accepted or paid a deposit on. Never
 // carries prices, costs or margins — the workshop needs the parts, not the money.
 
-export type JobSummary = { quoteId: number; number: string; status: string; customerName: string; vehicleLabel: string; buildId: number | null; camName: string | null; acceptedAt: string | null };
+export type JobSummary = {
+  quoteId: number;
+  number: string;
+  status: string;
+  customerName: string;
+  vehicleLabel: string;
+  buildId: number | null;
+  camName: string | null;
+  acceptedAt: string | null;
+};
 export type JobLine = { kind: string; description: string; quantity: number };
 export type JobSheet = JobSummary & {
   profile: BuildProfile | null;
@@ -42,7 +51,10 @@ export async function listJobs(): Promise<JobSummary[]> {
   const quotes = await Quote.findAll({
     where: { status: { [Op.in]: [...JOB_QUOTE_STATUSES] } },
     include: refs(),
-    order: [['acceptedAt', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['acceptedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit: 200,
   });
   return quotes.map((q) => summaryOf(q as QuoteWithRefs));
@@ -52,7 +64,10 @@ export async function getJobSheet(quoteId: number): Promise<JobSheet | null> {
   const quote = (await Quote.findOne({
     // A closed quote (balance paid) keeps its sheet: the board shows the job until the car is collected.
     where: { id: quoteId, status: { [Op.in]: [...JOB_QUOTE_STATUSES, 'closed'] } },
-    include: [...refs(), { model: QuoteLine, as: 'lines', attributes: ['id', 'kind', 'description', 'quantity', 'sortOrder'] }],
+    include: [
+      ...refs(),
+      { model: QuoteLine, as: 'lines', attributes: ['id', 'kind', 'description', 'quantity', 'sortOrder'] },
+    ],
     order: [[{ model: QuoteLine, as: 'lines' }, 'sortOrder', 'ASC']],
   })) as QuoteWithRefs | null;
   if (!quote) return null;

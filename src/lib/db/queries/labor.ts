@@ -45,11 +45,21 @@ export function laborFormValues(record: LaborRecord): Record<keyof LaborValues, 
 
 export async function listLabor(query: LaborListQuery): Promise<{ items: LaborRecord[]; total: number }> {
   const and: WhereOptions<LaborOperation>[] = [];
-  if (query.q) and.push({ [Op.or]: [{ code: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }, { engines: { [Op.like]: likeTerm(query.q) } }] });
+  if (query.q)
+    and.push({
+      [Op.or]: [
+        { code: { [Op.like]: likeTerm(query.q) } },
+        { name: { [Op.like]: likeTerm(query.q) } },
+        { engines: { [Op.like]: likeTerm(query.q) } },
+      ],
+    });
   if (query.active !== undefined) and.push({ active: query.active });
   const { rows, count } = await LaborOperation.findAndCountAll({
     where: { [Op.and]: and },
-    order: [[query.sort, query.dir === 'desc' ? 'DESC' : 'ASC'], ['id', 'ASC']],
+    order: [
+      [query.sort, query.dir === 'desc' ? 'DESC' : 'ASC'],
+      ['id', 'ASC'],
+    ],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
   });
@@ -72,14 +82,22 @@ export async function createLabor(values: LaborValues, user: SessionUser): Promi
     async (t) => {
       const op = await LaborOperation.create(columns(values), { transaction: t });
       const record = (await getLabor(op.id, t))!;
-      await recordAudit({ user, action: 'labor.created', entityType: 'labor', entityId: String(op.id), before: null, after: record }, t);
+      await recordAudit(
+        { user, action: 'labor.created', entityType: 'labor', entityId: String(op.id), before: null, after: record },
+        t,
+      );
       return { record };
     },
     { uniqueFields: { code: 'code' } },
   );
 }
 
-export async function updateLabor(id: number, expectedVersion: number, values: LaborValues, user: SessionUser): Promise<WriteOutcome<LaborRecord>> {
+export async function updateLabor(
+  id: number,
+  expectedVersion: number,
+  values: LaborValues,
+  user: SessionUser,
+): Promise<WriteOutcome<LaborRecord>> {
   return runWrite(
     async (t) => {
       const op = await LaborOperation.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
@@ -100,7 +118,10 @@ export async function updateLabor(id: number, expectedVersion: number, values: L
 }
 
 /** DELETE: refused while a need rule uses it; made inactive when a quote line uses it; else deleted. */
-export async function removeLabor(id: number, user: SessionUser): Promise<WriteOutcome<{ outcome: 'deactivated' | 'deleted'; labor: LaborRecord }>> {
+export async function removeLabor(
+  id: number,
+  user: SessionUser,
+): Promise<WriteOutcome<{ outcome: 'deactivated' | 'deleted'; labor: LaborRecord }>> {
   return runWrite<{ outcome: 'deactivated' | 'deleted'; labor: LaborRecord }>(async (t) => {
     const op = await LaborOperation.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!op) throw notFound();
@@ -112,11 +133,17 @@ export async function removeLabor(id: number, user: SessionUser): Promise<WriteO
       op.set({ active: false });
       await op.save({ transaction: t });
       const after = (await getLabor(id, t))!;
-      await recordAudit({ user, action: 'labor.deactivated', entityType: 'labor', entityId: String(id), before, after }, t);
+      await recordAudit(
+        { user, action: 'labor.deactivated', entityType: 'labor', entityId: String(id), before, after },
+        t,
+      );
       return { record: { outcome: 'deactivated', labor: after } };
     }
     await op.destroy({ transaction: t });
-    await recordAudit({ user, action: 'labor.deleted', entityType: 'labor', entityId: String(id), before, after: null }, t);
+    await recordAudit(
+      { user, action: 'labor.deleted', entityType: 'labor', entityId: String(id), before, after: null },
+      t,
+    );
     return { record: { outcome: 'deleted', labor: before } };
   });
 }

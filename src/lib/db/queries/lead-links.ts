@@ -8,7 +8,12 @@ import { Lead } from '../models';
 // An interview started from a lead: the lead is linked to the interview's customer and, if nobody had
 // contacted them yet, counts as contacted. Runs inside the build's own transaction, so a refused build
 // leaves the lead as it was and a missing lead refuses the build (422 naming leadId).
-export async function linkLeadToCustomer(leadId: number, customerId: number, user: SessionUser, t: Transaction): Promise<void> {
+export async function linkLeadToCustomer(
+  leadId: number,
+  customerId: number,
+  user: SessionUser,
+  t: Transaction,
+): Promise<void> {
   const lead = await Lead.findByPk(leadId, { transaction: t, lock: t.LOCK.UPDATE });
   if (!lead) throw invalid([{ field: 'leadId', message: `leadId ${leadId} names no lead` }]);
   const before = { customerId: lead.customerId ?? null, status: lead.status };

@@ -46,25 +46,52 @@ export async function emissionsCertifiedIds(camIds: (string | number)[]): Promis
 }
 
 /** Stores the lead, its answers and shortlist, and the token's hash, in one transaction with its audit row. */
-export async function createLead(answers: LeadAnswers, shortlist: Shortlist, token: string, ip: string | null): Promise<LeadRecord> {
+export async function createLead(
+  answers: LeadAnswers,
+  shortlist: Shortlist,
+  token: string,
+  ip: string | null,
+): Promise<LeadRecord> {
   const lead = await db().transaction(async (t) => {
     const row = await Lead.create(
-      { name: answers.name, email: answers.email ?? null, phone: answers.phone ?? null, answers, shortlist, publicTokenHash: hashToken(token), customerId: null },
+      {
+        name: answers.name,
+        email: answers.email ?? null,
+        phone: answers.phone ?? null,
+        answers,
+        shortlist,
+        publicTokenHash: hashToken(token),
+        customerId: null,
+      },
       { transaction: t },
     );
-    await recordAudit({ actor: answers.email ?? answers.phone ?? 'questionnaire', action: 'lead.created', entityType: 'lead', entityId: row.id, ip }, t);
+    await recordAudit(
+      {
+        actor: answers.email ?? answers.phone ?? 'questionnaire',
+        action: 'lead.created',
+        entityType: 'lead',
+        entityId: row.id,
+        ip,
+      },
+      t,
+    );
     return row;
   });
   return toRecord(lead);
 }
 
 /** The customer's own result by private link; null for anything that is not a live link. */
-export async function getLeadByToken(token: string): Promise<{ lead: LeadRecord; shop: { name: string; phone: string; email: string } | null } | null> {
+export async function getLeadByToken(
+  token: string,
+): Promise<{ lead: LeadRecord; shop: { name: string; phone: string; email: string } | null } | null> {
   if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
   const row = await Lead.findOne({ where: { publicTokenHash: hashToken(token) } });
   if (!row) return null;
   const settings = await getShopSettings();
-  return { lead: toRecord(row), shop: settings ? { name: settings.name, phone: settings.phone, email: settings.email } : null };
+  return {
+    lead: toRecord(row),
+    shop: settings ? { name: settings.name, phone: settings.phone, email: settings.email } : null,
+  };
 }
 
 export async function getLead(id: number): Promise<LeadRecord | null> {
@@ -72,10 +99,21 @@ export async function getLead(id: number): Promise<LeadRecord | null> {
   return row ? toRecord(row) : null;
 }
 
-export async function listLeads({ status, page, pageSize }: { status?: LeadStatus; page: number; pageSize: number }): Promise<{ items: LeadRecord[]; total: number }> {
+export async function listLeads({
+  status,
+  page,
+  pageSize,
+}: {
+  status?: LeadStatus;
+  page: number;
+  pageSize: number;
+}): Promise<{ items: LeadRecord[]; total: number }> {
   const { rows, count } = await Lead.findAndCountAll({
     where: status ? { status } : {},
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit: pageSize,
     offset: (page - 1) * pageSize,
   });
@@ -98,7 +136,11 @@ export async function countStaleLeads(cutoff: Date): Promise<number> {
 }
 
 /** Moves a lead to another status; a stale version is a conflict (409) with the current lead. */
-export async function updateLeadStatus(id: number, values: { version: number; status: LeadStatus }, user: SessionUser): Promise<WriteOutcome<LeadRecord>> {
+export async function updateLeadStatus(
+  id: number,
+  values: { version: number; status: LeadStatus },
+  user: SessionUser,
+): Promise<WriteOutcome<LeadRecord>> {
   return runWrite(
     async (t) => {
       const lead = await Lead.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });
@@ -108,10 +150,19 @@ export async function updateLeadStatus(id: number, values: { version: number; st
       const before = { status: lead.status };
       lead.set({ status: values.status });
       await lead.save({ transaction: t });
-      await recordAudit({ user, action: 'lead.status-changed', entityType: 'lead', entityId: id, before, after: { status: values.status } }, t);
+      await recordAudit(
+        {
+          user,
+          action: 'lead.status-changed',
+          entityType: 'lead',
+          entityId: id,
+          before,
+          after: { status: values.status },
+        },
+        t,
+      );
       return { record: toRecord(lead) };
     },
     { reload: () => getLead(id) },
   );
 }
-

@@ -2,7 +2,16 @@ import 'server-only';
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
-import { conflict, countReferences, invalid, likeTerm, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
+import {
+  conflict,
+  countReferences,
+  invalid,
+  likeTerm,
+  notFound,
+  refused,
+  runWrite,
+  type WriteOutcome,
+} from '@/lib/db/write';
 import { PART_FIELDS, type PartListQuery, type PartValues } from '@/lib/schemas/part';
 import { Part, Supplier } from '../models';
 
@@ -62,7 +71,8 @@ const withSupplier = () => [{ model: Supplier, as: 'supplier', attributes: ['id'
 
 export async function listParts(query: PartListQuery): Promise<{ items: PartRecord[]; total: number }> {
   const and: WhereOptions<Part>[] = [];
-  if (query.q) and.push({ [Op.or]: [{ sku: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }] });
+  if (query.q)
+    and.push({ [Op.or]: [{ sku: { [Op.like]: likeTerm(query.q) } }, { name: { [Op.like]: likeTerm(query.q) } }] });
   if (query.category) and.push({ category: query.category });
   if (query.active !== undefined) and.push({ active: query.active });
   if (query.inStock === true) and.push({ stockOnHand: { [Op.gt]: 0 } });
@@ -71,7 +81,10 @@ export async function listParts(query: PartListQuery): Promise<{ items: PartReco
   const { rows, count } = await Part.findAndCountAll({
     where: { [Op.and]: and },
     include: withSupplier(),
-    order: [[query.sort, dir], ['id', 'ASC']],
+    order: [
+      [query.sort, dir],
+      ['id', 'ASC'],
+    ],
     limit: query.pageSize,
     offset: (query.page - 1) * query.pageSize,
     distinct: true,
@@ -81,7 +94,15 @@ export async function listParts(query: PartListQuery): Promise<{ items: PartReco
 
 /** Every part, for pickers (rule items) and the CSV export. */
 export async function allParts(): Promise<PartRecord[]> {
-  return (await Part.findAll({ include: withSupplier(), order: [['category', 'ASC'], ['sku', 'ASC']] })).map(toPartRecord);
+  return (
+    await Part.findAll({
+      include: withSupplier(),
+      order: [
+        ['category', 'ASC'],
+        ['sku', 'ASC'],
+      ],
+    })
+  ).map(toPartRecord);
 }
 
 export async function getPart(id: number, transaction?: Transaction): Promise<PartRecord | null> {
@@ -105,14 +126,22 @@ export async function createPart(values: PartValues, user: SessionUser): Promise
       await checkSupplier(values.supplierId, t);
       const part = await Part.create(partColumns(values), { transaction: t });
       const record = (await getPart(part.id, t))!;
-      await recordAudit({ user, action: 'part.created', entityType: 'part', entityId: String(part.id), before: null, after: record }, t);
+      await recordAudit(
+        { user, action: 'part.created', entityType: 'part', entityId: String(part.id), before: null, after: record },
+        t,
+      );
       return { record };
     },
     { uniqueFields: { sku: 'sku' } },
   );
 }
 
-export async function updatePart(id: number, expectedVersion: number, values: PartValues, user: SessionUser): Promise<WriteOutcome<PartRecord>> {
+export async function updatePart(
+  id: number,
+  expectedVersion: number,
+  values: PartValues,
+  user: SessionUser,
+): Promise<WriteOutcome<PartRecord>> {
   return runWrite(
     async (t) => {
       const part = await Part.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
@@ -137,7 +166,10 @@ export async function updatePart(id: number, expectedVersion: number, values: Pa
  * DELETE: a part a need rule uses is refused (take it out of the rule first, so no rule silently loses
  * an item); a part on any quote line is made inactive (kept for the quote's history); otherwise deleted.
  */
-export async function removePart(id: number, user: SessionUser): Promise<WriteOutcome<{ outcome: 'deactivated' | 'deleted'; part: PartRecord }>> {
+export async function removePart(
+  id: number,
+  user: SessionUser,
+): Promise<WriteOutcome<{ outcome: 'deactivated' | 'deleted'; part: PartRecord }>> {
   return runWrite<{ outcome: 'deactivated' | 'deleted'; part: PartRecord }>(async (t) => {
     const part = await Part.findByPk(id, { include: withSupplier(), transaction: t, lock: t.LOCK.UPDATE });
     if (!part) throw notFound();
@@ -149,11 +181,17 @@ export async function removePart(id: number, user: SessionUser): Promise<WriteOu
       part.set({ active: false });
       await part.save({ transaction: t });
       const after = (await getPart(id, t))!;
-      await recordAudit({ user, action: 'part.deactivated', entityType: 'part', entityId: String(id), before, after }, t);
+      await recordAudit(
+        { user, action: 'part.deactivated', entityType: 'part', entityId: String(id), before, after },
+        t,
+      );
       return { record: { outcome: 'deactivated', part: after } };
     }
     await part.destroy({ transaction: t });
-    await recordAudit({ user, action: 'part.deleted', entityType: 'part', entityId: String(id), before, after: null }, t);
+    await recordAudit(
+      { user, action: 'part.deleted', entityType: 'part', entityId: String(id), before, after: null },
+      t,
+    );
     return { record: { outcome: 'deleted', part: before } };
   });
 }

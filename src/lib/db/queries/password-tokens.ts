@@ -2,7 +2,10 @@ import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { PasswordToken, type TokenPurpose } from '../models';
 
-export async function createPasswordToken(input: { userId: number; tokenHash: string; purpose: TokenPurpose; expiresAt: Date }, transaction?: Transaction): Promise<void> {
+export async function createPasswordToken(
+  input: { userId: number; tokenHash: string; purpose: TokenPurpose; expiresAt: Date },
+  transaction?: Transaction,
+): Promise<void> {
   await PasswordToken.create({ ...input, usedAt: null }, { transaction });
 }
 

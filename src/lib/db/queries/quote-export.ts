@@ -15,8 +15,19 @@ import type { QuoteStatus } from '../models/quote';
 // the earlier tests had written).
 
 export type QuoteExportRow = {
-  number: string; status: QuoteStatus; createdAt: string; sentAt: string | null; customerName: string; vehicleLabel: string | null;
-  camSku: string | null; subtotalCents: number; taxCents: number; totalCents: number; depositCents: number; paidCents: number; refundedCents: number;
+  number: string;
+  status: QuoteStatus;
+  createdAt: string;
+  sentAt: string | null;
+  customerName: string;
+  vehicleLabel: string | null;
+  camSku: string | null;
+  subtotalCents: number;
+  taxCents: number;
+  totalCents: number;
+  depositCents: number;
+  paidCents: number;
+  refundedCents: number;
 };
 
 export const QUOTE_EXPORT_CHUNK = 1_000;
@@ -40,7 +51,16 @@ async function chunkAfter(range: ReportRange, after: { k: string; id: number } |
       WHERE q.created_at >= :start AND q.created_at < :end ${keyset}
       ORDER BY q.created_at ASC, q.id ASC
       LIMIT :size`,
-    { type: QueryTypes.SELECT, replacements: { start: `${range.from} 00:00:00`, end: `${addDays(range.to, 1)} 00:00:00`, k: after?.k ?? null, id: after?.id ?? null, size } },
+    {
+      type: QueryTypes.SELECT,
+      replacements: {
+        start: `${range.from} 00:00:00`,
+        end: `${addDays(range.to, 1)} 00:00:00`,
+        k: after?.k ?? null,
+        id: after?.id ?? null,
+        size,
+      },
+    },
   );
 }
 
@@ -55,17 +75,29 @@ async function paymentsOf(ids: number[]): Promise<Map<number, { paid: number; re
 }
 
 /** The range's quotes, a chunk at a time, until there are none left. */
-export async function* quoteExportChunks(range: ReportRange, size = QUOTE_EXPORT_CHUNK): AsyncGenerator<QuoteExportRow[]> {
+export async function* quoteExportChunks(
+  range: ReportRange,
+  size = QUOTE_EXPORT_CHUNK,
+): AsyncGenerator<QuoteExportRow[]> {
   let after: { k: string; id: number } | null = null;
   for (;;) {
     const rows = await chunkAfter(range, after, size);
     if (!rows.length) return;
     const pay = await paymentsOf(rows.map((r) => n(r.id)));
     yield rows.map((r) => ({
-      number: String(r.number), status: r.status as QuoteStatus, createdAt: isoOf(r.createdAt)!, sentAt: isoOf(r.sentAt),
-      customerName: String(r.customerName ?? ''), vehicleLabel: (r.vehicleLabel as string | null) ?? null, camSku: (r.camSku as string | null) ?? null,
-      subtotalCents: n(r.subtotal), taxCents: n(r.tax), totalCents: n(r.total), depositCents: n(r.deposit),
-      paidCents: pay.get(n(r.id))?.paid ?? 0, refundedCents: pay.get(n(r.id))?.refunded ?? 0,
+      number: String(r.number),
+      status: r.status as QuoteStatus,
+      createdAt: isoOf(r.createdAt)!,
+      sentAt: isoOf(r.sentAt),
+      customerName: String(r.customerName ?? ''),
+      vehicleLabel: (r.vehicleLabel as string | null) ?? null,
+      camSku: (r.camSku as string | null) ?? null,
+      subtotalCents: n(r.subtotal),
+      taxCents: n(r.tax),
+      totalCents: n(r.total),
+      depositCents: n(r.deposit),
+      paidCents: pay.get(n(r.id))?.paid ?? 0,
+      refundedCents: pay.get(n(r.id))?.refunded ?? 0,
     }));
     if (rows.length < size) return;
     const last = rows[rows.length - 1];

@@ -10,6 +10,11 @@ export async function quoteIdByLinkHash(tokenHash: string): Promise<number | nul
   return link?.quoteId ?? null;
 }
 
-export async function addQuoteLink(quoteId: number, tokenHash: string, purpose: QuoteLink['purpose'], t: Transaction): Promise<void> {
+export async function addQuoteLink(
+  quoteId: number,
+  tokenHash: string,
+  purpose: QuoteLink['purpose'],
+  t: Transaction,
+): Promise<void> {
   await QuoteLink.create({ quoteId, tokenHash, purpose }, { transaction: t });
 }

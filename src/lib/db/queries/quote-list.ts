@@ -45,10 +45,14 @@ function matchingIdsSql(q: string): string {
   const search = textSearch(q);
   const parts = [`SELECT id FROM quotes WHERE number LIKE ${e(numberPrefix(q))}`];
   if (search.kind !== 'nothing') {
-    parts.push(`SELECT qc.id FROM customers c JOIN quotes qc ON qc.customer_id = c.id WHERE ${customerMatchSql(search, 'c')}`);
+    parts.push(
+      `SELECT qc.id FROM customers c JOIN quotes qc ON qc.customer_id = c.id WHERE ${customerMatchSql(search, 'c')}`,
+    );
   }
   if (search.kind === 'fulltext') {
-    parts.push(`SELECT qb.id FROM builds b JOIN quotes qb ON qb.build_id = b.id WHERE MATCH(b.vehicle_label) AGAINST (${e(search.against)} IN BOOLEAN MODE)`);
+    parts.push(
+      `SELECT qb.id FROM builds b JOIN quotes qb ON qb.build_id = b.id WHERE MATCH(b.vehicle_label) AGAINST (${e(search.against)} IN BOOLEAN MODE)`,
+    );
   }
   return parts.join(' UNION ');
 }
@@ -69,8 +73,13 @@ async function pageIds(query: QuoteListQuery): Promise<{ ids: number[]; total: n
   const where = query.status ? `WHERE q.status = ${sequelize.escape(query.status)}` : '';
   const offset = (query.page - 1) * query.pageSize;
   const [rows, counted] = await Promise.all([
-    sequelize.query<{ id: number }>(`SELECT q.id FROM ${from} ${where} ORDER BY q.updated_at DESC, q.id DESC LIMIT ${query.pageSize} OFFSET ${offset}`, { type: QueryTypes.SELECT }),
-    sequelize.query<{ total: unknown }>(totalSql(from, where, query.status, Boolean(query.q)), { type: QueryTypes.SELECT }),
+    sequelize.query<{ id: number }>(
+      `SELECT q.id FROM ${from} ${where} ORDER BY q.updated_at DESC, q.id DESC LIMIT ${query.pageSize} OFFSET ${offset}`,
+      { type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ total: unknown }>(totalSql(from, where, query.status, Boolean(query.q)), {
+      type: QueryTypes.SELECT,
+    }),
   ]);
   return { ids: rows.map((r) => Number(r.id)), total: Number(counted[0]?.total ?? 0) };
 }
@@ -91,11 +100,21 @@ export async function listQuotes(query: QuoteListQuery): Promise<{ items: QuoteS
     const q = byId.get(id);
     if (!q) return []; // deleted between the two reads
     const last = [...(q.payments ?? [])].sort((a, b) => b.id - a.id)[0];
-    return [{
-      id: q.id, number: q.number, status: q.status, totalCents: q.totalCents, depositCents: q.depositCents, version: q.version,
-      updatedAt: iso(q.updatedAt)!, sentAt: iso(q.sentAt), customerName: q.customer?.name ?? 'Unknown customer',
-      vehicleLabel: q.build?.vehicleLabel ?? null, paymentStatus: last?.status ?? null,
-    }];
+    return [
+      {
+        id: q.id,
+        number: q.number,
+        status: q.status,
+        totalCents: q.totalCents,
+        depositCents: q.depositCents,
+        version: q.version,
+        updatedAt: iso(q.updatedAt)!,
+        sentAt: iso(q.sentAt),
+        customerName: q.customer?.name ?? 'Unknown customer',
+        vehicleLabel: q.build?.vehicleLabel ?? null,
+        paymentStatus: last?.status ?? null,
+      },
+    ];
   });
   return { items, total };
 }

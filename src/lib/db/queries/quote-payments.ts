@@ -57,10 +57,19 @@ export function lockRefundableDeposit(quoteId: number, t: Transaction): Promise<
 }
 
 /** A checkout session just opened with the provider, waiting for its money. */
-export async function insertPendingCheckout(row: { quoteId: number; sessionId: string; amountCents: number; currency: string; purpose: PaymentPurpose }, t: Transaction): Promise<void> {
+export async function insertPendingCheckout(
+  row: { quoteId: number; sessionId: string; amountCents: number; currency: string; purpose: PaymentPurpose },
+  t: Transaction,
+): Promise<void> {
   await Payment.create(
     {
-      quoteId: row.quoteId, providerSessionId: row.sessionId, providerPaymentId: null, amountCents: row.amountCents, currency: row.currency, status: 'pending', paidAt: null,
+      quoteId: row.quoteId,
+      providerSessionId: row.sessionId,
+      providerPaymentId: null,
+      amountCents: row.amountCents,
+      currency: row.currency,
+      status: 'pending',
+      paidAt: null,
       ...(row.purpose === 'balance' ? { purpose: 'balance' as const, method: 'online' as const } : {}),
     },
     { transaction: t },
@@ -68,11 +77,29 @@ export async function insertPendingCheckout(row: { quoteId: number; sessionId: s
 }
 
 /** Money taken at the counter, paid at once, with who took it. */
-export function insertCounterPayment(row: { quoteId: number; amountCents: number; currency: string; method: Exclude<PaymentMethod, 'online'>; userId: number }, t: Transaction): Promise<Payment> {
+export function insertCounterPayment(
+  row: {
+    quoteId: number;
+    amountCents: number;
+    currency: string;
+    method: Exclude<PaymentMethod, 'online'>;
+    userId: number;
+  },
+  t: Transaction,
+): Promise<Payment> {
   return Payment.create(
     {
-      quoteId: row.quoteId, provider: 'counter', providerSessionId: null, providerPaymentId: null, amountCents: row.amountCents, currency: row.currency,
-      status: 'paid', paidAt: new Date(), purpose: 'balance', method: row.method, recordedByUserId: row.userId,
+      quoteId: row.quoteId,
+      provider: 'counter',
+      providerSessionId: null,
+      providerPaymentId: null,
+      amountCents: row.amountCents,
+      currency: row.currency,
+      status: 'paid',
+      paidAt: new Date(),
+      purpose: 'balance',
+      method: row.method,
+      recordedByUserId: row.userId,
     },
     { transaction: t },
   );
@@ -89,8 +116,19 @@ export async function markPaid(payment: Payment, intent: string, t: Transaction)
 }
 
 /** Money that arrived and went straight back (a duplicate, or for a quote that could not take it): kept, never counted. */
-export async function markGivenBack(payment: Payment, intent: string, duplicateOfPaymentId: number | null, t: Transaction): Promise<void> {
-  payment.set({ status: 'refunded', refundedCents: payment.amountCents, paidAt: new Date(), providerPaymentId: intent, duplicateOfPaymentId });
+export async function markGivenBack(
+  payment: Payment,
+  intent: string,
+  duplicateOfPaymentId: number | null,
+  t: Transaction,
+): Promise<void> {
+  payment.set({
+    status: 'refunded',
+    refundedCents: payment.amountCents,
+    paidAt: new Date(),
+    providerPaymentId: intent,
+    duplicateOfPaymentId,
+  });
   await payment.save({ transaction: t });
 }
 

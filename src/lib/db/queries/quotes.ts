@@ -6,7 +6,14 @@ import { hashToken } from '@/lib/auth/tokens';
 import { balanceDueCents, counts, moneyIn } from '@/lib/quotes/balance';
 import { stateWord } from '@/lib/quotes/lifecycle';
 import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence } from '@/lib/quotes/pricing';
-import type { DocumentShop, PaymentRecord, PublicQuote, QuoteLineRecord, QuoteRecord, QuoteSnapshot } from '@/lib/quotes/types';
+import type {
+  DocumentShop,
+  PaymentRecord,
+  PublicQuote,
+  QuoteLineRecord,
+  QuoteRecord,
+  QuoteSnapshot,
+} from '@/lib/quotes/types';
 import { Build, Cam, Customer, Part, Payment, Quote, QuoteLine, ShopSettings, User } from '../models';
 import type { LineDraft } from './quote-lines';
 import { quoteIdByLinkHash } from './quote-links';
@@ -17,7 +24,12 @@ import { readJson } from './quote-snapshot';
 // drafting, sending, checkout, payment events and refunds live in src/lib/quotes/.
 
 type PaymentRow = Payment & { recordedBy?: User | null };
-export type QuoteRow = Quote & { customer?: Customer; build?: Build | null; lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[]; payments?: PaymentRow[] };
+export type QuoteRow = Quote & {
+  customer?: Customer;
+  build?: Build | null;
+  lines?: (QuoteLine & { cam?: Cam | null; part?: Part | null })[];
+  payments?: PaymentRow[];
+};
 
 const iso = (d: Date | string | null | undefined) => (d ? new Date(d).toISOString() : null);
 
@@ -63,15 +75,26 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
   let costCents = 0;
   let goodsCents = 0;
   const lineRecords = lines.map((l): QuoteLineRecord => {
-    const unitCostCents = l.camId !== null ? (camCost.get(l.camId) ?? null) : l.partId !== null ? (partCost.get(l.partId) ?? null) : null;
+    const unitCostCents =
+      l.camId !== null ? (camCost.get(l.camId) ?? null) : l.partId !== null ? (partCost.get(l.partId) ?? null) : null;
     const quantity = Number(l.quantity);
     if (unitCostCents !== null) {
       costCents += lineTotalCents(quantity, unitCostCents);
       goodsCents += l.totalCents;
     }
     return {
-      id: l.id, kind: l.kind, camId: l.camId ?? null, partId: l.partId ?? null, laborOperationId: l.laborOperationId ?? null,
-      description: l.description, quantity, unitPriceCents: l.unitPriceCents, discountCents: l.discountCents ?? 0, totalCents: l.totalCents, sortOrder: l.sortOrder, unitCostCents,
+      id: l.id,
+      kind: l.kind,
+      camId: l.camId ?? null,
+      partId: l.partId ?? null,
+      laborOperationId: l.laborOperationId ?? null,
+      description: l.description,
+      quantity,
+      unitPriceCents: l.unitPriceCents,
+      discountCents: l.discountCents ?? 0,
+      totalCents: l.totalCents,
+      sortOrder: l.sortOrder,
+      unitCostCents,
     };
   });
   const pays = [...(row.payments ?? [])].sort((a, b) => a.id - b.id);
@@ -80,7 +103,9 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
   const records = pays.map(paymentRecord);
   const money = moneyIn(records);
   const relatedIds = [row.revisionOfQuoteId, row.replacedByQuoteId].filter((v): v is number => typeof v === 'number');
-  const related = relatedIds.length ? await Quote.findAll({ where: { id: relatedIds }, attributes: ['id', 'number', 'status', 'sentAt'], transaction }) : [];
+  const related = relatedIds.length
+    ? await Quote.findAll({ where: { id: relatedIds }, attributes: ['id', 'number', 'status', 'sentAt'], transaction })
+    : [];
   const older = related.find((q) => q.id === row.revisionOfQuoteId);
   const newer = related.find((q) => q.id === row.replacedByQuoteId);
   const profile = readJson(row.snapshotProfile);
@@ -92,9 +117,16 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
     revision: row.revision ?? 1,
     revisionOf: older ? { id: older.id, number: older.number } : null,
     replacedBy: newer ? { id: newer.id, number: newer.number, status: newer.status, sentAt: iso(newer.sentAt) } : null,
-    snapshot: profile === null ? null : { profile, advice: (readJson(row.snapshotAdvice) as Record<string, unknown> | null) ?? null },
+    snapshot:
+      profile === null
+        ? null
+        : { profile, advice: (readJson(row.snapshotAdvice) as Record<string, unknown> | null) ?? null },
     closedAt: iso(row.closedAt),
-    customer: { id: row.customer?.id ?? row.customerId, name: row.customer?.name ?? 'Unknown customer', email: row.customer?.email ?? null },
+    customer: {
+      id: row.customer?.id ?? row.customerId,
+      name: row.customer?.name ?? 'Unknown customer',
+      email: row.customer?.email ?? null,
+    },
     build: row.build ? { id: row.build.id, vehicleLabel: row.build.vehicleLabel } : null,
     camId: row.camId ?? null,
     lines: lineRecords,
@@ -135,7 +167,6 @@ export async function getQuote(id: number, transaction?: Transaction): Promise<Q
   return row ? toQuoteRecord(row, transaction) : null;
 }
 
-
 // ---- Rows the quote services lock and write (always inside their transaction) ----
 
 /** The quote row, locked for the rest of the transaction: every money path locks it before its payments. */
@@ -166,9 +197,13 @@ export async function draftSources(buildId: number, camId: number): Promise<{ bu
 }
 
 /** What sending needs to know before its transaction: the build and cam to freeze, and whether they already are. */
-export async function snapshotSource(id: number): Promise<{ buildId: number | null; camId: number | null; frozen: boolean } | null> {
+export async function snapshotSource(
+  id: number,
+): Promise<{ buildId: number | null; camId: number | null; frozen: boolean } | null> {
   const row = await Quote.findByPk(id, { attributes: ['id', 'buildId', 'camId', 'snapshotProfile'] });
-  return row ? { buildId: row.buildId ?? null, camId: row.camId ?? null, frozen: readJson(row.snapshotProfile) !== null } : null;
+  return row
+    ? { buildId: row.buildId ?? null, camId: row.camId ?? null, frozen: readJson(row.snapshotProfile) !== null }
+    : null;
 }
 
 /** True once a quote's build profile and advice are frozen (its first send). */
@@ -183,7 +218,13 @@ export function freezeSnapshot(quote: Quote, snapshot: QuoteSnapshot): void {
 export async function writeLines(quoteId: number, lines: LineDraft[], t: Transaction): Promise<void> {
   await QuoteLine.destroy({ where: { quoteId }, transaction: t });
   await QuoteLine.bulkCreate(
-    lines.map((l, i) => ({ ...l, quoteId, quantity: l.quantity.toFixed(2), totalCents: lineNetCents(l), sortOrder: i })),
+    lines.map((l, i) => ({
+      ...l,
+      quoteId,
+      quantity: l.quantity.toFixed(2),
+      totalCents: lineNetCents(l),
+      sortOrder: i,
+    })),
     { transaction: t },
   );
 }
@@ -194,7 +235,10 @@ async function nextNumber(t: Transaction): Promise<string> {
   const last = await Quote.findOne({
     // Revisions (-R2, -R3) share their first quote's number and never advance the count.
     where: { number: { [Op.like]: `Q-${year}-%`, [Op.notLike]: '%-R%' } },
-    order: [[fn('LENGTH', col('number')), 'DESC'], ['number', 'DESC']],
+    order: [
+      [fn('LENGTH', col('number')), 'DESC'],
+      ['number', 'DESC'],
+    ],
     attributes: ['id', 'number'],
     lock: t.LOCK.UPDATE,
     transaction: t,
@@ -215,9 +259,21 @@ export async function insertDraft(draft: DraftRow, lines: LineDraft[], t: Transa
   const { totals } = draft;
   const quote = await Quote.create(
     {
-      number: await nextNumber(t), customerId: draft.customerId, buildId: draft.buildId, camId: draft.camId, createdByUserId: draft.createdByUserId, status: 'draft',
-      publicTokenHash: null, subtotalCents: totals.subtotalCents, taxRateBp: totals.taxRateBp, taxCents: totals.taxCents, totalCents: totals.totalCents,
-      depositCents: totals.depositCents, validUntil: null, sentAt: null, acceptedAt: null,
+      number: await nextNumber(t),
+      customerId: draft.customerId,
+      buildId: draft.buildId,
+      camId: draft.camId,
+      createdByUserId: draft.createdByUserId,
+      status: 'draft',
+      publicTokenHash: null,
+      subtotalCents: totals.subtotalCents,
+      taxRateBp: totals.taxRateBp,
+      taxCents: totals.taxCents,
+      totalCents: totals.totalCents,
+      depositCents: totals.depositCents,
+      validUntil: null,
+      sentAt: null,
+      acceptedAt: null,
     },
     { transaction: t },
   );
@@ -226,10 +282,15 @@ export async function insertDraft(draft: DraftRow, lines: LineDraft[], t: Transa
 }
 
 /** The quote and customer a notice after the commit is about, with the payments that were not duplicates. */
-export async function quoteForNotice(quoteId: number): Promise<{ quote: Quote | null; customer: Customer | undefined; payments: Payment[] }> {
-  const quote = (await Quote.findByPk(quoteId, { include: [{ model: Customer, as: 'customer', attributes: ['name', 'email'] }, { model: Payment, as: 'payments' }] })) as
-    | (Quote & { customer?: Customer; payments?: Payment[] })
-    | null;
+export async function quoteForNotice(
+  quoteId: number,
+): Promise<{ quote: Quote | null; customer: Customer | undefined; payments: Payment[] }> {
+  const quote = (await Quote.findByPk(quoteId, {
+    include: [
+      { model: Customer, as: 'customer', attributes: ['name', 'email'] },
+      { model: Payment, as: 'payments' },
+    ],
+  })) as (Quote & { customer?: Customer; payments?: Payment[] }) | null;
   return { quote, customer: quote?.customer, payments: (quote?.payments ?? []).filter((p) => !p.duplicateOfPaymentId) };
 }
 
@@ -238,7 +299,16 @@ export async function quoteForNotice(quoteId: number): Promise<{ quote: Quote | 
 /** The shop's details printed on documents; null until a manager has saved the settings. */
 export async function shopForDocuments(): Promise<DocumentShop | null> {
   const s = await ShopSettings.findOne({ order: [['id', 'ASC']] });
-  return s ? { name: s.name, phone: s.phone, email: s.email, address: s.address, depositPolicyText: s.depositPolicyText, currency: s.currency } : null;
+  return s
+    ? {
+        name: s.name,
+        phone: s.phone,
+        email: s.email,
+        address: s.address,
+        depositPolicyText: s.depositPolicyText,
+        currency: s.currency,
+      }
+    : null;
 }
 
 /** The quote a private link opens, or null for any token that is not a live link (never a hint why). */
@@ -256,8 +326,19 @@ export async function getQuoteByToken(token: string): Promise<PublicQuote | null
   void _m;
   return {
     // The customer sees the money that was taken (for their receipts), never provider ids or who took it.
-    quote: { ...rest, lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)), payments: rest.payments.filter(counts).map(customerPayment) },
-    shop: { name: settings.name, phone: settings.phone, email: settings.email, address: settings.address, depositPolicyText: settings.depositPolicyText, currency: settings.currency },
+    quote: {
+      ...rest,
+      lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)),
+      payments: rest.payments.filter(counts).map(customerPayment),
+    },
+    shop: {
+      name: settings.name,
+      phone: settings.phone,
+      email: settings.email,
+      address: settings.address,
+      depositPolicyText: settings.depositPolicyText,
+      currency: settings.currency,
+    },
   };
 }
 

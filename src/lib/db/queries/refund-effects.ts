@@ -15,13 +15,31 @@ export type { AfterFullRefund };
  * Called with the quote row locked, after a payment's refunded amount changed. When no deposit is held
  * any more, a paid quote becomes cancelled or sent again. Returns true when it changed the quote.
  */
-export async function settleFullRefund(quote: Quote, after: AfterFullRefund, actor: AuditActor, t: Transaction): Promise<boolean> {
+export async function settleFullRefund(
+  quote: Quote,
+  after: AfterFullRefund,
+  actor: AuditActor,
+  t: Transaction,
+): Promise<boolean> {
   if (quote.status !== 'deposit-paid' && quote.status !== 'accepted') return false;
-  const held = await Payment.count({ where: { quoteId: quote.id, status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null }, transaction: t });
+  const held = await Payment.count({
+    where: { quoteId: quote.id, status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null },
+    transaction: t,
+  });
   if (held > 0) return false;
   const to = after === 'reopen' ? 'sent' : 'cancelled';
   const from = quote.status;
   await moveQuote(quote, to, 'refund', actor, t);
-  await recordAudit({ ...actor, action: 'quote.deposit-refunded', entityType: 'quote', entityId: quote.id, before: { status: from }, after: { status: to } }, t);
+  await recordAudit(
+    {
+      ...actor,
+      action: 'quote.deposit-refunded',
+      entityType: 'quote',
+      entityId: quote.id,
+      before: { status: from },
+      after: { status: to },
+    },
+    t,
+  );
   return true;
 }

@@ -37,22 +37,33 @@ async function select<T extends object>(sql: string, replacements: Record<string
  * Counts and values by state and the sent conversion in one pass over the covering index, as sums of
  * conditions rather than GROUP BY status: no temporary table, one range read instead of two.
  */
-export async function quoteFigures(range: ReportRange): Promise<{ byStatus: StatusFigure[]; conversion: ReportSummary['conversion'] }> {
+export async function quoteFigures(
+  range: ReportRange,
+): Promise<{ byStatus: StatusFigure[]; conversion: ReportSummary['conversion'] }> {
   const e = (v: string) => db().escape(v);
-  const perStatus = QUOTE_STATUSES.map((status, i) =>
-    `COALESCE(SUM(status = ${e(status)}), 0) AS c${i}, COALESCE(SUM(IF(status = ${e(status)}, total_cents, 0)), 0) AS v${i}`).join(', ');
+  const perStatus = QUOTE_STATUSES.map(
+    (status, i) =>
+      `COALESCE(SUM(status = ${e(status)}), 0) AS c${i}, COALESCE(SUM(IF(status = ${e(status)}, total_cents, 0)), 0) AS v${i}`,
+  ).join(', ');
   const [row] = await select<Record<string, unknown>>(
     `SELECT ${perStatus}, COALESCE(SUM(sent_at IS NOT NULL), 0) AS sent, COALESCE(SUM(sent_at IS NOT NULL AND ${converted('status')}), 0) AS paid
        FROM quotes WHERE created_at >= :start AND created_at < :end`,
     bounds(range),
   );
-  const byStatus = QUOTE_STATUSES.map((status, i) => ({ status, count: n(row?.[`c${i}`]), valueCents: n(row?.[`v${i}`]) }));
+  const byStatus = QUOTE_STATUSES.map((status, i) => ({
+    status,
+    count: n(row?.[`c${i}`]),
+    valueCents: n(row?.[`v${i}`]),
+  }));
   const sentCount = n(row?.sent);
   const depositPaidCount = n(row?.paid);
   return { byStatus, conversion: { sentCount, depositPaidCount, rateBp: rateBp(depositPaidCount, sentCount) } };
 }
 
-export async function depositsTaken(range: ReportRange, purpose: 'deposit' | 'balance' = 'deposit'): Promise<ReportSummary['deposits']> {
+export async function depositsTaken(
+  range: ReportRange,
+  purpose: 'deposit' | 'balance' = 'deposit',
+): Promise<ReportSummary['deposits']> {
   const [row] = await select<{ count: unknown; taken: unknown; refunded: unknown }>(
     `SELECT COUNT(*) AS count, COALESCE(SUM(amount_cents), 0) AS taken, COALESCE(SUM(refunded_cents), 0) AS refunded
        FROM payments WHERE status IN (:states) AND purpose = :purpose AND paid_at >= :start AND paid_at < :end`,
@@ -104,14 +115,34 @@ export async function mostQuotedCams(range: ReportRange, limit = 5): Promise<Top
       LIMIT :limit`,
     { ...bounds(range), limit },
   );
-  return rows.map((r) => ({ camId: n(r.camId), sku: r.sku, name: r.name, quotes: n(r.quotes), deposits: n(r.deposits) }));
+  return rows.map((r) => ({
+    camId: n(r.camId),
+    sku: r.sku,
+    name: r.name,
+    quotes: n(r.quotes),
+    deposits: n(r.deposits),
+  }));
 }
 
 export async function reportSummary(range: ReportRange): Promise<ReportSummary> {
   const [{ byStatus, conversion }, deposits, balances, margin, topCams] = await Promise.all([
-    quoteFigures(range), depositsTaken(range, 'deposit'), depositsTaken(range, 'balance'), goodsMarginOfPaidQuotes(range), mostQuotedCams(range),
+    quoteFigures(range),
+    depositsTaken(range, 'deposit'),
+    depositsTaken(range, 'balance'),
+    goodsMarginOfPaidQuotes(range),
+    mostQuotedCams(range),
   ]);
   const count = byStatus.reduce((s, f) => s + f.count, 0);
   const valueCents = byStatus.reduce((s, f) => s + f.valueCents, 0);
-  return { range, created: { count, valueCents }, byStatus, conversion, averageQuoteCents: averageCents(valueCents, count), deposits, balances, margin, topCams };
+  return {
+    range,
+    created: { count, valueCents },
+    byStatus,
+    conversion,
+    averageQuoteCents: averageCents(valueCents, count),
+    deposits,
+    balances,
+    margin,
+    topCams,
+  };
 }

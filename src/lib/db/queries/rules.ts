@@ -41,9 +41,22 @@ export function toRuleRecord(rule: RuleRow): NeedRuleRecord {
         partId: item.partId ?? null,
         laborOperationId: item.laborOperationId ?? null,
         quantity: Number(item.quantity),
-        part: item.part ? { id: item.part.id, sku: item.part.sku, name: item.part.name, priceCents: item.part.priceCents, category: item.part.category } : null,
+        part: item.part
+          ? {
+              id: item.part.id,
+              sku: item.part.sku,
+              name: item.part.name,
+              priceCents: item.part.priceCents,
+              category: item.part.category,
+            }
+          : null,
         laborOperation: item.laborOperation
-          ? { id: item.laborOperation.id, code: item.laborOperation.code, name: item.laborOperation.name, hours: Number(item.laborOperation.hours) }
+          ? {
+              id: item.laborOperation.id,
+              code: item.laborOperation.code,
+              name: item.laborOperation.name,
+              hours: Number(item.laborOperation.hours),
+            }
           : null,
       })),
   };
@@ -78,9 +91,13 @@ export async function getRule(id: number, transaction?: Transaction): Promise<Ne
 async function checkItems(values: NeedRuleValues, t: Transaction) {
   const errors: FieldError[] = [];
   for (const [index, item] of values.items.entries()) {
-    if (item.partId !== null && !(await Part.findByPk(item.partId, { transaction: t }))) errors.push({ field: `items.${index}.partId`, message: `there is no part with id ${item.partId}` });
+    if (item.partId !== null && !(await Part.findByPk(item.partId, { transaction: t })))
+      errors.push({ field: `items.${index}.partId`, message: `there is no part with id ${item.partId}` });
     if (item.laborOperationId !== null && !(await LaborOperation.findByPk(item.laborOperationId, { transaction: t }))) {
-      errors.push({ field: `items.${index}.laborOperationId`, message: `there is no labour operation with id ${item.laborOperationId}` });
+      errors.push({
+        field: `items.${index}.laborOperationId`,
+        message: `there is no labour operation with id ${item.laborOperationId}`,
+      });
     }
   }
   if (errors.length) throw invalid(errors);
@@ -89,7 +106,12 @@ async function checkItems(values: NeedRuleValues, t: Transaction) {
 async function writeItems(ruleId: number, values: NeedRuleValues, t: Transaction) {
   await NeedRuleItem.destroy({ where: { ruleId }, transaction: t });
   await NeedRuleItem.bulkCreate(
-    values.items.map((item) => ({ ruleId, partId: item.partId, laborOperationId: item.laborOperationId, quantity: item.quantity.toFixed(2) })),
+    values.items.map((item) => ({
+      ruleId,
+      partId: item.partId,
+      laborOperationId: item.laborOperationId,
+      quantity: item.quantity.toFixed(2),
+    })),
     { transaction: t },
   );
 }
@@ -97,17 +119,29 @@ async function writeItems(ruleId: number, values: NeedRuleValues, t: Transaction
 export async function createRule(values: NeedRuleValues, user: SessionUser): Promise<WriteOutcome<NeedRuleRecord>> {
   return runWrite(async (t) => {
     await checkItems(values, t);
-    const rule = await NeedRule.create({ kind: values.kind, vehicleClass: values.vehicleClass, label: values.label, active: values.active }, { transaction: t });
+    const rule = await NeedRule.create(
+      { kind: values.kind, vehicleClass: values.vehicleClass, label: values.label, active: values.active },
+      { transaction: t },
+    );
     await writeItems(rule.id, values, t);
     const record = (await getRule(rule.id, t))!;
-    await recordAudit({ user, action: 'rule.created', entityType: 'need_rule', entityId: String(rule.id), before: null, after: record }, t);
+    await recordAudit(
+      { user, action: 'rule.created', entityType: 'need_rule', entityId: String(rule.id), before: null, after: record },
+      t,
+    );
     return { record };
   });
 }
 
-const itemsKey = (r: Pick<NeedRuleRecord, 'items'>) => JSON.stringify(r.items.map((i) => [i.partId, i.laborOperationId, i.quantity]));
+const itemsKey = (r: Pick<NeedRuleRecord, 'items'>) =>
+  JSON.stringify(r.items.map((i) => [i.partId, i.laborOperationId, i.quantity]));
 
-export async function updateRule(id: number, expectedVersion: number, values: NeedRuleValues, user: SessionUser): Promise<WriteOutcome<NeedRuleRecord>> {
+export async function updateRule(
+  id: number,
+  expectedVersion: number,
+  values: NeedRuleValues,
+  user: SessionUser,
+): Promise<WriteOutcome<NeedRuleRecord>> {
   return runWrite(
     async (t) => {
       const rule = await NeedRule.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE });
@@ -115,7 +149,9 @@ export async function updateRule(id: number, expectedVersion: number, values: Ne
       const before = toRuleRecord(rule);
       if (rule.version !== expectedVersion) throw conflict(before);
       await checkItems(values, t);
-      const itemsChanged = itemsKey(before) !== itemsKey({ items: values.items.map((i) => ({ ...i, quantity: Number(i.quantity.toFixed(2)) })) });
+      const itemsChanged =
+        itemsKey(before) !==
+        itemsKey({ items: values.items.map((i) => ({ ...i, quantity: Number(i.quantity.toFixed(2)) })) });
       rule.set({ kind: values.kind, vehicleClass: values.vehicleClass, label: values.label, active: values.active });
       if (!rule.changed() && !itemsChanged) return { record: before, changed: false };
       if (itemsChanged) {
@@ -125,7 +161,10 @@ export async function updateRule(id: number, expectedVersion: number, values: Ne
       }
       await rule.save({ transaction: t });
       const after = (await getRule(id, t))!;
-      await recordAudit({ user, action: 'rule.updated', entityType: 'need_rule', entityId: String(id), before, after }, t);
+      await recordAudit(
+        { user, action: 'rule.updated', entityType: 'need_rule', entityId: String(id), before, after },
+        t,
+      );
       return { record: after };
     },
     { reload: () => getRule(id) },
@@ -139,7 +178,10 @@ export async function removeRule(id: number, user: SessionUser): Promise<WriteOu
     const before = toRuleRecord(rule);
     await NeedRuleItem.destroy({ where: { ruleId: id }, transaction: t });
     await rule.destroy({ transaction: t });
-    await recordAudit({ user, action: 'rule.deleted', entityType: 'need_rule', entityId: String(id), before, after: null }, t);
+    await recordAudit(
+      { user, action: 'rule.deleted', entityType: 'need_rule', entityId: String(id), before, after: null },
+      t,
+    );
     return { record: before };
   });
 }

@@ -88,7 +88,10 @@ export async function updateShopSettings(
       if (!settings.changed()) return { record: before, changed: false };
       await settings.save({ transaction: t });
       const after = toShopSettingsRecord(settings);
-      await recordAudit({ user, action: 'settings.updated', entityType: 'shop_settings', entityId: String(settings.id), before, after }, t);
+      await recordAudit(
+        { user, action: 'settings.updated', entityType: 'shop_settings', entityId: String(settings.id), before, after },
+        t,
+      );
       return { record: after };
     },
     { reload: getShopSettingsRecord },

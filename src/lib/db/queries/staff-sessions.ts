@@ -8,7 +8,10 @@ export type ActiveSession = { sessionId: number; user: { id: number; email: stri
 
 const TOUCH_EVERY_MS = 5 * 60 * 1000;
 
-export async function createStaffSession(input: { tokenHash: string; userId: number; ip: string | null; userAgent: string | null; expiresAt: Date }, transaction?: Transaction): Promise<number> {
+export async function createStaffSession(
+  input: { tokenHash: string; userId: number; ip: string | null; userAgent: string | null; expiresAt: Date },
+  transaction?: Transaction,
+): Promise<number> {
   const row = await StaffSession.create({ ...input, revokedAt: null }, { transaction });
   return row.id;
 }
@@ -18,7 +21,9 @@ export async function createStaffSession(input: { tokenHash: string; userId: num
  * The user row is read fresh every time, so a role change or a deactivation counts at once.
  */
 export async function findActiveSession(tokenHash: string): Promise<ActiveSession | null> {
-  const session = await StaffSession.findOne({ where: { tokenHash, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } });
+  const session = await StaffSession.findOne({
+    where: { tokenHash, revokedAt: null, expiresAt: { [Op.gt]: new Date() } },
+  });
   if (!session) return null;
   const user = await User.findByPk(session.userId, { attributes: ['id', 'email', 'name', 'role', 'active'] });
   if (!user || !user.active) return null;
@@ -34,7 +39,10 @@ export async function revokeSession(tokenHash: string): Promise<number> {
 }
 
 /** Ends every session of a user, optionally keeping one (the one changing its own password). */
-export async function revokeUserSessions(userId: number, options: { exceptSessionId?: number; transaction?: Transaction } = {}): Promise<number> {
+export async function revokeUserSessions(
+  userId: number,
+  options: { exceptSessionId?: number; transaction?: Transaction } = {},
+): Promise<number> {
   const where: Record<string | symbol, unknown> = { userId, revokedAt: null };
   if (options.exceptSessionId) where.id = { [Op.ne]: options.exceptSessionId };
   const [count] = await StaffSession.update({ revokedAt: new Date() }, { where, transaction: options.transaction });

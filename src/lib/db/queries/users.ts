@@ -27,7 +27,15 @@ export async function findUserById(id: number, transaction?: Transaction, lock =
 export async function listStaff(): Promise<StaffListRow[]> {
   const sequelize = db();
   const rows = await sequelize.query<{
-    id: number; email: string; name: string; role: StaffRole; active: number; version: number; has_password: number; last_sign_in_at: Date | null; created_at: Date;
+    id: number;
+    email: string;
+    name: string;
+    role: StaffRole;
+    active: number;
+    version: number;
+    has_password: number;
+    last_sign_in_at: Date | null;
+    created_at: Date;
   }>(
     `SELECT u.id, u.email, u.name, u.role, u.active, u.version, u.password_hash IS NOT NULL AS has_password,
             (SELECT MAX(s.created_at) FROM staff_sessions s WHERE s.user_id = u.id) AS last_sign_in_at, u.created_at
@@ -82,6 +90,9 @@ export async function setPasswordHash(userId: number, passwordHash: string, tran
   await User.update({ passwordHash }, { where: { id: userId }, transaction });
 }
 
-export async function createStaffUser(input: { email: string; name: string; role: StaffRole }, transaction?: Transaction): Promise<User> {
+export async function createStaffUser(
+  input: { email: string; name: string; role: StaffRole },
+  transaction?: Transaction,
+): Promise<User> {
   return User.create({ ...input, passwordHash: null, active: true }, { transaction });
 }

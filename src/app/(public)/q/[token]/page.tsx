@@ -31,8 +31,14 @@ const STATUS_WORDS: Record<string, { title: string; text: string }> = {
   declined: { title: 'Declined', text: 'This quote was declined. Call the shop if you would like a new one.' },
   expired: { title: 'Expired', text: 'This quote has run out. Call the shop for an up-to-date price.' },
   cancelled: { title: 'Cancelled', text: 'This quote was cancelled. Call the shop if that is a surprise.' },
-  closed: { title: 'Paid in full — thank you', text: 'The job is done and the balance is paid. Keep this page or its PDF as your record.' },
-  replaced: { title: 'Replaced by a newer quote', text: 'This quote was revised; the newer one is the one that counts.' },
+  closed: {
+    title: 'Paid in full — thank you',
+    text: 'The job is done and the balance is paid. Keep this page or its PDF as your record.',
+  },
+  replaced: {
+    title: 'Replaced by a newer quote',
+    text: 'This quote was revised; the newer one is the one that counts.',
+  },
 };
 
 export default async function CustomerQuotePage({
@@ -76,12 +82,12 @@ export default async function CustomerQuotePage({
                 title: 'Job done — balance to pay',
                 text: `The work is done. ${money(quote.balanceDueCents)} is left to pay: below, or when you collect the car.`,
               }
-          : lapsed
-            ? {
-                title: 'No longer valid',
-                text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.`,
-              }
-            : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
+            : lapsed
+              ? {
+                  title: 'No longer valid',
+                  text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.`,
+                }
+              : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
   return (
     <div className="customer-quote mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink print:max-w-none print:px-0 print:py-0 print:text-base">
       <p className="text-base text-ink-muted">{shop.name}</p>
@@ -100,12 +106,16 @@ export default async function CustomerQuotePage({
         </a>
         <span className="text-ink-muted">or use your browser’s Print to print this page.</span>
       </p>
-      {quote.status === 'replaced' ? <ReplacedNotice replacedBy={quote.replacedBy} shop={shop} customerEmail={quote.customer.email} /> : null}
+      {quote.status === 'replaced' ? (
+        <ReplacedNotice replacedBy={quote.replacedBy} shop={shop} customerEmail={quote.customer.email} />
+      ) : null}
 
       {query.paid === 'balance' && quote.status !== 'closed' ? (
         <div role="status" className="mt-6 rounded-lg border border-gauge-500/40 bg-gauge-100 p-4">
           <p className="font-semibold">Payment received by the payment service — confirming</p>
-          <p className="text-base">It can take a minute to reach us. Refresh this page shortly; you will not be charged twice.</p>
+          <p className="text-base">
+            It can take a minute to reach us. Refresh this page shortly; you will not be charged twice.
+          </p>
         </div>
       ) : null}
       {query.paid === '1' && quote.status !== 'deposit-paid' && quote.status !== 'closed' ? (
@@ -154,9 +164,7 @@ export default async function CustomerQuotePage({
         <dl className="mt-4 grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 tabular-nums">
           <dt>Before tax</dt>
           <dd className="text-right">{money(quote.subtotalCents)}</dd>
-          <dt>
-            Sales tax ({percentFromBp(quote.taxRateBp)} on parts)
-          </dt>
+          <dt>Sales tax ({percentFromBp(quote.taxRateBp)} on parts)</dt>
           <dd className="text-right">{money(quote.taxCents)}</dd>
           <dt className="text-xl font-bold">Total</dt>
           <dd className="text-right text-xl font-bold">{money(quote.totalCents)}</dd>

@@ -21,11 +21,19 @@ export default async function CamsPage() {
         back={{ href: '/catalogue', label: 'Catalogue' }}
         actions={
           <>
-            <a href="/api/cams/export" download className="rounded bg-paper-raised px-3 py-1.5 text-sm font-semibold text-ink ring-1 ring-steel-300 hover:ring-gauge-500">
+            <a
+              href="/api/cams/export"
+              download
+              className="rounded bg-paper-raised px-3 py-1.5 text-sm font-semibold text-ink ring-1 ring-steel-300 hover:ring-gauge-500"
+            >
               Export CSV
             </a>
             {manager ? <ButtonLink href="/catalogue/cams/import">Import CSV</ButtonLink> : null}
-            {manager ? <ButtonLink href="/catalogue/cams/new" variant="primary">Add a cam</ButtonLink> : null}
+            {manager ? (
+              <ButtonLink href="/catalogue/cams/new" variant="primary">
+                Add a cam
+              </ButtonLink>
+            ) : null}
           </>
         }
       />

@@ -14,10 +14,17 @@ import { LaborListQuerySchema } from '@/lib/schemas/labor';
 
 export const metadata: Metadata = { title: 'Labour' };
 
-export default async function LaborPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function LaborPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const user = await requireAccessForPage('catalogue.read');
   const raw = await searchParams;
-  const [{ items, total }, settings] = await Promise.all([listLabor(LaborListQuerySchema.parse({ pageSize: '200' })), getShopSettingsRecord()]);
+  const [{ items, total }, settings] = await Promise.all([
+    listLabor(LaborListQuerySchema.parse({ pageSize: '200' })),
+    getShopSettingsRecord(),
+  ]);
   const manager = can(user, 'catalogue.write');
   const rate = settings?.laborRateCents ?? 0;
   return (
@@ -26,11 +33,21 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
         title="Labour operations"
         lead={`Priced at the shop's labour rate, ${formatMoney(rate)} per hour.`}
         back={{ href: '/catalogue', label: 'Catalogue' }}
-        actions={manager ? <ButtonLink href="/catalogue/labor/new" variant="primary">Add an operation</ButtonLink> : null}
+        actions={
+          manager ? (
+            <ButtonLink href="/catalogue/labor/new" variant="primary">
+              Add an operation
+            </ButtonLink>
+          ) : null
+        }
       />
       {raw.saved ? <Banner tone="ok" title="Labour operation saved" /> : null}
       {raw.deleted ? <Banner tone="ok" title="Labour operation deleted" /> : null}
-      {raw.deactivated ? <Banner tone="info" title="Labour operation switched off">Quotes refer to it, so it was kept and made inactive.</Banner> : null}
+      {raw.deactivated ? (
+        <Banner tone="info" title="Labour operation switched off">
+          Quotes refer to it, so it was kept and made inactive.
+        </Banner>
+      ) : null}
       <TableScroll label="Labour operations">
         <table className={tableClass}>
           <thead>
@@ -41,7 +58,11 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
               <th className={`${thClass} text-right`}>At the rate</th>
               <th className={thClass}>Engines</th>
               <th className={thClass}>State</th>
-              {manager ? <th className={thClass}><span className="sr-only">Actions</span></th> : null}
+              {manager ? (
+                <th className={thClass}>
+                  <span className="sr-only">Actions</span>
+                </th>
+              ) : null}
             </tr>
           </thead>
           <tbody>
@@ -52,10 +73,14 @@ export default async function LaborPage({ searchParams }: { searchParams: Promis
                 <td className={`${tdClass} spec text-right`}>{op.hours.toFixed(2)} h</td>
                 <td className={`${tdClass} spec text-right`}>{formatMoney(Math.round(op.hours * rate))}</td>
                 <td className={tdClass}>{op.engines}</td>
-                <td className={tdClass}>{op.active ? <StateTag tone="ok">Active</StateTag> : <StateTag tone="caution">Inactive</StateTag>}</td>
+                <td className={tdClass}>
+                  {op.active ? <StateTag tone="ok">Active</StateTag> : <StateTag tone="caution">Inactive</StateTag>}
+                </td>
                 {manager ? (
                   <td className={tdClass}>
-                    <Link className="text-gauge-700 underline" href={`/catalogue/labor/${op.id}/edit`}>Edit</Link>
+                    <Link className="text-gauge-700 underline" href={`/catalogue/labor/${op.id}/edit`}>
+                      Edit
+                    </Link>
                   </td>
                 ) : null}
               </tr>

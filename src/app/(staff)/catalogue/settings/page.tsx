@@ -13,16 +13,25 @@ export default async function SettingsPage() {
   const settings = await getShopSettingsRecord();
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Prices and deposit" lead="The labour rate, tax rate and deposit policy every new quote uses." back={{ href: '/catalogue', label: 'Catalogue' }} />
+      <PageHeader
+        title="Prices and deposit"
+        lead="The labour rate, tax rate and deposit policy every new quote uses."
+        back={{ href: '/catalogue', label: 'Catalogue' }}
+      />
       {settings ? (
         <>
           <p className="text-sm tabular-nums text-ink-soft">
-            Now: labour {formatMoney(settings.laborRateCents, { currency: settings.currency })}/h · tax {percentFromBp(settings.taxRateBp)} · deposit {percentFromBp(settings.depositPercentBp)} of the total, at least {formatMoney(settings.depositMinCents, { currency: settings.currency })} and at most {formatMoney(settings.depositMaxCents, { currency: settings.currency })}.
+            Now: labour {formatMoney(settings.laborRateCents, { currency: settings.currency })}/h · tax{' '}
+            {percentFromBp(settings.taxRateBp)} · deposit {percentFromBp(settings.depositPercentBp)} of the total, at
+            least {formatMoney(settings.depositMinCents, { currency: settings.currency })} and at most{' '}
+            {formatMoney(settings.depositMaxCents, { currency: settings.currency })}.
           </p>
           <SettingsForm settings={settings} />
         </>
       ) : (
-        <Banner tone="fault" title="The shop has no settings row">Run the migrations and the seed, then reload this page.</Banner>
+        <Banner tone="fault" title="The shop has no settings row">
+          Run the migrations and the seed, then reload this page.
+        </Banner>
       )}
     </div>
   );

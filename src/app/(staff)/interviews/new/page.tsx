@@ -8,7 +8,11 @@ import { interviewValuesFromLead } from '@/lib/leads/prefill';
 
 export const metadata: Metadata = { title: 'New interview' };
 
-export default async function NewInterviewPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function NewInterviewPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   await requireAccessForPage('builds.write');
   const cards = await listBaselineCards();
   // ?lead=<id>: open with the questionnaire's answers (leads page, "Start an interview").
@@ -17,7 +21,15 @@ export default async function NewInterviewPage({ searchParams }: { searchParams:
   const prefill = lead ? interviewValuesFromLead(lead, cards) : null;
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="New interview" lead={prefill ? `Started from ${lead!.name}’s questionnaire answers: the figures are assumed defaults, so check each one with the customer.` : 'Capture the customer’s whole combination, then rank the shop’s cams for it.'} back={{ href: '/interviews', label: 'Interviews' }} />
+      <PageHeader
+        title="New interview"
+        lead={
+          prefill
+            ? `Started from ${lead!.name}’s questionnaire answers: the figures are assumed defaults, so check each one with the customer.`
+            : 'Capture the customer’s whole combination, then rank the shop’s cams for it.'
+        }
+        back={{ href: '/interviews', label: 'Interviews' }}
+      />
       <InterviewForm mode="create" cards={cards} prefill={prefill} leadId={prefill ? lead!.id : undefined} />
     </div>
   );

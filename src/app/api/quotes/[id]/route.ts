@@ -12,6 +12,7 @@ export const GET = route({ permission: 'quotes.read', ids: { id: 'quote' } }, as
 });
 
 /** { version, lines?, validUntil? } while the quote is a draft; a stale version answers 409. */
-export const PATCH = route({ permission: 'quotes.write', ids: { id: 'quote' }, body: QuotePatchSchema }, async ({ user, ids, body }) =>
-  NextResponse.json(presentQuote(await updateQuote(ids.id, body, user), user)),
+export const PATCH = route(
+  { permission: 'quotes.write', ids: { id: 'quote' }, body: QuotePatchSchema },
+  async ({ user, ids, body }) => NextResponse.json(presentQuote(await updateQuote(ids.id, body, user), user)),
 );

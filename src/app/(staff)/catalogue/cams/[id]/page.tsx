@@ -26,7 +26,13 @@ function Spec({ label, value, note }: { label: string; value: React.ReactNode; n
   );
 }
 
-export default async function CamPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function CamPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const user = await requireAccessForPage('catalogue.read');
   const { id } = await params;
   const query = await searchParams;
@@ -43,34 +49,82 @@ export default async function CamPage({ params, searchParams }: { params: Promis
         title={`${cam.sku} · ${cam.name}`}
         lead={cam.supplierName ?? 'Reference card (no supplier)'}
         back={{ href: '/catalogue/cams', label: 'Cams' }}
-        actions={manager ? <ButtonLink href={`/catalogue/cams/${cam.id}/edit`} variant="primary">Edit</ButtonLink> : null}
+        actions={
+          manager ? (
+            <ButtonLink href={`/catalogue/cams/${cam.id}/edit`} variant="primary">
+              Edit
+            </ButtonLink>
+          ) : null
+        }
       />
-      {query.saved ? <Banner tone="ok" title="Saved">The cam is saved (version {cam.version}).</Banner> : null}
+      {query.saved ? (
+        <Banner tone="ok" title="Saved">
+          The cam is saved (version {cam.version}).
+        </Banner>
+      ) : null}
       <div className="flex flex-wrap gap-2">
-        {cam.archivedAt ? <StateTag tone="muted">Archived {cam.archivedAt.slice(0, 10)}</StateTag> : cam.active ? <StateTag tone="ok">Active</StateTag> : <StateTag tone="caution">Inactive</StateTag>}
-        {cam.emissionsCertified ? <StateTag tone="ok">Certified for emissions</StateTag> : <StateTag tone="caution">Not certified for emissions</StateTag>}
-        {cam.deactivationCompatible ? <StateTag tone="ok">Deactivation compatible</StateTag> : <StateTag tone="caution">Needs deactivation deleted</StateTag>}
-        {cam.isFactoryBaseline ? <StateTag tone="muted">Factory baseline{cam.baselineForLiters ? `, ${cam.baselineForLiters.toFixed(1)} L` : ''}</StateTag> : null}
+        {cam.archivedAt ? (
+          <StateTag tone="muted">Archived {cam.archivedAt.slice(0, 10)}</StateTag>
+        ) : cam.active ? (
+          <StateTag tone="ok">Active</StateTag>
+        ) : (
+          <StateTag tone="caution">Inactive</StateTag>
+        )}
+        {cam.emissionsCertified ? (
+          <StateTag tone="ok">Certified for emissions</StateTag>
+        ) : (
+          <StateTag tone="caution">Not certified for emissions</StateTag>
+        )}
+        {cam.deactivationCompatible ? (
+          <StateTag tone="ok">Deactivation compatible</StateTag>
+        ) : (
+          <StateTag tone="caution">Needs deactivation deleted</StateTag>
+        )}
+        {cam.isFactoryBaseline ? (
+          <StateTag tone="muted">
+            Factory baseline{cam.baselineForLiters ? `, ${cam.baselineForLiters.toFixed(1)} L` : ''}
+          </StateTag>
+        ) : null}
       </div>
       <div className="grid gap-6 lg:grid-cols-2">
         <section aria-labelledby="card-title">
-          <h2 id="card-title" className="text-lg font-semibold">Cam card</h2>
+          <h2 id="card-title" className="text-lg font-semibold">
+            Cam card
+          </h2>
           <dl className="grid grid-cols-2 gap-x-6">
-            <Spec label='Duration @0.050" in / ex' value={`${deg(cam.intakeDuration050)} / ${deg(cam.exhaustDuration050)}`} />
+            <Spec
+              label='Duration @0.050" in / ex'
+              value={`${deg(cam.intakeDuration050)} / ${deg(cam.exhaustDuration050)}`}
+            />
             <Spec label="Advertised in / ex" value={`${deg(cam.intakeAdvertised)} / ${deg(cam.exhaustAdvertised)}`} />
-            <Spec label="Lift at the valve in / ex" value={`${inches(cam.intakeLiftIn)} / ${inches(cam.exhaustLiftIn)}`} note={`at ${cam.rockerRatio.toFixed(2)}:1 rocker ratio`} />
+            <Spec
+              label="Lift at the valve in / ex"
+              value={`${inches(cam.intakeLiftIn)} / ${inches(cam.exhaustLiftIn)}`}
+              note={`at ${cam.rockerRatio.toFixed(2)}:1 rocker ratio`}
+            />
             <Spec label="Lobe separation angle" value={deg(cam.lsa)} />
             <Spec label="Installed intake centerline" value={`${deg(cam.intakeCenterline)} ATDC`} />
             <Spec label="Spring max lift" value={inches(cam.springMaxLiftIn)} />
             <Spec label="Price" value={formatMoney(cam.priceCents)} />
-            {canSeeCosts(user) ? <Spec label="Cost · margin" value={`${formatMoney(cam.costCents)} · ${margin === null ? '—' : `${margin} %`}`} /> : null}
+            {canSeeCosts(user) ? (
+              <Spec
+                label="Cost · margin"
+                value={`${formatMoney(cam.costCents)} · ${margin === null ? '—' : `${margin} %`}`}
+              />
+            ) : null}
             <Spec label="Stock on hand" value={`${cam.stockOnHand} units`} />
-            <Spec label="Version" value={cam.version} note={`last saved ${cam.updatedAt.slice(0, 16).replace('T', ' ')} UTC`} />
+            <Spec
+              label="Version"
+              value={cam.version}
+              note={`last saved ${cam.updatedAt.slice(0, 16).replace('T', ' ')} UTC`}
+            />
           </dl>
           {cam.notes ? <p className="mt-3 whitespace-pre-line text-sm text-ink-soft">{cam.notes}</p> : null}
         </section>
         <section aria-labelledby="events-title" className="flex flex-col gap-3">
-          <h2 id="events-title" className="text-lg font-semibold">Valve events at 0.050&quot;</h2>
+          <h2 id="events-title" className="text-lg font-semibold">
+            Valve events at 0.050&quot;
+          </h2>
           <dl className="grid grid-cols-3 gap-x-4">
             <Spec label="IVO" value={`${events.ivo.toFixed(1)}° BTDC`} />
             <Spec label="IVC" value={`${events.ivc.toFixed(1)}° ABDC`} />
@@ -80,8 +134,11 @@ export default async function CamPage({ params, searchParams }: { params: Promis
             <Spec label="Exhaust centerline" value={`${events.exhaustCenterline.toFixed(1)}° BTDC`} />
           </dl>
           <p className="text-xs text-ink-muted">
-            IVO = dur/2 − ICL, IVC = dur/2 + ICL − 180, ECL = 2·LSA − ICL, EVO = dur/2 + ECL − 180, EVC = dur/2 − ECL, overlap = IVO + EVC (standard cam-card arithmetic).
-            {events.advertised ? ` At advertised duration the overlap is ${events.advertised.overlap.toFixed(1)}°.` : ''}
+            IVO = dur/2 − ICL, IVC = dur/2 + ICL − 180, ECL = 2·LSA − ICL, EVO = dur/2 + ECL − 180, EVC = dur/2 − ECL,
+            overlap = IVO + EVC (standard cam-card arithmetic).
+            {events.advertised
+              ? ` At advertised duration the overlap is ${events.advertised.overlap.toFixed(1)}°.`
+              : ''}
           </p>
           <ValveEventDiagram events={events} intakeLiftIn={cam.intakeLiftIn} exhaustLiftIn={cam.exhaustLiftIn} />
         </section>

@@ -10,7 +10,11 @@ export default async function NewCamPage() {
   await requireAccessForPage('catalogue.write');
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Add a cam" lead="Copy the figures from the supplier's cam card; units are shown beside each field." back={{ href: '/catalogue/cams', label: 'Cams' }} />
+      <PageHeader
+        title="Add a cam"
+        lead="Copy the figures from the supplier's cam card; units are shown beside each field."
+        back={{ href: '/catalogue/cams', label: 'Cams' }}
+      />
       <CamForm cam={null} suppliers={await listSuppliers()} />
     </div>
   );

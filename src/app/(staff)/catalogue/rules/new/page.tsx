@@ -12,7 +12,11 @@ export default async function NewRulePage() {
   const [parts, labor] = await Promise.all([allParts(), allLabor()]);
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Add a rule" lead="Pick when it applies, then what it adds." back={{ href: '/catalogue/rules', label: 'What a cam needs' }} />
+      <PageHeader
+        title="Add a rule"
+        lead="Pick when it applies, then what it adds."
+        back={{ href: '/catalogue/rules', label: 'What a cam needs' }}
+      />
       <RuleForm rule={null} parts={parts} labor={labor} />
     </div>
   );

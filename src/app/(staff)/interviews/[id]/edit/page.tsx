@@ -15,11 +15,23 @@ export default async function EditBuildPage({ params }: { params: Promise<{ id: 
   if (!build) notFound();
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title={`Edit build: ${build.vehicleLabel}`} lead={`${build.customerName} · saved ${build.updatedAt.slice(0, 10)}`} back={{ href: '/interviews', label: 'Interviews' }} />
+      <PageHeader
+        title={`Edit build: ${build.vehicleLabel}`}
+        lead={`${build.customerName} · saved ${build.updatedAt.slice(0, 10)}`}
+        back={{ href: '/interviews', label: 'Interviews' }}
+      />
       <InterviewForm
         mode="edit"
         cards={cards}
-        build={{ id: build.id, version: build.version, customerId: build.customerId, customerName: build.customerName, vehicleLabel: build.vehicleLabel, baselineCamId: build.baselineCamId, profile: build.profile }}
+        build={{
+          id: build.id,
+          version: build.version,
+          customerId: build.customerId,
+          customerName: build.customerName,
+          vehicleLabel: build.vehicleLabel,
+          baselineCamId: build.baselineCamId,
+          profile: build.profile,
+        }}
       />
     </div>
   );

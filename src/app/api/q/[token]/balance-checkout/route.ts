@@ -8,4 +8,6 @@ import { checkoutResponse } from '../../checkout-response';
  */
 // allowCrossSite: the customer's page sends no referrer (its address holds the private token), so its
 // own form posts arrive with `Origin: null`; the token is the key, and a checkout only leads to paying.
-export const POST = route({ permission: 'public', allowCrossSite: true }, ({ request, params }) => checkoutResponse(request, () => startBalanceCheckout(params.token)));
+export const POST = route({ permission: 'public', allowCrossSite: true }, ({ request, params }) =>
+  checkoutResponse(request, () => startBalanceCheckout(params.token)),
+);

@@ -5,6 +5,8 @@ import { reviseQuote } from '@/lib/quotes/transitions';
 import { QuoteReviseSchema } from '@/lib/schemas/quote';
 
 /** { version }: a new draft revision (-R2, -R3, ...) of an unpaid quote; answers 201 with the new draft. */
-export const POST = route({ permission: 'quotes.write', ids: { id: 'quote' }, body: QuoteReviseSchema }, async ({ user, ids, body }) =>
-  NextResponse.json(presentQuote(await reviseQuote(ids.id, body, user), user), { status: 201 }),
+export const POST = route(
+  { permission: 'quotes.write', ids: { id: 'quote' }, body: QuoteReviseSchema },
+  async ({ user, ids, body }) =>
+    NextResponse.json(presentQuote(await reviseQuote(ids.id, body, user), user), { status: 201 }),
 );

@@ -4,4 +4,6 @@ import { presentQuote } from '@/lib/db/queries/quotes';
 import { sendQuote } from '@/lib/quotes/sending';
 
 /** E-mails the customer a fresh private link; status → sent. A refused e-mail changes nothing (502). */
-export const POST = route({ permission: 'quotes.send', ids: { id: 'quote' } }, async ({ user, ids }) => NextResponse.json(presentQuote(await sendQuote(ids.id, user), user)));
+export const POST = route({ permission: 'quotes.send', ids: { id: 'quote' } }, async ({ user, ids }) =>
+  NextResponse.json(presentQuote(await sendQuote(ids.id, user), user)),
+);

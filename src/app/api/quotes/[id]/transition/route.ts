@@ -9,6 +9,7 @@ import { QuoteTransitionSchema } from '@/lib/schemas/quote';
  * lifecycle does not allow, or one that belongs to another flow (sending, paying, refunding, revising),
  * answers 409 with the current state and the moves allowed from it.
  */
-export const POST = route({ permission: 'quotes.write', ids: { id: 'quote' }, body: QuoteTransitionSchema }, async ({ user, ids, body }) =>
-  NextResponse.json(presentQuote(await transitionQuote(ids.id, body, user), user)),
+export const POST = route(
+  { permission: 'quotes.write', ids: { id: 'quote' }, body: QuoteTransitionSchema },
+  async ({ user, ids, body }) => NextResponse.json(presentQuote(await transitionQuote(ids.id, body, user), user)),
 );

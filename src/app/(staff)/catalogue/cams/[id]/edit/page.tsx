@@ -19,9 +19,18 @@ export default async function EditCamPage({ params }: { params: Promise<{ id: st
         title={`Edit ${cam.sku}`}
         lead="If someone else saves this cam first, you will see what they changed before anything is overwritten."
         back={{ href: `/catalogue/cams/${cam.id}`, label: cam.name }}
-        actions={<DeleteButton url={`/api/cams/${cam.id}`} label={cam.archivedAt ? 'Delete or keep archived' : 'Archive or delete'} after="/catalogue/cams" />}
+        actions={
+          <DeleteButton
+            url={`/api/cams/${cam.id}`}
+            label={cam.archivedAt ? 'Delete or keep archived' : 'Archive or delete'}
+            after="/catalogue/cams"
+          />
+        }
       />
-      <p className="text-xs text-ink-muted">Archive or delete: a cam that any quote, build or dyno run refers to is archived (kept, hidden from the advisor); one nothing refers to is deleted.</p>
+      <p className="text-xs text-ink-muted">
+        Archive or delete: a cam that any quote, build or dyno run refers to is archived (kept, hidden from the
+        advisor); one nothing refers to is deleted.
+      </p>
       <CamForm cam={cam} suppliers={await listSuppliers()} />
     </div>
   );

@@ -16,7 +16,11 @@ export default async function EditLaborPage({ params }: { params: Promise<{ id: 
   if (!labor) notFound();
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title={`Edit ${labor.code}`} back={{ href: '/catalogue/labor', label: 'Labour' }} actions={<DeleteButton url={`/api/labor/${labor.id}`} label="Delete or switch off" after="/catalogue/labor" />} />
+      <PageHeader
+        title={`Edit ${labor.code}`}
+        back={{ href: '/catalogue/labor', label: 'Labour' }}
+        actions={<DeleteButton url={`/api/labor/${labor.id}`} label="Delete or switch off" after="/catalogue/labor" />}
+      />
       <LaborForm labor={labor} />
       <Attachments baseUrl={`/api/labor/${labor.id}`} canEdit />
     </div>

@@ -17,7 +17,11 @@ export default async function EditPartPage({ params }: { params: Promise<{ id: s
   if (!part) notFound();
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title={`Edit ${part.sku}`} back={{ href: '/catalogue/parts', label: 'Parts' }} actions={<DeleteButton url={`/api/parts/${part.id}`} label="Delete or switch off" after="/catalogue/parts" />} />
+      <PageHeader
+        title={`Edit ${part.sku}`}
+        back={{ href: '/catalogue/parts', label: 'Parts' }}
+        actions={<DeleteButton url={`/api/parts/${part.id}`} label="Delete or switch off" after="/catalogue/parts" />}
+      />
       <PartForm part={part} suppliers={await listSuppliers()} />
       <Attachments baseUrl={`/api/parts/${part.id}`} canEdit />
     </div>

@@ -17,7 +17,12 @@ export default async function EditRulePage({ params }: { params: Promise<{ id: s
   const [parts, labor] = await Promise.all([allParts(), allLabor()]);
   return (
     <div className="flex flex-col gap-4">
-      <PageHeader title="Edit rule" lead={rule.label} back={{ href: '/catalogue/rules', label: 'What a cam needs' }} actions={<DeleteButton url={`/api/rules/${rule.id}`} label="Delete rule" after="/catalogue/rules" />} />
+      <PageHeader
+        title="Edit rule"
+        lead={rule.label}
+        back={{ href: '/catalogue/rules', label: 'What a cam needs' }}
+        actions={<DeleteButton url={`/api/rules/${rule.id}`} label="Delete rule" after="/catalogue/rules" />}
+      />
       <RuleForm rule={rule} parts={parts} labor={labor} />
     </div>
   );
