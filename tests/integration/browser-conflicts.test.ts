@@ -4,8 +4,8 @@ import request from 'supertest';
 import { AuditEntry, Lead, User } from '@/lib/db/models';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
-import { signedInAgent, signIn } from '../support/auth';
-import { launchBrowser } from '../support/browser';
+import { signedInAgent } from '../support/auth';
+import { launchBrowser, staffContext, watchedPage } from '../support/browser';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { dayFromToday, makeDraftQuote } from '../support/quote-fixtures';
 import { clearRateLimits } from '../support/rate-limits';
@@ -51,12 +51,8 @@ describe('a newer save by someone else, in the browser', () => {
     if (sent.status !== 201) throw new Error(`lead fixture answered ${sent.status}: ${JSON.stringify(sent.body)}`);
     leadId = sent.body.id;
     browser = await launchBrowser();
-    const [name, value] = (await signIn('manager')).split('=');
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    await context.addCookies([{ name, value, url: appUrl }]);
-    page = await context.newPage();
-    page.setDefaultTimeout(10_000);
-    page.on('pageerror', (error) => pageErrors.push(error.message));
+    const context = await staffContext(browser, 'manager');
+    page = await watchedPage(context, pageErrors);
   }, 60_000);
 
   afterAll(async () => {

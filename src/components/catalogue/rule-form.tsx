@@ -5,11 +5,19 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { VEHICLE_CLASSES, type VehicleClass } from '@/lib/schemas/build-profile';
 import { ruleChecks } from '@/lib/forms/rule-checks';
-import { NEED_RULE_KIND_OPTIONS, NEED_RULE_KIND_TEXT, RULE_VEHICLE_CLASS_TEXT } from '@/lib/schemas/need-rule';
+import { nestFieldErrors } from '@/lib/forms/yup-limits';
+import {
+  NEED_RULE_KIND_OPTIONS,
+  NEED_RULE_KIND_TEXT,
+  NEED_RULE_LIMITS,
+  RULE_VEHICLE_CLASS_TEXT,
+} from '@/lib/schemas/need-rule';
 import { sendJson, useVersionedSave } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
+import type { Options } from '@/components/ui/field';
+import { CheckboxField, NumberField, SelectField, TextField } from '@/components/ui/formik-fields';
 
 type Item = { partId: string; laborOperationId: string; quantity: string };
 type Values = {
@@ -67,12 +75,19 @@ export function RuleForm({
   const { conflict, save, settle } = useVersionedSave<RuleRecord>(rule);
   const [problem, setProblem] = useState<string | null>(null);
   const initial = valuesOf(rule);
-  const input = 'w-full rounded border border-steel-300 bg-paper-raised px-2 py-1.5 text-sm';
+  const partOptions: Options = [
+    ['', '(no part)'],
+    ...parts.map((p) => [String(p.id), `${p.sku} — ${p.name}`] as const),
+  ];
+  const laborOptions: Options = [
+    ['', '(no labour)'],
+    ...labor.map((l) => [String(l.id), `${l.code} — ${l.name}`] as const),
+  ];
   return (
     <Formik<Values>
       initialValues={initial}
       // yup from the schema's limits, over the JSON the route will get (lib/forms/rule-checks.ts); the route re-checks with zod.
-      validate={(values) => ruleChecks(toPayload(values))}
+      validate={(values) => nestFieldErrors(ruleChecks(toPayload(values)))}
       onSubmit={async (values) => {
         setProblem(null);
         const result = rule
@@ -90,7 +105,6 @@ export function RuleForm({
       }}
     >
       {({ values, errors, submitCount, isSubmitting, handleChange, setValues }) => {
-        const show = (key: string) => (submitCount > 0 ? (errors as Record<string, string>)[key] : undefined);
         return (
           <Form noValidate className="flex flex-col gap-4">
             {conflict ? (
@@ -125,36 +139,19 @@ export function RuleForm({
                 </label>
               ))}
             </fieldset>
-            <label className="flex max-w-xs flex-col gap-1 text-sm font-semibold">
-              For which vehicles
-              <select name="vehicleClass" className={input} value={values.vehicleClass} onChange={handleChange}>
-                {(['any', ...VEHICLE_CLASSES] as const).map((vc) => (
-                  <option key={vc} value={vc}>
-                    {RULE_VEHICLE_CLASS_TEXT[vc]}
-                  </option>
-                ))}
-              </select>
-              <span className="text-xs font-normal text-ink-muted">
-                A rule for one class replaces the “every vehicle” rules of the same need for that class.
-              </span>
-            </label>
-            <label className="flex flex-col gap-1 text-sm font-semibold">
-              Label (what staff and customers read)
-              <input
-                name="label"
-                className={input}
-                value={values.label}
-                onChange={handleChange}
-                aria-invalid={show('label') ? true : undefined}
-              />
-              {show('label') ? (
-                <span className="text-xs font-normal text-fault-700">Problem: {show('label')}</span>
-              ) : null}
-            </label>
-            <label className="flex items-center gap-2 text-sm">
-              <input type="checkbox" name="active" checked={values.active} onChange={handleChange} /> Active (the
-              advisor and quotes use it)
-            </label>
+            <SelectField
+              name="vehicleClass"
+              label="For which vehicles"
+              className="max-w-xs"
+              options={(['any', ...VEHICLE_CLASSES] as const).map((vc) => [vc, RULE_VEHICLE_CLASS_TEXT[vc]] as const)}
+              hint="A rule for one class replaces the “every vehicle” rules of the same need for that class."
+            />
+            <TextField
+              name="label"
+              label="Label (what staff and customers read)"
+              maxLength={NEED_RULE_LIMITS.labelMaxLength}
+            />
+            <CheckboxField name="active" label="Active (the advisor and quotes use it)" />
             <FieldArray name="items">
               {({ push, remove }) => (
                 <fieldset className="flex flex-col gap-2">
@@ -164,44 +161,15 @@ export function RuleForm({
                       key={index}
                       className="grid gap-2 rounded border border-steel-300 p-2 sm:grid-cols-[2fr_2fr_6rem_auto]"
                     >
-                      <label className="flex flex-col gap-1 text-xs font-semibold">
-                        Part
-                        <select
-                          name={`items.${index}.partId`}
-                          className={input}
-                          value={item.partId}
-                          onChange={handleChange}
-                        >
-                          <option value="">(no part)</option>
-                          {parts.map((p) => (
-                            <option key={p.id} value={p.id}>{`${p.sku} — ${p.name}`}</option>
-                          ))}
-                        </select>
-                      </label>
-                      <label className="flex flex-col gap-1 text-xs font-semibold">
-                        Labour
-                        <select
-                          name={`items.${index}.laborOperationId`}
-                          className={input}
-                          value={item.laborOperationId}
-                          onChange={handleChange}
-                        >
-                          <option value="">(no labour)</option>
-                          {labor.map((l) => (
-                            <option key={l.id} value={l.id}>{`${l.code} — ${l.name}`}</option>
-                          ))}
-                        </select>
-                      </label>
-                      <label className="flex flex-col gap-1 text-xs font-semibold">
-                        Quantity
-                        <input
-                          name={`items.${index}.quantity`}
-                          inputMode="decimal"
-                          className={`${input} spec`}
-                          value={item.quantity}
-                          onChange={handleChange}
-                        />
-                      </label>
+                      <SelectField name={`items.${index}.partId`} label="Part" options={partOptions} />
+                      <SelectField name={`items.${index}.laborOperationId`} label="Labour" options={laborOptions} />
+                      <NumberField
+                        name={`items.${index}.quantity`}
+                        label="Quantity"
+                        unit=""
+                        range={NEED_RULE_LIMITS.quantity}
+                        hint={`${NEED_RULE_LIMITS.quantity.min}–${NEED_RULE_LIMITS.quantity.max}`}
+                      />
                       <button
                         type="button"
                         className="self-end text-xs text-fault-700 underline"
@@ -210,14 +178,11 @@ export function RuleForm({
                       >
                         Remove
                       </button>
-                      {show(`items.${index}.partId`) || show(`items.${index}.quantity`) ? (
-                        <p className="text-xs text-fault-700 sm:col-span-4">
-                          Problem: {show(`items.${index}.partId`) ?? show(`items.${index}.quantity`)}
-                        </p>
-                      ) : null}
                     </div>
                   ))}
-                  {show('items') ? <p className="text-xs text-fault-700">Problem: {show('items')}</p> : null}
+                  {submitCount > 0 && typeof errors.items === 'string' ? (
+                    <p className="text-xs text-fault-700">Problem: {errors.items}</p>
+                  ) : null}
                   <Button
                     type="button"
                     variant="quiet"

@@ -1,3 +1,4 @@
+import { setIn } from 'formik';
 import * as yup from 'yup';
 import { centsToText } from '@/lib/format';
 
@@ -97,6 +98,17 @@ export function validateWithYup<T extends object>(schema: yup.ObjectSchema<yup.A
       return errors;
     }
   };
+}
+
+/**
+ * Flat field errors ({ 'items.0.quantity': … }) in formik's nested shape, for forms whose fields sit in lists. A
+ * list's own message ("a rule must add at least one …") takes the list's place, as formik's FieldArray expects.
+ */
+export function nestFieldErrors(flat: Record<string, string>): Record<string, unknown> {
+  let out: Record<string, unknown> = {};
+  const byDepth = Object.entries(flat).sort(([a], [b]) => b.split('.').length - a.split('.').length);
+  for (const [path, message] of byDepth) out = setIn(out, path, message);
+  return out;
 }
 
 const dottedPath = (path: string | undefined) => (path ?? '').replace(/\[(\d+)\]/g, '.$1').replace(/^\./, '');

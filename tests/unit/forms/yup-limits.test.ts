@@ -1,6 +1,6 @@
 import * as yup from 'yup';
 import { centsFromText } from '@/lib/format';
-import { moneyWithin, numberWithin, textUpTo, validateWithYup } from '@/lib/forms/yup-limits';
+import { moneyWithin, nestFieldErrors, numberWithin, textUpTo, validateWithYup } from '@/lib/forms/yup-limits';
 import { LABOR_LIMITS, LaborSchema } from '@/lib/schemas/labor';
 import { SETTINGS_LIMITS } from '@/lib/schemas/settings';
 
@@ -47,5 +47,24 @@ describe('yup checks built from the schemas’ limits', () => {
     const zod = LaborSchema.safeParse({ code: 'L-1', name: 'n', hours: edge + 0.01, engines: 'all', active: true });
     expect(zod.error?.issues.map((i) => i.path.join('.'))).toContain('hours');
     expect(validate({ hours: String(edge + 0.01), rate: '1', name: 'n' }).hours).toBeDefined();
+  });
+});
+
+describe('flat field errors in formik’s nested shape', () => {
+  it('nests list items by index and lets a list’s own message stand for the list', () => {
+    expect(
+      nestFieldErrors({ label: 'label must not be empty', 'items.1.quantity': 'quantity must be at most 99' }),
+    ).toEqual({
+      label: 'label must not be empty',
+      items: [undefined, { quantity: 'quantity must be at most 99' }],
+    });
+    expect(
+      nestFieldErrors({
+        'items.0.partId': 'each item needs a part, a labour operation or both',
+        items: 'a rule may add at most 12 items',
+      }),
+    ).toEqual({
+      items: 'a rule may add at most 12 items',
+    });
   });
 });
