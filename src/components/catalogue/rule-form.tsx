@@ -16,7 +16,7 @@ import { sendJson, useVersionedSave } from '@/lib/api-client';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
-import type { Options } from '@/components/ui/field';
+import { RadioGroup, type Options } from '@/components/ui/field';
 import { CheckboxField, NumberField, SelectField, TextField } from '@/components/ui/formik-fields';
 
 type Item = { partId: string; laborOperationId: string; quantity: string };
@@ -104,7 +104,7 @@ export function RuleForm({
           );
       }}
     >
-      {({ values, errors, submitCount, isSubmitting, handleChange, setValues }) => {
+      {({ values, errors, submitCount, isSubmitting, setFieldValue, setValues }) => {
         return (
           <Form noValidate className="flex flex-col gap-4">
             {conflict ? (
@@ -128,17 +128,13 @@ export function RuleForm({
                 {problem}
               </Banner>
             ) : null}
-            <fieldset className="flex flex-col gap-2">
-              <legend className="text-sm font-semibold">
-                Which need does it price? (The advisor decides when a cam has it.)
-              </legend>
-              {NEED_RULE_KIND_OPTIONS.map((kind) => (
-                <label key={kind} className="flex items-center gap-2 text-sm">
-                  <input type="radio" name="kind" value={kind} checked={values.kind === kind} onChange={handleChange} />
-                  {NEED_RULE_KIND_TEXT[kind].title}
-                </label>
-              ))}
-            </fieldset>
+            <RadioGroup
+              name="kind"
+              legend="Which need does it price? (The advisor decides when a cam has it.)"
+              options={NEED_RULE_KIND_OPTIONS.map((kind) => [kind, NEED_RULE_KIND_TEXT[kind].title] as const)}
+              value={values.kind}
+              onChange={(kind) => void setFieldValue('kind', kind)}
+            />
             <SelectField
               name="vehicleClass"
               label="For which vehicles"

@@ -4,7 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { NumberControl, TextAreaControl, TextControl } from '@/components/ui/field';
+import { NumberControl, RadioGroup, TextAreaControl, TextControl } from '@/components/ui/field';
 import { submitOnCtrlEnter } from '@/components/ui/keys';
 import type { SignOffWarning } from '@/lib/jobs/sign-off-limits';
 import { LIMITS_NOTE } from '@/lib/jobs/sign-off-limits';
@@ -80,30 +80,20 @@ export function SignOffForm({ jobId, deactivationActive }: { jobId: number; deac
         ))}
       </div>
       {deactivationActive ? (
-        <fieldset className="text-sm">
-          <legend className="font-semibold">Cylinder deactivation delete (this build has it working)</legend>
-          <label className="mr-4 inline-flex items-center gap-1">
-            <input
-              type="radio"
-              name="deactivation"
-              checked={deleteDone === 'yes'}
-              onChange={() => setDeleteDone('yes')}
-            />{' '}
-            Delete done
-          </label>
-          <label className="inline-flex items-center gap-1">
-            <input
-              type="radio"
-              name="deactivation"
-              checked={deleteDone === 'no'}
-              onChange={() => setDeleteDone('no')}
-            />{' '}
-            Left in place
-          </label>
-          {problem?.fields.deactivationDeleteDone ? (
-            <p className="text-xs text-fault-700">Problem: {problem.fields.deactivationDeleteDone}</p>
-          ) : null}
-        </fieldset>
+        <RadioGroup
+          name="deactivation"
+          legend="Cylinder deactivation delete (this build has it working)"
+          row
+          options={
+            [
+              ['yes', 'Delete done'],
+              ['no', 'Left in place'],
+            ] as const
+          }
+          value={deleteDone}
+          onChange={setDeleteDone}
+          error={problem?.fields.deactivationDeleteDone}
+        />
       ) : null}
       <TextControl
         id="sign-off-tuneFile"

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { centsToText, formatMoney } from '@/lib/format';
 import { amountWithin } from '@/lib/forms/amount';
 import { Button } from '@/components/ui/button';
+import { RadioGroup } from '@/components/ui/field';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import type { QuoteRun } from './quote-run';
 
@@ -98,29 +99,20 @@ export function BalancePanel({
               );
             }}
           >
-            <fieldset className="flex gap-3">
-              <legend className="sr-only">How the customer paid</legend>
-              <label className="flex items-center gap-1">
-                <input
-                  type="radio"
-                  name="method"
-                  value="card-present"
-                  checked={method === 'card-present'}
-                  onChange={() => setMethod('card-present')}
-                />{' '}
-                Card at the counter
-              </label>
-              <label className="flex items-center gap-1">
-                <input
-                  type="radio"
-                  name="method"
-                  value="cash"
-                  checked={method === 'cash'}
-                  onChange={() => setMethod('cash')}
-                />{' '}
-                Cash
-              </label>
-            </fieldset>
+            <RadioGroup
+              name="method"
+              legend="How the customer paid"
+              legendHidden
+              row
+              options={
+                [
+                  ['card-present', 'Card at the counter'],
+                  ['cash', 'Cash'],
+                ] as const
+              }
+              value={method}
+              onChange={setMethod}
+            />
             <label>
               Amount taken ($)
               <input

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { formatMoney } from '@/lib/format';
 import { amountWithin } from '@/lib/forms/amount';
 import { Button } from '@/components/ui/button';
+import { RadioGroup } from '@/components/ui/field';
 import type { QuoteRun } from './quote-run';
 
 // A refund is money leaving the shop: the manager types an amount, then confirms it on a second step
@@ -39,29 +40,19 @@ export function RefundForm({
           cannot be undone.
         </p>
         {full ? (
-          <fieldset className="mt-2">
-            <legend className="font-semibold">Then the job…</legend>
-            <label className="mt-1 flex items-center gap-2">
-              <input
-                type="radio"
-                name="after"
-                value="cancel"
-                checked={after === 'cancel'}
-                onChange={() => setAfter('cancel')}
-              />
-              Cancel the job (the quote is closed and leaves the jobs list)
-            </label>
-            <label className="mt-1 flex items-center gap-2">
-              <input
-                type="radio"
-                name="after"
-                value="reopen"
-                checked={after === 'reopen'}
-                onChange={() => setAfter('reopen')}
-              />
-              Reopen the quote (the customer may pay the deposit again)
-            </label>
-          </fieldset>
+          <RadioGroup
+            name="after"
+            legend="Then the job…"
+            className="mt-2"
+            options={
+              [
+                ['cancel', 'Cancel the job (the quote is closed and leaves the jobs list)'],
+                ['reopen', 'Reopen the quote (the customer may pay the deposit again)'],
+              ] as const
+            }
+            value={after}
+            onChange={setAfter}
+          />
         ) : (
           <p className="mt-1">Part of the deposit stays paid; the job stays booked.</p>
         )}

@@ -233,3 +233,50 @@ export function CheckboxControl({
     </div>
   );
 }
+
+/**
+ * One choice of a few, as radio buttons under a legend (`legendHidden` when the form says it otherwise); each
+ * option's words are its label, the problem sits below. `row` sets the choices side by side.
+ */
+export function RadioGroup<V extends string>({
+  name,
+  legend,
+  legendHidden = false,
+  options,
+  value,
+  onChange,
+  error,
+  row = false,
+  className = '',
+}: {
+  name: string;
+  legend: React.ReactNode;
+  legendHidden?: boolean;
+  options: readonly (readonly [value: V, text: React.ReactNode])[];
+  value: V | '';
+  onChange: (value: V) => void;
+  error?: string | null;
+  row?: boolean;
+  className?: string;
+}) {
+  return (
+    <fieldset className={`text-sm ${className}`}>
+      <legend className={legendHidden ? 'sr-only' : 'font-semibold'}>{legend}</legend>
+      <div className={row ? 'flex flex-wrap gap-x-4 gap-y-1' : 'mt-1 flex flex-col gap-1'}>
+        {options.map(([option, text]) => (
+          <label key={option} className="flex items-center gap-2">
+            <input
+              type="radio"
+              name={name}
+              value={option}
+              checked={value === option}
+              onChange={() => onChange(option)}
+            />
+            {text}
+          </label>
+        ))}
+      </div>
+      {error ? <p className={LOOKS.staff.error}>Problem: {error}</p> : null}
+    </fieldset>
+  );
+}

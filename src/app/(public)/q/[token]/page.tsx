@@ -9,6 +9,7 @@ import { CustomerPayments } from '@/components/quotes/customer-payments';
 import { QuoteBasis } from '@/components/quotes/quote-basis';
 import { ReplacedNotice } from '@/components/quotes/replaced-notice';
 import './print.css';
+import { CustomerCautions } from '@/components/ui/customer-cautions';
 
 export const dynamic = 'force-dynamic';
 // A private link: never indexed, never cached, never sent on as a referrer.
@@ -201,16 +202,7 @@ export default async function CustomerQuotePage({
 
       {quote.snapshot ? <QuoteBasis snapshot={quote.snapshot} /> : null}
 
-      <section aria-labelledby="care" className="mt-8 rounded-lg border border-caution-700/40 bg-caution-100 p-5">
-        <h2 id="care" className="text-2xl font-semibold">
-          Good to know before a cam swap
-        </h2>
-        <ul className="mt-3 flex list-disc flex-col gap-2 pl-6">
-          {CAUTIONS.map((text) => (
-            <li key={text}>{text}</li>
-          ))}
-        </ul>
-      </section>
+      <CustomerCautions cautions={CAUTIONS} />
 
       <p className="mt-8 text-base">
         Questions? Call {shop.name} on{' '}

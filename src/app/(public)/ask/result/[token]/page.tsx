@@ -4,6 +4,7 @@ import { notFound } from 'next/navigation';
 import { CUSTOMER_CAUTIONS, ShortlistCards } from '@/components/leads/shortlist-view';
 import { getLeadByToken } from '@/lib/db/queries/leads';
 import { SHORTLIST_SIZE, shortlistForCustomer } from '@/lib/leads/shortlist';
+import { CustomerCautions } from '@/components/ui/customer-cautions';
 
 const SHOWN_WORDS: Record<number, string> = { 1: 'The one', 2: 'The two', 3: 'The three' };
 
@@ -71,16 +72,7 @@ export default async function AskResultPage({ params }: { params: Promise<{ toke
         </div>
       </section>
 
-      <section aria-labelledby="care" className="mt-8 rounded-lg border border-caution-700/40 bg-caution-100 p-5">
-        <h2 id="care" className="text-2xl font-semibold">
-          Good to know before a cam swap
-        </h2>
-        <ul className="mt-3 flex list-disc flex-col gap-2 pl-6">
-          {CUSTOMER_CAUTIONS.map((text) => (
-            <li key={text}>{text}</li>
-          ))}
-        </ul>
-      </section>
+      <CustomerCautions cautions={CUSTOMER_CAUTIONS} />
 
       <p className="mt-8 text-base">
         <Link href="/" className="inline-flex min-h-12 items-center font-semibold text-gauge-700 underline">
