@@ -5,25 +5,12 @@ import { centsToText, formatMoney } from '@/lib/format';
 import { amountWithin } from '@/lib/forms/amount';
 import { Button } from '@/components/ui/button';
 import { RadioGroup } from '@/components/ui/field';
-import type { QuoteRecord } from '@/lib/quotes/types';
-import type { QuoteRun } from './quote-run';
+import type { QuotePanelProps } from './quote-run';
 
 // The balance once the deposit is paid: what the job came to, what was paid and refunded, what is left,
 // and the two ways to take the rest — e-mail the customer a pay-online link, or record money taken at
 // the counter. The server checks the amount against the balance again and refuses a stale version.
-export function BalancePanel({
-  quote,
-  url,
-  run,
-  busy,
-  canWrite,
-}: {
-  quote: QuoteRecord;
-  url: string;
-  run: QuoteRun;
-  busy: boolean;
-  canWrite: boolean;
-}) {
+export function BalancePanel({ quote, url, run, busy, canWrite }: QuotePanelProps) {
   const due = quote.balanceDueCents;
   const [amount, setAmount] = useState(centsToText(due));
   const [method, setMethod] = useState<'cash' | 'card-present'>('card-present');

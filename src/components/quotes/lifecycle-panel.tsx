@@ -8,7 +8,7 @@ import { Button, ButtonAnchor } from '@/components/ui/button';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { canRevise, isOpen, staffMoves, stateWord, type QuoteStatus } from '@/lib/quotes/lifecycle';
-import type { QuoteRun } from './quote-run';
+import type { QuotePanelProps } from './quote-run';
 
 // Where the quote stands and what staff may do next: only the moves the lifecycle allows from here are
 // offered (the server checks again and answers 409 otherwise). Revising opens the new draft.
@@ -21,19 +21,7 @@ const MOVE_LABEL: Partial<Record<QuoteStatus, string>> = {
 };
 const NEEDS_CONFIRM: readonly QuoteStatus[] = ['declined', 'cancelled', 'expired', 'closed'];
 
-export function LifecyclePanel({
-  quote,
-  url,
-  run,
-  busy,
-  canWrite,
-}: {
-  quote: QuoteRecord;
-  url: string;
-  run: QuoteRun;
-  busy: boolean;
-  canWrite: boolean;
-}) {
+export function LifecyclePanel({ quote, url, run, busy, canWrite }: QuotePanelProps) {
   const router = useRouter();
   const [confirming, setConfirming] = useState<QuoteStatus | null>(null);
   const [validUntil, setValidUntil] = useState(quote.validUntil ?? '');
