@@ -1,13 +1,13 @@
 import crypto from 'node:crypto';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { QueryTypes } from 'sequelize';
-import request from 'supertest';
 import { AuditEntry, Lead, LeadNote, ShopSettings } from '@/lib/db/models';
 import { expectNoSeriousA11yViolations } from '../support/a11y';
 import { launchBrowser, watchedPage } from '../support/browser';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { clearRateLimits } from '../support/rate-limits';
+import { postTestLead } from '../support/leads';
 import { readRuntime } from '../support/runtime';
 
 // Leads that go cold are flagged: a new lead nobody has called or noted for the shop's number of days
@@ -39,25 +39,7 @@ describe('stale leads are flagged', () => {
   const card = (page: Page, name: string) =>
     page.getByRole('article').filter({ has: page.getByRole('heading', { name: new RegExp(name) }) });
 
-  async function postLead(name: string): Promise<number> {
-    const sent = await request(appUrl)
-      .post('/api/leads')
-      .send({
-        engine: '5.3',
-        use: 'daily',
-        idle: 'smooth',
-        emissions: 'no',
-        transmission: 'automatic',
-        driveline: 'stock',
-        exhaust: 'stock',
-        budget: 'unsure',
-        name,
-        email: `stale-${tag}-${name.split(' ')[0].toLowerCase()}@example.com`,
-        consent: true,
-      });
-    if (sent.status !== 201) throw new Error(`lead fixture answered ${sent.status}: ${JSON.stringify(sent.body)}`);
-    return sent.body.id;
-  }
+  const postLead = (name: string) => postTestLead(name, `stale-${tag}`);
   async function staffPage(context: BrowserContext): Promise<Page> {
     const page = await watchedPage(context, pageErrors);
     return page;

@@ -4,6 +4,7 @@ import { AuditEntry, Lead, LeadNote, ShopSettings } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { clearRateLimits } from '../support/rate-limits';
+import { postTestLead } from '../support/leads';
 import { readRuntime } from '../support/runtime';
 
 // GET /api/leads says which leads have gone cold, as the leads page does: `staleDays` on each new lead
@@ -21,25 +22,7 @@ describe('GET /api/leads flags leads that went cold', () => {
   let settingsBefore = 2;
   const ids = { old: 0, young: 0 };
 
-  async function postLead(name: string): Promise<number> {
-    const sent = await request(appUrl)
-      .post('/api/leads')
-      .send({
-        engine: '5.3',
-        use: 'daily',
-        idle: 'smooth',
-        emissions: 'no',
-        transmission: 'automatic',
-        driveline: 'stock',
-        exhaust: 'stock',
-        budget: 'unsure',
-        name,
-        email: `stale-api-${tag}-${name.split(' ')[0].toLowerCase()}@example.com`,
-        consent: true,
-      });
-    if (sent.status !== 201) throw new Error(`lead fixture answered ${sent.status}: ${JSON.stringify(sent.body)}`);
-    return sent.body.id;
-  }
+  const postLead = (name: string) => postTestLead(name, `stale-api-${tag}`);
 
   /** Walks the pages of new leads until it has seen the one asked for. */
   async function listed(id: number): Promise<{ lead: ListedLead; list: LeadList }> {
