@@ -3,46 +3,14 @@
 // It runs as one esbuild bundle, as the app runs it inside the Next build: under tsx every cross-module
 // call goes through an export getter, which is a development cost, not the advisor's.
 import { rankCams } from '../lib/advisor';
+import { dailyTruck } from '../lib/builds/sample-trucks';
 import { BuildProfileSchema } from '../lib/schemas/build-profile';
 import { CamCatalogueSchema, type CamCard } from '../lib/schemas/cam-card';
 import { generatedCatalogue } from './generated-catalogue';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const { demoCamCards } = require('../../database/demo-cams.cjs') as { demoCamCards: () => unknown[] };
 
-const build = BuildProfileSchema.parse({
-  engine: {
-    cylinders: 8,
-    boreIn: 3.78,
-    strokeIn: 3.622,
-    rodLengthIn: 6.098,
-    compressionRatio: 9.9,
-    headMaterial: 'aluminum',
-    intakeFlowCfm: 240,
-    intakeManifold: 'truck',
-    cylinderDeactivation: 'none',
-  },
-  exhaust: { headers: 'long-tube', primaryIn: 1.75, system: 'full' },
-  drivetrain: { transmission: 'automatic', stallRpm: 2200, axleRatio: 3.73, topGearRatio: 0.7, tireDiameterIn: 31 },
-  vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-  use: {
-    primary: 'daily',
-    idle: 'smooth',
-    fuelOctane: 91,
-    emissionsRequired: false,
-    cruiseMph: 70,
-    budgetCents: 250000,
-  },
-  baselineCam: {
-    id: 'stock',
-    name: 'Stock',
-    intakeDuration050: 190,
-    exhaustDuration050: 191,
-    intakeLiftIn: 0.467,
-    exhaustLiftIn: 0.479,
-    lsa: 114.5,
-    intakeCenterline: 114.5,
-  },
-});
+const build = BuildProfileSchema.parse(dailyTruck());
 
 function medianMs(cams: readonly CamCard[], runs: number): { medianMs: number; fullyModelled: number } {
   rankCams(build, cams); // warm-up (JIT)

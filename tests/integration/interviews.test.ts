@@ -1,7 +1,8 @@
 import { Op } from 'sequelize';
 import request from 'supertest';
 import { AuditEntry, Build, Customer } from '@/lib/db/models';
-import { BuildProfileSchema, type BuildProfileInput } from '@/lib/schemas/build-profile';
+import { towingTruck } from '@/lib/builds/sample-trucks';
+import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
@@ -13,43 +14,8 @@ import { DEMO, MISSING_ID } from '../support/demo';
 const { appUrl } = readRuntime();
 const MARK = `Interview Test ${process.pid}`;
 
-// A stock 5.3 L towing truck (figures approximate, from memory), as the interview form sends it.
-function truckProfile(): BuildProfileInput {
-  return {
-    engine: {
-      cylinders: 8,
-      boreIn: 3.78,
-      strokeIn: 3.622,
-      rodLengthIn: 6.098,
-      compressionRatio: 9.9,
-      headMaterial: 'aluminum',
-      intakeFlowCfm: 240,
-      intakeManifold: 'truck',
-      cylinderDeactivation: 'active',
-    },
-    exhaust: { headers: 'manifold', system: 'full-with-cats' },
-    drivetrain: { transmission: 'automatic', stallRpm: 2000, axleRatio: 3.42, topGearRatio: 0.7, tireDiameterIn: 31 },
-    vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-    use: {
-      primary: 'towing',
-      idle: 'smooth',
-      fuelOctane: 87,
-      emissionsRequired: true,
-      cruiseMph: 65,
-      budgetCents: 350000,
-    },
-    baselineCam: {
-      id: 'typed',
-      name: 'Stock card as typed',
-      intakeDuration050: 190,
-      exhaustDuration050: 191,
-      intakeLiftIn: 0.467,
-      exhaustLiftIn: 0.479,
-      lsa: 114.5,
-      intakeCenterline: 114.5,
-    },
-  };
-}
+// A stock 5.3 L towing truck, as the interview form sends it.
+const truckProfile = towingTruck;
 
 describe('customers and builds API (counter interview)', () => {
   let counter: string;

@@ -1,6 +1,7 @@
 import crypto from 'node:crypto';
 import type Stripe from 'stripe';
 import request from 'supertest';
+import { towingTruck } from '@/lib/builds/sample-trucks';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import { readRuntime } from './runtime';
 import { DEMO } from './demo';
@@ -23,42 +24,7 @@ export type FixtureQuote = {
 export const dayFromToday = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
 
 // A stock 5.3 L towing truck (figures approximate, from memory), the shape the interview form sends.
-export function truckProfile() {
-  return {
-    engine: {
-      cylinders: 8,
-      boreIn: 3.78,
-      strokeIn: 3.622,
-      rodLengthIn: 6.098,
-      compressionRatio: 9.9,
-      headMaterial: 'aluminum',
-      intakeFlowCfm: 240,
-      intakeManifold: 'truck',
-      cylinderDeactivation: 'active',
-    },
-    exhaust: { headers: 'manifold', system: 'full-with-cats' },
-    drivetrain: { transmission: 'automatic', stallRpm: 2000, axleRatio: 3.42, topGearRatio: 0.7, tireDiameterIn: 31 },
-    vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-    use: {
-      primary: 'towing',
-      idle: 'smooth',
-      fuelOctane: 87,
-      emissionsRequired: true,
-      cruiseMph: 65,
-      budgetCents: 350000,
-    },
-    baselineCam: {
-      id: 'typed',
-      name: 'Stock card as typed',
-      intakeDuration050: 190,
-      exhaustDuration050: 191,
-      intakeLiftIn: 0.467,
-      exhaustLiftIn: 0.479,
-      lsa: 114.5,
-      intakeCenterline: 114.5,
-    },
-  };
-}
+export const truckProfile = towingTruck;
 
 export const FIXTURE_CAM_ID = DEMO.cams.bigTruck219; // a seeded truck cam the demo's rules price for this build
 

@@ -1,4 +1,5 @@
 import { predictCurve, rankCams } from '@/lib/advisor';
+import { dailyTruck, patchProfile, type ProfilePatch } from '@/lib/builds/sample-trucks';
 import { BuildProfileSchema, type BuildProfile, type BuildProfileInput } from '@/lib/schemas/build-profile';
 import { formatZodIssues } from '@/lib/schemas/errors';
 import type { CamCard } from '@/lib/schemas/cam-card';
@@ -7,47 +8,16 @@ import { build, cam, stockTruckCam } from './fixtures';
 // Each defect issue 8 reported, rebuilt from the input that showed it. Engine specs are the makers'
 // published figures, from memory; the expectations are common practice of the trade, no published source.
 
-const input = (
-  p: {
-    engine?: Partial<BuildProfileInput['engine']>;
-    exhaust?: Partial<BuildProfileInput['exhaust']>;
-    use?: Partial<BuildProfileInput['use']>;
-    drivetrain?: Partial<BuildProfileInput['drivetrain']>;
-  } = {},
-): BuildProfileInput => ({
-  engine: {
-    cylinders: 8,
-    boreIn: 3.78,
-    strokeIn: 3.622,
-    rodLengthIn: 6.098,
-    compressionRatio: 9.9,
-    headMaterial: 'aluminum',
-    intakeFlowCfm: 240,
-    intakeManifold: 'truck',
-    cylinderDeactivation: 'none',
-    ...p.engine,
-  },
-  exhaust: { headers: 'long-tube', primaryIn: 1.75, system: 'full', ...p.exhaust },
-  drivetrain: {
-    transmission: 'automatic',
-    stallRpm: 2200,
-    axleRatio: 3.42,
-    topGearRatio: 0.7,
-    tireDiameterIn: 30,
-    ...p.drivetrain,
-  },
-  vehicle: { weightLb: 5000, powerBrakes: 'vacuum' },
-  use: {
-    primary: 'daily',
-    idle: 'smooth',
-    fuelOctane: 87,
-    emissionsRequired: false,
-    cruiseMph: 65,
-    budgetCents: 300000,
-    ...p.use,
-  },
-  baselineCam: stockTruckCam,
-});
+// The bench's daily truck (src/lib/builds/sample-trucks.ts) with the gearing, weight and use issue 8 reported.
+const input = (p: Pick<ProfilePatch, 'engine' | 'exhaust' | 'use' | 'drivetrain'> = {}): BuildProfileInput =>
+  patchProfile(dailyTruck(), {
+    engine: p.engine,
+    exhaust: p.exhaust,
+    drivetrain: { axleRatio: 3.42, tireDiameterIn: 30, ...p.drivetrain },
+    vehicle: { weightLb: 5000 },
+    use: { fuelOctane: 87, cruiseMph: 65, budgetCents: 300000, ...p.use },
+    baselineCam: stockTruckCam,
+  });
 const truck53 = (p: Parameters<typeof input>[0] = {}): BuildProfile => build(input(p));
 const mild212 = cam({
   id: 'm212',

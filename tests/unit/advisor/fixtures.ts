@@ -1,3 +1,4 @@
+import { patchProfile, STOCK_TRUCK_CAM, type ProfilePatch } from '@/lib/builds/sample-trucks';
 import { BuildProfileSchema, type BuildProfile, type BuildProfileInput } from '@/lib/schemas/build-profile';
 import { CamCardSchema, type CamCard, type CamCardInput } from '@/lib/schemas/cam-card';
 
@@ -5,18 +6,8 @@ import { CamCardSchema, type CamCard, type CamCardInput } from '@/lib/schemas/ca
 export const cam = (c: CamCardInput): CamCard => CamCardSchema.parse(c);
 export const build = (b: BuildProfileInput): BuildProfile => BuildProfileSchema.parse(b);
 
-// Dyno facts (common practice, measured on an engine dyno, no published source; values from memory):
-// stock truck cam about 190°/191° at 0.050", 0.467"/0.479" lift, 114.5° LSA (installed straight up).
-export const stockTruckCam = cam({
-  id: 'stock',
-  name: 'Stock truck cam (approximate)',
-  intakeDuration050: 190,
-  exhaustDuration050: 191,
-  intakeLiftIn: 0.467,
-  exhaustLiftIn: 0.479,
-  lsa: 114.5,
-  intakeCenterline: 114.5,
-});
+// The stock truck cam (about 190°/191° at 0.050"), written once in src/lib/builds/sample-trucks.ts.
+export const stockTruckCam = cam(STOCK_TRUCK_CAM);
 // "A truck-oriented cam of about 212° intake": exhaust, lift, LSA and ICL are our plausible picks.
 export const truckCam = cam({
   id: 'truck-212',
@@ -73,23 +64,7 @@ export const dynoInput: BuildProfileInput = {
 };
 export const dynoBuild = build(dynoInput);
 
-type Patch = {
-  engine?: Partial<BuildProfileInput['engine']>;
-  exhaust?: Partial<BuildProfileInput['exhaust']>;
-  drivetrain?: Partial<BuildProfileInput['drivetrain']>;
-  vehicle?: Partial<BuildProfileInput['vehicle']>;
-  use?: Partial<BuildProfileInput['use']>;
-  baselineCam?: CamCardInput;
-};
-
 /** The dyno build with some fields changed (validated again). */
-export function variant(p: Patch, base: BuildProfileInput = dynoInput): BuildProfile {
-  return build({
-    engine: { ...base.engine, ...p.engine },
-    exhaust: { ...base.exhaust, ...p.exhaust },
-    drivetrain: { ...base.drivetrain, ...p.drivetrain },
-    vehicle: { ...base.vehicle, ...p.vehicle },
-    use: { ...base.use, ...p.use },
-    baselineCam: p.baselineCam ?? base.baselineCam,
-  } as BuildProfileInput);
+export function variant(p: ProfilePatch, base: BuildProfileInput = dynoInput): BuildProfile {
+  return build(patchProfile(base, p));
 }
