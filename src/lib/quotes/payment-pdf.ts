@@ -1,9 +1,9 @@
-import { formatMoney, longDate, percentFromBp } from '@/lib/format';
+import { longDate, percentFromBp } from '@/lib/format';
 import { palette } from '@/lib/palette';
 import type { QuoteRecord } from './types';
 import { counts, invoiceNumber, METHOD_WORDS, PURPOSE_WORDS, receiptNumber } from './balance';
 import { openPdf } from './pdf';
-import { isTaxable } from './pricing';
+import { moneyTable } from './pdf-table';
 
 // A receipt for one payment and the final invoice of a job paid in full, as PDFs (pdfkit, the app's
 // own Inter). Every figure comes from the quote as it was sent and paid: its stored lines, tax and
@@ -12,28 +12,10 @@ import { isTaxable } from './pricing';
 
 export type DocumentShop = { name: string; address: string; phone: string; email: string };
 
-type Kit = {
-  doc: PDFKit.PDFDocument;
-  done: Promise<Buffer>;
-  left: number;
-  width: number;
-  row: (label: string, cents: number, strong?: boolean) => void;
-};
-
-function startDocument(title: string, shop: DocumentShop): Kit {
+function startDocument(title: string, shop: DocumentShop) {
   const { doc, done, left, width } = openPdf(title, shop);
-  const amountX = left + width - 110;
-  const row = (label: string, cents: number, strong = false) => {
-    const y = doc.y;
-    doc
-      .font(strong ? 'bold' : 'regular')
-      .fontSize(strong ? 12 : 10)
-      .text(label, left, y, { width: width - 120 });
-    doc.text(formatMoney(cents), amountX, y, { width: 110, align: 'right' });
-    doc.x = left;
-  };
   doc.moveDown().fillColor(palette.ink.DEFAULT);
-  return { doc, done, left, width, row };
+  return { doc, done, left, width, ...moneyTable(doc, left, width) };
 }
 
 const forWhom = (q: QuoteRecord) => `For ${q.customer.name}${q.build ? `, ${q.build.vehicleLabel}` : ''}`;
@@ -78,7 +60,7 @@ export function receiptPdf(q: QuoteRecord, paymentId: number, shop: DocumentShop
 
 /** The final invoice: the quote's own lines and totals, every payment, and nothing left to pay. */
 export function invoicePdf(q: QuoteRecord, shop: DocumentShop): Promise<Buffer> {
-  const { doc, done, left, width, row } = startDocument(`Invoice ${invoiceNumber(q.number)}`, shop);
+  const { doc, done, left, width, row, lines } = startDocument(`Invoice ${invoiceNumber(q.number)}`, shop);
   doc
     .font('bold')
     .fontSize(20)
@@ -90,37 +72,7 @@ export function invoicePdf(q: QuoteRecord, shop: DocumentShop): Promise<Buffer> 
     .text(q.closedAt ? `Paid in full · closed ${longDate(q.closedAt)}` : 'Paid in full')
     .font('regular');
   doc.moveDown();
-  doc
-    .font('bold')
-    .fontSize(10)
-    .text('Work and parts', left, doc.y, { width: width - 120 });
-  doc
-    .moveTo(left, doc.y + 2)
-    .lineTo(left + width, doc.y + 2)
-    .stroke(palette.steel[500]);
-  doc.moveDown(0.5);
-  for (const line of q.lines) {
-    const y = doc.y;
-    const detail = `${line.kind === 'labor' ? `${line.quantity} h at ${formatMoney(line.unitPriceCents)}` : `${line.quantity} × ${formatMoney(line.unitPriceCents)}`}${line.discountCents ? `, ${formatMoney(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
-    doc
-      .font('regular')
-      .fontSize(10)
-      .text(line.description, left, y, { width: width - 120 });
-    doc
-      .fontSize(8)
-      .fillColor(palette.ink.muted)
-      .text(detail, { width: width - 120 })
-      .fillColor(palette.ink.DEFAULT);
-    const after = doc.y;
-    doc.fontSize(10).text(formatMoney(line.totalCents), left + width - 110, y, { width: 110, align: 'right' });
-    doc.y = Math.max(after, doc.y) + 4;
-    doc.x = left;
-  }
-  doc
-    .moveTo(left, doc.y)
-    .lineTo(left + width, doc.y)
-    .stroke(palette.steel[500]);
-  doc.moveDown(0.5);
+  lines('Work and parts', q.lines);
   row('Before tax', q.subtotalCents);
   row(`Sales tax (${percentFromBp(q.taxRateBp)} on parts and goods)`, q.taxCents);
   row('Total', q.totalCents, true);

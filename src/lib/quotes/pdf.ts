@@ -1,11 +1,11 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import PDFDocument from 'pdfkit';
-import { formatMoney, longDate, percentFromBp } from '@/lib/format';
+import { longDate, percentFromBp } from '@/lib/format';
 import { palette } from '@/lib/palette';
 import { CUSTOMER_CAUTIONS, REFUND_NOTE } from './cautions';
 import type { QuoteRecord } from './types';
-import { isTaxable, type QuoteLineKind } from './pricing';
+import { moneyTable, type TableLine } from './pdf-table';
 
 // The printable quote as a PDF (pdfkit). Fonts are the app's own Inter files (TrueType copies of the
 // WOFF2 the pages use, in src/app/fonts; pdfkit cannot subset the WOFF2 ones), so nothing is fetched
@@ -30,14 +30,7 @@ export type QuoteDocument = QuoteFigures & {
   stateWord: string;
   customerName: string;
   vehicleLabel: string | null;
-  lines: {
-    kind: QuoteLineKind;
-    description: string;
-    quantity: number;
-    unitPriceCents: number;
-    discountCents: number;
-    totalCents: number;
-  }[];
+  lines: TableLine[];
   replacedBy: string | null;
   shop: { name: string; address: string; phone: string; email: string; depositPolicyText: string };
 };
@@ -98,47 +91,8 @@ export function quotePdf(q: QuoteDocument, options: { compress?: boolean } = {})
   if (q.replacedBy) doc.font('bold').text(`Replaced by a newer quote: ${q.replacedBy}`).font('regular');
   doc.moveDown();
 
-  // The lines: description on the left, the line total on the right.
-  const amountX = left + width - 100;
-  doc
-    .font('bold')
-    .fontSize(10)
-    .text('What is included', left, doc.y, { width: width - 110 });
-  doc
-    .moveTo(left, doc.y + 2)
-    .lineTo(left + width, doc.y + 2)
-    .stroke(palette.steel[500]);
-  doc.moveDown(0.5);
-  for (const line of q.lines) {
-    const y = doc.y;
-    const detail = `${line.kind === 'labor' ? `${line.quantity} h of labour at ${formatMoney(line.unitPriceCents)}` : `${line.quantity} × ${formatMoney(line.unitPriceCents)}`}${line.discountCents ? `, ${formatMoney(line.discountCents)} off` : ''}${isTaxable(line.kind) ? '' : ', no sales tax'}`;
-    doc
-      .font('regular')
-      .fontSize(10)
-      .text(line.description, left, y, { width: width - 110 });
-    doc
-      .fontSize(8)
-      .fillColor(palette.ink.muted)
-      .text(detail, { width: width - 110 })
-      .fillColor(palette.ink.DEFAULT);
-    const after = doc.y;
-    doc.fontSize(10).text(formatMoney(line.totalCents), amountX, y, { width: 100, align: 'right' });
-    doc.y = Math.max(after, doc.y) + 4;
-  }
-  doc
-    .moveTo(left, doc.y)
-    .lineTo(left + width, doc.y)
-    .stroke(palette.steel[500]);
-  doc.moveDown(0.5);
-  const row = (label: string, cents: number, strong = false) => {
-    const y = doc.y;
-    doc
-      .font(strong ? 'bold' : 'regular')
-      .fontSize(strong ? 12 : 10)
-      .text(label, left, y, { width: width - 110 });
-    doc.text(formatMoney(cents), amountX, y, { width: 100, align: 'right' });
-    doc.x = left;
-  };
+  const { row, lines } = moneyTable(doc, left, width);
+  lines('What is included', q.lines);
   row('Before tax', q.subtotalCents);
   row(`Sales tax (${percentFromBp(q.taxRateBp)} on parts and goods)`, q.taxCents);
   row('Total', q.totalCents, true);
