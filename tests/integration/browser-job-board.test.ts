@@ -63,12 +63,31 @@ describe('the job board in the browser', () => {
   });
   afterEach(() => expect(pageErrors).toEqual([]));
 
-  it('shows the paid job as not booked yet, and books it for today with a bay and a technician', async () => {
+  it('shows the paid job as not booked yet, its build sheet in words, and books it for today with a bay and a technician', async () => {
     await boardRow().waitFor();
     await expect(boardRow().textContent()).resolves.toContain('Not booked yet');
     await boardRow().getByRole('link', { name: job.number }).click();
     await progress().waitFor();
     await expect(progress().textContent()).resolves.toContain('Not booked yet');
+    // The build sheet reads in words: the fixture's truck (truckProfile) is stored as aluminum, truck, active,
+    // manifold, full-with-cats, automatic, vacuum and towing; the bench sees sentences, never those codes.
+    const engine = page.getByRole('region', { name: 'Engine combination' });
+    const values = await engine.locator('dd').allTextContents();
+    expect(values).toEqual(
+      expect.arrayContaining([
+        expect.stringMatching(/^Aluminium heads, /),
+        'Truck intake (long runners)',
+        'Fitted and working',
+        'Cast manifolds (stock) · Full exhaust with catalytic converters',
+        'Automatic · 2,000 rpm stall',
+        'Vacuum brake booster',
+        'Towing and hauling',
+      ]),
+    );
+    const codes = ['aluminum', 'truck', 'active', 'manifold', 'full-with-cats', 'automatic', 'vacuum', 'towing'];
+    expect(
+      values.filter((v) => codes.some((code) => new RegExp(`(^|[^A-Za-z-])${code}($|[^A-Za-z-])`).test(v))),
+    ).toEqual([]);
 
     await progress().getByLabel('Booked for').fill(shopDay(0));
     await progress().getByLabel('Bay').focus();

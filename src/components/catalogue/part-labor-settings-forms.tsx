@@ -6,6 +6,7 @@ import { CATALOGUE_CAM_LIMITS as CAM } from '@/lib/schemas/catalogue-cam';
 import { LABOR_LIMITS } from '@/lib/schemas/labor';
 import { PART_CATEGORY_LIST, PART_LIMITS } from '@/lib/schemas/part';
 import { SETTINGS_LIMITS } from '@/lib/schemas/settings';
+import { AIR_UNITS, AIR_UNITS_WORDS } from '@/lib/dyno/units';
 import { RecordForm, type FieldDef } from './generic-record-form';
 import { Banner } from '@/components/ui/banner';
 
@@ -166,6 +167,14 @@ export function SettingsForm({ settings }: { settings: Rec }) {
       hint: `${S.leadStaleDays.min}–${S.leadStaleDays.max}; a note, or moving it past New, counts as contact`,
       range: S.leadStaleDays,
       term: 'days before a lead is flagged',
+    },
+    {
+      name: 'dynoAirUnits',
+      label: 'Dyno air conditions in',
+      kind: 'select',
+      options: AIR_UNITS.map((u) => ({ value: u, label: AIR_UNITS_WORDS[u] })),
+      hint: 'how the job page asks for and shows the dyno cell’s air; runs are stored in °C and kPa either way',
+      term: 'dyno air units',
     },
   ];
   return (

@@ -26,7 +26,7 @@ const STANDARD_NAMES: Record<string, string> = {
 };
 const fixed = (n: number | null | undefined, digits: number, unit: string) =>
   n === null || n === undefined ? '—' : `${n.toFixed(digits)} ${unit}`;
-// Shown in the units the form is set to; stored in °C and kPa.
+// Shown in the units of the shop's setting; stored in °C and kPa.
 function airText(air: DynoRunView['air'], units: AirUnits): string {
   const u = AIR_UNIT_TEXT[units];
   const d = AIR_DIGITS[units];
@@ -48,15 +48,16 @@ export function DynoPanel({
   buildId,
   quoteId,
   profile,
+  units,
 }: {
   buildId: number;
   quoteId: number;
   profile: BuildProfile | null;
+  /** The shop's setting (shop_settings.dyno_air_units): how the air is typed and shown. */
+  units: AirUnits;
 }) {
   const { data, error, isLoading, mutate } = useSWR(`/api/dyno-runs?buildId=${buildId}`, fetchRuns);
   const [message, setMessage] = useState<string | null>(null);
-  // Shop units by default; a shop that reads °C and kPa switches in the form (not yet a shop setting).
-  const [units, setUnits] = useState<AirUnits>('imperial');
   const runs = data ?? [];
   const before = runs.filter((r) => r.phase === 'before' && r.correctedCurve).at(-1);
   const baseline = before ? curveOf(before) : null;
@@ -196,13 +197,7 @@ export function DynoPanel({
         </figure>
       ) : null}
       <div className="rounded border border-steel-100 bg-paper-raised p-3 print:hidden">
-        <DynoRunForm
-          buildId={buildId}
-          quoteId={quoteId}
-          units={units}
-          onUnitsChange={setUnits}
-          onSaved={() => void mutate()}
-        />
+        <DynoRunForm buildId={buildId} quoteId={quoteId} units={units} onSaved={() => void mutate()} />
       </div>
     </section>
   );

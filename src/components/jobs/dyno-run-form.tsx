@@ -6,15 +6,16 @@ import { Button } from '@/components/ui/button';
 import { submitOnCtrlEnter } from '@/components/ui/keys';
 import { AIR_NEEDED_BY, CORRECTION_TEXT, STANDARD_LABELS } from '@/lib/dyno/correction';
 import { DYNO_TYPES, DYNO_TYPE_WORDS } from '@/lib/dyno/dyno-type';
-import { AIR_UNIT_TEXT, type AirUnits } from '@/lib/dyno/units';
+import { AIR_UNITS_WORDS, type AirUnits } from '@/lib/dyno/units';
 import { sendJson } from '@/lib/api-client';
 import { DYNO_LIMITS as L } from '@/lib/schemas/dyno-run';
-import { AIR_FIELDS, airFieldText, airSchema } from './dyno-air-schema';
+import { AIR_FIELDS, airFieldText, airSchema } from '@/lib/forms/dyno-air-checks';
 import { CurveInput } from './dyno-curve-input';
 import { FieldProblem, NumberBox } from './dyno-fields';
-import { convertAir, initialValues, payloadOf, schemaErrors, toFormErrors, type Values } from './dyno-run-values';
+import { initialValues, payloadOf, schemaErrors, toFormErrors, type Values } from './dyno-run-values';
 
-// Recording one dyno pull. The air is typed in the shop's units and sent in °C and kPa; the rest is checked
+// Recording one dyno pull. The air is typed in the units of the shop's setting (°F and inHg, or °C and kPa; a
+// manager changes it on the settings page) and sent in °C and kPa; the rest is checked
 // with yup built from the schema's limits, in the server's words (lib/forms/dyno-checks.ts); the route uses zod.
 
 const ENTRY_CHOICES = [
@@ -27,13 +28,11 @@ export function DynoRunForm({
   buildId,
   quoteId,
   units,
-  onUnitsChange,
   onSaved,
 }: {
   buildId: number;
   quoteId: number;
   units: AirUnits;
-  onUnitsChange: (units: AirUnits) => void;
   onSaved: () => void;
 }) {
   const ids = { buildId, quoteId };
@@ -71,7 +70,7 @@ export function DynoRunForm({
       validate={(values) => schemaErrors(values, ids, units)}
       onSubmit={submit}
     >
-      {({ values, isSubmitting, status, setValues, setFieldValue, submitForm }) => (
+      {({ values, isSubmitting, status, setFieldValue, submitForm }) => (
         <Form
           className="flex flex-col gap-3"
           noValidate
@@ -152,24 +151,10 @@ export function DynoRunForm({
           </div>
           <fieldset className="flex flex-wrap items-start gap-4">
             <legend className="mb-1 text-sm font-semibold">Air in the dyno cell</legend>
-            <div role="radiogroup" aria-label="Units for the air" className="flex flex-col gap-1 text-sm">
-              <span className="font-semibold">Units</span>
-              {(['imperial', 'metric'] as const).map((u) => (
-                <label key={u} className="flex items-center gap-1">
-                  <input
-                    type="radio"
-                    name="air-units"
-                    value={u}
-                    checked={units === u}
-                    onChange={() => {
-                      void setValues(convertAir(values, units, u));
-                      onUnitsChange(u);
-                    }}
-                  />
-                  {AIR_UNIT_TEXT[u].toggle}
-                </label>
-              ))}
-            </div>
+            <p className="basis-full text-xs text-ink-muted">
+              In {AIR_UNITS_WORDS[units]}, the shop’s setting (a manager changes it under Prices and deposit); kept in
+              °C and kPa.
+            </p>
             {AIR_FIELDS.map(({ name, si }) => {
               const text = airFieldText(units, si);
               const needed = AIR_NEEDED_BY[values.correctionStandard].includes(si);

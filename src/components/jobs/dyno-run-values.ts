@@ -2,7 +2,8 @@ import type { FormikErrors } from 'formik';
 import type { CorrectionStandard } from '@/lib/dyno/correction';
 import type { DynoType } from '@/lib/dyno/dyno-type';
 import { parseCurveCsv } from '@/lib/dyno/curve-csv';
-import { baroIn, baroToKpa, roundTo, tempIn, tempToCelsius, type AirUnits } from '@/lib/dyno/units';
+import type { AirUnits } from '@/lib/dyno/units';
+import { airInSi, boxNumber as num } from '@/lib/forms/dyno-air-checks';
 import { dynoRunChecks } from '@/lib/forms/dyno-checks';
 
 // The dyno form's values and the step from them to the API's payload. Number inputs hand formik a
@@ -14,7 +15,7 @@ export type Values = {
   dynoType: DynoType;
   runAt: string;
   correctionStandard: CorrectionStandard;
-  /** In the shop's units (°F or °C, inHg or kPa); converted to °C and kPa only in the payload. */
+  /** In the units of the shop's setting (°F or °C, inHg or kPa); converted to °C and kPa only in the payload. */
   airTemp: Num;
   baro: Num;
   humidityPct: Num;
@@ -44,25 +45,14 @@ export const initialValues: Values = {
   notes: '',
 };
 
-/** A box's value as a number for the payload; text is tolerated should a browser ever hand formik some. */
-export function num(value: unknown): number | undefined {
-  if (typeof value === 'number') return Number.isNaN(value) ? undefined : value;
-  if (typeof value === 'string' && value.trim() !== '') return Number(value);
-  return undefined;
-}
-
 export function payloadOf(values: Values, ids: { buildId: number; quoteId: number }, units: AirUnits) {
   const csv = values.entry === 'curve' ? parseCurveCsv(values.curveCsv) : { points: [], lines: [], errors: [] };
-  const temp = num(values.airTemp);
-  const baro = num(values.baro);
   const payload: Record<string, unknown> = {
     ...ids,
     phase: values.phase,
     dynoType: values.dynoType,
     correctionStandard: values.correctionStandard,
-    airTempC: temp === undefined ? undefined : tempToCelsius(units, temp),
-    baroKpa: baro === undefined ? undefined : baroToKpa(units, baro),
-    humidityPct: num(values.humidityPct),
+    ...airInSi(values, units),
     runAt: values.runAt ? new Date(values.runAt).toISOString() : undefined,
     notes: values.notes.trim() || undefined,
   };
@@ -100,7 +90,7 @@ export function toFormErrors(
   return out as FormikErrors<Values>;
 }
 
-/** The server's checks, in yup from the schema's limits (lib/forms/dyno-checks.ts), bar the air readings (dyno-air-schema.ts). */
+/** The server's checks, in yup from the schema's limits (lib/forms/dyno-checks.ts), bar the air readings (lib/forms/dyno-air-checks.ts). */
 export function schemaErrors(
   values: Values,
   ids: { buildId: number; quoteId: number },
@@ -113,16 +103,4 @@ export function schemaErrors(
     errors.curveCsv =
       csv.errors.slice(0, 3).join('; ') + (csv.errors.length > 3 ? ` (and ${csv.errors.length - 3} more lines)` : '');
   return errors;
-}
-
-/** The typed air readings in the other units, so switching the toggle never changes what was measured. */
-export function convertAir(values: Values, from: AirUnits, to: AirUnits): Values {
-  if (from === to) return values;
-  const t = num(values.airTemp);
-  const b = num(values.baro);
-  return {
-    ...values,
-    airTemp: t === undefined ? '' : roundTo(tempIn(to, tempToCelsius(from, t)), 1),
-    baro: b === undefined ? '' : roundTo(baroIn(to, baroToKpa(from, b)), to === 'imperial' ? 2 : 1),
-  };
 }

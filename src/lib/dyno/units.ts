@@ -3,11 +3,19 @@ import { KPA_PER_INHG } from './correction';
 // Air readings as the shop reads them. Stored and sent to the API in °C and kPa always; the form and
 // the run table convert at the edge. Pure.
 
-export type AirUnits = 'imperial' | 'metric';
+/** The shop's choice (shop_settings.dyno_air_units); 'imperial' is the default, as in the rest of the product. */
+export const AIR_UNITS = ['imperial', 'metric'] as const;
+export type AirUnits = (typeof AIR_UNITS)[number];
 
-export const AIR_UNIT_TEXT: Record<AirUnits, { temp: string; baro: string; toggle: string }> = {
-  imperial: { temp: '°F', baro: 'inHg', toggle: '°F · inHg' },
-  metric: { temp: '°C', baro: 'kPa', toggle: '°C · kPa' },
+export const AIR_UNIT_TEXT: Record<AirUnits, { temp: string; baro: string }> = {
+  imperial: { temp: '°F', baro: 'inHg' },
+  metric: { temp: '°C', baro: 'kPa' },
+};
+
+/** The settings page's choice, in words. */
+export const AIR_UNITS_WORDS: Record<AirUnits, string> = {
+  imperial: '°F and inHg',
+  metric: '°C and kPa',
 };
 
 export const fahrenheitFromCelsius = (c: number) => (c * 9) / 5 + 32;

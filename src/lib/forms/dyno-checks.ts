@@ -2,8 +2,8 @@ import * as yup from 'yup';
 import { DYNO_LIMITS as L } from '@/lib/schemas/dyno-run';
 import { fieldRule, isFiniteNumber, validateWithYup } from './yup-limits';
 
-// The dyno-run form's checks in the browser, bar the air readings (components/jobs/dyno-air-schema.ts checks
-// those in the units on screen): yup over the JSON the form sends, from the limits lib/schemas/dyno-run.ts
+// The dyno-run form's checks in the browser, bar the air readings (dyno-air-checks.ts checks
+// those in the units the shop chose): yup over the JSON the form sends, from the limits lib/schemas/dyno-run.ts
 // exports and in its words. POST /api/dyno-runs still validates the whole run with zod.
 
 function bounded(label: string, unit: string, { min, max }: { min: number; max: number }, whole = false) {

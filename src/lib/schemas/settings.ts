@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { text } from './text';
 import { boundedNumber, presence } from './cam-card';
 import { VersionSchema, wholeCents } from './catalogue-cam';
+import { AIR_UNITS } from '@/lib/dyno/units';
 
 // The shop's prices and policy: labour rate (cents per hour), tax rate (basis points, 1 % = 100 bp)
 // and the deposit (a percent of the quote total, kept between a minimum and a maximum).
@@ -49,6 +50,8 @@ export const ShopSettingsSchema = z
       leadStaleDays: boundedNumber('days before a lead is flagged', 'days', S.leadStaleDays)
         .int({ error: 'days before a lead is flagged must be a whole number of days' })
         .optional(),
+      // How the dyno form asks for the air; runs are stored in °C and kPa whatever this says. Optional like the above.
+      dynoAirUnits: z.enum(AIR_UNITS, { error: `dyno air units must be one of: ${AIR_UNITS.join(', ')}` }).optional(),
     },
     { error: presence('settings', 'an object') },
   )

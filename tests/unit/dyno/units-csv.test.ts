@@ -1,18 +1,43 @@
 import { parseCurveCsv } from '@/lib/dyno/curve-csv';
+import { KPA_PER_INHG } from '@/lib/dyno/correction';
 import {
+  baroIn,
   baroToKpa,
   celsiusFromFahrenheit,
   fahrenheitFromCelsius,
   inHgFromKpa,
   kpaFromInHg,
   rangeIn,
+  roundTo,
+  tempIn,
   tempToCelsius,
 } from '@/lib/dyno/units';
 import { DynoRunSchema } from '@/lib/schemas/dyno-run';
 
 // Shop units at the edge, SI inside: °F = °C × 9/5 + 32 (definition of the Fahrenheit scale);
-// 1 inHg = 3.386389 kPa (mercury at 0 °C, standard gravity; the same constant as the J607 correction).
+// 1 inHg = 3.38639 kPa: the conventional inch of mercury, a column of mercury at 0 °C under standard gravity
+// (13,595.1 kg/m³ × 9.80665 m/s² × 0.0254 m = 3,386.39 Pa); the same constant as the J607 correction.
 describe('air units', () => {
+  it('uses the conventional inch of mercury (at 0 °C): 1 inHg = 3.38639 kPa', () => {
+    expect(kpaFromInHg(1)).toBeCloseTo(3.38639, 5);
+    expect(KPA_PER_INHG).toBeCloseTo((13_595.1 * 9.80665 * 0.0254) / 1000, 5);
+    // A standard day in both sets of units: 29.92 inHg is 101.32 kPa; 100 kPa reads 29.53 inHg.
+    expect(roundTo(inHgFromKpa(100), 2)).toBe(29.53);
+    expect(roundTo(baroIn('imperial', 101.325), 2)).toBe(29.92);
+    expect(baroIn('metric', 101.325)).toBe(101.325);
+    expect(roundTo(tempIn('imperial', 25), 1)).toBe(77);
+    expect(tempIn('metric', 25)).toBe(25);
+    expect(tempIn('imperial', -40)).toBe(-40); // the one reading both scales share
+  });
+
+  it('gives back the typed value after a trip through SI, in either units', () => {
+    for (const f of [-4, 0, 59, 68.5, 140]) expect(tempIn('imperial', tempToCelsius('imperial', f))).toBeCloseTo(f, 10);
+    for (const inHg of [20.68, 29.92, 32.48])
+      expect(baroIn('imperial', baroToKpa('imperial', inHg))).toBeCloseTo(inHg, 10);
+    expect(tempToCelsius('metric', 21.5)).toBe(21.5);
+    expect(baroToKpa('metric', 98.7)).toBe(98.7);
+  });
+
   it('converts the fixed points of water and a standard day both ways', () => {
     expect(fahrenheitFromCelsius(0)).toBe(32);
     expect(fahrenheitFromCelsius(100)).toBe(212);

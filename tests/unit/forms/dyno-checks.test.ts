@@ -2,7 +2,7 @@ import { dynoRunChecks } from '@/lib/forms/dyno-checks';
 import { DYNO_LIMITS, DynoRunSchema } from '@/lib/schemas/dyno-run';
 import { expectSameVerdict, zodErrors } from '../../support/zod-errors';
 
-// The dyno form's yup checks (all but the air, which dyno-air-schema.ts checks in the units on screen) against
+// The dyno form's yup checks (all but the air, which dyno-air-checks.ts checks in the shop's units) against
 // the zod schema POST /api/dyno-runs uses: the same payloads, the same fields flagged in the same words.
 
 const base = { buildId: 1, quoteId: 2, phase: 'before', dynoType: 'chassis', correctionStandard: 'none' };

@@ -7,6 +7,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
+import type { AirUnits } from '@/lib/dyno/units';
 
 export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCreationAttributes<ShopSettings>> {
   declare id: CreationOptional<number>;
@@ -25,6 +26,8 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
   declare maxCounterDiscountBp: CreationOptional<number>;
   /** A new lead nobody has contacted or noted for this many days is flagged as waiting too long. */
   declare leadStaleDays: CreationOptional<number>;
+  /** How the job page asks for and shows a dyno run's air (°F/inHg or °C/kPa); runs are stored in °C and kPa. */
+  declare dynoAirUnits: CreationOptional<AirUnits>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -46,6 +49,7 @@ export class ShopSettings extends Model<InferAttributes<ShopSettings>, InferCrea
         currency: { type: DataTypes.CHAR(3), allowNull: false, defaultValue: 'usd' },
         maxCounterDiscountBp: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 500 },
         leadStaleDays: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 2 },
+        dynoAirUnits: { type: DataTypes.ENUM('imperial', 'metric'), allowNull: false, defaultValue: 'imperial' },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

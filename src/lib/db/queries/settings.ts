@@ -2,11 +2,17 @@ import 'server-only';
 import type { SessionUser } from '@/lib/auth/guard';
 import { recordAudit } from '@/lib/audit';
 import { conflict, notFound, runWrite, type WriteOutcome } from '@/lib/db/write';
+import type { AirUnits } from '@/lib/dyno/units';
 import { SHOP_SETTINGS_FIELDS, type ShopSettingsValues } from '@/lib/schemas/settings';
 import { ShopSettings } from '../models';
 
 export async function getShopSettings(): Promise<ShopSettings | null> {
   return ShopSettings.findOne({ order: [['id', 'ASC']] });
+}
+
+/** The units the job page's dyno form and run table use; the default when there is no settings row yet. */
+export async function getDynoAirUnits(): Promise<AirUnits> {
+  return (await getShopSettings())?.dynoAirUnits ?? 'imperial';
 }
 
 /** The shop's name for page chrome; the shell must render even while the database is away. */
@@ -36,6 +42,8 @@ export type ShopSettingsRecord = {
   maxCounterDiscountBp: number;
   /** A new lead untouched for this many days is flagged on the leads list and the staff home page. */
   leadStaleDays: number;
+  /** How the job page asks for and shows a dyno run's air; runs are stored in °C and kPa either way. */
+  dynoAirUnits: AirUnits;
   currency: string;
   version: number;
   updatedAt: string;
@@ -56,6 +64,7 @@ export function toShopSettingsRecord(s: ShopSettings): ShopSettingsRecord {
     depositPolicyText: s.depositPolicyText,
     maxCounterDiscountBp: s.maxCounterDiscountBp,
     leadStaleDays: s.leadStaleDays,
+    dynoAirUnits: s.dynoAirUnits,
     currency: s.currency,
     version: s.version,
     updatedAt: new Date(s.updatedAt).toISOString(),

@@ -5,6 +5,7 @@ import { Banner } from '@/components/ui/banner';
 import { PageHeader } from '@/components/ui/page-header';
 import { requireAccessForPage } from '@/lib/auth/guard';
 import { getShopSettingsRecord } from '@/lib/db/queries/settings';
+import { AIR_UNITS_WORDS } from '@/lib/dyno/units';
 
 export const metadata: Metadata = { title: 'Prices and deposit' };
 
@@ -24,7 +25,8 @@ export default async function SettingsPage() {
             Now: labour {formatMoney(settings.laborRateCents, { currency: settings.currency })}/h · tax{' '}
             {percentFromBp(settings.taxRateBp)} · deposit {percentFromBp(settings.depositPercentBp)} of the total, at
             least {formatMoney(settings.depositMinCents, { currency: settings.currency })} and at most{' '}
-            {formatMoney(settings.depositMaxCents, { currency: settings.currency })}.
+            {formatMoney(settings.depositMaxCents, { currency: settings.currency })}. Dyno air in{' '}
+            {AIR_UNITS_WORDS[settings.dynoAirUnits]}.
           </p>
           <SettingsForm settings={settings} />
         </>

@@ -13,6 +13,7 @@ import { valveEvents } from '@/lib/advisor/valve-events';
 import { requireAccessForPage } from '@/lib/auth/guard';
 import { getBoardJob, listAssignableStaff } from '@/lib/db/queries/job-board';
 import { getJobSheet } from '@/lib/db/queries/jobs';
+import { getDynoAirUnits } from '@/lib/db/queries/settings';
 import { words } from '@/lib/jobs/build-words';
 import { SIGN_OFF_STATES, type JobState } from '@/lib/jobs/states';
 import { stateWord } from '@/lib/quotes/lifecycle';
@@ -39,7 +40,11 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
   const job = await getJobSheet(Number(id));
   if (!job) notFound();
   // Only a deposit-paid quote is on the board; an accepted, unpaid one still shows its sheet.
-  const [board, staff] = await Promise.all([getBoardJob(job.quoteId), listAssignableStaff()]);
+  const [board, staff, airUnits] = await Promise.all([
+    getBoardJob(job.quoteId),
+    listAssignableStaff(),
+    getDynoAirUnits(),
+  ]);
   const p = job.profile;
   const ci = p ? displacementCi(p.engine.boreIn, p.engine.strokeIn, p.engine.cylinders) : null;
   const events = job.cam ? valveEvents(job.cam) : null;
@@ -230,7 +235,9 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
         </section>
       ) : null}
 
-      {job.buildId !== null ? <DynoPanel buildId={job.buildId} quoteId={job.quoteId} profile={p} /> : null}
+      {job.buildId !== null ? (
+        <DynoPanel buildId={job.buildId} quoteId={job.quoteId} profile={p} units={airUnits} />
+      ) : null}
     </div>
   );
 }
