@@ -333,6 +333,14 @@ export const accessMatrix: AccessRow[] = [
     permission: 'quotes.write',
     allowed: 422,
   },
+  // A counter discount above the shop's limit: only a manager approves it (an empty body names the version).
+  {
+    method: 'POST',
+    path: '/api/quotes/[id]/approve-discount',
+    url: `/api/quotes/${DEMO.quotes.vranesDraft}/approve-discount`,
+    permission: 'quotes.approve-discount',
+    allowed: 422,
+  },
   {
     method: 'GET',
     path: '/api/quotes/[id]/pdf',

@@ -7,7 +7,8 @@ import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 
 // Price authority (issue 12, item 8), over HTTP against the real build and MariaDB. Counter staff sell
 // catalogue items at the catalogue price, give discounts up to the manager's limit (shop settings,
-// 5 % unless changed), and cannot move a line to an untaxed kind; a manager may, and is audited.
+// 5 % unless changed; more waits for a manager's approval, see discount-approval.test.ts), and cannot move
+// a line to an untaxed kind; a manager may, and is audited.
 // Every test makes its own customer, build and draft.
 
 type Line = QuoteLineRecord;
@@ -121,19 +122,24 @@ describe('discounts', () => {
     expect(saved.totalCents).toBe(saved.subtotalCents + saved.taxCents);
   });
 
-  it('above the limit: 403 naming the discount for counter staff; a manager may, and it is audited', async () => {
+  it('above the limit: counter staff’s save waits for a manager, a manager’s own is approved; both audited', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Big discount')).id);
     const lines = quote.lines.map(editable);
     const i = camLineIndex(quote);
     const gross = quote.lines.reduce((s, l) => s + l.totalCents, 0);
     lines[i].discountCents = Math.min(lines[i].unitPriceCents, Math.ceil((gross * 800) / 10_000)); // about 8 %
-    const refused = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
-    expect(refused.status).toBe(403);
-    expect(refused.body.errors).toEqual([expect.objectContaining({ field: `lines.${i}.discountCents` })]);
-    expect(refused.body.errors[0].message).toMatch(/5 %/);
-    const allowed = await manager.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
+    const waiting = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
+    expect(waiting.status).toBe(200);
+    expect((waiting.body as Quote).discountApproval).toMatchObject({ state: 'pending', approvedBy: null });
+    const allowed = await manager
+      .patch(`/api/quotes/${quote.id}`)
+      .send({ version: (waiting.body as Quote).version, lines });
     expect(allowed.status).toBe(200);
-    expect(await audits('quote.discount-over-limit', quote.id)).toBe(1);
+    expect((allowed.body as Quote).discountApproval).toMatchObject({
+      state: 'approved',
+      approvedBy: { id: DEMO.users.manager },
+    });
+    expect(await audits('quote.discount-over-limit', quote.id)).toBe(2);
   });
 
   it('follows the limit the manager sets in the shop settings', async () => {
@@ -151,7 +157,9 @@ describe('discounts', () => {
       const i = camLineIndex(quote);
       const gross = quote.lines.reduce((s, l) => s + l.totalCents, 0);
       lines[i].discountCents = Math.min(lines[i].unitPriceCents, Math.floor((gross * 800) / 10_000));
-      expect((await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines })).status).toBe(200);
+      const saved = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
+      expect(saved.status).toBe(200);
+      expect((saved.body as Quote).discountApproval.state).toBe('none');
     } finally {
       const now = (await manager.get('/api/settings')).body as { version: number };
       await manager

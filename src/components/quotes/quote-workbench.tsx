@@ -15,6 +15,7 @@ import { roleCan } from '@/lib/auth/policy';
 import type { QuoteRecord } from '@/lib/quotes/types';
 import { isTaxable, lineTotalCents, QUOTE_LINE_KIND_LIST, type QuoteLineKind } from '@/lib/quotes/pricing';
 import { BalancePanel } from './balance-panel';
+import { DiscountApprovalPanel } from './discount-approval-panel';
 import { LifecyclePanel } from './lifecycle-panel';
 import { QuoteBasis } from './quote-basis';
 import type { QuoteRun } from './quote-run';
@@ -22,13 +23,13 @@ import { RefundForm } from './refund-form';
 import { PaymentList } from './payment-list';
 import { QuoteStatusTag } from './status';
 
-// discountCents rides along unchanged, so saving other lines keeps a discount already given.
+// The discount is typed in dollars like the price; more than the shop's limit waits for a manager.
 type EditLine = {
   kind: QuoteLineKind;
   description: string;
   quantity: string;
   price: string;
-  discountCents: number;
+  discount: string;
   camId: number | null;
   partId: number | null;
   laborOperationId: number | null;
@@ -41,7 +42,7 @@ const toEdit = (q: QuoteRecord): EditLine[] =>
     description: l.description,
     quantity: String(l.quantity),
     price: centsToText(l.unitPriceCents),
-    discountCents: l.discountCents ?? 0,
+    discount: centsToText(l.discountCents ?? 0),
     camId: l.camId,
     partId: l.partId,
     laborOperationId: l.laborOperationId,
@@ -60,6 +61,8 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
   const [notice, setNotice] = useState<Notice>(null);
   const canWrite = roleCan(role, 'quotes.write');
   const isDraft = quote.status === 'draft';
+  // A counter discount above the shop's limit keeps the quote from the customer until a manager approves it.
+  const awaitingApproval = quote.discountApproval.state === 'pending';
   // The lines are the quote's versioned edit: a newer save answers 409, shown beside the lines typed here.
   const lineSave = useVersionedSave<QuoteRecord>(quote);
 
@@ -105,9 +108,12 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
     }> = [];
     for (const [i, l] of editing.entries()) {
       const cents = centsFromText(l.price);
+      const discountCents = l.discount.trim() === '' ? 0 : centsFromText(l.discount);
       const quantity = Number(l.quantity);
       if (cents === null)
         return setNotice({ tone: 'fault', title: `Line ${i + 1}: the price must be dollars and cents, e.g. 129.50` });
+      if (discountCents === null)
+        return setNotice({ tone: 'fault', title: `Line ${i + 1}: the discount must be dollars and cents, e.g. 50.00` });
       if (!Number.isFinite(quantity) || quantity <= 0)
         return setNotice({ tone: 'fault', title: `Line ${i + 1}: the quantity must be a number above 0` });
       lines.push({
@@ -115,7 +121,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         description: l.description,
         quantity,
         unitPriceCents: cents,
-        discountCents: l.discountCents,
+        discountCents,
         camId: l.camId,
         partId: l.partId,
         laborOperationId: l.laborOperationId,
@@ -157,7 +163,8 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                 <Button
                   type="button"
                   variant="primary"
-                  disabled={busy}
+                  disabled={busy || awaitingApproval}
+                  aria-describedby={awaitingApproval ? 'discount-approval-note' : undefined}
                   onClick={() =>
                     run(
                       'Not sent',
@@ -178,6 +185,13 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
           {notice.detail}
         </Banner>
       ) : null}
+      <DiscountApprovalPanel
+        quote={quote}
+        url={url}
+        run={runJson}
+        busy={busy}
+        canApprove={roleCan(role, 'quotes.approve-discount')}
+      />
       <LifecyclePanel key={quote.version} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
       {quote.status === 'deposit-paid' || quote.status === 'closed' ? (
         <BalancePanel
@@ -204,6 +218,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
               <th className={thClass}>Description</th>
               <th className={`${thClass} text-right`}>Qty / h</th>
               <th className={`${thClass} text-right`}>Unit</th>
+              {editing ? <th className={`${thClass} text-right`}>Discount</th> : null}
               <th className={`${thClass} text-right`}>Line</th>
               <th className={thClass}>Tax</th>
               {quote.costCents !== undefined ? <th className={`${thClass} text-right`}>Unit cost</th> : null}
@@ -218,10 +233,15 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
             {editing
               ? editing.map((l, i) => {
                   const cents = centsFromText(l.price);
+                  const off = l.discount.trim() === '' ? 0 : centsFromText(l.discount);
                   const q = Number(l.quantity);
                   const total =
-                    cents !== null && Number.isFinite(q) && q >= 0 && Math.abs(Math.round(q * 100) - q * 100) < 1e-6
-                      ? Math.max(0, lineTotalCents(q, cents) - l.discountCents)
+                    cents !== null &&
+                    off !== null &&
+                    Number.isFinite(q) &&
+                    q >= 0 &&
+                    Math.abs(Math.round(q * 100) - q * 100) < 1e-6
+                      ? Math.max(0, lineTotalCents(q, cents) - off)
                       : null;
                   // A catalogue line's kind (and so its tax) follows the catalogue item.
                   const fromCatalogue = Boolean(l.camId || l.partId || l.laborOperationId);
@@ -264,6 +284,15 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                           inputMode="decimal"
                           value={l.price}
                           onChange={(e) => set(i, { price: e.target.value })}
+                          className="spec w-24 rounded border border-steel-300 px-1 py-0.5 text-right"
+                        />
+                      </td>
+                      <td className={tdClass}>
+                        <input
+                          aria-label={`Line ${i + 1} discount in dollars`}
+                          inputMode="decimal"
+                          value={l.discount}
+                          onChange={(e) => set(i, { discount: e.target.value })}
                           className="spec w-24 rounded border border-steel-300 px-1 py-0.5 text-right"
                         />
                       </td>
@@ -334,7 +363,7 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
                   description: '',
                   quantity: '1',
                   price: '0.00',
-                  discountCents: 0,
+                  discount: '0.00',
                   camId: null,
                   partId: null,
                   laborOperationId: null,

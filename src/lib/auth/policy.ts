@@ -20,6 +20,8 @@ export const POLICY = {
   'leads.follow-up': ['manager', 'counter'],
   'quotes.read': ['manager', 'counter', 'tech'],
   'quotes.write': ['manager', 'counter'],
+  // A counter discount above the shop's limit waits for a manager's approval before the quote can be sent.
+  'quotes.approve-discount': ['manager'],
   'quotes.send': ['manager', 'counter'],
   'quotes.take-payment': ['manager', 'counter'],
   'quotes.refund': ['manager'],

@@ -1,8 +1,9 @@
 // Who may set a quote line's price (pure: no database, React or Next). Counter staff sell catalogue
 // items at the catalogue price and may give a discount up to the share of the job the manager set in
-// the shop settings; a different price, a discount above that share, or an untaxed line that names no
-// catalogue item needs a manager. A manager may do each of these; the caller audits what was allowed.
-import { formatMoney, percentFromBp } from '@/lib/format';
+// the shop settings; a different price or an untaxed line that names no catalogue item needs a manager.
+// A discount above that share is saved but waits for a manager's approval before the quote can be sent
+// (discount-approval.ts). A manager may do each of these; the caller audits what was allowed.
+import { formatMoney } from '@/lib/format';
 import type { FieldError } from '@/lib/http/responses';
 import { divideRoundHalfUp, lineTotalCents, type QuoteLineKind } from './pricing';
 
@@ -90,13 +91,7 @@ export function checkPriceAuthority(
       });
   });
   const discountBp = discountShareBp(lines);
+  // Not refused: the caller marks the quote as waiting for a manager's approval (discount-approval.ts).
   const discountOverLimit = discountBp > options.maxCounterDiscountBp;
-  if (discountOverLimit && !manager) {
-    const first = lines.findIndex((l) => l.discountCents > 0);
-    forbidden.push({
-      field: `${options.field}.${first}.discountCents`,
-      message: `the discounts come to ${percentFromBp(discountBp)} of the job; counter staff may give up to ${percentFromBp(options.maxCounterDiscountBp)}, more needs a manager`,
-    });
-  }
   return { forbidden, overrides, discountBp, discountOverLimit };
 }

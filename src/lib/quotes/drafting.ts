@@ -4,6 +4,7 @@ import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { conflict, invalid, notFound, refused, runWrite, type WriteOutcome } from '@/lib/db/write';
 import {
+  type DiscountFields,
   draftSources,
   getQuote,
   insertDraft,
@@ -17,7 +18,8 @@ import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } fro
 import type { FieldError } from '@/lib/http/responses';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
 import type { QuoteLineInput } from '@/lib/schemas/quote';
-import type { AuthorityVerdict } from './authority';
+import { discountShareBp, type AuthorityVerdict } from './authority';
+import { approvalAfterSave, type DiscountApprovalState } from './discount-approval';
 import { jobLines } from './job-price';
 import { stateWord } from './lifecycle';
 import { quoteTotals } from './pricing';
@@ -41,10 +43,33 @@ async function withPriceAuthority(write: () => Promise<WriteOutcome<QuoteRecord>
   }
 }
 
-/** What a manager allowed beyond the counter's authority, one audit row each. */
+/**
+ * Where the discount of lines just saved stands: within the counter limit, waiting for a manager, or
+ * approved (by this manager, or kept from a manager's earlier approval of at least this share).
+ */
+function discountAfterSave(
+  lines: readonly LineDraft[],
+  limitBp: number,
+  user: SessionUser,
+  before: { fields: DiscountFields; discountBp: number } | null,
+): DiscountFields {
+  const discountBp = discountShareBp(lines);
+  const state: DiscountApprovalState = approvalAfterSave({
+    byManager: user.role === 'manager',
+    overLimit: discountBp > limitBp,
+    discountBp,
+    before: before && { state: before.fields.discountApproval, discountBp: before.discountBp },
+  });
+  if (state !== 'approved')
+    return { discountApproval: state, discountApprovedByUserId: null, discountApprovedAt: null };
+  if (user.role !== 'manager' && before) return before.fields;
+  return { discountApproval: 'approved', discountApprovedByUserId: user.id, discountApprovedAt: new Date() };
+}
+
+/** What a manager allowed beyond the counter's authority, one audit row each; a discount over the limit either way. */
 async function auditAuthority(
   verdict: AuthorityVerdict,
-  limitBp: number,
+  discount: { limitBp: number; bp: number; approval: DiscountApprovalState },
   user: SessionUser,
   quoteId: number,
   t: Transaction,
@@ -61,14 +86,14 @@ async function auditAuthority(
       t,
     );
   }
-  if (verdict.discountOverLimit) {
+  if (discount.bp > discount.limitBp) {
     await recordAudit(
       {
         user,
         action: 'quote.discount-over-limit',
         entityType: 'quote',
         entityId: quoteId,
-        after: { discountBp: verdict.discountBp, counterLimitBp: limitBp },
+        after: { discountBp: discount.bp, counterLimitBp: discount.limitBp, approval: discount.approval },
       },
       t,
     );
@@ -128,8 +153,17 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
           );
           lines.push(...extra.lines);
           const totals = quoteTotals(lines, settings.taxRateBp, policyOf(settings));
+          // The limit is a share of the whole job, so the drafted lines count as well as the extra ones.
+          const discount = discountAfterSave(lines, settings.maxCounterDiscountBp, user, null);
           const id = await insertDraft(
-            { customerId: build.customerId, buildId: build.id, camId: cam.id, createdByUserId: user.id, totals },
+            {
+              customerId: build.customerId,
+              buildId: build.id,
+              camId: cam.id,
+              createdByUserId: user.id,
+              totals,
+              discount,
+            },
             lines,
             t,
           );
@@ -145,7 +179,14 @@ export async function createQuoteFromBuild(input: CreateQuoteInput, user: Sessio
             },
             t,
           );
-          await auditAuthority(extra.verdict, settings.maxCounterDiscountBp, user, id, t);
+          const discountBp = discountShareBp(lines);
+          await auditAuthority(
+            extra.verdict,
+            { limitBp: settings.maxCounterDiscountBp, bp: discountBp, approval: discount.discountApproval },
+            user,
+            id,
+            t,
+          );
           return { record };
         },
         { uniqueFields: { number: 'number' } },
@@ -204,13 +245,28 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
             t,
           );
           await writeLines(id, lines, t);
-          await auditAuthority(verdict, settings.maxCounterDiscountBp, user, id, t);
+          const discount = discountAfterSave(lines, settings.maxCounterDiscountBp, user, {
+            fields: {
+              discountApproval: quote.discountApproval,
+              discountApprovedByUserId: quote.discountApprovedByUserId,
+              discountApprovedAt: quote.discountApprovedAt,
+            },
+            discountBp: before?.discountApproval.discountBp ?? 0,
+          });
+          await auditAuthority(
+            verdict,
+            { limitBp: settings.maxCounterDiscountBp, bp: discountShareBp(lines), approval: discount.discountApproval },
+            user,
+            id,
+            t,
+          );
           const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
           quote.set({
             subtotalCents: totals.subtotalCents,
             taxCents: totals.taxCents,
             totalCents: totals.totalCents,
             depositCents: totals.depositCents,
+            ...discount,
           });
           touched = true;
         }
@@ -224,8 +280,16 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
             action: 'quote.updated',
             entityType: 'quote',
             entityId: id,
-            before: { totalCents: before?.totalCents, validUntil: before?.validUntil },
-            after: { totalCents: after.totalCents, validUntil: after.validUntil },
+            before: {
+              totalCents: before?.totalCents,
+              validUntil: before?.validUntil,
+              discountApproval: before?.discountApproval.state,
+            },
+            after: {
+              totalCents: after.totalCents,
+              validUntil: after.validUntil,
+              discountApproval: after.discountApproval.state,
+            },
           },
           t,
         );

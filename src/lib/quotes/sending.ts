@@ -16,7 +16,8 @@ import { appBaseUrl } from '@/lib/env';
 import { MailError, sendMail } from '@/lib/mail';
 import { stateWord, validUntilFrom } from './lifecycle';
 import { mailShop, quoteSentMail } from './quote-notices';
-import { mailNotSent, recordOrThrow } from './refusals';
+import { discountShareBp } from './authority';
+import { discountAwaitsApproval, mailNotSent, recordOrThrow } from './refusals';
 import { takeSnapshot } from './snapshot';
 import type { QuoteRecord } from './types';
 
@@ -36,6 +37,11 @@ export async function sendQuote(id: number, user: SessionUser): Promise<QuoteRec
     const outcome = await runWrite(async (t) => {
       const quote = await lockQuoteWithParts(id, t);
       if (!quote) throw notFound();
+      // The customer never sees (or pays) a discount a manager has not approved.
+      if (quote.discountApproval === 'pending') {
+        const lines = (quote.lines ?? []).map((l) => ({ ...l.get(), quantity: Number(l.quantity) }));
+        throw discountAwaitsApproval(quote.number, discountShareBp(lines));
+      }
       const email = quote.customer?.email;
       if (quote.status === 'draft' || quote.status === 'sent') {
         if (!email)

@@ -1,5 +1,6 @@
 import type { Payment } from '@/lib/db/models';
 import type { PaymentMethod, PaymentPurpose } from './balance';
+import type { DiscountApproval } from './discount-approval';
 import type { QuoteLineKind } from './pricing';
 import type { QuoteStatus } from './lifecycle';
 
@@ -64,6 +65,8 @@ export type QuoteRecord = {
   build: { id: number; vehicleLabel: string } | null;
   camId: number | null;
   lines: QuoteLineRecord[];
+  /** A counter discount above the shop's limit waits for a manager before the quote can be sent. */
+  discountApproval: DiscountApproval;
   subtotalCents: number;
   taxRateBp: number;
   taxCents: number;

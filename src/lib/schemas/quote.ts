@@ -105,3 +105,6 @@ export const QuoteTransitionSchema = z.strictObject({
 });
 
 export const QuoteReviseSchema = z.strictObject({ version: VersionSchema });
+
+/** { version }: the manager approves the discount of the quote as they saw it (a newer save answers 409). */
+export const QuoteApproveDiscountSchema = z.strictObject({ version: VersionSchema });

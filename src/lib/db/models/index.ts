@@ -113,6 +113,7 @@ function associate() {
   Quote.belongsTo(Build, { foreignKey: 'buildId', as: 'build' });
   Quote.belongsTo(Cam, { foreignKey: 'camId', as: 'cam' });
   Quote.belongsTo(User, { foreignKey: 'createdByUserId', as: 'createdBy' });
+  Quote.belongsTo(User, { foreignKey: 'discountApprovedByUserId', as: 'discountApprovedBy' });
   Quote.hasMany(QuoteLine, { foreignKey: 'quoteId', as: 'lines' });
   Quote.hasMany(Payment, { foreignKey: 'quoteId', as: 'payments' });
   QuoteLine.belongsTo(Quote, { foreignKey: 'quoteId' });

@@ -9,6 +9,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 
+import { DISCOUNT_APPROVAL_STATES, type DiscountApprovalState } from '@/lib/quotes/discount-approval';
 import { QUOTE_STATE_LIST, type QuoteStatus } from '@/lib/quotes/lifecycle';
 
 // The states, their words and the legal moves between them live in src/lib/quotes/lifecycle.ts.
@@ -44,6 +45,10 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
   /** Frozen at the first send: the build profile and the advisor's result the customer was shown. */
   declare snapshotProfile: CreationOptional<Record<string, unknown> | null>;
   declare snapshotAdvice: CreationOptional<Record<string, unknown> | null>;
+  /** A counter discount above the shop's limit waits for a manager ('pending'); see src/lib/quotes/discount-approval.ts. */
+  declare discountApproval: CreationOptional<DiscountApprovalState>;
+  declare discountApprovedByUserId: CreationOptional<ForeignKey<number> | null>;
+  declare discountApprovedAt: CreationOptional<Date | null>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -73,6 +78,13 @@ export class Quote extends Model<InferAttributes<Quote>, InferCreationAttributes
         replacedByQuoteId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         snapshotProfile: { type: DataTypes.JSON, allowNull: true },
         snapshotAdvice: { type: DataTypes.JSON, allowNull: true },
+        discountApproval: {
+          type: DataTypes.ENUM(...DISCOUNT_APPROVAL_STATES),
+          allowNull: false,
+          defaultValue: 'none',
+        },
+        discountApprovedByUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        discountApprovedAt: { type: DataTypes.DATE, allowNull: true },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -95,6 +95,10 @@ export async function insertRevision(old: Quote, createdByUserId: number, t: Tra
       acceptedAt: null,
       revision,
       revisionOfQuoteId: old.id,
+      // The same lines with the same discount: a manager's approval of it carries over.
+      discountApproval: old.discountApproval,
+      discountApprovedByUserId: old.discountApprovedByUserId,
+      discountApprovedAt: old.discountApprovedAt,
     },
     { transaction: t },
   );

@@ -16,7 +16,7 @@ import { Cam, LaborOperation, Part } from '../models';
 /** A line ready to write: the same shape the job-price function builds a drafted quote's lines in. */
 export type LineDraft = JobLine;
 
-/** Counter staff asked for a price, kind or discount only a manager may give: answered 403 naming the fields. */
+/** Counter staff asked for a price or kind only a manager may give: answered 403 naming the fields. */
 export class PriceAuthorityRefused extends Error {
   constructor(readonly errors: FieldError[]) {
     super('price authority refused');
@@ -82,8 +82,9 @@ export type ResolveOptions = {
 };
 
 /**
- * Lines with catalogue references filled in. Bad input answers 422 (invalid); a price, kind or discount
- * the user's role may not give throws PriceAuthorityRefused. The verdict lists what a manager allowed.
+ * Lines with catalogue references filled in. Bad input answers 422 (invalid); a price or kind the user's
+ * role may not give throws PriceAuthorityRefused. The verdict lists what a manager allowed and whether the
+ * discount is above the counter limit (the caller decides its approval).
  */
 export async function resolveLines(
   inputs: readonly QuoteLineInput[],

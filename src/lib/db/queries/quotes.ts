@@ -3,7 +3,9 @@ import { col, fn, Op, type Transaction } from 'sequelize';
 import { canSeeCosts } from '@/lib/auth/costs';
 import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken } from '@/lib/auth/tokens';
+import { discountShareBp } from '@/lib/quotes/authority';
 import { balanceDueCents, counts, moneyIn } from '@/lib/quotes/balance';
+import type { DiscountApproval } from '@/lib/quotes/discount-approval';
 import { stateWord } from '@/lib/quotes/lifecycle';
 import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence } from '@/lib/quotes/pricing';
 import type {
@@ -61,6 +63,23 @@ function paymentRecord(p: PaymentRow): PaymentRecord {
 }
 
 const PAID_STATES: readonly Payment['status'][] = ['paid', 'partially-refunded', 'refunded'];
+
+/** The discount's approval; the approver is read on its own so a locked read never locks a staff row. */
+async function discountApproval(
+  row: QuoteRow,
+  lines: readonly QuoteLineRecord[],
+  transaction?: Transaction,
+): Promise<DiscountApproval> {
+  const state = row.discountApproval ?? 'none';
+  const approverId = state === 'approved' ? (row.discountApprovedByUserId ?? null) : null;
+  const approver = approverId ? await User.findByPk(approverId, { attributes: ['id', 'name'], transaction }) : null;
+  return {
+    state,
+    discountBp: discountShareBp(lines),
+    approvedBy: approver ? { id: approver.id, name: approver.name } : null,
+    approvedAt: state === 'approved' ? iso(row.discountApprovedAt) : null,
+  };
+}
 
 async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<QuoteRecord> {
   const lines = [...(row.lines ?? [])].sort((a, b) => a.sortOrder - b.sortOrder || a.id - b.id);
@@ -130,6 +149,7 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
     build: row.build ? { id: row.build.id, vehicleLabel: row.build.vehicleLabel } : null,
     camId: row.camId ?? null,
     lines: lineRecords,
+    discountApproval: await discountApproval(row, lineRecords, transaction),
     subtotalCents: row.subtotalCents,
     taxRateBp: row.taxRateBp,
     taxCents: row.taxCents,
@@ -252,7 +272,12 @@ export type DraftRow = {
   camId: number;
   createdByUserId: number;
   totals: { subtotalCents: number; taxRateBp: number; taxCents: number; totalCents: number; depositCents: number };
+  /** Where the draft's discount stands (src/lib/quotes/discount-approval.ts); 'none' when left out. */
+  discount?: DiscountFields;
 };
+
+/** The quote's discount-approval columns, as the quote services set them. */
+export type DiscountFields = Pick<Quote, 'discountApproval' | 'discountApprovedByUserId' | 'discountApprovedAt'>;
 
 /** A new draft with the year's next number and its lines; returns its id. */
 export async function insertDraft(draft: DraftRow, lines: LineDraft[], t: Transaction): Promise<number> {
@@ -274,6 +299,7 @@ export async function insertDraft(draft: DraftRow, lines: LineDraft[], t: Transa
       validUntil: null,
       sentAt: null,
       acceptedAt: null,
+      ...(draft.discount ?? {}),
     },
     { transaction: t },
   );
@@ -325,9 +351,11 @@ export async function getQuoteByToken(token: string): Promise<PublicQuote | null
   void _c;
   void _m;
   return {
-    // The customer sees the money that was taken (for their receipts), never provider ids or who took it.
+    // The customer sees the money that was taken (for their receipts), never provider ids or who took it,
+    // nor which staff member approved a discount.
     quote: {
       ...rest,
+      discountApproval: { ...rest.discountApproval, approvedBy: null },
       lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)),
       payments: rest.payments.filter(counts).map(customerPayment),
     },
