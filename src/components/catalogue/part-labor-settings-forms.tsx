@@ -130,7 +130,7 @@ export function SettingsForm({ settings }: { settings: Rec }) {
       label: 'Counter staff may discount up to',
       kind: 'percent',
       unit: '% of the job',
-      hint: 'above this, or any price change, a manager must set it',
+      hint: 'more waits for a manager to approve it before the quote can be sent; a price change needs a manager',
       range: S.depositPercentBp,
       required: true,
       term: 'counter discount limit',
