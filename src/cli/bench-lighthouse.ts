@@ -7,38 +7,12 @@
 // A benchmark, not a test: figures move with the machine's load.
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { freePort, waitForOk } from './loopback';
 
 const RUNS = Math.max(1, Number(process.env.LIGHTHOUSE_RUNS ?? '3'));
 const CHROME_PATH = process.env.CHROME_PATH ?? process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as net.AddressInfo;
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForHealth(url: string): Promise<void> {
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (
-      (await fetch(`${url}/api/health`).then(
-        (r) => r.status,
-        () => 0,
-      )) === 200
-    )
-      return;
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the app did not answer /api/health within 60 s');
-}
 
 // The two private pages need tokens: made once through the API (a lead posted like the form does; a quote for
 // the demo's build 3 made and sent by the demo counter account, its link read from a mail fake this script
@@ -208,7 +182,7 @@ async function main(): Promise<void> {
     ),
   ];
   try {
-    await waitForHealth(url);
+    await waitForOk(`${url}/api/health`, 60_000);
     const { result, quote } = await privatePages(url, mailUrl);
     const pages = ['/', '/ask', result, quote];
     const rows = [];

@@ -5,37 +5,11 @@
 // rank routes' p97.5 to health's (issue 13 item 10's target: one-cam rank within 3×). A benchmark, not a test.
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import autocannon from 'autocannon';
+import { freePort, waitForOk } from './loopback';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? '10');
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? '16');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as net.AddressInfo;
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForHealth(url: string): Promise<void> {
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (
-      (await fetch(`${url}/api/health`).then(
-        (r) => r.status,
-        () => 0,
-      )) === 200
-    )
-      return;
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the app did not answer /api/health within 60 s');
-}
 
 type Figures = { name: string; rps: number; p50: number; p975: number; non2xx: number };
 
@@ -62,7 +36,7 @@ async function main(): Promise<void> {
     },
   );
   try {
-    await waitForHealth(url);
+    await waitForOk(`${url}/api/health`, 60_000);
     const signIn = await fetch(`${url}/api/auth/sign-in`, {
       method: 'POST',
       headers: { 'content-type': 'application/json' },

@@ -1,6 +1,6 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
+import { freePort, waitForOk } from './loopback';
 
 // npm run bench:scale: the production build against lobewise_scale (npm run seed:scale first), each
 // endpoint asked in turn by a signed-in manager; prints p50 / p97.5 time and answer size per endpoint
@@ -10,30 +10,6 @@ import net from 'node:net';
 const RUNS = Number(process.env.BENCH_RUNS ?? 30);
 // BENCH_ONLY=quotes: only the endpoints whose label matches (a regular expression), when working on one.
 const ONLY = process.env.BENCH_ONLY ? new RegExp(process.env.BENCH_ONLY) : null;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer();
-    s.on('error', reject);
-    s.listen(0, '127.0.0.1', () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitFor(url: string, ms: number) {
-  const end = Date.now() + ms;
-  while (Date.now() < end) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${url} did not come up`);
-}
 
 const percentile = (sorted: number[], p: number) =>
   sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
@@ -60,7 +36,7 @@ async function main() {
     },
   );
   try {
-    await waitFor(`${base}/api/health`, 60_000);
+    await waitForOk(`${base}/api/health`, 60_000);
     const signIn = await fetch(`${base}/api/auth/sign-in`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', origin: base },

@@ -1,40 +1,12 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import path from 'node:path';
+import { freePort, waitForOk } from '../../src/cli/loopback';
 import { RUNTIME_FILE, type TestRuntime } from '../support/runtime';
 
 // Starts the real production build (`next start`) and both fakes on free loopback ports,
 // against the lobewise_test database that `npm test` has just reset.
 const ROOT = path.resolve(__dirname, '../..');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.unref();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as net.AddressInfo;
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitFor(url: string, timeoutMs: number): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  let lastError = '';
-  while (Date.now() < deadline) {
-    try {
-      const response = await fetch(url);
-      if (response.ok) return;
-      lastError = `HTTP ${response.status}`;
-    } catch (error) {
-      lastError = String(error);
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`${url} did not come up in ${timeoutMs} ms (${lastError})`);
-}
 
 function start(name: string, args: string[], env: Record<string, string>): number {
   const logDir = path.join(ROOT, 'var/test/logs');
@@ -107,9 +79,9 @@ export default async function globalSetup(): Promise<void> {
   fs.writeFileSync(RUNTIME_FILE, JSON.stringify(runtime, null, 2));
   try {
     await Promise.all([
-      waitFor(`${runtime.mailUrl}/health`, 15_000),
-      waitFor(`${runtime.paymentsUrl}/health`, 15_000),
-      waitFor(`${appUrl}/api/health`, 60_000),
+      waitForOk(`${runtime.mailUrl}/health`, 15_000),
+      waitForOk(`${runtime.paymentsUrl}/health`, 15_000),
+      waitForOk(`${appUrl}/api/health`, 60_000),
     ]);
   } catch (error) {
     // Jest skips the teardown when the setup fails: stop what was started, then say where the logs are.
