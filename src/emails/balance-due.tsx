@@ -1,6 +1,5 @@
-import { Button, Text } from '@react-email/components';
-import { palette } from '@/lib/palette';
-import { MailLayout, money, paragraph, type MailShop } from './layout';
+import { Text } from '@react-email/components';
+import { MailLayout, money, paragraph, PrivateLinkButton, type MailShop } from './layout';
 
 // The job is done: what it came to, what was paid already, what is left, and a private link to pay the
 // rest online (or at the counter when the car is collected).
@@ -27,21 +26,7 @@ export function BalanceDueEmail(p: BalanceDueProps) {
         The work{vehicle} is done. Quote {p.number} came to {money(p.totalCents)}; you have paid {money(p.paidCents)},
         so {money(p.balanceCents)} is left to pay.
       </Text>
-      <Button
-        href={p.link}
-        style={{
-          backgroundColor: palette.ember[600],
-          color: palette.paper.raised,
-          padding: '12px 18px',
-          borderRadius: '6px',
-          fontWeight: 700,
-        }}
-      >
-        Pay the balance
-      </Button>
-      <Text style={paragraph}>
-        This link is private to you; please do not share it. If the button does not work, copy this address: {p.link}
-      </Text>
+      <PrivateLinkButton href={p.link}>Pay the balance</PrivateLinkButton>
       <Text style={paragraph}>
         You can also pay by card or cash when you collect the car. Your receipt and the final invoice follow by e-mail
         once it is paid.

@@ -1,6 +1,5 @@
-import { Button, Text } from '@react-email/components';
-import { palette } from '@/lib/palette';
-import { longDate, MailLayout, money, paragraph, type MailShop } from './layout';
+import { Text } from '@react-email/components';
+import { longDate, MailLayout, money, paragraph, PrivateLinkButton, type MailShop } from './layout';
 
 // A friendly note a few days before a sent quote runs out, with a fresh private link to it.
 export type ExpiryReminderProps = {
@@ -25,21 +24,7 @@ export function ExpiryReminderEmail(p: ExpiryReminderProps) {
         the job) is valid until {longDate(p.validUntil)}. After that day prices and parts can change, and we would send
         you a fresh quote.
       </Text>
-      <Button
-        href={p.link}
-        style={{
-          backgroundColor: palette.ember[600],
-          color: palette.paper.raised,
-          padding: '12px 18px',
-          borderRadius: '6px',
-          fontWeight: 700,
-        }}
-      >
-        Open your quote
-      </Button>
-      <Text style={paragraph}>
-        This link is private to you; please do not share it. If the button does not work, copy this address: {p.link}
-      </Text>
+      <PrivateLinkButton href={p.link}>Open your quote</PrivateLinkButton>
       <Text style={paragraph}>
         Not going ahead, or have a question? Just reply; we will not remind you again about this quote.
       </Text>

@@ -1,4 +1,4 @@
-import { Body, Container, Head, Hr, Html, Preview, Section, Text } from '@react-email/components';
+import { Body, Button, Container, Head, Hr, Html, Preview, Section, Text } from '@react-email/components';
 import type { ReactNode } from 'react';
 import { palette } from '@/lib/palette';
 
@@ -43,6 +43,28 @@ export function MailLayout({ shop, preview, children }: { shop: MailShop; previe
 }
 
 export const paragraph = { fontSize: '16px', lineHeight: '24px', margin: '0 0 14px' };
+
+const button = {
+  backgroundColor: palette.ember[600],
+  color: palette.paper.raised,
+  padding: '12px 18px',
+  borderRadius: '6px',
+  fontWeight: 700,
+};
+
+/** The button to the customer's private page, with the address written out for mail apps that drop buttons. */
+export function PrivateLinkButton({ href, children }: { href: string; children: ReactNode }) {
+  return (
+    <>
+      <Button href={href} style={button}>
+        {children}
+      </Button>
+      <Text style={paragraph}>
+        This link is private to you; please do not share it. If the button does not work, copy this address: {href}
+      </Text>
+    </>
+  );
+}
 
 // E-mails format figures the way the screens do (src/lib/format.ts).
 export { formatMoney as money, longDate } from '@/lib/format';

@@ -1,6 +1,5 @@
-import { Button, Text } from '@react-email/components';
-import { palette } from '@/lib/palette';
-import { longDate, MailLayout, money, paragraph, type MailShop } from './layout';
+import { Text } from '@react-email/components';
+import { longDate, MailLayout, money, paragraph, PrivateLinkButton, type MailShop } from './layout';
 
 // The e-mail that carries a quote's private link (also used for a revision, with `replaces` set).
 export type QuoteSentProps = {
@@ -38,21 +37,7 @@ export function QuoteSentEmail(p: QuoteSentProps) {
         to book the job.
         {p.validUntil ? ` It is valid until ${longDate(p.validUntil)}.` : ''}
       </Text>
-      <Button
-        href={p.link}
-        style={{
-          backgroundColor: palette.ember[600],
-          color: palette.paper.raised,
-          padding: '12px 18px',
-          borderRadius: '6px',
-          fontWeight: 700,
-        }}
-      >
-        Open your quote
-      </Button>
-      <Text style={paragraph}>
-        This link is private to you; please do not share it. If the button does not work, copy this address: {p.link}
-      </Text>
+      <PrivateLinkButton href={p.link}>Open your quote</PrivateLinkButton>
       <Text style={paragraph}>
         The page shows every line, the shop’s deposit policy and the checks that go with a cam swap, before you pay
         anything.
