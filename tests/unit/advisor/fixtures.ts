@@ -1,3 +1,4 @@
+import { CALIBRATION_ENGINE } from '@/lib/advisor/calibration';
 import { patchProfile, STOCK_TRUCK_CAM, type ProfilePatch } from '@/lib/builds/sample-trucks';
 import { BuildProfileSchema, type BuildProfile, type BuildProfileInput } from '@/lib/schemas/build-profile';
 import { CamCardSchema, type CamCard, type CamCardInput } from '@/lib/schemas/cam-card';
@@ -33,35 +34,13 @@ export const bigCam = cam({
   priceCents: 43900,
 });
 
-// The dyno engine: a 5.3 L truck block bored to 3.900" (5.7 L), 3.622" stroke, 6.098" rod (maker's
-// published specs, from memory), CNC-ported cathedral heads — 290 cfm at 28 inH2O is our plausible
-// pick from memory, not a measurement — truck intake, 1-7/8" long tubes, short open collectors.
-// 10.0:1 static compression is our estimate for the bored block.
-export const dynoInput: BuildProfileInput = {
-  engine: {
-    cylinders: 8,
-    boreIn: 3.9,
-    strokeIn: 3.622,
-    rodLengthIn: 6.098,
-    compressionRatio: 10.0,
-    headMaterial: 'aluminum',
-    intakeFlowCfm: 290,
-    intakeManifold: 'truck',
-    cylinderDeactivation: 'deleted',
-  },
-  exhaust: { headers: 'long-tube', primaryIn: 1.875, system: 'open-short' },
-  drivetrain: { transmission: 'automatic', stallRpm: 2200, axleRatio: 3.73, topGearRatio: 0.7, tireDiameterIn: 31 },
-  vehicle: { weightLb: 5200, powerBrakes: 'vacuum' },
-  use: {
-    primary: 'daily',
-    idle: 'smooth',
-    fuelOctane: 91,
-    emissionsRequired: false,
-    cruiseMph: 70,
-    budgetCents: 300000,
-  },
-  baselineCam: stockTruckCam,
-};
+// The dyno engine the model was calibrated on (src/lib/advisor/calibration.ts: a 5.3 L block bored to
+// 3.900", ported cathedral heads, long tubes, open collectors), without the head and valvetrain presets,
+// so the tests exercise the plain typed-in figures.
+const { headPreset: _head, valvetrain: _valvetrain, ...dynoEngine } = CALIBRATION_ENGINE.engine;
+void _head;
+void _valvetrain;
+export const dynoInput: BuildProfileInput = { ...CALIBRATION_ENGINE, engine: dynoEngine, baselineCam: stockTruckCam };
 export const dynoBuild = build(dynoInput);
 
 /** The dyno build with some fields changed (validated again). */
