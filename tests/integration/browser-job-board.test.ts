@@ -127,7 +127,7 @@ describe('the job board in the browser', () => {
     await typeInto(page, signOff(), 'Tune file and version', 'browser-tune rev 2');
     await signOff().getByRole('button', { name: 'Record the sign-off' }).click();
     // A typo is refused beside its field, and nothing is saved.
-    await signOff().getByText('coilBindMarginIn must be a number (in)').waitFor();
+    await signOff().getByText('coil-bind margin must be a number (in)').waitFor();
     await typeInto(page, signOff(), 'Coil-bind margin (in)', '0.085');
     await page.keyboard.press('ControlOrMeta+Enter');
     await signOff().getByRole('status').filter({ hasText: 'Sign-off recorded, with warnings' }).waitFor();

@@ -78,48 +78,44 @@ const reading = (label: string, unit: string, min: number, max: number) =>
     .min(min, { error: `${label} must be at least ${min} ${unit}` })
     .max(max, { error: `${label} must be at most ${max} ${unit}` });
 
-/** What a sign-off reading may be at all (a typo otherwise), with its unit; the form's yup checks read these too. */
+/**
+ * What a sign-off reading may be at all (a typo otherwise), with its unit and its name in words (messages say
+ * "coil-bind margin must be a number (in)", never the field's code); the form's yup checks and labels read these too.
+ */
 export const SIGN_OFF_READING_LIMITS = {
-  ptvIntakeIn: { unit: 'in', min: 0, max: 0.5 },
-  ptvExhaustIn: { unit: 'in', min: 0, max: 0.5 },
-  springInstalledHeightIn: { unit: 'in', min: 1, max: 2.5 },
-  springSeatPressureLb: { unit: 'lb', min: 20, max: 500 },
-  coilBindMarginIn: { unit: 'in', min: 0, max: 0.5 },
-  pushrodLengthIn: { unit: 'in', min: 4, max: 11 },
-  lifterPreloadIn: { unit: 'in', min: 0, max: 0.25 },
+  ptvIntakeIn: { label: 'piston-to-valve, intake', unit: 'in', min: 0, max: 0.5 },
+  ptvExhaustIn: { label: 'piston-to-valve, exhaust', unit: 'in', min: 0, max: 0.5 },
+  springInstalledHeightIn: { label: 'spring installed height', unit: 'in', min: 1, max: 2.5 },
+  springSeatPressureLb: { label: 'spring seat pressure', unit: 'lb', min: 20, max: 500 },
+  coilBindMarginIn: { label: 'coil-bind margin', unit: 'in', min: 0, max: 0.5 },
+  pushrodLengthIn: { label: 'pushrod length', unit: 'in', min: 4, max: 11 },
+  lifterPreloadIn: { label: 'lifter preload', unit: 'in', min: 0, max: 0.25 },
+} as const;
+/** The other sign-off fields' names in messages. */
+export const SIGN_OFF_WORDS = {
+  tuneFile: 'tune file and version',
+  deactivationDeleteDone: 'the cylinder-deactivation delete answer',
 } as const;
 const R = SIGN_OFF_READING_LIMITS;
+const signOffReading = (key: keyof typeof R) => reading(R[key].label, R[key].unit, R[key].min, R[key].max);
 
 export const SignOffSchema = z.strictObject(
   {
-    ptvIntakeIn: reading('ptvIntakeIn', R.ptvIntakeIn.unit, R.ptvIntakeIn.min, R.ptvIntakeIn.max),
-    ptvExhaustIn: reading('ptvExhaustIn', R.ptvExhaustIn.unit, R.ptvExhaustIn.min, R.ptvExhaustIn.max),
-    springInstalledHeightIn: reading(
-      'springInstalledHeightIn',
-      R.springInstalledHeightIn.unit,
-      R.springInstalledHeightIn.min,
-      R.springInstalledHeightIn.max,
-    ),
-    springSeatPressureLb: reading(
-      'springSeatPressureLb',
-      R.springSeatPressureLb.unit,
-      R.springSeatPressureLb.min,
-      R.springSeatPressureLb.max,
-    ),
-    coilBindMarginIn: reading(
-      'coilBindMarginIn',
-      R.coilBindMarginIn.unit,
-      R.coilBindMarginIn.min,
-      R.coilBindMarginIn.max,
-    ),
-    pushrodLengthIn: reading('pushrodLengthIn', R.pushrodLengthIn.unit, R.pushrodLengthIn.min, R.pushrodLengthIn.max),
-    lifterPreloadIn: reading('lifterPreloadIn', R.lifterPreloadIn.unit, R.lifterPreloadIn.min, R.lifterPreloadIn.max),
+    ptvIntakeIn: signOffReading('ptvIntakeIn'),
+    ptvExhaustIn: signOffReading('ptvExhaustIn'),
+    springInstalledHeightIn: signOffReading('springInstalledHeightIn'),
+    springSeatPressureLb: signOffReading('springSeatPressureLb'),
+    coilBindMarginIn: signOffReading('coilBindMarginIn'),
+    pushrodLengthIn: signOffReading('pushrodLengthIn'),
+    lifterPreloadIn: signOffReading('lifterPreloadIn'),
     // Required by the route when the build has active cylinder deactivation; otherwise not asked.
-    deactivationDeleteDone: z.boolean({ error: 'deactivationDeleteDone must be true or false' }).optional(),
-    tuneFile: text('tuneFile', { error: presence('tuneFile', 'text') })
-      .min(1, { error: 'tuneFile must name the tune file and version loaded' })
+    deactivationDeleteDone: z
+      .boolean({ error: `${SIGN_OFF_WORDS.deactivationDeleteDone} must be true or false` })
+      .optional(),
+    tuneFile: text(SIGN_OFF_WORDS.tuneFile, { error: presence(SIGN_OFF_WORDS.tuneFile, 'text') })
+      .min(1, { error: `${SIGN_OFF_WORDS.tuneFile} must name the tune loaded` })
       .max(JOB_LIMITS.tuneFileMaxLength, {
-        error: `tuneFile must be at most ${JOB_LIMITS.tuneFileMaxLength} characters`,
+        error: `${SIGN_OFF_WORDS.tuneFile} must be at most ${JOB_LIMITS.tuneFileMaxLength} characters`,
       }),
     notes: text('notes', { multiline: true })
       .max(JOB_LIMITS.notesMaxLength, { error: `notes must be at most ${JOB_LIMITS.notesMaxLength} characters` })

@@ -37,4 +37,30 @@ describe('sign-off checks: yup in the browser, zod on the server', () => {
   it.each(cases)('%s: the same fields, in the same words', (_name, payload, flagged) => {
     expectSameVerdict(SignOffSchema, signOffChecks, payload, flagged);
   });
+
+  it('names each field in words the technician reads on the form, never its code', () => {
+    const everything = {
+      ...good,
+      ptvIntakeIn: 'x',
+      ptvExhaustIn: 0.9,
+      springInstalledHeightIn: 0.5,
+      springSeatPressureLb: 600,
+      coilBindMarginIn: -1,
+      pushrodLengthIn: undefined,
+      lifterPreloadIn: 1,
+      tuneFile: '',
+      deactivationDeleteDone: 'yes',
+    };
+    const messages = zodErrors(SignOffSchema, everything);
+    expect(messages).toMatchObject({
+      ptvIntakeIn: 'piston-to-valve, intake must be a number (in)',
+      coilBindMarginIn: 'coil-bind margin must be at least 0 in',
+      pushrodLengthIn: 'pushrod length is required',
+      tuneFile: 'tune file and version must name the tune loaded',
+      deactivationDeleteDone: 'the cylinder-deactivation delete answer must be true or false',
+    });
+    // No camelCase field code (ptvIntakeIn, tuneFile, …) in any message.
+    expect(Object.values(messages).filter((m) => /\b[a-z]+[A-Z]\w*/.test(m))).toEqual([]);
+    expect(Object.keys(messages)).toHaveLength(9);
+  });
 });

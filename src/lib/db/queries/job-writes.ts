@@ -12,7 +12,7 @@ import {
   type BoardState,
   type JobState,
 } from '@/lib/jobs/states';
-import type { JobPatch, SignOffInput } from '@/lib/schemas/job';
+import { SIGN_OFF_WORDS, type JobPatch, type SignOffInput } from '@/lib/schemas/job';
 import { Build, Job, JobSignOff, Quote } from '../models';
 import type { BoardJob } from '@/lib/jobs/types';
 import { deactivationActiveOf, getBoardJob, JOB_QUOTE_STATES, listAssignableStaff } from './job-board';
@@ -139,7 +139,7 @@ export async function recordSignOff(
       throw invalid([
         {
           field: 'deactivationDeleteDone',
-          message: 'deactivationDeleteDone is required: this build has active cylinder deactivation',
+          message: `${SIGN_OFF_WORDS.deactivationDeleteDone} is required: this build has active cylinder deactivation`,
         },
       ]);
     }
