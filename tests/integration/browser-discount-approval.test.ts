@@ -50,6 +50,14 @@ describe('approving a counter discount in the browser', () => {
     await expect(page.getByRole('button', { name: 'Approve the discount' }).count()).resolves.toBe(0);
     await expectNoSeriousA11yViolations(page);
 
+    // The quote list says which quotes wait for a manager.
+    const list = await watchedPage(manager, errors);
+    await list.goto(`${appUrl}/quotes?q=${encodeURIComponent(draft.number)}`);
+    const row = list.getByRole('row').filter({ has: list.getByRole('link', { name: draft.number, exact: true }) });
+    await expect(row.textContent()).resolves.toContain('Discount waits for a manager');
+    await expectNoSeriousA11yViolations(list);
+    await list.close();
+
     const managerPage = await watchedPage(manager, errors);
     await managerPage.goto(`${appUrl}/quotes/${draft.id}`);
     await managerPage.getByText('Waiting for a manager to approve the discount').waitFor();

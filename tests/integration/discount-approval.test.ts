@@ -68,6 +68,9 @@ describe('a counter discount above the limit', () => {
     const pending = await pendingDraft('Pending discount');
     expect(pending.discountApproval).toMatchObject({ state: 'pending', approvedBy: null, approvedAt: null });
     expect(pending.discountApproval.discountBp).toBeGreaterThan(500);
+    const listed = await counter.get('/api/quotes').query({ q: pending.number });
+    const item = (listed.body.items as { id: number }[]).find((i) => i.id === pending.id);
+    expect(item).toMatchObject({ discountApproval: 'pending' });
 
     const blocked = await counter.post(`/api/quotes/${pending.id}/send`);
     expect(blocked.status).toBe(409);

@@ -98,6 +98,9 @@ export default async function QuotesPage({
                 <td className={tdClass}>{q.vehicleLabel ?? '—'}</td>
                 <td className={tdClass}>
                   <QuoteStatusTag status={q.status} />
+                  {q.discountApproval === 'pending' ? (
+                    <span className="mt-0.5 block text-xs font-semibold">Discount waits for a manager</span>
+                  ) : null}
                 </td>
                 <td className={`${tdClass} spec text-right`}>{formatMoney(q.totalCents)}</td>
                 <td className={`${tdClass} spec text-right`}>{formatMoney(q.depositCents)}</td>

@@ -23,6 +23,8 @@ export type QuoteSummary = {
   customerName: string;
   vehicleLabel: string | null;
   paymentStatus: Payment['status'] | null;
+  /** 'pending': a counter discount above the shop's limit waits for a manager (src/lib/quotes/discount-approval.ts). */
+  discountApproval: Quote['discountApproval'];
 };
 
 type Row = Quote & { customer?: Customer; build?: Build | null; payments?: Payment[] };
@@ -113,6 +115,7 @@ export async function listQuotes(query: QuoteListQuery): Promise<{ items: QuoteS
         customerName: q.customer?.name ?? 'Unknown customer',
         vehicleLabel: q.build?.vehicleLabel ?? null,
         paymentStatus: last?.status ?? null,
+        discountApproval: q.discountApproval ?? 'none',
       },
     ];
   });
