@@ -33,7 +33,9 @@ async function main() {
   await writer.leads(size.leads);
   const runs = await writer.dynoRuns(size.dynoRuns, owners, camIds);
   await refreshAllDynoGains();
-  await db.query('ANALYZE TABLE cams, customers, builds, quotes, quote_lines, payments, leads, dyno_runs, dyno_gains');
+  await db.query(
+    'ANALYZE TABLE cams, customers, builds, quotes, quote_lines, payments, leads, dyno_runs, dyno_gains, report_quote_days, report_margin_days',
+  );
   console.log(
     `seed:scale ${args.data.size}: ${camIds.length} cams, ${owners.length} customers and builds, ${made.quotes} quotes, ${made.lines} lines, ${made.payments} payments, ${size.leads} leads, ${runs} dyno runs in ${((Date.now() - started) / 1000).toFixed(0)} s`,
   );

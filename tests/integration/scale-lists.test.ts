@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { BULK_MARK, insertBulkRows, removeBulkRows } from '../support/bulk-rows';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { expectedReport } from '../support/report-expected';
 import type { QuoteSummary } from '@/lib/db/queries/quote-list';
 
 // Lists and the CSV over HTTP with thousands of invented rows: every quote is reachable a page at a
@@ -154,5 +155,17 @@ describe('GET /api/reports/quotes.csv', () => {
     expect(lines.length - 1).toBe(Number(count));
     const numbers = lines.slice(1).map((l) => l.split(',')[0]);
     expect(new Set(numbers).size).toBe(numbers.length); // no row twice at a chunk boundary
+  });
+});
+
+describe('GET /api/reports/summary over thousands of rows', () => {
+  it('answers for one year exactly what a plain computation over every row gives (demo and invented rows)', async () => {
+    const to = new Date().toISOString().slice(0, 10);
+    const from = new Date(Date.now() - 364 * 86_400_000).toISOString().slice(0, 10);
+    const expected = await expectedReport(sequelize, from, to);
+    expect(expected.created.count).toBeGreaterThan(1_500); // the invented rows are in the range
+    expect(expected.margin.total.revenueCents).toBeGreaterThan(0);
+    const res = await manager.get(`/api/reports/summary?from=${from}&to=${to}`).expect(200);
+    expect(res.body).toEqual(expected);
   });
 });

@@ -33,9 +33,13 @@ async function select<T extends object>(sql: string, replacements: Record<string
   return db().query<T>(sql, { type: QueryTypes.SELECT, replacements });
 }
 
+/** The range as whole UTC days, both included: the per-day totals' key. */
+const days = (range: Pick<ReportRange, 'from' | 'to'>) => ({ from: range.from, to: range.to });
+
 /**
- * Counts and values by state and the sent conversion in one pass over the covering index, as sums of
- * conditions rather than GROUP BY status: no temporary table, one range read instead of two.
+ * Counts and values by state and the sent conversion from report_quote_days (kept per creation day, state
+ * and sent-or-not by triggers on quotes; database/migrations/20261207000100-report-day-totals.js): a year
+ * is a few thousand rows, where the quotes themselves were 67,000 at size L.
  */
 export async function quoteFigures(
   range: ReportRange,
@@ -43,12 +47,12 @@ export async function quoteFigures(
   const e = (v: string) => db().escape(v);
   const perStatus = QUOTE_STATUSES.map(
     (status, i) =>
-      `COALESCE(SUM(status = ${e(status)}), 0) AS c${i}, COALESCE(SUM(IF(status = ${e(status)}, total_cents, 0)), 0) AS v${i}`,
+      `COALESCE(SUM(IF(status = ${e(status)}, quotes, 0)), 0) AS c${i}, COALESCE(SUM(IF(status = ${e(status)}, value_cents, 0)), 0) AS v${i}`,
   ).join(', ');
   const [row] = await select<Record<string, unknown>>(
-    `SELECT ${perStatus}, COALESCE(SUM(sent_at IS NOT NULL), 0) AS sent, COALESCE(SUM(sent_at IS NOT NULL AND ${converted('status')}), 0) AS paid
-       FROM quotes WHERE created_at >= :start AND created_at < :end`,
-    bounds(range),
+    `SELECT ${perStatus}, COALESCE(SUM(IF(sent, quotes, 0)), 0) AS sent, COALESCE(SUM(IF(sent AND ${converted('status')}, quotes, 0)), 0) AS paid
+       FROM report_quote_days WHERE day >= :from AND day <= :to`,
+    days(range),
   );
   const byStatus = QUOTE_STATUSES.map((status, i) => ({
     status,
@@ -75,26 +79,27 @@ export async function depositsTaken(
 }
 
 /**
- * Summed in the database, one row per kind. A line's cost is ROUND(quantity × unit cost): quantity is a
- * DECIMAL(…,2) and the cost whole cents, so the product is exact and MariaDB rounds exact values half
- * away from zero — half up for these non-negative amounts, the rule goodsMargin and the quote lines use.
- * The lines are first counted per (kind, cam, part, quantity) off their covering index, so the catalogue
- * costs are looked up once per group instead of once per line (75,000 lookups at 200,000 quotes); lines
- * in one group share their rounded cost, so n × ROUND(quantity × cost) is exactly the sum per line.
+ * Summed in the database, one row per kind, from report_margin_days: the cam and part lines of converted
+ * quotes, counted per creation day and (kind, cam, part, quantity) by triggers on quotes and quote lines,
+ * so a year is tens of thousands of small rows instead of the lines themselves. The catalogue costs are
+ * looked up once per group. A line's cost is ROUND(quantity × unit cost): quantity is a DECIMAL(…,2) and
+ * the cost whole cents, so the product is exact and MariaDB rounds exact values half away from zero — half
+ * up for these non-negative amounts, the rule goodsMargin and the quote lines use; lines in one group share
+ * their rounded cost, so n × ROUND(quantity × cost) is exactly the sum per line. cam_id / part_id 0 means
+ * none, which no catalogue row matches.
  */
 export async function goodsMarginOfPaidQuotes(range: ReportRange): Promise<ReportSummary['margin']> {
   const rows = await select<{ kind: 'cam' | 'part'; revenue: unknown; cost: unknown }>(
     `SELECT g.kind, SUM(g.revenue) AS revenue, SUM(g.n * ROUND(g.quantity * COALESCE(c.cost_cents, p.cost_cents))) AS cost
-       FROM (SELECT ql.kind, ql.cam_id, ql.part_id, ql.quantity, COUNT(*) AS n, SUM(ql.total_cents) AS revenue
-               FROM quotes q
-               JOIN quote_lines ql ON ql.quote_id = q.id
-              WHERE ${converted('q.status')} AND q.created_at >= :start AND q.created_at < :end AND ql.kind IN ('cam', 'part')
-              GROUP BY ql.kind, ql.cam_id, ql.part_id, ql.quantity ORDER BY NULL) g
+       FROM (SELECT kind, cam_id, part_id, quantity, SUM(line_count) AS n, SUM(revenue_cents) AS revenue
+               FROM report_margin_days
+              WHERE day >= :from AND day <= :to
+              GROUP BY kind, cam_id, part_id, quantity ORDER BY NULL) g
        LEFT JOIN cams c ON c.id = g.cam_id
        LEFT JOIN parts p ON p.id = g.part_id
       WHERE COALESCE(c.cost_cents, p.cost_cents) IS NOT NULL
       GROUP BY g.kind ORDER BY NULL`,
-    bounds(range),
+    days(range),
   );
   const of = (kind: 'cam' | 'part') => rows.find((r) => r.kind === kind);
   const cams = marginOf(n(of('cam')?.revenue), n(of('cam')?.cost));
