@@ -6,7 +6,7 @@ import { expectedReport } from '../support/report-expected';
 import type { ReportSummary } from '@/lib/reports/types';
 
 // The report's per-day totals (report_quote_days, report_margin_days; database/migrations/
-// 20261207000100-report-day-totals.js) are kept by triggers in the transactions that write quotes and
+// 20261207000900-report-day-totals.js) are kept by triggers in the transactions that write quotes and
 // their lines. After every step of a sequence of writes — drafts, deposits paid through the payments
 // fake, partial and full refunds (the quote leaving "converted"), line edits, a quote moved to another
 // day, a converted quote deleted with its lines — the kept totals must equal the same totals recomputed

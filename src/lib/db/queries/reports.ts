@@ -38,7 +38,7 @@ const days = (range: Pick<ReportRange, 'from' | 'to'>) => ({ from: range.from, t
 
 /**
  * Counts and values by state and the sent conversion from report_quote_days (kept per creation day, state
- * and sent-or-not by triggers on quotes; database/migrations/20261207000100-report-day-totals.js): a year
+ * and sent-or-not by triggers on quotes; database/migrations/20261207000900-report-day-totals.js): a year
  * is a few thousand rows, where the quotes themselves were 67,000 at size L.
  */
 export async function quoteFigures(
