@@ -2,8 +2,8 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { DEMO } from '../support/demo';
-import { makeDraftQuote } from '../support/quote-fixtures';
-import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
+import { editableLine, makeDraftQuote } from '../support/quote-fixtures';
+import type { QuoteRecord } from '@/lib/quotes/types';
 
 // A manager's approval of a counter discount above the shop's limit (issue 12, item 8), over HTTP against
 // the real build and MariaDB. Counter staff may save more than the limit (5 % in the demo settings); the
@@ -25,22 +25,12 @@ beforeAll(async () => {
 });
 afterAll(() => disconnectTestDatabase());
 
-const editable = (l: QuoteLineRecord) => ({
-  kind: l.kind,
-  description: l.description,
-  quantity: l.quantity,
-  unitPriceCents: l.unitPriceCents,
-  discountCents: l.discountCents,
-  camId: l.camId,
-  partId: l.partId,
-  laborOperationId: l.laborOperationId,
-});
 const read = async (id: number) => (await manager.get(`/api/quotes/${id}`)).body as QuoteRecord;
 
 /** The quote's lines with about `shareBp` of each line (so of the job, before discounts) taken off. */
 function withDiscount(quote: QuoteRecord, shareBp: number) {
   return quote.lines.map((l) => ({
-    ...editable(l),
+    ...editableLine(l),
     discountCents: Math.ceil(((l.totalCents + l.discountCents) * shareBp) / 10_000),
   }));
 }
@@ -112,7 +102,7 @@ describe('a counter discount above the limit', () => {
     // Counter staff may edit other lines without raising the share: the approval stands.
     const kept = await counter
       .patch(`/api/quotes/${pending.id}`)
-      .send({ version: approved.version, lines: approved.lines.map(editable) });
+      .send({ version: approved.version, lines: approved.lines.map(editableLine) });
     expect(kept.status).toBe(200);
     expect((kept.body as QuoteRecord).discountApproval.state).toBe('approved');
 

@@ -1,9 +1,9 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
-import { makeDraftQuote } from '../support/quote-fixtures';
+import { editableLine, makeDraftQuote } from '../support/quote-fixtures';
 import { DEMO } from '../support/demo';
-import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
+import type { QuoteRecord } from '@/lib/quotes/types';
 
 // Price authority (issue 12, item 8), over HTTP against the real build and MariaDB. Counter staff sell
 // catalogue items at the catalogue price, give discounts up to the manager's limit (shop settings,
@@ -11,7 +11,6 @@ import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 // a line to an untaxed kind; a manager may, and is audited.
 // Every test makes its own customer, build and draft.
 
-type Line = QuoteLineRecord;
 type Quote = QuoteRecord;
 
 let sequelize: Sequelize;
@@ -24,16 +23,6 @@ beforeAll(async () => {
 });
 afterAll(() => disconnectTestDatabase());
 
-const editable = (l: Line) => ({
-  kind: l.kind,
-  description: l.description,
-  quantity: l.quantity,
-  unitPriceCents: l.unitPriceCents,
-  discountCents: l.discountCents,
-  camId: l.camId,
-  partId: l.partId,
-  laborOperationId: l.laborOperationId,
-});
 const read = async (id: number) => (await manager.get(`/api/quotes/${id}`)).body as Quote;
 const camLineIndex = (q: Quote) => q.lines.findIndex((l) => l.kind === 'cam');
 const audits = async (action: string, quoteId: number) =>
@@ -49,7 +38,7 @@ const audits = async (action: string, quoteId: number) =>
 describe('counter staff and prices', () => {
   it('cannot set a cam line to 1 cent: 403 naming the price, nothing saved', async () => {
     const quote = (await read((await makeDraftQuote(counter, 'One cent cam')).id)) as Quote;
-    const lines = quote.lines.map(editable);
+    const lines = quote.lines.map(editableLine);
     const i = camLineIndex(quote);
     lines[i].unitPriceCents = 1;
     const res = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
@@ -60,7 +49,7 @@ describe('counter staff and prices', () => {
 
   it('cannot change a catalogue line’s kind to dodge tax (422 naming kind), for anyone', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Kind dodge')).id);
-    const lines = quote.lines.map(editable);
+    const lines = quote.lines.map(editableLine);
     const i = camLineIndex(quote);
     lines[i].kind = 'labor';
     for (const staff of [counter, manager]) {
@@ -74,14 +63,14 @@ describe('counter staff and prices', () => {
   it('adds free lines only as taxed "other" lines; an untaxed free line needs a manager', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Free lines')).id);
     const lines = [
-      ...quote.lines.map(editable),
+      ...quote.lines.map(editableLine),
       { kind: 'labor', description: 'Cam swap, our price', quantity: 1, unitPriceCents: 1 },
     ];
     const refused = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });
     expect(refused.status).toBe(403);
     expect(refused.body.errors).toEqual([expect.objectContaining({ field: `lines.${lines.length - 1}.kind` })]);
     const supplies = [
-      ...quote.lines.map(editable),
+      ...quote.lines.map(editableLine),
       { kind: 'other', description: 'Shop supplies', quantity: 1, unitPriceCents: 1_999 },
     ];
     const ok = await counter.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines: supplies });
@@ -103,7 +92,7 @@ describe('counter staff and prices', () => {
 describe('discounts', () => {
   it('counter staff give a discount within the limit; it comes off before tax', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Small discount')).id);
-    const lines = quote.lines.map(editable);
+    const lines = quote.lines.map(editableLine);
     const i = camLineIndex(quote);
     const gross = quote.lines.reduce((s, l) => s + l.totalCents, 0);
     const discount = Math.floor((gross * 300) / 10_000); // 3 % of the job, under the default 5 %
@@ -124,7 +113,7 @@ describe('discounts', () => {
 
   it('above the limit: counter staff’s save waits for a manager, a manager’s own is approved; both audited', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Big discount')).id);
-    const lines = quote.lines.map(editable);
+    const lines = quote.lines.map(editableLine);
     const i = camLineIndex(quote);
     const gross = quote.lines.reduce((s, l) => s + l.totalCents, 0);
     lines[i].discountCents = Math.min(lines[i].unitPriceCents, Math.ceil((gross * 800) / 10_000)); // about 8 %
@@ -153,7 +142,7 @@ describe('discounts', () => {
           .status,
       ).toBe(403);
       const quote = await read((await makeDraftQuote(counter, 'Raised limit')).id);
-      const lines = quote.lines.map(editable);
+      const lines = quote.lines.map(editableLine);
       const i = camLineIndex(quote);
       const gross = quote.lines.reduce((s, l) => s + l.totalCents, 0);
       lines[i].discountCents = Math.min(lines[i].unitPriceCents, Math.floor((gross * 800) / 10_000));
@@ -173,7 +162,7 @@ describe('discounts', () => {
 describe('managers override prices', () => {
   it('a manager’s price stands, is audited, and counter staff may keep it while editing other lines', async () => {
     const quote = await read((await makeDraftQuote(counter, 'Manager price')).id);
-    const lines = quote.lines.map(editable);
+    const lines = quote.lines.map(editableLine);
     const i = camLineIndex(quote);
     lines[i].unitPriceCents -= 2_500;
     const overridden = await manager.patch(`/api/quotes/${quote.id}`).send({ version: quote.version, lines });

@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 import type Stripe from 'stripe';
 import request from 'supertest';
 import { towingTruck } from '@/lib/builds/sample-trucks';
-import type { QuoteRecord } from '@/lib/quotes/types';
+import type { QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 import { readRuntime } from './runtime';
 import { DEMO } from './demo';
 
@@ -135,3 +135,15 @@ export async function makeDepositPaidQuote(staff: Agent, label: string, options:
   const quote = await waitForQuote(staff, sent.id, (q) => q.status === 'deposit-paid');
   return { ...sent, quote, sessionId, event };
 }
+
+/** A stored line as the quote page sends it back in a PATCH (the fields staff may type). */
+export const editableLine = (l: QuoteLineRecord) => ({
+  kind: l.kind,
+  description: l.description,
+  quantity: l.quantity,
+  unitPriceCents: l.unitPriceCents,
+  discountCents: l.discountCents,
+  camId: l.camId,
+  partId: l.partId,
+  laborOperationId: l.laborOperationId,
+});
