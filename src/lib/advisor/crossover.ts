@@ -1,6 +1,16 @@
 /** Crossover rpm is reported to the nearest 10 rpm (our choice: finer than anyone can feel). */
 export const CROSSOVER_RESOLUTION_RPM = 10;
 
+/**
+ * Torque differences smaller than this share of the current cam's torque are a tie, not a lead lost
+ * (numerics, our choice): the cycle model settles each point to 0.2 % and its points move by up to about
+ * 0.5 % between two and five cycles (measured 3 Dec 2026), so a dip of a pound-foot or two is below
+ * what the model can resolve and must not move the crossover by thousands of rpm.
+ */
+export const TIE_FRACTION = 0.005;
+
+const behind = (candidate: number, baseline: number) => candidate < baseline * (1 - TIE_FRACTION);
+
 const round = (rpm: number) => Math.round(rpm / CROSSOVER_RESOLUTION_RPM) * CROSSOVER_RESOLUTION_RPM;
 
 // Where the torque difference changes sign between two grid points, linearly interpolated.
@@ -16,8 +26,9 @@ function lastIndex(rpms: ArrayLike<number>, limitRpm: number): number {
 }
 
 // Definition used by the shop: the crossover is the first rpm from which the candidate out-pulls the
-// baseline and keeps doing so to the engine's rev limit (default: the top of the curve). Between grid
-// points the torque difference is interpolated linearly. Null when the candidate is behind at the limit.
+// baseline and keeps doing so to the engine's rev limit (default: the top of the curve); a tie within the
+// model's resolution on the way does not end the lead. Between grid points the torque difference is
+// interpolated linearly. Null when the candidate is not ahead at any point of that last stretch.
 export function crossoverRpm(
   rpms: ArrayLike<number>,
   candidate: ArrayLike<number>,
@@ -25,12 +36,11 @@ export function crossoverRpm(
   limitRpm = Infinity,
 ): number | null {
   const n = lastIndex(rpms, limitRpm);
-  let first = -1;
-  for (let i = n; i >= 0; i--) {
-    if (candidate[i] > baseline[i]) first = i;
-    else break;
-  }
-  if (first < 0) return null;
+  let stretchStart = n + 1;
+  while (stretchStart > 0 && !behind(candidate[stretchStart - 1], baseline[stretchStart - 1])) stretchStart--;
+  let first = stretchStart;
+  while (first <= n && candidate[first] <= baseline[first]) first++;
+  if (first > n) return null;
   if (first === 0) return rpms[0];
   return round(
     signChangeRpm(rpms, candidate[first - 1] - baseline[first - 1], candidate[first] - baseline[first], first),
@@ -54,7 +64,7 @@ export function leadStretch(
   let best: LeadStretch | null = null;
   let start = -1;
   for (let i = 0; i <= n + 1; i++) {
-    const ahead = i <= n && candidate[i] > baseline[i];
+    const ahead = i <= n && (start >= 0 ? !behind(candidate[i], baseline[i]) : candidate[i] > baseline[i]);
     if (ahead && start < 0) start = i;
     if (!ahead && start >= 0) {
       const from =

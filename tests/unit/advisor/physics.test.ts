@@ -12,6 +12,7 @@ import {
   valveEvents,
 } from '@/lib/advisor';
 import { cam, dynoBuild, bigCam, truckCam, variant } from './fixtures';
+import { crossoverRpm, TIE_FRACTION } from '@/lib/advisor/crossover';
 
 describe('horsepower', () => {
   it('hp = torque · rpm / 5252 (definition of horsepower, 33,000 ft·lbf/min)', () => {
@@ -158,5 +159,30 @@ describe('cruise rpm', () => {
     expect(cruiseRpm(70, 3.73, 0.7, 31)).toBeCloseTo(1981.8, 1);
     // The constant itself: 63,360 in per mile / (60 · π) = 336.135 (arithmetic).
     expect(Math.abs(63360 / (60 * Math.PI) - 336.13)).toBeLessThan(0.01);
+  });
+});
+
+describe('crossover ties (numerical resolution of the cycle model)', () => {
+  const rpms = [3000, 3500, 4000, 4500, 5000, 5500];
+  const stock = [433, 439, 440, 434, 420, 390];
+  it('a dip smaller than TIE_FRACTION does not end the lead', () => {
+    const cam = [426, 451, 452, 444, 419, 406]; // 1 lb·ft behind at 5,000 rpm
+    const x = crossoverRpm(rpms, cam, stock)!;
+    expect(x).toBeGreaterThan(3000);
+    expect(x).toBeLessThan(3500);
+  });
+  it('a real shortfall still ends it', () => {
+    const cam = [426, 451, 452, 444, 400, 406]; // 20 lb·ft behind at 5,000 rpm
+    expect(crossoverRpm(rpms, cam, stock)).toBeGreaterThan(5000);
+  });
+  it('a tie alone is no lead: level with the current cam at the top is null', () => {
+    expect(
+      crossoverRpm(
+        rpms,
+        stock.map((t) => t - 1),
+        stock,
+      ),
+    ).toBeNull();
+    expect(TIE_FRACTION).toBeLessThan(0.01);
   });
 });
