@@ -9,6 +9,7 @@ import { pdfText } from '../support/pdf-text';
 import { readRuntime } from '../support/runtime';
 import { FIXTURE_CAM_ID } from '../support/quote-fixtures';
 import type { QuoteRecord } from '@/lib/quotes/types';
+import { postRefund } from '../support/refunds';
 
 // The balance (issue 12, item 7) over HTTP against the real build, MariaDB and both fakes: the balance
 // due once the deposit is paid, money taken at the counter, the pay-the-balance e-mail and its checkout
@@ -86,7 +87,7 @@ describe('the balance due once the deposit is paid', () => {
 
   it('adds back a part refund of the deposit', async () => {
     const job = await makePaidJob(counter, 'Balance after refund');
-    const refunded = await manager.post(`/api/quotes/${job.id}/refund`).send({ amountCents: 2_500 });
+    const refunded = await postRefund(manager, job.id, { amountCents: 2_500 });
     expect(refunded.status).toBe(200);
     expect(refunded.body.balanceDueCents).toBe(job.totalCents - job.depositCents + 2_500);
   });

@@ -6,6 +6,7 @@ import { waitForMailsTo, type Mail } from '../support/mail';
 import { pdfText } from '../support/pdf-text';
 import { makeSentQuote, payDeposit } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
+import { postRefund } from '../support/refunds';
 
 // Documents and e-mails (issue 12, items 6 and 5): the quote as a PDF for staff and for the customer,
 // the customer page's print styles, and every customer e-mail from its template with both parts, from
@@ -132,9 +133,7 @@ describe('e-mails from templates', () => {
   it('refund notice: after a full refund, both parts, from the shop', async () => {
     const quote = await makeSentQuote(counter, 'Refund mail');
     await payDeposit(manager, quote);
-    expect(
-      (await manager.post(`/api/quotes/${quote.id}/refund`).send({ amountCents: quote.depositCents })).status,
-    ).toBe(200);
+    expect((await postRefund(manager, quote.id, { amountCents: quote.depositCents })).status).toBe(200);
     const mails = await waitForMailsTo(quote.customerEmail, 3);
     const notice = mails.find((m) => /refunded/.test(m.subject))!;
     for (const part of [notice.html, notice.text]) {

@@ -5,6 +5,7 @@ import { connectTestDatabase, disconnectTestDatabase } from '../support/database
 import { waitForMailsTo } from '../support/mail';
 import { dayFromToday, makeDraftQuote, makeSentQuote, payDeposit, type FixtureQuote } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
+import { postRefund } from '../support/refunds';
 
 // The quote lifecycle (issue 12, item 2) over HTTP against the real build, MariaDB and both fakes.
 // Every test makes its own quotes; dates are relative to the day the test runs.
@@ -111,9 +112,7 @@ describe('every move staff may make', () => {
   it('lets a manager refund an accepted-then-paid quote and reopen it (refund → sent)', async () => {
     const quote = await quoteIn('accepted', 'Accepted then paid');
     await payDeposit(manager, quote as FixtureQuote & { token: string });
-    const refund = await manager
-      .post(`/api/quotes/${quote.id}/refund`)
-      .send({ amountCents: quote.depositCents, afterFullRefund: 'reopen' });
+    const refund = await postRefund(manager, quote.id, { amountCents: quote.depositCents, afterFullRefund: 'reopen' });
     expect(refund.status).toBe(200);
     expect(refund.body.status).toBe('sent');
     const vias = (await transitions(quote.id)).map((row) => parsed(row.after).via);

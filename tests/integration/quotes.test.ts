@@ -16,6 +16,7 @@ import {
   waitForQuote,
 } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
+import { postRefund } from '../support/refunds';
 
 // Quotes end to end over HTTP against the real build, the real MariaDB and both fakes: drafted, priced,
 // sent by e-mail, opened from the link, paid through the payments fake, replayed, tampered, refunded.
@@ -392,13 +393,11 @@ describe('the deposit', () => {
 
   it('refunds: managers only, never more than was paid, counted once with the webhook', async () => {
     const paid = await makeDepositPaidQuote(counter, 'Refunds');
-    expect((await counter.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: 100 })).status).toBe(403);
-    const tooMuch = await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: paid.depositCents + 1 });
+    expect((await postRefund(counter, paid.id, { amountCents: 100 })).status).toBe(403);
+    const tooMuch = await postRefund(manager, paid.id, { amountCents: paid.depositCents + 1 });
     expect(tooMuch.status).toBe(422);
     expect(tooMuch.body.errors).toEqual([expect.objectContaining({ field: 'amountCents' })]);
-    const part = await manager
-      .post(`/api/quotes/${paid.id}/refund`)
-      .send({ amountCents: 5_000, reason: 'customer dropped the converter' });
+    const part = await postRefund(manager, paid.id, { amountCents: 5_000, reason: 'customer dropped the converter' });
     expect(part.status).toBe(200);
     expect(part.body.refundedCents).toBe(5_000);
     expect(part.body.payments[0].status).toBe('partially-refunded');
@@ -423,7 +422,7 @@ describe('the deposit', () => {
     const after = await readQuote(paid.id);
     expect(after.refundedCents).toBe(5_000);
     const rest = paid.depositCents - 5_000;
-    expect((await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: rest + 1 })).status).toBe(422);
+    expect((await postRefund(manager, paid.id, { amountCents: rest + 1 })).status).toBe(422);
   });
 });
 

@@ -133,10 +133,9 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
 
   const set = (i: number, change: Partial<EditLine>) =>
     setEditing((rows) => rows!.map((r, j) => (j === i ? { ...r, ...change } : r)));
-  // Refunds here are of the deposit; a balance taken at the counter is given back at the counter.
-  const paid = quote.payments.find(
-    (p) =>
-      p.purpose === 'deposit' && !p.duplicateOfPaymentId && (p.status === 'paid' || p.status === 'partially-refunded'),
+  // Any payment still holding money can be refunded: the deposit or a balance payment (online or at the counter).
+  const refundable = quote.payments.filter(
+    (p) => !p.duplicateOfPaymentId && (p.status === 'paid' || p.status === 'partially-refunded'),
   );
 
   return (
@@ -422,8 +421,16 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
               </a>
             </p>
           ) : null}
-          {roleCan(role, 'quotes.refund') && paid ? (
-            <RefundForm leftCents={paid.amountCents - paid.refundedCents} url={url} run={runJson} busy={busy} />
+          {roleCan(role, 'quotes.refund') && refundable.length ? (
+            <RefundForm
+              key={`refund-${quote.version}`}
+              payments={refundable}
+              version={quote.version}
+              balanceDueCents={quote.balanceDueCents}
+              url={url}
+              run={runJson}
+              busy={busy}
+            />
           ) : null}
         </section>
       </div>

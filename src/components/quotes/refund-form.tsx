@@ -3,30 +3,50 @@
 import { useState } from 'react';
 import { formatMoney } from '@/lib/format';
 import { amountWithin } from '@/lib/forms/amount';
+import { METHOD_WORDS, PURPOSE_WORDS } from '@/lib/quotes/balance';
+import type { PaymentRecord } from '@/lib/quotes/types';
 import { Button } from '@/components/ui/button';
-import { RadioGroup } from '@/components/ui/field';
+import { RadioGroup, SelectControl } from '@/components/ui/field';
 import type { QuoteRun } from './quote-run';
 
-// A refund is money leaving the shop: the manager types an amount, then confirms it on a second step
-// that says what happens to the job. A full refund asks whether the job is cancelled or the quote
-// reopened for a new payment; nothing is sent until "Confirm refund".
+// A refund is money leaving the shop: the manager picks the payment (the deposit or a balance payment),
+// types an amount, then confirms it on a second step that says what happens to the job. When it gives back
+// the last money held, it asks whether the job is cancelled or the quote reopened; nothing is sent until
+// "Confirm refund". The quote's version goes with it, so a second click refunds nothing (409).
+
+const leftOn = (p: PaymentRecord) => p.amountCents - p.refundedCents;
+const paymentLabel = (p: PaymentRecord) =>
+  `${PURPOSE_WORDS[p.purpose]} — ${METHOD_WORDS[p.method].toLowerCase()}, ${formatMoney(leftOn(p))} left`;
+
 export function RefundForm({
-  leftCents,
+  payments,
+  version,
+  balanceDueCents,
   url,
   run,
   busy,
 }: {
-  leftCents: number;
+  /** The payments still holding money, oldest first. */
+  payments: PaymentRecord[];
+  version: number;
+  balanceDueCents: number;
   url: string;
   run: QuoteRun;
   busy: boolean;
 }) {
+  const [paymentId, setPaymentId] = useState(payments[0].id);
   const [amount, setAmount] = useState('');
   const [reason, setReason] = useState('');
   const [review, setReview] = useState<number | null>(null);
   const [after, setAfter] = useState<'cancel' | 'reopen'>('cancel');
   const [problem, setProblem] = useState<string | null>(null);
-  const full = review !== null && review >= leftCents;
+  const payment = payments.find((p) => p.id === paymentId) ?? payments[0];
+  const leftCents = leftOn(payment);
+  const whole = review !== null && review >= leftCents;
+  // The last money held on the quote: the job cannot stay booked, so the manager says what happens to it.
+  const last = whole && payments.length === 1;
+  const what = payment.purpose === 'balance' ? 'balance payment' : 'deposit';
+  const atCounter = payment.method !== 'online';
 
   if (review !== null) {
     return (
@@ -36,10 +56,12 @@ export function RefundForm({
         className="mt-3 rounded border-2 border-fault-700 bg-fault-100 p-3 text-sm"
       >
         <p id="refund-confirm" className="font-semibold">
-          Refund {formatMoney(review)} to the customer’s card{full ? ' — the whole deposit that is left' : ''}? This
-          cannot be undone.
+          {atCounter
+            ? `Record ${formatMoney(review)} handed back at the counter from the ${what}`
+            : `Refund ${formatMoney(review)} of the ${what} to the customer’s card`}
+          {whole ? ` — all that is left of it` : ''}? This cannot be undone.
         </p>
-        {full ? (
+        {last ? (
           <RadioGroup
             name="after"
             legend="Then the job…"
@@ -54,9 +76,12 @@ export function RefundForm({
             onChange={setAfter}
           />
         ) : (
-          <p className="mt-1">Part of the deposit stays paid; the job stays booked.</p>
+          <p className="mt-1">
+            Other money stays paid and the job stays on; {formatMoney(balanceDueCents + review)} is then left to pay on
+            it.
+          </p>
         )}
-        <p className="mt-1">The customer is e-mailed when the whole deposit has been refunded.</p>
+        <p className="mt-1">The customer is e-mailed about the refund.</p>
         <div className="mt-3 flex flex-wrap gap-2">
           <Button
             type="button"
@@ -67,8 +92,16 @@ export function RefundForm({
                 'Not refunded',
                 'POST',
                 `${url}/refund`,
-                { amountCents: review, ...(reason ? { reason } : {}), ...(full ? { afterFullRefund: after } : {}) },
-                `Refund of ${formatMoney(review)} sent to the payment service.`,
+                {
+                  version,
+                  paymentId: payment.id,
+                  amountCents: review,
+                  ...(reason ? { reason } : {}),
+                  ...(last ? { afterFullRefund: after } : {}),
+                },
+                atCounter
+                  ? `Refund of ${formatMoney(review)} recorded as handed back at the counter.`
+                  : `Refund of ${formatMoney(review)} sent to the payment service.`,
               ).then((ok) => {
                 if (ok) {
                   setAmount('');
@@ -98,6 +131,16 @@ export function RefundForm({
         setReview(checked.cents);
       }}
     >
+      {payments.length > 1 ? (
+        <SelectControl
+          id="refund-payment"
+          label="Payment to refund"
+          className="w-full"
+          options={payments.map((p) => [String(p.id), paymentLabel(p)] as const)}
+          value={String(payment.id)}
+          onChange={(e) => setPaymentId(Number(e.target.value))}
+        />
+      ) : null}
       <label className="text-sm">
         Refund amount ($, at most {formatMoney(leftCents)})
         <input

@@ -54,6 +54,9 @@ const EDGES: readonly Edge[] = [
     via: 'refund',
     why: 'deposit refunded, quote open again',
   })),
+  // A refund of money on a closed job (a balance payment, or what is left of the deposit) leaves part of the
+  // job unpaid again: it goes back to the open job with a balance due, never to a silent "paid in full".
+  { from: 'closed', to: 'deposit-paid', via: 'refund', why: 'money refunded, the balance is due again' },
   ...(['sent', 'accepted', 'expired', 'declined'] as QuoteStatus[]).map((from): Edge => ({
     from,
     to: 'replaced',
@@ -97,7 +100,7 @@ export function refusalMessage(from: QuoteStatus, to: QuoteStatus, via: Transiti
       staff: 'the transition route',
       send: 'sending the quote (POST /api/quotes/[id]/send)',
       payment: 'the customer paying the deposit',
-      refund: 'refunding the deposit in full (POST /api/quotes/[id]/refund)',
+      refund: 'a refund (POST /api/quotes/[id]/refund)',
       revise: 'revising the quote (POST /api/quotes/[id]/revise)',
     };
     return `A quote goes from ${STATE_WORDS[from].toLowerCase()} to ${STATE_WORDS[to].toLowerCase()} only by ${how[other.via]}.`;

@@ -15,9 +15,9 @@ import {
 } from '@/lib/db/queries/quote-payments';
 import { moveQuote } from '@/lib/db/queries/quote-lifecycle';
 import { lockQuote } from '@/lib/db/queries/quotes';
-import { settleFullRefund } from '@/lib/db/queries/refund-effects';
+import { settleAfterRefund } from '@/lib/db/queries/refund-effects';
 import { payments } from '@/lib/payments';
-import { balanceDueCents, counts } from './balance';
+import { balanceDueCents, counts, type PaymentPurpose } from './balance';
 import { closeWhenPaid } from './balance-collection';
 import { heldDeposit } from './checkout';
 import { sessionMismatches } from './deposit-rules';
@@ -203,7 +203,8 @@ export async function recordChargeRefunded(charge: Stripe.Charge): Promise<Webho
   if (!intent) return { result: 'ignored' };
   const known = await paymentForProviderPayment(intent);
   if (!known) return { result: 'ignored' };
-  let settled = false;
+  // Set inside the transaction's callback (control flow does not follow it there, hence the cast).
+  let settled = null as { amountCents: number; purpose: PaymentPurpose } | null;
   const outcome = await retryOnLockContention(() =>
     db().transaction(async (t): Promise<WebhookResult> => {
       const quote = await lockQuote(known.quoteId, t);
@@ -211,6 +212,7 @@ export async function recordChargeRefunded(charge: Stripe.Charge): Promise<Webho
       if (!payment || !quote) return { result: 'ignored' };
       const refunded = Math.min(payment.amountCents, Math.max(payment.refundedCents, charge.amount_refunded));
       if (refunded === payment.refundedCents) return { result: 'already' };
+      const before = payment.refundedCents;
       await setRefundedCents(payment, refunded, t);
       await recordAudit(
         {
@@ -223,11 +225,11 @@ export async function recordChargeRefunded(charge: Stripe.Charge): Promise<Webho
         t,
       );
       // A refund made at the provider, outside the app: the job is cancelled, as the app's own default.
-      settled =
-        payment.status === 'refunded' && (await settleFullRefund(quote, 'cancel', { actor: 'payments-webhook' }, t));
+      const settlement = await settleAfterRefund(quote, 'cancel', { actor: 'payments-webhook' }, t);
+      if (settlement !== 'unchanged') settled = { amountCents: refunded - before, purpose: payment.purpose };
       return { result: 'applied' };
     }),
   );
-  if (settled) await sendRefundNotice(known.quoteId);
+  if (settled) await sendRefundNotice(known.quoteId, settled);
   return outcome;
 }

@@ -1,11 +1,12 @@
 import { createElement } from 'react';
 import type { MailShop } from '@/emails/layout';
 import { QuoteSentEmail, quoteSentSubject } from '@/emails/quote-sent';
-import { RefundNoticeEmail, refundNoticeSubject } from '@/emails/refund-notice';
+import { RefundNoticeEmail, refundNoticeSubject, type RefundStanding } from '@/emails/refund-notice';
 import { renderMail } from '@/emails/render';
 import { quoteForNotice, shopSettingsRow } from '@/lib/db/queries/quotes';
 import { sendMail, type OutgoingMail } from '@/lib/mail';
-import type { QuoteRecord } from './types';
+import { balanceDueCents, type PaymentPurpose } from './balance';
+import type { QuoteRecord, QuoteStatus } from './types';
 
 // The customer's e-mails about a quote, built from the templates in src/emails: from the shop's name,
 // replies to the shop's address. Refund notices go after the commit: a refused e-mail is logged and
@@ -49,8 +50,14 @@ export async function quoteSentMail(
   };
 }
 
-/** The refund notice after the deposit was refunded in full. It carries no link: only the token's hash is kept. */
-export async function sendRefundNotice(quoteId: number): Promise<void> {
+/**
+ * The refund notice: what was refunded (deposit or balance payment) and where the quote stands now. Sent
+ * after the commit; it carries no link: only the token's hash is kept.
+ */
+export async function sendRefundNotice(
+  quoteId: number,
+  refund: { amountCents: number; purpose: PaymentPurpose; atCounter?: boolean },
+): Promise<void> {
   try {
     const [{ quote, customer, payments }, settings] = await Promise.all([quoteForNotice(quoteId), shopSettingsRow()]);
     if (!quote || !customer?.email) return;
@@ -59,8 +66,11 @@ export async function sendRefundNotice(quoteId: number): Promise<void> {
       shop,
       customerName: customer.name,
       number: quote.number,
-      refundedCents: payments.reduce((s, p) => s + p.refundedCents, 0),
-      reopened: quote.status === 'sent',
+      refundedCents: refund.amountCents,
+      purpose: refund.purpose,
+      atCounter: refund.atCounter ?? false,
+      standing: refundStanding(quote.status),
+      balanceDueCents: balanceDueCents(quote.totalCents, payments),
     };
     await sendMail({
       ...envelope(shop, customer.email),
@@ -69,4 +79,12 @@ export async function sendRefundNotice(quoteId: number): Promise<void> {
   } catch (error) {
     console.error(`[refunds] the refund notice for quote ${quoteId} was not sent`, error);
   }
+}
+
+/** The quote's state after a refund, as the notice tells it. */
+function refundStanding(status: QuoteStatus): RefundStanding {
+  if (status === 'cancelled') return 'cancelled';
+  if (status === 'sent' || status === 'accepted') return 'reopened';
+  if (status === 'closed') return 'paid-in-full';
+  return 'booked';
 }

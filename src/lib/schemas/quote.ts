@@ -76,7 +76,10 @@ export const QuotePatchSchema = z.strictObject({
   validUntil: z.iso.date({ error: 'validUntil must be a date (YYYY-MM-DD)' }).nullable().optional(),
 });
 
+/** A refund of one payment: the quote's version as loaded (a double click refunds once), which payment (default: the deposit). */
 export const QuoteRefundSchema = z.strictObject({
+  version: VersionSchema,
+  paymentId: id('paymentId').optional(),
   afterFullRefund: z
     .enum(['cancel', 'reopen'], {
       error: "afterFullRefund must be 'cancel' (the job is cancelled) or 'reopen' (the quote can be paid again)",

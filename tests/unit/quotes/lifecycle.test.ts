@@ -28,10 +28,13 @@ describe('quote lifecycle', () => {
     expect(canTransition('deposit-paid', 'cancelled', 'refund')).toBe(true);
     expect(canTransition('draft', 'sent', 'send')).toBe(true);
     expect(canTransition('cancelled', 'deposit-paid', 'payment')).toBe(false);
-    // The balance paid in full closes the job; nothing reopens a closed one.
+    // The balance paid in full closes the job; only a refund (money owed again) reopens a closed one.
     expect(canTransition('deposit-paid', 'closed', 'payment')).toBe(true);
     expect(canTransition('sent', 'closed', 'payment')).toBe(false);
     expect(canTransition('closed', 'deposit-paid', 'payment')).toBe(false);
+    expect(canTransition('closed', 'deposit-paid', 'staff')).toBe(false);
+    expect(canTransition('closed', 'deposit-paid', 'refund')).toBe(true);
+    expect(canTransition('closed', 'cancelled', 'refund')).toBe(false);
   });
 
   it('says how a move is made when it belongs to another flow', () => {

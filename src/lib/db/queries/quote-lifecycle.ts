@@ -45,6 +45,7 @@ export async function moveQuote(
   quote.set({ status: to });
   if (to === 'accepted' || to === 'deposit-paid') quote.set({ acceptedAt: quote.acceptedAt ?? now });
   if (to === 'closed') quote.set({ closedAt: now });
+  else if (from === 'closed') quote.set({ closedAt: null });
   if (from === to) quote.changed('updatedAt', true);
   await quote.save({ transaction: t });
   await recordAudit(

@@ -45,11 +45,22 @@ export function paymentForProviderPayment(intent: string): Promise<Pick<Payment,
   return Payment.findOne({ where: { providerPaymentId: intent }, attributes: ['id', 'quoteId'] });
 }
 
-/** The deposit a manager can refund: the latest paid (or partly refunded) one that is not a duplicate, locked. */
-export function lockRefundableDeposit(quoteId: number, t: Transaction): Promise<Payment | null> {
+/**
+ * The payment a manager refunds, locked: the one named (deposit or balance, online or at the counter), else
+ * the latest deposit. Only money still held counts (paid or partly refunded, never a duplicate given back).
+ */
+export function lockRefundablePayment(
+  quoteId: number,
+  paymentId: number | undefined,
+  t: Transaction,
+): Promise<Payment | null> {
   return Payment.findOne({
-    // Balance payments are settled at the counter or by the provider's dashboard for now.
-    where: { quoteId, purpose: 'deposit', status: { [Op.in]: [...HELD] }, duplicateOfPaymentId: null },
+    where: {
+      quoteId,
+      ...(paymentId !== undefined ? { id: paymentId } : { purpose: 'deposit' }),
+      status: { [Op.in]: [...HELD] },
+      duplicateOfPaymentId: null,
+    },
     order: [['id', 'DESC']],
     transaction: t,
     lock: t.LOCK.UPDATE,

@@ -1,32 +1,37 @@
 import 'server-only';
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { recordAudit } from '@/lib/audit';
+import { balanceDueCents, counts } from '@/lib/quotes/balance';
 import type { AfterFullRefund } from '@/lib/quotes/types';
-import { Payment, Quote } from '../models';
+import { Quote } from '../models';
 import { moveQuote, type AuditActor } from './quote-lifecycle';
+import { HELD, paymentsOf } from './quote-payments';
 
-// What a full refund of the deposit does to the quote, so no page keeps saying "Deposit paid": the job
-// is cancelled (the default) or the quote reopened for a new payment, as the manager chooses. The move
-// itself is the lifecycle's (src/lib/quotes/lifecycle.ts, via 'refund').
+// What a refund (of the deposit or of a balance payment) does to the quote, so no page keeps telling an
+// old story: a closed job that owes money again goes back to an open job with a balance due; when no money
+// is held any more, the job is cancelled (the default) or the quote reopened for a new payment, as the
+// manager chooses. The moves themselves are the lifecycle's (src/lib/quotes/lifecycle.ts, via 'refund').
 
 export type { AfterFullRefund };
 
-/**
- * Called with the quote row locked, after a payment's refunded amount changed. When no deposit is held
- * any more, a paid quote becomes cancelled or sent again. Returns true when it changed the quote.
- */
-export async function settleFullRefund(
+/** Where the quote stands after a refund; 'unchanged' when its state did not move. */
+export type RefundSettlement = 'unchanged' | 'balance-due' | 'cancelled' | 'reopened';
+
+/** Called with the quote row (and the refunded payment) locked, after a payment's refunded amount changed. */
+export async function settleAfterRefund(
   quote: Quote,
   after: AfterFullRefund,
   actor: AuditActor,
   t: Transaction,
-): Promise<boolean> {
-  if (quote.status !== 'deposit-paid' && quote.status !== 'accepted') return false;
-  const held = await Payment.count({
-    where: { quoteId: quote.id, status: { [Op.in]: ['paid', 'partially-refunded'] }, duplicateOfPaymentId: null },
-    transaction: t,
-  });
-  if (held > 0) return false;
+): Promise<RefundSettlement> {
+  const rows = await paymentsOf(quote.id, t);
+  let settlement: RefundSettlement = 'unchanged';
+  if (quote.status === 'closed' && balanceDueCents(quote.totalCents, rows) > 0) {
+    await moveQuote(quote, 'deposit-paid', 'refund', actor, t);
+    settlement = 'balance-due';
+  }
+  if (quote.status !== 'deposit-paid' && quote.status !== 'accepted') return settlement;
+  if (rows.some((p) => counts(p) && HELD.includes(p.status))) return settlement;
   const to = after === 'reopen' ? 'sent' : 'cancelled';
   const from = quote.status;
   await moveQuote(quote, to, 'refund', actor, t);
@@ -41,5 +46,5 @@ export async function settleFullRefund(
     },
     t,
   );
-  return true;
+  return to === 'sent' ? 'reopened' : 'cancelled';
 }

@@ -5,6 +5,7 @@ import { getQuoteByToken } from '@/lib/db/queries/quotes';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { CUSTOMER_CAUTIONS as CAUTIONS, REFUND_NOTE } from '@/lib/quotes/cautions';
 import { isTaxable } from '@/lib/quotes/pricing';
+import { refundStory } from '@/lib/quotes/refund-story';
 import { CustomerPayments } from '@/components/quotes/customer-payments';
 import { QuoteBasis } from '@/components/quotes/quote-basis';
 import { ReplacedNotice } from '@/components/quotes/replaced-notice';
@@ -61,34 +62,20 @@ export default async function CustomerQuotePage({
   // A refund is told as it is: a paid quote refunded in full is no longer "booked".
   // Amounts in the shop's own currency (shop settings), the one the deposit is charged in.
   const money = (cents: number) => formatMoney(cents, { currency: shop.currency });
-  const refunded = quote.refundedCents > 0 ? money(quote.refundedCents) : null;
+  const refunded = refundStory(quote, money, shop.name);
   const state =
-    refunded && quote.status === 'cancelled'
+    refunded ??
+    (quote.status === 'deposit-paid' && quote.balanceRequestedAt && quote.balanceDueCents > 0
       ? {
-          title: 'Deposit refunded — job cancelled',
-          text: `We refunded your deposit of ${refunded}; the job is cancelled and this quote is closed. Call or write to ${shop.name} if you would like a new quote.`,
+          title: 'Job done — balance to pay',
+          text: `The work is done. ${money(quote.balanceDueCents)} is left to pay: below, or when you collect the car.`,
         }
-      : refunded && quote.status === 'deposit-paid'
+      : lapsed
         ? {
-            title: 'Deposit paid, part refunded',
-            text: `${refunded} of your deposit was refunded. The job is still booked; we will be in touch about the date.`,
+            title: 'No longer valid',
+            text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.`,
           }
-        : refunded && open
-          ? {
-              title: 'Deposit refunded',
-              text: `We refunded your earlier deposit of ${refunded}. This quote is open again: you can pay the deposit below when you are ready.`,
-            }
-          : quote.status === 'deposit-paid' && quote.balanceRequestedAt && quote.balanceDueCents > 0
-            ? {
-                title: 'Job done — balance to pay',
-                text: `The work is done. ${money(quote.balanceDueCents)} is left to pay: below, or when you collect the car.`,
-              }
-            : lapsed
-              ? {
-                  title: 'No longer valid',
-                  text: `This quote was valid until ${longDate(quote.validUntil!)}, so it can no longer be accepted or paid. Prices and parts change: call or write to ${shop.name} and we will send you a fresh quote.`,
-                }
-              : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' });
+        : (STATUS_WORDS[quote.status] ?? { title: quote.status, text: '' }));
   return (
     <div className="customer-quote mx-auto max-w-2xl px-4 py-8 text-lg leading-relaxed text-ink print:max-w-none print:px-0 print:py-0 print:text-base">
       <p className="text-base text-ink-muted">{shop.name}</p>
