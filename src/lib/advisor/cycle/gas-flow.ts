@@ -21,7 +21,6 @@ export function orificeMassFlowKgPerS(
 }
 
 type ChokeConstants = { gamma: number; criticalRatio: number; chokedFactor: number; twoGammaOverGm1: number };
-let lastChoke: ChokeConstants = makeChokeConstants(1.4);
 
 function makeChokeConstants(gamma: number): ChokeConstants {
   return {
@@ -32,10 +31,21 @@ function makeChokeConstants(gamma: number): ChokeConstants {
   };
 }
 
-// The γ-only terms, kept for the last γ seen: consecutive calls nearly always share it.
+// The γ-only terms, kept for the last two γ seen: calls alternate between fresh air flowing in (γ fixed)
+// and cylinder gas flowing out (γ of its mixture), so one slot would be recomputed on nearly every call.
+let chokeA: ChokeConstants = makeChokeConstants(1.4);
+let chokeB: ChokeConstants = makeChokeConstants(1.35);
 function chokeConstants(gamma: number): ChokeConstants {
-  if (lastChoke.gamma !== gamma) lastChoke = makeChokeConstants(gamma);
-  return lastChoke;
+  if (chokeA.gamma === gamma) return chokeA;
+  if (chokeB.gamma !== gamma) {
+    chokeB = chokeA;
+    chokeA = makeChokeConstants(gamma);
+    return chokeA;
+  }
+  const hit = chokeB;
+  chokeB = chokeA;
+  chokeA = hit;
+  return hit;
 }
 
 /** Flow-bench test pressure, 28 inH2O in pascals (the trade's standard depression). */

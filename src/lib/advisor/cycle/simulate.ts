@@ -76,17 +76,11 @@ function valveFlowOut(
   guess: number,
 ): number {
   // Solve ṁ = f(p_port(ṁ)) by the secant method from the last step's flow; f falls as ṁ grows, so the root is unique.
-  const f = (mdot: number) => {
-    const pPort = Math.max(1000, portBasePa + impedance * mdot);
-    return pCyl >= pPort
-      ? orificeMassFlowKgPerS(areaM2, pCyl, tCyl, pPort, gCyl)
-      : -orificeMassFlowKgPerS(areaM2, pPort, tPort, pCyl, GAMMA_AIR);
-  };
   let m0 = guess;
-  let g0 = f(m0) - m0;
+  let g0 = portFlow(areaM2, pCyl, tCyl, gCyl, portBasePa, impedance, tPort, m0) - m0;
   let m1 = m0 + 0.5 * g0;
   for (let k = 0; k < 3; k++) {
-    const g1 = f(m1) - m1;
+    const g1 = portFlow(areaM2, pCyl, tCyl, gCyl, portBasePa, impedance, tPort, m1) - m1;
     if (g1 === g0 || Math.abs(g1) < 1e-7) return m1;
     const m2 = m1 - (g1 * (m1 - m0)) / (g1 - g0);
     m0 = m1;
@@ -96,6 +90,24 @@ function valveFlowOut(
   return m1;
 }
 
+// The valve's flow for an assumed flow ṁ, whose own wave sets the port pressure (a plain function, not a
+// closure: this runs millions of times per ranking and closures would be garbage).
+function portFlow(
+  areaM2: number,
+  pCyl: number,
+  tCyl: number,
+  gCyl: number,
+  portBasePa: number,
+  impedance: number,
+  tPort: number,
+  mdot: number,
+): number {
+  const pPort = Math.max(1000, portBasePa + impedance * mdot);
+  return pCyl >= pPort
+    ? orificeMassFlowKgPerS(areaM2, pCyl, tCyl, pPort, gCyl)
+    : -orificeMassFlowKgPerS(areaM2, pPort, tPort, pCyl, GAMMA_AIR);
+}
+
 function intoBuffer(b: Buffer, dm: number, air: number, t: number): void {
   const m = b.m + dm;
   b.t = (b.m * b.t + dm * t) / m;
@@ -103,12 +115,16 @@ function intoBuffer(b: Buffer, dm: number, air: number, t: number): void {
   b.m = Math.min(m, b.capKg);
 }
 
-/** Takes dm from the gas next to the valve: first what the valve pushed out before, then the far side's gas. */
-function fromBuffer(b: Buffer, dm: number, farAirShare: number, farT: number): { air: number; heat: number } {
+type Drawn = { air: number; heat: number };
+
+/** Takes dm from the gas next to the valve: first what the valve pushed out before, then the far side's gas (into `out`, reused: no garbage per step). */
+function fromBuffer(b: Buffer, dm: number, farAirShare: number, farT: number, out: Drawn): Drawn {
   const near = Math.min(dm, b.m);
   const far = dm - near;
   b.m -= near;
-  return { air: near * b.air + far * farAirShare, heat: AIR_CP * (near * b.t + far * farT) };
+  out.air = near * b.air + far * farAirShare;
+  out.heat = AIR_CP * (near * b.t + far * farT);
+  return out;
 }
 
 export function simulateRpm(
@@ -159,6 +175,7 @@ export function simulateRpm(
   let meanOutIn = warm?.meanOutIntakeKgPerS ?? -airflow / engine.cylinders;
   let meanOutEx = warm?.meanOutExhaustKgPerS ?? (1.07 * airflow) / engine.cylinders;
   let point: CyclePoint | null = null;
+  const scratch: Drawn = { air: 0, heat: 0 };
   const cycles = warm ? 2 : 3;
   for (let cycle = 0; cycle < cycles; cycle++) {
     const cEx = speedOfSoundMPerS(GAMMA_BURNED, 0.85 * exhaustTempK);
@@ -306,7 +323,7 @@ export function simulateRpm(
       const airShare = gas.air / gas.m;
       // Intake valve: in from the runner (first what flowed back into it), or back out into it.
       if (dmIn > 0) {
-        const drawn = fromBuffer(intakeBuf, dmIn, 1, tIn);
+        const drawn = fromBuffer(intakeBuf, dmIn, 1, tIn, scratch);
         mass += dmIn;
         air += drawn.air;
         energy += drawn.heat;
@@ -320,7 +337,7 @@ export function simulateRpm(
       }
       // Exhaust valve: out into the primary, or back in from it (reversion).
       if (dmEx > 0) {
-        const drawn = fromBuffer(exhaustBuf, dmEx, exhaustBuf.air, exhaustTempK);
+        const drawn = fromBuffer(exhaustBuf, dmEx, exhaustBuf.air, exhaustTempK, scratch);
         mass += dmEx;
         air += drawn.air;
         energy += drawn.heat;
