@@ -1,7 +1,8 @@
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { conflict, notFound, refused, runWrite } from '@/lib/db/write';
-import { getQuote, lockQuote, presentQuote, saveQuote } from '@/lib/db/queries/quotes';
+import { getQuote, lockQuote, saveQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from './present';
 import { recordOrThrow } from './refusals';
 import type { QuoteRecord } from './types';
 

@@ -9,11 +9,11 @@ import {
   getQuote,
   insertDraft,
   lockQuote,
-  presentQuote,
   saveQuote,
   shopSettingsRow,
   writeLines,
 } from '@/lib/db/queries/quotes';
+import { presentQuote } from './present';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from '@/lib/db/queries/quote-lines';
 import type { FieldError } from '@/lib/http/responses';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';

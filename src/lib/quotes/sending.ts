@@ -8,10 +8,10 @@ import {
   getQuote,
   isFrozen,
   lockQuoteWithParts,
-  presentQuote,
   shopSettingsRow,
   snapshotSource,
 } from '@/lib/db/queries/quotes';
+import { presentQuote } from './present';
 import { appBaseUrl } from '@/lib/env';
 import { MailError, sendMail } from '@/lib/mail';
 import { stateWord, validUntilFrom } from './lifecycle';

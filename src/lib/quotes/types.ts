@@ -85,7 +85,7 @@ export type QuoteRecord = {
   sentAt: string | null;
   acceptedAt: string | null;
   payments: PaymentRecord[];
-  /** Goods cost and margin; left out for roles without 'costs.read' (see presentQuote). */
+  /** Goods cost and margin; left out for roles without 'costs.read' (see presentQuote in src/lib/quotes/present.ts). */
   costCents?: number;
   marginCents?: number;
   version: number;

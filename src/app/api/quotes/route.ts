@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { paged } from '@/lib/http/kit';
 import { route } from '@/lib/http/route';
 import { listQuotes } from '@/lib/db/queries/quote-list';
-import { presentQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 import { createQuoteFromBuild } from '@/lib/quotes/drafting';
 import { QuoteCreateSchema } from '@/lib/schemas/quote';
 import { QuoteListQuerySchema } from '@/lib/schemas/quote-list';

@@ -1,7 +1,5 @@
 import 'server-only';
 import { col, fn, Op, type Transaction } from 'sequelize';
-import { canSeeCosts } from '@/lib/auth/costs';
-import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken } from '@/lib/auth/tokens';
 import { discountShareBp } from '@/lib/quotes/authority';
 import { balanceDueCents, counts, moneyIn } from '@/lib/quotes/balance';
@@ -171,15 +169,6 @@ async function toQuoteRecord(row: QuoteRow, transaction?: Transaction): Promise<
     createdAt: iso(row.createdAt)!,
     updatedAt: iso(row.updatedAt)!,
   };
-}
-
-/** Roles without 'costs.read' (technicians) read quotes without costs or margins. */
-export function presentQuote(record: QuoteRecord, user: SessionUser): QuoteRecord {
-  if (canSeeCosts(user)) return record;
-  const { costCents: _c, marginCents: _m, ...rest } = record;
-  void _c;
-  void _m;
-  return { ...rest, lines: rest.lines.map(({ unitCostCents: _u, ...line }) => (void _u, line)) };
 }
 
 export async function getQuote(id: number, transaction?: Transaction): Promise<QuoteRecord | null> {

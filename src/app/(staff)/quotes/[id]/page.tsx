@@ -2,7 +2,8 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { QuoteWorkbench } from '@/components/quotes/quote-workbench';
 import { requireAccessForPage } from '@/lib/auth/guard';
-import { getQuote, presentQuote } from '@/lib/db/queries/quotes';
+import { getQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 
 export const metadata: Metadata = { title: 'Quote' };
 

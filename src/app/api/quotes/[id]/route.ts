@@ -1,6 +1,7 @@
 import { NextResponse } from 'next/server';
 import { route } from '@/lib/http/route';
-import { getQuote, presentQuote } from '@/lib/db/queries/quotes';
+import { getQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 import { updateQuote } from '@/lib/quotes/drafting';
 import { noQuoteWithId } from '@/lib/quotes/refusals';
 import { QuotePatchSchema } from '@/lib/schemas/quote';

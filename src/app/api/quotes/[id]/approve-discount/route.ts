@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { route } from '@/lib/http/route';
-import { presentQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 import { approveDiscount } from '@/lib/quotes/approving';
 import { QuoteApproveDiscountSchema } from '@/lib/schemas/quote';
 

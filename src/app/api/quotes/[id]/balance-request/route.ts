@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { route } from '@/lib/http/route';
-import { presentQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 import { requestBalance } from '@/lib/quotes/balance-collection';
 import { BalanceRequestSchema } from '@/lib/schemas/quote-payment';
 

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { route } from '@/lib/http/route';
-import { presentQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 import { reviseQuote } from '@/lib/quotes/transitions';
 import { QuoteReviseSchema } from '@/lib/schemas/quote';
 

@@ -1,6 +1,6 @@
 import { NextResponse } from 'next/server';
 import { route } from '@/lib/http/route';
-import { presentQuote } from '@/lib/db/queries/quotes';
+import { presentQuote } from '@/lib/quotes/present';
 import { sendQuote } from '@/lib/quotes/sending';
 
 /** E-mails the customer a fresh private link; status → sent. A refused e-mail changes nothing (502). */
