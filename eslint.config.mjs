@@ -84,6 +84,27 @@ const config = [
       ],
     },
   },
+  // The quote flows decide and the query layer writes: a flow hands a locked row to a named write in
+  // src/lib/db/queries/ (quote-writes.ts, quote-payments.ts, quote-lifecycle.ts), never saves it itself.
+  {
+    files: ['src/lib/quotes/**/*.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector:
+            "CallExpression[callee.type='MemberExpression'][callee.property.name=/^(save|reload|changed|destroy|increment|decrement)$/]",
+          message:
+            'lib/quotes does not write model rows: call a named write in src/lib/db/queries/ (e.g. quote-writes.ts) inside the transaction.',
+        },
+        {
+          selector: "CallExpression[callee.type='MemberExpression'][callee.property.name='set'][arguments.length=1]",
+          message:
+            'lib/quotes does not set fields on model rows: call a named write in src/lib/db/queries/ (e.g. quote-writes.ts) inside the transaction.',
+        },
+      ],
+    },
+  },
   // The advisor is a pure module: no database, React, Next or outside services.
   {
     files: ['src/lib/advisor/**/*.ts'],

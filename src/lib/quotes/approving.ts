@@ -1,7 +1,8 @@
 import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { conflict, notFound, refused, runWrite } from '@/lib/db/write';
-import { getQuote, lockQuote, saveQuote } from '@/lib/db/queries/quotes';
+import { writeDiscountApproval } from '@/lib/db/queries/quote-writes';
+import { getQuote, lockQuote } from '@/lib/db/queries/quotes';
 import { presentQuote } from './present';
 import { recordOrThrow } from './refusals';
 import type { QuoteRecord } from './types';
@@ -20,8 +21,7 @@ export async function approveDiscount(id: number, input: { version: number }, us
         throw refused(
           `Quote ${quote.number} has no discount waiting for approval (${quote.discountApproval === 'approved' ? 'it is already approved' : 'its discounts are within the counter limit'}).`,
         );
-      quote.set({ discountApproval: 'approved', discountApprovedByUserId: user.id, discountApprovedAt: new Date() });
-      await saveQuote(quote, t);
+      await writeDiscountApproval(quote, user.id, new Date(), t);
       await recordAudit(
         {
           user,

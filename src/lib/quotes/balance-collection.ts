@@ -7,7 +7,8 @@ import { db, type Payment, type Quote } from '@/lib/db/models';
 import { insertCounterPayment, lockPayments, markExpired, paymentsOf } from '@/lib/db/queries/quote-payments';
 import { moveQuote, type AuditActor } from '@/lib/db/queries/quote-lifecycle';
 import { addQuoteLink } from '@/lib/db/queries/quote-links';
-import { getQuote, lockQuote, saveQuote, shopSettingsRow } from '@/lib/db/queries/quotes';
+import { touchQuote, writeBalanceRequested } from '@/lib/db/queries/quote-writes';
+import { getQuote, lockQuote, shopSettingsRow } from '@/lib/db/queries/quotes';
 import { presentQuote } from './present';
 import { appBaseUrl } from '@/lib/env';
 import { HttpError } from '@/lib/http/errors';
@@ -137,7 +138,7 @@ export async function recordCounterPayment(
       t,
     );
     // The quote's version moves with every payment, so the same form submitted twice records once.
-    await saveQuote(quote, t, { touch: true });
+    await touchQuote(quote, t);
     await closeWhenPaid(quote, { user }, payment.id, t);
     return payment.id;
   });
@@ -165,8 +166,7 @@ export async function requestBalance(id: number, input: { version: number }, use
         ]);
       const token = randomToken();
       await addQuoteLink(quote.id, hashToken(token), 'balance', t);
-      quote.set({ balanceRequestedAt: new Date() });
-      await saveQuote(quote, t);
+      await writeBalanceRequested(quote, new Date(), t);
       await recordAudit(
         {
           user,

@@ -5,7 +5,8 @@ import { hashToken } from '@/lib/auth/tokens';
 import { retryOnLockContention } from '@/lib/db/lock-contention';
 import { db, type Payment, type Quote } from '@/lib/db/models';
 import { HELD, insertPendingCheckout, lockPayments, markExpired } from '@/lib/db/queries/quote-payments';
-import { getQuoteByToken, lockQuote } from '@/lib/db/queries/quotes';
+import { lockQuote } from '@/lib/db/queries/quotes';
+import { getPublicQuote } from './public-quote';
 import { appBaseUrl } from '@/lib/env';
 import { HttpError } from '@/lib/http/errors';
 import { payments } from '@/lib/payments';
@@ -165,7 +166,7 @@ async function checkoutFor(
   what: string,
   step: (quoteId: number, currency: string, email: string | null, t: Transaction) => Promise<Locked>,
 ): Promise<CheckoutStarted> {
-  const found = await getQuoteByToken(token);
+  const found = await getPublicQuote(token);
   if (!found) throw linkOpensNothing();
   let result: Locked;
   try {

@@ -9,11 +9,11 @@ import {
   getQuote,
   insertDraft,
   lockQuote,
-  saveQuote,
   shopSettingsRow,
   writeLines,
 } from '@/lib/db/queries/quotes';
 import { presentQuote } from './present';
+import { writeQuoteTerms, type LinesTerms } from '@/lib/db/queries/quote-writes';
 import { catalogueKey, PriceAuthorityRefused, resolveLines, type LineDraft } from '@/lib/db/queries/quote-lines';
 import type { FieldError } from '@/lib/http/responses';
 import { BuildProfileSchema } from '@/lib/schemas/build-profile';
@@ -225,7 +225,7 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
         }
         const before = await getQuote(id, t);
         const settings = await requiredSettings(t);
-        let touched = false;
+        let newLines: LinesTerms | undefined;
         if (patch.lines) {
           // A price already on the quote (a manager's, or last month's catalogue price) may stay as it is.
           const kept = new Map<string, number>();
@@ -260,19 +260,10 @@ export async function updateQuote(id: number, patch: QuotePatch, user: SessionUs
             id,
             t,
           );
-          const totals = quoteTotals(lines, quote.taxRateBp, policyOf(settings));
-          quote.set({
-            subtotalCents: totals.subtotalCents,
-            taxCents: totals.taxCents,
-            totalCents: totals.totalCents,
-            depositCents: totals.depositCents,
-            ...discount,
-          });
-          touched = true;
+          newLines = { totals: quoteTotals(lines, quote.taxRateBp, policyOf(settings)), discount };
         }
-        if (patch.validUntil !== undefined) quote.set({ validUntil: patch.validUntil });
-        if (!touched && !quote.changed()) return { record: before!, changed: false };
-        await saveQuote(quote, t, { touch: touched });
+        const written = await writeQuoteTerms(quote, { lines: newLines, validUntil: patch.validUntil }, t);
+        if (!written) return { record: before!, changed: false };
         const after = (await getQuote(id, t))!;
         await recordAudit(
           {

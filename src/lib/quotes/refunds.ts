@@ -3,8 +3,9 @@ import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { retryOnLockContention } from '@/lib/db/lock-contention';
 import { db, type Payment } from '@/lib/db/models';
-import { lockRefundablePayment, setRefundedCents } from '@/lib/db/queries/quote-payments';
-import { getQuote, lockQuote, saveQuote } from '@/lib/db/queries/quotes';
+import { lockRefundablePayment, rereadPayment, setRefundedCents } from '@/lib/db/queries/quote-payments';
+import { touchQuote } from '@/lib/db/queries/quote-writes';
+import { getQuote, lockQuote } from '@/lib/db/queries/quotes';
 import { presentQuote } from './present';
 import { settleAfterRefund } from '@/lib/db/queries/refund-effects';
 import { HttpError } from '@/lib/http/errors';
@@ -97,7 +98,7 @@ export async function refundQuote(id: number, input: RefundInput, user: SessionU
       }
       await giveBack(payment, input, id, user);
       // The webhook may have landed first; both sides take the larger running total, so it is counted once.
-      await payment.reload({ transaction: t, lock: t.LOCK.UPDATE });
+      await rereadPayment(payment, t);
       const refunded = Math.min(
         payment.amountCents,
         Math.max(payment.refundedCents, payment.amountCents - left + input.amountCents),
@@ -119,7 +120,7 @@ export async function refundQuote(id: number, input: RefundInput, user: SessionU
         },
         t,
       );
-      await saveQuote(quote, t, { touch: true });
+      await touchQuote(quote, t);
       await settleAfterRefund(quote, input.afterFullRefund ?? 'cancel', { user }, t);
       return { purpose: payment.purpose, atCounter: payment.provider === 'counter' };
     }),

@@ -2,15 +2,9 @@ import { recordAudit } from '@/lib/audit';
 import type { SessionUser } from '@/lib/auth/guard';
 import { hashToken, randomToken } from '@/lib/auth/tokens';
 import { invalid, notFound, refused, runWrite } from '@/lib/db/write';
-import { LifecycleRefused, moveQuote } from '@/lib/db/queries/quote-lifecycle';
-import {
-  freezeSnapshot,
-  getQuote,
-  isFrozen,
-  lockQuoteWithParts,
-  shopSettingsRow,
-  snapshotSource,
-} from '@/lib/db/queries/quotes';
+import { LifecycleRefused } from '@/lib/db/queries/quote-lifecycle';
+import { writeSent } from '@/lib/db/queries/quote-writes';
+import { getQuote, lockQuoteWithParts, shopSettingsRow, snapshotSource } from '@/lib/db/queries/quotes';
 import { presentQuote } from './present';
 import { appBaseUrl } from '@/lib/env';
 import { MailError, sendMail } from '@/lib/mail';
@@ -52,14 +46,14 @@ export async function sendQuote(id: number, user: SessionUser): Promise<QuoteRec
       }
       const token = randomToken();
       const now = new Date();
-      quote.set({
-        publicTokenHash: hashToken(token),
-        sentAt: now,
-        validUntil: quote.validUntil ?? validUntilFrom(now),
-      });
-      if (snapshot && !isFrozen(quote)) freezeSnapshot(quote, snapshot);
       try {
-        await moveQuote(quote, 'sent', 'send', { user }, t, { to: email });
+        await writeSent(
+          quote,
+          { tokenHash: hashToken(token), sentAt: now, validUntil: quote.validUntil ?? validUntilFrom(now), snapshot },
+          { user },
+          t,
+          { to: email },
+        );
       } catch (error) {
         if (error instanceof LifecycleRefused)
           throw refused(

@@ -5,6 +5,7 @@ import { retryOnLockContention } from '@/lib/db/lock-contention';
 import { db, type Quote } from '@/lib/db/models';
 import { lockPayments } from '@/lib/db/queries/quote-payments';
 import { insertRevision, LifecycleRefused, lifecycleState, moveQuote } from '@/lib/db/queries/quote-lifecycle';
+import { writeReplaced } from '@/lib/db/queries/quote-writes';
 import { getQuote, lockQuote } from '@/lib/db/queries/quotes';
 import { presentQuote } from './present';
 import { centsToText } from '@/lib/format';
@@ -96,8 +97,7 @@ export function reviseQuote(id: number, input: { version: number }, user: Sessio
   return withLockedQuote(id, input.version, user, async (old, t) => {
     if (!canRevise(old.status)) throw await refusal(old, refusalMessage(old.status, 'replaced', 'revise'), user, t);
     const fresh = await insertRevision(old, user.id, t);
-    old.set({ replacedByQuoteId: fresh.id });
-    await moveQuote(old, 'replaced', 'revise', { user }, t, { by: fresh.number });
+    await writeReplaced(old, fresh, { user }, t);
     await recordAudit(
       {
         user,

@@ -1,6 +1,6 @@
 import { POLICY } from '@/lib/auth/policy';
 import { ALL_STAFF, type SessionUser } from '@/lib/auth/roles';
-import { presentQuote } from '@/lib/quotes/present';
+import { customerQuote, presentQuote } from '@/lib/quotes/present';
 import type { QuoteRecord } from '@/lib/quotes/types';
 
 // Cost hiding on a quote (src/lib/quotes/present.ts) follows the `costs.read` row of the permission table.
@@ -44,5 +44,33 @@ describe('presentQuote', () => {
     const shown = presentQuote(record, staff('tech'));
     expect(shown.costCents).toBeUndefined();
     expect(shown.lines[0].unitCostCents).toBeUndefined();
+  });
+});
+
+describe('customerQuote', () => {
+  const payment = (id: number, status: string, duplicateOfPaymentId: number | null = null) => ({
+    id,
+    status,
+    duplicateOfPaymentId,
+    amountCents: 20_000,
+    providerSessionId: `cs_invented_${id}`,
+    providerPaymentId: `pi_invented_${id}`,
+    recordedBy: { id: 3, name: 'Invented Staff' },
+  });
+  const full = {
+    ...record,
+    discountApproval: { state: 'approved', discountBp: 500, approvedBy: { id: 1, name: 'Invented Manager' } },
+    payments: [payment(1, 'paid'), payment(2, 'pending'), payment(3, 'paid', 1)],
+  } as unknown as QuoteRecord;
+
+  it('shows the customer the money taken, without provider ids, staff names or costs', () => {
+    const shown = customerQuote(full);
+    expect(shown.payments.map((p) => p.id)).toEqual([1]);
+    expect(shown.payments[0]).toMatchObject({ providerSessionId: null, providerPaymentId: null, recordedBy: null });
+    expect(shown.payments[0].amountCents).toBe(20_000);
+    expect(shown.discountApproval.approvedBy).toBeNull();
+    expect(shown.discountApproval.discountBp).toBe(500);
+    expect('costCents' in shown).toBe(false);
+    expect('unitCostCents' in shown.lines[0]).toBe(false);
   });
 });

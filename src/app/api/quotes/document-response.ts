@@ -1,4 +1,5 @@
-import { getQuote, getQuoteByToken, shopForDocuments } from '@/lib/db/queries/quotes';
+import { getQuote, shopForDocuments } from '@/lib/db/queries/quotes';
+import { getPublicQuote } from '@/lib/quotes/public-quote';
 import { centsToText } from '@/lib/format';
 import { HttpError } from '@/lib/http/errors';
 import { counts, invoiceNumber, receiptNumber } from '@/lib/quotes/balance';
@@ -75,7 +76,7 @@ export async function staffDocument(id: number, make: Make): Promise<Response> {
 
 /** A customer's document through their private link; any token that is not a live link is a plain 404. */
 export async function customerDocument(token: string, make: Make): Promise<Response> {
-  const found = await getQuoteByToken(token);
+  const found = await getPublicQuote(token);
   if (!found) throw linkOpensNothing();
   return make(found.quote, found.shop);
 }

@@ -27,6 +27,11 @@ export function paymentsOf(quoteId: number, t: Transaction): Promise<Payment[]> 
   return Payment.findAll({ where: { quoteId }, order: [['id', 'ASC']], transaction: t });
 }
 
+/** Reads a locked payment row again in the transaction, to see what another writer (the webhook) left on it. */
+export async function rereadPayment(payment: Payment, t: Transaction): Promise<void> {
+  await payment.reload({ transaction: t, lock: t.LOCK.UPDATE });
+}
+
 /** One payment row, locked. */
 export function lockPayment(id: number, t: Transaction): Promise<Payment | null> {
   return Payment.findByPk(id, { transaction: t, lock: t.LOCK.UPDATE });

@@ -2,18 +2,11 @@ import 'server-only';
 import { col, fn, Op, type Transaction } from 'sequelize';
 import { hashToken } from '@/lib/auth/tokens';
 import { discountShareBp } from '@/lib/quotes/authority';
-import { balanceDueCents, counts, moneyIn } from '@/lib/quotes/balance';
+import { balanceDueCents, moneyIn } from '@/lib/quotes/balance';
 import type { DiscountApproval } from '@/lib/quotes/discount-approval';
 import { stateWord } from '@/lib/quotes/lifecycle';
 import { formatQuoteNumber, lineNetCents, lineTotalCents, nextQuoteSequence } from '@/lib/quotes/pricing';
-import type {
-  DocumentShop,
-  PaymentRecord,
-  PublicQuote,
-  QuoteLineRecord,
-  QuoteRecord,
-  QuoteSnapshot,
-} from '@/lib/quotes/types';
+import type { DocumentShop, PaymentRecord, QuoteLineRecord, QuoteRecord } from '@/lib/quotes/types';
 import { Build, Cam, Customer, Part, Payment, Quote, QuoteLine, ShopSettings, User } from '../models';
 import type { LineDraft } from './quote-lines';
 import { quoteIdByLinkHash } from './quote-links';
@@ -188,12 +181,6 @@ export async function lockQuoteWithParts(id: number, t: Transaction): Promise<Qu
   return (await Quote.findByPk(id, { include: include(), transaction: t, lock: t.LOCK.UPDATE })) as QuoteRow | null;
 }
 
-/** Saves what the caller set on a locked quote row; `touch` moves its version even when nothing else changed. */
-export async function saveQuote(quote: Quote, t: Transaction, options: { touch?: boolean } = {}): Promise<void> {
-  if (options.touch) quote.changed('updatedAt', true);
-  await quote.save({ transaction: t });
-}
-
 /** The one row of shop settings (labour rate, tax, deposit policy, the shop's details); null before a manager saves them. */
 export function shopSettingsRow(t?: Transaction): Promise<ShopSettings | null> {
   return ShopSettings.findOne({ order: [['id', 'ASC']], transaction: t });
@@ -213,14 +200,6 @@ export async function snapshotSource(
   return row
     ? { buildId: row.buildId ?? null, camId: row.camId ?? null, frozen: readJson(row.snapshotProfile) !== null }
     : null;
-}
-
-/** True once a quote's build profile and advice are frozen (its first send). */
-export const isFrozen = (quote: Quote) => readJson(quote.snapshotProfile) !== null;
-
-/** Freezes the build profile and the advice on a locked quote row (saved by the caller's move). */
-export function freezeSnapshot(quote: Quote, snapshot: QuoteSnapshot): void {
-  quote.set({ snapshotProfile: snapshot.profile as Record<string, unknown>, snapshotAdvice: snapshot.advice });
 }
 
 /** Replaces a quote's lines as a whole, in the order given. */
@@ -326,41 +305,13 @@ export async function shopForDocuments(): Promise<DocumentShop | null> {
     : null;
 }
 
-/** The quote a private link opens, or null for any token that is not a live link (never a hint why). */
-export async function getQuoteByToken(token: string): Promise<PublicQuote | null> {
+/** The quote a private link opens (the one e-mailed with the quote, or a later one), or null for any other token. */
+export async function quoteIdByToken(token: string): Promise<number | null> {
   if (!/^[A-Za-z0-9_-]{20,128}$/.test(token)) return null;
   // The link e-mailed with the quote, or one e-mailed later (the balance request, the expiry reminder).
   const hash = hashToken(token);
   const row = await Quote.findOne({ where: { publicTokenHash: hash }, attributes: ['id'] });
-  const quoteId = row?.id ?? (await quoteIdByLinkHash(hash));
-  if (!quoteId) return null;
-  const [quote, settings] = await Promise.all([getQuote(quoteId), ShopSettings.findOne({ order: [['id', 'ASC']] })]);
-  if (!quote || !settings || quote.status === 'draft') return null;
-  const { costCents: _c, marginCents: _m, ...rest } = quote;
-  void _c;
-  void _m;
-  return {
-    // The customer sees the money that was taken (for their receipts), never provider ids or who took it,
-    // nor which staff member approved a discount.
-    quote: {
-      ...rest,
-      discountApproval: { ...rest.discountApproval, approvedBy: null },
-      lines: rest.lines.map(({ unitCostCents: _u, ...l }) => (void _u, l)),
-      payments: rest.payments.filter(counts).map(customerPayment),
-    },
-    shop: {
-      name: settings.name,
-      phone: settings.phone,
-      email: settings.email,
-      address: settings.address,
-      depositPolicyText: settings.depositPolicyText,
-      currency: settings.currency,
-    },
-  };
-}
-
-function customerPayment(p: PaymentRecord): PaymentRecord {
-  return { ...p, providerSessionId: null, providerPaymentId: null, recordedBy: null };
+  return row?.id ?? (await quoteIdByLinkHash(hash));
 }
 
 export type { QuoteStatus } from '@/lib/quotes/types';

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { formatMoney, longDate, percentFromBp } from '@/lib/format';
-import { getQuoteByToken } from '@/lib/db/queries/quotes';
+import { getPublicQuote } from '@/lib/quotes/public-quote';
 import { isPastValidUntil } from '@/lib/quotes/deposit-rules';
 import { CUSTOMER_CAUTIONS as CAUTIONS, REFUND_NOTE } from '@/lib/quotes/cautions';
 import { isTaxable } from '@/lib/quotes/pricing';
@@ -51,7 +51,7 @@ export default async function CustomerQuotePage({
   searchParams: Promise<Record<string, string | undefined>>;
 }) {
   const { token } = await params;
-  const found = await getQuoteByToken(token);
+  const found = await getPublicQuote(token);
   if (!found) notFound();
   const { quote, shop } = found;
   const query = await searchParams;
