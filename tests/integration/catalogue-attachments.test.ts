@@ -3,7 +3,7 @@ import { AuditEntry } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { readRuntime } from '../support/runtime';
-import { DEMO } from '../support/demo';
+import { DEMO, MISSING_ID } from '../support/demo';
 
 // Spec-sheet attachments: judged by their first bytes, limited to 5 MB, served only to staff.
 const app = () => request(readRuntime().appUrl);
@@ -135,7 +135,8 @@ describe('cam spec-sheet attachments', () => {
         .status,
     ).toBe(404);
     expect(
-      (await app().post('/api/cams/999999/attachments').set('Cookie', manager).attach('file', pdf, 'x.pdf')).status,
+      (await app().post(`/api/cams/${MISSING_ID}/attachments`).set('Cookie', manager).attach('file', pdf, 'x.pdf'))
+        .status,
     ).toBe(404);
   });
 });

@@ -10,6 +10,7 @@ import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { makeSentQuote } from '../support/quote-fixtures';
 import { RUNTIME_FILE, readRuntime, type TestRuntime } from '../support/runtime';
+import type { QuoteRecord } from '@/lib/quotes/types';
 
 // Bad luck (issue 13 item 12): the payments service away while a customer pays the deposit, and two
 // app instances receiving the same webhook at once. (MariaDB away: database-outage.test.ts; the mail
@@ -83,13 +84,7 @@ function startDetached(name: string, args: string[], extraEnv: Record<string, st
   return child;
 }
 
-const readQuote = async (id: number) =>
-  (await counter.get(`/api/quotes/${id}`)).body as {
-    status: string;
-    version: number;
-    paidCents: number;
-    payments: unknown[];
-  };
+const readQuote = async (id: number) => (await counter.get(`/api/quotes/${id}`)).body as QuoteRecord;
 const sessionIdOf = (url: string) => new URL(url).pathname.split('/').pop()!;
 
 describe('the payments service is away while a customer pays the deposit', () => {

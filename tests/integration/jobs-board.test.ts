@@ -1,5 +1,6 @@
 import { Op } from 'sequelize';
 import { AuditEntry, Job, User } from '@/lib/db/models';
+import type { BoardJob } from '@/lib/jobs/types';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { makePaidJob, shopDay } from '../support/job-fixtures';
@@ -60,11 +61,7 @@ afterAll(async () => {
 describe('booking a paid job', () => {
   it('a paid quote is on the board, not booked yet; an unpaid one is not a job', async () => {
     const job = await paid('Board newly paid');
-    const listed = (await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as {
-      id: number;
-      state: string;
-      version: number;
-    }[];
+    const listed = (await tech.get('/api/jobs').query({ pageSize: 100 })).body.items as BoardJob[];
     expect(listed.find((j) => j.id === job.id)).toMatchObject({ state: 'not-booked', version: 0 });
     const one = await tech.get(`/api/jobs/${job.id}`);
     expect(one.status).toBe(200);
@@ -269,9 +266,7 @@ describe('a job whose quote is closed at the counter', () => {
     v = (await move(job.id, v, 'ready')).body.version;
     expect((await move(job.id, v, 'collected')).status).toBe(200);
     expect(await active()).not.toContain(job.id);
-    const history = (await tech.get('/api/jobs').query({ view: 'collected', pageSize: 100 })).body.items as {
-      id: number;
-    }[];
+    const history = (await tech.get('/api/jobs').query({ view: 'collected', pageSize: 100 })).body.items as BoardJob[];
     expect(history.map((j) => j.id)).toContain(job.id);
   }, 60_000);
 });
@@ -287,10 +282,7 @@ describe('the board order', () => {
     await book(later.id, 2);
     await book(today.id, 0);
     await book(overdue.id, -2);
-    const all = (await tech.get('/api/jobs').query({ pageSize: 100 })).body as {
-      items: { id: number; due: string | null }[];
-      total: number;
-    };
+    const all = (await tech.get('/api/jobs').query({ pageSize: 100 })).body as { items: BoardJob[]; total: number };
     const at = (id: number) => all.items.findIndex((j) => j.id === id);
     expect([at(overdue.id), at(today.id), at(waiting.id), at(later.id)].every((i) => i >= 0)).toBe(true);
     expect(at(overdue.id)).toBeLessThan(at(today.id));

@@ -6,6 +6,7 @@ import { connectTestDatabase, disconnectTestDatabase } from '../support/database
 import { clearRateLimits } from '../support/rate-limits';
 import { readRuntime } from '../support/runtime';
 import type { ShortlistEntry } from '@/lib/leads/shortlist';
+import type { LeadRecord } from '@/lib/leads/types';
 
 // The at-home questionnaire end to end over HTTP against the real build, the real MariaDB and the mail
 // fake: answers → a stored lead with the top-3 shortlist, the shop's e-mail, the private result page,
@@ -254,19 +255,11 @@ describe('the staff side of leads', () => {
     const res = await counter.get('/api/leads').query({ status: 'new', pageSize: 100 });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ page: 1, pageSize: 100 });
-    const lead = (
-      res.body.items as {
-        id: number;
-        status: string;
-        version: number;
-        answers: { engine: string };
-        shortlist: { entries: unknown[] };
-      }[]
-    ).find((l) => l.id === leadId);
+    const lead = (res.body.items as LeadRecord[]).find((l) => l.id === leadId);
     expect(lead).toMatchObject({ status: 'new', answers: { engine: '5.3' } });
-    expect(lead!.shortlist.entries).toHaveLength(3);
+    expect(lead!.shortlist?.entries).toHaveLength(3);
     version = lead!.version;
-    expect((res.body.items as { status: string }[]).every((l) => l.status === 'new')).toBe(true);
+    expect((res.body.items as LeadRecord[]).every((l) => l.status === 'new')).toBe(true);
     const paged = await counter.get('/api/leads').query({ pageSize: 1 });
     expect(paged.body.items).toHaveLength(1);
     expect(paged.body.total).toBeGreaterThanOrEqual(1);

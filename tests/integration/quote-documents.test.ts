@@ -7,6 +7,7 @@ import { pdfText } from '../support/pdf-text';
 import { makeSentQuote, payDeposit } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
 import { postRefund } from '../support/refunds';
+import { MISSING_ID } from '../support/demo';
 
 // Documents and e-mails (issue 12, items 6 and 5): the quote as a PDF for staff and for the customer,
 // the customer page's print styles, and every customer e-mail from its template with both parts, from
@@ -63,7 +64,7 @@ describe('the quote as a PDF', () => {
     expect(text).toMatch(/Local codes and licensed practice come first/);
     expect(text).not.toMatch(/margin|unit cost|goods cost/i);
     expect((await request(appUrl).get(`/api/quotes/${quote.id}/pdf`)).status).toBe(401);
-    expect((await manager.get('/api/quotes/99999999/pdf')).status).toBe(404);
+    expect((await manager.get(`/api/quotes/${MISSING_ID}/pdf`)).status).toBe(404);
   });
 
   it('the customer downloads it from the private link; any other token is a plain 404', async () => {

@@ -6,6 +6,7 @@ import { waitForMailsTo } from '../support/mail';
 import { dayFromToday, makeDraftQuote, makeSentQuote, payDeposit, type FixtureQuote } from '../support/quote-fixtures';
 import { readRuntime } from '../support/runtime';
 import { postRefund } from '../support/refunds';
+import { MISSING_ID } from '../support/demo';
 
 // The quote lifecycle (issue 12, item 2) over HTTP against the real build, MariaDB and both fakes.
 // Every test makes its own quotes; dates are relative to the day the test runs.
@@ -190,9 +191,9 @@ describe('moves that are refused', () => {
     expect(
       (await tech.post(`/api/quotes/${quote.id}/transition`).send({ to: 'declined', version: quote.version })).status,
     ).toBe(403);
-    expect((await counter.post('/api/quotes/99999999/transition').send({ to: 'declined', version: 1 })).status).toBe(
-      404,
-    );
+    expect(
+      (await counter.post(`/api/quotes/${MISSING_ID}/transition`).send({ to: 'declined', version: 1 })).status,
+    ).toBe(404);
   });
 });
 
