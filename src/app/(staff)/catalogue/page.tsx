@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import { LinkCards } from '@/components/ui/link-cards';
 import { requireAccessForPage } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/policy';
 
@@ -50,19 +50,7 @@ export default async function CataloguePage() {
             : 'What the shop sells and what each cam needs. Managers make the changes.'}
         </p>
       </header>
-      <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-        {links.map((link) => (
-          <li key={link.href}>
-            <Link
-              href={link.href}
-              className="block h-full rounded-lg border border-steel-300 bg-paper-raised p-4 hover:border-gauge-500"
-            >
-              <span className="font-semibold">{link.label}</span>
-              <span className="mt-1 block text-sm text-ink-soft">{link.text}</span>
-            </Link>
-          </li>
-        ))}
-      </ul>
+      <LinkCards links={links} />
     </div>
   );
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { Banner } from '@/components/ui/banner';
+import { LinkCards } from '@/components/ui/link-cards';
 import { requireAccessForPage } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/policy';
 import { ROLE_NAMES, linksFor } from '@/lib/auth/staff-nav';
@@ -47,19 +48,7 @@ export default async function DashboardPage({
         </Banner>
       ) : null}
       <nav aria-label="Your pages">
-        <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-          {links.map((link) => (
-            <li key={link.href}>
-              <Link
-                href={link.href}
-                className="block h-full rounded-lg border border-steel-300 bg-paper-raised p-4 hover:border-gauge-500"
-              >
-                <span className="font-semibold">{link.label}</span>
-                <span className="mt-1 block text-sm text-ink-soft">{link.description}</span>
-              </Link>
-            </li>
-          ))}
-        </ul>
+        <LinkCards links={links.map((link) => ({ href: link.href, label: link.label, text: link.description }))} />
       </nav>
     </div>
   );
