@@ -6,6 +6,8 @@ declare module 'autocannon' {
       method?: string;
       headers?: Record<string, string>;
       body?: string;
+      /** Replace `[<id>]` in the body with a fresh id on every request. */
+      idReplacement?: boolean;
       connections?: number;
       duration?: number;
     };

@@ -12,6 +12,8 @@ import path from 'node:path';
 import { freePort, waitForOk } from './loopback';
 
 const RUNS = Math.max(1, Number(process.env.LIGHTHOUSE_RUNS ?? '3'));
+// LIGHTHOUSE_PAGES=quote,result measures only those (home, ask, result, quote): a rerun after a change to one page.
+const PAGES = (process.env.LIGHTHOUSE_PAGES ?? 'home,ask,result,quote').split(',').map((name) => name.trim());
 const CHROME_PATH = process.env.CHROME_PATH ?? process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
 // The two private pages need tokens: made once through the API (a lead posted like the form does; a quote for
@@ -184,7 +186,10 @@ async function main(): Promise<void> {
   try {
     await waitForOk(`${url}/api/health`, 60_000);
     const { result, quote } = await privatePages(url, mailUrl);
-    const pages = ['/', '/ask', result, quote];
+    const named: Record<string, string> = { home: '/', ask: '/ask', result, quote };
+    const unknown = PAGES.filter((name) => !(name in named));
+    if (unknown.length) throw new Error(`LIGHTHOUSE_PAGES names no page called ${unknown.join(', ')}`);
+    const pages = PAGES.map((name) => named[name]);
     const rows = [];
     for (const page of pages) {
       const runs = [];

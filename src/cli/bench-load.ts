@@ -62,6 +62,18 @@ async function main(): Promise<void> {
         headers,
         body: JSON.stringify({ build, camIds: [camId] }),
       }),
+      // The same one-cam question with a build the server has not seen (autocannon puts a fresh id in the
+      // baseline card's name each request): what a ranking costs when the kept answer cannot be used.
+      await measure('rank, one cam, a new build each request', {
+        url: `${url}/api/advisor/rank`,
+        method: 'POST',
+        headers,
+        idReplacement: true,
+        body: JSON.stringify({
+          build: { ...build, baselineCam: { ...build.baselineCam, name: `${build.baselineCam.name} [<id>]` } },
+          camIds: [camId],
+        }),
+      }),
       await measure(`rank, whole catalogue (${ranked.rankings!.length} cams)`, {
         url: `${url}/api/advisor/rank`,
         method: 'POST',
@@ -79,8 +91,11 @@ async function main(): Promise<void> {
         'non-2xx/errors': r.non2xx,
       })),
     );
-    const [health, oneCam, all] = rows;
+    const [health, oneCam, oneCamNew, all] = rows;
     console.log(`one-cam rank p97.5 / health p97.5 = ${(oneCam.p975 / health.p975).toFixed(2)} (target ≤ 3)`);
+    console.log(
+      `one-cam rank, new build each request, p97.5 / health p97.5 = ${(oneCamNew.p975 / health.p975).toFixed(2)}`,
+    );
     console.log(`whole-catalogue rank p97.5 / health p97.5 = ${(all.p975 / health.p975).toFixed(2)}`);
     console.log(`health req/s / one-cam rank req/s = ${(health.rps / oneCam.rps).toFixed(2)}`);
   } finally {

@@ -8,16 +8,17 @@ import Stripe from 'stripe';
 import request from 'supertest';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
-import { makeSentQuote } from '../support/quote-fixtures';
+import { waitForMailsTo } from '../support/mail';
+import { makeDraftQuote, makeSentQuote } from '../support/quote-fixtures';
 import { RUNTIME_FILE, readRuntime, type TestRuntime } from '../support/runtime';
 import type { QuoteRecord } from '@/lib/quotes/types';
 
-// Bad luck (issue 13 item 12): the payments service away while a customer pays the deposit, and two
-// app instances receiving the same webhook at once. (MariaDB away: database-outage.test.ts; the mail
-// service away while a quote is sent: quotes.test.ts.)
+// Bad luck (issue 13 item 12): the payments service away while a customer pays the deposit, the mail
+// service away while a quote is sent, and two app instances receiving the same webhook at once. (MariaDB
+// away: database-outage.test.ts.)
 const ROOT = path.resolve(__dirname, '../..');
 const runtime = readRuntime();
-const { appUrl, paymentsUrl, env } = runtime;
+const { appUrl, mailUrl, paymentsUrl, env } = runtime;
 const stripe = new Stripe(env.STRIPE_SECRET_KEY, {
   host: '127.0.0.1',
   port: Number(env.STRIPE_API_PORT),
@@ -71,6 +72,27 @@ async function waitFor(url: string, ok: (status: number | null) => boolean, time
   }
 }
 
+/**
+ * Stops one of the suite's fakes (its own process group), runs `whileAway`, then starts it again on the same
+ * port and data and records its new pid for the global teardown.
+ */
+async function withFakeAway(index: number, name: string, healthUrl: string, whileAway: () => Promise<void>) {
+  const oldPid = readRuntime().pids[index];
+  process.kill(-oldPid, 'SIGTERM');
+  await waitFor(healthUrl, (s) => s === null, 10_000);
+  try {
+    await whileAway();
+  } finally {
+    const restarted = startDetached(`${name}-restarted`, [`docker-local/${name}/server.mjs`]);
+    const updated: TestRuntime = {
+      ...readRuntime(),
+      pids: readRuntime().pids.map((pid) => (pid === oldPid ? restarted.pid! : pid)),
+    };
+    fs.writeFileSync(RUNTIME_FILE, JSON.stringify(updated, null, 2));
+    await waitFor(healthUrl, (s) => s === 200, 15_000);
+  }
+}
+
 /** Starts a detached server like the global setup does, logging under var/test/logs. */
 function startDetached(name: string, args: string[], extraEnv: Record<string, string> = {}): ChildProcess {
   const out = fs.openSync(path.join(ROOT, 'var/test/logs', `${name}.log`), 'w');
@@ -93,12 +115,8 @@ describe('the payments service is away while a customer pays the deposit', () =>
     customers.push(quote.customerEmail);
     const before = await readQuote(quote.id);
 
-    // Stop the suite's payments fake (its own process group), then start it again on the same port and data.
-    const oldPid = runtime.pids[1];
-    process.kill(-oldPid, 'SIGTERM');
-    await waitFor(`${paymentsUrl}/health`, (s) => s === null, 10_000);
-    let restarted: ChildProcess | undefined;
-    try {
+    // Stop the suite's payments fake (global setup's second process), then start it again on the same port and data.
+    await withFakeAway(1, 'payments-fake', `${paymentsUrl}/health`, async () => {
       const json = await request(appUrl).post(`/api/q/${quote.token}/checkout`).set('Accept', 'application/json');
       expect(json.status).toBe(502);
       expect(json.body.message).toMatch(/payment service did not answer.*Nothing was charged.*try again/i);
@@ -111,15 +129,7 @@ describe('the payments service is away while a customer pays the deposit', () =>
       const page = await request(appUrl).get(`/q/${quote.token}`);
       expect(page.status).toBe(200);
       expect(page.text).toContain('Accept and pay the deposit');
-    } finally {
-      restarted = startDetached('payments-fake-restarted', ['docker-local/payments-fake/server.mjs']);
-      const updated: TestRuntime = {
-        ...readRuntime(),
-        pids: readRuntime().pids.map((pid) => (pid === oldPid ? restarted!.pid! : pid)),
-      };
-      fs.writeFileSync(RUNTIME_FILE, JSON.stringify(updated, null, 2));
-      await waitFor(`${paymentsUrl}/health`, (s) => s === 200, 15_000);
-    }
+    });
 
     const started = await request(appUrl)
       .post(`/api/q/${quote.token}/checkout`)
@@ -135,6 +145,42 @@ describe('the payments service is away while a customer pays the deposit', () =>
       paid = await readQuote(quote.id);
     }
     expect(paid).toMatchObject({ status: 'deposit-paid', paidCents: quote.depositCents });
+  });
+});
+
+describe('the mail service is away while a quote is sent', () => {
+  it('answers 502, leaves the draft as it was with no link and no audit, and sends once the service is back', async () => {
+    const draft = await makeDraftQuote(counter, 'Mail away');
+    customers.push(draft.customerEmail);
+    const before = await readQuote(draft.id);
+    const sentAudits = async () =>
+      (
+        await sequelize.query<{ n: number }>(
+          "SELECT COUNT(*) AS n FROM audit_log WHERE action = 'quote.sent' AND entity_type = 'quote' AND entity_id = ?",
+          { replacements: [draft.id], type: QueryTypes.SELECT },
+        )
+      )[0].n;
+
+    // The mail fake is global setup's first process.
+    await withFakeAway(0, 'mail-fake', `${mailUrl}/health`, async () => {
+      const sent = await counter.post(`/api/quotes/${draft.id}/send`);
+      expect(sent.status).toBe(502);
+      expect(sent.body.message).toEqual(expect.any(String));
+      const after = await readQuote(draft.id);
+      expect(after).toMatchObject({ status: 'draft', version: before.version });
+      const [row] = await sequelize.query<{ hash: string | null; sentAt: Date | null }>(
+        'SELECT public_token_hash AS hash, sent_at AS sentAt FROM quotes WHERE id = ?',
+        { replacements: [draft.id], type: QueryTypes.SELECT },
+      );
+      expect(row).toEqual({ hash: null, sentAt: null });
+      expect(Number(await sentAudits())).toBe(0);
+    });
+
+    await counter.post(`/api/quotes/${draft.id}/send`).expect(200);
+    expect((await readQuote(draft.id)).status).toBe('sent');
+    expect(Number(await sentAudits())).toBe(1);
+    const [mail] = await waitForMailsTo(draft.customerEmail);
+    expect(mail.subject).toContain(draft.number);
   });
 });
 

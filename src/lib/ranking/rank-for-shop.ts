@@ -9,6 +9,7 @@ import { jobItemLine, jobLines, jobPriceCents } from '@/lib/quotes/job-price';
 import { lineNetCents } from '@/lib/quotes/pricing';
 import { vehicleClassOf, type BuildProfile, type VehicleClass } from '@/lib/schemas/build-profile';
 import type { CamCard } from '@/lib/schemas/cam-card';
+import { createRankingCache } from './ranking-cache';
 import type { PricedItem, ShopRanking } from './types';
 
 // Joins the pure advisor to the shop's data: its catalogue, its need rules, its labour rate and its dyno
@@ -23,6 +24,9 @@ import type { PricedItem, ShopRanking } from './types';
 export const DEFAULT_CURVE_LIMIT = 20;
 
 type Priced = { items: PricedItem[]; jobPriceCents: number | null };
+
+/** The advisor's answer and the job it priced per cam, kept per exact input (see ranking-cache.ts). Read only. */
+const keptRankings = createRankingCache<{ result: ReturnType<typeof rankCams>; priced: ReadonlyMap<string, Priced> }>();
 
 /** The rules' parts and labour for a cam's needs, each priced as its quote line will be. */
 export function pricedItems(
@@ -56,18 +60,23 @@ export async function rankForShop(
   if (missingIds.length) return { ok: false, missingIds };
   const laborRateCents = settings?.laborRateCents ?? 0;
   const vehicleClass = vehicleClassOf(build);
-  const priced = new Map<string, Priced>();
-  // Called by the advisor once per cam with the needs it found; the job it prices is kept for the entry.
-  const priceJob = (cam: CamCard, needs: readonly AdvisorNeed[]): number | null => {
-    const items = pricedItems(rules, needs, vehicleClass, laborRateCents);
-    const job =
-      cam.priceCents === undefined
-        ? null
-        : jobPriceCents(jobLines({ id: 0, description: cam.name, priceCents: cam.priceCents }, items, laborRateCents));
-    priced.set(String(cam.id), { items, jobPriceCents: job });
-    return job;
+  const compute = () => {
+    const priced = new Map<string, Priced>();
+    // Called by the advisor once per cam with the needs it found; the job it prices is kept for the entry.
+    const priceJob = (cam: CamCard, needs: readonly AdvisorNeed[]): number | null => {
+      const items = pricedItems(rules, needs, vehicleClass, laborRateCents);
+      const job =
+        cam.priceCents === undefined
+          ? null
+          : jobPriceCents(
+              jobLines({ id: 0, description: cam.name, priceCents: cam.priceCents }, items, laborRateCents),
+            );
+      priced.set(String(cam.id), { items, jobPriceCents: job });
+      return job;
+    };
+    return { result: rankCams(build, cards, { history, jobPriceCents: priceJob, includeCurves }), priced };
   };
-  const result = rankCams(build, cards, { history, jobPriceCents: priceJob, includeCurves });
+  const { result, priced } = keptRankings.get({ build, cards, history, rules, laborRateCents, includeCurves }, compute);
   const byId = new Map(cards.map((card) => [String(card.id), card]));
   const curvesIncluded = includeCurves ? Math.min(curveLimit, result.rankings.length) : 0;
   const rankings = result.rankings.map((full, index) => {
