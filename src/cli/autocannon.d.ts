@@ -6,11 +6,12 @@ declare module 'autocannon' {
       method?: string;
       headers?: Record<string, string>;
       body?: string;
-      /** Replace `[<id>]` in the body with a fresh id on every request. */
-      idReplacement?: boolean;
+      /** Requests sent in turn; setupRequest may change each one (a new body per request). */
+      requests?: { method?: string; setupRequest?: (request: Request) => Request }[];
       connections?: number;
       duration?: number;
     };
+    type Request = { method?: string; path?: string; headers?: Record<string, string>; body?: string };
     type Result = {
       requests: { average: number };
       latency: { p50: number; p97_5: number };

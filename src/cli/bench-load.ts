@@ -54,6 +54,7 @@ async function main(): Promise<void> {
     const camId = ranked.rankings?.[0]?.camId;
     if (one.status !== 200 || camId === undefined) throw new Error(`rank answered ${one.status}`);
 
+    let sent = 0;
     const rows = [
       await measure('GET /api/health', { url: `${url}/api/health` }),
       await measure('rank, one cam', {
@@ -62,17 +63,23 @@ async function main(): Promise<void> {
         headers,
         body: JSON.stringify({ build, camIds: [camId] }),
       }),
-      // The same one-cam question with a build the server has not seen (autocannon puts a fresh id in the
-      // baseline card's name each request): what a ranking costs when the kept answer cannot be used.
+      // The same one-cam question with a build the server has not seen (a request number in the baseline
+      // card's name): what a ranking costs when no kept answer fits (src/lib/ranking/ranking-cache.ts).
       await measure('rank, one cam, a new build each request', {
         url: `${url}/api/advisor/rank`,
-        method: 'POST',
         headers,
-        idReplacement: true,
-        body: JSON.stringify({
-          build: { ...build, baselineCam: { ...build.baselineCam, name: `${build.baselineCam.name} [<id>]` } },
-          camIds: [camId],
-        }),
+        requests: [
+          {
+            method: 'POST',
+            setupRequest: (request) => ({
+              ...request,
+              body: JSON.stringify({
+                build: { ...build, baselineCam: { ...build.baselineCam, name: `${build.baselineCam.name} ${++sent}` } },
+                camIds: [camId],
+              }),
+            }),
+          },
+        ],
       }),
       await measure(`rank, whole catalogue (${ranked.rankings!.length} cams)`, {
         url: `${url}/api/advisor/rank`,
