@@ -30,11 +30,6 @@ const API_EXCEPT_DOWNLOADS = '/api/:path((?!(?:cams|parts|labor)/[^/]+/attachmen
 
 const nextConfig = {
   poweredByHeader: false,
-  experimental: {
-    // The stylesheet (7 kB compressed) goes inline in each page's head instead of a render-blocking request:
-    // a customer's phone paints the page as soon as its HTML is parsed (the page CSP allows inline styles).
-    inlineCss: true,
-  },
   // Database drivers load dialect modules dynamically, and pdfkit reads its own data files from disk;
   // keep them out of the bundle.
   serverExternalPackages: ['sequelize', 'mariadb', 'argon2', 'pdfkit'],
