@@ -200,7 +200,7 @@ const needRules = [
     id: 3,
     kind: 'springs',
     vehicle_class: null,
-    label: 'Past the installed springs’ limit: the ovate spring kit, installed and checked',
+    label: 'Past the installed springs’ limit: the spring kit rated for the lift, installed and checked',
   },
   { id: 4, kind: 'pushrods', vehicle_class: null, label: 'High lift or other rockers: hardened pushrods' },
   {

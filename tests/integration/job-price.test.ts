@@ -2,6 +2,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { signedInAgent } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
 import { DEMO } from '../support/demo';
+import { editableLine } from '../support/quote-fixtures';
 import type { ShopRankingEntry } from '@/lib/ranking/types';
 import type { QuoteLineRecord } from '@/lib/quotes/types';
 
@@ -78,15 +79,40 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
     expect(r.reasons.find((x) => x.subscore === 'fit')?.text).toMatch(
       /Lift 0\.525" is past your installed springs' 0\.500" limit — it needs springs/,
     );
-    expect(itemCodes(r)).toEqual(expect.arrayContaining(['SPR-600', 'SPR-INST']));
+    // The lowest-rated demo kit good to 0.525": the 0.570" one, not the rule's own 0.600" kit.
+    expect(itemCodes(r)).toEqual(expect.arrayContaining(['SPR-570', 'SPR-INST']));
+    expect(itemCodes(r)).not.toContain('SPR-600');
   });
 
-  it('hand-worked: RB-198 for this truck is $369 + 8 h swap $1,080 + gaskets $39 + springs $349 + 2 h $270 + tune $495 + 3 h $405 = $3,007.00', () => {
+  it('each cam gets the spring kit rated for its lift: low-lift and high-lift cams get different kits', () => {
+    // The demo's rated kits, as the seeder lists them (partRows, spec maxLiftIn).
+    const rated = [
+      ['SPR-570', 0.57],
+      ['SPR-600', 0.6],
+      ['SPR-660', 0.66],
+    ] as const;
+    const kitsUsed = new Set<string>();
+    for (const r of rankings) {
+      const liftIn = r.needs.find((n) => n.kind === 'springs')?.minLiftIn;
+      const kits = r.neededItems.filter((i) => i.rule.kind === 'springs' && i.type === 'part');
+      if (liftIn === undefined) {
+        expect(kits).toEqual([]);
+        continue;
+      }
+      const expected = rated.find(([, maxIn]) => liftIn <= maxIn)![0];
+      expect([r.camId, kits.map((k) => k.part?.sku)]).toEqual([r.camId, [expected]]);
+      expect(kits[0].warning).toBeUndefined();
+      kitsUsed.add(expected);
+    }
+    expect(kitsUsed.size).toBeGreaterThanOrEqual(2);
+  });
+
+  it('hand-worked: RB-198 for this truck is $369 + 8 h swap $1,080 + gaskets $39 + springs $289 + 2 h $270 + tune $495 + 3 h $405 = $2,947.00', () => {
     const r = rankings.find((x) => x.camId === RB_198)!;
     // Only when the advisor names no converter for it (a 2,000 rpm stall; it is a mild cam).
     expect(r.needs.map((n) => n.kind)).toEqual(['install', 'springs', 'tune']);
-    expect(r.jobPriceCents).toBe(36_900 + 8 * LABOR_RATE + 3_900 + 34_900 + 2 * LABOR_RATE + 49_500 + 3 * LABOR_RATE);
-    expect(r.jobPriceCents).toBe(300_700);
+    expect(r.jobPriceCents).toBe(36_900 + 8 * LABOR_RATE + 3_900 + 28_900 + 2 * LABOR_RATE + 49_500 + 3 * LABOR_RATE);
+    expect(r.jobPriceCents).toBe(294_700);
   });
 
   it('a draft made from the shortlist totals the shortlist’s job price before tax, with install labour and springs', async () => {
@@ -107,7 +133,8 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
         unitPriceCents: LABOR_RATE,
         totalCents: 108_000,
       });
-      expect(lines.find((l) => l.kind === 'part' && l.description.startsWith('SPR-600'))).toBeDefined();
+      const kit = shortlisted.neededItems.find((i) => i.rule.kind === 'springs' && i.type === 'part')!.part!.sku;
+      expect(lines.find((l) => l.kind === 'part' && l.description.startsWith(`${kit} `))).toBeDefined();
       expect(lines.find((l) => l.kind === 'labor' && l.laborOperationId === DEMO.labor.springInstall)).toMatchObject({
         quantity: 2,
         totalCents: 27_000,
@@ -117,8 +144,36 @@ describe('one job price from the shortlist to the quote (5.3 L pickup)', () => {
       expect(res.body.taxCents).toBe(Math.floor((goods * 825 + 5_000) / 10_000));
       expect(res.body.totalCents).toBe(shortlisted.jobPriceCents + res.body.taxCents);
     }
-    // RB-198 by hand: goods $369 + $39 + $349 = $757 → tax $62.45; total $3,069.45.
+    // RB-198 by hand: goods $369 + $39 + $289 = $697 → tax $57.50; total $3,004.50.
     const rb = await counter.get(`/api/quotes/${madeQuotes.at(-1)}`);
-    expect(rb.body).toMatchObject({ subtotalCents: 300_700, taxCents: 6_245, totalCents: 306_945 });
+    expect(rb.body).toMatchObject({ subtotalCents: 294_700, taxCents: 5_750, totalCents: 300_450 });
+  });
+
+  it('the draft warns when its spring kit does not cover the cam’s lift, and names the kit that does', async () => {
+    const manager = await signedInAgent('manager');
+    const res = await counter.post('/api/quotes').send({ buildId: BUILD_ID, camId: DEMO.cams.fullSend235 });
+    expect(res.status).toBe(201);
+    madeQuotes.push(res.body.id);
+    const draft = res.body as { id: number; version: number; lines: Line[] };
+    // LV-235 lifts 0.640": the 0.660" kit, and the page has nothing to say about springs.
+    expect(draft.lines.find((l) => l.partId === DEMO.parts.dualSprings660)).toBeDefined();
+    expect((await manager.get(`/quotes/${draft.id}`)).text).not.toContain('Springs: check the kit');
+
+    // Someone puts the 0.600" kit in by hand: the page says it is short and which kit covers the lift.
+    const lines = draft.lines.map((l) =>
+      l.partId === DEMO.parts.dualSprings660
+        ? {
+            ...editableLine(l),
+            partId: DEMO.parts.ovateSprings600,
+            description: 'SPR-600 Ovate-wire spring kit, 0.600" max lift',
+            unitPriceCents: 34_900,
+          }
+        : editableLine(l),
+    );
+    const saved = await manager.patch(`/api/quotes/${draft.id}`).send({ version: draft.version, lines });
+    expect(saved.status).toBe(200);
+    const page = (await manager.get(`/quotes/${draft.id}`)).text;
+    expect(page).toContain('Springs: check the kit before this quote goes out');
+    expect(page).toContain('SPR-600 is rated to 0.600&quot;, below the cam&#x27;s 0.640&quot; valve lift: SPR-660');
   });
 });

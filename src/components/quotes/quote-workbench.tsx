@@ -52,7 +52,16 @@ function errorText(body: { message?: string; errors?: { field: string; message: 
   return body.errors?.length ? body.errors.map((e) => `${e.field}: ${e.message}`).join('; ') : undefined;
 }
 
-export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: StaffRole }) {
+export function QuoteWorkbench({
+  initial,
+  role,
+  springWarnings = [],
+}: {
+  initial: QuoteRecord;
+  role: StaffRole;
+  /** Spring kits on the quote that do not cover the cam's lift, in words (src/lib/catalogue/spring-kits.ts). */
+  springWarnings?: string[];
+}) {
   const url = `/api/quotes/${initial.id}`;
   const { data, mutate } = useSWR<QuoteRecord>(url, getJson, { fallbackData: initial, revalidateOnMount: false });
   const quote = data ?? initial;
@@ -191,6 +200,15 @@ export function QuoteWorkbench({ initial, role }: { initial: QuoteRecord; role: 
         busy={busy}
         canApprove={roleCan(role, 'quotes.approve-discount')}
       />
+      {springWarnings.length ? (
+        <Banner tone="caution" title="Springs: check the kit before this quote goes out">
+          <ul className="list-disc pl-5">
+            {springWarnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        </Banner>
+      ) : null}
       <LifecyclePanel key={quote.version} quote={quote} url={url} run={runJson} busy={busy} canWrite={canWrite} />
       {quote.status === 'deposit-paid' || quote.status === 'closed' ? (
         <BalancePanel

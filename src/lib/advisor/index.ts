@@ -28,7 +28,7 @@ export type { ModelDetail, SimulatedPoint } from './model-detail';
 export { revLimitRpm, rpmGrid, VALVETRAIN_LIMIT_RPM } from './rpm-grid';
 export { BAND, bandHalfWidthPct } from './bands';
 export { SCORING_WEIGHTS, SUBSCORE_NAMES } from './weights';
-export { NEED_KIND_LIST, NEED_LIFT_THRESHOLDS } from './needs';
+export { NEED_KIND_LIST, NEED_LIFT_THRESHOLDS, springsCoverLift } from './needs';
 export type { SubscoreName } from './weights';
 export type { CurvePoint, PredictedSummary } from './curve';
 export type {

@@ -20,6 +20,13 @@ export const NEED_KIND_LIST = [
 // valvetrain gets lifters made for the lift and the spring load. The delete kit brings its own lifters.
 export const NEED_LIFT_THRESHOLDS = { pushrodsFromIn: 0.58, liftersFromIn: 0.6 } as const;
 
+// Whether springs rated to ratedMaxLiftIn carry a cam with this valve lift: the one rule for the installed
+// springs (scoring.ts: springs are needed when they do not) and for the catalogue's kits the quote picks
+// (src/lib/catalogue/spring-kits.ts). Rated to the lift is enough; the tolerance only absorbs float noise.
+export function springsCoverLift(ratedMaxLiftIn: number, liftIn: number): boolean {
+  return liftIn <= ratedMaxLiftIn + 1e-9;
+}
+
 // What the cam requires, structured so the catalogue's rules can map each kind to parts and labour.
 // The advisor alone decides whether a kind is needed; the rules only say what it costs in this shop.
 export function camNeeds(fit: FitDetail, converter: ConverterDetail, build?: BuildProfile, cam?: CamCard): Need[] {

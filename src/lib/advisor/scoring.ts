@@ -2,6 +2,7 @@ import type { BuildProfile } from '@/lib/schemas/build-profile';
 import type { CamCard } from '@/lib/schemas/cam-card';
 import { IDLE_VACUUM } from './idle';
 import type { NeedKind } from './types';
+import { springsCoverLift } from './needs';
 import {
   BELOW_PULL_AWAY_FACTOR,
   COMPRESSION_SCORING,
@@ -218,7 +219,7 @@ export function scoreFit(build: BuildProfile, cam: CamCard, overlap050: number):
   const f = FIT_SCORING;
   const maxLiftIn = Math.max(cam.intakeLiftIn, cam.exhaustLiftIn);
   const { limitIn, assumed } = installedSpringLimitIn(build);
-  const springsNeeded = maxLiftIn > limitIn + 1e-9;
+  const springsNeeded = !springsCoverLift(limitIn, maxLiftIn);
   const ptvRisk = pistonToValveRisk(maxLiftIn, overlap050);
   const deleteNeeded = build.engine.cylinderDeactivation === 'active' && cam.deactivationCompatible !== true;
   const score =

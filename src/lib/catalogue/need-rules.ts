@@ -7,6 +7,7 @@
 import type { NeedKind } from '@/lib/advisor/types';
 import { NEED_KIND_LIST } from '@/lib/advisor/needs';
 import type { VehicleClass } from '@/lib/schemas/build-profile';
+import { NO_SPRING_KIT_COVERS, noKitCoversMessage, pickSpringKit, type SpringKit } from './spring-kits';
 
 export const NEED_RULE_KIND_LIST = NEED_KIND_LIST;
 export type NeedRuleKindName = NeedKind;
@@ -32,9 +33,17 @@ export type NeedRuleInput = {
 
 export type NeedContext = {
   /** The advisor's typed needs for this cam and build (its reason is the one the customer is told). */
-  needs: readonly { kind: NeedKind; reason: string }[];
+  needs: readonly { kind: NeedKind; reason: string; minLiftIn?: number }[];
   vehicleClass: VehicleClass;
+  /**
+   * The catalogue's rated spring kits. With them, a springs rule's kit is swapped for the one rated for the
+   * cam's lift (src/lib/catalogue/spring-kits.ts); without them the rule's own kit is used as written.
+   */
+  springKits?: readonly SpringKit[];
 };
+
+/** Something the draft must not go out with unseen: named by code, told in words. */
+export type NeedWarning = { code: typeof NO_SPRING_KIT_COVERS; message: string };
 
 export type Need = {
   type: 'part' | 'labor';
@@ -46,7 +55,33 @@ export type Need = {
   rule: { id: number; kind: NeedRuleKindName; label: string; vehicleClass: VehicleClass | null };
   /** Why the rule fired: the advisor's reason for the need, in words a customer can be told. */
   reason: string;
+  /** Set when the shop's catalogue cannot do what the need asks (no spring kit rated for the lift). */
+  warning?: NeedWarning;
 };
+
+type PartEntry = { part: NeedRuleItemInput['part']; partId: number; warning?: NeedWarning };
+
+/** A springs rule's rated kit becomes the kit rated for the lift; other parts stay as the rule names them. */
+function springKitFor(item: NeedRuleItemInput & { partId: number }, context: NeedContext): PartEntry {
+  const asWritten: PartEntry = { part: item.part ?? null, partId: item.partId };
+  const kits = context.springKits;
+  const liftIn = context.needs.find((n) => n.kind === 'springs')?.minLiftIn;
+  if (!kits || liftIn === undefined || !kits.some((kit) => kit.id === item.partId)) return asWritten;
+  const kit = pickSpringKit(kits, liftIn);
+  if (kit) {
+    const { maxLiftIn: _rated, ...part } = kit;
+    void _rated;
+    return { part: { ...part, category: kit.category ?? 'springs' }, partId: kit.id };
+  }
+  const bestIn = kits.reduce<number | null>(
+    (best, k) => (best === null || k.maxLiftIn > best ? k.maxLiftIn : best),
+    null,
+  );
+  return {
+    ...asWritten,
+    warning: { code: NO_SPRING_KIT_COVERS, message: noKitCoversMessage(liftIn, item.part ?? null, bestIn) },
+  };
+}
 
 /**
  * The active rules that apply to one need kind for one vehicle class: the rules written for that class
@@ -76,15 +111,15 @@ export function evaluateNeedRules(rules: readonly NeedRuleInput[], context: Need
     if (!firing.has(rule.id)) continue;
     const reason = reasons.get(rule.kind)!;
     for (const item of rule.items) {
-      const entries: Array<Pick<Need, 'type' | 'partId' | 'laborOperationId' | 'part' | 'laborOperation'>> = [];
-      if (item.partId !== null)
-        entries.push({
-          type: 'part',
-          partId: item.partId,
-          laborOperationId: null,
-          part: item.part ?? null,
-          laborOperation: null,
-        });
+      const entries: Array<Pick<Need, 'type' | 'partId' | 'laborOperationId' | 'part' | 'laborOperation' | 'warning'>> =
+        [];
+      if (item.partId !== null) {
+        const chosen =
+          rule.kind === 'springs'
+            ? springKitFor({ ...item, partId: item.partId }, context)
+            : { part: item.part ?? null, partId: item.partId };
+        entries.push({ type: 'part', laborOperationId: null, laborOperation: null, ...chosen });
+      }
       if (item.laborOperationId !== null) {
         entries.push({
           type: 'labor',

@@ -1,8 +1,10 @@
 import 'server-only';
 import { rankCams, type Need as AdvisorNeed } from '@/lib/advisor';
 import { evaluateNeedRules, type NeedRuleInput } from '@/lib/catalogue/need-rules';
+import type { SpringKit } from '@/lib/catalogue/spring-kits';
 import { camCardsForRanking } from '@/lib/db/queries/advisor-cams';
 import { loadDynoHistory } from '@/lib/db/queries/dyno-history';
+import { loadSpringKits } from '@/lib/db/queries/parts';
 import { loadNeedRules } from '@/lib/db/queries/rules';
 import { getShopSettings } from '@/lib/db/queries/settings';
 import { jobItemLine, jobLines, jobPriceCents } from '@/lib/quotes/job-price';
@@ -34,8 +36,9 @@ export function pricedItems(
   needs: readonly AdvisorNeed[],
   vehicleClass: VehicleClass,
   laborRateCents: number,
+  springKits?: readonly SpringKit[],
 ): PricedItem[] {
-  return evaluateNeedRules(rules, { needs, vehicleClass }).map((need) => {
+  return evaluateNeedRules(rules, { needs, vehicleClass, springKits }).map((need) => {
     const line = jobItemLine(need, laborRateCents);
     return { ...need, priceCents: line ? lineNetCents(line) : 0 };
   });
@@ -51,9 +54,10 @@ export async function rankForShop(
   }: { camIds?: number[]; includeCurves?: boolean; curveLimit?: number; excludeBuildId?: number } = {},
 ): Promise<{ ok: true; result: ShopRanking } | { ok: false; missingIds: number[] }> {
   // The shop's measured before/after results on similar engines nudge the predicted gains of the cams they were measured on.
-  const [{ cards, missingIds, stockOnHand }, rules, settings, history] = await Promise.all([
+  const [{ cards, missingIds, stockOnHand }, rules, springKits, settings, history] = await Promise.all([
     camCardsForRanking(camIds),
     loadNeedRules(),
+    loadSpringKits(),
     getShopSettings(),
     loadDynoHistory(build, camIds, { excludeBuildId }),
   ]);
@@ -64,7 +68,7 @@ export async function rankForShop(
     const priced = new Map<string, Priced>();
     // Called by the advisor once per cam with the needs it found; the job it prices is kept for the entry.
     const priceJob = (cam: CamCard, needs: readonly AdvisorNeed[]): number | null => {
-      const items = pricedItems(rules, needs, vehicleClass, laborRateCents);
+      const items = pricedItems(rules, needs, vehicleClass, laborRateCents, springKits);
       const job =
         cam.priceCents === undefined
           ? null
@@ -76,7 +80,10 @@ export async function rankForShop(
     };
     return { result: rankCams(build, cards, { history, jobPriceCents: priceJob, includeCurves }), priced };
   };
-  const { result, priced } = keptRankings.get({ build, cards, history, rules, laborRateCents, includeCurves }, compute);
+  const { result, priced } = keptRankings.get(
+    { build, cards, history, rules, springKits, laborRateCents, includeCurves },
+    compute,
+  );
   const byId = new Map(cards.map((card) => [String(card.id), card]));
   const curvesIncluded = includeCurves ? Math.min(curveLimit, result.rankings.length) : 0;
   const rankings = result.rankings.map((full, index) => {

@@ -7,7 +7,7 @@ import { LRUCache } from 'lru-cache';
 // the answer is a pure function of its inputs.
 //
 // Why it cannot go stale: the key is a hash of everything the ranking reads — the build as sent, the cam
-// cards, the dyno history, the need rules, the labour rate and whether curves are wanted — and the caller
+// cards, the dyno history, the need rules, the rated spring kits, the labour rate and whether curves are wanted — and the caller
 // reads those from the database on every request. A catalogue, rule, settings or dyno-history write changes
 // the key, so there is nothing to invalidate by hand and no write path that can forget to.
 
@@ -21,6 +21,8 @@ export type RankingInputs = {
   cards: readonly unknown[];
   history: readonly unknown[];
   rules: readonly unknown[];
+  /** The catalogue's rated spring kits the springs need picks from (src/lib/catalogue/spring-kits.ts). */
+  springKits: readonly unknown[];
   laborRateCents: number;
   includeCurves: boolean;
 };

@@ -13,6 +13,7 @@ import {
   type WriteOutcome,
 } from '@/lib/db/write';
 import { PART_FIELDS, type PartListQuery, type PartValues } from '@/lib/schemas/part';
+import { ratedMaxLiftIn, type SpringKit } from '@/lib/catalogue/spring-kits';
 import { Part, Supplier } from '../models';
 
 export type PartRecord = {
@@ -193,5 +194,20 @@ export async function removePart(
       t,
     );
     return { record: { outcome: 'deleted', part: before } };
+  });
+}
+
+/** The active spring kits that state a rated max lift (spec `maxLiftIn`), by id: what the springs need picks from. */
+export async function loadSpringKits(): Promise<SpringKit[]> {
+  const rows = await Part.findAll({
+    where: { category: 'springs', active: true },
+    attributes: ['id', 'sku', 'name', 'priceCents', 'category', 'spec'],
+    order: [['id', 'ASC']],
+  });
+  return rows.flatMap((p) => {
+    const maxLiftIn = ratedMaxLiftIn(p);
+    return maxLiftIn === null
+      ? []
+      : [{ id: p.id, sku: p.sku, name: p.name, priceCents: p.priceCents, category: p.category, maxLiftIn }];
   });
 }
