@@ -4,6 +4,7 @@ import { Op } from 'sequelize';
 import { AuditEntry, Cam, Supplier } from '@/lib/db/models';
 import { signIn } from '../support/auth';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { postDeclaringSize } from '../support/early-refusal';
 import { readRuntime } from '../support/runtime';
 
 // The cam spreadsheet import and export over HTTP. Rows made here use the run's SKU prefix and an
@@ -149,12 +150,20 @@ describe('cam import', () => {
     expect(response.body.errors).toEqual(expect.arrayContaining([expect.objectContaining({ row: 1, column: 'lsa' })]));
   });
 
-  it('refuses a file over 2 MB with 413', async () => {
-    const big = `${HEADER}\n${`${row(`${PREFIX}-BIG`)}\n`.repeat(Math.ceil((2.1 * 1024 * 1024) / 120))}`;
-    expect(Buffer.byteLength(big)).toBeGreaterThan(2 * 1024 * 1024);
-    const response = await upload(manager, big, 'preview');
+  it('refuses a file over 2 MB with 413 from its declared size, before reading it', async () => {
+    const boundary = 'lobewise-import-limit';
+    const head = Buffer.from(
+      `--${boundary}\r\nContent-Disposition: form-data; name="mode"\r\n\r\npreview\r\n` +
+        `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="cams.csv"\r\nContent-Type: text/csv\r\n\r\n${HEADER}\n`,
+    );
+    const response = await postDeclaringSize(
+      `${readRuntime().appUrl}/api/cams/import`,
+      { Cookie: manager, 'Content-Type': `multipart/form-data; boundary=${boundary}` },
+      head,
+      Math.ceil(2.1 * 1024 * 1024),
+    );
     expect(response.status).toBe(413);
-    expect(response.body.message).toMatch(/2 MB/);
+    expect(response.json.message).toMatch(/2 MB/);
   });
 
   it('refuses a workbook, a PDF and binary data with 415, whatever the name says', async () => {
