@@ -98,6 +98,15 @@ async function expectSummaryToMatchTheRows() {
   expect(res.body as ReportSummary).toEqual(await expectedReport(sequelize, FROM, TODAY));
 }
 
+/** A refund as the manager posts it: on the version of the quote they reviewed. */
+async function refund(quoteId: number, body: Record<string, unknown>) {
+  const { version } = (await manager.get(`/api/quotes/${quoteId}`).expect(200)).body as { version: number };
+  await manager
+    .post(`/api/quotes/${quoteId}/refund`)
+    .send({ version, ...body })
+    .expect(200);
+}
+
 describe('the report’s per-day totals after a sequence of writes', () => {
   let draft: FixtureQuote;
   let paid: Awaited<ReturnType<typeof makeDepositPaidQuote>>;
@@ -120,20 +129,14 @@ describe('the report’s per-day totals after a sequence of writes', () => {
   });
 
   it('keep a partial refund (still converted) and take the quote out on a full refund', async () => {
-    await manager.post(`/api/quotes/${paid.id}/refund`).send({ amountCents: 1_000 }).expect(200);
+    await refund(paid.id, { amountCents: 1_000 });
     await expectTotalsToMatchTheRows();
     const other = await makeDepositPaidQuote(counter, 'Day totals refunded');
-    await manager
-      .post(`/api/quotes/${other.id}/refund`)
-      .send({ amountCents: other.depositCents, reason: 'customer changed plans' })
-      .expect(200);
+    await refund(other.id, { amountCents: other.depositCents, reason: 'customer changed plans' });
     const [{ status }] = await rows<{ status: string }>('SELECT status FROM quotes WHERE id = :id', { id: other.id });
     expect(status).toBe('cancelled');
     const reopened = await makeDepositPaidQuote(counter, 'Day totals reopened');
-    await manager
-      .post(`/api/quotes/${reopened.id}/refund`)
-      .send({ amountCents: reopened.depositCents, afterFullRefund: 'reopen' })
-      .expect(200);
+    await refund(reopened.id, { amountCents: reopened.depositCents, afterFullRefund: 'reopen' });
     await expectTotalsToMatchTheRows();
     await expectSummaryToMatchTheRows();
   });
