@@ -8,6 +8,7 @@ import { centsFromText, centsToText, formatMoney, percentFromBp } from '@/lib/fo
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ConflictBanner } from '@/components/ui/conflict-banner';
+import { CostsToggle, useCostsShown } from '@/components/ui/costs-toggle';
 import { PageHeader } from '@/components/ui/page-header';
 import { tableClass, TableScroll, tdClass, thClass } from '@/components/ui/table';
 import type { StaffRole } from '@/lib/auth/guard';
@@ -74,6 +75,10 @@ export function QuoteWorkbench({
   const awaitingApproval = quote.discountApproval.state === 'pending';
   // The lines are the quote's versioned edit: a newer save answers 409, shown beside the lines typed here.
   const lineSave = useVersionedSave<QuoteRecord>(quote);
+  // Costs come only to those who may see them (the server leaves them out); even then they stay hidden until asked.
+  const costsSent = quote.costCents !== undefined;
+  const [costsShown, showCosts] = useCostsShown();
+  const costs = costsSent && costsShown;
 
   async function run(
     label: string,
@@ -238,7 +243,7 @@ export function QuoteWorkbench({
               {editing ? <th className={`${thClass} text-right`}>Discount</th> : null}
               <th className={`${thClass} text-right`}>Line</th>
               <th className={thClass}>Tax</th>
-              {quote.costCents !== undefined ? <th className={`${thClass} text-right`}>Unit cost</th> : null}
+              {costs ? <th className={`${thClass} text-right`}>Unit cost</th> : null}
               {editing ? (
                 <th className={thClass}>
                   <span className="sr-only">Remove</span>
@@ -315,7 +320,7 @@ export function QuoteWorkbench({
                       </td>
                       <td className={`${tdClass} spec text-right`}>{total === null ? 'check' : formatMoney(total)}</td>
                       <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
-                      {quote.costCents !== undefined ? <td className={tdClass} /> : null}
+                      {costs ? <td className={tdClass} /> : null}
                       <td className={tdClass}>
                         <button
                           type="button"
@@ -344,7 +349,7 @@ export function QuoteWorkbench({
                       ) : null}
                     </td>
                     <td className={tdClass}>{isTaxable(l.kind) ? 'taxed' : 'no tax'}</td>
-                    {quote.costCents !== undefined ? (
+                    {costs ? (
                       <td className={`${tdClass} spec text-right`}>{formatMoney(l.unitCostCents ?? null)}</td>
                     ) : null}
                   </tr>
@@ -401,9 +406,12 @@ export function QuoteWorkbench({
 
       <div className="grid gap-4 md:grid-cols-2">
         <section aria-labelledby="totals" className="rounded border border-steel-300 bg-paper-raised p-3">
-          <h2 id="totals" className="text-sm font-semibold">
-            Totals
-          </h2>
+          <div className="flex flex-wrap items-center justify-between gap-2">
+            <h2 id="totals" className="text-sm font-semibold">
+              Totals
+            </h2>
+            {costsSent ? <CostsToggle shown={costsShown} onChange={showCosts} /> : null}
+          </div>
           <dl className="spec mt-2 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-sm">
             <dt className="font-sans">Subtotal</dt>
             <dd className="text-right">{formatMoney(quote.subtotalCents)}</dd>
@@ -413,7 +421,7 @@ export function QuoteWorkbench({
             <dd className="text-right font-semibold">{formatMoney(quote.totalCents)}</dd>
             <dt className="font-sans">Deposit</dt>
             <dd className="text-right">{formatMoney(quote.depositCents)}</dd>
-            {quote.costCents !== undefined ? (
+            {costs ? (
               <>
                 <dt className="font-sans">Goods cost</dt>
                 <dd className="text-right">{formatMoney(quote.costCents)}</dd>
