@@ -1,20 +1,12 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { QUOTE_STATE_LIST } from '@/lib/quotes/lifecycle';
 import type { ReportSummary } from '@/lib/reports/types';
 
 // The manager's report worked out the plain way, from every row of quotes, lines, payments and the
 // catalogue with JavaScript sums: what the report code (per-day totals kept by triggers, grouped SQL)
 // must answer exactly. Never built from the report code itself.
-const STATUSES = [
-  'draft',
-  'sent',
-  'accepted',
-  'deposit-paid',
-  'closed',
-  'declined',
-  'expired',
-  'cancelled',
-  'replaced',
-] as const;
+// The states themselves are the lifecycle's list (data, not report code).
+const STATUSES = QUOTE_STATE_LIST;
 type Margin = ReportSummary['margin']['total'];
 const utcDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 // Converted: the deposit was paid, whether the job is still open or was closed since.
