@@ -433,6 +433,8 @@ export const accessMatrix: AccessRow[] = [
     allowed: 200,
   },
   { method: 'POST', path: '/api/dyno-runs', permission: 'dyno.record', allowed: 422 },
+  // The pull-CSV check is multipart only: JSON gets 415 from whoever is let in.
+  { method: 'POST', path: '/api/dyno-runs/pull-csv', permission: 'dyno.record', allowed: 415 },
   {
     method: 'GET',
     path: '/api/dyno-runs/[id]',

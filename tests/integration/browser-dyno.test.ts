@@ -216,6 +216,10 @@ describe('dyno runs through the job page', () => {
     const pull = 'rpm,torque\n3000,300\n\n3500,310\n3400,305\n4000;x\n';
     await file.setInputFiles({ name: 'pull.csv', mimeType: 'text/csv', buffer: Buffer.from(pull) });
     await form().getByText('line 6: expected two numbers').waitFor();
+    // The same file as the server read it (POST /api/dyno-runs/pull-csv): the rows and columns at fault.
+    await expect(page.locator('#dyno-curveFile-error').textContent()).resolves.toContain(
+      'pull.csv: row 5, column rpm: rpm must rise from point to point (3400 after 3500); row 6, column rpm: expected a number (got "4000;x")',
+    );
     await expect(
       form()
         .getByLabel(/^Pull points/)
@@ -234,6 +238,14 @@ describe('dyno runs through the job page', () => {
     // The template, pasted back, is a valid pull.
     await typeInto(page, /^Pull points/, template.trim());
     await page.locator('#dyno-curveCsv-error').waitFor({ state: 'detached' });
+    // A good file passes the server's check and fills the box, leaving no problem under the file.
+    const good = 'rpm,torque_lbft\n3000,300\n3500,310\n4000,318\n';
+    await file.setInputFiles({ name: 'good.csv', mimeType: 'text/csv', buffer: Buffer.from(good) });
+    await page.waitForFunction(
+      (text) => (document.getElementById('dyno-curveCsv') as HTMLTextAreaElement | null)?.value === text,
+      good,
+    );
+    await expect(page.locator('#dyno-curveFile-error').count()).resolves.toBe(0);
     await expectNoSeriousA11yViolations(page);
   }, 90_000);
 

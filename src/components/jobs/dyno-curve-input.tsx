@@ -2,12 +2,15 @@
 
 import { useField } from 'formik';
 import { useState } from 'react';
+import { sendJson } from '@/lib/api-client';
 import { CURVE_CSV_MAX_BYTES, CURVE_CSV_TEMPLATE } from '@/lib/dyno/curve-csv';
 import { DYNO_LIMITS as L } from '@/lib/schemas/dyno-run';
 import { FieldProblem } from './dyno-fields';
 
-// The pull as CSV: pasted into the box or loaded from the dyno software's export file. A loaded file
-// only fills the box, so the technician sees what will be sent and the same line-numbered checks apply.
+// The pull as CSV: pasted into the box or loaded from the dyno software's export file. A loaded file is
+// checked by the server (POST /api/dyno-runs/pull-csv, the same parser as the box) and then fills the box,
+// so the technician sees what will be sent; the server's row-numbered problems show under the file.
+// The name and size are checked here first only to spare a pointless upload; the server checks both again.
 
 const CSV_TYPES = new Set(['text/csv', 'text/plain', 'application/vnd.ms-excel', '']);
 
@@ -37,6 +40,20 @@ export function CurveInput() {
       );
       return;
     }
+    const form = new FormData();
+    form.set('file', file);
+    const answer = await sendJson('POST', '/api/dyno-runs/pull-csv', form);
+    if (!answer.ok && answer.status !== 422) {
+      setFileProblem(answer.body.message ?? `The file was not checked (${answer.status}).`);
+      return;
+    }
+    if (answer.status === 422) {
+      const rows = (answer.body.errors ?? []).map((e) => e.message);
+      setFileProblem(
+        `${file.name}: ${rows.slice(0, 3).join('; ')}${rows.length > 3 ? ` (and ${rows.length - 3} more)` : ''}`,
+      );
+    }
+    // Filled even with problems, so they can be put right in the box.
     const text = await file.text();
     // Touched first without validating: validating there would check the box's old text and could land last.
     await helpers.setTouched(true, false);

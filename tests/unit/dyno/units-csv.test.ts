@@ -1,4 +1,4 @@
-import { parseCurveCsv } from '@/lib/dyno/curve-csv';
+import { checkCurveCsv, parseCurveCsv } from '@/lib/dyno/curve-csv';
 import { KPA_PER_INHG } from '@/lib/dyno/correction';
 import {
   baroIn,
@@ -75,6 +75,35 @@ describe('pull CSV line numbers', () => {
     expect(parseCurveCsv('3000,300\nrpm,torque').errors).toEqual([
       'line 2: expected two numbers, rpm and torque in lb·ft (got "rpm,torque")',
     ]);
+  });
+});
+
+describe('pull CSV checked as the server does (checkCurveCsv)', () => {
+  it('names the row and column of each problem, in row order', () => {
+    const checked = checkCurveCsv('\uFEFFrpm,torque\n3000,0\n3500,abc\nx,1\n3400,320\n4000.5,330\n');
+    expect(checked.problems).toEqual([
+      { row: 2, column: 'torque', message: 'torque must be at least 1 lb·ft' },
+      { row: 3, column: 'torque', message: 'expected a number (got "3500,abc")' },
+      { row: 4, column: 'rpm', message: 'expected a number (got "x,1")' },
+      { row: 6, column: 'rpm', message: 'rpm must be a whole number of rpm' },
+    ]);
+  });
+  it('reports rpm that does not rise, and too few points only when every row read', () => {
+    expect(checkCurveCsv('3000,300\n3000,310\n3500,320').problems).toEqual([
+      { row: 2, column: 'rpm', message: 'rpm must rise from point to point (3000 after 3000)' },
+    ]);
+    expect(checkCurveCsv('3000,300\n3500,310').problems).toEqual([
+      { row: 2, column: '(row)', message: 'a pull needs 3–400 points; this file has 2' },
+    ]);
+    expect(checkCurveCsv('rpm,torque_lbft\n3000,352.4\n3500,371.0\n4000,380.2\n')).toEqual({
+      points: [
+        { rpm: 3000, torqueLbFt: 352.4 },
+        { rpm: 3500, torqueLbFt: 371 },
+        { rpm: 4000, torqueLbFt: 380.2 },
+      ],
+      lines: [2, 3, 4],
+      problems: [],
+    });
   });
 });
 
