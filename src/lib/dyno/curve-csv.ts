@@ -16,16 +16,24 @@ export const CURVE_CSV_TEMPLATE = 'rpm,torque_lbft\n3000,352.4\n3500,371.0\n4000
 /** A long pull logged every 50 rpm is about 8 kB; anything far bigger is not a pull. */
 export const CURVE_CSV_MAX_BYTES = 100_000;
 
+/**
+ * The separator found on the most non-blank lines; on a tie tab, then semicolon (a "3000;352,4" file uses the
+ * comma for decimals). Chosen here, not by papaparse's guess, which blank lines kept for numbering throw off.
+ */
+function delimiterOf(text: string): string {
+  const lines = text.split(/\r\n|\n|\r/).filter((line) => line.trim() !== '');
+  const score = (d: string) => lines.filter((line) => line.includes(d)).length;
+  return ['\t', ';', ','].reduce((best, d) => (score(d) > score(best) ? d : best), ',');
+}
+
 export function parseCurveCsv(text: string): {
   points: CsvPoint[];
   lines: number[];
   errors: string[];
   problems: CurveCsvProblem[];
 } {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, '').replace(/\s+$/, ''), {
-    skipEmptyLines: false,
-    delimitersToGuess: [',', ';', '\t'],
-  });
+  const source = text.replace(/^\uFEFF/, '').replace(/\s+$/, '');
+  const parsed = Papa.parse<string[]>(source, { skipEmptyLines: false, delimiter: delimiterOf(source) });
   const points: CsvPoint[] = [];
   const lines: number[] = [];
   const errors: string[] = [];

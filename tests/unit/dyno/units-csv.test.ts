@@ -88,6 +88,12 @@ describe('pull CSV checked as the server does (checkCurveCsv)', () => {
       { row: 6, column: 'rpm', message: 'rpm must be a whole number of rpm' },
     ]);
   });
+  it('reads semicolons and Windows line ends with a blank line kept for numbering', () => {
+    const checked = checkCurveCsv('rpm;torque_lbft\r\n3000;352.4\r\n\r\n3500;371\r\n4000;380.2\r\n');
+    expect(checked.problems).toEqual([]);
+    expect(checked.lines).toEqual([2, 4, 5]);
+    expect(checkCurveCsv('3000\t300\n\n3500\t310\n4000\t320').lines).toEqual([1, 3, 4]);
+  });
   it('reports rpm that does not rise, and too few points only when every row read', () => {
     expect(checkCurveCsv('3000,300\n3000,310\n3500,320').problems).toEqual([
       { row: 2, column: 'rpm', message: 'rpm must rise from point to point (3000 after 3000)' },
