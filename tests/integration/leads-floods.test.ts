@@ -3,6 +3,7 @@ import http from 'node:http';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import request from 'supertest';
 import { connectTestDatabase, disconnectTestDatabase } from '../support/database';
+import { postDeclaringSize } from '../support/early-refusal';
 import { mailsTo } from '../support/mail';
 import { clearRateLimits } from '../support/rate-limits';
 import { readRuntime } from '../support/runtime';
@@ -123,24 +124,18 @@ describe('lead flood limits', () => {
 
 describe('body size limits', () => {
   it('refuses a 60 MB JSON post to the lead route with 413 before reading it', async () => {
-    const huge = JSON.stringify({
-      ...answers({ email: `huge-${run}@example.com` }),
-      name: 'x'.repeat(60 * 1024 * 1024),
-    });
+    // Only the start is sent: the answer must come from the declared size alone (see early-refusal.ts).
+    const start = Buffer.from(
+      JSON.stringify(answers({ email: `huge-${run}@example.com` })).slice(0, -1) + ',"name":"xxxx',
+    );
     const started = Date.now();
-    const status = await new Promise<number>((resolve, reject) => {
-      const req = http.request(
-        `${appUrl}/api/leads`,
-        { method: 'POST', headers: { 'Content-Type': 'application/json', 'Content-Length': Buffer.byteLength(huge) } },
-        (res) => {
-          res.resume();
-          resolve(res.statusCode ?? 0);
-        },
-      );
-      req.on('error', reject);
-      req.end(huge);
-    });
-    expect(status).toBe(413);
+    const res = await postDeclaringSize(
+      `${appUrl}/api/leads`,
+      { 'Content-Type': 'application/json' },
+      start,
+      60 * 1024 * 1024,
+    );
+    expect(res.status).toBe(413);
     expect(Date.now() - started).toBeLessThan(20_000);
   });
 
@@ -175,12 +170,14 @@ describe('body size limits', () => {
   });
 
   it('refuses a webhook body over 1 MB with 413 before checking its signature', async () => {
-    const res = await request(appUrl)
-      .post('/api/payments/webhook')
-      .set('Stripe-Signature', 't=1,v1=00')
-      .set('content-type', 'application/json')
-      .send(JSON.stringify({ pad: 'x'.repeat(2 * 1024 * 1024) }));
+    const res = await postDeclaringSize(
+      `${appUrl}/api/payments/webhook`,
+      { 'Stripe-Signature': 't=1,v1=00', 'Content-Type': 'application/json' },
+      Buffer.from('{"pad":"xxxxxxxx'),
+      2 * 1024 * 1024,
+    );
     expect(res.status).toBe(413);
+    expect(res.json.message).toMatch(/1 MB/);
     const small = await request(appUrl)
       .post('/api/payments/webhook')
       .set('Stripe-Signature', 't=1,v1=00')

@@ -1,9 +1,11 @@
 import http from 'node:http';
 
-// An upload the server must refuse from its declared size alone. The client sends the headers (with
-// the large Content-Length) and the start of the body, then waits: a client still pumping megabytes
-// when the server answers and closes gets EPIPE or a reset that can swallow the answer, which made the
-// 2 MB import test fail now and then on a busy machine. Waiting is also what a careful client does.
+// A body the server must refuse from its declared size alone. The client sends the headers (with
+// the large Content-Length) and the start of the body, then waits, as a careful client does. A client
+// still pumping megabytes when the server answers and closes gets EPIPE, or a reset that can swallow
+// the answer: the 2 MB import test failed that way now and then on a busy machine, and once an EPIPE
+// arriving after its test had passed (most likely the 60 MB lead post or the 2 MB webhook, the last
+// bodies written before it) crashed the whole in-band jest run.
 export function postDeclaringSize(
   url: string,
   headers: Record<string, string>,
